@@ -1,0 +1,80 @@
+import { abutmentOnSide, type Side } from '../geometry/abutment';
+import { linesInGaps, uncoveredParts, type Interval } from '../geometry/interval';
+import type { PlacedBlock, PlacedMat } from '../geometry/placedBlocks';
+import { ABUTMENT_TOLERANCE } from '../geometry/rect';
+import type { SpatialIndex } from '../geometry/spatialIndex';
+import type { StripType } from '../model/block';
+
+/** Which strips serve a mat, found from geometry alone. */
+export interface MatConnections {
+  /** Ids of sense-amplifier strips abutting the mat's bit-line ends. */
+  readonly senseAmpStripIds: readonly string[];
+  /** Ids of driver strips or row decoders abutting the mat's word-line ends. */
+  readonly wordlineDriverIds: readonly string[];
+  /** Bit lines whose position no sense-amplifier strip covers at either end. */
+  readonly unsensedBitlines: number;
+  /** Word lines whose position no driver covers at either end. */
+  readonly undrivenWordlines: number;
+}
+
+/** Strips that can sense bit lines. */
+const SENSING: ReadonlySet<StripType> = new Set(['senseAmpStrip']);
+/** Strips that can drive word lines: sub-word-line drivers, or a row decoder driving a small mat directly. */
+const DRIVING: ReadonlySet<StripType> = new Set(['wordlineDriverStrip', 'rowDecoder']);
+
+/** The two sides where a mat's bit lines end, and the two where its word lines end. */
+export function lineEndSides(mat: PlacedMat): { bitlineEnds: [Side, Side]; wordlineEnds: [Side, Side] } {
+  return mat.block.bitlineAxis === 'vertical'
+    ? { bitlineEnds: ['top', 'bottom'], wordlineEnds: ['left', 'right'] }
+    : { bitlineEnds: ['left', 'right'], wordlineEnds: ['top', 'bottom'] };
+}
+
+/**
+ * Finds the strips abutting a mat's line ends and counts the lines they leave unserved. A line counts
+ * as served when a suitable strip covers its position at either end: with strips at both ends the
+ * sense amplifiers (or drivers) are taken as interleaved, half at each end; with one end covered,
+ * all of them sit there. Common practice (no source).
+ */
+export function matConnections(
+  mat: PlacedMat,
+  placed: readonly PlacedBlock[],
+  index: SpatialIndex,
+): MatConnections {
+  const { bitlineEnds, wordlineEnds } = lineEndSides(mat);
+  const senseAmpStripIds: string[] = [];
+  const wordlineDriverIds: string[] = [];
+  const sensedStretches: Interval[] = [];
+  const drivenStretches: Interval[] = [];
+  for (const i of index.near(mat.rect, ABUTMENT_TOLERANCE)) {
+    const other = placed[i];
+    if (!other || other.block.type === 'mat') continue;
+    const type = other.block.type;
+    if (SENSING.has(type)) {
+      for (const side of bitlineEnds) {
+        const stretch = abutmentOnSide(mat.rect, other.rect, side);
+        if (stretch) {
+          sensedStretches.push(stretch);
+          senseAmpStripIds.push(other.block.id);
+        }
+      }
+    }
+    if (DRIVING.has(type)) {
+      for (const side of wordlineEnds) {
+        const stretch = abutmentOnSide(mat.rect, other.rect, side);
+        if (stretch) {
+          drivenStretches.push(stretch);
+          wordlineDriverIds.push(other.block.id);
+        }
+      }
+    }
+  }
+  const g = mat.geometry;
+  const unsensedGaps = uncoveredParts(sensedStretches, g.wordlineLength, ABUTMENT_TOLERANCE);
+  const undrivenGaps = uncoveredParts(drivenStretches, g.bitlineLength, ABUTMENT_TOLERANCE);
+  return {
+    senseAmpStripIds,
+    wordlineDriverIds,
+    unsensedBitlines: linesInGaps(unsensedGaps, g.bitlinePitch, g.bitlineCount),
+    undrivenWordlines: linesInGaps(undrivenGaps, g.wordlinePitch, g.wordlineCount),
+  };
+}

@@ -1,0 +1,27 @@
+import type { PlacedBlock } from '../geometry/placedBlocks';
+import { ABUTMENT_TOLERANCE, overlapArea } from '../geometry/rect';
+import type { SpatialIndex } from '../geometry/spatialIndex';
+
+/** A pair of blocks that share area (not just an edge). */
+export interface Overlap {
+  readonly firstId: string;
+  readonly secondId: string;
+  /** Shared area (m²). */
+  readonly area: number;
+}
+
+/** Every overlapping pair once, found through the spatial index (O(n log n) for sparse overlaps). */
+export function findOverlaps(placed: readonly PlacedBlock[], index: SpatialIndex): Overlap[] {
+  const overlaps: Overlap[] = [];
+  placed.forEach((a, i) => {
+    // Shrinking the query box by the tolerance skips neighbours that merely abut.
+    for (const j of index.near(a.rect, -ABUTMENT_TOLERANCE)) {
+      if (j <= i) continue;
+      const b = placed[j];
+      if (!b) continue;
+      const shared = overlapArea(a.rect, b.rect);
+      if (shared > 0) overlaps.push({ firstId: a.block.id, secondId: b.block.id, area: shared });
+    }
+  });
+  return overlaps;
+}

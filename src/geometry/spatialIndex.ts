@@ -1,0 +1,22 @@
+import Flatbush from 'flatbush';
+import { bottom, right, type Rect } from './rect';
+
+/**
+ * A static spatial index over rectangles (a packed Hilbert R-tree from the flatbush package), so that
+ * "who touches this mat" costs O(log n) and evaluating a whole die stays O(n log n).
+ */
+export interface SpatialIndex {
+  /** Indices of the rectangles whose boxes meet the query box grown by `margin` on every side. */
+  near(rect: Rect, margin: number): number[];
+}
+
+export function buildSpatialIndex(rects: readonly Rect[]): SpatialIndex {
+  if (rects.length === 0) return { near: () => [] };
+  const index = new Flatbush(rects.length);
+  for (const r of rects) index.add(r.x, r.y, right(r), bottom(r));
+  index.finish();
+  return {
+    near: (rect, margin) =>
+      index.search(rect.x - margin, rect.y - margin, right(rect) + margin, bottom(rect) + margin),
+  };
+}

@@ -1,0 +1,67 @@
+import { DESIGN_FORMAT, DESIGN_VERSION, designSchema, type Design } from '../model/design';
+
+/** Largest design text we will read (bytes of UTF-16 text ≈ characters); a whole die fits easily. */
+export const MAX_DESIGN_TEXT_LENGTH = 64 * 1024 * 1024;
+
+/** What a restore gives back: the design, or every problem found with where it is. */
+export type RestoreResult =
+  | { readonly ok: true; readonly design: Design; readonly migratedFrom: number | null }
+  | { readonly ok: false; readonly errors: readonly string[] };
+
+/** Migrations from older format versions, keyed by the version they upgrade from. */
+const MIGRATIONS: Record<number, (old: Record<string, unknown>) => Record<string, unknown>> = {};
+
+function fail(...errors: string[]): RestoreResult {
+  return { ok: false, errors };
+}
+
+function formatPath(path: readonly PropertyKey[]): string {
+  let text = '';
+  for (const key of path) {
+    text += typeof key === 'number' ? `[${key}]` : `${text ? '.' : ''}${String(key)}`;
+  }
+  return text || '(design)';
+}
+
+/**
+ * The single entry point for every load: file open, autosave, paste and the CLI. Parses text (if given
+ * text), checks the format name, migrates older versions, and validates with the zod schema.
+ * Never throws; on failure returns messages naming what is wrong and where.
+ */
+export function restoreDesign(input: unknown): RestoreResult {
+  let data = input;
+  if (typeof input === 'string') {
+    if (input.length > MAX_DESIGN_TEXT_LENGTH) {
+      return fail(`file is ${input.length.toLocaleString('en-US')} characters; the limit is ${MAX_DESIGN_TEXT_LENGTH.toLocaleString('en-US')}`);
+    }
+    try {
+      data = JSON.parse(input);
+    } catch (error) {
+      return fail(`not valid JSON: ${error instanceof Error ? error.message : String(error)}`);
+    }
+  }
+  if (typeof data !== 'object' || data === null || Array.isArray(data)) {
+    return fail('not a Matloom design: expected a JSON object');
+  }
+  let record = data as Record<string, unknown>;
+  if (record.format !== DESIGN_FORMAT) {
+    return fail(`not a Matloom design: "format" must be "${DESIGN_FORMAT}", found ${JSON.stringify(record.format) ?? 'nothing'}`);
+  }
+  const version = record.version;
+  if (typeof version !== 'number' || !Number.isInteger(version) || version < 1) {
+    return fail(`"version" must be a whole number from 1 to ${DESIGN_VERSION}`);
+  }
+  if (version > DESIGN_VERSION) {
+    return fail(`design format version ${version} is newer than this Matloom understands (${DESIGN_VERSION})`);
+  }
+  for (let v = version; v < DESIGN_VERSION; v++) {
+    const migrate = MIGRATIONS[v];
+    if (!migrate) return fail(`no migration from design format version ${v}`);
+    record = migrate(record);
+  }
+  const parsed = designSchema.safeParse(record);
+  if (!parsed.success) {
+    return fail(...parsed.error.issues.slice(0, 20).map((issue) => `${formatPath(issue.path)}: ${issue.message}`));
+  }
+  return { ok: true, design: parsed.data, migratedFrom: version === DESIGN_VERSION ? null : version };
+}

@@ -1,0 +1,66 @@
+import { z } from 'zod';
+import { MAX_COORDINATE, finite, positive, wholeCount } from './schemaParts';
+
+/**
+ * Blocks placed on the floorplan. Positions are the top-left corner in metres, y growing downwards
+ * (the way a canvas and a layout viewer both draw). A mat's size follows from its cell and cell counts;
+ * every other block carries its own width and height.
+ */
+
+/** Cells on one bit line or one word line; large enough for any real mat, small enough to stay sane. */
+export const MAX_CELLS_PER_LINE = 16384;
+
+const coordinate = (label: string) => finite(label, -MAX_COORDINATE, MAX_COORDINATE);
+const extent = (label: string) => positive(label, 1e-9, MAX_COORDINATE);
+
+const blockBase = {
+  id: z.string().min(1).max(80),
+  name: z.string().max(120).default(''),
+  x: coordinate('x'),
+  y: coordinate('y'),
+};
+
+/** Which way the bit lines run across the canvas. */
+export const BITLINE_AXES = ['vertical', 'horizontal'] as const;
+export type BitlineAxis = (typeof BITLINE_AXES)[number];
+
+export const matSchema = z.object({
+  ...blockBase,
+  type: z.literal('mat'),
+  cellId: z.string().min(1).max(80),
+  /** Cells connected to one bit line. */
+  cellsPerBitline: wholeCount('cells per bit line', 1, MAX_CELLS_PER_LINE),
+  /** Cells connected to one word line. */
+  cellsPerWordline: wholeCount('cells per word line', 1, MAX_CELLS_PER_LINE),
+  bitlineAxis: z.enum(BITLINE_AXES),
+});
+
+export const STRIP_TYPES = ['senseAmpStrip', 'wordlineDriverStrip', 'rowDecoder', 'columnDecoder'] as const;
+export type StripType = (typeof STRIP_TYPES)[number];
+
+export const stripSchema = z.object({
+  ...blockBase,
+  type: z.enum(STRIP_TYPES),
+  width: extent('width'),
+  height: extent('height'),
+});
+
+export const blockSchema = z.discriminatedUnion('type', [matSchema, stripSchema]);
+
+export type Mat = z.infer<typeof matSchema>;
+export type Strip = z.infer<typeof stripSchema>;
+export type Block = z.infer<typeof blockSchema>;
+export type BlockType = Block['type'];
+
+export function isMat(block: Block): block is Mat {
+  return block.type === 'mat';
+}
+
+/** Human names of block types, for panels, checks and exports. */
+export const BLOCK_TYPE_LABEL: Record<BlockType, string> = {
+  mat: 'mat',
+  senseAmpStrip: 'sense-amplifier strip',
+  wordlineDriverStrip: 'sub-word-line driver strip',
+  rowDecoder: 'row decoder',
+  columnDecoder: 'column decoder',
+};

@@ -1,0 +1,60 @@
+import { z } from 'zod';
+import { finite, nonNegative, positive } from './schemaParts';
+
+/**
+ * A process profile: the technology numbers the engine needs, all in SI units.
+ * Per-cell parasitics are the share of one cell along its bit line or word line.
+ */
+export const processProfileSchema = z
+  .object({
+    id: z.string().min(1).max(80),
+    name: z.string().min(1).max(120),
+    description: z.string().max(2000).default(''),
+    /** Minimum feature size F (m). */
+    featureSize: positive('feature size', 1e-9, 1e-5),
+    /** Array supply: the full bit-line swing and the stored-1 target (V). */
+    arrayVoltage: positive('array voltage', 0.1, 10),
+    /** Boosted word-line high level VPP (V). */
+    wordlineHighVoltage: positive('word-line high voltage', 0.1, 20),
+    /** Bit-line precharge level (V); half the array voltage in most DRAM. */
+    prechargeVoltage: nonNegative('precharge voltage', 10),
+    /** Access-transistor threshold at zero source-body bias (V). */
+    accessThresholdVoltage: finite('access threshold voltage', -2, 5),
+    /** Body-effect coefficient γ (V^½). */
+    bodyEffectCoefficient: nonNegative('body-effect coefficient', 5),
+    /** Twice the Fermi potential, 2φF (V). */
+    surfacePotential: positive('surface potential 2φF', 0.1, 3),
+    /** Bit-line capacitance per cell from the cell's junction and contact (F). */
+    bitlineJunctionCapacitancePerCell: nonNegative('bit-line junction capacitance per cell', 1e-12),
+    /** Bit-line to word-line coupling per cell (F). */
+    bitlineToWordlineCapacitancePerCell: nonNegative('bit-line to word-line capacitance per cell', 1e-12),
+    /** Bit-line to neighbouring bit-line coupling per cell (F). */
+    bitlineToBitlineCapacitancePerCell: nonNegative('bit-line to bit-line capacitance per cell', 1e-12),
+    /** Bit-line wire capacitance to everything else, per metre of bit line (F/m). */
+    bitlineWireCapacitancePerLength: nonNegative('bit-line wire capacitance per length', 1e-6),
+    /** Bit-line resistance per metre (Ω/m). */
+    bitlineResistancePerLength: nonNegative('bit-line resistance per length', 1e15),
+    /** Word-line gate load per cell (F). */
+    wordlineGateCapacitancePerCell: nonNegative('word-line gate capacitance per cell', 1e-12),
+    /** Word-line wire capacitance per metre (F/m). */
+    wordlineWireCapacitancePerLength: nonNegative('word-line wire capacitance per length', 1e-6),
+    /** Word-line resistance per metre (Ω/m). */
+    wordlineResistancePerLength: nonNegative('word-line resistance per length', 1e15),
+    /** Sense-amplifier input capacitance added to each bit line (F). */
+    senseAmpInputCapacitance: nonNegative('sense-amplifier input capacitance', 1e-12),
+    /** Storage-node leakage current of one cell at the reference temperature (A). */
+    cellLeakageCurrent: nonNegative('cell leakage current', 1e-6),
+    /** Temperature at which the leakage current is given (K). */
+    leakageReferenceTemperature: positive('leakage reference temperature', 1, 1000),
+  })
+  .superRefine((p, ctx) => {
+    if (p.prechargeVoltage > p.arrayVoltage) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['prechargeVoltage'],
+        message: 'precharge voltage must not exceed the array voltage',
+      });
+    }
+  });
+
+export type ProcessProfile = z.infer<typeof processProfileSchema>;

@@ -1,0 +1,175 @@
+/**
+ * The one place where SI values meet people: engineering notation in, engineering notation out.
+ *
+ * Inside Matloom every value is in SI base units (m, F, V, s, A, Ω, J, K). Panels, exports and the CLI
+ * format through {@link formatQuantity} and parse what people type through {@link parseQuantity}
+ * ("25f", "25 fF", "0.12u", "1.1 V", "120 µm", "85 °C").
+ */
+
+/** The physical quantities Matloom shows, each with its SI unit symbol and preferred display prefix. */
+export const QUANTITIES = {
+  length: { unit: 'm', preferredPrefix: 'µ' },
+  area: { unit: 'm²', preferredPrefix: null },
+  capacitance: { unit: 'F', preferredPrefix: 'f' },
+  capacitancePerLength: { unit: 'F/m', preferredPrefix: null },
+  voltage: { unit: 'V', preferredPrefix: null },
+  time: { unit: 's', preferredPrefix: null },
+  current: { unit: 'A', preferredPrefix: null },
+  resistance: { unit: 'Ω', preferredPrefix: null },
+  resistancePerLength: { unit: 'Ω/m', preferredPrefix: null },
+  energy: { unit: 'J', preferredPrefix: null },
+  power: { unit: 'W', preferredPrefix: null },
+  temperature: { unit: 'K', preferredPrefix: null },
+  sqrtVoltage: { unit: 'V^½', preferredPrefix: null },
+  ratio: { unit: '', preferredPrefix: null },
+  percent: { unit: '%', preferredPrefix: null },
+  count: { unit: '', preferredPrefix: null },
+} as const;
+
+export type Quantity = keyof typeof QUANTITIES;
+
+const PREFIXES: readonly { symbol: string; exponent: number }[] = [
+  { symbol: 'a', exponent: -18 },
+  { symbol: 'f', exponent: -15 },
+  { symbol: 'p', exponent: -12 },
+  { symbol: 'n', exponent: -9 },
+  { symbol: 'µ', exponent: -6 },
+  { symbol: 'm', exponent: -3 },
+  { symbol: '', exponent: 0 },
+  { symbol: 'k', exponent: 3 },
+  { symbol: 'M', exponent: 6 },
+  { symbol: 'G', exponent: 9 },
+  { symbol: 'T', exponent: 12 },
+];
+
+const PREFIX_EXPONENT = new Map<string, number>([
+  ...PREFIXES.map((p): [string, number] => [p.symbol, p.exponent]),
+  ['u', -6],
+  ['μ', -6], // Greek mu (U+03BC) as well as the micro sign (U+00B5)
+]);
+
+const ZERO_CELSIUS_IN_KELVIN = 273.15;
+
+/** Significant digits used when formatting, unless a caller asks for more. */
+const DEFAULT_DIGITS = 4;
+
+function trimNumber(value: number, digits: number): string {
+  // toPrecision gives significant digits; Number() drops trailing zeros; keep an integer-looking value short.
+  const text = Number(value.toPrecision(digits)).toString();
+  return text.includes('e') ? value.toPrecision(digits) : text;
+}
+
+/** Formats an SI value with an engineering prefix, e.g. 2.5e-14 F → "25 fF", 3.6e-5 m → "36 µm". */
+export function formatQuantity(value: number, quantity: Quantity, digits = DEFAULT_DIGITS): string {
+  if (!Number.isFinite(value)) return Number.isNaN(value) ? '—' : value > 0 ? '∞' : '−∞';
+  const { unit } = QUANTITIES[quantity];
+  switch (quantity) {
+    case 'ratio':
+      return trimNumber(value, digits);
+    case 'count':
+      return Math.round(value).toLocaleString('en-US');
+    case 'percent':
+      return `${trimNumber(value * 100, digits)} %`;
+    case 'temperature':
+      return `${trimNumber(value - ZERO_CELSIUS_IN_KELVIN, digits)} °C`;
+    case 'area':
+      return formatArea(value, digits);
+    default:
+      return formatWithPrefix(value, unit, digits);
+  }
+}
+
+function formatWithPrefix(value: number, unit: string, digits: number): string {
+  if (value === 0) return `0 ${unit}`;
+  const exponent = Math.floor(Math.log10(Math.abs(value)) / 3) * 3;
+  const clamped = Math.min(12, Math.max(-18, exponent));
+  const prefix = PREFIXES.find((p) => p.exponent === clamped) ?? { symbol: '', exponent: 0 };
+  return `${trimNumber(value / 10 ** prefix.exponent, digits)} ${prefix.symbol}${unit}`;
+}
+
+/** Areas read best in µm² for cells and mats and mm² for dies. */
+function formatArea(value: number, digits: number): string {
+  const squareMicrometres = value * 1e12;
+  if (Math.abs(squareMicrometres) >= 1e5) return `${trimNumber(value * 1e6, digits)} mm²`;
+  return `${trimNumber(squareMicrometres, digits)} µm²`;
+}
+
+/** The result of reading what someone typed: a value in SI units or a message saying what is wrong. */
+export type ParseResult = { ok: true; value: number } | { ok: false; error: string };
+
+const NUMBER_AND_REST = /^\s*([-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?)\s*(.*?)\s*$/;
+
+/**
+ * Reads a value typed in engineering notation and returns it in SI units.
+ * Accepts a bare number (taken as SI), a prefix alone ("25f"), or prefix and unit ("25 fF", "0.12 um").
+ * Temperatures accept "85 °C", "85 C" or "358 K"; a bare temperature number is °C.
+ */
+export function parseQuantity(text: string, quantity: Quantity): ParseResult {
+  const match = NUMBER_AND_REST.exec(text);
+  if (!match) return { ok: false, error: `"${text}" is not a number` };
+  const magnitude = Number(match[1]);
+  const rest = (match[2] ?? '').replace(/\s+/g, '');
+  if (!Number.isFinite(magnitude)) return { ok: false, error: `"${text}" is too large` };
+
+  if (quantity === 'temperature') return parseTemperature(magnitude, rest, text);
+  if (quantity === 'percent') {
+    if (rest === '' || rest === '%') return { ok: true, value: magnitude / 100 };
+    return { ok: false, error: `"${text}": expected a percentage such as "65 %"` };
+  }
+
+  const unit = QUANTITIES[quantity].unit;
+  const unitAliases = unitSpellings(unit);
+  let prefixText = rest;
+  const spelledUnit = unitAliases.find((u) => u !== '' && endsWithUnit(rest, u));
+  if (spelledUnit) prefixText = rest.slice(0, rest.length - spelledUnit.length);
+  const exponent = PREFIX_EXPONENT.get(prefixText);
+  if (exponent === undefined) {
+    return { ok: false, error: `"${text}": unknown unit or prefix "${rest}" for ${unit || 'a plain number'}` };
+  }
+  const power = quantity === 'area' ? exponent * 2 : exponent;
+  const value = magnitude * 10 ** power;
+  if (!Number.isFinite(value)) return { ok: false, error: `"${text}" is too large` };
+  return { ok: true, value };
+}
+
+/**
+ * Exact spelling first; a different case only where it cannot be a prefix ("1.1v" is volts, but "25f"
+ * stays 25 femto and never 25 farad).
+ */
+function endsWithUnit(rest: string, unit: string): boolean {
+  if (rest.endsWith(unit)) return true;
+  const lower = unit.toLowerCase();
+  return !PREFIX_EXPONENT.has(lower) && rest.toLowerCase().endsWith(lower);
+}
+
+function unitSpellings(unit: string): string[] {
+  switch (unit) {
+    case 'Ω':
+      return ['Ω', 'ohm', 'ohms'];
+    case 'm²':
+      return ['m²', 'm2', 'm^2'];
+    case 'V^½':
+      return ['V^½', 'V^0.5', 'sqrtV'];
+    default:
+      return [unit];
+  }
+}
+
+function parseTemperature(magnitude: number, rest: string, text: string): ParseResult {
+  const unit = rest.toUpperCase();
+  if (unit === '' || unit === '°C' || unit === 'C' || unit === 'DEGC') {
+    return { ok: true, value: magnitude + ZERO_CELSIUS_IN_KELVIN };
+  }
+  if (unit === 'K') return { ok: true, value: magnitude };
+  return { ok: false, error: `"${text}": expected a temperature such as "85 °C" or "358 K"` };
+}
+
+/** Converts kelvin to degrees Celsius, for the few places that must show a bare number. */
+export function kelvinToCelsius(kelvin: number): number {
+  return kelvin - ZERO_CELSIUS_IN_KELVIN;
+}
+
+/** Converts degrees Celsius to kelvin. */
+export function celsiusToKelvin(celsius: number): number {
+  return celsius + ZERO_CELSIUS_IN_KELVIN;
+}

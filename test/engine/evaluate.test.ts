@@ -1,0 +1,150 @@
+import { describe, expect, it } from 'vitest';
+import { evaluate, findMatReport } from '../../src/engine';
+import { OPEN_6F2_CELL } from '../../src/model/builtins';
+import type { Block, Strip } from '../../src/model/block';
+import { demoDesign } from '../../src/model/demoDesign';
+import { designWith, mat, processWith } from '../support/designs';
+
+const F = 18e-9;
+const strip = (id: string, type: Strip['type'], x: number, y: number, width: number, height: number): Strip => ({
+  id,
+  name: id,
+  type,
+  x,
+  y,
+  width,
+  height,
+});
+
+/** A folded 512×512 mat at (10 µm, 10 µm): 1024 bit lines at 2F, 1024 word lines at 2F → 36.864 µm square. */
+const SIDE = 1024 * 2 * F;
+const M = mat({ x: 10e-6, y: 10e-6 });
+const saTop = strip('sa-top', 'senseAmpStrip', 10e-6, 4e-6, SIDE, 6e-6);
+const saBottom = strip('sa-bottom', 'senseAmpStrip', 10e-6, 10e-6 + SIDE, SIDE, 6e-6);
+const swdLeft = strip('swd-left', 'wordlineDriverStrip', 7e-6, 10e-6, 3e-6, SIDE);
+
+describe('evaluate: one mat', () => {
+  it('derives geometry and bits from the cell, F and the cell counts', () => {
+    // Source: common practice (no source): folded 8F² = 2F × 2F pitches at half occupancy.
+    const r = evaluate(designWith([M, saTop, swdLeft]));
+    const m = findMatReport(r, 'm1');
+    expect(m?.bitlineCount).toBe(1024);
+    expect(m?.wordlineCount).toBe(1024);
+    expect(m?.bits).toBe(512 * 1024);
+    expect(m?.bitlineLength).toBeCloseTo(SIDE, 15);
+    expect(m?.area).toBeCloseTo(SIDE * SIDE, 20);
+    expect(m?.cellArea).toBeCloseTo(512 * 1024 * 8 * F * F, 20);
+  });
+
+  it('sums the bit-line capacitance from its parts and shares charge with the cell', () => {
+    const p = processWith({});
+    const r = evaluate(designWith([M, saTop, swdLeft], p));
+    const m = findMatReport(r, 'm1');
+    const expected =
+      512 * (p.bitlineJunctionCapacitancePerCell + p.bitlineToWordlineCapacitancePerCell + p.bitlineToBitlineCapacitancePerCell) +
+      p.bitlineWireCapacitancePerLength * SIDE +
+      p.senseAmpInputCapacitance;
+    expect(m?.bitlineCapacitance.total).toBeCloseTo(expected, 25);
+    const ctr = 11e-15 / (11e-15 + expected);
+    expect(m?.chargeTransferRatio).toBeCloseTo(ctr, 12);
+    expect(m?.signalLow).toBeCloseTo(0.55 * ctr, 12);
+    expect(m?.signalHigh).toBeCloseTo((1.1 - 0.55) * ctr, 12);
+  });
+
+  it('a folded 8F² mat alone has 8 F² per bit and 100 % efficiency; open 6F² has 6 F²', () => {
+    // Source: cell footprints 8F² folded, 6F² open (common practice; shared/REFERENCES.md entry 16).
+    expect(evaluate(designWith([M])).totals.areaPerBitInF2).toBeCloseTo(8, 9);
+    expect(evaluate(designWith([M])).totals.arrayEfficiency).toBeCloseTo(1, 9);
+    const open = evaluate(designWith([mat({ cellId: OPEN_6F2_CELL.id })]));
+    expect(open.totals.areaPerBitInF2).toBeCloseTo(6, 9);
+  });
+
+  it('array efficiency of a 1 Gb, 0.109 µm² cell on 180 mm² is 65.0 %', () => {
+    // Source: Takahashi et al., "A Multigigabit DRAM Technology With 6F² Open-Bitline Cell…",
+    // IEEE JSSC 36(11), 2001: 1 Gb, cell 0.109 µm², die 180 mm² (published inputs; arithmetic → 65.0 %).
+    // Four open 6F² mats of 16384 × 16384 cells = 2^30 bits with F chosen so that 6F² = 0.109 µm²;
+    // a filler block makes the bounding box 180 mm².
+    const f = Math.sqrt(0.109e-12 / 6);
+    const side = 16384 * 3 * f; // word-line length (bit-line pitch 3F)
+    const height = 16384 * 2 * f;
+    const mats: Block[] = [0, 1, 2, 3].map((i) =>
+      mat({ id: `m${i}`, cellId: OPEN_6F2_CELL.id, cellsPerBitline: 16384, cellsPerWordline: 16384, x: 0, y: i * height }),
+    );
+    const fillerHeight = 180e-6 / side - 4 * height;
+    const design = designWith([...mats, strip('filler', 'columnDecoder', 0, 4 * height, side, fillerHeight)], processWith({ featureSize: f }));
+    const t = evaluate(design).totals;
+    expect(t.bits).toBe(2 ** 30);
+    expect(t.totalArea).toBeCloseTo(180e-6, 12);
+    expect(t.arrayEfficiency).toBeCloseTo(0.650, 3);
+  });
+});
+
+describe('evaluate: adjacency checks', () => {
+  const kinds = (blocks: Block[]) => evaluate(designWith(blocks)).findings.map((f) => f.kind);
+
+  it('a mat with a sense-amp strip on one bit-line end and a driver on one word-line end is clean', () => {
+    expect(kinds([M, saTop, swdLeft])).toEqual([]);
+    expect(kinds([M, saBottom, swdLeft])).toEqual([]);
+  });
+
+  it('with no sense-amp strip every bit line is unsensed', () => {
+    const m = findMatReport(evaluate(designWith([M, swdLeft])), 'm1');
+    expect(m?.unsensedBitlines).toBe(1024);
+    expect(kinds([M, swdLeft])).toEqual(['unsensedBitlines']);
+  });
+
+  it('a strip covering half the edge leaves half the bit lines unsensed', () => {
+    const half = strip('sa-half', 'senseAmpStrip', 10e-6, 4e-6, SIDE / 2, 6e-6);
+    expect(findMatReport(evaluate(designWith([M, half, swdLeft])), 'm1')?.unsensedBitlines).toBe(512);
+  });
+
+  it('half strips on opposite ends cover the whole mat between them', () => {
+    const leftHalfTop = strip('a', 'senseAmpStrip', 10e-6, 4e-6, SIDE / 2, 6e-6);
+    const rightHalfBottom = strip('b', 'senseAmpStrip', 10e-6 + SIDE / 2, 10e-6 + SIDE, SIDE / 2, 6e-6);
+    expect(findMatReport(evaluate(designWith([M, leftHalfTop, rightHalfBottom, swdLeft])), 'm1')?.unsensedBitlines).toBe(0);
+  });
+
+  it('a strip on a word-line end does not sense, and a gap of 1 nm is not abutment', () => {
+    const saOnSide = strip('sa-side', 'senseAmpStrip', 4e-6, 10e-6, 6e-6, SIDE);
+    expect(kinds([M, saOnSide, swdLeft])).toContain('unsensedBitlines');
+    const saGap = strip('sa-gap', 'senseAmpStrip', 10e-6, 4e-6 - 2e-9, SIDE, 6e-6);
+    expect(kinds([M, saGap, swdLeft])).toContain('unsensedBitlines');
+  });
+
+  it('horizontal bit lines are sensed on the left and right edges', () => {
+    const h = mat({ x: 10e-6, y: 10e-6, bitlineAxis: 'horizontal' });
+    const saLeft = strip('sa-left', 'senseAmpStrip', 4e-6, 10e-6, 6e-6, SIDE);
+    const swdTop = strip('swd-top', 'wordlineDriverStrip', 10e-6, 7e-6, SIDE, 3e-6);
+    expect(kinds([h, saLeft, swdTop])).toEqual([]);
+    expect(kinds([h, saTop, swdLeft])).toEqual(['unsensedBitlines', 'undrivenWordlines']);
+  });
+
+  it('overlapping blocks are reported once per pair, abutting ones not at all', () => {
+    const overlapping = mat({ id: 'm2', x: 10e-6 + SIDE / 2, y: 10e-6 });
+    const f = evaluate(designWith([M, overlapping, saTop, swdLeft])).findings.filter((x) => x.kind === 'overlap');
+    expect(f).toHaveLength(1);
+    expect(f[0]?.blockIds).toEqual(['m1', 'm2']);
+    const abutting = mat({ id: 'm2', x: 10e-6 + SIDE, y: 10e-6 });
+    expect(evaluate(designWith([M, abutting])).findings.some((x) => x.kind === 'overlap')).toBe(false);
+  });
+
+  it('a low word-line boost gives a warning naming the VPP needed', () => {
+    const r = evaluate(designWith([M, saTop, swdLeft], processWith({ wordlineHighVoltage: 1.5 })));
+    const w = r.findings.find((x) => x.kind === 'storedHighLimited');
+    expect(w?.severity).toBe('warning');
+    expect(w?.message).toMatch(/VPP ≥ 2\.064 V/);
+  });
+});
+
+describe('evaluate: the demo design', () => {
+  it('has 16 mats, 8 Mib, no findings and a sense signal between 50 and 150 mV', () => {
+    const r = evaluate(demoDesign());
+    expect(r.totals.matCount).toBe(16);
+    expect(r.totals.bits).toBe(16 * 512 * 1024);
+    expect(r.findings).toEqual([]);
+    expect(r.totals.worstSenseSignal).toBeGreaterThan(0.05);
+    expect(r.totals.worstSenseSignal).toBeLessThan(0.15);
+    expect(r.totals.arrayEfficiency).toBeGreaterThan(0.5);
+    expect(r.totals.arrayEfficiency).toBeLessThan(1);
+  });
+});

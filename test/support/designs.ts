@@ -1,0 +1,37 @@
+import { BUILTIN_CELLS, DEMO_PROCESS, FOLDED_8F2_CELL } from '../../src/model/builtins';
+import type { Block, Mat } from '../../src/model/block';
+import { DESIGN_FORMAT, DESIGN_VERSION, type Design } from '../../src/model/design';
+import type { ProcessProfile } from '../../src/model/process';
+
+/** The demo process with some values replaced. */
+export function processWith(overrides: Partial<ProcessProfile>): ProcessProfile {
+  return { ...DEMO_PROCESS, ...overrides };
+}
+
+/** A design around the given blocks, on the demo process unless told otherwise. */
+export function designWith(blocks: Block[], process: ProcessProfile = DEMO_PROCESS): Design {
+  return {
+    format: DESIGN_FORMAT,
+    version: DESIGN_VERSION,
+    name: 'test design',
+    lengthUnit: 'm',
+    process,
+    cells: BUILTIN_CELLS.map((c) => ({ ...c })),
+    blocks,
+  };
+}
+
+export function mat(overrides: Partial<Mat> = {}): Mat {
+  return {
+    id: 'm1',
+    name: 'M1',
+    type: 'mat',
+    x: 0,
+    y: 0,
+    cellId: FOLDED_8F2_CELL.id,
+    cellsPerBitline: 512,
+    cellsPerWordline: 512,
+    bitlineAxis: 'vertical',
+    ...overrides,
+  };
+}
