@@ -33,7 +33,10 @@ export default tseslint.config(
         'error',
         {
           patterns: [
-            { group: uiPackages, message: 'The model, geometry, engine, io and cli layers stay free of UI code.' },
+            {
+              group: uiPackages,
+              message: 'The model, geometry, engine, io and cli layers stay free of UI code.',
+            },
             {
               group: ['**/store/**', '**/canvas/**', '**/panels/**', '**/commands/**', '**/app/**'],
               message: 'Lower layers never import upper layers.',

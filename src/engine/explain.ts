@@ -59,7 +59,12 @@ const input = (symbol: string, label: string, value: number, quantity: Quantity)
 });
 
 /** Explains one figure of one mat. */
-export function explainMatFigure(key: MatFigureKey, mat: MatReport, design: Design, report: Report): Explanation {
+export function explainMatFigure(
+  key: MatFigureKey,
+  mat: MatReport,
+  design: Design,
+  report: Report,
+): Explanation {
   const p = design.process;
   const cbl = mat.bitlineCapacitance;
   const ctrInputs = [
@@ -80,9 +85,24 @@ export function explainMatFigure(key: MatFigureKey, mat: MatReport, design: Desi
         inputs: [
           input('N', 'cells per bit line', mat.cellsPerBitline, 'count'),
           input('Cj', 'junction/contact per cell', p.bitlineJunctionCapacitancePerCell, 'capacitance'),
-          input('Cbw', 'bit-line to word-line coupling per cell', p.bitlineToWordlineCapacitancePerCell, 'capacitance'),
-          input('Cbb', 'bit-line to bit-line coupling per cell', p.bitlineToBitlineCapacitancePerCell, 'capacitance'),
-          input('c_wire', 'wire capacitance per length', p.bitlineWireCapacitancePerLength, 'capacitancePerLength'),
+          input(
+            'Cbw',
+            'bit-line to word-line coupling per cell',
+            p.bitlineToWordlineCapacitancePerCell,
+            'capacitance',
+          ),
+          input(
+            'Cbb',
+            'bit-line to bit-line coupling per cell',
+            p.bitlineToBitlineCapacitancePerCell,
+            'capacitance',
+          ),
+          input(
+            'c_wire',
+            'wire capacitance per length',
+            p.bitlineWireCapacitancePerLength,
+            'capacitancePerLength',
+          ),
           input('L_bl', 'bit-line length', mat.bitlineLength, 'length'),
           input('C_sa', 'sense-amplifier input', cbl.senseAmp, 'capacitance'),
         ],
@@ -150,7 +170,8 @@ export function explainMatFigure(key: MatFigureKey, mat: MatReport, design: Desi
         ],
         value: mat.bits,
         quantity: 'count',
-        method: 'Folded bit lines hold a cell at every other word-line crossing (occupancy ½); open at every one.',
+        method:
+          'Folded bit lines hold a cell at every other word-line crossing (occupancy ½); open at every one.',
         source: `${WESTE_HARRIS} (array styles); common practice (no source) for the counting`,
       };
     case 'area':
@@ -239,7 +260,10 @@ export function explainTotal(key: TotalFigureKey, totals: Totals, design: Design
         title: 'Area per bit in F²',
         symbol: 'A_bit/F²',
         formula: 'A_bit / F²',
-        inputs: [input('A_bit', 'area per bit', totals.areaPerBit, 'area'), input('F', 'feature size', F, 'length')],
+        inputs: [
+          input('A_bit', 'area per bit', totals.areaPerBit, 'area'),
+          input('F', 'feature size', F, 'length'),
+        ],
         value: totals.areaPerBitInF2,
         quantity: 'ratio',
         method: 'Area per bit normalised to the feature size, comparable across nodes.',

@@ -56,7 +56,12 @@ export interface Totals {
 
 export type Severity = 'error' | 'warning';
 
-export const FINDING_KINDS = ['unsensedBitlines', 'undrivenWordlines', 'overlap', 'storedHighLimited'] as const;
+export const FINDING_KINDS = [
+  'unsensedBitlines',
+  'undrivenWordlines',
+  'overlap',
+  'storedHighLimited',
+] as const;
 export type FindingKind = (typeof FINDING_KINDS)[number];
 
 /** One thing the checks found, naming the blocks it concerns. */

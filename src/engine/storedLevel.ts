@@ -12,7 +12,9 @@ import type { ProcessProfile } from '../model/process';
 export function thresholdWithBodyEffect(process: ProcessProfile, sourceBodyVoltage: number): number {
   const phi = process.surfacePotential;
   const vsb = Math.max(0, sourceBodyVoltage);
-  return process.accessThresholdVoltage + process.bodyEffectCoefficient * (Math.sqrt(phi + vsb) - Math.sqrt(phi));
+  return (
+    process.accessThresholdVoltage + process.bodyEffectCoefficient * (Math.sqrt(phi + vsb) - Math.sqrt(phi))
+  );
 }
 
 /** The level a cell stores for a 1, and why. */
@@ -41,10 +43,20 @@ export function storedHighLevel(process: ProcessProfile): StoredHighLevel {
   const headroom = (v: number) => vpp - thresholdWithBodyEffect(process, v) - v;
   const wordlineHighNeeded = vdd + thresholdWithBodyEffect(process, vdd);
   if (headroom(vdd) >= 0) {
-    return { level: vdd, threshold: thresholdWithBodyEffect(process, vdd), limitedByWordline: false, wordlineHighNeeded };
+    return {
+      level: vdd,
+      threshold: thresholdWithBodyEffect(process, vdd),
+      limitedByWordline: false,
+      wordlineHighNeeded,
+    };
   }
   if (headroom(0) <= 0) {
-    return { level: 0, threshold: thresholdWithBodyEffect(process, 0), limitedByWordline: true, wordlineHighNeeded };
+    return {
+      level: 0,
+      threshold: thresholdWithBodyEffect(process, 0),
+      limitedByWordline: true,
+      wordlineHighNeeded,
+    };
   }
   let low = 0;
   let high = vdd;
@@ -55,5 +67,10 @@ export function storedHighLevel(process: ProcessProfile): StoredHighLevel {
     else high = mid;
   }
   const level = (low + high) / 2;
-  return { level, threshold: thresholdWithBodyEffect(process, level), limitedByWordline: true, wordlineHighNeeded };
+  return {
+    level,
+    threshold: thresholdWithBodyEffect(process, level),
+    limitedByWordline: true,
+    wordlineHighNeeded,
+  };
 }

@@ -53,7 +53,15 @@ export function gridFloorplan(spec: GridFloorplanSpec): Block[] {
   const arrayHeight = spec.matRows * (matH + sa) + sa;
   const blocks: Block[] = [];
   const axis: BitlineAxis = 'vertical';
-  const strip = (id: string, name: string, type: Strip['type'], x: number, y: number, w: number, h: number): Strip => ({
+  const strip = (
+    id: string,
+    name: string,
+    type: Strip['type'],
+    x: number,
+    y: number,
+    w: number,
+    h: number,
+  ): Strip => ({
     id,
     name,
     type,
@@ -80,20 +88,38 @@ export function gridFloorplan(spec: GridFloorplanSpec): Block[] {
   }
   for (let r = 0; r <= spec.matRows; r++) {
     for (let c = 0; c < spec.matColumns; c++) {
-      blocks.push(strip(`sa-r${r}c${c}`, `SA ${r}.${c + 1}`, 'senseAmpStrip', columnX(c), r * (matH + sa), matW, sa));
+      blocks.push(
+        strip(`sa-r${r}c${c}`, `SA ${r}.${c + 1}`, 'senseAmpStrip', columnX(c), r * (matH + sa), matW, sa),
+      );
     }
   }
   for (let r = 0; r < spec.matRows; r++) {
     for (let c = 0; c <= spec.matColumns; c++) {
       blocks.push(
-        strip(`swd-r${r}c${c}`, `SWD ${r + 1}.${c}`, 'wordlineDriverStrip', left + c * (matW + swd), rowY(r), swd, matH),
+        strip(
+          `swd-r${r}c${c}`,
+          `SWD ${r + 1}.${c}`,
+          'wordlineDriverStrip',
+          left + c * (matW + swd),
+          rowY(r),
+          swd,
+          matH,
+        ),
       );
     }
   }
   if (left > 0) blocks.push(strip('row-decoder', 'Row decoder', 'rowDecoder', 0, 0, left, arrayHeight));
   if (spec.columnDecoderHeight > 0) {
     blocks.push(
-      strip('column-decoder', 'Column decoder', 'columnDecoder', left, arrayHeight, arrayWidth, spec.columnDecoderHeight),
+      strip(
+        'column-decoder',
+        'Column decoder',
+        'columnDecoder',
+        left,
+        arrayHeight,
+        arrayWidth,
+        spec.columnDecoderHeight,
+      ),
     );
   }
   return blocks;

@@ -24,6 +24,20 @@ function formatPath(path: readonly PropertyKey[]): string {
 }
 
 /**
+ * A short description of an unexpected value for a message. JSON.stringify is not used on arbitrary
+ * values because it throws on BigInt and cyclic objects, and a restore must never throw.
+ */
+function describeFound(value: unknown): string {
+  if (value === undefined) return 'nothing';
+  if (typeof value === 'string') {
+    // Long strings are cut so that a message stays one readable line (40 characters is arbitrary).
+    return JSON.stringify(value.length > 40 ? `${value.slice(0, 40)}…` : value);
+  }
+  if (value === null || typeof value === 'number' || typeof value === 'boolean') return String(value);
+  return Array.isArray(value) ? 'an array' : `a value of type ${typeof value}`;
+}
+
+/**
  * The single entry point for every load: file open, autosave, paste and the CLI. Parses text (if given
  * text), checks the format name, migrates older versions, and validates with the zod schema.
  * Never throws; on failure returns messages naming what is wrong and where.
@@ -32,7 +46,9 @@ export function restoreDesign(input: unknown): RestoreResult {
   let data = input;
   if (typeof input === 'string') {
     if (input.length > MAX_DESIGN_TEXT_LENGTH) {
-      return fail(`file is ${input.length.toLocaleString('en-US')} characters; the limit is ${MAX_DESIGN_TEXT_LENGTH.toLocaleString('en-US')}`);
+      return fail(
+        `file is ${input.length.toLocaleString('en-US')} characters; the limit is ${MAX_DESIGN_TEXT_LENGTH.toLocaleString('en-US')}`,
+      );
     }
     try {
       data = JSON.parse(input);
@@ -45,14 +61,18 @@ export function restoreDesign(input: unknown): RestoreResult {
   }
   let record = data as Record<string, unknown>;
   if (record.format !== DESIGN_FORMAT) {
-    return fail(`not a Matloom design: "format" must be "${DESIGN_FORMAT}", found ${JSON.stringify(record.format) ?? 'nothing'}`);
+    return fail(
+      `not a Matloom design: "format" must be "${DESIGN_FORMAT}", found ${describeFound(record.format)}`,
+    );
   }
   const version = record.version;
   if (typeof version !== 'number' || !Number.isInteger(version) || version < 1) {
     return fail(`"version" must be a whole number from 1 to ${DESIGN_VERSION}`);
   }
   if (version > DESIGN_VERSION) {
-    return fail(`design format version ${version} is newer than this Matloom understands (${DESIGN_VERSION})`);
+    return fail(
+      `design format version ${version} is newer than this Matloom understands (${DESIGN_VERSION})`,
+    );
   }
   for (let v = version; v < DESIGN_VERSION; v++) {
     const migrate = MIGRATIONS[v];
@@ -61,7 +81,9 @@ export function restoreDesign(input: unknown): RestoreResult {
   }
   const parsed = designSchema.safeParse(record);
   if (!parsed.success) {
-    return fail(...parsed.error.issues.slice(0, 20).map((issue) => `${formatPath(issue.path)}: ${issue.message}`));
+    return fail(
+      ...parsed.error.issues.slice(0, 20).map((issue) => `${formatPath(issue.path)}: ${issue.message}`),
+    );
   }
   return { ok: true, design: parsed.data, migratedFrom: version === DESIGN_VERSION ? null : version };
 }

@@ -25,14 +25,22 @@ export const designSchema = z
     const cellIds = new Set<string>();
     design.cells.forEach((cell, index) => {
       if (cellIds.has(cell.id)) {
-        ctx.addIssue({ code: 'custom', path: ['cells', index, 'id'], message: `duplicate cell id "${cell.id}"` });
+        ctx.addIssue({
+          code: 'custom',
+          path: ['cells', index, 'id'],
+          message: `duplicate cell id "${cell.id}"`,
+        });
       }
       cellIds.add(cell.id);
     });
     const blockIds = new Set<string>();
     design.blocks.forEach((block, index) => {
       if (blockIds.has(block.id)) {
-        ctx.addIssue({ code: 'custom', path: ['blocks', index, 'id'], message: `duplicate block id "${block.id}"` });
+        ctx.addIssue({
+          code: 'custom',
+          path: ['blocks', index, 'id'],
+          message: `duplicate block id "${block.id}"`,
+        });
       }
       blockIds.add(block.id);
       if (block.type === 'mat' && !cellIds.has(block.cellId)) {

@@ -81,16 +81,31 @@ export function formatQuantity(value: number, quantity: Quantity, digits = DEFAU
 
 function formatWithPrefix(value: number, unit: string, digits: number): string {
   if (value === 0) return `0 ${unit}`;
-  const exponent = Math.floor(Math.log10(Math.abs(value)) / 3) * 3;
+  // Pick the prefix from the value as it will be shown, so 9.99996e-13 F reads "1 pF", not "1000 fF".
+  const shown = Number(value.toPrecision(digits));
+  const exponent = Math.floor(Math.log10(Math.abs(shown)) / 3) * 3;
   const clamped = Math.min(12, Math.max(-18, exponent));
   const prefix = PREFIXES.find((p) => p.exponent === clamped) ?? { symbol: '', exponent: 0 };
   return `${trimNumber(value / 10 ** prefix.exponent, digits)} ${prefix.symbol}${unit}`;
 }
 
+/**
+ * An SI value as a bare number in a fixed prefix with fixed decimals, for table columns whose header
+ * already names the unit (e.g. "Cbl (fF)"): formatScaled(8.5e-14, 'f', 2) → "85.00". NaN → "—".
+ */
+export function formatScaled(value: number, prefix: string, decimals: number): string {
+  if (!Number.isFinite(value)) return Number.isNaN(value) ? '—' : value > 0 ? '∞' : '−∞';
+  const exponent = PREFIX_EXPONENT.get(prefix);
+  if (exponent === undefined) throw new Error(`unknown prefix "${prefix}"`);
+  return (value / 10 ** exponent).toFixed(decimals);
+}
+
 /** Areas read best in µm² for cells and mats and mm² for dies. */
 function formatArea(value: number, digits: number): string {
   const squareMicrometres = value * 1e12;
-  if (Math.abs(squareMicrometres) >= 1e5) return `${trimNumber(value * 1e6, digits)} mm²`;
+  // Decide on the rounded figure, so 99 999.9 µm² shows as "0.1 mm²" rather than "100000 µm²".
+  if (Math.abs(Number(squareMicrometres.toPrecision(digits))) >= 1e5)
+    return `${trimNumber(value * 1e6, digits)} mm²`;
   return `${trimNumber(squareMicrometres, digits)} µm²`;
 }
 
@@ -124,7 +139,10 @@ export function parseQuantity(text: string, quantity: Quantity): ParseResult {
   if (spelledUnit) prefixText = rest.slice(0, rest.length - spelledUnit.length);
   const exponent = PREFIX_EXPONENT.get(prefixText);
   if (exponent === undefined) {
-    return { ok: false, error: `"${text}": unknown unit or prefix "${rest}" for ${unit || 'a plain number'}` };
+    return {
+      ok: false,
+      error: `"${text}": unknown unit or prefix "${rest}" for ${unit || 'a plain number'}`,
+    };
   }
   const power = quantity === 'area' ? exponent * 2 : exponent;
   const value = magnitude * 10 ** power;

@@ -6,7 +6,14 @@ import { demoDesign } from '../../src/model/demoDesign';
 import { designWith, mat, processWith } from '../support/designs';
 
 const F = 18e-9;
-const strip = (id: string, type: Strip['type'], x: number, y: number, width: number, height: number): Strip => ({
+const strip = (
+  id: string,
+  type: Strip['type'],
+  x: number,
+  y: number,
+  width: number,
+  height: number,
+): Strip => ({
   id,
   name: id,
   type,
@@ -41,7 +48,10 @@ describe('evaluate: one mat', () => {
     const r = evaluate(designWith([M, saTop, swdLeft], p));
     const m = findMatReport(r, 'm1');
     const expected =
-      512 * (p.bitlineJunctionCapacitancePerCell + p.bitlineToWordlineCapacitancePerCell + p.bitlineToBitlineCapacitancePerCell) +
+      512 *
+        (p.bitlineJunctionCapacitancePerCell +
+          p.bitlineToWordlineCapacitancePerCell +
+          p.bitlineToBitlineCapacitancePerCell) +
       p.bitlineWireCapacitancePerLength * SIDE +
       p.senseAmpInputCapacitance;
     expect(m?.bitlineCapacitance.total).toBeCloseTo(expected, 25);
@@ -68,14 +78,24 @@ describe('evaluate: one mat', () => {
     const side = 16384 * 3 * f; // word-line length (bit-line pitch 3F)
     const height = 16384 * 2 * f;
     const mats: Block[] = [0, 1, 2, 3].map((i) =>
-      mat({ id: `m${i}`, cellId: OPEN_6F2_CELL.id, cellsPerBitline: 16384, cellsPerWordline: 16384, x: 0, y: i * height }),
+      mat({
+        id: `m${i}`,
+        cellId: OPEN_6F2_CELL.id,
+        cellsPerBitline: 16384,
+        cellsPerWordline: 16384,
+        x: 0,
+        y: i * height,
+      }),
     );
     const fillerHeight = 180e-6 / side - 4 * height;
-    const design = designWith([...mats, strip('filler', 'columnDecoder', 0, 4 * height, side, fillerHeight)], processWith({ featureSize: f }));
+    const design = designWith(
+      [...mats, strip('filler', 'columnDecoder', 0, 4 * height, side, fillerHeight)],
+      processWith({ featureSize: f }),
+    );
     const t = evaluate(design).totals;
     expect(t.bits).toBe(2 ** 30);
     expect(t.totalArea).toBeCloseTo(180e-6, 12);
-    expect(t.arrayEfficiency).toBeCloseTo(0.650, 3);
+    expect(t.arrayEfficiency).toBeCloseTo(0.65, 3);
   });
 });
 
@@ -101,7 +121,9 @@ describe('evaluate: adjacency checks', () => {
   it('half strips on opposite ends cover the whole mat between them', () => {
     const leftHalfTop = strip('a', 'senseAmpStrip', 10e-6, 4e-6, SIDE / 2, 6e-6);
     const rightHalfBottom = strip('b', 'senseAmpStrip', 10e-6 + SIDE / 2, 10e-6 + SIDE, SIDE / 2, 6e-6);
-    expect(findMatReport(evaluate(designWith([M, leftHalfTop, rightHalfBottom, swdLeft])), 'm1')?.unsensedBitlines).toBe(0);
+    expect(
+      findMatReport(evaluate(designWith([M, leftHalfTop, rightHalfBottom, swdLeft])), 'm1')?.unsensedBitlines,
+    ).toBe(0);
   });
 
   it('a strip on a word-line end does not sense, and a gap of 1 nm is not abutment', () => {
@@ -121,7 +143,9 @@ describe('evaluate: adjacency checks', () => {
 
   it('overlapping blocks are reported once per pair, abutting ones not at all', () => {
     const overlapping = mat({ id: 'm2', x: 10e-6 + SIDE / 2, y: 10e-6 });
-    const f = evaluate(designWith([M, overlapping, saTop, swdLeft])).findings.filter((x) => x.kind === 'overlap');
+    const f = evaluate(designWith([M, overlapping, saTop, swdLeft])).findings.filter(
+      (x) => x.kind === 'overlap',
+    );
     expect(f).toHaveLength(1);
     expect(f[0]?.blockIds).toEqual(['m1', 'm2']);
     const abutting = mat({ id: 'm2', x: 10e-6 + SIDE, y: 10e-6 });

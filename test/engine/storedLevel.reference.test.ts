@@ -6,7 +6,11 @@ describe('access-transistor threshold and stored-1 level', () => {
   it('body effect: Vt0 0.43 V, γ 0.4 V^½, 2φF 0.6 V, VSB 2.5 V gives about 0.82 V', () => {
     // Source: J. Rabaey, A. Chandrakasan, B. Nikolić, "Digital Integrated Circuits", 2nd ed., 2003,
     // ch. 3, 0.25 µm NMOS parameters and body-effect example (from memory). Exact: 0.43 + 0.4·(√3.1 − √0.6).
-    const p = processWith({ accessThresholdVoltage: 0.43, bodyEffectCoefficient: 0.4, surfacePotential: 0.6 });
+    const p = processWith({
+      accessThresholdVoltage: 0.43,
+      bodyEffectCoefficient: 0.4,
+      surfacePotential: 0.6,
+    });
     expect(thresholdWithBodyEffect(p, 2.5)).toBeCloseTo(0.43 + 0.4 * (Math.sqrt(3.1) - Math.sqrt(0.6)), 12);
     expect(thresholdWithBodyEffect(p, 2.5)).toBeCloseTo(0.824, 3);
     expect(thresholdWithBodyEffect(p, 0)).toBe(0.43);

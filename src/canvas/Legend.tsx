@@ -1,0 +1,28 @@
+import { BLOCK_TYPE_LABEL, type BlockType } from '../model/block';
+import { BLOCK_STYLE, ERROR_STROKE } from './blockStyle';
+
+const ORDER: readonly BlockType[] = ['mat', 'senseAmpStrip', 'wordlineDriverStrip', 'rowDecoder'];
+
+/** Key to the block colours, drawn over the canvas corner. */
+export function Legend() {
+  return (
+    <ul className="legend" aria-label="Legend">
+      {ORDER.map((type) => (
+        <li key={type}>
+          <span
+            className="swatch"
+            style={{ background: BLOCK_STYLE[type].fill, borderColor: BLOCK_STYLE[type].stroke }}
+          />
+          {type === 'rowDecoder' ? 'decoder' : BLOCK_TYPE_LABEL[type]}
+        </li>
+      ))}
+      <li>
+        <span
+          className="swatch"
+          style={{ background: 'transparent', borderColor: ERROR_STROKE, borderWidth: 2 }}
+        />
+        failing check
+      </li>
+    </ul>
+  );
+}

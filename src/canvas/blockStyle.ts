@@ -1,0 +1,17 @@
+import type { BlockType } from '../model/block';
+
+/** Matloom's own block palette: fill and outline per block type. */
+export const BLOCK_STYLE: Record<
+  BlockType,
+  { fill: string; selectedFill: string; stroke: string; text: string }
+> = {
+  mat: { fill: '#cfe7df', selectedFill: '#b4d3f2', stroke: '#2f6f5e', text: '#173b32' },
+  senseAmpStrip: { fill: '#f4d9a6', selectedFill: '#e9c98a', stroke: '#a8742a', text: '#5a3c10' },
+  wordlineDriverStrip: { fill: '#ddd0ee', selectedFill: '#c9b5e6', stroke: '#6d4f99', text: '#392653' },
+  rowDecoder: { fill: '#d5dbe3', selectedFill: '#bcc8d8', stroke: '#4f5d70', text: '#27303c' },
+  columnDecoder: { fill: '#d5dbe3', selectedFill: '#bcc8d8', stroke: '#4f5d70', text: '#27303c' },
+};
+
+export const SELECTION_STROKE = '#1d5fd1';
+export const ERROR_STROKE = '#c62828';
+export const CANVAS_BACKGROUND = '#f7f6f2';
