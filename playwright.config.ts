@@ -1,5 +1,8 @@
 import { defineConfig } from '@playwright/test';
 
+// E2E_PORT lets two checkouts run their browser tests side by side.
+const port = Number(process.env.E2E_PORT ?? 4173);
+
 export default defineConfig({
   testDir: 'e2e',
   workers: 1,
@@ -7,7 +10,7 @@ export default defineConfig({
   forbidOnly: !!process.env.CI,
   reporter: [['list'], ['json', { outputFile: 'reports/e2e.json' }]],
   use: {
-    baseURL: 'http://127.0.0.1:4173',
+    baseURL: `http://127.0.0.1:${port}`,
     browserName: 'chromium',
     headless: true,
     acceptDownloads: true,
@@ -27,8 +30,8 @@ export default defineConfig({
     },
   },
   webServer: {
-    command: 'npx vite preview --host 127.0.0.1 --port 4173 --strictPort',
-    url: 'http://127.0.0.1:4173',
+    command: `npx vite preview --host 127.0.0.1 --port ${port} --strictPort`,
+    url: `http://127.0.0.1:${port}`,
     reuseExistingServer: !process.env.CI,
     timeout: 60_000,
   },
