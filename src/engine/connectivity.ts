@@ -15,6 +15,18 @@ export interface MatConnections {
   readonly unsensedBitlines: number;
   /** Word lines whose position no driver covers at either end. */
   readonly undrivenWordlines: number;
+  /** Sense-amplifier strips abutting each bit-line end, with the stretch of the edge they cover. */
+  readonly senseAmpContacts: readonly SenseAmpContact[];
+  /** Bit-line ends (0, 1 or 2) that have a sense-amplifier strip. */
+  readonly senseAmpEnds: number;
+}
+
+/** A sense-amplifier strip touching one bit-line end of a mat. */
+export interface SenseAmpContact {
+  readonly side: Side;
+  readonly stripIndex: number;
+  /** Covered stretch, measured along the mat edge from its start (m). */
+  readonly stretch: Interval;
 }
 
 /** Strips that can sense bit lines. */
@@ -43,7 +55,7 @@ export function matConnections(
   const { bitlineEnds, wordlineEnds } = lineEndSides(mat);
   const senseAmpStripIds: string[] = [];
   const wordlineDriverIds: string[] = [];
-  const sensedStretches: Interval[] = [];
+  const senseAmpContacts: SenseAmpContact[] = [];
   const drivenStretches: Interval[] = [];
   for (const i of index.near(mat.rect, ABUTMENT_TOLERANCE)) {
     const other = placed[i];
@@ -53,7 +65,7 @@ export function matConnections(
       for (const side of bitlineEnds) {
         const stretch = abutmentOnSide(mat.rect, other.rect, side);
         if (stretch) {
-          sensedStretches.push(stretch);
+          senseAmpContacts.push({ side, stripIndex: i, stretch });
           senseAmpStripIds.push(other.block.id);
         }
       }
@@ -69,12 +81,18 @@ export function matConnections(
     }
   }
   const g = mat.geometry;
-  const unsensedGaps = uncoveredParts(sensedStretches, g.wordlineLength, ABUTMENT_TOLERANCE);
+  const unsensedGaps = uncoveredParts(
+    senseAmpContacts.map((c) => c.stretch),
+    g.wordlineLength,
+    ABUTMENT_TOLERANCE,
+  );
   const undrivenGaps = uncoveredParts(drivenStretches, g.bitlineLength, ABUTMENT_TOLERANCE);
   return {
     senseAmpStripIds,
     wordlineDriverIds,
     unsensedBitlines: linesInGaps(unsensedGaps, g.bitlinePitch, g.bitlineCount),
     undrivenWordlines: linesInGaps(undrivenGaps, g.wordlinePitch, g.wordlineCount),
+    senseAmpContacts,
+    senseAmpEnds: new Set(senseAmpContacts.map((c) => c.side)).size,
   };
 }

@@ -1,73 +1,65 @@
-import { isPlacedMat, placeBlocks, type PlacedBlock, type PlacedMat } from '../geometry/placedBlocks';
-import { buildSpatialIndex, type SpatialIndex } from '../geometry/spatialIndex';
+import { isPlacedMat, placeBlocks, type PlacedMat } from '../geometry/placedBlocks';
+import { buildSpatialIndex } from '../geometry/spatialIndex';
 import type { Design } from '../model/design';
-import type { ProcessProfile } from '../model/process';
-import { bitlineCapacitance } from './bitline';
 import { collectFindings } from './checks';
 import { matConnections } from './connectivity';
+import { matPhysics, senseAmpsOfMat, type DesignContext } from './matPhysics';
+import { offsetSigmaMultiplier } from './offset';
+import { unpartneredBitlines } from './openBitline';
 import { findOverlaps } from './overlaps';
 import type { MatReport, Report } from './report';
-import { chargeTransferRatio, readSignals } from './sensing';
-import { storedHighLevel, type StoredHighLevel } from './storedLevel';
+import { leakageAtTemperature } from './retention';
+import { storedHighLevel } from './storedLevel';
 import { computeTotals } from './totals';
-
-/** Figures of one placed mat, given its neighbours through the spatial index. */
-export function evaluateMat(
-  mat: PlacedMat,
-  placed: readonly PlacedBlock[],
-  index: SpatialIndex,
-  process: ProcessProfile,
-  storedHigh: StoredHighLevel,
-): MatReport {
-  const g = mat.geometry;
-  const cbl = bitlineCapacitance(process, mat.block.cellsPerBitline, g.bitlineLength);
-  const cs = mat.cell.storageCapacitance;
-  const ctr = chargeTransferRatio(cs, cbl.total);
-  const signals = readSignals(storedHigh.level, process.prechargeVoltage, ctr);
-  const connections = matConnections(mat, placed, index);
-  return {
-    matId: mat.block.id,
-    name: mat.block.name,
-    cellId: mat.cell.id,
-    cellsPerBitline: mat.block.cellsPerBitline,
-    cellsPerWordline: mat.block.cellsPerWordline,
-    bitlineCount: g.bitlineCount,
-    wordlineCount: g.wordlineCount,
-    bits: g.bits,
-    area: g.width * g.height,
-    cellArea: g.bits * g.cellArea,
-    bitlineLength: g.bitlineLength,
-    wordlineLength: g.wordlineLength,
-    storageCapacitance: cs,
-    bitlineCapacitance: cbl,
-    chargeTransferRatio: ctr,
-    ...signals,
-    ...connections,
-  };
-}
 
 /**
  * Evaluates a validated design: lays out its blocks, finds which strips serve which mat edges, and
- * computes each mat's bit-line capacitance, charge-transfer ratio and read signals, the area totals and
- * the checks.
+ * computes every mat's capacitance, read signals, offset and noise budget, margin, retention, delays and
+ * energy, then the area and refresh totals and the checks.
  *
- * @param design a design that passed io/restore (SI units: metres, farads, volts).
+ * @param design a design that passed io/restore (SI units: metres, farads, volts, seconds, kelvin).
  * @returns a {@link Report} whose numbers are all in SI units; mats appear in the design's block order.
  */
 export function evaluate(design: Design): Report {
+  const { process, operating } = design;
   const placed = placeBlocks(design);
   const index = buildSpatialIndex(placed.map((p) => p.rect));
-  const storedHigh = storedHighLevel(design.process);
-  const mats: MatReport[] = [];
-  for (const p of placed) {
-    if (isPlacedMat(p)) mats.push(evaluateMat(p, placed, index, design.process, storedHigh));
-  }
+  const mats = placed.filter(isPlacedMat);
+
+  // The offset budget depends on how many sense amplifiers share the failure allowance.
+  let senseAmpCount = 0;
+  for (const m of mats) senseAmpCount += senseAmpsOfMat(m);
+  const ctx: DesignContext = {
+    process,
+    operating,
+    storedHigh: storedHighLevel(process),
+    sigmaMultiplier: offsetSigmaMultiplier(senseAmpCount, operating.allowedSenseFailures),
+    leakage: leakageAtTemperature(
+      process.cellLeakageCurrent,
+      process.leakageReferenceTemperature,
+      process.leakageActivationEnergy,
+      operating.temperature,
+    ),
+  };
+
+  const matReports: MatReport[] = mats.map((mat: PlacedMat) => {
+    const connections = matConnections(mat, placed, index);
+    const lost = unpartneredBitlines(
+      mat,
+      connections.senseAmpContacts,
+      connections.senseAmpEnds,
+      placed,
+      index,
+    );
+    return matPhysics(mat, connections, lost, ctx);
+  });
   const overlaps = findOverlaps(placed, index);
+  const totals = computeTotals(placed, mats, matReports, design, ctx.sigmaMultiplier, senseAmpCount);
   return {
-    mats,
-    totals: computeTotals(placed, mats, design.process.featureSize),
-    storedHigh,
-    findings: collectFindings(mats, overlaps, storedHigh, design.process.arrayVoltage),
+    mats: matReports,
+    totals,
+    storedHigh: ctx.storedHigh,
+    findings: collectFindings(matReports, overlaps, ctx.storedHigh, design),
   };
 }
 

@@ -1,4 +1,4 @@
-import { crossingOccupancy, type CellDefinition } from '../model/cell';
+import { cellPitches, crossingOccupancy, type CellDefinition } from '../model/cell';
 import type { Mat } from '../model/block';
 import type { Rect } from './rect';
 
@@ -26,8 +26,7 @@ export interface MatGeometry {
 
 export function matGeometry(mat: Mat, cell: CellDefinition, featureSize: number): MatGeometry {
   const occupancy = crossingOccupancy(cell.bitlineArchitecture);
-  const bitlinePitch = cell.bitlinePitchInF * featureSize;
-  const wordlinePitch = cell.wordlinePitchInF * featureSize;
+  const { bitlinePitch, wordlinePitch } = cellPitches(cell, featureSize);
   const bitlineCount = Math.ceil(mat.cellsPerWordline / occupancy);
   const wordlineCount = Math.ceil(mat.cellsPerBitline / occupancy);
   const bitlineLength = wordlineCount * wordlinePitch;

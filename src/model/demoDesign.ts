@@ -1,5 +1,5 @@
 import { gridFloorplan } from '../geometry/gridFloorplan';
-import { BUILTIN_CELLS, DEMO_PROCESS, FOLDED_8F2_CELL } from './builtins';
+import { BUILTIN_CELLS, DEFAULT_OPERATING, DEMO_PROCESS, FOLDED_8F2_CELL } from './builtins';
 import { DESIGN_FORMAT, DESIGN_VERSION, type Design } from './design';
 
 /** Name of the demo design file in public/, served by the app and read by the CLI example. */
@@ -17,6 +17,7 @@ export function demoDesign(): Design {
     name: 'Wren bank section (invented demo)',
     lengthUnit: 'm',
     process: { ...DEMO_PROCESS },
+    operating: { ...DEFAULT_OPERATING },
     cells: BUILTIN_CELLS.map((c) => ({ ...c })),
     blocks: gridFloorplan({
       cell: FOLDED_8F2_CELL,

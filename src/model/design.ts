@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { blockSchema } from './block';
 import { cellDefinitionSchema } from './cell';
+import { operatingConditionsSchema } from './operating';
 import { processProfileSchema } from './process';
 
 /** The name every Matloom design file carries, so that a stray JSON file is recognised as not ours. */
@@ -18,6 +19,7 @@ export const designSchema = z
     /** Geometry is stored in metres; stated so that a reader of the file never guesses. */
     lengthUnit: z.literal('m'),
     process: processProfileSchema,
+    operating: operatingConditionsSchema,
     cells: z.array(cellDefinitionSchema).min(1).max(100),
     blocks: z.array(blockSchema).max(MAX_BLOCKS),
   })

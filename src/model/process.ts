@@ -1,6 +1,10 @@
 import { z } from 'zod';
 import { finite, nonNegative, positive } from './schemaParts';
 
+/** Linear stacking adds offset and noise (worst case); 'rss' takes the root sum of squares (independent). */
+export const OFFSET_STACKINGS = ['linear', 'rss'] as const;
+export type OffsetStacking = (typeof OFFSET_STACKINGS)[number];
+
 /**
  * A process profile: the technology numbers the engine needs, all in SI units.
  * Per-cell parasitics are the share of one cell along its bit line or word line.
@@ -42,10 +46,36 @@ export const processProfileSchema = z
     wordlineResistancePerLength: nonNegative('word-line resistance per length', 1e15),
     /** Sense-amplifier input capacitance added to each bit line (F). */
     senseAmpInputCapacitance: nonNegative('sense-amplifier input capacitance', 1e-12),
+    /** Capacitance the sense-amplifier latch switches rail to rail per sense (F). */
+    senseAmpSwitchedCapacitance: nonNegative('sense-amplifier switched capacitance', 1e-12),
+    /** Pelgrom matching coefficient A_VT of the sense-amplifier pair (V·m); 2.5 mV·µm = 2.5e-9 V·m. */
+    senseAmpMatchingCoefficient: nonNegative('sense-amplifier matching coefficient A_VT', 1e-6),
+    /** Gate width W of one sense-amplifier input transistor (m). */
+    senseAmpTransistorWidth: positive('sense-amplifier transistor width', 1e-9, 1e-4),
+    /** Gate length L of one sense-amplifier input transistor (m). */
+    senseAmpTransistorLength: positive('sense-amplifier transistor length', 1e-9, 1e-4),
+    /** Layout width one sense amplifier needs along its strip (m); checked against the bit-line pitch budget. */
+    senseAmpWidth: positive('sense-amplifier width', 1e-9, 1e-4),
+    /** How offset and noise add up: linearly (worst case) or as a root sum of squares. */
+    offsetStacking: z.enum(OFFSET_STACKINGS),
+    /** Share of bit-line coupling noise a folded pair does not reject as common mode (ratio). */
+    foldedNoiseFactor: nonNegative('folded-bit-line noise factor', 1),
+    /** Share of bit-line coupling noise an open pair does not reject (ratio); larger than folded. */
+    openNoiseFactor: nonNegative('open-bit-line noise factor', 1),
+    /** Output resistance of a sub-word-line driver (Ω). */
+    wordlineDriverResistance: nonNegative('word-line driver resistance', 1e9),
+    /** On-resistance of the access (write) transistor (Ω). */
+    accessTransistorResistance: nonNegative('access transistor resistance', 1e12),
+    /** Time a gain-cell read bit line is allowed to develop before sensing (s). */
+    gainCellSenseTime: positive('gain-cell sense time', 1e-12, 1e-3),
+    /** Row cycle time tRC: one activate-precharge (s). */
+    rowCycleTime: positive('row cycle time', 1e-10, 1e-3),
     /** Storage-node leakage current of one cell at the reference temperature (A). */
     cellLeakageCurrent: nonNegative('cell leakage current', 1e-6),
     /** Temperature at which the leakage current is given (K). */
     leakageReferenceTemperature: positive('leakage reference temperature', 1, 1000),
+    /** Arrhenius activation energy of the leakage (J); 0.79 eV ≈ 1.27e-19 J halves retention per 10 °C near 90 °C. */
+    leakageActivationEnergy: nonNegative('leakage activation energy', 1e-18),
   })
   .superRefine((p, ctx) => {
     if (p.prechargeVoltage > p.arrayVoltage) {

@@ -1,5 +1,12 @@
 import { useState } from 'react';
-import { explainMatFigure, explainTotal, findMatReport, MAT_FIGURES, TOTAL_FIGURES } from '../engine';
+import {
+  explainMatFigure,
+  explainTotal,
+  findMatReport,
+  MAT_FIGURE_GROUPS,
+  TOTAL_FIGURE_GROUPS,
+} from '../engine';
+import { CELL_KIND_LABEL } from '../model/cell';
 import { useAppStore } from '../store/useAppStore';
 import { FigureRow } from './FigureRow';
 
@@ -17,32 +24,47 @@ export function MetricsPanel() {
   return (
     <section className="panel" aria-labelledby="metrics-heading">
       <h2 id="metrics-heading">Figures</h2>
-      <h3>{mat ? `Selected: ${mat.name || mat.matId}` : 'Selected mat'}</h3>
       {mat ? (
         <div className="figures" data-testid="mat-figures">
-          {MAT_FIGURES.map((key) => (
-            <FigureRow
-              key={key}
-              testId={`metric-${key}`}
-              explanation={explainMatFigure(key, mat, design, report)}
-              open={openKey === `mat.${key}`}
-              onToggle={() => toggle(`mat.${key}`)}
-            />
+          <h3 className="figures-title">
+            Selected: {mat.name || mat.matId} · {CELL_KIND_LABEL[mat.cellKind]} {mat.architecture}
+          </h3>
+          {MAT_FIGURE_GROUPS.map((group) => (
+            <div key={group.title} className="figure-group">
+              <h4>{group.title}</h4>
+              {group.keys.map((key) => {
+                const explanation = explainMatFigure(key, mat, design, report);
+                return explanation ? (
+                  <FigureRow
+                    key={key}
+                    testId={`metric-${key}`}
+                    explanation={explanation}
+                    open={openKey === `mat.${key}`}
+                    onToggle={() => toggle(`mat.${key}`)}
+                  />
+                ) : null;
+              })}
+            </div>
           ))}
         </div>
       ) : (
         <p className="hint">Click a mat on the floorplan to see its figures.</p>
       )}
-      <h3>Whole floorplan</h3>
       <div className="figures" data-testid="total-figures">
-        {TOTAL_FIGURES.map((key) => (
-          <FigureRow
-            key={key}
-            testId={`total-${key}`}
-            explanation={explainTotal(key, report.totals, design)}
-            open={openKey === `total.${key}`}
-            onToggle={() => toggle(`total.${key}`)}
-          />
+        <h3 className="figures-title">Whole floorplan</h3>
+        {TOTAL_FIGURE_GROUPS.map((group) => (
+          <div key={group.title} className="figure-group">
+            <h4>{group.title}</h4>
+            {group.keys.map((key) => (
+              <FigureRow
+                key={key}
+                testId={`total-${key}`}
+                explanation={explainTotal(key, report, design)}
+                open={openKey === `total.${key}`}
+                onToggle={() => toggle(`total.${key}`)}
+              />
+            ))}
+          </div>
         ))}
       </div>
     </section>

@@ -56,9 +56,10 @@ describe('evaluate: one mat', () => {
       p.senseAmpInputCapacitance;
     expect(m?.bitlineCapacitance.total).toBeCloseTo(expected, 25);
     const ctr = 11e-15 / (11e-15 + expected);
-    expect(m?.chargeTransferRatio).toBeCloseTo(ctr, 12);
-    expect(m?.signalLow).toBeCloseTo(0.55 * ctr, 12);
-    expect(m?.signalHigh).toBeCloseTo((1.1 - 0.55) * ctr, 12);
+    if (m?.read.kind !== 'chargeSharing') throw new Error('1T1C mats read by charge sharing');
+    expect(m.read.chargeTransferRatio).toBeCloseTo(ctr, 12);
+    expect(m.read.signalLow).toBeCloseTo(0.55 * ctr, 12);
+    expect(m.read.signalHigh).toBeCloseTo((1.1 - 0.55) * ctr, 12);
   });
 
   it('a folded 8F² mat alone has 8 F² per bit and 100 % efficiency; open 6F² has 6 F²', () => {
@@ -102,9 +103,15 @@ describe('evaluate: one mat', () => {
 describe('evaluate: adjacency checks', () => {
   const kinds = (blocks: Block[]) => evaluate(designWith(blocks)).findings.map((f) => f.kind);
 
-  it('a mat with a sense-amp strip on one bit-line end and a driver on one word-line end is clean', () => {
-    expect(kinds([M, saTop, swdLeft])).toEqual([]);
-    expect(kinds([M, saBottom, swdLeft])).toEqual([]);
+  it('a mat with sense-amp strips on both bit-line ends and a driver on one word-line end is clean', () => {
+    expect(kinds([M, saTop, saBottom, swdLeft])).toEqual([]);
+  });
+
+  it('with one strip the sense amplifiers cannot interleave and overflow a folded 2-pitch budget', () => {
+    // 0.1 µm amplifier against 2 × 36 nm; both ends give 4 × 36 nm = 144 nm (Keeth & Baker, from memory).
+    expect(kinds([M, saTop, swdLeft])).toEqual(['senseAmpPitch']);
+    expect(kinds([M, saBottom, swdLeft])).toEqual(['senseAmpPitch']);
+    expect(findMatReport(evaluate(designWith([M, saTop, swdLeft])), 'm1')?.unsensedBitlines).toBe(0);
   });
 
   it('with no sense-amp strip every bit line is unsensed', () => {
@@ -136,8 +143,9 @@ describe('evaluate: adjacency checks', () => {
   it('horizontal bit lines are sensed on the left and right edges', () => {
     const h = mat({ x: 10e-6, y: 10e-6, bitlineAxis: 'horizontal' });
     const saLeft = strip('sa-left', 'senseAmpStrip', 4e-6, 10e-6, 6e-6, SIDE);
+    const saRight = strip('sa-right', 'senseAmpStrip', 10e-6 + SIDE, 10e-6, 6e-6, SIDE);
     const swdTop = strip('swd-top', 'wordlineDriverStrip', 10e-6, 7e-6, SIDE, 3e-6);
-    expect(kinds([h, saLeft, swdTop])).toEqual([]);
+    expect(kinds([h, saLeft, saRight, swdTop])).toEqual([]);
     expect(kinds([h, saTop, swdLeft])).toEqual(['unsensedBitlines', 'undrivenWordlines']);
   });
 
@@ -153,7 +161,7 @@ describe('evaluate: adjacency checks', () => {
   });
 
   it('a low word-line boost gives a warning naming the VPP needed', () => {
-    const r = evaluate(designWith([M, saTop, swdLeft], processWith({ wordlineHighVoltage: 1.5 })));
+    const r = evaluate(designWith([M, saTop, saBottom, swdLeft], processWith({ wordlineHighVoltage: 1.5 })));
     const w = r.findings.find((x) => x.kind === 'storedHighLimited');
     expect(w?.severity).toBe('warning');
     expect(w?.message).toMatch(/VPP ≥ 2\.064 V/);

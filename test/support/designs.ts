@@ -1,4 +1,4 @@
-import { BUILTIN_CELLS, DEMO_PROCESS, FOLDED_8F2_CELL } from '../../src/model/builtins';
+import { BUILTIN_CELLS, DEFAULT_OPERATING, DEMO_PROCESS, FOLDED_8F2_CELL } from '../../src/model/builtins';
 import type { Block, Mat } from '../../src/model/block';
 import { DESIGN_FORMAT, DESIGN_VERSION, type Design } from '../../src/model/design';
 import type { ProcessProfile } from '../../src/model/process';
@@ -16,6 +16,7 @@ export function designWith(blocks: Block[], process: ProcessProfile = DEMO_PROCE
     name: 'test design',
     lengthUnit: 'm',
     process,
+    operating: { ...DEFAULT_OPERATING },
     cells: BUILTIN_CELLS.map((c) => ({ ...c })),
     blocks,
   };

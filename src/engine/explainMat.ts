@@ -1,0 +1,437 @@
+import type { Design } from '../model/design';
+import { input, SOURCES, type Explanation, type ExplanationInput } from './explanation';
+import type { MatReport, Report } from './report';
+
+/** Per-mat figures that can explain themselves. Some apply to one read style only. */
+export const MAT_FIGURES = [
+  'bitlineCapacitance',
+  'chargeTransferRatio',
+  'signalHigh',
+  'signalLow',
+  'readCurrent',
+  'dropHigh',
+  'dropLow',
+  'senseSignal',
+  'offsetBudget',
+  'noiseAllowance',
+  'senseMargin',
+  'senseMarginAtRefresh',
+  'retentionTime',
+  'wordlineDelay',
+  'bitlineDelay',
+  'activationEnergy',
+  'energyPerBit',
+  'senseAmpPitchBudget',
+  'bits',
+  'area',
+] as const;
+export type MatFigureKey = (typeof MAT_FIGURES)[number];
+
+const CHARGE_SHARING_ONLY: ReadonlySet<MatFigureKey> = new Set([
+  'chargeTransferRatio',
+  'signalHigh',
+  'signalLow',
+]);
+const GAIN_ONLY: ReadonlySet<MatFigureKey> = new Set(['readCurrent', 'dropHigh', 'dropLow']);
+
+/** Panel groups of mat figures, in display order. */
+export const MAT_FIGURE_GROUPS: readonly {
+  readonly title: string;
+  readonly keys: readonly MatFigureKey[];
+}[] = [
+  {
+    title: 'Sensing',
+    keys: [
+      'bitlineCapacitance',
+      'chargeTransferRatio',
+      'signalHigh',
+      'signalLow',
+      'readCurrent',
+      'dropHigh',
+      'dropLow',
+      'senseSignal',
+      'offsetBudget',
+      'noiseAllowance',
+      'senseMargin',
+      'senseMarginAtRefresh',
+    ],
+  },
+  { title: 'Retention and speed', keys: ['retentionTime', 'wordlineDelay', 'bitlineDelay'] },
+  { title: 'Energy', keys: ['activationEnergy', 'energyPerBit'] },
+  { title: 'Area', keys: ['bits', 'area', 'senseAmpPitchBudget'] },
+];
+
+/** Whether a figure applies to this mat's read style. */
+export function matFigureApplies(key: MatFigureKey, mat: MatReport): boolean {
+  if (mat.read.kind === 'chargeSharing') return !GAIN_ONLY.has(key);
+  return !CHARGE_SHARING_ONLY.has(key);
+}
+
+/** Explains one figure of one mat; undefined when the figure does not apply to its read style. */
+export function explainMatFigure(
+  key: MatFigureKey,
+  mat: MatReport,
+  design: Design,
+  report: Report,
+): Explanation | undefined {
+  if (!matFigureApplies(key, mat)) return undefined;
+  const p = design.process;
+  const o = design.operating;
+  const read = mat.read;
+  const cbl = mat.bitlineCapacitance;
+  const v1 = input('V1', 'stored-1 level', report.storedHigh.level, 'voltage');
+  const required = input('V_req', 'offset and noise stacked', mat.requiredSignal, 'voltage');
+  const base = { inputs: [] as ExplanationInput[] };
+  switch (key) {
+    case 'bitlineCapacitance':
+      return {
+        title: mat.read.kind === 'gainRead' ? 'Read-bit-line capacitance' : 'Bit-line capacitance',
+        symbol: 'Cbl',
+        formula: 'Cbl = N·(Cj + Cbw + Cbb) + c_wire·L_bl + C_sa',
+        inputs: [
+          input('N', 'cells per bit line', mat.cellsPerBitline, 'count'),
+          input('N·Cj', 'junction/contact', cbl.junction, 'capacitance'),
+          input('N·Cbw', 'coupling to word lines', cbl.wordlineCoupling, 'capacitance'),
+          input('N·Cbb', 'coupling to bit lines', cbl.bitlineCoupling, 'capacitance'),
+          input(
+            'c·L',
+            `wire (L_bl = ${(mat.bitlineLength * 1e6).toPrecision(4)} µm)`,
+            cbl.wire,
+            'capacitance',
+          ),
+          input('C_sa', 'sense-amplifier input', cbl.senseAmp, 'capacitance'),
+        ],
+        value: cbl.total,
+        quantity: 'capacitance',
+        method: 'Sum of parallel parasitic capacitances (lumped), shown as a breakdown.',
+        source: SOURCES.keethBaker,
+      };
+    case 'chargeTransferRatio':
+      if (read.kind !== 'chargeSharing') return undefined;
+      return {
+        title: 'Charge-transfer ratio',
+        symbol: 'CTR',
+        formula: 'CTR = Cs / (Cs + Cbl)',
+        inputs: [
+          input('Cs', 'storage capacitance', mat.storageCapacitance, 'capacitance'),
+          input('Cbl', 'bit-line capacitance', cbl.total, 'capacitance'),
+        ],
+        value: read.chargeTransferRatio,
+        quantity: 'ratio',
+        method: 'Charge sharing between the cell and the precharged bit line.',
+        source: SOURCES.westeHarris,
+      };
+    case 'signalHigh':
+      if (read.kind !== 'chargeSharing') return undefined;
+      return {
+        title: 'Signal reading a stored 1',
+        symbol: 'ΔV1',
+        formula: 'ΔV1 = (V1 − Vpre) · CTR',
+        inputs: [
+          v1,
+          input('Vpre', 'precharge level', p.prechargeVoltage, 'voltage'),
+          input('CTR', 'charge-transfer ratio', read.chargeTransferRatio, 'ratio'),
+        ],
+        value: read.signalHigh,
+        quantity: 'voltage',
+        method:
+          'Charge conservation on Cs + Cbl; V1 = min(VDD, VPP − Vt(V1)) with body effect, solved by bisection.',
+        source: SOURCES.westeHarris,
+      };
+    case 'signalLow':
+      if (read.kind !== 'chargeSharing') return undefined;
+      return {
+        title: 'Signal reading a stored 0',
+        symbol: 'ΔV0',
+        formula: 'ΔV0 = (Vpre − 0) · CTR',
+        inputs: [
+          input('Vpre', 'precharge level', p.prechargeVoltage, 'voltage'),
+          input('CTR', 'charge-transfer ratio', read.chargeTransferRatio, 'ratio'),
+        ],
+        value: read.signalLow,
+        quantity: 'voltage',
+        method: 'Charge conservation on Cs + Cbl with the cell at 0 V.',
+        source: SOURCES.westeHarris,
+      };
+    case 'readCurrent':
+      if (read.kind !== 'gainRead') return undefined;
+      return {
+        title: 'Read current (stored 1)',
+        symbol: 'I_read',
+        formula: 'I_read = (β/2)·(V1 − Vt_read)²',
+        inputs: [v1],
+        value: read.readCurrent,
+        quantity: 'current',
+        method: 'Square-law saturation current of the storage transistor gated by the stored level.',
+        source: 'Shichman–Hodges square law (from memory)',
+      };
+    case 'dropHigh':
+      if (read.kind !== 'gainRead') return undefined;
+      return {
+        title: 'Read-bit-line drop, stored 1',
+        symbol: 'ΔV1',
+        formula: 'ΔV1 = min(VDD, I_read · t_sense / C_RBL)',
+        inputs: [
+          input('I_read', 'read current', read.readCurrent, 'current'),
+          input('t_sense', 'sense time', p.gainCellSenseTime, 'time'),
+          input('C_RBL', 'read-bit-line capacitance', cbl.total, 'capacitance'),
+        ],
+        value: read.dropHigh,
+        quantity: 'voltage',
+        method: 'Non-destructive, inverting read: a stored 1 discharges the read bit line precharged to VDD.',
+        source: SOURCES.gainCells,
+      };
+    case 'dropLow':
+      if (read.kind !== 'gainRead') return undefined;
+      return {
+        title: 'Read-bit-line drop, stored 0',
+        symbol: 'ΔV0',
+        formula: 'ΔV0 = min(VDD, (I_off + (N − 1)·I_unsel) · t_sense / C_RBL)',
+        inputs: [
+          input('N', 'cells per bit line', mat.cellsPerBitline, 'count'),
+          input('t_sense', 'sense time', p.gainCellSenseTime, 'time'),
+          input('C_RBL', 'read-bit-line capacitance', cbl.total, 'capacitance'),
+        ],
+        value: read.dropLow,
+        quantity: 'voltage',
+        method: 'Worst case: every unselected cell on the line holds a 1 and leaks onto it.',
+        source: SOURCES.gainCells,
+      };
+    case 'senseSignal':
+      return read.kind === 'chargeSharing'
+        ? {
+            title: 'Sense signal',
+            symbol: 'ΔV',
+            formula: 'ΔV = min(ΔV1, ΔV0)',
+            inputs: [
+              input('ΔV1', 'signal for a stored 1', read.signalHigh, 'voltage'),
+              input('ΔV0', 'signal for a stored 0', read.signalLow, 'voltage'),
+            ],
+            value: mat.senseSignal,
+            quantity: 'voltage',
+            method: 'The sense amplifier must resolve the weaker of the two data states.',
+            source: SOURCES.keethBaker,
+          }
+        : {
+            title: 'Sense signal',
+            symbol: 'ΔV',
+            formula: 'ΔV = (ΔV1 − ΔV0) / 2',
+            inputs: [
+              input('ΔV1', 'drop for a stored 1', read.dropHigh, 'voltage'),
+              input('ΔV0', 'drop for a stored 0', read.dropLow, 'voltage'),
+            ],
+            value: mat.senseSignal,
+            quantity: 'voltage',
+            method: 'Single-ended read against a reference set midway between the two drops.',
+            source: SOURCES.gainCells,
+          };
+    case 'offsetBudget':
+      return {
+        title: 'Sense-amplifier offset budget',
+        symbol: 'k·σ',
+        formula: 'σ = A_VT / √(W·L);  k = Φ⁻¹(1 − failures / sense amps)',
+        inputs: [
+          input('A_VT', 'matching coefficient (V·m)', p.senseAmpMatchingCoefficient, 'ratio'),
+          input('W', 'transistor width', p.senseAmpTransistorWidth, 'length'),
+          input('L', 'transistor length', p.senseAmpTransistorLength, 'length'),
+          input('σ', 'offset standard deviation', mat.offsetSigma, 'voltage'),
+          input('k', 'σ multiplier', report.totals.offsetSigmaMultiplier, 'ratio'),
+          input('n_sa', 'sense amplifiers in the design', report.totals.senseAmpCount, 'count'),
+        ],
+        value: mat.offsetBudget,
+        quantity: 'voltage',
+        method: `Pelgrom mismatch; k so that on average ${o.allowedSenseFailures} amplifier(s) fail (one-sided normal tail).`,
+        source: `${SOURCES.pelgrom}; ${SOURCES.acklam}`,
+      };
+    case 'noiseAllowance':
+      return {
+        title: 'Coupling-noise allowance',
+        symbol: 'V_noise',
+        formula: 'V_noise = κ · (Cbb / Cbl) · VDD / 2',
+        inputs: [
+          input(
+            'κ',
+            `unrejected share (${mat.architecture === 'folded' && mat.read.kind === 'chargeSharing' ? 'folded' : 'open'})`,
+            mat.architecture === 'folded' && mat.read.kind === 'chargeSharing'
+              ? p.foldedNoiseFactor
+              : p.openNoiseFactor,
+            'ratio',
+          ),
+          input('Cbb', 'coupling to bit lines', cbl.bitlineCoupling, 'capacitance'),
+          input('Cbl', 'bit-line capacitance', cbl.total, 'capacitance'),
+          input('VDD', 'array voltage', p.arrayVoltage, 'voltage'),
+        ],
+        value: mat.noiseAllowance,
+        quantity: 'voltage',
+        method:
+          'Neighbours swing by VDD/2 and couple through Cbb; folded pairs reject more as common mode than open ones.',
+        source: `capacitive divider (common practice); ${SOURCES.westeHarris}`,
+      };
+    case 'senseMargin':
+      return {
+        title: 'Net sense margin (fresh)',
+        symbol: 'M',
+        formula: `M = ΔV − V_req,  V_req = ${p.offsetStacking === 'linear' ? 'k·σ + V_noise' : '√((k·σ)² + V_noise²)'}`,
+        inputs: [input('ΔV', 'sense signal', mat.senseSignal, 'voltage'), required],
+        value: mat.senseMargin,
+        quantity: 'voltage',
+        method: `Offset and noise stacked ${p.offsetStacking === 'linear' ? 'linearly (worst case)' : 'as a root sum of squares'}.`,
+        source: 'H. Geib et al., IEEE JSSC, July 1992 (offset plus asymmetry stacking); common practice',
+      };
+    case 'senseMarginAtRefresh':
+      return {
+        title: 'Net sense margin at refresh',
+        symbol: 'M_ref',
+        formula: 'M_ref = ΔV(after droop I·tREFW/Cs) − V_req',
+        inputs: [
+          input('I', 'cell leakage at temperature', mat.leakage, 'current'),
+          input('tREFW', 'refresh window', o.refreshWindow, 'time'),
+          input('Cs', 'storage capacitance', mat.storageCapacitance, 'capacitance'),
+          input('ΔV′', 'signal after the window', mat.senseSignalAfterRefresh, 'voltage'),
+          required,
+        ],
+        value: mat.senseMarginAtRefresh,
+        quantity: 'voltage',
+        method: 'A stored 1 leaks for a whole refresh window at constant current before it is read.',
+        source: SOURCES.common,
+      };
+    case 'retentionTime':
+      return {
+        title: 'Retention time',
+        symbol: 't_ret',
+        formula: 't_ret = Cs · ΔV_allowed / I(T),  I(T) = I_ref·exp(−Ea/k·(1/T − 1/T_ref))',
+        inputs: [
+          input('Cs', 'storage capacitance', mat.storageCapacitance, 'capacitance'),
+          input('ΔV_allowed', 'droop until margin is zero', mat.allowedDroop, 'voltage'),
+          input('I_ref', 'leakage at reference', p.cellLeakageCurrent, 'current'),
+          input('T_ref', 'reference temperature', p.leakageReferenceTemperature, 'temperature'),
+          input('T', 'operating temperature', o.temperature, 'temperature'),
+          input('I(T)', 'leakage at temperature', mat.leakage, 'current'),
+        ],
+        value: mat.retentionTime,
+        quantity: 'time',
+        method: 'Constant-current leakage scaled with temperature by Arrhenius.',
+        source: SOURCES.arrhenius,
+      };
+    case 'wordlineDelay':
+      return {
+        title: 'Word-line delay (50 %)',
+        symbol: 't_wl',
+        formula: 't_wl = 0.69·R_drv·C_wl + 0.38·R_wl·C_wl',
+        inputs: [
+          input('R_drv', 'driver resistance', p.wordlineDriverResistance, 'resistance'),
+          input('R_wl', 'sub-word-line resistance', mat.wordlineResistance, 'resistance'),
+          input('C_wl', 'sub-word-line capacitance', mat.wordlineCapacitance, 'capacitance'),
+        ],
+        value: mat.wordlineDelay,
+        quantity: 'time',
+        method: 'Driver as lumped RC plus the line as distributed RC; 50 % point convention.',
+        source: SOURCES.rabaey,
+      };
+    case 'bitlineDelay':
+      return read.kind === 'chargeSharing'
+        ? {
+            title: 'Bit-line development (50 %)',
+            symbol: 't_bl',
+            formula: 't_bl = 0.69·R_acc·(Cs·Cbl/(Cs+Cbl)) + 0.38·R_bl·Cbl',
+            inputs: [
+              input('R_acc', 'access transistor', p.accessTransistorResistance, 'resistance'),
+              input('R_bl', 'bit-line resistance', mat.bitlineResistance, 'resistance'),
+              input('Cbl', 'bit-line capacitance', cbl.total, 'capacitance'),
+            ],
+            value: mat.bitlineDelay,
+            quantity: 'time',
+            method:
+              'Cell discharge through the access device plus distributed bit-line RC; 50 % point convention.',
+            source: SOURCES.rabaey,
+          }
+        : {
+            title: 'Read-bit-line sense time',
+            symbol: 't_sense',
+            formula: 't_sense (process input)',
+            inputs: [],
+            value: mat.bitlineDelay,
+            quantity: 'time',
+            method: 'The read bit line develops for a fixed time before sensing.',
+            source: SOURCES.gainCells,
+          };
+    case 'activationEnergy':
+      return {
+        title: 'Energy per activation',
+        symbol: 'E_act',
+        formula: 'E_act = E_bl + C_wl·V_wl² + M·C_sa·VDD²',
+        inputs: [
+          input(
+            'E_bl',
+            read.kind === 'chargeSharing' ? 'bit lines: M·Cbl·VDD²/2' : 'read bit lines: M·C·VDD·ΔV1',
+            mat.activationEnergy.bitlines,
+            'energy',
+          ),
+          input('E_wl', 'word line', mat.activationEnergy.wordline, 'energy'),
+          input('E_sa', 'sense-amplifier latches', mat.activationEnergy.senseAmps, 'energy'),
+          input('M', 'cells per word line', mat.cellsPerWordline, 'count'),
+        ],
+        value: mat.activationEnergy.total,
+        quantity: 'energy',
+        method: 'One word line of the mat activated; half-VDD precharge with equalisation.',
+        source: `${SOURCES.common}; C·V² charging energy, ${SOURCES.rabaey}`,
+      };
+    case 'energyPerBit':
+      return {
+        title: 'Activation energy per bit',
+        symbol: 'E_bit',
+        formula: 'E_bit = E_act / M',
+        inputs: [
+          input('E_act', 'energy per activation', mat.activationEnergy.total, 'energy'),
+          input('M', 'cells per word line', mat.cellsPerWordline, 'count'),
+        ],
+        value: mat.activationEnergy.perBit,
+        quantity: 'energy',
+        method: 'Activation energy spread over the cells the word line opens.',
+        source: SOURCES.common,
+      };
+    case 'senseAmpPitchBudget':
+      return {
+        title: 'Sense-amplifier pitch budget',
+        symbol: 'w_sa',
+        formula: 'w_sa = BL pitch × (folded pair ? 2 : 1) × (strips at both ends ? 2 : 1)',
+        inputs: [input('W_needed', 'width one amplifier needs', p.senseAmpWidth, 'length')],
+        value: mat.senseAmpPitchBudget,
+        quantity: 'length',
+        method: mat.senseAmpFits ? 'The amplifier fits its pitch.' : 'The amplifier does NOT fit its pitch.',
+        source: SOURCES.keethBaker,
+      };
+    case 'bits':
+      return {
+        title: 'Bits in the mat',
+        symbol: 'bits',
+        formula: 'bits = N · BL, BL = M / occupancy; usable = bits − lost open-edge bits',
+        inputs: [
+          input('N', 'cells per bit line', mat.cellsPerBitline, 'count'),
+          input('M', 'cells per word line', mat.cellsPerWordline, 'count'),
+          input('BL', 'bit lines', mat.bitlineCount, 'count'),
+          input('lost', 'bits without an open-bit-line partner', mat.lostBits, 'count'),
+        ],
+        value: mat.bits,
+        quantity: 'count',
+        method:
+          'Folded bit lines hold a cell at every other word-line crossing (occupancy ½); open at every one.',
+        source: `${SOURCES.westeHarris} (array styles); ${SOURCES.common} for the counting`,
+      };
+    case 'area':
+      return {
+        ...base,
+        title: 'Mat area',
+        symbol: 'A_mat',
+        formula: 'A_mat = L_wl · L_bl',
+        inputs: [
+          input('L_wl', 'word-line length', mat.wordlineLength, 'length'),
+          input('L_bl', 'bit-line length', mat.bitlineLength, 'length'),
+        ],
+        value: mat.area,
+        quantity: 'area',
+        method: 'Mat outline: bit lines × bit-line pitch by word lines × word-line pitch.',
+        source: SOURCES.common,
+      };
+  }
+}
