@@ -59,8 +59,10 @@ test('select a mat, change its cells per bit line, and see the engine’s figure
     formatQuantity(after.bitlineCapacitance.total, 'capacitance'),
   );
   await expect(app.metricValue('senseSignal')).toHaveText(formatQuantity(after.senseSignal, 'voltage'));
-  // The shorter mat still meets the strip above it, so all its bit lines stay sensed.
-  await expect(page.getByTestId('checks-clear')).toBeVisible();
+  // The shorter mat still meets the strip above it, so its bit lines stay sensed, but its sense
+  // amplifiers can no longer alternate between two strips and overflow their pitch.
+  await expect(page.getByTestId('findings')).toContainText('pitch budget');
+  await expect(page.getByTestId('findings')).not.toContainText('reach no sense-amplifier');
 
   // The figure explains itself.
   await page.getByTestId('metric-senseSignal').click();

@@ -1,7 +1,5 @@
 import { FloorplanCanvas } from '../canvas/FloorplanCanvas';
-import { ChecksPanel } from '../panels/ChecksPanel';
-import { MetricsPanel } from '../panels/MetricsPanel';
-import { PropertiesPanel } from '../panels/PropertiesPanel';
+import { Sidebar } from './Sidebar';
 import { Toolbar } from './Toolbar';
 
 export function App() {
@@ -10,11 +8,7 @@ export function App() {
       <Toolbar />
       <main className="workspace">
         <FloorplanCanvas />
-        <aside className="sidebar">
-          <PropertiesPanel />
-          <MetricsPanel />
-          <ChecksPanel />
-        </aside>
+        <Sidebar />
       </main>
       <footer className="caution" data-testid="caution">
         First-order estimates from textbook physics. Silicon decisions need extracted parasitics, foundry

@@ -231,7 +231,7 @@ export function explainMatFigure(
         symbol: 'k·σ',
         formula: 'σ = A_VT / √(W·L);  k = Φ⁻¹(1 − failures / sense amps)',
         inputs: [
-          input('A_VT', 'matching coefficient (V·m)', p.senseAmpMatchingCoefficient, 'ratio'),
+          input('A_VT', 'matching coefficient', p.senseAmpMatchingCoefficient, 'matchingCoefficient'),
           input('W', 'transistor width', p.senseAmpTransistorWidth, 'length'),
           input('L', 'transistor length', p.senseAmpTransistorLength, 'length'),
           input('σ', 'offset standard deviation', mat.offsetSigma, 'voltage'),

@@ -21,6 +21,12 @@ export const QUANTITIES = {
   power: { unit: 'W', preferredPrefix: null },
   temperature: { unit: 'K', preferredPrefix: null },
   sqrtVoltage: { unit: 'V^½', preferredPrefix: null },
+  /** Pelgrom A_VT, shown in the trade's mV·µm (1 mV·µm = 1e-9 V·m); a bare number is read as mV·µm. */
+  matchingCoefficient: { unit: 'V·m', preferredPrefix: null },
+  /** MOS gain factor β = µ·Cox·W/L. */
+  transconductance: { unit: 'A/V²', preferredPrefix: null },
+  /** Activation energy, shown in eV; a bare number is read as eV. */
+  activationEnergy: { unit: 'J', preferredPrefix: null },
   ratio: { unit: '', preferredPrefix: null },
   percent: { unit: '%', preferredPrefix: null },
   count: { unit: '', preferredPrefix: null },
@@ -49,6 +55,10 @@ const PREFIX_EXPONENT = new Map<string, number>([
 ]);
 
 const ZERO_CELSIUS_IN_KELVIN = 273.15;
+/** 1 mV·µm in V·m. */
+const MILLIVOLT_MICROMETRE = 1e-9;
+/** 1 eV in J (exact, SI 2019). */
+const ELECTRONVOLT = 1.602176634e-19;
 
 /** Significant digits used when formatting, unless a caller asks for more. */
 const DEFAULT_DIGITS = 4;
@@ -74,6 +84,13 @@ export function formatQuantity(value: number, quantity: Quantity, digits = DEFAU
       return `${trimNumber(value - ZERO_CELSIUS_IN_KELVIN, digits)} °C`;
     case 'area':
       return formatArea(value, digits);
+    case 'sqrtVoltage':
+      // A prefix would scale V^½ wrongly (1 mV^½ ≠ 1e-3 V^½), so this one stays unprefixed.
+      return `${trimNumber(value, digits)} V^½`;
+    case 'matchingCoefficient':
+      return `${trimNumber(value / MILLIVOLT_MICROMETRE, digits)} mV·µm`;
+    case 'activationEnergy':
+      return `${trimNumber(value / ELECTRONVOLT, digits)} eV`;
     default:
       return formatWithPrefix(value, unit, digits);
   }
@@ -127,6 +144,17 @@ export function parseQuantity(text: string, quantity: Quantity): ParseResult {
   if (!Number.isFinite(magnitude)) return { ok: false, error: `"${text}" is too large` };
 
   if (quantity === 'temperature') return parseTemperature(magnitude, rest, text);
+  if (quantity === 'matchingCoefficient') {
+    const unit = rest.replace(/[·*.]/g, '').replace('µ', 'u').replace('μ', 'u');
+    if (unit === '' || unit === 'mVum') return { ok: true, value: magnitude * MILLIVOLT_MICROMETRE };
+    if (unit === 'Vm') return { ok: true, value: magnitude };
+    return { ok: false, error: `"${text}": expected a matching coefficient such as "2.5 mV·µm"` };
+  }
+  if (quantity === 'activationEnergy') {
+    if (rest === '' || rest === 'eV') return { ok: true, value: magnitude * ELECTRONVOLT };
+    if (rest === 'J') return { ok: true, value: magnitude };
+    return { ok: false, error: `"${text}": expected an energy such as "0.79 eV"` };
+  }
   if (quantity === 'percent') {
     if (rest === '' || rest === '%') return { ok: true, value: magnitude / 100 };
     return { ok: false, error: `"${text}": expected a percentage such as "65 %"` };
@@ -138,6 +166,9 @@ export function parseQuantity(text: string, quantity: Quantity): ParseResult {
   const spelledUnit = unitAliases.find((u) => u !== '' && endsWithUnit(rest, u));
   if (spelledUnit) prefixText = rest.slice(0, rest.length - spelledUnit.length);
   const exponent = PREFIX_EXPONENT.get(prefixText);
+  if (quantity === 'sqrtVoltage' && prefixText !== '') {
+    return { ok: false, error: `"${text}": give γ in V^½ without a prefix, e.g. "0.45"` };
+  }
   if (exponent === undefined) {
     return {
       ok: false,

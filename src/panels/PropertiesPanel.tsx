@@ -3,7 +3,9 @@ import { BLOCK_TYPE_LABEL, isMat, type Mat } from '../model/block';
 import { formatQuantity } from '../model/units';
 import { blockRect } from '../geometry/placedBlocks';
 import { useAppStore } from '../store/useAppStore';
-import { CountField } from './CountField';
+import { QuantityField } from './QuantityField';
+import { useRunCommand } from './useRunCommand';
+import { setMatCell } from '../commands/cellCommands';
 
 /** The one value all mats share, or null when they differ. */
 function shared(mats: readonly Mat[], pick: (m: Mat) => number): number | null {
@@ -18,14 +20,13 @@ export function PropertiesPanel() {
   const design = useAppStore((s) => s.history.present);
   const selectedIds = useAppStore((s) => s.selectedIds);
   const execute = useAppStore((s) => s.execute);
+  const run = useRunCommand();
   const selectedSet = new Set(selectedIds);
   const blocks = design.blocks.filter((b) => selectedSet.has(b.id));
   const mats = blocks.filter(isMat);
 
-  const apply = (args: { cellsPerBitline?: number; cellsPerWordline?: number }) => {
-    const ok = execute(setMatCellCounts, { matIds: mats.map((m) => m.id), ...args });
-    return ok ? null : useAppStore.getState().lastError;
-  };
+  const apply = (args: { cellsPerBitline?: number; cellsPerWordline?: number }) =>
+    run(setMatCellCounts, { matIds: mats.map((m) => m.id), ...args });
 
   return (
     <section className="panel" aria-labelledby="properties-heading">
@@ -41,22 +42,37 @@ export function PropertiesPanel() {
       {blocks.length > 1 && <p className="block-summary">{blocks.length} blocks selected</p>}
       {mats.length > 0 && (
         <>
-          <CountField
+          <QuantityField
             id="cells-per-bitline"
             label="Cells per bit line"
+            quantity="count"
             value={shared(mats, (m) => m.cellsPerBitline)}
             onCommit={(v) => apply({ cellsPerBitline: v })}
           />
-          <CountField
+          <QuantityField
             id="cells-per-wordline"
             label="Cells per word line"
+            quantity="count"
             value={shared(mats, (m) => m.cellsPerWordline)}
             onCommit={(v) => apply({ cellsPerWordline: v })}
           />
-          <p className="hint">
-            Cell: {design.cells.find((c) => c.id === mats[0]?.cellId)?.name ?? '—'}; bit lines run{' '}
-            {mats[0]?.bitlineAxis}.
-          </p>
+          <div className="field">
+            <label htmlFor="mat-cell">Cell</label>
+            <select
+              id="mat-cell"
+              data-testid="mat-cell"
+              value={mats.every((m) => m.cellId === mats[0]?.cellId) ? mats[0]?.cellId : ''}
+              onChange={(e) => execute(setMatCell, { matIds: mats.map((m) => m.id), cellId: e.target.value })}
+            >
+              {!mats.every((m) => m.cellId === mats[0]?.cellId) && <option value="">mixed</option>}
+              {design.cells.map((c) => (
+                <option key={c.id} value={c.id}>
+                  {c.name}
+                </option>
+              ))}
+            </select>
+          </div>
+          <p className="hint">Bit lines run {mats[0]?.bitlineAxis}.</p>
         </>
       )}
     </section>

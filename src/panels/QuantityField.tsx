@@ -1,21 +1,28 @@
 import { useEffect, useState } from 'react';
-import { parseQuantity } from '../model/units';
+import { formatQuantity, parseQuantity, type Quantity } from '../model/units';
 
-interface CountFieldProps {
+interface QuantityFieldProps {
   readonly id: string;
   readonly label: string;
-  /** Value shown when the field is not being edited; null when the selection disagrees. */
+  readonly quantity: Quantity;
+  /** SI value shown when the field is not being edited; null when a multi-selection disagrees. */
   readonly value: number | null;
-  /** Applies a parsed value; returns an error message when it was refused. */
+  /** Applies a parsed SI value; returns an error message when it was refused. */
   onCommit(value: number): string | null;
 }
 
+/** Counts are shown plainly ("512"), everything else in engineering notation ("11 fF"). */
+function display(value: number | null, quantity: Quantity): string {
+  if (value === null) return '';
+  return quantity === 'count' ? String(value) : formatQuantity(value, quantity, 6);
+}
+
 /**
- * A whole-number input that accepts engineering notation ("1k"), commits on Enter or blur, reverts on
- * Escape, and shows why a value was refused without losing what was typed.
+ * A unit-aware input: accepts engineering notation ("25f", "25 fF", "0.12u", "85 °C"), commits on Enter
+ * or blur, reverts on Escape, and shows why a value was refused without losing what was typed.
  */
-export function CountField({ id, label, value, onCommit }: CountFieldProps) {
-  const shown = value === null ? '' : String(value);
+export function QuantityField({ id, label, quantity, value, onCommit }: QuantityFieldProps) {
+  const shown = display(value, quantity);
   const [text, setText] = useState(shown);
   const [error, setError] = useState<string | null>(null);
   useEffect(() => {
@@ -25,7 +32,7 @@ export function CountField({ id, label, value, onCommit }: CountFieldProps) {
 
   const commit = () => {
     if (text === shown) return;
-    const parsed = parseQuantity(text, 'count');
+    const parsed = parseQuantity(text, quantity);
     if (!parsed.ok) {
       setError(parsed.error);
       return;
@@ -39,7 +46,6 @@ export function CountField({ id, label, value, onCommit }: CountFieldProps) {
       <input
         id={id}
         data-testid={id}
-        inputMode="numeric"
         value={text}
         placeholder={value === null ? 'mixed' : undefined}
         aria-invalid={error !== null}
