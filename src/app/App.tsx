@@ -1,11 +1,15 @@
 import { FloorplanCanvas } from '../canvas/FloorplanCanvas';
 import { Sidebar } from './Sidebar';
+import { NoticeBar } from './NoticeBar';
 import { Toolbar } from './Toolbar';
+import { useAutosave } from './useAutosave';
 
 export function App() {
+  useAutosave();
   return (
     <div className="app">
       <Toolbar />
+      <NoticeBar />
       <main className="workspace">
         <FloorplanCanvas />
         <Sidebar />

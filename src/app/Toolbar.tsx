@@ -1,5 +1,6 @@
 import { useEffect } from 'react';
 import { useAppStore } from '../store/useAppStore';
+import { FileMenu } from './FileMenu';
 
 /** True when focus is in a text field, where Ctrl+Z belongs to the field. */
 function typingInField(target: EventTarget | null): boolean {
@@ -40,6 +41,7 @@ export function Toolbar() {
       <span className="design-name" data-testid="design-name">
         {name}
       </span>
+      <FileMenu />
       <div className="actions">
         <button type="button" onClick={undo} disabled={!canUndo} title="Undo (Ctrl+Z)" data-testid="undo">
           Undo

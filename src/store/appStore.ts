@@ -25,6 +25,8 @@ export interface AppState {
   readonly lastError: string | null;
   /** Bumped to ask the canvas to frame the whole floorplan. */
   readonly fitRequest: number;
+  /** A message for the person (file refused, autosave kept aside, export done); null when none. */
+  readonly notice: Notice | null;
 
   execute<A>(command: Command<A>, args: A): boolean;
   undo(): void;
@@ -32,8 +34,14 @@ export interface AppState {
   select(ids: readonly string[]): void;
   setViewport(viewport: Viewport): void;
   requestFit(): void;
-  /** Replaces the document with a restored design (history restarts). */
+  /** Opens a restored design as one undoable step, so the design it replaces is never lost. */
   replaceDesign(design: Design): void;
+  setNotice(notice: Notice | null): void;
+}
+
+export interface Notice {
+  readonly kind: 'info' | 'error';
+  readonly text: string;
 }
 
 const documentState = (history: History<Design>) => ({ history, report: evaluate(history.present) });
@@ -53,6 +61,7 @@ export function createAppStore(initial: Design = demoDesign()) {
     viewport: { scale: 3, offsetX: 20, offsetY: 20 },
     lastError: null,
     fitRequest: 0,
+    notice: null,
 
     execute(command, args) {
       const { history, selectedIds } = get();
@@ -92,7 +101,15 @@ export function createAppStore(initial: Design = demoDesign()) {
       set({ fitRequest: get().fitRequest + 1 });
     },
     replaceDesign(design) {
-      set({ ...documentState(startHistory(design)), selectedIds: [], lastError: null });
+      set({
+        ...documentState(pushHistory(get().history, design)),
+        selectedIds: [],
+        lastError: null,
+        fitRequest: get().fitRequest + 1,
+      });
+    },
+    setNotice(notice) {
+      set({ notice });
     },
   }));
 }

@@ -12,8 +12,11 @@ import { designWith, mat } from '../support/designs';
 const storage = fc.double({ min: 1e-18, max: 1e-12, noNaN: true });
 const bitline = fc.double({ min: 1e-18, max: 1e-10, noNaN: true });
 
+/** Thousands of generated cases take a few seconds; allow for a busy machine (not a speed assertion). */
+const FUZZ_TIMEOUT = { timeout: 60_000 };
+
 describe('charge-transfer ratio', () => {
-  it('lies strictly between 0 and 1 for positive Cs and Cbl', () => {
+  it('lies strictly between 0 and 1 for positive Cs and Cbl', FUZZ_TIMEOUT, () => {
     // Source: CTR = Cs/(Cs + Cbl), Weste & Harris, CMOS VLSI Design, 4th ed., 2011, §12.3 (arithmetic bound).
     fc.assert(
       fc.property(storage, bitline, (cs, cbl) => {
@@ -25,7 +28,7 @@ describe('charge-transfer ratio', () => {
     );
   });
 
-  it('is exactly 1 when the bit line has no capacitance, and falls as Cbl grows', () => {
+  it('is exactly 1 when the bit line has no capacitance, and falls as Cbl grows', FUZZ_TIMEOUT, () => {
     // Source: arithmetic on CTR = Cs/(Cs + Cbl).
     fc.assert(
       fc.property(storage, bitline, bitline, (cs, a, b) => {
@@ -42,7 +45,7 @@ describe('charge-transfer ratio', () => {
 describe('one mat on the demo process', () => {
   const cells = fc.integer({ min: 1, max: MAX_CELLS_PER_LINE });
 
-  it('bit-line capacitance is never negative and grows with cells per bit line', () => {
+  it('bit-line capacitance is never negative and grows with cells per bit line', FUZZ_TIMEOUT, () => {
     // Source: Cbl = N·(Cj + Cbw + Cbb) + c_wire·L + C_sa, every term ≥ 0 (Keeth & Baker, DRAM Circuit
     // Design, 2001, ch. 2, from memory); arithmetic for the monotony.
     fc.assert(
@@ -59,7 +62,7 @@ describe('one mat on the demo process', () => {
     );
   });
 
-  it('the sense signal falls strictly as cells per bit line grow', () => {
+  it('the sense signal falls strictly as cells per bit line grow', FUZZ_TIMEOUT, () => {
     // Source: ΔV = (V − Vpre)·Cs/(Cs + Cbl) with Cbl rising in N (Keeth & Baker, 2001, ch. 1, from memory).
     fc.assert(
       fc.property(cells, cells, (a, b) => {
@@ -103,26 +106,30 @@ describe('grid floorplans from gridFloorplan', () => {
     columnDecoderHeight: fc.oneof(fc.constant(0), length(1e-6, 50e-6)),
   });
 
-  it('do not overlap, serve every line, keep efficiency in [0, 1] and give no NaN in mat figures', () => {
-    // Source: efficiency = cell area / total area ≤ 1 whenever blocks do not overlap (Takahashi et al.,
-    // IEEE JSSC 36(11), 2001, definition; arithmetic for the bound); no-NaN: common practice (no source).
-    fc.assert(
-      fc.property(grid, ({ process, ...spec }) => {
-        const design = designWith(gridFloorplan({ ...spec, featureSize: process.featureSize }), process);
-        const report = evaluate(design);
-        const kinds = new Set(report.findings.map((f) => f.kind));
-        expect(kinds.has('overlap')).toBe(false);
-        expect(kinds.has('unsensedBitlines')).toBe(false);
-        expect(kinds.has('undrivenWordlines')).toBe(false);
-        expect(report.totals.matCount).toBe(spec.matRows * spec.matColumns);
-        // A lone open-bit-line mat has no partner mat, so all its bits are lost and efficiency may be 0.
-        expect(report.totals.arrayEfficiency).toBeGreaterThanOrEqual(0);
-        expect(report.totals.arrayEfficiency).toBeLessThanOrEqual(1);
-        for (const m of report.mats) expect(nanFigures(m)).toEqual([]);
-      }),
-      { numRuns: 300 },
-    );
-  });
+  it(
+    'do not overlap, serve every line, keep efficiency in [0, 1] and give no NaN in mat figures',
+    FUZZ_TIMEOUT,
+    () => {
+      // Source: efficiency = cell area / total area ≤ 1 whenever blocks do not overlap (Takahashi et al.,
+      // IEEE JSSC 36(11), 2001, definition; arithmetic for the bound); no-NaN: common practice (no source).
+      fc.assert(
+        fc.property(grid, ({ process, ...spec }) => {
+          const design = designWith(gridFloorplan({ ...spec, featureSize: process.featureSize }), process);
+          const report = evaluate(design);
+          const kinds = new Set(report.findings.map((f) => f.kind));
+          expect(kinds.has('overlap')).toBe(false);
+          expect(kinds.has('unsensedBitlines')).toBe(false);
+          expect(kinds.has('undrivenWordlines')).toBe(false);
+          expect(report.totals.matCount).toBe(spec.matRows * spec.matColumns);
+          // A lone open-bit-line mat has no partner mat, so all its bits are lost and efficiency may be 0.
+          expect(report.totals.arrayEfficiency).toBeGreaterThanOrEqual(0);
+          expect(report.totals.arrayEfficiency).toBeLessThanOrEqual(1);
+          for (const m of report.mats) expect(nanFigures(m)).toEqual([]);
+        }),
+        { numRuns: 300 },
+      );
+    },
+  );
 
   it('a lone folded mat with no strips reaches exactly its cell area: efficiency 1 (the bound is tight)', () => {
     // Source: folded 8F² cells tile the mat outline exactly (common practice, no source; arithmetic).

@@ -1,0 +1,194 @@
+import { useRef, useState } from 'react';
+import { canvasToPngBlob, renderFloorplanImage, type ImageOptions } from '../canvas/floorplanImage';
+import { matFiguresCsv } from '../io/matCsv';
+import { MAX_DESIGN_TEXT_LENGTH, restoreDesign } from '../io/restore';
+import { reportSummary } from '../io/summary';
+import { useAppStore } from '../store/useAppStore';
+import { downloadBlob, fileBaseName } from './download';
+
+/** Largest file the Open button reads (bytes); the same limit restore applies to text. */
+const MAX_FILE_BYTES = MAX_DESIGN_TEXT_LENGTH;
+
+function jsonBlob(value: unknown): Blob {
+  return new Blob([`${JSON.stringify(value, null, 2)}\n`], { type: 'application/json' });
+}
+
+/** Size of the live canvas, for exporting the current view. */
+function liveView() {
+  const element = document.querySelector('[data-testid="floorplan"]');
+  const box = element?.getBoundingClientRect();
+  return {
+    viewport: useAppStore.getState().viewport,
+    width: Math.round(box?.width ?? 800),
+    height: Math.round(box?.height ?? 600),
+  };
+}
+
+/** Open, save and export: design files, PNG pictures, JSON summaries and CSV tables. */
+export function FileMenu() {
+  const fileInput = useRef<HTMLInputElement>(null);
+  const [pngOpen, setPngOpen] = useState(false);
+  const [png, setPng] = useState<ImageOptions>({ region: 'all', scale: 2, legend: true, titleBlock: true });
+  const setNotice = useAppStore((s) => s.setNotice);
+  const replaceDesign = useAppStore((s) => s.replaceDesign);
+
+  const openFile = async (file: File) => {
+    if (file.size > MAX_FILE_BYTES) {
+      setNotice({
+        kind: 'error',
+        text: `${file.name} is ${file.size.toLocaleString('en-US')} bytes; the limit is ${MAX_FILE_BYTES.toLocaleString('en-US')}. Nothing was changed.`,
+      });
+      return;
+    }
+    const restored = restoreDesign(await file.text());
+    if (!restored.ok) {
+      setNotice({
+        kind: 'error',
+        text: `${file.name} was not opened: ${restored.errors.slice(0, 3).join('; ')}. The current design is unchanged.`,
+      });
+      return;
+    }
+    replaceDesign(restored.design);
+    setNotice({
+      kind: 'info',
+      text: `Opened ${file.name}${restored.migratedFrom ? ` (upgraded from format version ${restored.migratedFrom})` : ''}. Undo returns to the previous design.`,
+    });
+  };
+
+  const current = () => useAppStore.getState();
+  const base = () => fileBaseName(current().history.present.name);
+
+  return (
+    <div className="file-menu">
+      <button
+        type="button"
+        data-testid="open-file"
+        onClick={() => fileInput.current?.click()}
+        title="Open a design file"
+      >
+        Open…
+      </button>
+      <input
+        ref={fileInput}
+        type="file"
+        accept=".json,application/json"
+        hidden
+        data-testid="open-file-input"
+        onChange={(e) => {
+          const file = e.target.files?.[0];
+          e.target.value = '';
+          if (file) void openFile(file);
+        }}
+      />
+      <button
+        type="button"
+        data-testid="save-file"
+        title="Save the design as a file"
+        onClick={() => downloadBlob(jsonBlob(current().history.present), `${base()}.matloom.json`)}
+      >
+        Save
+      </button>
+      <button
+        type="button"
+        data-testid="export-summary"
+        title="Design, figures and checks as JSON, units in every key"
+        onClick={() => {
+          const s = current();
+          downloadBlob(
+            jsonBlob({ design: s.history.present, report: reportSummary(s.history.present, s.report) }),
+            `${base()}.summary.json`,
+          );
+        }}
+      >
+        Summary JSON
+      </button>
+      <button
+        type="button"
+        data-testid="export-csv"
+        title="Per-mat figures as CSV"
+        onClick={() =>
+          downloadBlob(
+            new Blob([matFiguresCsv(current().report)], { type: 'text/csv' }),
+            `${base()}.mats.csv`,
+          )
+        }
+      >
+        CSV
+      </button>
+      <button
+        type="button"
+        data-testid="export-png-menu"
+        aria-expanded={pngOpen}
+        onClick={() => setPngOpen(!pngOpen)}
+      >
+        PNG…
+      </button>
+      {pngOpen && (
+        <div className="png-options" role="dialog" aria-label="PNG export options">
+          <label>
+            <input
+              type="radio"
+              name="png-region"
+              checked={png.region === 'all'}
+              onChange={() => setPng({ ...png, region: 'all' })}
+            />{' '}
+            whole floorplan
+          </label>
+          <label>
+            <input
+              type="radio"
+              name="png-region"
+              data-testid="png-region-view"
+              checked={png.region === 'view'}
+              onChange={() => setPng({ ...png, region: 'view' })}
+            />{' '}
+            current view
+          </label>
+          <label>
+            resolution{' '}
+            <select
+              data-testid="png-scale"
+              value={png.scale}
+              onChange={(e) => setPng({ ...png, scale: Number(e.target.value) })}
+            >
+              {[1, 2, 3, 4].map((n) => (
+                <option key={n} value={n}>
+                  {n}×
+                </option>
+              ))}
+            </select>
+          </label>
+          <label>
+            <input
+              type="checkbox"
+              checked={png.legend}
+              onChange={(e) => setPng({ ...png, legend: e.target.checked })}
+            />{' '}
+            legend
+          </label>
+          <label>
+            <input
+              type="checkbox"
+              data-testid="png-title"
+              checked={png.titleBlock}
+              onChange={(e) => setPng({ ...png, titleBlock: e.target.checked })}
+            />{' '}
+            title block
+          </label>
+          <button
+            type="button"
+            data-testid="export-png"
+            onClick={async () => {
+              const s = current();
+              const canvas = renderFloorplanImage(s.history.present, s.report, png, liveView());
+              downloadBlob(await canvasToPngBlob(canvas), `${base()}.png`);
+              setPngOpen(false);
+            }}
+          >
+            Export PNG
+          </button>
+        </div>
+      )}
+    </div>
+  );
+}

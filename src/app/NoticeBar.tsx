@@ -1,0 +1,20 @@
+import { useAppStore } from '../store/useAppStore';
+
+/** One-line message under the toolbar: a refused file, an autosave kept aside, a finished export. */
+export function NoticeBar() {
+  const notice = useAppStore((s) => s.notice);
+  const setNotice = useAppStore((s) => s.setNotice);
+  if (!notice) return null;
+  return (
+    <div
+      className={`notice ${notice.kind}`}
+      role={notice.kind === 'error' ? 'alert' : 'status'}
+      data-testid="notice"
+    >
+      <span>{notice.text}</span>
+      <button type="button" onClick={() => setNotice(null)} aria-label="Dismiss">
+        ×
+      </button>
+    </div>
+  );
+}

@@ -1,0 +1,165 @@
+import type { Report } from '../engine';
+import { placeBlocks } from '../geometry/placedBlocks';
+import { boundingBox } from '../geometry/rect';
+import { BLOCK_TYPE_LABEL, type BlockType } from '../model/block';
+import type { Design } from '../model/design';
+import { formatQuantity } from '../model/units';
+import type { Viewport } from '../store/appStore';
+import { BLOCK_STYLE, CANVAS_BACKGROUND, ERROR_STROKE } from './blockStyle';
+import { fitViewport, MICROMETRES_PER_METRE } from './viewportMath';
+
+/** What a PNG export shows. */
+export interface ImageOptions {
+  /** The whole floorplan, or what the canvas shows now. */
+  readonly region: 'all' | 'view';
+  /** Device pixels per CSS pixel, 1 to 4. */
+  readonly scale: number;
+  readonly legend: boolean;
+  readonly titleBlock: boolean;
+}
+
+/** Size of the image at 1× when exporting the whole floorplan (CSS px). */
+export const WHOLE_FLOORPLAN_WIDTH = 1200;
+const TITLE_BLOCK_HEIGHT = 92;
+const LEGEND_TYPES: readonly BlockType[] = ['mat', 'senseAmpStrip', 'wordlineDriverStrip', 'rowDecoder'];
+
+/** Output size in CSS px (before scale) for the chosen region. */
+export function imageFrame(
+  design: Design,
+  options: ImageOptions,
+  view: { viewport: Viewport; width: number; height: number },
+) {
+  const box = boundingBox(placeBlocks(design).map((p) => p.rect));
+  if (options.region === 'view') return { width: view.width, height: view.height, viewport: view.viewport };
+  const aspect = box && box.width > 0 ? box.height / box.width : 1;
+  const width = WHOLE_FLOORPLAN_WIDTH;
+  const height = Math.max(200, Math.min(1600, Math.round(width * aspect)));
+  return { width, height, viewport: fitViewport(box, width, height, 24) };
+}
+
+/**
+ * Draws the floorplan with the 2D canvas API (independent of the live Konva stage, so any region and
+ * resolution can be drawn), optionally with a legend and a title block of key figures.
+ */
+export function renderFloorplanImage(
+  design: Design,
+  report: Report,
+  options: ImageOptions,
+  view: { viewport: Viewport; width: number; height: number },
+): HTMLCanvasElement {
+  const frame = imageFrame(design, options, view);
+  const scale = Math.min(4, Math.max(1, Math.round(options.scale)));
+  const titleHeight = options.titleBlock ? TITLE_BLOCK_HEIGHT : 0;
+  const canvas = document.createElement('canvas');
+  canvas.width = frame.width * scale;
+  canvas.height = (frame.height + titleHeight) * scale;
+  const ctx = canvas.getContext('2d');
+  if (!ctx) throw new Error('this browser cannot draw on a canvas');
+  ctx.scale(scale, scale);
+  ctx.fillStyle = CANVAS_BACKGROUND;
+  ctx.fillRect(0, 0, frame.width, frame.height + titleHeight);
+
+  const flagged = new Set(report.findings.filter((f) => f.severity === 'error').flatMap((f) => f.blockIds));
+  const v = frame.viewport;
+  const k = MICROMETRES_PER_METRE * v.scale;
+  ctx.save();
+  ctx.beginPath();
+  ctx.rect(0, 0, frame.width, frame.height);
+  ctx.clip();
+  for (const p of placeBlocks(design)) {
+    const style = BLOCK_STYLE[p.block.type];
+    const x = p.rect.x * k + v.offsetX;
+    const y = p.rect.y * k + v.offsetY;
+    const w = p.rect.width * k;
+    const h = p.rect.height * k;
+    if (x > frame.width || y > frame.height || x + w < 0 || y + h < 0) continue;
+    ctx.fillStyle = style.fill;
+    ctx.fillRect(x, y, w, h);
+    const bad = flagged.has(p.block.id);
+    ctx.strokeStyle = bad ? ERROR_STROKE : style.stroke;
+    ctx.lineWidth = bad ? 2.5 : 1;
+    ctx.strokeRect(x, y, w, h);
+    if (p.block.type === 'mat' && Math.min(w, h) > 60) {
+      ctx.fillStyle = style.text;
+      ctx.font = '12px sans-serif';
+      ctx.fillText(p.block.name || p.block.id, x + 6, y + 16);
+      ctx.fillText(`${p.block.cellsPerBitline} × ${p.block.cellsPerWordline}`, x + 6, y + 31);
+    }
+  }
+  ctx.restore();
+  if (options.legend) drawLegend(ctx, frame.width, frame.height);
+  if (options.titleBlock) drawTitleBlock(ctx, design, report, frame.height, frame.width);
+  return canvas;
+}
+
+function drawLegend(ctx: CanvasRenderingContext2D, width: number, height: number) {
+  const rows = [
+    ...LEGEND_TYPES.map((t) => ({ label: t === 'rowDecoder' ? 'decoder' : BLOCK_TYPE_LABEL[t], type: t })),
+    null,
+  ];
+  const boxW = 190;
+  const boxH = rows.length * 17 + 10;
+  const x0 = width - boxW - 10;
+  const y0 = height - boxH - 10;
+  ctx.fillStyle = 'rgba(255,255,255,0.92)';
+  ctx.fillRect(x0, y0, boxW, boxH);
+  ctx.strokeStyle = '#d4d0c6';
+  ctx.strokeRect(x0, y0, boxW, boxH);
+  ctx.font = '12px sans-serif';
+  rows.forEach((row, i) => {
+    const y = y0 + 8 + i * 17;
+    if (row) {
+      ctx.fillStyle = BLOCK_STYLE[row.type].fill;
+      ctx.fillRect(x0 + 8, y, 14, 10);
+      ctx.strokeStyle = BLOCK_STYLE[row.type].stroke;
+    } else {
+      ctx.strokeStyle = ERROR_STROKE;
+    }
+    ctx.strokeRect(x0 + 8, y, 14, 10);
+    ctx.fillStyle = '#1f2328';
+    ctx.fillText(row ? row.label : 'failing check', x0 + 30, y + 10);
+  });
+}
+
+function drawTitleBlock(
+  ctx: CanvasRenderingContext2D,
+  design: Design,
+  report: Report,
+  top: number,
+  width: number,
+) {
+  const t = report.totals;
+  ctx.fillStyle = '#23313f';
+  ctx.fillRect(0, top, width, TITLE_BLOCK_HEIGHT);
+  ctx.fillStyle = '#f4f1ea';
+  ctx.font = 'bold 15px sans-serif';
+  ctx.fillText(`${design.name} — ${design.process.name}`, 14, top + 22);
+  ctx.font = '12px sans-serif';
+  const errors = report.findings.filter((f) => f.severity === 'error').length;
+  const figures = [
+    `usable bits ${formatQuantity(t.usableBits, 'count')}`,
+    `area ${formatQuantity(t.totalArea, 'area')}`,
+    `efficiency ${formatQuantity(t.arrayEfficiency, 'percent', 3)}`,
+    `area/bit ${formatQuantity(t.areaPerBitInF2, 'ratio', 3)} F²`,
+    `worst margin ${formatQuantity(t.worstSenseMargin, 'voltage', 3)}`,
+    `refresh busy ${formatQuantity(t.refresh.busyFraction, 'percent', 3)}`,
+    `${errors} error${errors === 1 ? '' : 's'}`,
+  ];
+  ctx.fillText(figures.join('   ·   '), 14, top + 46);
+  ctx.fillStyle = '#c8d2dc';
+  ctx.fillText(
+    'Matloom first-order estimates: confirm with extracted parasitics, foundry rules and measured silicon.',
+    14,
+    top + 72,
+  );
+}
+
+/** The canvas as PNG bytes. */
+export function canvasToPngBlob(canvas: HTMLCanvasElement): Promise<Blob> {
+  return new Promise((resolve, reject) => {
+    canvas.toBlob(
+      (blob) => (blob ? resolve(blob) : reject(new Error('the browser produced no PNG'))),
+      'image/png',
+    );
+  });
+}

@@ -1,0 +1,98 @@
+/**
+ * Speed of evaluate() on generated floorplans (`npm run bench`). Prints figures and whether the targets
+ * are met; never fails the build, because timing depends on the machine. Unit tests never assert speed.
+ *
+ * Targets: ≤ 5 ms for a 4,096-mat floorplan, and per-mat time at 65,536 mats at most 1.5 × that at
+ * 4,096 mats (the engine should stay close to linear, O(n log n) through the spatial index).
+ */
+import { performance } from 'node:perf_hooks';
+import { evaluate } from '../../src/engine/evaluate';
+import { gridFloorplan } from '../../src/geometry/gridFloorplan';
+import { DEMO_PROCESS, FOLDED_8F2_CELL } from '../../src/model/builtins';
+import type { Design } from '../../src/model/design';
+import { designWith } from '../support/designs';
+
+/** Square grids of mats with their strips; sizes as in the demo design (m). */
+const SIDES = [16, 64, 256] as const;
+const TARGET_MS_AT_4096 = 5;
+const TARGET_RATIO = 1.5;
+
+function gridDesign(side: number): Design {
+  return designWith(
+    gridFloorplan({
+      cell: FOLDED_8F2_CELL,
+      featureSize: DEMO_PROCESS.featureSize,
+      matRows: side,
+      matColumns: side,
+      cellsPerBitline: 512,
+      cellsPerWordline: 512,
+      senseAmpStripHeight: 6e-6,
+      wordlineDriverStripWidth: 3e-6,
+      rowDecoderWidth: 18e-6,
+      columnDecoderHeight: 14e-6,
+    }),
+  );
+}
+
+function median(values: readonly number[]): number {
+  const sorted = [...values].sort((a, b) => a - b);
+  const mid = Math.floor(sorted.length / 2);
+  return sorted.length % 2 === 1
+    ? (sorted[mid] ?? NaN)
+    : ((sorted[mid - 1] ?? NaN) + (sorted[mid] ?? NaN)) / 2;
+}
+
+interface Row {
+  readonly mats: number;
+  readonly blocks: number;
+  readonly medianMs: number;
+  readonly usPerMat: number;
+}
+
+function measure(side: number): Row {
+  const design = gridDesign(side);
+  const mats = side * side;
+  // More runs for small floorplans, where one run is short and noisy; at least 7 for a stable median.
+  const runs = Math.max(7, Math.min(51, Math.round(2_000_000 / design.blocks.length)));
+  let checksum = 0;
+  for (let i = 0; i < 3; i++) checksum += evaluate(design).totals.bits; // warm-up: let the JIT settle
+  const times: number[] = [];
+  for (let i = 0; i < runs; i++) {
+    const start = performance.now();
+    const report = evaluate(design);
+    times.push(performance.now() - start);
+    checksum += report.totals.bits;
+  }
+  if (checksum === 0) throw new Error('evaluate() returned no bits'); // keeps the work observable
+  const medianMs = median(times);
+  return { mats, blocks: design.blocks.length, medianMs, usPerMat: (medianMs * 1000) / mats };
+}
+
+const rows = SIDES.map(measure);
+const fmt = (n: number, decimals: number) => n.toFixed(decimals);
+const table = [
+  ['mats', 'blocks', 'median ms', 'µs per mat'],
+  ...rows.map((r) => [
+    r.mats.toLocaleString('en-US'),
+    r.blocks.toLocaleString('en-US'),
+    fmt(r.medianMs, 2),
+    fmt(r.usPerMat, 3),
+  ]),
+];
+const widths = (table[0] ?? []).map((_, i) => Math.max(...table.map((row) => (row[i] ?? '').length)));
+for (const row of table) console.log(row.map((cell, i) => cell.padStart(widths[i] ?? 0)).join('  '));
+
+const at4096 = rows.find((r) => r.mats === 4096);
+const at65536 = rows.find((r) => r.mats === 65536);
+if (at4096 && at65536) {
+  const ratio = at65536.usPerMat / at4096.usPerMat;
+  const met = (ok: boolean) => (ok ? 'met' : 'NOT met');
+  console.log('');
+  console.log(
+    `4,096 mats: ${fmt(at4096.medianMs, 2)} ms (target ≤ ${TARGET_MS_AT_4096} ms): ${met(at4096.medianMs <= TARGET_MS_AT_4096)}`,
+  );
+  console.log(
+    `per-mat time 65,536 vs 4,096: ${fmt(ratio, 2)} (target ≤ ${TARGET_RATIO}): ${met(ratio <= TARGET_RATIO)}`,
+  );
+}
+console.log(`node ${process.version}, ${process.platform} ${process.arch}`);

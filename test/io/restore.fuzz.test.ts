@@ -1,0 +1,231 @@
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { evaluate } from '../../src/engine/evaluate';
+import type { Report, Totals } from '../../src/engine/report';
+import { restoreDesign } from '../../src/io/restore';
+import { demoDesign } from '../../src/model/demoDesign';
+import { designSchema } from '../../src/model/design';
+
+// Source for every property here: common practice (no source): a loader never throws on bad input, and
+// whatever it accepts is a valid design the engine can evaluate into finite figures.
+
+type JsonTree = Record<string, unknown> | unknown[];
+
+/** Every path into the demo design's JSON tree (objects and arrays included, not just leaves). */
+function allPaths(node: unknown, prefix: (string | number)[] = []): (string | number)[][] {
+  if (typeof node !== 'object' || node === null) return [];
+  const keys: (string | number)[] = Array.isArray(node) ? node.map((_, i) => i) : Object.keys(node);
+  return keys.flatMap((key) => {
+    const path = [...prefix, key];
+    return [path, ...allPaths((node as Record<string | number, unknown>)[key], path)];
+  });
+}
+
+const DEMO_TEXT = JSON.stringify(demoDesign());
+const DEMO_PATHS = allPaths(JSON.parse(DEMO_TEXT));
+/** Paths outside the block list, so that process, operating and cell fields are hit as often as blocks. */
+const NON_BLOCK_PATHS = DEMO_PATHS.filter((p) => p[0] !== 'blocks');
+
+/** Replaces (or with `undefined`, deletes) the value at `path` in a fresh copy of the demo design. */
+function mutate(root: JsonTree, path: readonly (string | number)[], value: unknown): void {
+  let node: unknown = root;
+  for (const key of path.slice(0, -1)) {
+    // An earlier mutation may have replaced a parent with a number or string; then there is nothing to change.
+    if (typeof node !== 'object' || node === null) return;
+    node = (node as Record<string | number, unknown>)[key];
+  }
+  const last = path[path.length - 1];
+  if (typeof node !== 'object' || node === null || last === undefined) return;
+  const container = node as Record<string | number, unknown>;
+  if (value === undefined) {
+    if (Array.isArray(container) && typeof last === 'number') container.splice(last, 1);
+    else Reflect.deleteProperty(container, last);
+  } else {
+    container[last] = value;
+  }
+}
+
+/** Values a careless editor, a buggy script or a hostile file might put anywhere. */
+const nastyValue: fc.Arbitrary<unknown> = fc.oneof(
+  fc.jsonValue({ maxDepth: 2 }),
+  fc.double(), // includes NaN, ±Infinity, −0 and subnormals
+  fc.constantFrom(undefined, null, 0, -1, 1, 0.5, 1e-300, 1e300, 16385, 2 ** 53, '', 'mat', 'folded', []),
+  fc.integer(),
+);
+
+/** A numeric leaf nudged by a factor, to probe limits without leaving the number type. */
+const scale = fc.constantFrom(0, -1, 0.5, 2, 10, 1e3, 1e-3, 1e6, 1.0000001);
+
+/** One change to the demo: replace the value at `path` (undefined deletes it), or scale a number there. */
+interface Mutation {
+  readonly path: readonly (string | number)[];
+  readonly value: unknown;
+  readonly factor: number;
+  readonly kind: 'replace' | 'scale';
+}
+
+const mutation: fc.Arbitrary<Mutation> = fc.record({
+  path: fc.oneof(fc.constantFrom(...DEMO_PATHS), fc.constantFrom(...NON_BLOCK_PATHS)),
+  value: nastyValue,
+  factor: scale,
+  kind: fc.constantFrom('replace' as const, 'scale' as const),
+});
+
+/** A fresh copy of the demo design with the mutations applied in order. */
+function mutatedDemo(mutations: readonly Mutation[]): JsonTree {
+  const root = JSON.parse(DEMO_TEXT) as JsonTree;
+  for (const m of mutations) {
+    let value = m.value;
+    if (m.kind === 'scale') {
+      let current: unknown = root;
+      for (const key of m.path) {
+        current =
+          typeof current === 'object' && current !== null
+            ? (current as Record<string | number, unknown>)[key]
+            : undefined;
+      }
+      if (typeof current !== 'number') continue;
+      value = current * m.factor;
+    }
+    mutate(root, m.path, value);
+  }
+  return root;
+}
+
+const TOTALS_UNDEFINED_WITHOUT_MATS: readonly (keyof Totals)[] = [
+  'worstSenseSignal',
+  'worstSenseMargin',
+  'shortestRetention',
+  'worstWordlineDelay',
+];
+
+/** Numeric totals that are NaN or infinite, by name; those undefined without mats are allowed then. */
+function nonFiniteTotals(totals: Totals): string[] {
+  const bad: string[] = [];
+  const check = (name: string, value: unknown) => {
+    if (typeof value === 'number' && !Number.isFinite(value)) bad.push(`${name} = ${value}`);
+  };
+  for (const [key, value] of Object.entries(totals)) {
+    if (totals.matCount === 0 && (TOTALS_UNDEFINED_WITHOUT_MATS as readonly string[]).includes(key)) continue;
+    if (key === 'refresh') for (const [k, v] of Object.entries(value as object)) check(`refresh.${k}`, v);
+    else check(key, value);
+  }
+  return bad;
+}
+
+/**
+ * Known engine defect, reported to the engine owner and pinned by the `it.fails` test below: a cell
+ * leakage of exactly 0 A (allowed by the schema, or reached when exp() underflows at a low temperature)
+ * makes retention = Cs·droop / 0 = Infinity, or 0 / 0 = NaN once the margin is spent. Such designs are
+ * skipped by the finiteness check until the engine bounds retention.
+ */
+function hitsZeroLeakageDefect(report: Report): boolean {
+  return report.mats.some((m) => m.leakage === 0);
+}
+
+/** Restores, and for an accepted design checks that it validates and evaluates to finite totals. */
+function restoreAndCheck(input: unknown): void {
+  const result = restoreDesign(input);
+  if (!result.ok) {
+    expect(result.errors.length).toBeGreaterThan(0);
+    for (const e of result.errors) expect(typeof e).toBe('string');
+    return;
+  }
+  expect(designSchema.safeParse(result.design).success).toBe(true);
+  const report = evaluate(result.design);
+  if (hitsZeroLeakageDefect(report)) return;
+  expect(nonFiniteTotals(report.totals)).toEqual([]);
+}
+
+/** Thousands of generated cases take a few seconds; allow for a busy machine (not a speed assertion). */
+const FUZZ_TIMEOUT = { timeout: 60_000 };
+
+describe('restoreDesign under fuzzing', () => {
+  it('never throws on arbitrary JSON values, as text or as objects', FUZZ_TIMEOUT, () => {
+    fc.assert(
+      fc.property(fc.jsonValue(), (value) => {
+        restoreAndCheck(value);
+        restoreAndCheck(JSON.stringify(value));
+      }),
+      { numRuns: 2000 },
+    );
+  });
+
+  it('never throws on arbitrary text', FUZZ_TIMEOUT, () => {
+    fc.assert(
+      fc.property(fc.string({ unit: 'binary', maxLength: 200 }), (text) => {
+        restoreAndCheck(text);
+      }),
+      { numRuns: 2000 },
+    );
+  });
+
+  it('never throws on objects that look like a design but carry junk', FUZZ_TIMEOUT, () => {
+    const designLike = fc.record(
+      {
+        format: fc.oneof(fc.constant('matloom-design'), fc.anything()),
+        version: fc.oneof(fc.constant(1), fc.anything()),
+        name: fc.anything(),
+        lengthUnit: fc.oneof(fc.constant('m'), fc.anything()),
+        process: fc.anything(),
+        operating: fc.anything(),
+        cells: fc.anything(),
+        blocks: fc.oneof(fc.array(fc.anything(), { maxLength: 5 }), fc.anything()),
+      },
+      { requiredKeys: [] },
+    );
+    fc.assert(
+      fc.property(designLike, (value) => restoreAndCheck(value)),
+      { numRuns: 2000 },
+    );
+  });
+
+  it(
+    'the demo design with one to four random field mutations: refused with messages, or valid and finite',
+    FUZZ_TIMEOUT,
+    () => {
+      fc.assert(
+        fc.property(fc.array(mutation, { minLength: 1, maxLength: 4 }), (mutations) => {
+          const design = mutatedDemo(mutations);
+          restoreAndCheck(design);
+          // Through text as well: NaN and Infinity become null there, which must also be refused cleanly.
+          restoreAndCheck(JSON.stringify(design));
+        }),
+        { numRuns: 3000 },
+      );
+    },
+  );
+
+  it(
+    'process, operating and cell numbers pushed to extremes: refused, or valid and finite',
+    FUZZ_TIMEOUT,
+    () => {
+      // Numeric leaves outside the block list, scaled hard so that schema limits and zero values are reached.
+      const numericPaths = NON_BLOCK_PATHS.filter((path) => {
+        let node: unknown = JSON.parse(DEMO_TEXT);
+        for (const key of path) node = (node as Record<string | number, unknown>)[key];
+        return typeof node === 'number';
+      });
+      const extreme: fc.Arbitrary<Mutation> = fc.record({
+        path: fc.constantFrom(...numericPaths),
+        value: fc.constant(null),
+        factor: fc.constantFrom(0, 1e-12, 1e-6, 1e-3, 0.1, 0.9, 1.1, 10, 1e3, 1e6, 1e12),
+        kind: fc.constant('scale' as const),
+      });
+      fc.assert(
+        fc.property(fc.array(extreme, { minLength: 1, maxLength: 6 }), (mutations) => {
+          restoreAndCheck(mutatedDemo(mutations));
+        }),
+        { numRuns: 3000 },
+      );
+    },
+  );
+
+  it.fails('known engine defect: zero cell leakage gives a non-finite shortest retention', () => {
+    // Expected to fail while the defect lasts; when the engine bounds retention this test starts failing
+    // and the skip in restoreAndCheck should go. Source: arithmetic (Cs·ΔV / 0 = ∞).
+    const design = demoDesign();
+    const report = evaluate({ ...design, process: { ...design.process, cellLeakageCurrent: 0 } });
+    expect(nonFiniteTotals(report.totals)).toEqual([]);
+  });
+});
