@@ -12,6 +12,9 @@ import { leakageAtTemperature } from './retention';
 import { storedHighLevel } from './storedLevel';
 import { computeTotals } from './totals';
 
+/** Smallest leakage the engine uses (A): far below any physical cell, 1e-30 A keeps retention finite. */
+export const MINIMUM_LEAKAGE = 1e-30;
+
 /**
  * Evaluates a validated design: lays out its blocks, finds which strips serve which mat edges, and
  * computes every mat's capacitance, read signals, offset and noise budget, margin, retention, delays and
@@ -34,11 +37,16 @@ export function evaluate(design: Design): Report {
     operating,
     storedHigh: storedHighLevel(process),
     sigmaMultiplier: offsetSigmaMultiplier(senseAmpCount, operating.allowedSenseFailures),
-    leakage: leakageAtTemperature(
-      process.cellLeakageCurrent,
-      process.leakageReferenceTemperature,
-      process.leakageActivationEnergy,
-      operating.temperature,
+    // Floored so that zero leakage (allowed) or an exp() underflow at low temperature still gives a
+    // finite, if enormous, retention time instead of Infinity or 0/0.
+    leakage: Math.max(
+      MINIMUM_LEAKAGE,
+      leakageAtTemperature(
+        process.cellLeakageCurrent,
+        process.leakageReferenceTemperature,
+        process.leakageActivationEnergy,
+        operating.temperature,
+      ),
     ),
   };
 

@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { evaluate } from '../../src/engine/evaluate';
-import type { Report, Totals } from '../../src/engine/report';
+import type { Totals } from '../../src/engine/report';
 import { restoreDesign } from '../../src/io/restore';
 import { demoDesign } from '../../src/model/demoDesign';
 import { designSchema } from '../../src/model/design';
@@ -113,15 +113,6 @@ function nonFiniteTotals(totals: Totals): string[] {
   return bad;
 }
 
-/**
- * Known engine defect, reported to the engine owner and pinned by the `it.fails` test below: a cell
- * leakage of exactly 0 A (allowed by the schema, or reached when exp() underflows at a low temperature)
- * makes retention = Cs·droop / 0 = Infinity, or 0 / 0 = NaN once the margin is spent. Such designs are
- * skipped by the finiteness check until the engine bounds retention.
- */
-function hitsZeroLeakageDefect(report: Report): boolean {
-  return report.mats.some((m) => m.leakage === 0);
-}
 
 /** Restores, and for an accepted design checks that it validates and evaluates to finite totals. */
 function restoreAndCheck(input: unknown): void {
@@ -133,7 +124,6 @@ function restoreAndCheck(input: unknown): void {
   }
   expect(designSchema.safeParse(result.design).success).toBe(true);
   const report = evaluate(result.design);
-  if (hitsZeroLeakageDefect(report)) return;
   expect(nonFiniteTotals(report.totals)).toEqual([]);
 }
 
@@ -221,9 +211,8 @@ describe('restoreDesign under fuzzing', () => {
     },
   );
 
-  it.fails('known engine defect: zero cell leakage gives a non-finite shortest retention', () => {
-    // Expected to fail while the defect lasts; when the engine bounds retention this test starts failing
-    // and the skip in restoreAndCheck should go. Source: arithmetic (Cs·ΔV / 0 = ∞).
+  it('zero cell leakage still gives finite retention (the engine floors leakage at 1e-30 A)', () => {
+    // Source: arithmetic (Cs·ΔV / 0 would be ∞).
     const design = demoDesign();
     const report = evaluate({ ...design, process: { ...design.process, cellLeakageCurrent: 0 } });
     expect(nonFiniteTotals(report.totals)).toEqual([]);
