@@ -113,7 +113,6 @@ function nonFiniteTotals(totals: Totals): string[] {
   return bad;
 }
 
-
 /** Restores, and for an accepted design checks that it validates and evaluates to finite totals. */
 function restoreAndCheck(input: unknown): void {
   const result = restoreDesign(input);
