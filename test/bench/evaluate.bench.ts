@@ -5,6 +5,7 @@
  * Targets: ≤ 5 ms for a 4,096-mat floorplan, and per-mat time at 65,536 mats at most 1.5 × that at
  * 4,096 mats (the engine should stay close to linear, O(n log n) through the spatial index).
  */
+import { cpus, loadavg } from 'node:os';
 import { performance } from 'node:perf_hooks';
 import { evaluate } from '../../src/engine/evaluate';
 import { gridFloorplan } from '../../src/geometry/gridFloorplan';
@@ -46,8 +47,14 @@ interface Row {
   readonly mats: number;
   readonly blocks: number;
   readonly medianMs: number;
+  /** Median process CPU time per run (ms), all threads: shows how much of the wall time was ours. */
+  readonly cpuMs: number;
   readonly usPerMat: number;
 }
+
+/** Warm-up: at least this many runs and this much time (ms), so the JIT has settled before timing. */
+const WARM_UP_RUNS = 5;
+const WARM_UP_MS = 500;
 
 function measure(side: number): Row {
   const design = gridDesign(side);
@@ -55,27 +62,41 @@ function measure(side: number): Row {
   // More runs for small floorplans, where one run is short and noisy; at least 7 for a stable median.
   const runs = Math.max(7, Math.min(51, Math.round(2_000_000 / design.blocks.length)));
   let checksum = 0;
-  for (let i = 0; i < 3; i++) checksum += evaluate(design).totals.bits; // warm-up: let the JIT settle
+  const warmStart = performance.now();
+  for (let i = 0; i < WARM_UP_RUNS || performance.now() - warmStart < WARM_UP_MS; i++) {
+    checksum += evaluate(design).totals.bits;
+  }
   const times: number[] = [];
+  const cpu: number[] = [];
   for (let i = 0; i < runs; i++) {
+    const cpuStart = process.cpuUsage();
     const start = performance.now();
     const report = evaluate(design);
     times.push(performance.now() - start);
+    const used = process.cpuUsage(cpuStart);
+    cpu.push((used.user + used.system) / 1000);
     checksum += report.totals.bits;
   }
   if (checksum === 0) throw new Error('evaluate() returned no bits'); // keeps the work observable
   const medianMs = median(times);
-  return { mats, blocks: design.blocks.length, medianMs, usPerMat: (medianMs * 1000) / mats };
+  return {
+    mats,
+    blocks: design.blocks.length,
+    medianMs,
+    cpuMs: median(cpu),
+    usPerMat: (medianMs * 1000) / mats,
+  };
 }
 
 const rows = SIDES.map(measure);
 const fmt = (n: number, decimals: number) => n.toFixed(decimals);
 const table = [
-  ['mats', 'blocks', 'median ms', 'µs per mat'],
+  ['mats', 'blocks', 'median ms', 'cpu ms', 'µs per mat'],
   ...rows.map((r) => [
     r.mats.toLocaleString('en-US'),
     r.blocks.toLocaleString('en-US'),
     fmt(r.medianMs, 2),
+    fmt(r.cpuMs, 2),
     fmt(r.usPerMat, 3),
   ]),
 ];
@@ -95,4 +116,9 @@ if (at4096 && at65536) {
     `per-mat time 65,536 vs 4,096: ${fmt(ratio, 2)} (target ≤ ${TARGET_RATIO}): ${met(ratio <= TARGET_RATIO)}`,
   );
 }
-console.log(`node ${process.version}, ${process.platform} ${process.arch}`);
+const load = loadavg()
+  .map((l) => l.toFixed(2))
+  .join(' ');
+console.log(
+  `node ${process.version}, ${process.platform} ${process.arch}, ${cpus().length} CPUs, load average ${load}`,
+);
