@@ -11,7 +11,8 @@ import { MAX_COORDINATE, finite, positive, wholeCount } from './schemaParts';
 export const MAX_CELLS_PER_LINE = 16384;
 
 const coordinate = (label: string) => finite(label, -MAX_COORDINATE, MAX_COORDINATE);
-const extent = (label: string) => positive(label, 1e-9, MAX_COORDINATE);
+// At least 10 nm: far below any strip, and far above the 1 nm abutment tolerance the checks rely on.
+const extent = (label: string) => positive(label, 1e-8, MAX_COORDINATE);
 
 const blockBase = {
   id: z.string().min(1).max(80),

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { blockSchema } from './block';
-import { cellDefinitionSchema } from './cell';
+import { cellDefinitionSchema, cellPitches, crossingOccupancy, type CellDefinition } from './cell';
+import { MAX_COORDINATE } from './schemaParts';
 import { operatingConditionsSchema } from './operating';
 import { processProfileSchema } from './process';
 
@@ -35,6 +36,7 @@ export const designSchema = z
       }
       cellIds.add(cell.id);
     });
+    const cellsById = new Map<string, CellDefinition>(design.cells.map((c) => [c.id, c]));
     const blockIds = new Set<string>();
     design.blocks.forEach((block, index) => {
       if (blockIds.has(block.id)) {
@@ -45,11 +47,28 @@ export const designSchema = z
         });
       }
       blockIds.add(block.id);
-      if (block.type === 'mat' && !cellIds.has(block.cellId)) {
+      if (block.type !== 'mat') return;
+      const cell = cellsById.get(block.cellId);
+      if (!cell) {
         ctx.addIssue({
           code: 'custom',
           path: ['blocks', index, 'cellId'],
           message: `mat "${block.id}" uses cell "${block.cellId}", which the design does not define`,
+        });
+        return;
+      }
+      // A mat's size follows from its cells; keep it within the same bound as positions.
+      const { bitlinePitch, wordlinePitch } = cellPitches(cell, design.process.featureSize);
+      const occupancy = crossingOccupancy(cell.bitlineArchitecture);
+      const longest = Math.max(
+        (block.cellsPerBitline / occupancy) * wordlinePitch,
+        (block.cellsPerWordline / occupancy) * bitlinePitch,
+      );
+      if (longest > MAX_COORDINATE) {
+        ctx.addIssue({
+          code: 'custom',
+          path: ['blocks', index],
+          message: `mat "${block.id}" would be ${(longest * 1e3).toFixed(1)} mm long; the limit is ${MAX_COORDINATE * 1e3} mm`,
         });
       }
     });

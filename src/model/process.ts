@@ -73,9 +73,13 @@ export const processProfileSchema = z
     /** Storage-node leakage current of one cell at the reference temperature (A). */
     cellLeakageCurrent: nonNegative('cell leakage current', 1e-6),
     /** Temperature at which the leakage current is given (K). */
-    leakageReferenceTemperature: positive('leakage reference temperature', 1, 1000),
-    /** Arrhenius activation energy of the leakage (J); 0.79 eV ≈ 1.27e-19 J halves retention per 10 °C near 90 °C. */
-    leakageActivationEnergy: nonNegative('leakage activation energy', 1e-18),
+    leakageReferenceTemperature: positive('leakage reference temperature', 200, 500),
+    /**
+     * Arrhenius activation energy of the leakage (J); 0.79 eV ≈ 1.27e-19 J halves retention per 10 °C near
+     * 90 °C. Capped at 2 eV (silicon's band gap is 1.12 eV), which with temperatures of 200–500 K keeps the
+     * scaled leakage finite.
+     */
+    leakageActivationEnergy: nonNegative('leakage activation energy', 3.2e-19),
   })
   .superRefine((p, ctx) => {
     if (p.prechargeVoltage > p.arrayVoltage) {

@@ -111,6 +111,18 @@ describe('restoreDesign refuses bad input with a message naming where', () => {
     expect(errorsOf(restoreDesign(design))).toContain('blocks[1].id: duplicate block id "mat-r0c0"');
   });
 
+  it('a mat whose cells would make it longer than the 0.1 m bound', () => {
+    const design = demoJson();
+    const cells = design.cells as Json[];
+    (cells[0] as Json).wordlinePitchInF = 100;
+    (cells[0] as Json).bitlinePitchInF = 100;
+    firstBlock(design).cellsPerBitline = 16384;
+    (design.process as Json).featureSize = 1e-6;
+    expect(
+      errorsOf(restoreDesign(design)).some((e) => /blocks\[0\]: mat "mat-r0c0" would be .* mm long/.test(e)),
+    ).toBe(true);
+  });
+
   it('a mat using a cell the design does not define', () => {
     const design = demoJson();
     firstBlock(design).cellId = 'no-such-cell';
