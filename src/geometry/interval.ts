@@ -6,7 +6,19 @@ export interface Interval {
 
 /** Merges overlapping or touching intervals; the result is sorted and disjoint. */
 export function unionIntervals(intervals: readonly Interval[], tolerance = 0): Interval[] {
-  const sorted = intervals.filter((i) => i.end > i.start).sort((a, b) => a.start - b.start);
+  // Insertion sort: a mat edge has a handful of stretches, and this runs for every mat of a large die,
+  // so it avoids the extra arrays of filter() and sort().
+  const sorted: Interval[] = [];
+  for (const interval of intervals) {
+    if (!(interval.end > interval.start)) continue;
+    let k = sorted.length;
+    sorted.push(interval);
+    while (k > 0 && (sorted[k - 1] as Interval).start > interval.start) {
+      sorted[k] = sorted[k - 1] as Interval;
+      k--;
+    }
+    sorted[k] = interval;
+  }
   const merged: Interval[] = [];
   for (const next of sorted) {
     const last = merged[merged.length - 1];
