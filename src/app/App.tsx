@@ -1,13 +1,16 @@
 import { FloorplanCanvas } from '../canvas/FloorplanCanvas';
 import { Sidebar } from './Sidebar';
 import { Toolbar } from './Toolbar';
+import { ViewArea } from './ViewArea';
 
 export function App() {
   return (
     <div className="app">
       <Toolbar />
       <main className="workspace">
-        <FloorplanCanvas />
+        <ViewArea>
+          <FloorplanCanvas />
+        </ViewArea>
         <Sidebar />
       </main>
       <footer className="caution" data-testid="caution">

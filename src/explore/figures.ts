@@ -54,14 +54,15 @@ export type FigureKey = {
 export interface FigureInfo {
   readonly label: string;
   readonly quantity: Quantity;
-  readonly better: 'lower' | 'higher';
+  /** Which way is better; 'neither' for sizes that only describe a partition (mats, bits, bank area). */
+  readonly better: 'lower' | 'higher' | 'neither';
 }
 
 export const FIGURE_INFO: Readonly<Record<FigureKey, FigureInfo>> = {
-  matCount: { label: 'Mats', quantity: 'count', better: 'lower' },
-  usableBits: { label: 'Usable bits', quantity: 'count', better: 'higher' },
-  totalArea: { label: 'Bank area', quantity: 'area', better: 'lower' },
-  cellArea: { label: 'Cell area', quantity: 'area', better: 'higher' },
+  matCount: { label: 'Mats', quantity: 'count', better: 'neither' },
+  usableBits: { label: 'Usable bits', quantity: 'count', better: 'neither' },
+  totalArea: { label: 'Bank area', quantity: 'area', better: 'neither' },
+  cellArea: { label: 'Cell area', quantity: 'area', better: 'neither' },
   areaPerBit: { label: 'Area per bit', quantity: 'area', better: 'lower' },
   areaPerBitInF2: { label: 'Area per bit in F²', quantity: 'ratio', better: 'lower' },
   arrayEfficiency: { label: 'Array efficiency', quantity: 'percent', better: 'higher' },
@@ -73,7 +74,7 @@ export const FIGURE_INFO: Readonly<Record<FigureKey, FigureInfo>> = {
   wordlineCapacitance: { label: 'Word-line capacitance', quantity: 'capacitance', better: 'lower' },
   activationEnergyPerBit: { label: 'Activation energy per bit', quantity: 'energy', better: 'lower' },
   activationEnergy: { label: 'Energy per mat activation', quantity: 'energy', better: 'lower' },
-  cellsPerWordline: { label: 'Cells per word line', quantity: 'count', better: 'higher' },
+  cellsPerWordline: { label: 'Cells per word line', quantity: 'count', better: 'neither' },
   retentionTime: { label: 'Shortest retention', quantity: 'time', better: 'higher' },
   refreshCycleTime: { label: 'Refresh cycle tRFC', quantity: 'time', better: 'lower' },
   refreshInterval: { label: 'Refresh interval tREFI', quantity: 'time', better: 'higher' },

@@ -35,7 +35,7 @@ export interface SweepPoint {
 }
 
 /** Most points one sweep may have; a sweep holds every point in memory. */
-export const MAX_SWEEP_POINTS = 200_000;
+export const MAX_SWEEP_POINTS = 100_000;
 
 export function sweepSize(request: SweepRequest): number {
   return (

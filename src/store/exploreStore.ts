@@ -78,78 +78,105 @@ const IDLE: SweepRun = {
   error: null,
 };
 
-export function createExploreStore(workerFactory: SweepWorkerFactory = browserSweepWorker) {
+/**
+ * Points arriving while a sweep runs are gathered and shown at most every this many ms, plus 1 ms per
+ * 200 points already shown (redrawing the chart costs about that much), so a running sweep re-renders
+ * the chart a few times a second rather than once per chunk and leaves the page most of its time.
+ */
+export const SWEEP_FLUSH_INTERVAL = 150;
+const FLUSH_MS_PER_POINT = 1 / 200;
+
+export function createExploreStore(
+  workerFactory: SweepWorkerFactory = browserSweepWorker,
+  flushInterval = SWEEP_FLUSH_INTERVAL,
+) {
   let worker: SweepWorker | null = null;
   let startedAt = 0;
+  let pending: SweepPoint[] = [];
+  let pendingDone = 0;
+  let flushTimer: ReturnType<typeof setTimeout> | null = null;
   const stopWorker = () => {
     worker?.terminate();
     worker = null;
+    if (flushTimer !== null) clearTimeout(flushTimer);
+    flushTimer = null;
   };
 
-  return create<ExploreState>()((set, get) => ({
-    view: 'floorplan',
-    settings: null,
-    xAxis: 'areaPerBit',
-    yAxis: 'senseMargin',
-    constraints: { minMargin: null, maxDelay: 1e-9 },
-    run: IDLE,
-    lastBuilt: null,
+  return create<ExploreState>()((set, get) => {
+    const flush = () => {
+      flushTimer = null;
+      const run = get().run;
+      if (pending.length === 0 && pendingDone === run.done) return;
+      const points = pending;
+      pending = [];
+      set({ run: { ...run, done: pendingDone, points: [...run.points, ...points] } });
+    };
+    return {
+      view: 'floorplan',
+      settings: null,
+      xAxis: 'areaPerBit',
+      yAxis: 'senseMargin',
+      constraints: { minMargin: null, maxDelay: 1e-9 },
+      run: IDLE,
+      lastBuilt: null,
 
-    setView(view) {
-      set({ view });
-    },
-    setSettings(settings) {
-      set({ settings });
-    },
-    setAxes(axes) {
-      set(axes);
-    },
-    setConstraints(patch) {
-      set({ constraints: { ...get().constraints, ...patch } });
-    },
-    startSweep(request) {
-      stopWorker();
-      const id = get().run.id + 1;
-      startedAt = performance.now();
-      set({ run: { ...IDLE, id, status: 'running', request }, lastBuilt: null });
-      const w = workerFactory();
-      worker = w;
-      w.onmessage = (event) => {
-        const report = event.data;
-        const run = get().run;
-        if (report.runId !== run.id || run.status !== 'running') return;
-        if (report.type === 'progress') {
-          set({
-            run: {
-              ...run,
-              done: report.done,
-              total: report.total,
-              points: [...run.points, ...report.points],
-            },
-          });
-        } else if (report.type === 'done') {
-          stopWorker();
-          set({ run: { ...run, status: 'done', elapsed: (performance.now() - startedAt) / 1000 } });
-        } else {
-          stopWorker();
-          set({ run: { ...run, status: 'failed', error: report.error } });
-        }
-      };
-      w.onerror = (event) => {
+      setView(view) {
+        set({ view });
+      },
+      setSettings(settings) {
+        set({ settings });
+      },
+      setAxes(axes) {
+        set(axes);
+      },
+      setConstraints(patch) {
+        set({ constraints: { ...get().constraints, ...patch } });
+      },
+      startSweep(request) {
         stopWorker();
-        set({ run: { ...get().run, status: 'failed', error: event.message || 'the sweep worker failed' } });
-      };
-      w.postMessage({ type: 'start', runId: id, request });
-    },
-    cancelSweep() {
-      if (get().run.status !== 'running') return;
-      stopWorker();
-      set({ run: { ...get().run, status: 'cancelled' } });
-    },
-    noteBuilt(built) {
-      set({ lastBuilt: built });
-    },
-  }));
+        const id = get().run.id + 1;
+        startedAt = performance.now();
+        pending = [];
+        pendingDone = 0;
+        set({ run: { ...IDLE, id, status: 'running', request }, lastBuilt: null });
+        const w = workerFactory();
+        worker = w;
+        w.onmessage = (event) => {
+          const report = event.data;
+          const run = get().run;
+          if (report.runId !== run.id || run.status !== 'running') return;
+          if (report.type === 'progress') {
+            pending.push(...report.points);
+            pendingDone = report.done;
+            if (run.total !== report.total) set({ run: { ...run, total: report.total } });
+            if (flushInterval <= 0) flush();
+            else flushTimer ??= setTimeout(flush, flushInterval + run.points.length * FLUSH_MS_PER_POINT);
+          } else if (report.type === 'done') {
+            stopWorker();
+            flush();
+            set({ run: { ...get().run, status: 'done', elapsed: (performance.now() - startedAt) / 1000 } });
+          } else {
+            stopWorker();
+            set({ run: { ...run, status: 'failed', error: report.error } });
+          }
+        };
+        w.onerror = (event) => {
+          stopWorker();
+          set({ run: { ...get().run, status: 'failed', error: event.message || 'the sweep worker failed' } });
+        };
+        w.postMessage({ type: 'start', runId: id, request });
+      },
+      cancelSweep() {
+        if (get().run.status !== 'running') return;
+        stopWorker();
+        flush();
+        set({ run: { ...get().run, status: 'cancelled' } });
+      },
+      noteBuilt(built) {
+        set({ lastBuilt: built });
+      },
+    };
+  });
 }
 
 export type ExploreStore = ReturnType<typeof createExploreStore>;

@@ -1,4 +1,4 @@
-import { describe, expect, it } from 'vitest';
+import { afterEach, describe, expect, it, vi } from 'vitest';
 import { runSweepRange, sweepSize, type SweepRequest } from '../../src/explore/sweep';
 import type { SweepCommand, SweepReport } from '../../src/explore/sweepProtocol';
 import { defaultSweepSettings, sweepRequestFor } from '../../src/explore/sweepSettings';
@@ -58,7 +58,7 @@ describe('explorer store', () => {
       const w = new StepWorker();
       workers.push(w);
       return w;
-    });
+    }, 0);
     const request = smallRequest();
     store.getState().startSweep(request);
     expect(store.getState().run.status).toBe('running');
@@ -81,7 +81,7 @@ describe('explorer store', () => {
       const w = new StepWorker();
       workers.push(w);
       return w;
-    });
+    }, 0);
     store.getState().startSweep(smallRequest());
     const w = workers[0];
     if (!w) throw new Error('no worker');
@@ -99,7 +99,7 @@ describe('explorer store', () => {
       const w = new StepWorker();
       workers.push(w);
       return w;
-    });
+    }, 0);
     store.getState().startSweep(smallRequest());
     store.getState().startSweep(smallRequest());
     const [first, second] = workers;
@@ -111,4 +111,32 @@ describe('explorer store', () => {
     expect(store.getState().run.points).toHaveLength(100);
     expect(store.getState().run.id).toBe(2);
   });
+
+  it('while a sweep runs, gathers chunks and shows them a few times a second', () => {
+    vi.useFakeTimers();
+    const workers: StepWorker[] = [];
+    const store = createExploreStore(() => {
+      const w = new StepWorker();
+      workers.push(w);
+      return w;
+    }, 150);
+    store.getState().startSweep(smallRequest());
+    const w = workers[0];
+    if (!w) throw new Error('no worker');
+    w.step();
+    w.step();
+    expect(store.getState().run.points).toHaveLength(0);
+    vi.advanceTimersByTime(160);
+    expect(store.getState().run.points).toHaveLength(200);
+    expect(store.getState().run.done).toBe(200);
+    w.step();
+    while (w.step());
+    // The last message flushes at once.
+    expect(store.getState().run.status).toBe('done');
+    expect(store.getState().run.points).toHaveLength(store.getState().run.total);
+  });
+});
+
+afterEach(() => {
+  vi.useRealTimers();
 });
