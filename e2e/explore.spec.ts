@@ -32,7 +32,8 @@ test('run a sweep, click a point, and the new variant has the point’s figures'
   for (const key of COMPARED)
     expected.set(key, (await explorer.figure('hover-point', key).textContent()) ?? '');
   expect(expected.get('areaPerBit')).toMatch(/µm²/);
-  await page.screenshot({ path: test.info().outputPath('explorer-hover.png') });
+  // The README's picture of the explorer.
+  await page.screenshot({ path: 'public/explorer.png' });
 
   // Click it: a new variant is built and becomes the design being edited.
   await page.mouse.down();
@@ -41,6 +42,12 @@ test('run a sweep, click a point, and the new variant has the point’s figures'
   for (const key of COMPARED)
     await expect(explorer.figure('built-point', key)).toHaveText(expected.get(key) ?? '');
   await expect(page.getByTestId('variant-switcher').locator('option')).toHaveCount(2);
+
+  // Other figures can go on the axes; a constrained one shades its infeasible stretch.
+  await page.getByTestId('y-axis').selectOption('wordlineDelay');
+  await expect(page.getByTestId('y-axis-label')).toContainText('Word-line delay');
+  await expect(page.getByTestId('infeasible-band')).toContainText('word line too slow');
+  await page.getByTestId('y-axis').selectOption('senseMargin');
 
   // The variants table shows it beside the original, with the same figures as the point.
   await page.getByTestId('view-variants').click();
