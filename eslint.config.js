@@ -27,7 +27,15 @@ export default tseslint.config(
     },
   },
   {
-    files: ['src/model/**', 'src/geometry/**', 'src/engine/**', 'src/io/**', 'src/cli/**'],
+    files: [
+      'src/model/**',
+      'src/geometry/**',
+      'src/engine/**',
+      'src/io/**',
+      'src/cli/**',
+      'src/build/**',
+      'src/explore/**',
+    ],
     rules: {
       'no-restricted-imports': [
         'error',
@@ -35,7 +43,7 @@ export default tseslint.config(
           patterns: [
             {
               group: uiPackages,
-              message: 'The model, geometry, engine, io and cli layers stay free of UI code.',
+              message: 'The model, geometry, engine, io, cli, build and explore layers stay free of UI code.',
             },
             {
               group: ['**/store/**', '**/canvas/**', '**/panels/**', '**/commands/**', '**/app/**'],

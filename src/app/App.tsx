@@ -3,6 +3,7 @@ import { Sidebar } from './Sidebar';
 import { NoticeBar } from './NoticeBar';
 import { Toolbar } from './Toolbar';
 import { useAutosave } from './useAutosave';
+import { ViewArea } from './ViewArea';
 
 export function App() {
   useAutosave();
@@ -11,7 +12,9 @@ export function App() {
       <Toolbar />
       <NoticeBar />
       <main className="workspace">
-        <FloorplanCanvas />
+        <ViewArea>
+          <FloorplanCanvas />
+        </ViewArea>
         <Sidebar />
       </main>
       <footer className="caution" data-testid="caution">

@@ -1,0 +1,148 @@
+import { expect, test } from '@playwright/test';
+import { ExplorerPage } from './explorerPage';
+
+/** Figures a built point and its variant must share. */
+const COMPARED = [
+  'areaPerBit',
+  'areaPerBitInF2',
+  'senseMargin',
+  'wordlineDelay',
+  'activationEnergyPerBit',
+  'arrayEfficiency',
+  'refreshBusyFraction',
+  'retentionTime',
+  'usableBits',
+] as const;
+
+test('run a sweep, click a point, and the new variant has the point’s figures', async ({ page }) => {
+  const errors: string[] = [];
+  page.on('pageerror', (e) => errors.push(e.message));
+  const explorer = new ExplorerPage(page);
+  await explorer.open();
+  expect(await explorer.sweepSize()).toBeGreaterThanOrEqual(1000);
+  await explorer.runSweep();
+  await expect(page.getByTestId('scatter')).toBeVisible();
+  await expect(page.getByTestId('front-point').first()).toBeVisible();
+  await expect(page.getByTestId('infeasible-band').first()).toBeAttached();
+  await page.screenshot({ path: test.info().outputPath('explorer.png') });
+
+  // Hover a point on the front: its figures show beside it.
+  await explorer.hoverFrontPoint(1);
+  const expected = new Map<string, string>();
+  for (const key of COMPARED)
+    expected.set(key, (await explorer.figure('hover-point', key).textContent()) ?? '');
+  expect(expected.get('areaPerBit')).toMatch(/µm²/);
+  // The README's picture of the explorer.
+  await page.screenshot({ path: 'public/explorer.png' });
+
+  // Click it: a new variant is built and becomes the design being edited.
+  await page.mouse.down();
+  await page.mouse.up();
+  await expect(page.getByTestId('built-note')).toBeVisible();
+  for (const key of COMPARED)
+    await expect(explorer.figure('built-point', key)).toHaveText(expected.get(key) ?? '');
+  await expect(page.getByTestId('variant-switcher').locator('option')).toHaveCount(2);
+
+  // Other figures can go on the axes; a constrained one shades its infeasible stretch.
+  await page.getByTestId('y-axis').selectOption('wordlineDelay');
+  await expect(page.getByTestId('y-axis-label')).toContainText('Word-line delay');
+  await expect(page.getByTestId('infeasible-band')).toContainText('word line too slow');
+  await page.getByTestId('y-axis').selectOption('senseMargin');
+
+  // The variants table shows it beside the original, with the same figures as the point.
+  await page.getByTestId('view-variants').click();
+  await expect(page.getByTestId('variant-col-v2')).toBeVisible();
+  await expect(page.getByTestId('active-v2')).toBeVisible();
+  for (const key of COMPARED)
+    await expect(page.getByTestId(`variant-v2-${key}`)).toHaveText(expected.get(key) ?? '');
+  await page.screenshot({ path: test.info().outputPath('variants.png') });
+
+  // The floorplan and its figures are the built bank's.
+  await page.getByTestId('view-floorplan').click();
+  await expect(page.getByTestId('total-areaPerBit-value')).toHaveText(expected.get('areaPerBit') ?? '');
+  await expect(page.getByTestId('total-worstSenseMargin-value')).toHaveText(
+    expected.get('senseMargin') ?? '',
+  );
+  await page.screenshot({ path: test.info().outputPath('built-floorplan.png') });
+  expect(errors).toEqual([]);
+});
+
+test('a large sweep keeps the page responsive and can be cancelled', async ({ page }) => {
+  const explorer = new ExplorerPage(page);
+  await explorer.open();
+  await explorer.setRange('bl', 8, 1024, 8);
+  await explorer.setRange('wl', 64, 2048, 64);
+  const size = await explorer.sweepSize();
+  expect(size).toBeGreaterThan(40_000);
+  // Record the longest gap between animation frames while the sweep runs.
+  await page.evaluate(() => {
+    const w = window as unknown as { longestFrameGap: number; watching: boolean };
+    w.longestFrameGap = 0;
+    w.watching = true;
+    let last = performance.now();
+    const tick = (now: number) => {
+      w.longestFrameGap = Math.max(w.longestFrameGap, now - last);
+      last = now;
+      if (w.watching) requestAnimationFrame(tick);
+    };
+    requestAnimationFrame(tick);
+  });
+  await page.getByTestId('run-sweep').click();
+  await expect(explorer.status()).toHaveAttribute('data-status', 'running');
+  // The page still answers while the worker sweeps: switch views and back.
+  await page.getByTestId('view-variants').click();
+  await expect(page.getByTestId('variants-table')).toBeVisible();
+  await page.getByTestId('view-explorer').click();
+  await page.getByTestId('cancel-sweep').click();
+  await expect(explorer.status()).toHaveAttribute('data-status', 'cancelled');
+  await expect(explorer.status()).toContainText('Cancelled after');
+  const gap = await page.evaluate(() => {
+    const w = window as unknown as { longestFrameGap: number; watching: boolean };
+    w.watching = false;
+    return w.longestFrameGap;
+  });
+  // Generous for a loaded 2-core machine; a sweep on the main thread would freeze it for seconds.
+  expect(gap).toBeLessThan(1000);
+  await expect(page.getByTestId('run-sweep')).toBeEnabled();
+});
+
+test('build one partition from the form, then rename, switch, delete and undo variants', async ({ page }) => {
+  const explorer = new ExplorerPage(page);
+  await explorer.open();
+  await page.getByTestId('build-kind').selectOption('dram-1t1c');
+  await page.getByTestId('build-architecture').selectOption('open');
+  await page.getByTestId('build-cell').selectOption('dram-open-6f2');
+  const bl = page.getByTestId('build-cells-per-bitline');
+  await bl.fill('256');
+  await bl.press('Enter');
+  await page.getByTestId('build-partition').click();
+  await expect(page.getByTestId('built-note')).toContainText('1T1C open 6F² · 256 × 1024');
+  await expect(page.getByTestId('design-name')).toContainText('64 Mib bank · 1T1C open 6F² · 256 × 1024');
+
+  await page.getByTestId('view-floorplan').click();
+  await expect(page.getByTestId('findings')).toContainText('lost');
+  await expect(page.getByTestId('findings')).not.toContainText('error');
+
+  await page.getByTestId('view-variants').click();
+  await page.getByTestId('rename-v2').click();
+  const name = page.getByTestId('variant-name-v2');
+  await name.fill('Open trial');
+  await name.press('Enter');
+  await expect(page.getByTestId('variant-title-v2')).toHaveText('Open trial');
+  await expect(page.getByTestId('design-name')).toHaveText('Open trial');
+  await expect(page.getByTestId('variant-v2-cells')).toHaveText('1T1C open 6F²');
+
+  await page.getByTestId('switch-v1').click();
+  await expect(page.getByTestId('design-name')).toHaveText('Wren bank section (invented demo)');
+  await expect(page.getByTestId('active-v1')).toBeVisible();
+  await page.getByTestId('delete-v2').click();
+  await expect(page.getByTestId('variant-col-v2')).toHaveCount(0);
+  await page.getByTestId('undo').click();
+  await expect(page.getByTestId('variant-title-v2')).toHaveText('Open trial');
+  await page.getByTestId('duplicate-v2').click();
+  await expect(page.getByTestId('variant-title-v3')).toHaveText('Open trial (copy)');
+  await expect(page.getByTestId('active-v3')).toBeVisible();
+  await page.getByTestId('variant-v3-areaPerBit').click();
+  await expect(page.getByTestId('explanation')).toContainText('A_total / usable bits');
+  await page.screenshot({ path: test.info().outputPath('variants-three.png') });
+});

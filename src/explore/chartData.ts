@@ -1,0 +1,106 @@
+import type { FindingKind } from '../engine/report';
+import { FIGURE_INFO, type AxisFigure, type PartitionFigures } from './figures';
+import { paretoFront } from './pareto';
+import type { SweepPoint } from './sweep';
+
+/** Limits a partition must meet to count as feasible. */
+export interface FeasibilityLimits {
+  /** Least net sense margin (V). */
+  readonly minMargin: number;
+  /** Longest word-line delay (s). */
+  readonly maxDelay: number;
+}
+
+/** Why a point is infeasible; empty when it is feasible. */
+export function infeasibleBecause(figures: PartitionFigures, limits: FeasibilityLimits): string[] {
+  const reasons: string[] = [];
+  if (figures.errorKinds.length > 0)
+    reasons.push(`failing check: ${figures.errorKinds.map(checkName).join(', ')}`);
+  if (!(figures.senseMargin >= limits.minMargin)) reasons.push('margin below the minimum');
+  if (!(figures.wordlineDelay <= limits.maxDelay)) reasons.push('word line slower than the maximum');
+  return reasons;
+}
+
+const CHECK_NAMES: Record<FindingKind, string> = {
+  unsensedBitlines: 'unsensed bit lines',
+  undrivenWordlines: 'undriven word lines',
+  overlap: 'overlap',
+  storedHighLimited: 'stored 1 limited',
+  senseMargin: 'sense margin',
+  senseAmpPitch: 'sense-amplifier pitch',
+  retention: 'retention',
+  openBitlineEdge: 'open-array edge',
+};
+
+export function checkName(kind: FindingKind): string {
+  return CHECK_NAMES[kind];
+}
+
+/** One plotted point: its place in the sweep and how it is drawn. */
+export interface PlottedPoint {
+  /** Index into the run's points. */
+  readonly point: number;
+  readonly x: number;
+  readonly y: number;
+  readonly cellIndex: number;
+  readonly processIndex: number;
+  readonly state: 'front' | 'feasible' | 'infeasible';
+}
+
+export interface ChartModel {
+  readonly plotted: readonly PlottedPoint[];
+  /** Indices into `plotted`, along x from best to worst. */
+  readonly front: readonly number[];
+  readonly counts: {
+    readonly points: number;
+    readonly plotted: number;
+    readonly feasible: number;
+    readonly unplanned: number;
+  };
+}
+
+/**
+ * What the scatter shows: every planned point with finite values on both axes, each marked feasible or
+ * not, and the Pareto front of the feasible ones for the axes' directions (lower area, higher margin…).
+ */
+export function chartModel(
+  points: readonly SweepPoint[],
+  xAxis: AxisFigure,
+  yAxis: AxisFigure,
+  limits: FeasibilityLimits,
+): ChartModel {
+  const plotted: PlottedPoint[] = [];
+  let feasible = 0;
+  let unplanned = 0;
+  points.forEach((p, i) => {
+    if (!p.figures) {
+      unplanned++;
+      return;
+    }
+    const x = p.figures[xAxis];
+    const y = p.figures[yAxis];
+    if (!Number.isFinite(x) || !Number.isFinite(y)) return;
+    const ok = infeasibleBecause(p.figures, limits).length === 0;
+    if (ok) feasible++;
+    plotted.push({
+      point: i,
+      x,
+      y,
+      cellIndex: p.cellIndex,
+      processIndex: p.processIndex,
+      state: ok ? 'feasible' : 'infeasible',
+    });
+  });
+  const feasibleIndices = plotted.map((p, i) => (p.state === 'feasible' ? i : -1)).filter((i) => i >= 0);
+  const direction = (axis: AxisFigure) => (FIGURE_INFO[axis].better === 'higher' ? 'max' : 'min');
+  const front = paretoFront(
+    feasibleIndices.map((i) => plotted[i] ?? { x: Number.NaN, y: Number.NaN }),
+    direction(xAxis),
+    direction(yAxis),
+  ).map((k) => feasibleIndices[k] ?? -1);
+  for (const i of front) {
+    const p = plotted[i];
+    if (p) plotted[i] = { ...p, state: 'front' };
+  }
+  return { plotted, front, counts: { points: points.length, plotted: plotted.length, feasible, unplanned } };
+}

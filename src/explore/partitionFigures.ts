@@ -1,0 +1,168 @@
+import type { BuildSpec } from '../build/buildPartition';
+import { planPartition, type PartitionPlan } from '../build/partitionPlan';
+import type { MatConnections } from '../engine/connectivity';
+import { matPhysics, senseAmpsOfMat, type DesignContext } from '../engine/matPhysics';
+import { offsetSigmaMultiplier } from '../engine/offset';
+import {
+  refreshBusyFraction,
+  refreshCycleTime,
+  refreshInterval,
+  refreshPower,
+  rowsPerRefreshCommand,
+} from '../engine/refresh';
+import type { FindingKind } from '../engine/report';
+import { leakageAtTemperature } from '../engine/retention';
+import { storedHighLevel, type StoredHighLevel } from '../engine/storedLevel';
+import { matGeometry, matRect } from '../geometry/matGeometry';
+import type { PlacedMat } from '../geometry/placedBlocks';
+import type { Mat } from '../model/block';
+import type { OperatingConditions } from '../model/operating';
+import type { ProcessProfile } from '../model/process';
+import type { PartitionFigures } from './figures';
+
+/** The spec of one partition to assess: a build spec without a library or name. */
+export type PartitionPointSpec = Omit<BuildSpec, 'cells' | 'name'>;
+
+export type PartitionFiguresResult =
+  | { readonly ok: true; readonly figures: PartitionFigures; readonly plan: PartitionPlan }
+  | { readonly ok: false; readonly error: string };
+
+/**
+ * Per-process values every point on that process shares (the stored-1 level needs a bisection), kept
+ * by process and operating conditions so a sweep computes them once.
+ */
+export class ProcessCache {
+  private readonly entries = new Map<
+    ProcessProfile,
+    { operating: OperatingConditions; storedHigh: StoredHighLevel; leakage: number }
+  >();
+
+  get(process: ProcessProfile, operating: OperatingConditions) {
+    const hit = this.entries.get(process);
+    if (hit && hit.operating === operating) return hit;
+    const entry = {
+      operating,
+      storedHigh: storedHighLevel(process),
+      leakage: leakageAtTemperature(
+        process.cellLeakageCurrent,
+        process.leakageReferenceTemperature,
+        process.leakageActivationEnergy,
+        operating.temperature,
+      ),
+    };
+    this.entries.set(process, entry);
+    return entry;
+  }
+}
+
+/** Every mat of a built bank has a sense-amplifier strip at both bit-line ends and drivers at both word-line ends. */
+const SERVED_BOTH_ENDS: MatConnections = {
+  senseAmpStripIds: [],
+  wordlineDriverIds: [],
+  unsensedBitlines: 0,
+  undrivenWordlines: 0,
+  senseAmpContacts: [],
+  senseAmpEnds: 2,
+};
+
+/**
+ * The comparison figures of the bank buildPartition() would build, without building it. Every mat of
+ * that bank is the same mat with the same neighbours: a sense-amplifier strip above and below, drivers
+ * left and right, so the engine's own matPhysics() runs once on one representative mat, and the totals
+ * follow in closed form from the plan (grid, bounding box, usable bits). Only the open-array edge loss
+ * differs between mats, and it changes nothing but the usable bits, which the plan counts. A test
+ * checks the result against evaluate() on the built design.
+ */
+export function partitionFigures(
+  spec: PartitionPointSpec,
+  cache: ProcessCache = new ProcessCache(),
+): PartitionFiguresResult {
+  const { process, operating, cell } = spec;
+  const planned = planPartition({
+    targetBits: spec.targetBits,
+    cell,
+    featureSize: process.featureSize,
+    cellsPerBitline: spec.cellsPerBitline,
+    cellsPerWordline: spec.cellsPerWordline,
+    strips: spec.strips,
+  });
+  if (!planned.ok) return planned;
+  const plan = planned.plan;
+  const block: Mat = {
+    id: 'mat-r0c0',
+    name: 'Mat 1.1',
+    type: 'mat',
+    x: 0,
+    y: 0,
+    cellId: cell.id,
+    cellsPerBitline: spec.cellsPerBitline,
+    cellsPerWordline: spec.cellsPerWordline,
+    bitlineAxis: 'vertical',
+  };
+  const geometry = matGeometry(block, cell, process.featureSize);
+  const placed: PlacedMat = { block, rect: matRect(block, geometry), cell, geometry };
+  const shared = cache.get(process, operating);
+  const senseAmpCount = senseAmpsOfMat(placed) * plan.matCount;
+  const ctx: DesignContext = {
+    process,
+    operating,
+    storedHigh: shared.storedHigh,
+    sigmaMultiplier: offsetSigmaMultiplier(senseAmpCount, operating.allowedSenseFailures),
+    leakage: shared.leakage,
+  };
+  const mat = matPhysics(placed, SERVED_BOTH_ENDS, 0, ctx);
+
+  const totalArea = plan.width * plan.height;
+  const cellArea = plan.usableBits * geometry.cellArea;
+  const areaPerBit = totalArea / plan.usableBits;
+  // Mats side by side share a row (one band), so the bank has matRows × word lines rows to refresh.
+  const rows = plan.matRows * geometry.wordlineCount;
+  const interval = refreshInterval(operating.refreshWindow, operating.refreshCommandsPerWindow);
+  const cycle = refreshCycleTime(
+    rowsPerRefreshCommand(rows, operating.refreshCommandsPerWindow),
+    operating.refreshRowsInParallel,
+    process.rowCycleTime,
+  );
+
+  const errorKinds: FindingKind[] = [];
+  const warningKinds: FindingKind[] = [];
+  if (plan.lostBits > 0) warningKinds.push('openBitlineEdge');
+  if (!mat.senseAmpFits) errorKinds.push('senseAmpPitch');
+  if (mat.retentionTime < operating.refreshWindow) errorKinds.push('retention');
+  if (mat.senseMarginAtRefresh < 0) errorKinds.push('senseMargin');
+  else if (mat.senseMarginAtRefresh < operating.minimumSenseMargin) warningKinds.push('senseMargin');
+  if (shared.storedHigh.limitedByWordline) warningKinds.push('storedHighLimited');
+
+  return {
+    ok: true,
+    plan,
+    figures: {
+      matCount: plan.matCount,
+      usableBits: plan.usableBits,
+      totalArea,
+      cellArea,
+      areaPerBit,
+      areaPerBitInF2: areaPerBit / (process.featureSize * process.featureSize),
+      arrayEfficiency: cellArea / totalArea,
+      senseMargin: mat.senseMarginAtRefresh,
+      senseSignalAtRefresh: mat.senseSignalAfterRefresh,
+      requiredSignal: mat.requiredSignal,
+      wordlineDelay: mat.wordlineDelay,
+      wordlineResistance: mat.wordlineResistance,
+      wordlineCapacitance: mat.wordlineCapacitance,
+      activationEnergyPerBit: mat.activationEnergy.perBit,
+      activationEnergy: mat.activationEnergy.total,
+      cellsPerWordline: spec.cellsPerWordline,
+      retentionTime: mat.retentionTime,
+      refreshCycleTime: cycle,
+      refreshInterval: interval,
+      refreshBusyFraction: refreshBusyFraction(cycle, interval),
+      refreshPower: refreshPower(
+        plan.matCount * mat.activationEnergy.total * mat.wordlineCount,
+        operating.refreshWindow,
+      ),
+      errorKinds: errorKinds.sort(),
+      warningKinds: warningKinds.sort(),
+    },
+  };
+}

@@ -1,0 +1,127 @@
+import type { BuildSpec } from '../build/buildPartition';
+import type { StripSizes } from '../build/partitionPlan';
+import type { CellDefinition } from '../model/cell';
+import type { OperatingConditions } from '../model/operating';
+import type { ProcessProfile } from '../model/process';
+import type { PartitionFigures } from './figures';
+import { partitionFigures, ProcessCache } from './partitionFigures';
+
+/**
+ * A design-space sweep: every combination of cells per bit line × cells per word line × cell × process,
+ * each assessed as the bank the partition builder would make for the target capacity.
+ */
+export interface SweepRequest {
+  readonly targetBits: number;
+  readonly strips: StripSizes;
+  readonly operating: OperatingConditions;
+  readonly cellsPerBitline: readonly number[];
+  readonly cellsPerWordline: readonly number[];
+  readonly cells: readonly CellDefinition[];
+  readonly processes: readonly ProcessProfile[];
+}
+
+/** One assessed combination. Indices point into the request's lists. */
+export interface SweepPoint {
+  readonly index: number;
+  readonly cellsPerBitline: number;
+  readonly cellsPerWordline: number;
+  readonly cellIndex: number;
+  readonly processIndex: number;
+  readonly matRows: number;
+  readonly matColumns: number;
+  /** Null when no bank could be planned (see `problem`). */
+  readonly figures: PartitionFigures | null;
+  readonly problem: string | null;
+}
+
+/** Most points one sweep may have; a sweep holds every point in memory. */
+export const MAX_SWEEP_POINTS = 100_000;
+
+export function sweepSize(request: SweepRequest): number {
+  return (
+    request.cellsPerBitline.length *
+    request.cellsPerWordline.length *
+    request.cells.length *
+    request.processes.length
+  );
+}
+
+/** Which values point `index` combines: cells per word line vary fastest, the process slowest. */
+export function sweepCoordinates(request: SweepRequest, index: number) {
+  const nWl = request.cellsPerWordline.length;
+  const nBl = request.cellsPerBitline.length;
+  const nCell = request.cells.length;
+  const wl = index % nWl;
+  const bl = Math.floor(index / nWl) % nBl;
+  const cellIndex = Math.floor(index / (nWl * nBl)) % nCell;
+  const processIndex = Math.floor(index / (nWl * nBl * nCell));
+  return {
+    cellsPerBitline: request.cellsPerBitline[bl] ?? Number.NaN,
+    cellsPerWordline: request.cellsPerWordline[wl] ?? Number.NaN,
+    cellIndex,
+    processIndex,
+  };
+}
+
+/** The build spec of one point, for building it as a design. */
+export function pointBuildSpec(request: SweepRequest, point: SweepPoint): Omit<BuildSpec, 'cells' | 'name'> {
+  const cell = request.cells[point.cellIndex];
+  const process = request.processes[point.processIndex];
+  if (!cell || !process) throw new Error(`point ${point.index} is outside the sweep`);
+  return {
+    targetBits: request.targetBits,
+    cell,
+    process,
+    operating: request.operating,
+    cellsPerBitline: point.cellsPerBitline,
+    cellsPerWordline: point.cellsPerWordline,
+    strips: request.strips,
+  };
+}
+
+/** Assesses points [start, end) of a sweep. Pure; the worker calls it chunk by chunk. */
+export function runSweepRange(
+  request: SweepRequest,
+  start: number,
+  end: number,
+  cache: ProcessCache = new ProcessCache(),
+): SweepPoint[] {
+  const points: SweepPoint[] = [];
+  const last = Math.min(end, sweepSize(request));
+  for (let index = start; index < last; index++) {
+    const c = sweepCoordinates(request, index);
+    const cell = request.cells[c.cellIndex];
+    const process = request.processes[c.processIndex];
+    if (!cell || !process) continue;
+    const result = partitionFigures(
+      {
+        targetBits: request.targetBits,
+        cell,
+        process,
+        operating: request.operating,
+        cellsPerBitline: c.cellsPerBitline,
+        cellsPerWordline: c.cellsPerWordline,
+        strips: request.strips,
+      },
+      cache,
+    );
+    points.push({
+      index,
+      ...c,
+      matRows: result.ok ? result.plan.matRows : 0,
+      matColumns: result.ok ? result.plan.matColumns : 0,
+      figures: result.ok ? result.figures : null,
+      problem: result.ok ? null : result.error,
+    });
+  }
+  return points;
+}
+
+/** Whole numbers from `from` to `to` in steps of `step` (both ends included when they fall on a step). */
+export function steppedValues(from: number, to: number, step: number): number[] {
+  if (!(step > 0) || !Number.isFinite(from) || !Number.isFinite(to) || to < from) return [];
+  const values: number[] = [];
+  for (let v = from; v <= to + 1e-9 && values.length <= MAX_SWEEP_POINTS; v += step)
+    values.push(Math.round(v));
+  return [...new Set(values)];
+}

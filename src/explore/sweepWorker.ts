@@ -1,0 +1,43 @@
+/**
+ * The sweep's Web Worker: a thin shell around runSweepRange(), which is pure and tested in Node. It
+ * assesses the points chunk by chunk and posts each chunk with the progress; the app cancels a sweep by
+ * terminating the worker.
+ */
+import { ProcessCache } from './partitionFigures';
+import { runSweepRange, sweepSize } from './sweep';
+import { SWEEP_CHUNK, type SweepCommand, type SweepReport } from './sweepProtocol';
+
+interface WorkerScope {
+  postMessage(message: SweepReport): void;
+  addEventListener(type: 'message', listener: (event: MessageEvent<SweepCommand>) => void): void;
+}
+
+const scope = self as unknown as WorkerScope;
+
+scope.addEventListener('message', (event) => {
+  const command = event.data;
+  if (command.type !== 'start') return;
+  const { runId, request } = command;
+  try {
+    const started = performance.now();
+    const total = sweepSize(request);
+    const cache = new ProcessCache();
+    for (let start = 0; start < total; start += SWEEP_CHUNK) {
+      const points = runSweepRange(request, start, start + SWEEP_CHUNK, cache);
+      scope.postMessage({
+        type: 'progress',
+        runId,
+        done: Math.min(total, start + SWEEP_CHUNK),
+        total,
+        points,
+      });
+    }
+    scope.postMessage({ type: 'done', runId, total, elapsed: (performance.now() - started) / 1000 });
+  } catch (error) {
+    scope.postMessage({
+      type: 'failed',
+      runId,
+      error: error instanceof Error ? error.message : String(error),
+    });
+  }
+});

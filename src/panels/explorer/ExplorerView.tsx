@@ -1,0 +1,236 @@
+import { useMemo, useState } from 'react';
+import { buildPartition, shortProcessName } from '../../build/buildPartition';
+import { markerPath, ScatterChart, type ScatterDatum, type ShadedBand } from '../../charts/ScatterChart';
+import { createVariant } from '../../commands/createVariant';
+import { chartModel, type FeasibilityLimits } from '../../explore/chartData';
+import { FIGURE_INFO, type AxisFigure } from '../../explore/figures';
+import { pointBuildSpec, type SweepRequest } from '../../explore/sweep';
+import { defaultSweepSettings } from '../../explore/sweepSettings';
+import { formatQuantity } from '../../model/units';
+import { useAppStore } from '../../store/useAppStore';
+import { useExploreStore } from '../../store/useExploreStore';
+import { BuilderForm } from './BuilderForm';
+import { ChartControls } from './ChartControls';
+import { PointCard } from './PointCard';
+import { seriesColour } from './seriesStyle';
+import { BankControls, SweepControls } from './SweepControls';
+
+/** Infeasible stretches of the axes that carry a constrained figure. */
+function constraintBands(xAxis: AxisFigure, yAxis: AxisFigure, limits: FeasibilityLimits): ShadedBand[] {
+  const bands: ShadedBand[] = [];
+  for (const [axis, figure] of [
+    ['x', xAxis],
+    ['y', yAxis],
+  ] as const) {
+    if (figure === 'senseMargin') {
+      bands.push({ axis, from: -Infinity, to: limits.minMargin, label: 'margin below minimum' });
+    }
+    if (figure === 'wordlineDelay') {
+      bands.push({ axis, from: limits.maxDelay, to: Infinity, label: 'word line too slow' });
+    }
+  }
+  return bands;
+}
+
+/**
+ * The design-space explorer: sweep settings on the left; on the right the scatter of every swept
+ * partition with its Pareto front, a tooltip per point, and clicking a point builds it as a new variant.
+ */
+export function ExplorerView() {
+  const design = useAppStore((s) => s.history.present);
+  const execute = useAppStore((s) => s.execute);
+  const stored = useExploreStore((s) => s.settings);
+  const setSettings = useExploreStore((s) => s.setSettings);
+  const run = useExploreStore((s) => s.run);
+  const xAxis = useExploreStore((s) => s.xAxis);
+  const yAxis = useExploreStore((s) => s.yAxis);
+  const constraints = useExploreStore((s) => s.constraints);
+  const lastBuilt = useExploreStore((s) => s.lastBuilt);
+  const noteBuilt = useExploreStore((s) => s.noteBuilt);
+  const [hovered, setHovered] = useState<number | null>(null);
+  const [pickError, setPickError] = useState<string | null>(null);
+  const [builtByForm, setBuiltByForm] = useState<string | null>(null);
+
+  const settings = useMemo(() => stored ?? defaultSweepSettings(design), [stored, design]);
+  const minMargin =
+    constraints.minMargin ?? run.request?.operating.minimumSenseMargin ?? design.operating.minimumSenseMargin;
+  const limits = useMemo(
+    () => ({ minMargin, maxDelay: constraints.maxDelay }),
+    [minMargin, constraints.maxDelay],
+  );
+  const model = useMemo(
+    () => chartModel(run.points, xAxis, yAxis, limits),
+    [run.points, xAxis, yAxis, limits],
+  );
+  const data = useMemo(
+    (): ScatterDatum[] =>
+      model.plotted.map((p) => ({
+        x: p.x,
+        y: p.y,
+        colour: seriesColour(p.cellIndex),
+        shape: p.processIndex,
+        state: p.state,
+      })),
+    [model],
+  );
+  const frontSet = useMemo(() => new Set(model.front), [model]);
+  const request = run.request;
+  const hoveredPoint = hovered !== null ? run.points[model.plotted[hovered]?.point ?? -1] : undefined;
+
+  const pick = (plottedIndex: number) => {
+    const plotted = model.plotted[plottedIndex];
+    const point = plotted ? run.points[plotted.point] : undefined;
+    if (!point || !request || !point.figures) return;
+    const built = buildPartition({ ...pointBuildSpec(request, point), cells: design.cells });
+    if (!built.ok) {
+      setPickError(built.error);
+      return;
+    }
+    if (execute(createVariant, { design: built.design })) {
+      setPickError(null);
+      setBuiltByForm(null);
+      noteBuilt({ pointIndex: point.index, name: built.design.name });
+    } else {
+      setPickError(useAppStore.getState().lastError);
+    }
+  };
+
+  const xInfo = FIGURE_INFO[xAxis];
+  const yInfo = FIGURE_INFO[yAxis];
+  const builtPoint = lastBuilt ? run.points[lastBuilt.pointIndex] : undefined;
+  const percent = run.total > 0 ? Math.round((run.done / run.total) * 100) : 0;
+
+  return (
+    <div className="explorer" data-testid="explorer">
+      <div className="explorer-controls">
+        <BankControls settings={settings} onChange={setSettings} />
+        <SweepControls design={design} settings={settings} onChange={setSettings} />
+        <ChartControls minMargin={minMargin} />
+        <BuilderForm design={design} settings={settings} onBuilt={(name) => setBuiltByForm(name)} />
+      </div>
+      <div className="explorer-main">
+        <div className="sweep-status" data-testid="sweep-status" data-status={run.status}>
+          <div
+            className="progress"
+            role="progressbar"
+            aria-valuemin={0}
+            aria-valuemax={100}
+            aria-valuenow={percent}
+          >
+            <div className="progress-bar" style={{ width: `${percent}%` }} data-testid="sweep-progress" />
+          </div>
+          <span>
+            {run.status === 'idle' && 'No sweep yet.'}
+            {run.status === 'running' &&
+              `Sweeping… ${run.done.toLocaleString('en-US')} of ${run.total.toLocaleString('en-US')} points`}
+            {run.status === 'cancelled' &&
+              `Cancelled after ${run.done.toLocaleString('en-US')} of ${run.total.toLocaleString('en-US')} points.`}
+            {run.status === 'failed' && `The sweep failed: ${run.error ?? 'unknown error'}`}
+            {run.status === 'done' &&
+              `${run.total.toLocaleString('en-US')} points in ${formatQuantity(run.elapsed ?? 0, 'time', 3)}`}
+            {run.points.length > 0 &&
+              ` · ${model.counts.feasible.toLocaleString('en-US')} feasible · ${model.front.length} on the front` +
+                (model.counts.unplanned > 0
+                  ? ` · ${model.counts.unplanned.toLocaleString('en-US')} need too many mats`
+                  : '')}
+          </span>
+        </div>
+        {run.points.length === 0 ? (
+          <div className="chart-empty">
+            <p>
+              Run a sweep to see {yInfo.label.toLowerCase()} against {xInfo.label.toLowerCase()} for every
+              partition, with the Pareto front of the feasible ones. Hover a point for its figures; click it
+              to build that bank as a new variant.
+            </p>
+          </div>
+        ) : (
+          <ScatterChart
+            data={data}
+            front={model.front}
+            x={{
+              label: xInfo.label,
+              better: xInfo.better,
+              format: (v) => formatQuantity(v, xInfo.quantity, 3),
+            }}
+            y={{
+              label: yInfo.label,
+              better: yInfo.better,
+              format: (v) => formatQuantity(v, yInfo.quantity, 3),
+            }}
+            bands={constraintBands(xAxis, yAxis, limits)}
+            hovered={hovered !== null && hovered < data.length ? hovered : null}
+            onHover={setHovered}
+            onPick={pick}
+            renderTooltip={() =>
+              hoveredPoint && request ? (
+                <>
+                  <PointCard
+                    point={hoveredPoint}
+                    request={request}
+                    limits={limits}
+                    onFront={hovered !== null && frontSet.has(hovered)}
+                    testId="hover-point"
+                  />
+                  <div className="point-hint">Click to build this bank as a new variant</div>
+                </>
+              ) : null
+            }
+          />
+        )}
+        {request && run.points.length > 0 && <SeriesLegend request={request} />}
+        {pickError && (
+          <p className="field-error" role="alert">
+            {pickError}
+          </p>
+        )}
+        {builtByForm && (
+          <p className="built-note" data-testid="built-note">
+            Built “{builtByForm}” as a new variant; it is now the design being edited.
+          </p>
+        )}
+        {lastBuilt && builtPoint && request && (
+          <div className="built" data-testid="built">
+            <p className="built-note" data-testid="built-note">
+              Built “{lastBuilt.name}” as a new variant; it is now the design being edited. Compare it under
+              Variants.
+            </p>
+            <PointCard
+              point={builtPoint}
+              request={request}
+              limits={limits}
+              onFront={model.plotted.some((p, i) => p.point === builtPoint.index && frontSet.has(i))}
+              explainable
+              testId="built-point"
+            />
+          </div>
+        )}
+      </div>
+    </div>
+  );
+}
+
+function SeriesLegend({ request }: { readonly request: SweepRequest }) {
+  return (
+    <div className="series-legend" data-testid="series-legend">
+      {request.cells.map((c, i) => (
+        <span key={c.id}>
+          <span className="swatch-dot" style={{ background: seriesColour(i) }} /> {c.name}
+        </span>
+      ))}
+      {request.processes.map((p, i) => (
+        <span key={p.id + i}>
+          <svg width="14" height="14" viewBox="-7 -7 14 14" aria-hidden="true">
+            <path d={markerPath(i, 60)} fill="#4a5260" />
+          </svg>{' '}
+          {shortProcessName(p)}
+        </span>
+      ))}
+      <span>
+        <span className="swatch-dot infeasible" /> infeasible
+      </span>
+      <span>
+        <span className="front-key" /> Pareto front
+      </span>
+    </div>
+  );
+}

@@ -1,0 +1,166 @@
+import type { StripSizes } from '../../build/partitionPlan';
+import { capacityLabel } from '../../build/buildPartition';
+import { MAX_SWEEP_POINTS, sweepSize } from '../../explore/sweep';
+import {
+  processChoices,
+  sweepRequestFor,
+  TARGET_CAPACITIES,
+  type SweepSettings,
+} from '../../explore/sweepSettings';
+import type { Design } from '../../model/design';
+import { formatQuantity } from '../../model/units';
+import { useExploreStore } from '../../store/useExploreStore';
+import { QuantityField } from '../QuantityField';
+import { RangeField } from './RangeField';
+import { seriesColour } from './seriesStyle';
+
+const STRIP_FIELDS: readonly { key: keyof StripSizes; label: string; optional: boolean }[] = [
+  { key: 'senseAmpStripHeight', label: 'Sense-amp strip height', optional: false },
+  { key: 'wordlineDriverStripWidth', label: 'Driver strip width', optional: false },
+  { key: 'rowDecoderWidth', label: 'Row decoder width', optional: true },
+  { key: 'columnDecoderHeight', label: 'Column decoder height', optional: true },
+];
+
+interface Props {
+  readonly design: Design;
+  readonly settings: SweepSettings;
+  onChange(settings: SweepSettings): void;
+}
+
+/** The bank every point is built as (capacity, periphery) and the ranges and sets to sweep. */
+export function BankControls({ settings, onChange }: Omit<Props, 'design'>) {
+  return (
+    <section className="panel" aria-labelledby="bank-heading">
+      <h2 id="bank-heading">Bank</h2>
+      <div className="field">
+        <label htmlFor="target-capacity">Capacity</label>
+        <select
+          id="target-capacity"
+          data-testid="target-capacity"
+          value={settings.targetBits}
+          onChange={(e) => onChange({ ...settings, targetBits: Number(e.target.value) })}
+        >
+          {TARGET_CAPACITIES.map((bits) => (
+            <option key={bits} value={bits}>
+              {capacityLabel(bits)}
+            </option>
+          ))}
+        </select>
+      </div>
+      {STRIP_FIELDS.map((f) => (
+        <QuantityField
+          key={f.key}
+          id={`strip-${f.key}`}
+          label={f.label}
+          quantity="length"
+          value={settings.strips[f.key]}
+          onCommit={(value) => {
+            if (!(value > 0 || (f.optional && value === 0)) || value > 1e-3) {
+              return f.optional ? 'between 0 (none) and 1 mm' : 'above zero and at most 1 mm';
+            }
+            onChange({ ...settings, strips: { ...settings.strips, [f.key]: value } });
+            return null;
+          }}
+        />
+      ))}
+    </section>
+  );
+}
+
+export function SweepControls({ design, settings, onChange }: Props) {
+  const run = useExploreStore((s) => s.run);
+  const startSweep = useExploreStore((s) => s.startSweep);
+  const cancelSweep = useExploreStore((s) => s.cancelSweep);
+  const request = sweepRequestFor(settings, design);
+  const size = sweepSize(request);
+  const running = run.status === 'running';
+  const toggle = (list: readonly string[], id: string, on: boolean) =>
+    on ? [...list.filter((x) => x !== id), id] : list.filter((x) => x !== id);
+  const choices = processChoices(design);
+
+  return (
+    <section className="panel" aria-labelledby="sweep-heading">
+      <h2 id="sweep-heading">Sweep</h2>
+      <RangeField
+        id="sweep-bl"
+        label="Cells per bit line"
+        value={settings.cellsPerBitline}
+        onCommit={(cellsPerBitline) => onChange({ ...settings, cellsPerBitline })}
+      />
+      <RangeField
+        id="sweep-wl"
+        label="Cells per word line"
+        value={settings.cellsPerWordline}
+        onCommit={(cellsPerWordline) => onChange({ ...settings, cellsPerWordline })}
+      />
+      <fieldset className="checklist">
+        <legend>Cells</legend>
+        {design.cells.map((c) => {
+          const on = settings.cellIds.includes(c.id);
+          const colourIndex = request.cells.findIndex((rc) => rc.id === c.id);
+          return (
+            <label key={c.id}>
+              <input
+                type="checkbox"
+                checked={on}
+                data-testid={`sweep-cell-${c.id}`}
+                onChange={(e) =>
+                  onChange({ ...settings, cellIds: toggle(settings.cellIds, c.id, e.target.checked) })
+                }
+              />
+              <span
+                className="swatch-dot"
+                style={{ background: on ? seriesColour(colourIndex) : '#c9ccd1' }}
+              />
+              {c.name}
+            </label>
+          );
+        })}
+      </fieldset>
+      <fieldset className="checklist">
+        <legend>Processes</legend>
+        {choices.map((c) => (
+          <label key={c.id}>
+            <input
+              type="checkbox"
+              checked={settings.processIds.includes(c.id)}
+              data-testid={`sweep-process-${c.id}`}
+              onChange={(e) =>
+                onChange({ ...settings, processIds: toggle(settings.processIds, c.id, e.target.checked) })
+              }
+            />
+            {c.label}
+          </label>
+        ))}
+      </fieldset>
+      <p className="hint">
+        Operating conditions come from the active design:{' '}
+        {formatQuantity(design.operating.temperature, 'temperature')}, refresh window{' '}
+        {formatQuantity(design.operating.refreshWindow, 'time')} (Process tab).
+      </p>
+      <div className="sweep-run">
+        <span data-testid="sweep-size">{size.toLocaleString('en-US')} points</span>
+        {running ? (
+          <button type="button" className="primary" data-testid="cancel-sweep" onClick={cancelSweep}>
+            Cancel
+          </button>
+        ) : (
+          <button
+            type="button"
+            className="primary"
+            data-testid="run-sweep"
+            disabled={size === 0 || size > MAX_SWEEP_POINTS}
+            onClick={() => startSweep(request)}
+            title={
+              size > MAX_SWEEP_POINTS
+                ? `at most ${MAX_SWEEP_POINTS.toLocaleString('en-US')} points`
+                : undefined
+            }
+          >
+            Run sweep
+          </button>
+        )}
+      </div>
+    </section>
+  );
+}

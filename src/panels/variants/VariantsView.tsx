@@ -1,0 +1,278 @@
+import { useState } from 'react';
+import { shortProcessName } from '../../build/buildPartition';
+import { deleteVariant } from '../../commands/deleteVariant';
+import { duplicateVariant } from '../../commands/duplicateVariant';
+import { renameVariant } from '../../commands/renameVariant';
+import { switchVariant } from '../../commands/switchVariant';
+import { explainFigure } from '../../explore/explainFigure';
+import { FIGURE_INFO, figuresFromReport, TABLE_FIGURES, type FigureKey } from '../../explore/figures';
+import { isMat } from '../../model/block';
+import type { VariantDesign } from '../../model/design';
+import { hasRoomForVariant, variantEntries } from '../../model/variants';
+import { formatQuantity } from '../../model/units';
+import { useAppStore } from '../../store/useAppStore';
+import { ExplanationCard } from '../FigureRow';
+import { useRunCommand } from '../useRunCommand';
+import { variantReport } from './variantReports';
+
+/** What a variant is made of, in words: its cells and cell counts ("mixed" when mats differ). */
+function describe(design: VariantDesign) {
+  const mats = design.blocks.filter(isMat);
+  const names = [...new Set(mats.map((m) => design.cells.find((c) => c.id === m.cellId)?.name ?? m.cellId))];
+  const counts = [...new Set(mats.map((m) => `${m.cellsPerBitline} × ${m.cellsPerWordline}`))];
+  return {
+    cells: names.length === 0 ? '—' : names.length === 1 ? names[0] : `${names.length} cells (mixed)`,
+    counts: counts.length === 0 ? '—' : counts.length === 1 ? counts[0] : 'mixed',
+    process: shortProcessName(design.process),
+  };
+}
+
+/** Relative difference beyond rounding noise. */
+function differs(a: number, b: number): boolean {
+  if (Number.isNaN(a) || Number.isNaN(b)) return Number.isNaN(a) !== Number.isNaN(b);
+  return Math.abs(a - b) > 1e-9 * Math.max(Math.abs(a), Math.abs(b));
+}
+
+function deltaText(value: number, reference: number): string {
+  if (!Number.isFinite(value) || !Number.isFinite(reference) || reference === 0) return '';
+  const change = (value - reference) / Math.abs(reference);
+  const sign = change > 0 ? '+' : '−';
+  return `${sign}${Math.abs(change * 100).toPrecision(2)} %`;
+}
+
+/**
+ * The variants of the document side by side: one column per variant, one row per figure, each value
+ * compared with the active variant's (green better, red worse). Rename in place; switch, duplicate and
+ * delete are undoable commands. Click a value for its formula, inputs and source.
+ */
+export function VariantsView() {
+  const design = useAppStore((s) => s.history.present);
+  const activeReport = useAppStore((s) => s.report);
+  const requestFit = useAppStore((s) => s.requestFit);
+  const run = useRunCommand();
+  const [open, setOpen] = useState<{ id: string; key: FigureKey } | null>(null);
+  const [error, setError] = useState<string | null>(null);
+  const [renaming, setRenaming] = useState<string | null>(null);
+  const entries = variantEntries(design);
+  const columns = entries.map((v) => {
+    const report = v.active ? activeReport : variantReport(v.design);
+    const errors = report.findings.filter((f) => f.severity === 'error').length;
+    return {
+      ...v,
+      figures: figuresFromReport(report),
+      errors,
+      warnings: report.findings.length - errors,
+      about: describe(v.design),
+    };
+  });
+  const reference = columns.find((c) => c.active) ?? columns[0];
+  const act = (error: string | null) => setError(error);
+  const openColumn = open ? columns.find((c) => c.id === open.id) : undefined;
+
+  return (
+    <div className="variants-view" data-testid="variants-view">
+      <p className="hint">
+        Each variant is a whole design; the one being edited is marked. Values are compared with it: green is
+        better, red worse. Click a value for how it was computed.
+      </p>
+      <div className="table-scroll">
+        <table className="variants-table" data-testid="variants-table">
+          <thead>
+            <tr>
+              <th scope="col" className="row-head">
+                Variant
+              </th>
+              {columns.map((c) => (
+                <th
+                  key={c.id}
+                  scope="col"
+                  className={c.active ? 'active' : ''}
+                  data-testid={`variant-col-${c.id}`}
+                >
+                  <VariantName
+                    id={c.id}
+                    name={c.name}
+                    renaming={renaming === c.id}
+                    onRename={(name) => {
+                      const refused = run(renameVariant, { variantId: c.id, name });
+                      act(refused);
+                      if (!refused) setRenaming(null);
+                    }}
+                    onCancel={() => setRenaming(null)}
+                  />
+                  <div className="variant-actions">
+                    {c.active ? (
+                      <span className="active-badge" data-testid={`active-${c.id}`}>
+                        editing
+                      </span>
+                    ) : (
+                      <button
+                        type="button"
+                        data-testid={`switch-${c.id}`}
+                        onClick={() => {
+                          const refused = run(switchVariant, { variantId: c.id });
+                          act(refused);
+                          if (!refused) requestFit();
+                        }}
+                      >
+                        Switch to
+                      </button>
+                    )}
+                    <button type="button" data-testid={`rename-${c.id}`} onClick={() => setRenaming(c.id)}>
+                      Rename
+                    </button>
+                    <button
+                      type="button"
+                      data-testid={`duplicate-${c.id}`}
+                      disabled={!hasRoomForVariant(design)}
+                      onClick={() => act(run(duplicateVariant, { variantId: c.id }))}
+                    >
+                      Duplicate
+                    </button>
+                    <button
+                      type="button"
+                      data-testid={`delete-${c.id}`}
+                      disabled={columns.length === 1}
+                      onClick={() => act(run(deleteVariant, { variantId: c.id }))}
+                    >
+                      Delete
+                    </button>
+                  </div>
+                </th>
+              ))}
+            </tr>
+          </thead>
+          <tbody>
+            {(['cells', 'counts', 'process'] as const).map((key) => {
+              const values = columns.map((c) => c.about[key]);
+              const anyDiff = values.some((v) => v !== reference?.about[key]);
+              return (
+                <tr key={key} className={anyDiff ? 'differs' : ''}>
+                  <th scope="row" className="row-head">
+                    {key === 'cells' ? 'Cell' : key === 'counts' ? 'Cells per BL × WL' : 'Process'}
+                  </th>
+                  {columns.map((c) => (
+                    <td
+                      key={c.id}
+                      className={`${c.active ? 'active' : ''} ${c.about[key] !== reference?.about[key] ? 'changed' : ''}`}
+                      data-testid={`variant-${c.id}-${key}`}
+                    >
+                      {c.about[key]}
+                    </td>
+                  ))}
+                </tr>
+              );
+            })}
+            {TABLE_FIGURES.map((key) => {
+              const info = FIGURE_INFO[key];
+              const ref = reference?.figures[key] ?? Number.NaN;
+              const anyDiff = columns.some((c) => differs(c.figures[key], ref));
+              return (
+                <tr key={key} className={anyDiff ? 'differs' : ''}>
+                  <th scope="row" className="row-head">
+                    {info.label}
+                  </th>
+                  {columns.map((c) => {
+                    const value = c.figures[key];
+                    const changed = !c.active && differs(value, ref);
+                    const verdict =
+                      info.better === 'neither'
+                        ? 'changed'
+                        : (info.better === 'lower' ? value < ref : value > ref)
+                          ? 'better'
+                          : 'worse';
+                    return (
+                      <td key={c.id} className={`num ${c.active ? 'active' : ''} ${changed ? verdict : ''}`}>
+                        <button
+                          type="button"
+                          className="value"
+                          data-testid={`variant-${c.id}-${key}`}
+                          onClick={() =>
+                            setOpen(open?.id === c.id && open.key === key ? null : { id: c.id, key })
+                          }
+                        >
+                          {formatQuantity(value, info.quantity)}
+                        </button>
+                        {changed && <span className="delta">{deltaText(value, ref)}</span>}
+                      </td>
+                    );
+                  })}
+                </tr>
+              );
+            })}
+            <tr className={columns.some((c) => c.errors !== reference?.errors) ? 'differs' : ''}>
+              <th scope="row" className="row-head">
+                Checks
+              </th>
+              {columns.map((c) => (
+                <td
+                  key={c.id}
+                  className={`${c.active ? 'active' : ''} ${c.errors > 0 ? 'worse' : ''}`}
+                  data-testid={`variant-${c.id}-checks`}
+                >
+                  {c.errors === 0 ? 'no errors' : `${c.errors} errors`}
+                  {c.warnings > 0 ? `, ${c.warnings} warnings` : ''}
+                </td>
+              ))}
+            </tr>
+          </tbody>
+        </table>
+      </div>
+      {error && (
+        <p className="field-error" role="alert">
+          {error}
+        </p>
+      )}
+      {open && openColumn && (
+        <div className="variant-explanation">
+          <h3>
+            {openColumn.name}: {FIGURE_INFO[open.key].label}
+          </h3>
+          <ExplanationCard
+            explanation={explainFigure(open.key, openColumn.figures, {
+              featureSize: openColumn.design.process.featureSize,
+              wordlineDriverResistance: openColumn.design.process.wordlineDriverResistance,
+              refreshWindow: openColumn.design.operating.refreshWindow,
+            })}
+          />
+        </div>
+      )}
+    </div>
+  );
+}
+
+/** A variant's name; while renaming, an input that commits on Enter or blur and cancels on Escape. */
+function VariantName(props: {
+  id: string;
+  name: string;
+  renaming: boolean;
+  onRename(name: string): void;
+  onCancel(): void;
+}) {
+  const { id, name, renaming, onRename, onCancel } = props;
+  const [text, setText] = useState(name);
+  if (!renaming) {
+    return (
+      <div className="variant-title" data-testid={`variant-title-${id}`}>
+        {name}
+      </div>
+    );
+  }
+  const commit = () => (text === name ? onCancel() : onRename(text));
+  return (
+    <input
+      className="variant-name"
+      data-testid={`variant-name-${id}`}
+      aria-label="Variant name"
+      // Focus follows the Rename button the person just pressed.
+      autoFocus
+      value={text}
+      onChange={(e) => setText(e.target.value)}
+      onBlur={commit}
+      onKeyDown={(e) => {
+        if (e.key === 'Enter') commit();
+        if (e.key === 'Escape') onCancel();
+      }}
+    />
+  );
+}

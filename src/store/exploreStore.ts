@@ -1,0 +1,182 @@
+import { create } from 'zustand';
+import type { AxisFigure } from '../explore/figures';
+import type { SweepPoint, SweepRequest } from '../explore/sweep';
+import type { SweepCommand, SweepReport } from '../explore/sweepProtocol';
+import type { SweepSettings } from '../explore/sweepSettings';
+
+/**
+ * Session state of the explorer and the variants view: which main view shows, the sweep settings and
+ * its results, the chart's axes and constraints. None of it is part of the document or its undo
+ * history; a sweep's points are recomputed, not saved.
+ */
+export type MainView = 'floorplan' | 'explorer' | 'variants';
+export type SweepStatus = 'idle' | 'running' | 'done' | 'cancelled' | 'failed';
+
+export interface SweepRun {
+  readonly id: number;
+  readonly status: SweepStatus;
+  readonly request: SweepRequest | null;
+  readonly points: readonly SweepPoint[];
+  readonly done: number;
+  readonly total: number;
+  /** Wall time from start to the last point (s), once done. */
+  readonly elapsed: number | null;
+  readonly error: string | null;
+}
+
+/** Chart limits; points outside them are infeasible. */
+export interface Constraints {
+  /** Least net sense margin (V); null follows the design's minimum-margin target. */
+  readonly minMargin: number | null;
+  /** Longest word-line delay (s). */
+  readonly maxDelay: number;
+}
+
+/** What the store needs of a Web Worker, so tests can run the sweep in-process. */
+export interface SweepWorker {
+  postMessage(command: SweepCommand): void;
+  terminate(): void;
+  onmessage: ((event: MessageEvent<SweepReport>) => void) | null;
+  onerror: ((event: ErrorEvent) => void) | null;
+}
+export type SweepWorkerFactory = () => SweepWorker;
+
+/** The app's worker: bundled by Vite from the module next to the sweep core. */
+export const browserSweepWorker: SweepWorkerFactory = () =>
+  new Worker(new URL('../explore/sweepWorker.ts', import.meta.url), {
+    type: 'module',
+  }) as unknown as SweepWorker;
+
+export interface ExploreState {
+  readonly view: MainView;
+  /** Null until someone changes a setting: the defaults then follow the active design. */
+  readonly settings: SweepSettings | null;
+  readonly xAxis: AxisFigure;
+  readonly yAxis: AxisFigure;
+  readonly constraints: Constraints;
+  readonly run: SweepRun;
+  /** The variant last built from a point, to confirm what happened. */
+  readonly lastBuilt: { readonly pointIndex: number; readonly name: string } | null;
+
+  setView(view: MainView): void;
+  setSettings(settings: SweepSettings): void;
+  setAxes(axes: { xAxis?: AxisFigure; yAxis?: AxisFigure }): void;
+  setConstraints(patch: Partial<Constraints>): void;
+  startSweep(request: SweepRequest): void;
+  cancelSweep(): void;
+  noteBuilt(built: { pointIndex: number; name: string } | null): void;
+}
+
+const IDLE: SweepRun = {
+  id: 0,
+  status: 'idle',
+  request: null,
+  points: [],
+  done: 0,
+  total: 0,
+  elapsed: null,
+  error: null,
+};
+
+/**
+ * Points arriving while a sweep runs are gathered and shown at most every this many ms, plus 1 ms per
+ * 200 points already shown (redrawing the chart costs about that much), so a running sweep re-renders
+ * the chart a few times a second rather than once per chunk and leaves the page most of its time.
+ */
+export const SWEEP_FLUSH_INTERVAL = 150;
+const FLUSH_MS_PER_POINT = 1 / 200;
+
+export function createExploreStore(
+  workerFactory: SweepWorkerFactory = browserSweepWorker,
+  flushInterval = SWEEP_FLUSH_INTERVAL,
+) {
+  let worker: SweepWorker | null = null;
+  let startedAt = 0;
+  let pending: SweepPoint[] = [];
+  let pendingDone = 0;
+  let flushTimer: ReturnType<typeof setTimeout> | null = null;
+  const stopWorker = () => {
+    worker?.terminate();
+    worker = null;
+    if (flushTimer !== null) clearTimeout(flushTimer);
+    flushTimer = null;
+  };
+
+  return create<ExploreState>()((set, get) => {
+    const flush = () => {
+      flushTimer = null;
+      const run = get().run;
+      if (pending.length === 0 && pendingDone === run.done) return;
+      const points = pending;
+      pending = [];
+      set({ run: { ...run, done: pendingDone, points: [...run.points, ...points] } });
+    };
+    return {
+      view: 'floorplan',
+      settings: null,
+      xAxis: 'areaPerBit',
+      yAxis: 'senseMargin',
+      constraints: { minMargin: null, maxDelay: 1e-9 },
+      run: IDLE,
+      lastBuilt: null,
+
+      setView(view) {
+        set({ view });
+      },
+      setSettings(settings) {
+        set({ settings });
+      },
+      setAxes(axes) {
+        set(axes);
+      },
+      setConstraints(patch) {
+        set({ constraints: { ...get().constraints, ...patch } });
+      },
+      startSweep(request) {
+        stopWorker();
+        const id = get().run.id + 1;
+        startedAt = performance.now();
+        pending = [];
+        pendingDone = 0;
+        set({ run: { ...IDLE, id, status: 'running', request }, lastBuilt: null });
+        const w = workerFactory();
+        worker = w;
+        w.onmessage = (event) => {
+          const report = event.data;
+          const run = get().run;
+          if (report.runId !== run.id || run.status !== 'running') return;
+          if (report.type === 'progress') {
+            pending.push(...report.points);
+            pendingDone = report.done;
+            if (run.total !== report.total) set({ run: { ...run, total: report.total } });
+            if (flushInterval <= 0) flush();
+            else flushTimer ??= setTimeout(flush, flushInterval + run.points.length * FLUSH_MS_PER_POINT);
+          } else if (report.type === 'done') {
+            stopWorker();
+            flush();
+            set({ run: { ...get().run, status: 'done', elapsed: (performance.now() - startedAt) / 1000 } });
+          } else {
+            stopWorker();
+            set({ run: { ...run, status: 'failed', error: report.error } });
+          }
+        };
+        w.onerror = (event) => {
+          stopWorker();
+          set({ run: { ...get().run, status: 'failed', error: event.message || 'the sweep worker failed' } });
+        };
+        w.postMessage({ type: 'start', runId: id, request });
+      },
+      cancelSweep() {
+        if (get().run.status !== 'running') return;
+        stopWorker();
+        flush();
+        set({ run: { ...get().run, status: 'cancelled' } });
+      },
+      noteBuilt(built) {
+        set({ lastBuilt: built });
+      },
+    };
+  });
+}
+
+export type ExploreStore = ReturnType<typeof createExploreStore>;

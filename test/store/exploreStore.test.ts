@@ -1,0 +1,142 @@
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { runSweepRange, sweepSize, type SweepRequest } from '../../src/explore/sweep';
+import type { SweepCommand, SweepReport } from '../../src/explore/sweepProtocol';
+import { defaultSweepSettings, sweepRequestFor } from '../../src/explore/sweepSettings';
+import { demoDesign } from '../../src/model/demoDesign';
+import { createExploreStore, type SweepWorker } from '../../src/store/exploreStore';
+
+/** A worker that runs in-process: each step() delivers one chunk, as the real one posts them. */
+class StepWorker implements SweepWorker {
+  onmessage: ((event: MessageEvent<SweepReport>) => void) | null = null;
+  onerror: ((event: ErrorEvent) => void) | null = null;
+  terminated = false;
+  private pending: SweepReport[] = [];
+
+  postMessage(command: SweepCommand) {
+    const total = sweepSize(command.request);
+    for (let s = 0; s < total; s += 100) {
+      const points = runSweepRange(command.request, s, s + 100);
+      this.pending.push({
+        type: 'progress',
+        runId: command.runId,
+        done: Math.min(total, s + 100),
+        total,
+        points,
+      });
+    }
+    this.pending.push({ type: 'done', runId: command.runId, total, elapsed: 0.01 });
+  }
+  terminate() {
+    this.terminated = true;
+  }
+  /** Delivers the next message even after termination, to show stale messages are ignored. */
+  step(): boolean {
+    const next = this.pending.shift();
+    if (!next) return false;
+    this.onmessage?.({ data: next } as MessageEvent<SweepReport>);
+    return true;
+  }
+}
+
+function smallRequest(): SweepRequest {
+  const design = demoDesign();
+  const settings = defaultSweepSettings(design);
+  return sweepRequestFor(
+    {
+      ...settings,
+      cellsPerBitline: { from: 128, to: 512, step: 128 },
+      cellsPerWordline: { from: 256, to: 1024, step: 256 },
+    },
+    design,
+  );
+}
+
+describe('explorer store', () => {
+  it('collects a sweep chunk by chunk and finishes with every point', () => {
+    const workers: StepWorker[] = [];
+    const store = createExploreStore(() => {
+      const w = new StepWorker();
+      workers.push(w);
+      return w;
+    }, 0);
+    const request = smallRequest();
+    store.getState().startSweep(request);
+    expect(store.getState().run.status).toBe('running');
+    const w = workers[0];
+    if (!w) throw new Error('no worker');
+    w.step();
+    expect(store.getState().run.points).toHaveLength(100);
+    expect(store.getState().run.done).toBe(100);
+    while (w.step());
+    const run = store.getState().run;
+    expect(run.status).toBe('done');
+    expect(run.points).toHaveLength(sweepSize(request));
+    expect(run.points.map((p) => p.index)).toEqual([...Array(sweepSize(request)).keys()]);
+    expect(w.terminated).toBe(true);
+  });
+
+  it('cancels: the worker is terminated and late messages change nothing', () => {
+    const workers: StepWorker[] = [];
+    const store = createExploreStore(() => {
+      const w = new StepWorker();
+      workers.push(w);
+      return w;
+    }, 0);
+    store.getState().startSweep(smallRequest());
+    const w = workers[0];
+    if (!w) throw new Error('no worker');
+    w.step();
+    store.getState().cancelSweep();
+    expect(w.terminated).toBe(true);
+    expect(store.getState().run.status).toBe('cancelled');
+    w.step();
+    expect(store.getState().run.points).toHaveLength(100);
+  });
+
+  it('a new sweep replaces a running one and ignores the old run', () => {
+    const workers: StepWorker[] = [];
+    const store = createExploreStore(() => {
+      const w = new StepWorker();
+      workers.push(w);
+      return w;
+    }, 0);
+    store.getState().startSweep(smallRequest());
+    store.getState().startSweep(smallRequest());
+    const [first, second] = workers;
+    if (!first || !second) throw new Error('expected two workers');
+    expect(first.terminated).toBe(true);
+    first.step();
+    expect(store.getState().run.points).toHaveLength(0);
+    second.step();
+    expect(store.getState().run.points).toHaveLength(100);
+    expect(store.getState().run.id).toBe(2);
+  });
+
+  it('while a sweep runs, gathers chunks and shows them a few times a second', () => {
+    vi.useFakeTimers();
+    const workers: StepWorker[] = [];
+    const store = createExploreStore(() => {
+      const w = new StepWorker();
+      workers.push(w);
+      return w;
+    }, 150);
+    store.getState().startSweep(smallRequest());
+    const w = workers[0];
+    if (!w) throw new Error('no worker');
+    w.step();
+    w.step();
+    expect(store.getState().run.points).toHaveLength(0);
+    vi.advanceTimersByTime(160);
+    expect(store.getState().run.points).toHaveLength(200);
+    expect(store.getState().run.done).toBe(200);
+    w.step();
+    while (w.step());
+    // The last message flushes at once.
+    expect(store.getState().run.status).toBe('done');
+    expect(store.getState().run.points).toHaveLength(store.getState().run.total);
+  });
+});
+
+afterEach(() => {
+  vi.useRealTimers();
+});
