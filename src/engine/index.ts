@@ -9,3 +9,4 @@ export { storedHighLevel, thresholdWithBodyEffect, type StoredHighLevel } from '
 export { explainMatFigure, explainTotal, MAT_FIGURES, TOTAL_FIGURES } from './explain';
 export type { Explanation, ExplanationInput, MatFigureKey, TotalFigureKey } from './explain';
 export type { Finding, FindingKind, MatReport, Report, Severity, Totals } from './report';
+export { preparePreview, previewReport, type PreviewBase } from './preview';
