@@ -1,7 +1,7 @@
-import { FloorplanCanvas } from '../canvas/FloorplanCanvas';
 import { ChecksPanel } from '../panels/ChecksPanel';
 import { MetricsPanel } from '../panels/MetricsPanel';
 import { PropertiesPanel } from '../panels/PropertiesPanel';
+import { EditorColumn } from './EditorColumn';
 import { Toolbar } from './Toolbar';
 
 export function App() {
@@ -9,7 +9,7 @@ export function App() {
     <div className="app">
       <Toolbar />
       <main className="workspace">
-        <FloorplanCanvas />
+        <EditorColumn />
         <aside className="sidebar">
           <PropertiesPanel />
           <MetricsPanel />

@@ -1,7 +1,7 @@
 import { BLOCK_TYPE_LABEL, type BlockType } from '../model/block';
-import { BLOCK_STYLE, ERROR_STROKE } from './blockStyle';
+import { BLOCK_STYLE, ERROR_STROKE, WARNING_STROKE } from './blockStyle';
 
-const ORDER: readonly BlockType[] = ['mat', 'senseAmpStrip', 'wordlineDriverStrip', 'rowDecoder'];
+const ORDER: readonly BlockType[] = ['mat', 'senseAmpStrip', 'wordlineDriverStrip', 'rowDecoder', 'spacer'];
 
 /** Key to the block colours, drawn over the canvas corner. */
 export function Legend() {
@@ -19,9 +19,16 @@ export function Legend() {
       <li>
         <span
           className="swatch"
-          style={{ background: 'transparent', borderColor: ERROR_STROKE, borderWidth: 2 }}
+          style={{ background: 'rgba(198, 40, 40, 0.16)', borderColor: ERROR_STROKE, borderWidth: 2 }}
         />
         failing check
+      </li>
+      <li>
+        <span
+          className="swatch"
+          style={{ background: 'rgba(201, 133, 0, 0.16)', borderColor: WARNING_STROKE, borderWidth: 2 }}
+        />
+        warning
       </li>
     </ul>
   );

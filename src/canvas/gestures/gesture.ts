@@ -103,15 +103,19 @@ export function chosenCell(design: Design, options: ToolOptions): CellDefinition
  * The pitch a set of blocks moves by: the line pitch of the first mat among them, else the pitch of the
  * cell new mats would use (so strips stay on the same grid as the mats they serve).
  */
-export function movePitch(ctx: EditorContext, blocks: readonly Block[]): Step {
-  const F = ctx.design.process.featureSize;
+export function pitchFor(design: Design, options: ToolOptions, blocks: readonly Block[]): Step {
+  const F = design.process.featureSize;
   for (const b of blocks) {
     if (b.type !== 'mat') continue;
-    const cell = cellOf(ctx.design, b.cellId);
+    const cell = cellOf(design, b.cellId);
     if (cell) return matLinePitch(cell, F, b.bitlineAxis);
   }
-  const cell = chosenCell(ctx.design, ctx.options);
-  return cell ? matLinePitch(cell, F, ctx.options.bitlineAxis) : { x: F, y: F };
+  const cell = chosenCell(design, options);
+  return cell ? matLinePitch(cell, F, options.bitlineAxis) : { x: F, y: F };
+}
+
+export function movePitch(ctx: EditorContext, blocks: readonly Block[]): Step {
+  return pitchFor(ctx.design, ctx.options, blocks);
 }
 
 /** Snap targets from every block except the excluded ones. */
