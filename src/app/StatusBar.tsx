@@ -1,3 +1,4 @@
+import { Legend } from '../canvas/Legend';
 import { formatQuantity, formatScaled } from '../model/units';
 import { useEditorStore } from '../store/editorStore';
 import { useAppStore } from '../store/useAppStore';
@@ -26,6 +27,7 @@ export function StatusBar() {
           {lastError}
         </span>
       )}
+      <Legend />
     </div>
   );
 }

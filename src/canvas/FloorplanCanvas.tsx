@@ -5,7 +5,6 @@ import { useEditorStore } from '../store/editorStore';
 import { useAppStore } from '../store/useAppStore';
 import { CanvasController } from './CanvasController';
 import { CANVAS_BACKGROUND } from './blockStyle';
-import { Legend } from './Legend';
 import './canvas.css';
 
 function useElementSize(ref: React.RefObject<HTMLDivElement | null>) {
@@ -82,7 +81,6 @@ export function FloorplanCanvas() {
           <PaintedLayer layerRef={rulers} paint={view.paintRulers} />
         </Stage>
       )}
-      <Legend />
     </div>
   );
 }

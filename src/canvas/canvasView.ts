@@ -4,11 +4,12 @@ import { placedDesign } from '../geometry/placedIndex';
 import type { AppStore } from '../store/appStore';
 import type { EditorStore } from '../store/editorStore';
 import type { GesturePreview } from './gestures/gesture';
-import { paintBlocks } from './paint/paintBlocks';
+import { BlocksCache } from './paint/blocksCache';
 import { paintGrid } from './paint/paintGrid';
 import { paintOverlay } from './paint/paintOverlay';
 import { paintRulers } from './paint/paintRulers';
 import { markersOf, sameMarkers, type Scene } from './paint/scene';
+import { timed } from './perfProbe';
 
 export interface CanvasLayers {
   readonly grid: Konva.Layer;
@@ -65,16 +66,20 @@ export class CanvasView {
   }
 
   readonly paintGrid = (ctx: CanvasRenderingContext2D) => paintGrid(ctx, this.scene());
-  readonly paintBlocks = (ctx: CanvasRenderingContext2D) => paintBlocks(ctx, this.scene());
+  private readonly blocksCache = new BlocksCache();
+  readonly paintBlocks = (ctx: CanvasRenderingContext2D) =>
+    timed('paintBlocks', () => this.blocksCache.paint(ctx, this.scene()));
   readonly paintRulers = (ctx: CanvasRenderingContext2D) =>
     paintRulers(ctx, this.scene(), this.input.pointer());
   readonly paintOverlay = (ctx: CanvasRenderingContext2D) =>
-    paintOverlay(ctx, this.scene(), {
-      selection: this.app.getState().selectedIds,
-      handles: this.input.handles(),
-      preview: this.input.preview(),
-      pointer: this.input.pointer(),
-    });
+    timed('paintOverlay', () =>
+      paintOverlay(ctx, this.scene(), {
+        selection: this.app.getState().selectedIds,
+        handles: this.input.handles(),
+        preview: this.input.preview(),
+        pointer: this.input.pointer(),
+      }),
+    );
 
   /** Asks Konva to repaint layers on the next animation frame (several asks make one paint). */
   redraw(what: LayerName): void {

@@ -8,6 +8,10 @@ export interface PerfSamples {
   readonly liveReportLatency: number[];
   /** Time to compute one live report (ms). */
   readonly liveReportCompute: number[];
+  /** Time to paint the blocks layer once (ms). */
+  readonly paintBlocks: number[];
+  /** Time to paint the overlay layer once (ms). */
+  readonly paintOverlay: number[];
 }
 
 declare global {
@@ -17,7 +21,17 @@ declare global {
 }
 
 const enabled = typeof window !== 'undefined' && new URLSearchParams(window.location.search).has('perf');
-if (enabled) window.matloomPerf = { liveReportLatency: [], liveReportCompute: [] };
+if (enabled)
+  window.matloomPerf = { liveReportLatency: [], liveReportCompute: [], paintBlocks: [], paintOverlay: [] };
+
+/** Runs `work` and records how long it took under `kind` (only when the probe is on). */
+export function timed<T>(kind: keyof PerfSamples, work: () => T): T {
+  if (!enabled) return work();
+  const start = performance.now();
+  const result = work();
+  recordPerf(kind, performance.now() - start);
+  return result;
+}
 
 export function recordPerf(kind: keyof PerfSamples, ms: number): void {
   const samples = enabled ? window.matloomPerf?.[kind] : undefined;

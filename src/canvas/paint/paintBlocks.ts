@@ -18,12 +18,18 @@ const TYPE_ORDER: readonly BlockType[] = [
   'senseAmpStrip',
 ];
 
-/**
- * The blocks layer: every visible block as a filled rectangle, batched into one path per block type so
- * that a 4,096-mat floorplan is a handful of canvas calls; outlines where blocks are big enough; more
- * detail (cells, line directions, labels) as they grow on screen; and finding markers on top.
- */
+/** The blocks layer without a cache: the blocks, then the finding markers on top. */
 export function paintBlocks(ctx: CanvasRenderingContext2D, scene: Scene): void {
+  paintBlockShapes(ctx, scene);
+  paintMarkers(ctx, scene);
+}
+
+/**
+ * Every visible block as a filled rectangle, grouped by type so that each colour is set once; outlines
+ * where blocks are big enough; more detail (cells, line directions, labels) as they grow on screen; and
+ * blocks a gesture is moving drawn faintly in their old place.
+ */
+export function paintBlockShapes(ctx: CanvasRenderingContext2D, scene: Scene): void {
   const { viewport, placed } = scene;
   const k = pxPerMetre(viewport);
   const ox = viewport.offsetX;
@@ -44,15 +50,21 @@ export function paintBlocks(ctx: CanvasRenderingContext2D, scene: Scene): void {
     else byType.set(p.block.type, [p]);
   }
 
+  // Rectangles are snapped to whole pixels and filled one by one: axis-aligned, pixel-aligned fills
+  // need no anti-aliasing, which keeps a frame of 12,000 blocks cheap to rasterise.
   const detailed: PlacedBlock[] = [];
   for (const type of TYPE_ORDER) {
     const list = byType.get(type);
     if (!list) continue;
     const style = BLOCK_STYLE[type];
-    ctx.beginPath();
-    for (const p of list) ctx.rect(p.rect.x * k + ox, p.rect.y * k + oy, p.rect.width * k, p.rect.height * k);
     ctx.fillStyle = style.fill;
-    ctx.fill();
+    for (const p of list) {
+      const x0 = Math.round(p.rect.x * k + ox);
+      const y0 = Math.round(p.rect.y * k + oy);
+      const x1 = Math.round((p.rect.x + p.rect.width) * k + ox);
+      const y1 = Math.round((p.rect.y + p.rect.height) * k + oy);
+      ctx.fillRect(x0, y0, Math.max(1, x1 - x0), Math.max(1, y1 - y0));
+    }
     ctx.beginPath();
     let outlined = 0;
     for (const p of list) {
@@ -60,9 +72,11 @@ export function paintBlocks(ctx: CanvasRenderingContext2D, scene: Scene): void {
       const h = p.rect.height * k;
       if (w < OUTLINE_MIN_PX || h < OUTLINE_MIN_PX) continue;
       outlined++;
-      const x = Math.round(p.rect.x * k + ox) + 0.5;
-      const y = Math.round(p.rect.y * k + oy) + 0.5;
-      ctx.rect(x, y, Math.max(0, Math.round(w) - 1), Math.max(0, Math.round(h) - 1));
+      const x0 = Math.round(p.rect.x * k + ox);
+      const y0 = Math.round(p.rect.y * k + oy);
+      const x1 = Math.round((p.rect.x + p.rect.width) * k + ox);
+      const y1 = Math.round((p.rect.y + p.rect.height) * k + oy);
+      ctx.rect(x0 + 0.5, y0 + 0.5, Math.max(0, x1 - x0 - 1), Math.max(0, y1 - y0 - 1));
       if (w >= 24 && h >= 12) detailed.push(p);
     }
     if (outlined > 0) {
@@ -89,8 +103,6 @@ export function paintBlocks(ctx: CanvasRenderingContext2D, scene: Scene): void {
     ctx.stroke();
     ctx.restore();
   }
-
-  paintMarkers(ctx, scene, k);
 }
 
 function paintStripTag(
@@ -118,15 +130,15 @@ function paintStripTag(
   ctx.textAlign = 'center';
   ctx.textBaseline = 'middle';
   const name = p.block.name || p.block.id;
-  const full = name.toLowerCase().startsWith(tag.toLowerCase()) ? name : `${tag} · ${name}`;
-  const text = ctx.measureText(full).width < long - 8 ? full : tag;
+  const text = ctx.measureText(name).width < long - 8 ? name : tag;
   ctx.fillText(text, 0, 0);
   ctx.restore();
 }
 
 /** Outlines and tints on blocks named by findings, in the colour of the worst severity. */
-function paintMarkers(ctx: CanvasRenderingContext2D, scene: Scene, k: number): void {
+export function paintMarkers(ctx: CanvasRenderingContext2D, scene: Scene): void {
   const { viewport, placed } = scene;
+  const k = pxPerMetre(viewport);
   const ox = viewport.offsetX;
   const oy = viewport.offsetY;
   for (const severity of ['warning', 'error'] as const) {

@@ -143,7 +143,8 @@ function paintCells(ctx: CanvasRenderingContext2D, mat: PlacedMat, scene: Scene,
   // Folded arrays hold a cell at every other crossing (a checkerboard); open arrays at every one.
   const folded = crossingOccupancy(mat.cell.bitlineArchitecture) < 1;
   const phase = mat.block.mirrored ? 1 : 0;
-  const size = Math.max(2, Math.min(pitchX, pitchY) * k * 0.4);
+  // A storage node is a dot on its crossing, a third of the pitch across but never a blot (px).
+  const radius = Math.max(1, Math.min(Math.min(pitchX, pitchY) * k * 0.17, 7));
   ctx.fillStyle = STORAGE_NODE_FILL;
   ctx.beginPath();
   for (let i = firstX; i <= lastX; i++) {
@@ -151,7 +152,8 @@ function paintCells(ctx: CanvasRenderingContext2D, mat: PlacedMat, scene: Scene,
       if (folded && (i + j + phase) % 2 !== 0) continue;
       const sx = (r.x + (i + 0.5) * pitchX) * k + ox;
       const sy = (r.y + (j + 0.5) * pitchY) * k + oy;
-      ctx.rect(sx - size / 2, sy - size / 2, size, size);
+      ctx.moveTo(sx + radius, sy);
+      ctx.arc(sx, sy, radius, 0, 2 * Math.PI);
     }
   }
   ctx.fill();

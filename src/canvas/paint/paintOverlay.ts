@@ -26,7 +26,8 @@ export function paintOverlay(ctx: CanvasRenderingContext2D, scene: Scene, state:
     if (scene.hidden.has(id)) continue;
     const i = placed.positionOf.get(id);
     const p = i === undefined ? undefined : placed.placed[i];
-    if (p) selected.push(grown(toScreen(viewport, p.rect), SELECTION_MIN_PX));
+    // Drawn just outside the block, so that a finding's outline stays visible inside it.
+    if (p) selected.push(outset(grown(toScreen(viewport, p.rect), SELECTION_MIN_PX), 2));
   }
   ctx.beginPath();
   let inView = 0;
@@ -55,6 +56,10 @@ export function paintOverlay(ctx: CanvasRenderingContext2D, scene: Scene, state:
     }
   }
   if (state.preview) paintPreview(ctx, scene, state.preview, state.pointer);
+}
+
+function outset(r: Rect, by: number): Rect {
+  return { x: r.x - by, y: r.y - by, width: r.width + 2 * by, height: r.height + 2 * by };
 }
 
 function grown(r: Rect, min: number): Rect {
