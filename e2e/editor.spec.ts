@@ -223,6 +223,43 @@ test.describe('floorplan editor journeys', () => {
     await page.screenshot({ path: test.info().outputPath('6-cells-close-up.png') });
     await page.keyboard.press('f');
     await expect.poll(async () => (await app.camera()).scale).toBeLessThan(10);
+
+    // The pan tool (2) and Space + drag with any tool move the camera by the drag.
+    const before = await app.camera();
+    await page.keyboard.press('2');
+    await app.drag(await app.canvasPoint(600, 400), await app.canvasPoint(500, 350));
+    await expect.poll(async () => (await app.camera()).offsetX).toBeCloseTo(before.offsetX - 100, 6);
+    await page.keyboard.press('1');
+    await page.keyboard.down('Space');
+    await app.drag(await app.canvasPoint(500, 350), await app.canvasPoint(600, 400));
+    await page.keyboard.up('Space');
+    await expect.poll(async () => (await app.camera()).offsetY).toBeCloseTo(before.offsetY, 6);
+    await expect(app.selectedCount()).toHaveText('0 selected');
+
+    // Z frames the selection.
+    await app.clickBlock(demo, 'sa-r2c2');
+    await page.keyboard.press('z');
+    await expect.poll(async () => (await app.camera()).scale).toBeGreaterThan(before.scale * 2);
+  });
+
+  test('a mat resizes by its handle in whole cells, in one undo step', async ({ page }) => {
+    const app = new EditorPage(page);
+    const demo = loadDemoDesign();
+    await app.open();
+    await app.clickBlock(demo, 'mat-r0c0');
+    const mat = demo.blocks.find((b) => b.id === 'mat-r0c0');
+    if (!mat) throw new Error('demo lacks mat-r0c0');
+    // East handle: the right edge at mid-height (the demo mat is 36.864 µm square).
+    const east = await app.worldPoint(mat.x + 36.864e-6, mat.y + 18.432e-6);
+    await app.drag(east, { x: east.x - 30, y: east.y + 3 });
+    const cells = Number(await app.field('cells-per-wordline').inputValue());
+    expect(cells).toBeLessThan(512);
+    expect(Number.isInteger(cells)).toBe(true);
+    await expect(app.field('cells-per-bitline')).toHaveValue('512');
+    await expect(app.field('block-x')).toHaveValue('21 µm');
+    await page.keyboard.press('Control+z');
+    await expect(app.field('cells-per-wordline')).toHaveValue('512');
+    await expect(page.getByTestId('undo')).toBeDisabled();
   });
 
   test('a 4,096-mat floorplan loads, a mat drags and the drag undoes in one step', async ({ page }) => {

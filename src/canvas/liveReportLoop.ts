@@ -1,6 +1,7 @@
 import { preparePreview, previewReport, type PreviewBase } from '../engine';
 import type { AppStore } from '../store/appStore';
-import { setLiveReport } from '../store/liveReport';
+import { setLiveReport, useLiveReport } from '../store/liveReport';
+import { sameVisibleFigures } from './sameFigures';
 import type { Gesture } from './gestures/gesture';
 import { recordPerf } from './perfProbe';
 
@@ -39,7 +40,10 @@ export class LiveReportLoop {
     const start = performance.now();
     const s = this.app.getState();
     this.base ??= preparePreview(s.history.present, s.report, gesture.hiddenIds);
-    setLiveReport(previewReport(this.base, changed));
+    const next = previewReport(this.base, changed);
+    // Panels re-render only when a figure or a finding they show has changed.
+    const shown = useLiveReport.getState().report ?? s.report;
+    if (!sameVisibleFigures(shown, next, s.selectedIds)) setLiveReport(next);
     const end = performance.now();
     recordPerf('liveReportCompute', end - start);
     recordPerf('liveReportLatency', end - this.eventTime);

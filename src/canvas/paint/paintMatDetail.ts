@@ -5,7 +5,7 @@ import { BITLINE_STROKE, BLOCK_STYLE, STORAGE_NODE_FILL, WORDLINE_STROKE } from 
 import { pxPerMetre, visibleWorld, type Scene } from './scene';
 
 /** Individual lines are drawn once neighbouring lines are this far apart on screen (px). */
-const LINES_MIN_PITCH_PX = 4;
+export const LINES_MIN_PITCH_PX = 4;
 /** Storage nodes are drawn once lines are this far apart (px). */
 const NODES_MIN_PITCH_PX = 9;
 
@@ -119,7 +119,7 @@ function paintCells(ctx: CanvasRenderingContext2D, mat: PlacedMat, scene: Scene,
   const left = Math.max(r.x, view.x) * k + ox;
   const right = Math.min(r.x + r.width, view.x + view.width) * k + ox;
 
-  ctx.lineWidth = 1;
+  // Bit lines heavier than word lines, so the two directions read apart even without colour.
   ctx.beginPath();
   for (let i = firstX; i <= lastX; i++) {
     const sx = (r.x + (i + 0.5) * pitchX) * k + ox;
@@ -127,7 +127,8 @@ function paintCells(ctx: CanvasRenderingContext2D, mat: PlacedMat, scene: Scene,
     ctx.lineTo(sx, bottom);
   }
   ctx.strokeStyle = vertical ? BITLINE_STROKE : WORDLINE_STROKE;
-  ctx.globalAlpha = 0.55;
+  ctx.lineWidth = vertical ? 1.6 : 1;
+  ctx.globalAlpha = 0.6;
   ctx.stroke();
   ctx.beginPath();
   for (let j = firstY; j <= lastY; j++) {
@@ -136,8 +137,10 @@ function paintCells(ctx: CanvasRenderingContext2D, mat: PlacedMat, scene: Scene,
     ctx.lineTo(right, sy);
   }
   ctx.strokeStyle = vertical ? WORDLINE_STROKE : BITLINE_STROKE;
+  ctx.lineWidth = vertical ? 1 : 1.6;
   ctx.stroke();
   ctx.globalAlpha = 1;
+  ctx.lineWidth = 1;
 
   if (!nodes) return;
   // Folded arrays hold a cell at every other crossing (a checkerboard); open arrays at every one.

@@ -1,8 +1,18 @@
 import { handlePosition, RESIZE_HANDLES } from '../../geometry/resize';
 import type { Rect } from '../../geometry/rect';
-import { BLOCK_STYLE, GUIDE_STROKE, SELECTION_STROKE } from '../blockStyle';
+import { isPlacedMat, type PlacedMat } from '../../geometry/placedBlocks';
+import { formatQuantity } from '../../model/units';
+import {
+  BITLINE_STROKE,
+  BLOCK_STYLE,
+  GUIDE_STROKE,
+  SELECTION_STROKE,
+  STORAGE_NODE_FILL,
+  WORDLINE_STROKE,
+} from '../blockStyle';
+import { LINES_MIN_PITCH_PX } from './paintMatDetail';
 import type { GesturePreview } from '../gestures/gesture';
-import { pxPerMetre, toScreen, type Scene } from './scene';
+import { pxPerMetre, RULER_SIZE, toScreen, visibleWorld, type Scene } from './scene';
 
 /** Selected blocks smaller than this on screen get an outline this size (px). */
 const SELECTION_MIN_PX = 6;
@@ -55,7 +65,81 @@ export function paintOverlay(ctx: CanvasRenderingContext2D, scene: Scene, state:
       ctx.strokeRect(at.x - h / 2, at.y - h / 2, h, h);
     }
   }
+  paintCellKey(ctx, scene);
   if (state.preview) paintPreview(ctx, scene, state.preview, state.pointer);
+}
+
+/**
+ * When the view is close enough to show single cells, a key in the corner says which lines are bit
+ * lines and which are word lines, and what the dots are.
+ */
+function paintCellKey(ctx: CanvasRenderingContext2D, scene: Scene): void {
+  const k = pxPerMetre(scene.viewport);
+  // Far from cell scale no mat can show its lines: skip the search over the visible blocks.
+  const F = scene.design.process.featureSize;
+  const finestPitch = Math.min(
+    ...scene.design.cells.map((c) => Math.min(c.bitlinePitchInF, c.wordlinePitchInF) * F),
+  );
+  if (finestPitch * k < LINES_MIN_PITCH_PX) return;
+  const view = visibleWorld(scene.viewport, scene.width, scene.height);
+  let shown: PlacedMat | null = null;
+  for (const i of scene.placed.index.near(view, 0)) {
+    const p = scene.placed.placed[i];
+    if (
+      p &&
+      isPlacedMat(p) &&
+      Math.min(p.geometry.bitlinePitch, p.geometry.wordlinePitch) * k >= LINES_MIN_PITCH_PX
+    ) {
+      shown = p;
+      break;
+    }
+  }
+  if (!shown) return;
+  const vertical = shown.block.bitlineAxis === 'vertical';
+  const rows: [string, string, number][] = [
+    [
+      BITLINE_STROKE,
+      `bit lines ${vertical ? '↕' : '↔'}, pitch ${formatQuantity(shown.geometry.bitlinePitch, 'length')}`,
+      2,
+    ],
+    [
+      WORDLINE_STROKE,
+      `word lines ${vertical ? '↔' : '↕'}, pitch ${formatQuantity(shown.geometry.wordlinePitch, 'length')}`,
+      1,
+    ],
+    [STORAGE_NODE_FILL, `storage nodes (${shown.cell.name})`, 0],
+  ];
+  ctx.font = '12px system-ui, sans-serif';
+  const w = Math.max(...rows.map(([, text]) => ctx.measureText(text).width)) + 40;
+  const h = rows.length * 18 + 10;
+  const x = RULER_SIZE + 10;
+  const y = scene.height - h - 10;
+  ctx.fillStyle = 'rgba(251, 250, 247, 0.94)';
+  ctx.fillRect(x, y, w, h);
+  ctx.strokeStyle = '#b9b3a6';
+  ctx.lineWidth = 1;
+  ctx.strokeRect(x + 0.5, y + 0.5, w, h);
+  rows.forEach(([colour, text, width], i) => {
+    const cy = y + 14 + i * 18;
+    if (width > 0) {
+      ctx.strokeStyle = colour;
+      ctx.lineWidth = width;
+      ctx.beginPath();
+      ctx.moveTo(x + 8, cy);
+      ctx.lineTo(x + 26, cy);
+      ctx.stroke();
+    } else {
+      ctx.fillStyle = colour;
+      ctx.beginPath();
+      ctx.arc(x + 17, cy, 3.5, 0, 2 * Math.PI);
+      ctx.fill();
+    }
+    ctx.fillStyle = '#27303c';
+    ctx.textAlign = 'left';
+    ctx.textBaseline = 'middle';
+    ctx.fillText(text, x + 32, cy);
+  });
+  ctx.lineWidth = 1;
 }
 
 function outset(r: Rect, by: number): Rect {
