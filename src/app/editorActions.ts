@@ -111,14 +111,15 @@ export function createEditorActions(app: AppStore, editor: EditorStore, canvas: 
     selectionBox,
     copy,
     paste,
-    deleteSelection: () => app.getState().execute(deleteBlocks, { ids: selection() }),
+    deleteSelection: () =>
+      selection().length > 0 && app.getState().execute(deleteBlocks, { ids: selection() }),
     duplicate: () => {
       const box = selectionBox();
       if (box) runAndSelectAdded(duplicateBlocks, { ids: selection(), dx: box.width, dy: 0 });
     },
-    rotate: () => app.getState().execute(rotateBlocks, { ids: selection() }),
+    rotate: () => selection().length > 0 && app.getState().execute(rotateBlocks, { ids: selection() }),
     mirror: (axis: 'leftRight' | 'topBottom') =>
-      app.getState().execute(mirrorBlocks, { ids: selection(), axis }),
+      selection().length > 0 && app.getState().execute(mirrorBlocks, { ids: selection(), axis }),
     stepAndRepeat: (args: Omit<StepAndRepeatArgs, 'ids'>) =>
       runAndSelectAdded(stepAndRepeat, { ...args, ids: selection() }, selection()),
     selectAll: () => app.getState().select(design().blocks.map((b) => b.id)),

@@ -103,6 +103,9 @@ export class CanvasController {
     listen('pointermove', (e) => this.onPointerMove(e));
     listen('pointerup', (e) => this.onPointerUp(e));
     listen('pointercancel', () => this.cancelGesture());
+    // Capture ends by itself after pointerup (the gesture is over by then); losing it earlier, say when
+    // the window loses focus mid-drag, cancels the gesture.
+    listen('lostpointercapture', () => this.cancelGesture());
     listen('pointerleave', () => this.onPointerLeave());
     listen('wheel', (e) => this.onWheel(e), { passive: false });
     listen('contextmenu', (e) => e.preventDefault());
@@ -203,7 +206,6 @@ export class CanvasController {
     return {
       design,
       placed: placedDesign(design),
-      report: s.report,
       selection: s.selectedIds,
       options: { ...options, cellId: chosenCell(design, options)?.id ?? options.cellId },
       metresPerPixel: 1 / pxPerMetre(s.viewport),
@@ -284,8 +286,6 @@ export class CanvasController {
   }
 
   private onPointerUp(e: PointerEvent): void {
-    const element = this.view.element;
-    if (element?.hasPointerCapture(e.pointerId)) element.releasePointerCapture(e.pointerId);
     if (this.pan) {
       this.pan = null;
       this.updateCursor(this.world(this.local(e)));

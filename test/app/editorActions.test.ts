@@ -73,6 +73,21 @@ describe('editor actions', () => {
     expect(app.getState().selectedIds).toEqual([]);
   });
 
+  it('with nothing selected, editing keys do nothing and report no error', () => {
+    const { app, actions } = setup();
+    for (const action of [
+      'edit.delete',
+      'edit.rotate',
+      'edit.mirrorLeftRight',
+      'edit.duplicate',
+      'edit.nudgeUp',
+    ] as const) {
+      actions.perform(action);
+    }
+    expect(app.getState().lastError).toBeNull();
+    expect(app.getState().history.past).toHaveLength(0);
+  });
+
   it('rotates, mirrors and steps-and-repeats the selection through their commands', () => {
     const { app, editor, actions } = setup();
     app.getState().select(['mat-r0c0']);

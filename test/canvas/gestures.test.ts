@@ -24,7 +24,6 @@ function context(design: Design, selection: readonly string[] = []): EditorConte
   return {
     design,
     placed: placedDesign(design),
-    report: evaluate(design),
     selection,
     options: { ...DEFAULT_TOOL_OPTIONS, cellId: design.cells[0]?.id ?? '' },
     metresPerPixel: MPP,

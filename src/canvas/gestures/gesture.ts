@@ -1,5 +1,4 @@
 import type { Command } from '../../commands/command';
-import type { Report } from '../../engine';
 import { matLinePitch, type Step } from '../../geometry/cellPitch';
 import { isPlacedMat } from '../../geometry/placedBlocks';
 import type { PlacedDesign } from '../../geometry/placedIndex';
@@ -33,7 +32,6 @@ export interface Modifiers {
 export interface EditorContext {
   readonly design: Design;
   readonly placed: PlacedDesign;
-  readonly report: Report;
   readonly selection: readonly string[];
   readonly options: ToolOptions;
   /** Metres per screen pixel at the current zoom, for pixel-sized snapping distances. */
