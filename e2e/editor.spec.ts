@@ -200,6 +200,13 @@ test.describe('floorplan editor journeys', () => {
     await expect(app.field('cells-per-bitline')).toHaveValue('256');
     await page.keyboard.press('Control+z');
     await expect(app.field('cells-per-bitline')).toHaveValue('512');
+    // Lengths take engineering notation: "0.25 mm" puts both mats' top edges at 250 µm.
+    await app.field('block-y').fill('0.25 mm');
+    await app.field('block-y').press('Enter');
+    await expect(app.field('block-y')).toHaveValue('250 µm');
+    await app.field('block-x').fill('far');
+    await app.field('block-x').press('Enter');
+    await expect(page.getByRole('alert')).toContainText('far');
   });
 
   test('wheel zoom keeps the point under the cursor; close up, cells and line directions are drawn', async ({

@@ -103,6 +103,20 @@ describe('select tool gestures', () => {
     expect(m.cellsPerWordline).toBe(502);
   });
 
+  it('a strip’s handle snaps its side to a neighbour’s edge', () => {
+    const ctx = context(design, ['sa-r0c0']);
+    const strip = rectOf(design, 'sa-r0c0');
+    const neighbour = rectOf(design, 'mat-r0c1');
+    const east = { x: strip.x + strip.width, y: strip.y + strip.height / 2 };
+    const press = pressWithSelectTool(ctx, east, false);
+    expect(press.handle).toBe('e');
+    const p = { x: neighbour.x - 4 * MPP, y: east.y };
+    press.gesture.move(p, NO_KEYS);
+    expect(press.gesture.preview().guideX).toBeCloseTo(neighbour.x, 15);
+    const after = apply(design, press.gesture.finish(p, true, NO_KEYS));
+    expect(rectOf(after, 'sa-r0c0').width).toBeCloseTo(neighbour.x - strip.x, 15);
+  });
+
   it('a sense-amplifier strip dropped against a mat edge takes the edge’s length', () => {
     const lone = designWith([
       mat({ id: 'm', x: 0, y: 10e-6 }),
