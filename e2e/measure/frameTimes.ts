@@ -10,6 +10,7 @@
  * probe (`?perf`) adds the time from each pointer event to the live report reaching the panels.
  */
 import { spawn, type ChildProcess } from 'node:child_process';
+import { fileURLToPath } from 'node:url';
 import { chromium, type CDPSession, type Page } from '@playwright/test';
 
 const port = Number(process.env.E2E_PORT ?? 4173);
@@ -29,14 +30,15 @@ async function serverUp(): Promise<boolean> {
   }
 }
 
+/** Vite's own entry script, run with this Node so that stopping the child stops the server. */
+const VITE = fileURLToPath(new URL('../../node_modules/vite/bin/vite.js', import.meta.url));
+
 async function startServer(): Promise<ChildProcess | null> {
   if (await serverUp()) return null;
   const server = spawn(
-    'npx',
-    ['vite', 'preview', '--host', '127.0.0.1', '--port', String(port), '--strictPort'],
-    {
-      stdio: 'ignore',
-    },
+    process.execPath,
+    [VITE, 'preview', '--host', '127.0.0.1', '--port', String(port), '--strictPort'],
+    { stdio: 'ignore' },
   );
   for (let i = 0; i < 100; i++) {
     if (await serverUp()) return server;
