@@ -1,7 +1,12 @@
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { App } from './app/App';
+import { designFromQuery } from './app/startupDesign';
+import { useAppStore } from './store/useAppStore';
 import './app/app.css';
+
+const requested = designFromQuery(window.location.search);
+if (requested) useAppStore.getState().replaceDesign(requested);
 
 const root = document.getElementById('root');
 if (!root) throw new Error('index.html has no #root element');

@@ -1,6 +1,6 @@
-import { FloorplanCanvas } from '../canvas/FloorplanCanvas';
-import { Sidebar } from './Sidebar';
+import { EditorColumn } from './EditorColumn';
 import { NoticeBar } from './NoticeBar';
+import { Sidebar } from './Sidebar';
 import { Toolbar } from './Toolbar';
 import { useAutosave } from './useAutosave';
 import { ViewArea } from './ViewArea';
@@ -13,7 +13,7 @@ export function App() {
       <NoticeBar />
       <main className="workspace">
         <ViewArea>
-          <FloorplanCanvas />
+          <EditorColumn />
         </ViewArea>
         <Sidebar />
       </main>

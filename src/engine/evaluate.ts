@@ -1,5 +1,5 @@
-import { isPlacedMat, placeBlocks, type PlacedMat } from '../geometry/placedBlocks';
-import { buildSpatialIndex } from '../geometry/spatialIndex';
+import { isPlacedMat, placeBlocks, type PlacedBlock, type PlacedMat } from '../geometry/placedBlocks';
+import { buildSpatialIndex, type SpatialIndex } from '../geometry/spatialIndex';
 import type { Design } from '../model/design';
 import { collectFindings } from './checks';
 import { matConnections } from './connectivity';
@@ -15,24 +15,10 @@ import { computeTotals } from './totals';
 /** Smallest leakage the engine uses (A): far below any physical cell, 1e-30 A keeps retention finite. */
 export const MINIMUM_LEAKAGE = 1e-30;
 
-/**
- * Evaluates a validated design: lays out its blocks, finds which strips serve which mat edges, and
- * computes every mat's capacitance, read signals, offset and noise budget, margin, retention, delays and
- * energy, then the area and refresh totals and the checks.
- *
- * @param design a design that passed io/restore (SI units: metres, farads, volts, seconds, kelvin).
- * @returns a {@link Report} whose numbers are all in SI units; mats appear in the design's block order.
- */
-export function evaluate(design: Design): Report {
+/** The design-wide values every mat needs (stored level, k of the offset budget, leakage at temperature). */
+export function designContext(design: Design, senseAmpCount: number): DesignContext {
   const { process, operating } = design;
-  const placed = placeBlocks(design);
-  const index = buildSpatialIndex(placed.map((p) => p.rect));
-  const mats = placed.filter(isPlacedMat);
-
-  // The offset budget depends on how many sense amplifiers share the failure allowance.
-  let senseAmpCount = 0;
-  for (const m of mats) senseAmpCount += senseAmpsOfMat(m);
-  const ctx: DesignContext = {
+  return {
     process,
     operating,
     storedHigh: storedHighLevel(process),
@@ -49,18 +35,69 @@ export function evaluate(design: Design): Report {
       ),
     ),
   };
+}
 
-  const matReports: MatReport[] = mats.map((mat: PlacedMat) => {
-    const connections = matConnections(mat, placed, index);
-    const lost = unpartneredBitlines(
-      mat,
-      connections.senseAmpContacts,
-      connections.senseAmpEnds,
-      placed,
-      index,
-    );
-    return matPhysics(mat, connections, lost, ctx);
-  });
+/** Sense amplifiers of all mats: the count that shares the failure allowance. */
+export function countSenseAmps(mats: readonly PlacedMat[]): number {
+  let count = 0;
+  for (const m of mats) count += senseAmpsOfMat(m);
+  return count;
+}
+
+/**
+ * Figures of one placed mat: its connections from the spatial index, then its physics. Mats with the
+ * same cell, cell counts and sense-amplifier arrangement have the same physics, so with a `physicsByKind`
+ * map a regular array computes it once per kind of mat and copies it with each mat's own identity.
+ */
+export function evaluatePlacedMat(
+  mat: PlacedMat,
+  placed: readonly PlacedBlock[],
+  index: SpatialIndex,
+  ctx: DesignContext,
+  physicsByKind?: Map<string, MatReport>,
+): MatReport {
+  const connections = matConnections(mat, placed, index);
+  const lost = unpartneredBitlines(
+    mat,
+    connections.senseAmpContacts,
+    connections.senseAmpEnds,
+    placed,
+    index,
+  );
+  const kind = `${mat.cell.id}|${mat.block.cellsPerBitline}|${mat.block.cellsPerWordline}|${connections.senseAmpEnds}|${lost}`;
+  const known = physicsByKind?.get(kind);
+  if (!known) {
+    const report = matPhysics(mat, connections, lost, ctx);
+    physicsByKind?.set(kind, report);
+    return report;
+  }
+  return {
+    ...known,
+    matId: mat.block.id,
+    name: mat.block.name,
+    senseAmpStripIds: connections.senseAmpStripIds,
+    wordlineDriverIds: connections.wordlineDriverIds,
+    unsensedBitlines: connections.unsensedBitlines,
+    undrivenWordlines: connections.undrivenWordlines,
+  };
+}
+
+/**
+ * Evaluates a validated design: lays out its blocks, finds which strips serve which mat edges, and
+ * computes every mat's capacitance, read signals, offset and noise budget, margin, retention, delays and
+ * energy, then the area and refresh totals and the checks.
+ *
+ * @param design a design that passed io/restore (SI units: metres, farads, volts, seconds, kelvin).
+ * @returns a {@link Report} whose numbers are all in SI units; mats appear in the design's block order.
+ */
+export function evaluate(design: Design): Report {
+  const placed = placeBlocks(design);
+  const index = buildSpatialIndex(placed.map((p) => p.rect));
+  const mats = placed.filter(isPlacedMat);
+  const senseAmpCount = countSenseAmps(mats);
+  const ctx = designContext(design, senseAmpCount);
+  const physicsByKind = new Map<string, MatReport>();
+  const matReports = mats.map((mat) => evaluatePlacedMat(mat, placed, index, ctx, physicsByKind));
   const overlaps = findOverlaps(placed, index);
   const totals = computeTotals(placed, mats, matReports, design, ctx.sigmaMultiplier, senseAmpCount);
   return {

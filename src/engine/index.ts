@@ -47,3 +47,4 @@ export type {
   Severity,
   Totals,
 } from './report';
+export { preparePreview, previewReport, type PreviewBase } from './preview';

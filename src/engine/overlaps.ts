@@ -10,12 +10,13 @@ export interface Overlap {
   readonly area: number;
 }
 
-/** Every overlapping pair once, found through the spatial index (O(n log n) for sparse overlaps). */
+/** Every overlapping pair once, in design order of the first and then the second block, found through the spatial index (O(n log n) for sparse overlaps). */
 export function findOverlaps(placed: readonly PlacedBlock[], index: SpatialIndex): Overlap[] {
   const overlaps: Overlap[] = [];
   placed.forEach((a, i) => {
-    // Shrinking the query box by the tolerance skips neighbours that merely abut.
-    for (const j of index.near(a.rect, -ABUTMENT_TOLERANCE)) {
+    // Shrinking the query box by the tolerance skips neighbours that merely abut. Sorting the hits puts
+    // pairs in design order, whatever order the index returns them in (live previews rely on it).
+    for (const j of index.near(a.rect, -ABUTMENT_TOLERANCE).sort((x, y) => x - y)) {
       if (j <= i) continue;
       const b = placed[j];
       if (!b) continue;

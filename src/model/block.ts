@@ -34,9 +34,22 @@ export const matSchema = z.object({
   /** Cells connected to one word line. */
   cellsPerWordline: wholeCount('cells per word line', 1, MAX_CELLS_PER_LINE),
   bitlineAxis: z.enum(BITLINE_AXES),
+  /**
+   * Handedness: true when the mat is a mirror image of its unmirrored layout (after any number of
+   * mirrorings, an odd count). The physics does not depend on it; the canvas shows it. Absent means false,
+   * so files written before the field existed load unchanged.
+   */
+  mirrored: z.boolean().optional(),
 });
 
-export const STRIP_TYPES = ['senseAmpStrip', 'wordlineDriverStrip', 'rowDecoder', 'columnDecoder'] as const;
+/** Strips and other rectangular blocks. A spacer serves nothing: it only takes area (a gap kept on purpose). */
+export const STRIP_TYPES = [
+  'senseAmpStrip',
+  'wordlineDriverStrip',
+  'rowDecoder',
+  'columnDecoder',
+  'spacer',
+] as const;
 export type StripType = (typeof STRIP_TYPES)[number];
 
 export const stripSchema = z.object({
@@ -64,4 +77,5 @@ export const BLOCK_TYPE_LABEL: Record<BlockType, string> = {
   wordlineDriverStrip: 'sub-word-line driver strip',
   rowDecoder: 'row decoder',
   columnDecoder: 'column decoder',
+  spacer: 'spacer',
 };

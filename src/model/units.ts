@@ -222,3 +222,21 @@ export function kelvinToCelsius(kelvin: number): number {
 export function celsiusToKelvin(celsius: number): number {
   return celsius + ZERO_CELSIUS_IN_KELVIN;
 }
+
+const BINARY_PREFIXES = ['', 'Ki', 'Mi', 'Gi', 'Ti'] as const;
+
+/**
+ * A memory capacity in bits with a binary prefix, the way array sizes are spoken of:
+ * 524 288 → "512 Kib", 1 572 864 → "1.5 Mib", 1000 → "1,000 b" (below 1 Kib the plain count).
+ */
+export function formatBits(bits: number, digits = DEFAULT_DIGITS): string {
+  if (!Number.isFinite(bits)) return '—';
+  if (Math.abs(bits) < 1024) return `${Math.round(bits).toLocaleString('en-US')} b`;
+  let power = 0;
+  let value = bits;
+  while (Math.abs(value) >= 1024 && power < BINARY_PREFIXES.length - 1) {
+    value /= 1024;
+    power++;
+  }
+  return `${trimNumber(value, digits)} ${BINARY_PREFIXES[power]}b`;
+}

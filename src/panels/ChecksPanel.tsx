@@ -1,9 +1,18 @@
+import { useEditorStore } from '../store/editorStore';
+import { useShownReport } from '../store/liveReport';
 import { useAppStore } from '../store/useAppStore';
 
-/** Findings of the checks, errors first; clicking one selects the blocks it names. */
+/** Findings listed at most; a broken 4,096-mat floorplan can have thousands. */
+const MAX_LISTED = 200;
+
+/**
+ * Findings of the checks, errors first, following a drag live. Clicking one selects the blocks it names
+ * and frames them on the canvas, where they are marked in the colour of their severity.
+ */
 export function ChecksPanel() {
-  const findings = useAppStore((s) => s.report.findings);
+  const findings = useShownReport().findings;
   const select = useAppStore((s) => s.select);
+  const requestFrame = useEditorStore((s) => s.requestFrame);
   const ordered = [...findings].sort((a, b) =>
     a.severity === b.severity ? 0 : a.severity === 'error' ? -1 : 1,
   );
@@ -18,13 +27,24 @@ export function ChecksPanel() {
         </p>
       ) : (
         <ul className="findings" data-testid="findings">
-          {ordered.map((f, i) => (
+          {ordered.slice(0, MAX_LISTED).map((f, i) => (
             <li key={`${f.kind}-${i}`} className={f.severity}>
-              <button type="button" onClick={() => select(f.blockIds)} disabled={f.blockIds.length === 0}>
+              <button
+                type="button"
+                data-testid={`finding-${f.kind}`}
+                onClick={() => {
+                  select(f.blockIds);
+                  requestFrame(f.blockIds);
+                }}
+                disabled={f.blockIds.length === 0}
+              >
                 <span className="severity">{f.severity}</span> {f.message}
               </button>
             </li>
           ))}
+          {ordered.length > MAX_LISTED && (
+            <li className="hint">and {ordered.length - MAX_LISTED} more; fix the ones above first</li>
+          )}
         </ul>
       )}
     </section>

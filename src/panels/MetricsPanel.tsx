@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useMemo, useState } from 'react';
 import {
   explainMatFigure,
   explainTotal,
@@ -7,19 +7,28 @@ import {
   TOTAL_FIGURE_GROUPS,
 } from '../engine';
 import { CELL_KIND_LABEL } from '../model/cell';
+import { useShownReport } from '../store/liveReport';
 import { useAppStore } from '../store/useAppStore';
 import { FigureRow } from './FigureRow';
 
-/** Figures of the selected mat and of the whole design, recomputed on every edit. */
+/** Figures of the selected mat and of the whole design: live during a drag, else the document's. */
 export function MetricsPanel() {
   const design = useAppStore((s) => s.history.present);
-  const report = useAppStore((s) => s.report);
+  const report = useShownReport();
   const selectedIds = useAppStore((s) => s.selectedIds);
   const [openKey, setOpenKey] = useState<string | null>(null);
   const toggle = (key: string) => setOpenKey((current) => (current === key ? null : key));
 
-  const matId = selectedIds.find((id) => findMatReport(report, id));
-  const mat = matId ? findMatReport(report, matId) : undefined;
+  // The first selected mat; a map keeps this linear when thousands of blocks are selected.
+  const mat = useMemo(() => {
+    if (selectedIds.length === 1) return findMatReport(report, selectedIds[0] ?? '');
+    const byId = new Map(report.mats.map((m) => [m.matId, m]));
+    for (const id of selectedIds) {
+      const found = byId.get(id);
+      if (found) return found;
+    }
+    return undefined;
+  }, [report, selectedIds]);
 
   return (
     <section className="panel" aria-labelledby="metrics-heading">

@@ -1,45 +1,131 @@
+import { setBlockProperties, type BlockPropertiesPatch } from '../commands/setBlockProperties';
 import { setMatCellCounts } from '../commands/setMatCellCounts';
-import { BLOCK_TYPE_LABEL, isMat, type Mat } from '../model/block';
-import { formatQuantity } from '../model/units';
+import { matGeometry } from '../geometry/matGeometry';
 import { blockRect } from '../geometry/placedBlocks';
+import {
+  BITLINE_AXES,
+  BLOCK_TYPE_LABEL,
+  isMat,
+  type BitlineAxis,
+  type Block,
+  type Mat,
+  type Strip,
+} from '../model/block';
+import { formatBits, formatQuantity } from '../model/units';
 import { useAppStore } from '../store/useAppStore';
+import { NameField } from './NameField';
 import { QuantityField } from './QuantityField';
-import { useRunCommand } from './useRunCommand';
-import { setMatCell } from '../commands/cellCommands';
 
-/** The one value all mats share, or null when they differ. */
-function shared(mats: readonly Mat[], pick: (m: Mat) => number): number | null {
-  const first = mats[0];
-  if (!first) return null;
+/** The one value all blocks share, or null when they differ. */
+function shared<B, V>(blocks: readonly B[], pick: (b: B) => V): V | null {
+  const first = blocks[0];
+  if (first === undefined) return null;
   const value = pick(first);
-  return mats.every((m) => pick(m) === value) ? value : null;
+  return blocks.every((b) => pick(b) === value) ? value : null;
 }
 
-/** Edits the selected blocks: cell counts for mats; size and type shown for every block. */
+function typeSummary(blocks: readonly Block[]): string {
+  const counts = new Map<string, number>();
+  for (const b of blocks)
+    counts.set(BLOCK_TYPE_LABEL[b.type], (counts.get(BLOCK_TYPE_LABEL[b.type]) ?? 0) + 1);
+  return [...counts].map(([label, n]) => `${n} ${label}${n === 1 ? '' : 's'}`).join(', ');
+}
+
+/**
+ * Edits the selected blocks, one or many at once: a value typed here goes to every selected block it
+ * fits (position to all, width and height to strips, cells and bit-line direction to mats), in one
+ * undo step. Fields show "mixed" where the blocks differ. Lengths accept engineering notation.
+ */
 export function PropertiesPanel() {
   const design = useAppStore((s) => s.history.present);
   const selectedIds = useAppStore((s) => s.selectedIds);
   const execute = useAppStore((s) => s.execute);
-  const run = useRunCommand();
   const selectedSet = new Set(selectedIds);
   const blocks = design.blocks.filter((b) => selectedSet.has(b.id));
   const mats = blocks.filter(isMat);
+  const strips = blocks.filter((b): b is Strip => b.type !== 'mat');
+  const ids = blocks.map((b) => b.id);
 
-  const apply = (args: { cellsPerBitline?: number; cellsPerWordline?: number }) =>
-    run(setMatCellCounts, { matIds: mats.map((m) => m.id), ...args });
+  const refused = () => useAppStore.getState().lastError;
+  const patch = (p: BlockPropertiesPatch) =>
+    execute(setBlockProperties, { ids, patch: p }) ? null : refused();
+  const counts = (args: { cellsPerBitline?: number; cellsPerWordline?: number }) =>
+    execute(setMatCellCounts, { matIds: mats.map((m) => m.id), ...args }) ? null : refused();
+
+  const single = blocks.length === 1 ? blocks[0] : undefined;
+  const singleRect = single ? blockRect(design, single) : null;
+  const singleMat = single && isMat(single) ? single : undefined;
+  const cell = singleMat ? design.cells.find((c) => c.id === singleMat.cellId) : undefined;
+  const geometry = singleMat && cell ? matGeometry(singleMat, cell, design.process.featureSize) : null;
+  const mirrored = shared(mats, (m: Mat) => m.mirrored ?? false);
 
   return (
     <section className="panel" aria-labelledby="properties-heading">
       <h2 id="properties-heading">Properties</h2>
-      {blocks.length === 0 && <p className="hint">Nothing selected.</p>}
-      {blocks.length === 1 && blocks[0] && (
+      {blocks.length === 0 && (
+        <p className="hint">Nothing selected. Click a block, or drag on empty canvas.</p>
+      )}
+      {single && singleRect && (
         <p className="block-summary" data-testid="selection-summary">
-          {BLOCK_TYPE_LABEL[blocks[0].type]} <strong>{blocks[0].name || blocks[0].id}</strong>,{' '}
-          {formatQuantity(blockRect(design, blocks[0]).width, 'length')} ×{' '}
-          {formatQuantity(blockRect(design, blocks[0]).height, 'length')}
+          {BLOCK_TYPE_LABEL[single.type]} <strong>{single.name || single.id}</strong>,{' '}
+          {formatQuantity(singleRect.width, 'length')} × {formatQuantity(singleRect.height, 'length')}
+          {geometry && (
+            <span className="mat-size" data-testid="mat-size">
+              <br />
+              {formatQuantity(geometry.wordlineCount, 'count')} rows ×{' '}
+              {formatQuantity(geometry.bitlineCount, 'count')} columns · {formatBits(geometry.bits)}
+            </span>
+          )}
         </p>
       )}
-      {blocks.length > 1 && <p className="block-summary">{blocks.length} blocks selected</p>}
+      {blocks.length > 1 && (
+        <p className="block-summary" data-testid="selection-summary">
+          {blocks.length} blocks selected: {typeSummary(blocks)}
+        </p>
+      )}
+      {single && (
+        <NameField
+          key={`${single.id}:${single.name}`}
+          value={single.name}
+          onCommit={(name) => patch({ name })}
+        />
+      )}
+      {blocks.length > 0 && (
+        <>
+          <QuantityField
+            id="block-x"
+            label="x (left)"
+            quantity="length"
+            value={shared(blocks, (b) => b.x)}
+            onCommit={(x) => patch({ x })}
+          />
+          <QuantityField
+            id="block-y"
+            label="y (top)"
+            quantity="length"
+            value={shared(blocks, (b) => b.y)}
+            onCommit={(y) => patch({ y })}
+          />
+        </>
+      )}
+      {strips.length > 0 && (
+        <>
+          <QuantityField
+            id="block-width"
+            label={mats.length > 0 ? 'Width (strips)' : 'Width'}
+            quantity="length"
+            value={shared(strips, (s) => s.width)}
+            onCommit={(width) => patch({ width })}
+          />
+          <QuantityField
+            id="block-height"
+            label={mats.length > 0 ? 'Height (strips)' : 'Height'}
+            quantity="length"
+            value={shared(strips, (s) => s.height)}
+            onCommit={(height) => patch({ height })}
+          />
+        </>
+      )}
       {mats.length > 0 && (
         <>
           <QuantityField
@@ -47,24 +133,24 @@ export function PropertiesPanel() {
             label="Cells per bit line"
             quantity="count"
             value={shared(mats, (m) => m.cellsPerBitline)}
-            onCommit={(v) => apply({ cellsPerBitline: v })}
+            onCommit={(v) => counts({ cellsPerBitline: v })}
           />
           <QuantityField
             id="cells-per-wordline"
             label="Cells per word line"
             quantity="count"
             value={shared(mats, (m) => m.cellsPerWordline)}
-            onCommit={(v) => apply({ cellsPerWordline: v })}
+            onCommit={(v) => counts({ cellsPerWordline: v })}
           />
           <div className="field">
             <label htmlFor="mat-cell">Cell</label>
             <select
               id="mat-cell"
               data-testid="mat-cell"
-              value={mats.every((m) => m.cellId === mats[0]?.cellId) ? mats[0]?.cellId : ''}
-              onChange={(e) => execute(setMatCell, { matIds: mats.map((m) => m.id), cellId: e.target.value })}
+              value={shared(mats, (m) => m.cellId) ?? ''}
+              onChange={(e) => patch({ cellId: e.target.value })}
             >
-              {!mats.every((m) => m.cellId === mats[0]?.cellId) && <option value="">mixed</option>}
+              {shared(mats, (m) => m.cellId) === null && <option value="">mixed</option>}
               {design.cells.map((c) => (
                 <option key={c.id} value={c.id}>
                   {c.name}
@@ -72,7 +158,35 @@ export function PropertiesPanel() {
               ))}
             </select>
           </div>
-          <p className="hint">Bit lines run {mats[0]?.bitlineAxis}.</p>
+          <div className="field">
+            <label htmlFor="mat-axis">Bit lines run</label>
+            <select
+              id="mat-axis"
+              data-testid="mat-axis"
+              value={shared(mats, (m) => m.bitlineAxis) ?? ''}
+              onChange={(e) => patch({ bitlineAxis: e.target.value as BitlineAxis })}
+            >
+              {shared(mats, (m) => m.bitlineAxis) === null && <option value="">mixed</option>}
+              {BITLINE_AXES.map((a) => (
+                <option key={a} value={a}>
+                  {a}
+                </option>
+              ))}
+            </select>
+          </div>
+          <div className="field">
+            <label htmlFor="mat-mirrored">Mirrored</label>
+            <input
+              id="mat-mirrored"
+              data-testid="mat-mirrored"
+              type="checkbox"
+              checked={mirrored === true}
+              ref={(el) => {
+                if (el) el.indeterminate = mirrored === null;
+              }}
+              onChange={(e) => patch({ mirrored: e.target.checked })}
+            />
+          </div>
         </>
       )}
     </section>

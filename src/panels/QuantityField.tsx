@@ -5,24 +5,27 @@ interface QuantityFieldProps {
   readonly id: string;
   readonly label: string;
   readonly quantity: Quantity;
-  /** SI value shown when the field is not being edited; null when a multi-selection disagrees. */
+  /** Value in SI units; null when the selected blocks disagree ("mixed"). */
   readonly value: number | null;
-  /** Applies a parsed SI value; returns an error message when it was refused. */
+  /** Significant digits shown; positions need more than figures do. */
+  readonly digits?: number;
+  /** Applies a parsed value (SI units); returns an error message when it was refused. */
   onCommit(value: number): string | null;
 }
 
 /** Counts are shown plainly ("512"), everything else in engineering notation ("11 fF"). */
-function display(value: number | null, quantity: Quantity): string {
+function display(value: number | null, quantity: Quantity, digits: number): string {
   if (value === null) return '';
-  return quantity === 'count' ? String(value) : formatQuantity(value, quantity, 6);
+  return quantity === 'count' ? String(value) : formatQuantity(value, quantity, digits);
 }
 
 /**
- * A unit-aware input: accepts engineering notation ("25f", "25 fF", "0.12u", "85 °C"), commits on Enter
- * or blur, reverts on Escape, and shows why a value was refused without losing what was typed.
+ * A unit-aware input: shows the value in engineering notation ("36.864 µm") and reads what people type
+ * ("40u", "40 µm", "0.04 mm", "85 °C", or a bare number in SI units). Commits on Enter or blur, reverts on
+ * Escape, and keeps a refused text with the reason beside it.
  */
-export function QuantityField({ id, label, quantity, value, onCommit }: QuantityFieldProps) {
-  const shown = display(value, quantity);
+export function QuantityField({ id, label, quantity, value, digits = 7, onCommit }: QuantityFieldProps) {
+  const shown = display(value, quantity, digits);
   const [text, setText] = useState(shown);
   const [error, setError] = useState<string | null>(null);
   useEffect(() => {

@@ -1,0 +1,311 @@
+import { expect, test } from '@playwright/test';
+import { EditorPage } from './editorPage';
+import { loadDemoDesign } from './floorplanPage';
+
+test.describe('floorplan editor journeys', () => {
+  test('draw a mat, add strips until its checks clear, step and repeat, undo and redo', async ({ page }) => {
+    const errors: string[] = [];
+    page.on('pageerror', (e) => errors.push(e.message));
+    const app = new EditorPage(page);
+    await app.openWith('?blank');
+    await expect(app.blockCount()).toHaveText('0 blocks');
+
+    // Draw a mat by dragging with the mat tool (key 3); it snaps to whole cells.
+    await page.keyboard.press('3');
+    await expect(app.tool('mat')).toHaveAttribute('aria-pressed', 'true');
+    await app.drag(await app.canvasPoint(200, 150), await app.canvasPoint(400, 300), false);
+    await page.screenshot({ path: test.info().outputPath('1-drawing-mat.png') });
+    await page.mouse.up();
+    await expect(app.summary()).toContainText('mat Mat 1');
+    await expect(page.getByTestId('mat-size')).toContainText('rows ×');
+    await expect(page.getByTestId('mat-size')).toContainText('columns · 11.04 Mib');
+    // So long a bit line also fails its margin and retention; set a 512 × 512 mat at a known place.
+    await expect(app.findings()).toHaveCount(4);
+    await expect(app.findings().nth(0)).toContainText('reach no sense-amplifier strip');
+    await app.field('cells-per-bitline').fill('512');
+    await app.field('cells-per-bitline').press('Enter');
+    await app.field('cells-per-wordline').fill('512');
+    await app.field('cells-per-wordline').press('Enter');
+    await app.field('block-x').fill('20u');
+    await app.field('block-x').press('Enter');
+    await app.field('block-y').fill('20u');
+    await app.field('block-y').press('Enter');
+    await expect(app.findings()).toHaveCount(2);
+    await page.getByTestId('zoom-fit').click();
+    const side = 1024 * 2 * 18e-9; // 1,024 lines at a 2F pitch, F = 18 nm
+
+    // A sense-amplifier strip clicked beside the top (bit-line) edge fits that edge.
+    await page.keyboard.press('4');
+    await app.click(await app.worldPoint(20e-6 + side / 2, 20e-6 - 0.3e-6));
+    await expect(app.summary()).toContainText('sense-amplifier strip SA 1, 36.86 µm × 6 µm');
+    // With strips at one end only, the amplifiers cannot alternate and overflow their pitch.
+    await expect(app.findings()).toHaveCount(2);
+    await expect(page.getByTestId('findings')).toContainText('pitch budget');
+    await app.click(await app.worldPoint(20e-6 + side / 2, 20e-6 + side + 0.3e-6));
+    await expect(app.findings()).toHaveCount(1);
+    await expect(app.findings().first()).toContainText('reach no driver');
+
+    // A driver strip beside the left (word-line) edge clears the last check.
+    await page.keyboard.press('5');
+    await app.click(await app.worldPoint(20e-6 - 0.3e-6, 20e-6 + side / 2));
+    await app.expectChecksClear();
+    await expect(app.blockCount()).toHaveText('4 blocks');
+
+    // Step and repeat the whole group 3 × 2 at its own size: the copies abut and stay clean.
+    await page.keyboard.press('1');
+    await page.keyboard.press('Control+a');
+    await expect(app.selectedCount()).toHaveText('4 selected');
+    await page.keyboard.press('t');
+    const dialog = page.getByTestId('step-repeat');
+    await expect(dialog).toBeVisible();
+    await app.field('repeat-columns').fill('3');
+    await app.field('repeat-columns').press('Tab');
+    await app.field('repeat-rows').fill('2');
+    await app.field('repeat-rows').press('Tab');
+    await expect(page.getByTestId('repeat-summary')).toContainText('20 new blocks');
+    await page.getByTestId('repeat-apply').click();
+    await expect(dialog).toBeHidden();
+    await expect(app.blockCount()).toHaveText('24 blocks');
+    await expect(app.selectedCount()).toHaveText('24 selected');
+    await app.expectChecksClear();
+    await page.getByTestId('zoom-fit').click();
+    await page.screenshot({ path: test.info().outputPath('2-step-and-repeat.png') });
+
+    // Undo takes back the whole repeat in one step; redo brings it back.
+    await page.keyboard.press('Control+z');
+    await expect(app.blockCount()).toHaveText('4 blocks');
+    await page.keyboard.press('Control+z');
+    await expect(app.blockCount()).toHaveText('3 blocks');
+    await page.keyboard.press('Control+Shift+z');
+    await page.keyboard.press('Control+Shift+z');
+    await expect(app.blockCount()).toHaveText('24 blocks');
+    await page.getByTestId('undo').click();
+    await expect(app.blockCount()).toHaveText('4 blocks');
+    await page.getByTestId('redo').click();
+    await expect(app.blockCount()).toHaveText('24 blocks');
+    expect(errors).toEqual([]);
+  });
+
+  test('keyboard shortcuts: tools, rotate, mirror, nudge, duplicate, delete, copy and paste, help', async ({
+    page,
+  }) => {
+    const app = new EditorPage(page);
+    const demo = loadDemoDesign();
+    await app.open();
+    for (const [key, tool] of [
+      ['2', 'pan'],
+      ['6', 'rowDecoder'],
+      ['8', 'spacer'],
+      ['1', 'select'],
+    ] as const) {
+      await page.keyboard.press(key);
+      await expect(app.tool(tool)).toHaveAttribute('aria-pressed', 'true');
+    }
+    await app.clickBlock(demo, 'mat-r0c0');
+    await expect(app.summary()).toContainText('Mat 1.1');
+    await expect(app.field('block-x')).toHaveValue('21 µm');
+
+    await page.keyboard.press('r');
+    await expect(app.field('mat-axis')).toHaveValue('horizontal');
+    await page.keyboard.press('Control+z');
+    await expect(app.field('mat-axis')).toHaveValue('vertical');
+    await page.keyboard.press('m');
+    await expect(app.field('mat-mirrored')).toBeChecked();
+    await page.keyboard.press('Control+z');
+    await expect(app.field('mat-mirrored')).not.toBeChecked();
+
+    // Arrows nudge by one bit-line pitch (2F = 36 nm); Shift by ten.
+    await page.keyboard.press('ArrowRight');
+    await expect(app.field('block-x')).toHaveValue('21.036 µm');
+    await page.keyboard.press('Shift+ArrowDown');
+    await expect(app.field('block-y')).toHaveValue('6.36 µm');
+
+    await page.keyboard.press('Control+d');
+    await expect(app.blockCount()).toHaveText('59 blocks');
+    await expect(app.selectedCount()).toHaveText('1 selected');
+    await page.keyboard.press('Delete');
+    await expect(app.blockCount()).toHaveText('58 blocks');
+
+    // Copy a mat and paste it at the pointer, right of the floorplan.
+    await app.clickBlock(demo, 'mat-r3c3');
+    await page.keyboard.press('Control+c');
+    const target = await app.worldPoint(195e-6, 10e-6);
+    await page.mouse.move(target.x, target.y);
+    await page.keyboard.press('Control+v');
+    await expect(app.blockCount()).toHaveText('59 blocks');
+    await expect(app.summary()).toContainText('Mat 4.4');
+    await expect(app.field('block-x')).toHaveValue(/^19[45](\.\d+)? µm$/);
+
+    await page.keyboard.press('?');
+    await expect(page.getByTestId('shortcut-help')).toBeVisible();
+    await expect(page.getByTestId('shortcut-help')).toContainText('Step and repeat');
+    await page.screenshot({ path: test.info().outputPath('3-shortcut-help.png') });
+    await page.keyboard.press('Escape');
+    await expect(page.getByTestId('shortcut-help')).toBeHidden();
+
+    await page.keyboard.press('g');
+    await expect(page.getByTestId('toggle-grid')).toHaveAttribute('aria-pressed', 'false');
+    await page.keyboard.press('g');
+    await expect(page.getByTestId('toggle-grid')).toHaveAttribute('aria-pressed', 'true');
+    await page.keyboard.press('Escape');
+    await expect(app.selectedCount()).toHaveText('0 selected');
+  });
+
+  test('a drag moves in whole pitches as one undo step, figures follow it live, and Escape cancels one', async ({
+    page,
+  }) => {
+    const app = new EditorPage(page);
+    const demo = loadDemoDesign();
+    await app.open();
+    await expect(page.getByTestId('undo')).toBeDisabled();
+    const start = await app.centreOf(demo, 'mat-r0c0');
+
+    // Escape during a drag restores the mat and records nothing.
+    await app.clickBlock(demo, 'mat-r0c0');
+    await app.drag(start, { x: start.x + 60, y: start.y + 300 }, false);
+    await page.keyboard.press('Escape');
+    await page.mouse.up();
+    await expect(app.field('block-x')).toHaveValue('21 µm');
+    await expect(page.getByTestId('undo')).toBeDisabled();
+    await app.expectChecksClear();
+
+    // A real drag: while the button is down the checks already report the stranded mat.
+    await app.drag(start, { x: start.x + 60, y: start.y + 600 }, false);
+    await expect(page.getByTestId('findings')).toContainText('Mat 1.1');
+    await page.screenshot({ path: test.info().outputPath('4-live-drag.png') });
+    await page.mouse.up();
+    await expect(page.getByTestId('undo')).toBeEnabled();
+    const movedX = await app.field('block-x').inputValue();
+    expect(movedX).not.toBe('21 µm');
+    // 2F = 36 nm steps: the displacement is a whole number of bit-line pitches.
+    const dxNm = (Number.parseFloat(movedX) - 21) * 1000;
+    expect(Math.abs(dxNm / 36 - Math.round(dxNm / 36))).toBeLessThan(1e-3);
+    await page.keyboard.press('Control+z');
+    await expect(app.field('block-x')).toHaveValue('21 µm');
+    await app.expectChecksClear();
+    await expect(page.getByTestId('undo')).toBeDisabled();
+  });
+
+  test('a finding selects and frames its block; rubber band and shift-click select several', async ({
+    page,
+  }) => {
+    const app = new EditorPage(page);
+    const demo = loadDemoDesign();
+    await app.open();
+    await app.clickBlock(demo, 'sa-r0c0');
+    await app.click(await app.centreOf(demo, 'sa-r1c0'), ['Shift']);
+    await expect(app.selectedCount()).toHaveText('2 selected');
+    await page.keyboard.press('Delete');
+    // Mat 1.1 loses both strips (unsensed); Mat 2.1 keeps one, too narrow for its amplifiers alone.
+    await expect(app.findings()).toHaveCount(2);
+    await page.keyboard.press('Escape');
+    const before = await app.camera();
+    await page.getByTestId('finding-unsensedBitlines').click();
+    await expect(app.summary()).toContainText('Mat 1.1');
+    await expect.poll(async () => (await app.camera()).scale).toBeGreaterThan(before.scale * 1.5);
+    await page.screenshot({ path: test.info().outputPath('5-finding-framed.png') });
+
+    // Rubber band from empty canvas around the two left mats of row 2 and their strips.
+    await page.getByTestId('zoom-fit').click();
+    const a = await app.worldPoint(19e-6, 47e-6);
+    const b = await app.worldPoint(100e-6, 92e-6);
+    await app.drag(a, b);
+    await expect(app.summary()).toContainText('2 mats');
+    // One value typed for both moves both, in one step.
+    await app.field('cells-per-bitline').fill('256');
+    await app.field('cells-per-bitline').press('Enter');
+    await expect(app.field('cells-per-bitline')).toHaveValue('256');
+    await page.keyboard.press('Control+z');
+    await expect(app.field('cells-per-bitline')).toHaveValue('512');
+    // Lengths take engineering notation: "0.25 mm" puts both mats' top edges at 250 µm.
+    await app.field('block-y').fill('0.25 mm');
+    await app.field('block-y').press('Enter');
+    await expect(app.field('block-y')).toHaveValue('250 µm');
+    await app.field('block-x').fill('far');
+    await app.field('block-x').press('Enter');
+    await expect(page.getByRole('alert')).toContainText('far');
+  });
+
+  test('wheel zoom keeps the point under the cursor; close up, cells and line directions are drawn', async ({
+    page,
+  }) => {
+    const app = new EditorPage(page);
+    const demo = loadDemoDesign();
+    await app.open();
+    // Whole pixels: the browser reports pointer positions in whole pixels.
+    const centre = await app.centreOf(demo, 'mat-r1c1');
+    const p = { x: Math.round(centre.x), y: Math.round(centre.y) };
+    const worldBefore = await app.worldAt(p);
+    await page.mouse.move(p.x, p.y);
+    // Each notch zooms by about a third; stop once a bit-line pitch (36 nm) is several pixels wide.
+    for (let i = 0; i < 40 && (await app.camera()).scale < 300; i++) await page.mouse.wheel(0, -200);
+    expect((await app.camera()).scale).toBeGreaterThan(300);
+    const worldAfter = await app.worldAt(p);
+    expect(Math.abs(worldAfter.x - worldBefore.x)).toBeLessThan(1e-9);
+    expect(Math.abs(worldAfter.y - worldBefore.y)).toBeLessThan(1e-9);
+    await expect(page.getByTestId('cursor-coordinates')).toContainText('µm');
+    await page.screenshot({ path: test.info().outputPath('6-cells-close-up.png') });
+    await page.keyboard.press('f');
+    await expect.poll(async () => (await app.camera()).scale).toBeLessThan(10);
+
+    // The pan tool (2) and Space + drag with any tool move the camera by the drag.
+    const before = await app.camera();
+    await page.keyboard.press('2');
+    await app.drag(await app.canvasPoint(600, 400), await app.canvasPoint(500, 350));
+    await expect.poll(async () => (await app.camera()).offsetX).toBeCloseTo(before.offsetX - 100, 6);
+    await page.keyboard.press('1');
+    await page.keyboard.down('Space');
+    await app.drag(await app.canvasPoint(500, 350), await app.canvasPoint(600, 400));
+    await page.keyboard.up('Space');
+    await expect.poll(async () => (await app.camera()).offsetY).toBeCloseTo(before.offsetY, 6);
+    await expect(app.selectedCount()).toHaveText('0 selected');
+
+    // Z frames the selection.
+    await app.clickBlock(demo, 'sa-r2c2');
+    await page.keyboard.press('z');
+    await expect.poll(async () => (await app.camera()).scale).toBeGreaterThan(before.scale * 2);
+  });
+
+  test('a mat resizes by its handle in whole cells, in one undo step', async ({ page }) => {
+    const app = new EditorPage(page);
+    const demo = loadDemoDesign();
+    await app.open();
+    await app.clickBlock(demo, 'mat-r0c0');
+    const mat = demo.blocks.find((b) => b.id === 'mat-r0c0');
+    if (!mat) throw new Error('demo lacks mat-r0c0');
+    // East handle: the right edge at mid-height (the demo mat is 36.864 µm square).
+    const east = await app.worldPoint(mat.x + 36.864e-6, mat.y + 18.432e-6);
+    await app.drag(east, { x: east.x - 30, y: east.y + 3 });
+    const cells = Number(await app.field('cells-per-wordline').inputValue());
+    expect(cells).toBeLessThan(512);
+    expect(Number.isInteger(cells)).toBe(true);
+    await expect(app.field('cells-per-bitline')).toHaveValue('512');
+    await expect(app.field('block-x')).toHaveValue('21 µm');
+    await page.keyboard.press('Control+z');
+    await expect(app.field('cells-per-wordline')).toHaveValue('512');
+    await expect(page.getByTestId('undo')).toBeDisabled();
+  });
+
+  test('a 4,096-mat floorplan loads, a mat drags and the drag undoes in one step', async ({ page }) => {
+    const app = new EditorPage(page);
+    await app.openWith('?generate=64x64');
+    await expect(app.blockCount()).toHaveText('12,418 blocks');
+    // 2 million sense amplifiers share the failure budget, so k grows and every mat's margin falls just
+    // under the 20 mV target: one grouped warning, no errors.
+    await expect(app.findings()).toHaveCount(1);
+    await expect(app.findings().first()).toContainText('4096 mats');
+    const c = await app.camera();
+    // Mat r10c10 of the generated grid, at the demo's spacing (µm): see src/app/startupDesign.ts.
+    const centre = await app.worldPoint(
+      (21 + 10 * 39.864 + 18.432) * 1e-6,
+      (6 + 10 * 42.864 + 18.432) * 1e-6,
+    );
+    expect(c.scale).toBeGreaterThan(0);
+    await app.drag(centre, { x: centre.x + 40, y: centre.y + 25 });
+    await expect(app.summary()).toContainText('Mat 11.11');
+    await expect(page.getByTestId('findings')).toBeVisible();
+    await page.keyboard.press('Control+z');
+    await expect(app.findings()).toHaveCount(1);
+    await expect(app.findings().first()).toContainText('below the 20 mV target');
+  });
+});

@@ -1,0 +1,81 @@
+import { useEffect } from 'react';
+import { activeCanvas } from '../canvas/canvasBridge';
+import { useEditorStore } from '../store/editorStore';
+import { useAppStore } from '../store/useAppStore';
+import { editorActions } from './actions';
+import { actionForKey } from './keymap';
+
+/** True when focus is in a text field or list box, where keys belong to the field. */
+function typingInField(target: EventTarget | null): boolean {
+  return (
+    target instanceof HTMLInputElement ||
+    target instanceof HTMLTextAreaElement ||
+    target instanceof HTMLSelectElement ||
+    (target instanceof HTMLElement && target.isContentEditable)
+  );
+}
+
+/**
+ * The editor's keyboard shortcuts (see keymap.ts) and the clipboard. Keys are caught in the capture
+ * phase so that, during a drag, Escape or an undo cancels the drag before anything else sees the key.
+ * Copy and paste also go through the browser's clipboard events, so blocks copied in one tab paste in
+ * another; the pasted text is read through io/restore like any design file.
+ */
+export function useEditorShortcuts(): void {
+  useEffect(() => {
+    let pasteHandled = false;
+    const onKeyDown = (e: KeyboardEvent) => {
+      if (typingInField(e.target)) return;
+      const canvas = activeCanvas();
+      if (canvas?.gestureActive()) {
+        const undoKey = (e.ctrlKey || e.metaKey) && ['z', 'y'].includes(e.key.toLowerCase());
+        if (e.key === 'Escape' || undoKey) {
+          e.preventDefault();
+          e.stopImmediatePropagation();
+          canvas.cancelGesture();
+        }
+        return;
+      }
+      const action = actionForKey(e);
+      if (!action) return;
+      const editor = useEditorStore.getState();
+      const dialogOpen = editor.helpOpen || editor.stepRepeatOpen;
+      if (dialogOpen && action !== 'escape' && action !== 'help') return;
+      if (action === 'edit.paste') {
+        // The browser's paste event brings the clipboard text; without one, paste what was copied here.
+        pasteHandled = false;
+        setTimeout(() => {
+          if (!pasteHandled) editorActions.paste();
+        }, 0);
+        return;
+      }
+      // Copy and cut leave the key to the browser too, so that its copy event can fill the clipboard.
+      if (action !== 'edit.copy' && action !== 'edit.cut') e.preventDefault();
+      editorActions.perform(action, e.shiftKey);
+    };
+    const onCopy = (e: ClipboardEvent) => {
+      if (typingInField(e.target) || useAppStore.getState().selectedIds.length === 0) return;
+      const text = useEditorStore.getState().clipboard;
+      if (!text || !e.clipboardData) return;
+      e.clipboardData.setData('text/plain', text);
+      e.preventDefault();
+    };
+    const onPaste = (e: ClipboardEvent) => {
+      if (typingInField(e.target)) return;
+      pasteHandled = true;
+      e.preventDefault();
+      const text = e.clipboardData?.getData('text/plain') ?? '';
+      if (!editorActions.paste(text)) editorActions.paste();
+    };
+    window.addEventListener('keydown', onKeyDown, true);
+    document.addEventListener('copy', onCopy);
+    document.addEventListener('cut', onCopy);
+    document.addEventListener('paste', onPaste);
+    return () => {
+      window.removeEventListener('keydown', onKeyDown, true);
+      document.removeEventListener('copy', onCopy);
+      document.removeEventListener('cut', onCopy);
+      document.removeEventListener('paste', onPaste);
+    };
+  }, []);
+}

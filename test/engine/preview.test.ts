@@ -1,0 +1,85 @@
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { evaluate, preparePreview, previewReport, type Report } from '../../src/engine';
+import type { Block } from '../../src/model/block';
+import { demoDesign } from '../../src/model/demoDesign';
+import type { Design } from '../../src/model/design';
+
+/** Findings compared as a set: the preview may list them in another order. */
+function findingKeys(report: Report): string[] {
+  return report.findings.map((f) => `${f.kind}|${f.blockIds.join(',')}|${f.message}`).sort();
+}
+
+/** Mat reports with their strip lists sorted: the index may find neighbours in another order. */
+function normalisedMats(report: Report) {
+  return report.mats.map((m) => ({
+    ...m,
+    senseAmpStripIds: [...m.senseAmpStripIds].sort(),
+    wordlineDriverIds: [...m.wordlineDriverIds].sort(),
+  }));
+}
+
+function expectSameReport(preview: Report, full: Report) {
+  expect(normalisedMats(preview)).toEqual(normalisedMats(full));
+  expect(findingKeys(preview)).toEqual(findingKeys(full));
+  for (const [key, value] of Object.entries(full.totals)) {
+    const got = preview.totals[key as keyof typeof full.totals];
+    if (typeof value === 'number') expect(got as number).toBeCloseTo(value, 20);
+    else if (typeof value === 'object' && value !== null) expect(got).toEqual(value);
+    else expect(got).toBe(value);
+  }
+}
+
+function withChanges(design: Design, changed: readonly Block[]): Design {
+  const byId = new Map(changed.map((b) => [b.id, b]));
+  return { ...design, blocks: design.blocks.map((b) => byId.get(b.id) ?? b) };
+}
+
+describe('live preview of a gesture equals a full evaluation', () => {
+  const design = demoDesign();
+  const report = evaluate(design);
+
+  it('moving both sense-amplifier strips of a mat away unsenses it, and moving them back clears it', () => {
+    const ids = ['sa-r0c1', 'sa-r1c1'];
+    const strips = design.blocks.filter((b) => ids.includes(b.id));
+    const base = preparePreview(design, report, ids);
+    const away = strips.map((s) => ({ ...s, x: s.x + 500e-6 }));
+    const preview = previewReport(base, away);
+    expectSameReport(preview, evaluate(withChanges(design, away)));
+    expect(preview.findings.map((f) => f.blockIds.join())).toContain('mat-r0c1');
+    expectSameReport(previewReport(base, strips), report);
+  });
+
+  it('holds for random moves and resizes of a few blocks', () => {
+    const ids = design.blocks.map((b) => b.id);
+    fc.assert(
+      fc.property(
+        fc.uniqueArray(fc.constantFrom(...ids), { minLength: 1, maxLength: 3 }),
+        fc.double({ min: -60e-6, max: 60e-6, noNaN: true }),
+        fc.double({ min: -60e-6, max: 60e-6, noNaN: true }),
+        fc.integer({ min: 1, max: 1024 }),
+        (chosen, dx, dy, cells) => {
+          const changed = design.blocks
+            .filter((b) => chosen.includes(b.id))
+            .map((b): Block =>
+              b.type === 'mat'
+                ? { ...b, x: b.x + dx, y: b.y + dy, cellsPerBitline: cells }
+                : { ...b, x: b.x + dx, y: b.y + dy },
+            );
+          const base = preparePreview(design, report, chosen);
+          expectSameReport(previewReport(base, changed), evaluate(withChanges(design, changed)));
+        },
+      ),
+      { numRuns: 150 },
+    );
+  });
+
+  it('follows a move of whole rows, where many mats share strips', () => {
+    const row = design.blocks
+      .filter((b) => b.id.includes('-r1c') || b.id.startsWith('sa-r2c'))
+      .map((b) => b.id);
+    const changed = design.blocks.filter((b) => row.includes(b.id)).map((b) => ({ ...b, y: b.y + 3e-6 }));
+    const base = preparePreview(design, report, row);
+    expectSameReport(previewReport(base, changed), evaluate(withChanges(design, changed)));
+  });
+});
