@@ -6,7 +6,7 @@ import { ProcessPanel } from '../panels/ProcessPanel';
 import { PropertiesPanel } from '../panels/PropertiesPanel';
 
 const TABS = [
-  { id: 'floorplan', label: 'Floorplan' },
+  { id: 'floorplan', label: 'Selection' },
   { id: 'process', label: 'Process' },
   { id: 'cells', label: 'Cells' },
 ] as const;

@@ -40,8 +40,11 @@ function sameMatFigures(m: MatReport, n: MatReport): boolean {
 export function sameVisibleFigures(a: Report, b: Report, selectedIds: readonly string[]): boolean {
   if (a === b) return true;
   for (const key of Object.keys(a.totals) as (keyof Report['totals'])[]) {
-    if (key === 'refresh') continue;
+    if (key === 'refresh' || key === 'areaByType') continue;
     if (!Object.is(a.totals[key], b.totals[key])) return false;
+  }
+  for (const key of Object.keys(a.totals.areaByType) as (keyof Report['totals']['areaByType'])[]) {
+    if (!Object.is(a.totals.areaByType[key], b.totals.areaByType[key])) return false;
   }
   for (const key of Object.keys(a.totals.refresh) as (keyof Report['totals']['refresh'])[]) {
     if (!Object.is(a.totals.refresh[key], b.totals.refresh[key])) return false;

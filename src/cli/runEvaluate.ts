@@ -1,4 +1,5 @@
 import { evaluate } from '../engine/evaluate';
+import { matFiguresCsv } from '../io/matCsv';
 import { MAX_DESIGN_TEXT_LENGTH, restoreDesign } from '../io/restore';
 import { reportTable } from '../io/reportTable';
 import { reportSummary } from '../io/summary';
@@ -24,32 +25,38 @@ export const EXIT = {
 } as const;
 
 export const EVALUATE_USAGE = [
-  'usage: npm run evaluate -- <design.json> [--json]',
+  'usage: npm run evaluate -- <design.json> [--json | --csv]',
   '',
   'Evaluates a Matloom design file and prints a table of mats, totals and findings,',
-  'or with --json one JSON object (format "matloom-report", SI units named in each key).',
+  'or with --json one JSON object (format "matloom-report", SI units named in each key),',
+  'or with --csv one row of figures per mat (SI units named in each header).',
   '',
   'exit codes: 0 ok; 1 the design has error findings; 2 usage error;',
   '            3 the file cannot be read; 4 the file is not a valid design',
 ].join('\n');
 
-type ParsedArgs = { ok: true; path: string; json: boolean; help: boolean } | { ok: false; error: string };
+type Output = 'table' | 'json' | 'csv';
+type ParsedArgs = { ok: true; path: string; output: Output; help: boolean } | { ok: false; error: string };
 
 function parseArgs(args: readonly string[]): ParsedArgs {
   let path: string | null = null;
-  let json = false;
+  let output: Output = 'table';
   let help = false;
   for (const arg of args) {
-    if (arg === '--json') json = true;
-    else if (arg === '--help' || arg === '-h') help = true;
+    if (arg === '--json' || arg === '--csv') {
+      const wanted: Output = arg === '--json' ? 'json' : 'csv';
+      if (output !== 'table' && output !== wanted)
+        return { ok: false, error: 'choose one of --json and --csv' };
+      output = wanted;
+    } else if (arg === '--help' || arg === '-h') help = true;
     else if (arg.startsWith('-')) return { ok: false, error: `unknown option "${arg}"` };
     else if (path !== null)
       return { ok: false, error: `one design file at a time (got "${path}" and "${arg}")` };
     else path = arg;
   }
-  if (help) return { ok: true, path: path ?? '', json, help };
+  if (help) return { ok: true, path: path ?? '', output, help };
   if (path === null) return { ok: false, error: 'no design file given' };
-  return { ok: true, path, json, help };
+  return { ok: true, path, output, help };
 }
 
 function messageOf(error: unknown): string {
@@ -57,7 +64,7 @@ function messageOf(error: unknown): string {
 }
 
 /**
- * Runs `evaluate <design.json> [--json]`: reads the file, restores it through io/restore (the only
+ * Runs `evaluate <design.json> [--json | --csv]`: reads the file, restores it through io/restore (the only
  * load path), evaluates it and prints a table or one JSON object.
  *
  * @returns the process exit code (see {@link EXIT}).
@@ -106,7 +113,8 @@ export function runEvaluateCli(args: readonly string[], io: EvaluateCliIo): numb
   }
   const { design } = restored;
   const report = evaluate(design);
-  if (parsed.json) io.stdout(`${JSON.stringify(reportSummary(design, report), null, 2)}\n`);
+  if (parsed.output === 'json') io.stdout(`${JSON.stringify(reportSummary(design, report), null, 2)}\n`);
+  else if (parsed.output === 'csv') io.stdout(matFiguresCsv(report));
   else io.stdout(`${reportTable(design, report)}\n`);
   return report.findings.some((f) => f.severity === 'error') ? EXIT.findingErrors : EXIT.ok;
 }

@@ -7,6 +7,7 @@ export const TOTAL_FIGURES = [
   'bits',
   'usableBits',
   'totalArea',
+  'blockAreas',
   'cellArea',
   'arrayEfficiency',
   'areaPerBit',
@@ -88,6 +89,24 @@ export function explainTotal(key: TotalFigureKey, report: Report, design: Design
         value: t.totalArea,
         quantity: 'area',
         method: 'Gaps between blocks count as used die area.',
+        source: SOURCES.common,
+      };
+    case 'blockAreas':
+      return {
+        title: 'Area of the blocks',
+        symbol: 'A_placed',
+        formula: 'A_placed = Σ block areas, by type',
+        inputs: [
+          input('A_mats', 'mats', t.areaByType.mat, 'area'),
+          input('A_sa', 'sense-amplifier strips', t.areaByType.senseAmpStrip, 'area'),
+          input('A_swd', 'sub-word-line driver strips', t.areaByType.wordlineDriverStrip, 'area'),
+          input('A_rdec', 'row decoders', t.areaByType.rowDecoder, 'area'),
+          input('A_cdec', 'column decoders', t.areaByType.columnDecoder, 'area'),
+          input('A_sp', 'spacers', t.areaByType.spacer, 'area'),
+        ],
+        value: t.placedArea,
+        quantity: 'area',
+        method: 'Each block’s own rectangle; gaps between blocks are not included.',
         source: SOURCES.common,
       };
     case 'cellArea':

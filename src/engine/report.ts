@@ -1,3 +1,4 @@
+import type { BlockType } from '../model/block';
 import type { BitlineArchitecture, CellKind } from '../model/cell';
 import type { BitlineCapacitance } from './bitline';
 import type { StoredHighLevel } from './storedLevel';
@@ -128,6 +129,8 @@ export interface Totals {
   readonly totalArea: number;
   /** Sum of the blocks' own areas (m²); less than totalArea when there are gaps. */
   readonly placedArea: number;
+  /** placedArea split by block type: mats, each kind of strip, decoders, spacers (m²). */
+  readonly areaByType: Readonly<Record<BlockType, number>>;
   /** Sum of the usable cells' footprints (m²). */
   readonly cellArea: number;
   /** cellArea / totalArea. */

@@ -1,5 +1,6 @@
 import type { PlacedBlock, PlacedMat } from '../geometry/placedBlocks';
 import { area, boundingBox } from '../geometry/rect';
+import type { BlockType } from '../model/block';
 import type { Design } from '../model/design';
 import {
   refreshBusyFraction,
@@ -92,7 +93,19 @@ export function computeTotals(
     cellArea += m.usableBits * m.cellFootprint;
   }
   let placedArea = 0;
-  for (const p of placed) placedArea += area(p.rect);
+  const areaByType: Record<BlockType, number> = {
+    mat: 0,
+    senseAmpStrip: 0,
+    wordlineDriverStrip: 0,
+    rowDecoder: 0,
+    columnDecoder: 0,
+    spacer: 0,
+  };
+  for (const p of placed) {
+    const a = area(p.rect);
+    placedArea += a;
+    areaByType[p.block.type] += a;
+  }
   const box = boundingBox(placed.map((p) => p.rect));
   const totalArea = box ? area(box) : 0;
   const areaPerBit = usableBits > 0 ? totalArea / usableBits : 0;
@@ -108,6 +121,7 @@ export function computeTotals(
     lostBits: bits - usableBits,
     totalArea,
     placedArea,
+    areaByType,
     cellArea,
     arrayEfficiency: totalArea > 0 ? cellArea / totalArea : 0,
     areaPerBit,

@@ -121,6 +121,8 @@ export interface TotalsSummary {
   readonly lostBits: number;
   readonly area_m2: Figure;
   readonly placedArea_m2: Figure;
+  /** placedArea split by block type (m²). */
+  readonly areaByType_m2: Readonly<Record<string, Figure>>;
   readonly cellArea_m2: Figure;
   readonly arrayEfficiency_ratio: Figure;
   readonly areaPerBit_m2: Figure;
@@ -302,6 +304,7 @@ export function reportSummary(design: Design, report: Report): ReportSummary {
       lostBits: t.lostBits,
       area_m2: fig(t.totalArea),
       placedArea_m2: fig(t.placedArea),
+      areaByType_m2: Object.fromEntries(Object.entries(t.areaByType).map(([type, a]) => [type, fig(a)])),
       cellArea_m2: fig(t.cellArea),
       arrayEfficiency_ratio: fig(t.arrayEfficiency),
       areaPerBit_m2: fig(t.areaPerBit),

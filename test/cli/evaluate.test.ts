@@ -60,6 +60,21 @@ describe('npm run evaluate', () => {
     expect((parsed.mats as unknown[]).length).toBe(16);
   });
 
+  it('--csv prints a header and one row per mat', () => {
+    const r = run([DEMO_PATH, '--csv']);
+    expect(r.code).toBe(EXIT.ok);
+    const lines = r.stdout.trimEnd().split('\r\n');
+    expect(lines).toHaveLength(17);
+    expect(lines[0]).toMatch(/^mat_id,name,cell_id,/);
+    expect(lines[1]).toMatch(/^mat-r0c0,Mat 1\.1,dram-folded-8f2,folded,512,512,/);
+  });
+
+  it('--json and --csv together are a usage error', () => {
+    const r = run([DEMO_PATH, '--json', '--csv']);
+    expect(r.code).toBe(EXIT.usage);
+    expect(r.stderr).toMatch(/choose one of --json and --csv/);
+  });
+
   it('--json may come before the file', () => {
     expect(JSON.parse(run(['--json', DEMO_PATH]).stdout)).toHaveProperty('format', 'matloom-report');
   });
@@ -128,7 +143,7 @@ describe('npm run evaluate', () => {
     const r = run(args);
     expect(r.code).toBe(EXIT.usage);
     expect(r.stderr).toMatch(message);
-    expect(r.stderr).toMatch(/usage: npm run evaluate -- <design\.json> \[--json\]/);
+    expect(r.stderr).toMatch(/usage: npm run evaluate -- <design\.json> \[--json \| --csv\]/);
   });
 
   it('--help prints the usage and exits 0', () => {

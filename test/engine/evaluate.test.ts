@@ -180,3 +180,15 @@ describe('evaluate: the demo design', () => {
     expect(r.totals.arrayEfficiency).toBeLessThan(1);
   });
 });
+
+describe('evaluate: area by block type', () => {
+  it('splits the placed area into mats, strips and decoders, summing to the placed area', () => {
+    // Source: arithmetic on the demo's own blocks (16 mats of 36.864 µm square, 20 SA strips 36.864 × 6 µm).
+    const t = evaluate(demoDesign()).totals;
+    const side = 1024 * 2 * 18e-9;
+    expect(t.areaByType.mat).toBeCloseTo(16 * side * side, 18);
+    expect(t.areaByType.senseAmpStrip).toBeCloseTo(20 * side * 6e-6, 18);
+    const sum = Object.values(t.areaByType).reduce((a, b) => a + b, 0);
+    expect(sum).toBeCloseTo(t.placedArea, 18);
+  });
+});

@@ -77,6 +77,49 @@ describe('one mat on the demo process', () => {
   });
 });
 
+describe('net sense margin', () => {
+  it(
+    'falls strictly as cells per bit line grow, for every 1T1C cell on every built-in process',
+    FUZZ_TIMEOUT,
+    () => {
+      // Source: the margin is the charge-sharing signal less a k·σ offset and a noise allowance; the signal
+      // falls with Cbl (Keeth & Baker, 2001, from memory) and the noise share Cbb/Cbl rises, while k depends
+      // only on the number of sense amplifiers, which cells per bit line do not change.
+      const oneT = BUILTIN_CELLS.filter((c) => c.kind === 'dram-1t1c');
+      fc.assert(
+        fc.property(
+          fc.constantFrom(...oneT),
+          fc.constantFrom(...BUILTIN_PROCESSES),
+          fc.integer({ min: 1, max: 2048 }),
+          fc.integer({ min: 1, max: 2048 }),
+          (cell, process, a, b) => {
+            fc.pre(a !== b);
+            const margins = (n: number) => {
+              const m = findMatReport(
+                evaluate(designWith([mat({ cellId: cell.id, cellsPerBitline: n })], process)),
+                'm1',
+              );
+              return [
+                m?.senseMargin ?? NaN,
+                m?.senseMarginAtRefresh ?? NaN,
+                m?.senseSignalAfterRefresh ?? NaN,
+              ] as const;
+            };
+            const [low, high] = a < b ? [a, b] : [b, a];
+            const [freshLow, agedLow, agedSignalLow] = margins(low);
+            const [freshHigh, agedHigh, agedSignalHigh] = margins(high);
+            expect(freshLow).toBeGreaterThan(freshHigh);
+            // After a refresh window, a 1 that leaked below the precharge level reads wrongly, and a larger
+            // transfer ratio then makes it worse; while it still reads right, the margin falls with N too.
+            if (agedSignalLow > 0 && agedSignalHigh > 0) expect(agedLow).toBeGreaterThan(agedHigh);
+          },
+        ),
+        { numRuns: 300 },
+      );
+    },
+  );
+});
+
 /** Every number in a mat report, by dotted name, that is NaN. */
 function nanFigures(report: MatReport): string[] {
   const found: string[] = [];
