@@ -1,4 +1,5 @@
 import { gridFloorplan } from '../geometry/gridFloorplan';
+import { formatBits } from '../model/units';
 import { BUILTIN_CELLS } from '../model/builtins';
 import { CELL_KIND_LABEL, type CellDefinition } from '../model/cell';
 import { DESIGN_FORMAT, DESIGN_VERSION, type VariantDesign } from '../model/design';
@@ -25,19 +26,6 @@ export type BuildResult =
   | { readonly ok: true; readonly design: VariantDesign; readonly plan: PartitionPlan }
   | { readonly ok: false; readonly error: string };
 
-/** A capacity as people say it: 64 Mib, 1.5 Gib, 4096 b. */
-export function capacityLabel(bits: number): string {
-  const units: readonly [number, string][] = [
-    [2 ** 30, 'Gib'],
-    [2 ** 20, 'Mib'],
-    [2 ** 10, 'Kib'],
-  ];
-  for (const [size, unit] of units) {
-    if (bits >= size) return `${Number((bits / size).toPrecision(4))} ${unit}`;
-  }
-  return `${bits} b`;
-}
-
 /** The part of a process name before any bracketed remark: "Halden D18". */
 export function shortProcessName(process: ProcessProfile): string {
   return process.name.replace(/\s*\(.*$/, '') || process.id;
@@ -46,7 +34,7 @@ export function shortProcessName(process: ProcessProfile): string {
 /** "64 Mib bank · 1T1C folded 8F² · 512 × 1024 · Halden D18". */
 export function partitionName(spec: BuildSpec): string {
   const name = [
-    `${capacityLabel(spec.targetBits)} bank`,
+    `${formatBits(spec.targetBits)} bank`,
     spec.cell.name || CELL_KIND_LABEL[spec.cell.kind],
     `${spec.cellsPerBitline} × ${spec.cellsPerWordline}`,
     shortProcessName(spec.process),

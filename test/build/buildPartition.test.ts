@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { buildPartition, capacityLabel, partitionName } from '../../src/build/buildPartition';
+import { buildPartition, partitionName } from '../../src/build/buildPartition';
+import { formatBits } from '../../src/model/units';
 import { gridExtent, losesEdgeBits, planPartition, type StripSizes } from '../../src/build/partitionPlan';
 import { evaluate } from '../../src/engine';
 import { findOverlaps } from '../../src/engine/overlaps';
@@ -208,9 +209,9 @@ describe('partition builder', () => {
   });
 
   it('names a build after what it is', () => {
-    expect(capacityLabel(64 * MIB)).toBe('64 Mib');
-    expect(capacityLabel(1.5 * 2 ** 30)).toBe('1.5 Gib');
-    expect(capacityLabel(1000)).toBe('1000 b');
+    expect(formatBits(64 * MIB)).toBe('64 Mib');
+    expect(formatBits(1.5 * 2 ** 30)).toBe('1.5 Gib');
+    expect(formatBits(1000)).toBe('1,000 b');
     const name = partitionName({
       targetBits: 64 * MIB,
       cell: FOLDED_8F2_CELL,

@@ -1,5 +1,6 @@
 import { useState } from 'react';
-import { buildPartition, capacityLabel } from '../../build/buildPartition';
+import { buildPartition } from '../../build/buildPartition';
+import { formatBits } from '../../model/units';
 import { createVariant } from '../../commands/createVariant';
 import { processChoices, type SweepSettings } from '../../explore/sweepSettings';
 import { CELL_KIND_LABEL, CELL_KINDS, type BitlineArchitecture, type CellKind } from '../../model/cell';
@@ -142,7 +143,7 @@ export function BuilderForm({ design, settings, onBuilt }: Props) {
       />
       <div className="panel-actions">
         <button type="button" data-testid="build-partition" onClick={build} disabled={!cell || !process}>
-          Build {capacityLabel(settings.targetBits)} bank as a variant
+          Build {formatBits(settings.targetBits)} bank as a variant
         </button>
       </div>
       {error && (

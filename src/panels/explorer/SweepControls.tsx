@@ -1,5 +1,5 @@
 import type { StripSizes } from '../../build/partitionPlan';
-import { capacityLabel } from '../../build/buildPartition';
+import { formatBits } from '../../model/units';
 import { MAX_SWEEP_POINTS, sweepSize } from '../../explore/sweep';
 import {
   processChoices,
@@ -42,7 +42,7 @@ export function BankControls({ settings, onChange }: Omit<Props, 'design'>) {
         >
           {TARGET_CAPACITIES.map((bits) => (
             <option key={bits} value={bits}>
-              {capacityLabel(bits)}
+              {formatBits(bits)}
             </option>
           ))}
         </select>
