@@ -51,13 +51,15 @@ export function matConnections(
   mat: PlacedMat,
   placed: readonly PlacedBlock[],
   index: SpatialIndex,
+  /** Indices near the mat when the caller already has them (evaluate shares one query per block). */
+  candidates: readonly number[] = index.near(mat.rect, ABUTMENT_TOLERANCE),
 ): MatConnections {
   const { bitlineEnds, wordlineEnds } = lineEndSides(mat);
   const senseAmpStripIds: string[] = [];
   const wordlineDriverIds: string[] = [];
   const senseAmpContacts: SenseAmpContact[] = [];
   const drivenStretches: Interval[] = [];
-  for (const i of index.near(mat.rect, ABUTMENT_TOLERANCE)) {
+  for (const i of candidates) {
     const other = placed[i];
     if (!other || other.block.type === 'mat') continue;
     const type = other.block.type;

@@ -1,4 +1,5 @@
 import { isPlacedMat, placeBlocks, type PlacedBlock, type PlacedMat } from '../geometry/placedBlocks';
+import { ABUTMENT_TOLERANCE } from '../geometry/rect';
 import { buildSpatialIndex, type SpatialIndex } from '../geometry/spatialIndex';
 import type { Design } from '../model/design';
 import { collectFindings } from './checks';
@@ -6,7 +7,7 @@ import { matConnections } from './connectivity';
 import { matPhysics, senseAmpsOfMat, type DesignContext } from './matPhysics';
 import { offsetSigmaMultiplier } from './offset';
 import { unpartneredBitlines } from './openBitline';
-import { findOverlaps } from './overlaps';
+import { collectOverlaps, type Overlap } from './overlaps';
 import type { MatReport, Report } from './report';
 import { leakageAtTemperature } from './retention';
 import { storedHighLevel } from './storedLevel';
@@ -55,8 +56,9 @@ export function evaluatePlacedMat(
   index: SpatialIndex,
   ctx: DesignContext,
   physicsByKind?: Map<string, MatReport>,
+  candidates?: readonly number[],
 ): MatReport {
-  const connections = matConnections(mat, placed, index);
+  const connections = matConnections(mat, placed, index, candidates);
   const lost = unpartneredBitlines(
     mat,
     connections.senseAmpContacts,
@@ -97,8 +99,15 @@ export function evaluate(design: Design): Report {
   const senseAmpCount = countSenseAmps(mats);
   const ctx = designContext(design, senseAmpCount);
   const physicsByKind = new Map<string, MatReport>();
-  const matReports = mats.map((mat) => evaluatePlacedMat(mat, placed, index, ctx, physicsByKind));
-  const overlaps = findOverlaps(placed, index);
+  // One neighbour query per block serves both the overlap check and, for a mat, its connections.
+  const matReports: MatReport[] = [];
+  const overlaps: Overlap[] = [];
+  for (let i = 0; i < placed.length; i++) {
+    const a = placed[i] as PlacedBlock;
+    const near = index.near(a.rect, ABUTMENT_TOLERANCE).sort((x, y) => x - y);
+    collectOverlaps(placed, i, near, overlaps);
+    if (isPlacedMat(a)) matReports.push(evaluatePlacedMat(a, placed, index, ctx, physicsByKind, near));
+  }
   const totals = computeTotals(placed, mats, matReports, design, ctx.sigmaMultiplier, senseAmpCount);
   return {
     mats: matReports,
