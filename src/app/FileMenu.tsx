@@ -1,7 +1,8 @@
 import { useRef, useState } from 'react';
 import { canvasToPngBlob, renderFloorplanImage, type ImageOptions } from '../canvas/floorplanImage';
 import { matFiguresCsv } from '../io/matCsv';
-import { MAX_DESIGN_TEXT_LENGTH, restoreDesign } from '../io/restore';
+import { MAX_DESIGN_TEXT_LENGTH } from '../io/restore';
+import { openDesignText } from '../store/openDesignText';
 import { reportSummary } from '../io/summary';
 import { useAppStore } from '../store/useAppStore';
 import { downloadBlob, fileBaseName } from './download';
@@ -30,7 +31,6 @@ export function FileMenu() {
   const [pngOpen, setPngOpen] = useState(false);
   const [png, setPng] = useState<ImageOptions>({ region: 'all', scale: 2, legend: true, titleBlock: true });
   const setNotice = useAppStore((s) => s.setNotice);
-  const replaceDesign = useAppStore((s) => s.replaceDesign);
 
   const openFile = async (file: File) => {
     if (file.size > MAX_FILE_BYTES) {
@@ -40,19 +40,7 @@ export function FileMenu() {
       });
       return;
     }
-    const restored = restoreDesign(await file.text());
-    if (!restored.ok) {
-      setNotice({
-        kind: 'error',
-        text: `${file.name} was not opened: ${restored.errors.slice(0, 3).join('; ')}. The current design is unchanged.`,
-      });
-      return;
-    }
-    replaceDesign(restored.design);
-    setNotice({
-      kind: 'info',
-      text: `Opened ${file.name}${restored.migratedFrom ? ` (upgraded from format version ${restored.migratedFrom})` : ''}. Undo returns to the previous design.`,
-    });
+    openDesignText(useAppStore, await file.text(), file.name);
   };
 
   const current = () => useAppStore.getState();
