@@ -3,43 +3,11 @@ import { input, SOURCES, type Explanation } from './explanation';
 import { explainReadFigure } from './explainMatRead';
 import type { MatReport, Report } from './report';
 
-/** Per-mat figures that can explain themselves. Some apply to one read style only. */
-export const MAT_FIGURES = [
-  'bitlineCapacitance',
-  'chargeTransferRatio',
-  'signalHigh',
-  'signalLow',
-  'readCurrent',
-  'dropHigh',
-  'dropLow',
-  'senseSignal',
-  'offsetBudget',
-  'noiseAllowance',
-  'senseMargin',
-  'senseMarginAtRefresh',
-  'retentionTime',
-  'wordlineDelay',
-  'bitlineDelay',
-  'activationEnergy',
-  'energyPerBit',
-  'senseAmpPitchBudget',
-  'bits',
-  'area',
-] as const;
-export type MatFigureKey = (typeof MAT_FIGURES)[number];
-
-const CHARGE_SHARING_ONLY: ReadonlySet<MatFigureKey> = new Set([
-  'chargeTransferRatio',
-  'signalHigh',
-  'signalLow',
-]);
-const GAIN_ONLY: ReadonlySet<MatFigureKey> = new Set(['readCurrent', 'dropHigh', 'dropLow']);
-
-/** Panel groups of mat figures, in display order. */
-export const MAT_FIGURE_GROUPS: readonly {
-  readonly title: string;
-  readonly keys: readonly MatFigureKey[];
-}[] = [
+/**
+ * Per-mat figures in their panel groups, in display order; some apply to one read style only. The key
+ * list and its type derive from the groups, so a figure cannot be explained but left out of the panel.
+ */
+export const MAT_FIGURE_GROUPS = [
   {
     title: 'Sensing',
     keys: [
@@ -60,7 +28,17 @@ export const MAT_FIGURE_GROUPS: readonly {
   { title: 'Retention and speed', keys: ['retentionTime', 'wordlineDelay', 'bitlineDelay'] },
   { title: 'Energy', keys: ['activationEnergy', 'energyPerBit'] },
   { title: 'Area', keys: ['bits', 'area', 'senseAmpPitchBudget'] },
-];
+] as const;
+
+export type MatFigureKey = (typeof MAT_FIGURE_GROUPS)[number]['keys'][number];
+export const MAT_FIGURES: readonly MatFigureKey[] = MAT_FIGURE_GROUPS.flatMap((g) => g.keys);
+
+const CHARGE_SHARING_ONLY: ReadonlySet<MatFigureKey> = new Set([
+  'chargeTransferRatio',
+  'signalHigh',
+  'signalLow',
+]);
+const GAIN_ONLY: ReadonlySet<MatFigureKey> = new Set(['readCurrent', 'dropHigh', 'dropLow']);
 
 /** Whether a figure applies to this mat's read style. */
 export function matFigureApplies(key: MatFigureKey, mat: MatReport): boolean {

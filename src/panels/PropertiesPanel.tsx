@@ -15,6 +15,7 @@ import { formatBits, formatQuantity } from '../model/units';
 import { useAppStore } from '../store/useAppStore';
 import { NameField } from './NameField';
 import { QuantityField } from './QuantityField';
+import { useRunCommand } from './useRunCommand';
 
 /** The one value all blocks share, or null when they differ. */
 function shared<B, V>(blocks: readonly B[], pick: (b: B) => V): V | null {
@@ -39,18 +40,16 @@ function typeSummary(blocks: readonly Block[]): string {
 export function PropertiesPanel() {
   const design = useAppStore((s) => s.history.present);
   const selectedIds = useAppStore((s) => s.selectedIds);
-  const execute = useAppStore((s) => s.execute);
+  const run = useRunCommand();
   const selectedSet = new Set(selectedIds);
   const blocks = design.blocks.filter((b) => selectedSet.has(b.id));
   const mats = blocks.filter(isMat);
   const strips = blocks.filter((b): b is Strip => b.type !== 'mat');
   const ids = blocks.map((b) => b.id);
 
-  const refused = () => useAppStore.getState().lastError;
-  const patch = (p: BlockPropertiesPatch) =>
-    execute(setBlockProperties, { ids, patch: p }) ? null : refused();
+  const patch = (p: BlockPropertiesPatch) => run(setBlockProperties, { ids, patch: p });
   const counts = (args: { cellsPerBitline?: number; cellsPerWordline?: number }) =>
-    execute(setMatCellCounts, { matIds: mats.map((m) => m.id), ...args }) ? null : refused();
+    run(setMatCellCounts, { matIds: mats.map((m) => m.id), ...args });
 
   const single = blocks.length === 1 ? blocks[0] : undefined;
   const singleRect = single ? blockRect(design, single) : null;

@@ -1,5 +1,13 @@
 import { describe, expect, it } from 'vitest';
-import { evaluate, findMatReport } from '../../src/engine';
+import {
+  evaluate,
+  explainMatFigure,
+  explainTotal,
+  findMatReport,
+  MAT_FIGURES,
+  matFigureApplies,
+  TOTAL_FIGURES,
+} from '../../src/engine';
 import { OPEN_6F2_CELL } from '../../src/model/builtins';
 import type { Block, Strip } from '../../src/model/block';
 import { demoDesign } from '../../src/model/demoDesign';
@@ -190,5 +198,22 @@ describe('evaluate: area by block type', () => {
     expect(t.areaByType.senseAmpStrip).toBeCloseTo(20 * side * 6e-6, 18);
     const sum = Object.values(t.areaByType).reduce((a, b) => a + b, 0);
     expect(sum).toBeCloseTo(t.placedArea, 18);
+  });
+});
+
+describe('explained figures', () => {
+  it('every total and every mat figure is explained, and shown in exactly one panel group', () => {
+    // Source: common practice (no source): each figure in the UI must explain itself.
+    const design = demoDesign();
+    const report = evaluate(design);
+    const mat = report.mats[0];
+    if (!mat) throw new Error('demo has mats');
+    for (const key of TOTAL_FIGURES) expect(explainTotal(key, report, design).title).not.toBe('');
+    for (const key of MAT_FIGURES) {
+      if (matFigureApplies(key, mat)) expect(explainMatFigure(key, mat, design, report)?.title).toBeTruthy();
+    }
+    expect(new Set(TOTAL_FIGURES).size).toBe(TOTAL_FIGURES.length);
+    expect(new Set(MAT_FIGURES).size).toBe(MAT_FIGURES.length);
+    expect(TOTAL_FIGURES).toContain('blockAreas');
   });
 });
