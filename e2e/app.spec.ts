@@ -38,9 +38,11 @@ test('select a mat, change its cells per bit line, and see the engine’s figure
   const before = findMatReport(evaluate(demo), 'mat-r1c2');
   if (!before) throw new Error('demo lacks mat-r1c2');
   await expect(app.metricValue('bitlineCapacitance')).toHaveText(
-    formatQuantity(before.bitlineCapacitance.total, 'capacitance'),
+    formatQuantity(before.figures.bitlineCapacitance.total, 'capacitance'),
   );
-  await expect(app.metricValue('senseSignal')).toHaveText(formatQuantity(before.senseSignal, 'voltage'));
+  await expect(app.metricValue('senseSignal')).toHaveText(
+    formatQuantity(before.figures.senseSignal, 'voltage'),
+  );
 
   const field = page.getByTestId('cells-per-bitline');
   await field.fill('256');
@@ -54,11 +56,13 @@ test('select a mat, change its cells per bit line, and see the engine’s figure
   };
   const after = findMatReport(evaluate(edited), 'mat-r1c2');
   if (!after) throw new Error('edited design lacks mat-r1c2');
-  expect(after.bitlineCapacitance.total).toBeLessThan(before.bitlineCapacitance.total);
+  expect(after.figures.bitlineCapacitance.total).toBeLessThan(before.figures.bitlineCapacitance.total);
   await expect(app.metricValue('bitlineCapacitance')).toHaveText(
-    formatQuantity(after.bitlineCapacitance.total, 'capacitance'),
+    formatQuantity(after.figures.bitlineCapacitance.total, 'capacitance'),
   );
-  await expect(app.metricValue('senseSignal')).toHaveText(formatQuantity(after.senseSignal, 'voltage'));
+  await expect(app.metricValue('senseSignal')).toHaveText(
+    formatQuantity(after.figures.senseSignal, 'voltage'),
+  );
   // The shorter mat still meets the strip above it, so its bit lines stay sensed, but its sense
   // amplifiers can no longer alternate between two strips and overflow their pitch.
   await expect(page.getByTestId('findings')).toContainText('pitch budget');
@@ -71,11 +75,11 @@ test('select a mat, change its cells per bit line, and see the engine’s figure
   // Undo restores the original figures; redo brings the edit back.
   await page.getByTestId('undo').click();
   await expect(app.metricValue('bitlineCapacitance')).toHaveText(
-    formatQuantity(before.bitlineCapacitance.total, 'capacitance'),
+    formatQuantity(before.figures.bitlineCapacitance.total, 'capacitance'),
   );
   await page.getByTestId('redo').click();
   await expect(app.metricValue('bitlineCapacitance')).toHaveText(
-    formatQuantity(after.bitlineCapacitance.total, 'capacitance'),
+    formatQuantity(after.figures.bitlineCapacitance.total, 'capacitance'),
   );
 
   const shot = await page.screenshot({ path: test.info().outputPath('edited.png') });

@@ -20,8 +20,8 @@ test('switch a mat to a 3T gain cell and see a current-mode read explained', asy
     ),
   };
   const mat = findMatReport(evaluate(edited), 'mat-r0c0');
-  if (mat?.read.kind !== 'gainRead') throw new Error('expected a gain-cell read');
-  await expect(app.metricValue('dropHigh')).toHaveText(formatQuantity(mat.read.dropHigh, 'voltage'));
+  if (mat?.figures.read.kind !== 'gainRead') throw new Error('expected a gain-cell read');
+  await expect(app.metricValue('dropHigh')).toHaveText(formatQuantity(mat.figures.read.dropHigh, 'voltage'));
   await page.getByTestId('metric-dropHigh').click();
   await expect(page.getByTestId('explanation')).toContainText('I_read · t_sense / C_RBL');
   await expect(page.getByTestId('explanation')).toContainText('Source:');
@@ -48,7 +48,7 @@ test('edit the process with unit-aware inputs, refuse nonsense, reset to the bui
 
   await page.getByTestId('tab-floorplan').click();
   const doubled = { ...demo, process: { ...demo.process, cellLeakageCurrent: 20e-15 } };
-  const expected = findMatReport(evaluate(doubled), 'mat-r1c1')?.retentionTime ?? NaN;
+  const expected = findMatReport(evaluate(doubled), 'mat-r1c1')?.figures.retentionTime ?? NaN;
   await expect(app.metricValue('retentionTime')).toHaveText(formatQuantity(expected, 'time'));
 
   await page.getByTestId('tab-process').click();

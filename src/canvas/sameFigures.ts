@@ -13,22 +13,22 @@ function sameFinding(a: Finding, b: Finding): boolean {
 /** The figures the panels show for a mat; mats of one kind share their physics, so this is cheap. */
 function sameMatFigures(m: MatReport, n: MatReport): boolean {
   return (
-    m.bitlineCapacitance.total === n.bitlineCapacitance.total &&
-    m.senseSignal === n.senseSignal &&
-    m.senseSignalAfterRefresh === n.senseSignalAfterRefresh &&
-    m.senseMargin === n.senseMargin &&
-    m.senseMarginAtRefresh === n.senseMarginAtRefresh &&
-    m.requiredSignal === n.requiredSignal &&
-    m.retentionTime === n.retentionTime &&
-    m.wordlineDelay === n.wordlineDelay &&
-    m.bitlineDelay === n.bitlineDelay &&
-    m.activationEnergy.total === n.activationEnergy.total &&
-    m.senseAmpPitchBudget === n.senseAmpPitchBudget &&
-    m.bits === n.bits &&
-    m.usableBits === n.usableBits &&
-    m.area === n.area &&
-    m.cellId === n.cellId &&
-    m.read.kind === n.read.kind
+    m.figures.bitlineCapacitance.total === n.figures.bitlineCapacitance.total &&
+    m.figures.senseSignal === n.figures.senseSignal &&
+    m.figures.senseSignalAfterRefresh === n.figures.senseSignalAfterRefresh &&
+    m.figures.senseMargin === n.figures.senseMargin &&
+    m.figures.senseMarginAtRefresh === n.figures.senseMarginAtRefresh &&
+    m.figures.requiredSignal === n.figures.requiredSignal &&
+    m.figures.retentionTime === n.figures.retentionTime &&
+    m.figures.wordlineDelay === n.figures.wordlineDelay &&
+    m.figures.bitlineDelay === n.figures.bitlineDelay &&
+    m.figures.activationEnergy.total === n.figures.activationEnergy.total &&
+    m.figures.senseAmpPitchBudget === n.figures.senseAmpPitchBudget &&
+    m.figures.bits === n.figures.bits &&
+    m.figures.usableBits === n.figures.usableBits &&
+    m.figures.area === n.figures.area &&
+    m.figures.cellId === n.figures.cellId &&
+    m.figures.read.kind === n.figures.read.kind
   );
 }
 

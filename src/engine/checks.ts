@@ -1,7 +1,7 @@
 import type { Design } from '../model/design';
 import { formatQuantity } from '../model/units';
 import type { Overlap } from './overlaps';
-import type { Finding, FindingKind, MatReport, Severity } from './report';
+import type { Finding, FindingKind, MatFigures, MatReport, Severity } from './report';
 import type { StoredHighLevel } from './storedLevel';
 
 /** A finding about one mat before grouping: what is wrong, without the mat's name. */
@@ -11,17 +11,28 @@ interface MatIssue {
   readonly detail: string;
 }
 
+/** Issues with the same key are grouped into one finding. */
+const issueKeys = new WeakMap<MatIssue, string>();
+function issueKey(issue: MatIssue): string {
+  let key = issueKeys.get(issue);
+  if (key === undefined) {
+    key = `${issue.kind}|${issue.severity}|${issue.detail}`;
+    issueKeys.set(issue, key);
+  }
+  return key;
+}
+
 /** Issues that follow from a mat's physics alone; the same for every mat of one kind. */
-function physicsIssues(mat: MatReport, design: Design): MatIssue[] {
+function physicsIssues(figures: MatFigures, design: Design): MatIssue[] {
   const v = (x: number) => formatQuantity(x, 'voltage');
   const issues: MatIssue[] = [];
-  const margin = mat.senseMarginAtRefresh;
+  const margin = figures.senseMarginAtRefresh;
   const minimum = design.operating.minimumSenseMargin;
   if (margin < 0) {
     issues.push({
       kind: 'senseMargin',
       severity: 'error',
-      detail: `sense margin ${v(margin)} after a refresh window (signal ${v(mat.senseSignalAfterRefresh)} < offset and noise ${v(mat.requiredSignal)})`,
+      detail: `sense margin ${v(margin)} after a refresh window (signal ${v(figures.senseSignalAfterRefresh)} < offset and noise ${v(figures.requiredSignal)})`,
     });
   } else if (margin < minimum) {
     issues.push({
@@ -30,25 +41,25 @@ function physicsIssues(mat: MatReport, design: Design): MatIssue[] {
       detail: `sense margin ${v(margin)} is below the ${v(minimum)} target`,
     });
   }
-  if (!mat.senseAmpFits) {
+  if (!figures.senseAmpFits) {
     issues.push({
       kind: 'senseAmpPitch',
       severity: 'error',
-      detail: `a sense amplifier needs ${formatQuantity(design.process.senseAmpWidth, 'length')} but its bit-line pitch budget is ${formatQuantity(mat.senseAmpPitchBudget, 'length')}`,
+      detail: `a sense amplifier needs ${formatQuantity(design.process.senseAmpWidth, 'length')} but its bit-line pitch budget is ${formatQuantity(figures.senseAmpPitchBudget, 'length')}`,
     });
   }
-  if (mat.retentionTime < design.operating.refreshWindow) {
+  if (figures.retentionTime < design.operating.refreshWindow) {
     issues.push({
       kind: 'retention',
       severity: 'error',
-      detail: `retention ${formatQuantity(mat.retentionTime, 'time')} is shorter than the ${formatQuantity(design.operating.refreshWindow, 'time')} refresh window`,
+      detail: `retention ${formatQuantity(figures.retentionTime, 'time')} is shorter than the ${formatQuantity(design.operating.refreshWindow, 'time')} refresh window`,
     });
   }
-  if (mat.lostBits > 0) {
+  if (figures.lostBits > 0) {
     issues.push({
       kind: 'openBitlineEdge',
       severity: 'warning',
-      detail: `${formatQuantity(mat.lostBits, 'count')} bits on open bit lines have no partner mat beyond their sense-amplifier strip and are lost`,
+      detail: `${formatQuantity(figures.lostBits, 'count')} bits on open bit lines have no partner mat beyond their sense-amplifier strip and are lost`,
     });
   }
   return issues;
@@ -61,14 +72,14 @@ function connectionIssues(mat: MatReport): MatIssue[] {
     issues.push({
       kind: 'unsensedBitlines',
       severity: 'error',
-      detail: `${mat.unsensedBitlines} of ${mat.bitlineCount} bit lines reach no sense-amplifier strip`,
+      detail: `${mat.unsensedBitlines} of ${mat.figures.bitlineCount} bit lines reach no sense-amplifier strip`,
     });
   }
   if (mat.undrivenWordlines > 0) {
     issues.push({
       kind: 'undrivenWordlines',
       severity: 'error',
-      detail: `${mat.undrivenWordlines} of ${mat.wordlineCount} word lines reach no driver`,
+      detail: `${mat.undrivenWordlines} of ${mat.figures.wordlineCount} word lines reach no driver`,
     });
   }
   return issues;
@@ -93,9 +104,9 @@ export function collectFindings(
   design: Design,
 ): Finding[] {
   const groups = new Map<string, { issue: MatIssue; ids: string[]; labels: string[] }>();
-  const physicsCache = new Map<string, MatIssue[]>();
+  const physicsCache = new Map<MatFigures, MatIssue[]>();
   const add = (issue: MatIssue, mat: MatReport) => {
-    const key = `${issue.kind}|${issue.severity}|${issue.detail}`;
+    const key = issueKey(issue);
     const group = groups.get(key);
     if (group) {
       group.ids.push(mat.matId);
@@ -106,12 +117,11 @@ export function collectFindings(
   };
   for (const mat of mats) {
     for (const issue of connectionIssues(mat)) add(issue, mat);
-    // Mats of one kind share their physics (evaluate computes it once per kind), so format it once.
-    const kind = `${mat.cellId}|${mat.cellsPerBitline}|${mat.cellsPerWordline}|${mat.senseAmpPitchBudget}|${mat.senseAmpFits}|${mat.lostBits}`;
-    let issues = physicsCache.get(kind);
+    // Mats of one kind share one figures object (evaluate computes it once per kind), so format it once.
+    let issues = physicsCache.get(mat.figures);
     if (!issues) {
-      issues = physicsIssues(mat, design);
-      physicsCache.set(kind, issues);
+      issues = physicsIssues(mat.figures, design);
+      physicsCache.set(mat.figures, issues);
     }
     for (const issue of issues) add(issue, mat);
   }

@@ -1,8 +1,8 @@
 import { abutmentOnSide, type Side } from '../geometry/abutment';
 import { linesInGaps, uncoveredParts, type Interval } from '../geometry/interval';
+import type { NeighbourTable } from '../geometry/neighbourGrid';
 import type { PlacedBlock, PlacedMat } from '../geometry/placedBlocks';
 import { ABUTMENT_TOLERANCE } from '../geometry/rect';
-import type { SpatialIndex } from '../geometry/spatialIndex';
 import type { StripType } from '../model/block';
 
 /** Which strips serve a mat, found from geometry alone. */
@@ -49,17 +49,20 @@ export function lineEndSides(mat: PlacedMat): { bitlineEnds: [Side, Side]; wordl
  */
 export function matConnections(
   mat: PlacedMat,
+  /** The mat's position in `placed` and in the neighbour table. */
+  at: number,
   placed: readonly PlacedBlock[],
-  index: SpatialIndex,
-  /** Indices near the mat when the caller already has them (evaluate shares one query per block). */
-  candidates: readonly number[] = index.near(mat.rect, ABUTMENT_TOLERANCE),
+  neighbours: NeighbourTable,
 ): MatConnections {
   const { bitlineEnds, wordlineEnds } = lineEndSides(mat);
   const senseAmpStripIds: string[] = [];
   const wordlineDriverIds: string[] = [];
   const senseAmpContacts: SenseAmpContact[] = [];
   const drivenStretches: Interval[] = [];
-  for (const i of candidates) {
+  const { list } = neighbours;
+  const end = neighbours.end[at] as number;
+  for (let k = neighbours.start[at] as number; k < end; k++) {
+    const i = list[k] as number;
     const other = placed[i];
     if (!other || other.block.type === 'mat') continue;
     const type = other.block.type;

@@ -1,14 +1,14 @@
+import { neighbourTable, type NeighbourTable } from '../geometry/neighbourGrid';
 import { isPlacedMat, placeBlocks, type PlacedBlock, type PlacedMat } from '../geometry/placedBlocks';
-import { ABUTMENT_TOLERANCE } from '../geometry/rect';
-import { buildSpatialIndex, type SpatialIndex } from '../geometry/spatialIndex';
+import { ABUTMENT_TOLERANCE, overlapArea } from '../geometry/rect';
 import type { Design } from '../model/design';
 import { collectFindings } from './checks';
 import { matConnections } from './connectivity';
 import { matPhysics, senseAmpsOfMat, type DesignContext } from './matPhysics';
 import { offsetSigmaMultiplier } from './offset';
 import { unpartneredBitlines } from './openBitline';
-import { collectOverlaps, type Overlap } from './overlaps';
-import type { MatReport, Report } from './report';
+import type { Overlap } from './overlaps';
+import type { MatFigures, MatReport, Report } from './report';
 import { leakageAtTemperature } from './retention';
 import { storedHighLevel } from './storedLevel';
 import { computeTotals } from './totals';
@@ -46,41 +46,41 @@ export function countSenseAmps(mats: readonly PlacedMat[]): number {
 }
 
 /**
- * Figures of one placed mat: its connections from the spatial index, then its physics. Mats with the
- * same cell, cell counts and sense-amplifier arrangement have the same physics, so with a `physicsByKind`
- * map a regular array computes it once per kind of mat and copies it with each mat's own identity.
+ * Figures of one placed mat: its connections from its neighbours, then its physics. Mats with the same
+ * cell, cell counts and sense-amplifier arrangement have the same physics, so with a `figuresByKind`
+ * map a regular array computes it once per kind of mat and every mat of that kind shares the object.
  */
 export function evaluatePlacedMat(
   mat: PlacedMat,
+  /** The mat's position in `placed` and in the neighbour table. */
+  at: number,
   placed: readonly PlacedBlock[],
-  index: SpatialIndex,
+  neighbours: NeighbourTable,
   ctx: DesignContext,
-  physicsByKind?: Map<string, MatReport>,
-  candidates?: readonly number[],
+  figuresByKind?: Map<string, MatFigures>,
 ): MatReport {
-  const connections = matConnections(mat, placed, index, candidates);
+  const connections = matConnections(mat, at, placed, neighbours);
   const lost = unpartneredBitlines(
     mat,
     connections.senseAmpContacts,
     connections.senseAmpEnds,
     placed,
-    index,
+    neighbours,
   );
   const kind = `${mat.cell.id}|${mat.block.cellsPerBitline}|${mat.block.cellsPerWordline}|${connections.senseAmpEnds}|${lost}`;
-  const known = physicsByKind?.get(kind);
-  if (!known) {
-    const report = matPhysics(mat, connections, lost, ctx);
-    physicsByKind?.set(kind, report);
-    return report;
+  let figures = figuresByKind?.get(kind);
+  if (!figures) {
+    figures = matPhysics(mat, connections.senseAmpEnds, lost, ctx);
+    figuresByKind?.set(kind, figures);
   }
   return {
-    ...known,
     matId: mat.block.id,
     name: mat.block.name,
     senseAmpStripIds: connections.senseAmpStripIds,
     wordlineDriverIds: connections.wordlineDriverIds,
     unsensedBitlines: connections.unsensedBitlines,
     undrivenWordlines: connections.undrivenWordlines,
+    figures,
   };
 }
 
@@ -94,19 +94,29 @@ export function evaluatePlacedMat(
  */
 export function evaluate(design: Design): Report {
   const placed = placeBlocks(design);
-  const index = buildSpatialIndex(placed.map((p) => p.rect));
+  // Every block's neighbours in one grid pass; they serve both the overlap check and mat connections.
+  const neighbours = neighbourTable(
+    placed.map((p) => p.rect),
+    ABUTMENT_TOLERANCE,
+  );
   const mats = placed.filter(isPlacedMat);
   const senseAmpCount = countSenseAmps(mats);
   const ctx = designContext(design, senseAmpCount);
-  const physicsByKind = new Map<string, MatReport>();
-  // One neighbour query per block serves both the overlap check and, for a mat, its connections.
+  const figuresByKind = new Map<string, MatFigures>();
   const matReports: MatReport[] = [];
   const overlaps: Overlap[] = [];
+  const { start, end, list } = neighbours;
   for (let i = 0; i < placed.length; i++) {
     const a = placed[i] as PlacedBlock;
-    const near = index.near(a.rect, ABUTMENT_TOLERANCE).sort((x, y) => x - y);
-    collectOverlaps(placed, i, near, overlaps);
-    if (isPlacedMat(a)) matReports.push(evaluatePlacedMat(a, placed, index, ctx, physicsByKind, near));
+    // Rows are ascending, so pairs come out in design order of the first and then the second block.
+    for (let k = start[i] as number; k < (end[i] as number); k++) {
+      const j = list[k] as number;
+      if (j <= i) continue;
+      const b = placed[j] as PlacedBlock;
+      const shared = overlapArea(a.rect, b.rect);
+      if (shared > 0) overlaps.push({ firstId: a.block.id, secondId: b.block.id, area: shared });
+    }
+    if (isPlacedMat(a)) matReports.push(evaluatePlacedMat(a, i, placed, neighbours, ctx, figuresByKind));
   }
   const totals = computeTotals(placed, mats, matReports, design, ctx.sigmaMultiplier, senseAmpCount);
   return {

@@ -3,13 +3,12 @@ import { isGainCell } from '../model/cell';
 import type { OperatingConditions } from '../model/operating';
 import type { ProcessProfile } from '../model/process';
 import { bitlineCapacitance } from './bitline';
-import type { MatConnections } from './connectivity';
 import { chargeSharingDelay, drivenLineDelay } from './delay';
 import { bitlinePairEnergy, chargingEnergy, readBitlineRestoreEnergy } from './energy';
 import { gainReadSignals, minimumGainLevel } from './gainRead';
 import { couplingNoise } from './noise';
 import { pelgromSigma, stackOffsets } from './offset';
-import type { ActivationEnergy, ChargeSharingRead, GainCellRead, MatReport } from './report';
+import type { ActivationEnergy, ChargeSharingRead, GainCellRead, MatFigures } from './report';
 import { leakageDroop, retentionTime } from './retention';
 import { senseAmpPitchBudget } from './senseAmpPitch';
 import { chargeTransferRatio, readSignals } from './sensing';
@@ -110,13 +109,16 @@ function gainCellOutcome(
   };
 }
 
-/** Every figure of one mat, given what serves it. */
+/**
+ * Every figure of one kind of mat, given how many of its bit-line ends have sense amplifiers (0, 1 or 2)
+ * and how many of its open bit lines lack a partner.
+ */
 export function matPhysics(
   mat: PlacedMat,
-  connections: MatConnections,
+  senseAmpEnds: number,
   lostBitlines: number,
   ctx: DesignContext,
-): MatReport {
+): MatFigures {
   const p = ctx.process;
   const g = mat.geometry;
   const gain = isGainCell(mat.cell.kind);
@@ -158,16 +160,9 @@ export function matPhysics(
     perBit: total / mat.block.cellsPerWordline,
   };
 
-  const budget = senseAmpPitchBudget(
-    g.bitlinePitch,
-    mat.cell.bitlineArchitecture,
-    gain,
-    connections.senseAmpEnds,
-  );
+  const budget = senseAmpPitchBudget(g.bitlinePitch, mat.cell.bitlineArchitecture, gain, senseAmpEnds);
   const lostBits = lostBitlines * mat.block.cellsPerBitline;
   return {
-    matId: mat.block.id,
-    name: mat.block.name,
     cellId: mat.cell.id,
     cellKind: mat.cell.kind,
     architecture: mat.cell.bitlineArchitecture,
@@ -205,10 +200,6 @@ export function matPhysics(
     bitlineDelay: outcome.bitlineDelay,
     activationEnergy,
     senseAmpPitchBudget: budget,
-    senseAmpFits: connections.senseAmpEnds === 0 || p.senseAmpWidth <= budget * (1 + 1e-9),
-    senseAmpStripIds: connections.senseAmpStripIds,
-    wordlineDriverIds: connections.wordlineDriverIds,
-    unsensedBitlines: connections.unsensedBitlines,
-    undrivenWordlines: connections.undrivenWordlines,
+    senseAmpFits: senseAmpEnds === 0 || p.senseAmpWidth <= budget * (1 + 1e-9),
   };
 }

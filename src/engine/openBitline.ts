@@ -1,8 +1,8 @@
 import { abutmentOnSide, type Side } from '../geometry/abutment';
 import { linesInGaps, uncoveredParts, type Interval } from '../geometry/interval';
+import type { NeighbourTable } from '../geometry/neighbourGrid';
 import type { PlacedBlock, PlacedMat } from '../geometry/placedBlocks';
 import { ABUTMENT_TOLERANCE } from '../geometry/rect';
-import type { SpatialIndex } from '../geometry/spatialIndex';
 import { isGainCell } from '../model/cell';
 import type { SenseAmpContact } from './connectivity';
 
@@ -21,7 +21,7 @@ export function unpartneredBitlines(
   contacts: readonly SenseAmpContact[],
   senseAmpEnds: number,
   placed: readonly PlacedBlock[],
-  index: SpatialIndex,
+  neighbours: NeighbourTable,
 ): number {
   // Gain cells read single-ended against a reference, so they need no partner mat.
   if (mat.cell.bitlineArchitecture !== 'open' || isGainCell(mat.cell.kind) || contacts.length === 0) return 0;
@@ -31,7 +31,7 @@ export function unpartneredBitlines(
   for (const contact of contacts) {
     const strip = placed[contact.stripIndex];
     if (!strip) continue;
-    const partnered = partnerStretches(mat, contact.side, strip, placed, index);
+    const partnered = partnerStretches(mat, contact.side, strip, contact.stripIndex, placed, neighbours);
     const gaps = uncoveredParts(partnered, g.wordlineLength, ABUTMENT_TOLERANCE)
       .map((gap) => clip(gap, contact.stretch))
       .filter((gap): gap is Interval => gap !== null);
@@ -45,14 +45,16 @@ function partnerStretches(
   mat: PlacedMat,
   side: Side,
   strip: PlacedBlock,
+  stripIndex: number,
   placed: readonly PlacedBlock[],
-  index: SpatialIndex,
+  neighbours: NeighbourTable,
 ): Interval[] {
   const horizontal = side === 'top' || side === 'bottom';
   const shift = horizontal ? strip.rect.x - mat.rect.x : strip.rect.y - mat.rect.y;
   const stretches: Interval[] = [];
-  for (const j of index.near(strip.rect, ABUTMENT_TOLERANCE)) {
-    const other = placed[j];
+  const end = neighbours.end[stripIndex] as number;
+  for (let k = neighbours.start[stripIndex] as number; k < end; k++) {
+    const other = placed[neighbours.list[k] as number];
     if (!other || other === mat || other.block.type !== 'mat' || !('cell' in other)) continue;
     if (other.cell.bitlineArchitecture !== 'open' || isGainCell(other.cell.kind)) continue;
     if (other.block.bitlineAxis !== mat.block.bitlineAxis) continue;

@@ -1,6 +1,7 @@
 import { isPlacedMat, placeBlocks, type PlacedBlock } from '../geometry/placedBlocks';
 import { placedDesign } from '../geometry/placedIndex';
 import { ABUTMENT_TOLERANCE, bottom, overlapArea, right, type Rect } from '../geometry/rect';
+import { neighbourTableOf, type NeighbourTable } from '../geometry/neighbourGrid';
 import type { SpatialIndex } from '../geometry/spatialIndex';
 import type { Block } from '../model/block';
 import type { Design } from '../model/design';
@@ -71,6 +72,32 @@ function intersects(a: Rect, b: Rect, margin: number): boolean {
 }
 
 /**
+ * Neighbour rows for the mats to evaluate again and for the sense-amplifier strips beside them (whose
+ * neighbours give an open-bit-line mat its partners), found by queries on the composite index; every
+ * other row stays empty.
+ */
+function previewNeighbours(
+  combined: readonly PlacedBlock[],
+  composite: SpatialIndex,
+  mats: ReadonlySet<number>,
+): NeighbourTable {
+  const rows = new Map<number, number[]>();
+  const rowOf = (i: number): number[] => {
+    let row = rows.get(i);
+    if (!row) {
+      const rect = combined[i]?.rect;
+      row = rect ? composite.near(rect, ABUTMENT_TOLERANCE).filter((j) => j !== i) : [];
+      rows.set(i, row);
+    }
+    return row;
+  };
+  for (const i of mats) {
+    for (const j of rowOf(i)) if (combined[j]?.block.type === 'senseAmpStrip') rowOf(j);
+  }
+  return neighbourTableOf(combined.length, rows);
+}
+
+/**
  * The report of the design with the changing blocks replaced by `changed` (same ids; blocks are neither
  * added nor removed). Mats beside a changed block are evaluated again through a composite index (the
  * static index without the changing blocks, plus the moved ones); every other mat keeps its report.
@@ -124,11 +151,12 @@ export function previewReport(base: PreviewBase, changed: readonly Block[]): Rep
     }
   }
   const ctx = designContext(design, senseAmpCount);
+  const neighbours = previewNeighbours(combined, composite, affected);
   const mats = report.mats.slice();
   for (const i of affected) {
     const p = combined[i];
     if (!p || !isPlacedMat(p)) continue;
-    const r = evaluatePlacedMat(p, combined, composite, ctx);
+    const r = evaluatePlacedMat(p, i, combined, neighbours, ctx);
     const at = base.matOrder.get(r.matId);
     if (at !== undefined) mats[at] = r;
   }

@@ -38,10 +38,12 @@ export interface ActivationEnergy {
   readonly perBit: number;
 }
 
-/** Figures of one mat, all in SI units. */
-export interface MatReport {
-  readonly matId: string;
-  readonly name: string;
+/**
+ * The physics of one kind of mat, all in SI units: everything that follows from its cell, its cell counts,
+ * how many bit-line ends have sense amplifiers and how many open bit lines lack a partner. Mats of one
+ * kind share one object, so a regular die holds a handful of these however many mats it has.
+ */
+export interface MatFigures {
   readonly cellId: string;
   readonly cellKind: CellKind;
   readonly architecture: BitlineArchitecture;
@@ -98,10 +100,22 @@ export interface MatReport {
   /** Width available to one sense amplifier along its strip (m). */
   readonly senseAmpPitchBudget: number;
   readonly senseAmpFits: boolean;
+}
+
+/** One mat of the floorplan: who it is, what serves it, and its figures. */
+export interface MatReport {
+  readonly matId: string;
+  readonly name: string;
+  /** Ids of the sense-amplifier strips abutting its bit-line ends. */
   readonly senseAmpStripIds: readonly string[];
+  /** Ids of the driver strips or row decoders abutting its word-line ends. */
   readonly wordlineDriverIds: readonly string[];
+  /** Bit lines that reach no sense-amplifier strip. */
   readonly unsensedBitlines: number;
+  /** Word lines that reach no driver. */
   readonly undrivenWordlines: number;
+  /** Its physics, shared with every mat of the same kind. */
+  readonly figures: MatFigures;
 }
 
 /** Refresh burden of the whole floorplan. */

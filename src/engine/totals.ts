@@ -45,7 +45,7 @@ function refreshFigures(
   const cycleTime = refreshCycleTime(rowsPerCommand, o.refreshRowsInParallel, design.process.rowCycleTime);
   // Every word line of every mat is activated once per window.
   let energyOfAllRows = 0;
-  for (const r of reports) energyOfAllRows += r.activationEnergy.total * r.wordlineCount;
+  for (const r of reports) energyOfAllRows += r.figures.activationEnergy.total * r.figures.wordlineCount;
   return {
     rows,
     interval,
@@ -88,9 +88,9 @@ export function computeTotals(
   let usableBits = 0;
   let cellArea = 0;
   for (const m of reports) {
-    bits += m.bits;
-    usableBits += m.usableBits;
-    cellArea += m.usableBits * m.cellFootprint;
+    bits += m.figures.bits;
+    usableBits += m.figures.usableBits;
+    cellArea += m.figures.usableBits * m.figures.cellFootprint;
   }
   let placedArea = 0;
   const areaByType: Record<BlockType, number> = {
@@ -110,10 +110,10 @@ export function computeTotals(
   const totalArea = box ? area(box) : 0;
   const areaPerBit = usableBits > 0 ? totalArea / usableBits : 0;
   const F = design.process.featureSize;
-  const [worstSenseSignal, worstSenseSignalMatId] = worst(reports, (m) => m.senseSignal);
-  const [worstSenseMargin, worstSenseMarginMatId] = worst(reports, (m) => m.senseMarginAtRefresh);
-  const [shortestRetention] = worst(reports, (m) => m.retentionTime);
-  const [negativeDelay] = worst(reports, (m) => -m.wordlineDelay);
+  const [worstSenseSignal, worstSenseSignalMatId] = worst(reports, (m) => m.figures.senseSignal);
+  const [worstSenseMargin, worstSenseMarginMatId] = worst(reports, (m) => m.figures.senseMarginAtRefresh);
+  const [shortestRetention] = worst(reports, (m) => m.figures.retentionTime);
+  const [negativeDelay] = worst(reports, (m) => -m.figures.wordlineDelay);
   return {
     matCount: reports.length,
     bits,

@@ -122,8 +122,8 @@ function largest(mats: readonly MatReport[], pick: (m: MatReport) => number): Ma
 export function figuresFromReport(report: Report): PartitionFigures {
   const t = report.totals;
   const worstMargin = report.mats.find((m) => m.matId === t.worstSenseMarginMatId);
-  const slowest = largest(report.mats, (m) => m.wordlineDelay);
-  const hungriest = largest(report.mats, (m) => m.activationEnergy.perBit);
+  const slowest = largest(report.mats, (m) => m.figures.wordlineDelay);
+  const hungriest = largest(report.mats, (m) => m.figures.activationEnergy.perBit);
   const kinds = (severity: 'error' | 'warning') =>
     [...new Set(report.findings.filter((f) => f.severity === severity).map((f) => f.kind))].sort();
   return {
@@ -135,14 +135,14 @@ export function figuresFromReport(report: Report): PartitionFigures {
     areaPerBitInF2: t.usableBits > 0 ? t.areaPerBitInF2 : Number.NaN,
     arrayEfficiency: t.arrayEfficiency,
     senseMargin: t.worstSenseMargin,
-    senseSignalAtRefresh: worstMargin?.senseSignalAfterRefresh ?? Number.NaN,
-    requiredSignal: worstMargin?.requiredSignal ?? Number.NaN,
+    senseSignalAtRefresh: worstMargin?.figures.senseSignalAfterRefresh ?? Number.NaN,
+    requiredSignal: worstMargin?.figures.requiredSignal ?? Number.NaN,
     wordlineDelay: t.worstWordlineDelay,
-    wordlineResistance: slowest?.wordlineResistance ?? Number.NaN,
-    wordlineCapacitance: slowest?.wordlineCapacitance ?? Number.NaN,
-    activationEnergyPerBit: hungriest?.activationEnergy.perBit ?? Number.NaN,
-    activationEnergy: hungriest?.activationEnergy.total ?? Number.NaN,
-    cellsPerWordline: hungriest?.cellsPerWordline ?? Number.NaN,
+    wordlineResistance: slowest?.figures.wordlineResistance ?? Number.NaN,
+    wordlineCapacitance: slowest?.figures.wordlineCapacitance ?? Number.NaN,
+    activationEnergyPerBit: hungriest?.figures.activationEnergy.perBit ?? Number.NaN,
+    activationEnergy: hungriest?.figures.activationEnergy.total ?? Number.NaN,
+    cellsPerWordline: hungriest?.figures.cellsPerWordline ?? Number.NaN,
     retentionTime: t.shortestRetention,
     refreshCycleTime: t.refresh.cycleTime,
     refreshInterval: t.refresh.interval,

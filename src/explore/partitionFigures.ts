@@ -1,6 +1,5 @@
 import type { BuildSpec } from '../build/buildPartition';
 import { planPartition, type PartitionPlan } from '../build/partitionPlan';
-import type { MatConnections } from '../engine/connectivity';
 import { matPhysics, senseAmpsOfMat, type DesignContext } from '../engine/matPhysics';
 import { offsetSigmaMultiplier } from '../engine/offset';
 import {
@@ -56,14 +55,7 @@ export class ProcessCache {
 }
 
 /** Every mat of a built bank has a sense-amplifier strip at both bit-line ends and drivers at both word-line ends. */
-const SERVED_BOTH_ENDS: MatConnections = {
-  senseAmpStripIds: [],
-  wordlineDriverIds: [],
-  unsensedBitlines: 0,
-  undrivenWordlines: 0,
-  senseAmpContacts: [],
-  senseAmpEnds: 2,
-};
+const SENSE_AMP_ENDS = 2;
 
 /**
  * The comparison figures of the bank buildPartition() would build, without building it. Every mat of
@@ -110,7 +102,7 @@ export function partitionFigures(
     sigmaMultiplier: offsetSigmaMultiplier(senseAmpCount, operating.allowedSenseFailures),
     leakage: shared.leakage,
   };
-  const mat = matPhysics(placed, SERVED_BOTH_ENDS, 0, ctx);
+  const mat = matPhysics(placed, SENSE_AMP_ENDS, 0, ctx);
 
   const totalArea = plan.width * plan.height;
   const cellArea = plan.usableBits * geometry.cellArea;

@@ -7,39 +7,39 @@ interface Column {
 }
 
 const read = (m: MatReport, pick: 'high' | 'low'): number =>
-  m.read.kind === 'chargeSharing'
+  m.figures.read.kind === 'chargeSharing'
     ? pick === 'high'
-      ? m.read.signalHigh
-      : m.read.signalLow
+      ? m.figures.read.signalHigh
+      : m.figures.read.signalLow
     : pick === 'high'
-      ? m.read.dropHigh
-      : m.read.dropLow;
+      ? m.figures.read.dropHigh
+      : m.figures.read.dropLow;
 
 const COLUMNS: readonly Column[] = [
   { header: 'mat_id', value: (m) => m.matId },
   { header: 'name', value: (m) => m.name },
-  { header: 'cell_id', value: (m) => m.cellId },
-  { header: 'architecture', value: (m) => m.architecture },
-  { header: 'cells_per_bitline', value: (m) => m.cellsPerBitline },
-  { header: 'cells_per_wordline', value: (m) => m.cellsPerWordline },
-  { header: 'bits', value: (m) => m.bits },
-  { header: 'usable_bits', value: (m) => m.usableBits },
-  { header: 'area_m2', value: (m) => m.area },
-  { header: 'bitline_capacitance_F', value: (m) => m.bitlineCapacitance.total },
+  { header: 'cell_id', value: (m) => m.figures.cellId },
+  { header: 'architecture', value: (m) => m.figures.architecture },
+  { header: 'cells_per_bitline', value: (m) => m.figures.cellsPerBitline },
+  { header: 'cells_per_wordline', value: (m) => m.figures.cellsPerWordline },
+  { header: 'bits', value: (m) => m.figures.bits },
+  { header: 'usable_bits', value: (m) => m.figures.usableBits },
+  { header: 'area_m2', value: (m) => m.figures.area },
+  { header: 'bitline_capacitance_F', value: (m) => m.figures.bitlineCapacitance.total },
   {
     header: 'charge_transfer_ratio',
-    value: (m) => (m.read.kind === 'chargeSharing' ? m.read.chargeTransferRatio : ''),
+    value: (m) => (m.figures.read.kind === 'chargeSharing' ? m.figures.read.chargeTransferRatio : ''),
   },
   { header: 'signal_or_drop_1_V', value: (m) => read(m, 'high') },
   { header: 'signal_or_drop_0_V', value: (m) => read(m, 'low') },
-  { header: 'sense_signal_V', value: (m) => m.senseSignal },
-  { header: 'offset_budget_V', value: (m) => m.offsetBudget },
-  { header: 'noise_allowance_V', value: (m) => m.noiseAllowance },
-  { header: 'sense_margin_at_refresh_V', value: (m) => m.senseMarginAtRefresh },
-  { header: 'retention_s', value: (m) => m.retentionTime },
-  { header: 'wordline_delay_s', value: (m) => m.wordlineDelay },
-  { header: 'bitline_delay_s', value: (m) => m.bitlineDelay },
-  { header: 'activation_energy_J', value: (m) => m.activationEnergy.total },
+  { header: 'sense_signal_V', value: (m) => m.figures.senseSignal },
+  { header: 'offset_budget_V', value: (m) => m.figures.offsetBudget },
+  { header: 'noise_allowance_V', value: (m) => m.figures.noiseAllowance },
+  { header: 'sense_margin_at_refresh_V', value: (m) => m.figures.senseMarginAtRefresh },
+  { header: 'retention_s', value: (m) => m.figures.retentionTime },
+  { header: 'wordline_delay_s', value: (m) => m.figures.wordlineDelay },
+  { header: 'bitline_delay_s', value: (m) => m.figures.bitlineDelay },
+  { header: 'activation_energy_J', value: (m) => m.figures.activationEnergy.total },
   { header: 'unsensed_bitlines', value: (m) => m.unsensedBitlines },
   { header: 'undriven_wordlines', value: (m) => m.undrivenWordlines },
 ];

@@ -43,22 +43,22 @@ const MAT_HEADERS = [
 ] as const;
 
 function matRow(m: MatReport): string[] {
-  const r = m.read;
+  const r = m.figures.read;
   const [ctr, high, low] =
     r.kind === 'chargeSharing'
       ? [formatScaled(r.chargeTransferRatio, '', 4), r.signalHigh, r.signalLow]
       : ['—', r.dropHigh, r.dropLow];
   return [
     m.matId,
-    formatQuantity(m.cellsPerBitline, 'count'),
-    formatQuantity(m.cellsPerWordline, 'count'),
-    formatQuantity(m.bits, 'count'),
-    formatScaled(m.bitlineCapacitance.total, 'f', 2),
+    formatQuantity(m.figures.cellsPerBitline, 'count'),
+    formatQuantity(m.figures.cellsPerWordline, 'count'),
+    formatQuantity(m.figures.bits, 'count'),
+    formatScaled(m.figures.bitlineCapacitance.total, 'f', 2),
     ctr,
     formatScaled(high, 'm', 1),
     formatScaled(low, 'm', 1),
-    formatScaled(m.senseSignal, 'm', 1),
-    formatScaled(m.senseMarginAtRefresh, 'm', 1),
+    formatScaled(m.figures.senseSignal, 'm', 1),
+    formatScaled(m.figures.senseMarginAtRefresh, 'm', 1),
     formatQuantity(m.unsensedBitlines, 'count'),
     formatQuantity(m.undrivenWordlines, 'count'),
   ];

@@ -1,4 +1,4 @@
-import type { Finding, MatReport, Report } from '../engine/report';
+import type { Finding, MatFigures, MatReport, Report } from '../engine/report';
 import type { BitlineArchitecture, CellKind } from '../model/cell';
 import type { Design } from '../model/design';
 
@@ -183,7 +183,7 @@ function fig(value: number): Figure {
   return Number.isFinite(value) ? value : null;
 }
 
-function readSummary(read: MatReport['read']): ReadSummary {
+function readSummary(read: MatFigures['read']): ReadSummary {
   return read.kind === 'chargeSharing'
     ? {
         kind: 'chargeSharing',
@@ -202,58 +202,58 @@ function readSummary(read: MatReport['read']): ReadSummary {
 }
 
 function matSummary(m: MatReport): MatSummary {
-  const cbl = m.bitlineCapacitance;
-  const e = m.activationEnergy;
+  const cbl = m.figures.bitlineCapacitance;
+  const e = m.figures.activationEnergy;
   return {
     id: m.matId,
     name: m.name,
-    cellId: m.cellId,
-    cellKind: m.cellKind,
-    architecture: m.architecture,
-    cellsPerBitline: m.cellsPerBitline,
-    cellsPerWordline: m.cellsPerWordline,
-    bitlines: m.bitlineCount,
-    wordlines: m.wordlineCount,
-    bits: m.bits,
-    usableBits: m.usableBits,
-    lostBits: m.lostBits,
-    area_m2: fig(m.area),
-    cellArea_m2: fig(m.cellArea),
-    cellFootprint_m2: fig(m.cellFootprint),
-    bitlineLength_m: fig(m.bitlineLength),
-    wordlineLength_m: fig(m.wordlineLength),
-    storageCapacitance_F: fig(m.storageCapacitance),
+    cellId: m.figures.cellId,
+    cellKind: m.figures.cellKind,
+    architecture: m.figures.architecture,
+    cellsPerBitline: m.figures.cellsPerBitline,
+    cellsPerWordline: m.figures.cellsPerWordline,
+    bitlines: m.figures.bitlineCount,
+    wordlines: m.figures.wordlineCount,
+    bits: m.figures.bits,
+    usableBits: m.figures.usableBits,
+    lostBits: m.figures.lostBits,
+    area_m2: fig(m.figures.area),
+    cellArea_m2: fig(m.figures.cellArea),
+    cellFootprint_m2: fig(m.figures.cellFootprint),
+    bitlineLength_m: fig(m.figures.bitlineLength),
+    wordlineLength_m: fig(m.figures.wordlineLength),
+    storageCapacitance_F: fig(m.figures.storageCapacitance),
     bitlineCapacitance_F: fig(cbl.total),
     bitlineJunctionCapacitance_F: fig(cbl.junction),
     bitlineToWordlineCapacitance_F: fig(cbl.wordlineCoupling),
     bitlineToBitlineCapacitance_F: fig(cbl.bitlineCoupling),
     bitlineWireCapacitance_F: fig(cbl.wire),
     senseAmpInputCapacitance_F: fig(cbl.senseAmp),
-    read: readSummary(m.read),
-    senseSignal_V: fig(m.senseSignal),
-    senseSignalAfterRefresh_V: fig(m.senseSignalAfterRefresh),
-    senseAmps: m.senseAmpCount,
-    offsetSigma_V: fig(m.offsetSigma),
-    offsetBudget_V: fig(m.offsetBudget),
-    noiseAllowance_V: fig(m.noiseAllowance),
-    requiredSignal_V: fig(m.requiredSignal),
-    senseMargin_V: fig(m.senseMargin),
-    senseMarginAtRefresh_V: fig(m.senseMarginAtRefresh),
-    leakage_A: fig(m.leakage),
-    allowedDroop_V: fig(m.allowedDroop),
-    retentionTime_s: fig(m.retentionTime),
-    wordlineResistance_ohm: fig(m.wordlineResistance),
-    wordlineCapacitance_F: fig(m.wordlineCapacitance),
-    wordlineDelay_s: fig(m.wordlineDelay),
-    bitlineResistance_ohm: fig(m.bitlineResistance),
-    bitlineDelay_s: fig(m.bitlineDelay),
+    read: readSummary(m.figures.read),
+    senseSignal_V: fig(m.figures.senseSignal),
+    senseSignalAfterRefresh_V: fig(m.figures.senseSignalAfterRefresh),
+    senseAmps: m.figures.senseAmpCount,
+    offsetSigma_V: fig(m.figures.offsetSigma),
+    offsetBudget_V: fig(m.figures.offsetBudget),
+    noiseAllowance_V: fig(m.figures.noiseAllowance),
+    requiredSignal_V: fig(m.figures.requiredSignal),
+    senseMargin_V: fig(m.figures.senseMargin),
+    senseMarginAtRefresh_V: fig(m.figures.senseMarginAtRefresh),
+    leakage_A: fig(m.figures.leakage),
+    allowedDroop_V: fig(m.figures.allowedDroop),
+    retentionTime_s: fig(m.figures.retentionTime),
+    wordlineResistance_ohm: fig(m.figures.wordlineResistance),
+    wordlineCapacitance_F: fig(m.figures.wordlineCapacitance),
+    wordlineDelay_s: fig(m.figures.wordlineDelay),
+    bitlineResistance_ohm: fig(m.figures.bitlineResistance),
+    bitlineDelay_s: fig(m.figures.bitlineDelay),
     activationEnergy_J: fig(e.total),
     activationEnergyBitlines_J: fig(e.bitlines),
     activationEnergyWordline_J: fig(e.wordline),
     activationEnergySenseAmps_J: fig(e.senseAmps),
     activationEnergyPerBit_J: fig(e.perBit),
-    senseAmpPitchBudget_m: fig(m.senseAmpPitchBudget),
-    senseAmpFits: m.senseAmpFits,
+    senseAmpPitchBudget_m: fig(m.figures.senseAmpPitchBudget),
+    senseAmpFits: m.figures.senseAmpFits,
     senseAmpStripIds: [...m.senseAmpStripIds],
     wordlineDriverIds: [...m.wordlineDriverIds],
     unsensedBitlines: m.unsensedBitlines,

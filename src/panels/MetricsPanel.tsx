@@ -36,7 +36,8 @@ export function MetricsPanel() {
       {mat ? (
         <div className="figures" data-testid="mat-figures">
           <h3 className="figures-title">
-            Selected: {mat.name || mat.matId} · {CELL_KIND_LABEL[mat.cellKind]} {mat.architecture}
+            Selected: {mat.name || mat.matId} · {CELL_KIND_LABEL[mat.figures.cellKind]}{' '}
+            {mat.figures.architecture}
           </h3>
           {MAT_FIGURE_GROUPS.map((group) => (
             <div key={group.title} className="figure-group">

@@ -57,9 +57,9 @@ describe('operating-condition commands', () => {
       { field: 'temperature', value: 368.15 },
       (d) => d.operating.temperature === 368.15,
     );
-    const hot = findMatReport(store.getState().report, 'mat-r0c0')?.retentionTime ?? NaN;
+    const hot = findMatReport(store.getState().report, 'mat-r0c0')?.figures.retentionTime ?? NaN;
     store.getState().undo();
-    const cool = findMatReport(store.getState().report, 'mat-r0c0')?.retentionTime ?? NaN;
+    const cool = findMatReport(store.getState().report, 'mat-r0c0')?.figures.retentionTime ?? NaN;
     expect(hot).toBeLessThan(cool);
   });
 
@@ -85,7 +85,7 @@ describe('cell commands', () => {
       { cellId: 'dram-folded-8f2', field: 'storageCapacitance', value: 20e-15 },
       (d) => cell(d, 'dram-folded-8f2')?.storageCapacitance === 20e-15,
     );
-    expect(findMatReport(store.getState().report, 'mat-r0c0')?.storageCapacitance).toBe(20e-15);
+    expect(findMatReport(store.getState().report, 'mat-r0c0')?.figures.storageCapacitance).toBe(20e-15);
     expectRefused(
       setCellValue,
       { cellId: 'dram-folded-8f2', field: 'bitlinePitchInF', value: -2 },

@@ -7,7 +7,8 @@ import { createAppStore } from '../../src/store/appStore';
 describe('command: set cells per line', () => {
   it('runs, undoes and redoes, with the report following each step', () => {
     const store = createAppStore(demoDesign());
-    const cbl = () => findMatReport(store.getState().report, 'mat-r0c0')?.bitlineCapacitance.total ?? NaN;
+    const cbl = () =>
+      findMatReport(store.getState().report, 'mat-r0c0')?.figures.bitlineCapacitance.total ?? NaN;
     const original = cbl();
     const originalDesign = store.getState().history.present;
 

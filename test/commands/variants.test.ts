@@ -56,7 +56,7 @@ describe('variant commands', () => {
     expect(activeVariantId(d)).toBe('v2');
     // The report follows the active variant.
     expect(store.getState().report.totals.matCount).toBe(d.blocks.filter((b) => b.type === 'mat').length);
-    expect(store.getState().report.mats[0]?.cellId).toBe(OPEN_6F2_CELL.id);
+    expect(store.getState().report.mats[0]?.figures.cellId).toBe(OPEN_6F2_CELL.id);
   });
 
   it('create refuses an invalid design and leaves the document alone', () => {

@@ -89,8 +89,8 @@ describe('open bit lines at the array edge', () => {
     // Source: Takahashi et al., IEEE JSSC 36(11), 2001; Sekiguchi, Itoh et al., IEEE JSSC 2002: the edge mats
     // have no partner for half their bit lines (published).
     const r = evaluate(designWith([upper, lower, ...strips, ...drivers]));
-    expect(findMatReport(r, 'upper')?.lostBits).toBe(128 * 256);
-    expect(findMatReport(r, 'lower')?.lostBits).toBe(128 * 256);
+    expect(findMatReport(r, 'upper')?.figures.lostBits).toBe(128 * 256);
+    expect(findMatReport(r, 'lower')?.figures.lostBits).toBe(128 * 256);
     expect(r.totals.usableBits).toBe(r.totals.bits / 2);
     // Both edge mats lose the same number of bits, so the checks group them into one finding.
     const edge = r.findings.filter((f) => f.kind === 'openBitlineEdge');
@@ -101,13 +101,13 @@ describe('open bit lines at the array edge', () => {
 
   it('a lone open mat cannot be read at all; folded mats lose nothing', () => {
     const r = evaluate(designWith([upper, strips[0] as Block, strips[1] as Block, drivers[0] as Block]));
-    expect(findMatReport(r, 'upper')?.usableBits).toBe(0);
+    expect(findMatReport(r, 'upper')?.figures.usableBits).toBe(0);
     const folded = mat({ id: 'f', cellsPerBitline: 256, cellsPerWordline: 256, x: 0, y: sa });
     const fw = 512 * 2 * F;
     const rf = evaluate(
       designWith([folded, strip('a', 0, 0, fw, sa), strip('b', 0, sa + 512 * 2 * F, fw, sa)]),
     );
-    expect(findMatReport(rf, 'f')?.lostBits).toBe(0);
+    expect(findMatReport(rf, 'f')?.figures.lostBits).toBe(0);
   });
 
   it('area per bit counts only usable bits', () => {
@@ -191,20 +191,23 @@ describe('gain cells', () => {
 
   it('reads by current into a read bit line at VDD, inverting and non-destructive', () => {
     const m = evaluate(gainDesign(64)).mats[0];
-    if (m?.read.kind !== 'gainRead') throw new Error('gain cells read by current');
+    if (m?.figures.read.kind !== 'gainRead') throw new Error('gain cells read by current');
     const t = LOGIC_PROCESS.gainCellSenseTime;
-    expect(m.read.dropHigh).toBeCloseTo((m.read.readCurrent * t) / m.bitlineCapacitance.total, 12);
-    expect(m.senseSignal).toBeCloseTo((m.read.dropHigh - m.read.dropLow) / 2, 12);
-    expect(m.senseSignal).toBeGreaterThan(0);
+    expect(m.figures.read.dropHigh).toBeCloseTo(
+      (m.figures.read.readCurrent * t) / m.figures.bitlineCapacitance.total,
+      12,
+    );
+    expect(m.figures.senseSignal).toBeCloseTo((m.figures.read.dropHigh - m.figures.read.dropLow) / 2, 12);
+    expect(m.figures.senseSignal).toBeGreaterThan(0);
     // Single-ended against a reference: no partner mat is needed, so no bits are lost at the edge.
-    expect(m.lostBits).toBe(0);
+    expect(m.figures.lostBits).toBe(0);
   });
 
   it('more cells on a read bit line means less signal, and retention is microseconds in a logic process', () => {
     const short = evaluate(gainDesign(32)).mats[0];
     const long = evaluate(gainDesign(256)).mats[0];
-    expect(long?.senseSignal).toBeLessThan(short?.senseSignal ?? 0);
-    expect(short?.retentionTime).toBeGreaterThan(1e-6);
-    expect(short?.retentionTime).toBeLessThan(1e-3);
+    expect(long?.figures.senseSignal).toBeLessThan(short?.figures.senseSignal ?? 0);
+    expect(short?.figures.retentionTime).toBeGreaterThan(1e-6);
+    expect(short?.figures.retentionTime).toBeLessThan(1e-3);
   });
 });

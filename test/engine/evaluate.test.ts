@@ -43,12 +43,12 @@ describe('evaluate: one mat', () => {
     // Source: common practice (no source): folded 8F² = 2F × 2F pitches at half occupancy.
     const r = evaluate(designWith([M, saTop, swdLeft]));
     const m = findMatReport(r, 'm1');
-    expect(m?.bitlineCount).toBe(1024);
-    expect(m?.wordlineCount).toBe(1024);
-    expect(m?.bits).toBe(512 * 1024);
-    expect(m?.bitlineLength).toBeCloseTo(SIDE, 15);
-    expect(m?.area).toBeCloseTo(SIDE * SIDE, 20);
-    expect(m?.cellArea).toBeCloseTo(512 * 1024 * 8 * F * F, 20);
+    expect(m?.figures.bitlineCount).toBe(1024);
+    expect(m?.figures.wordlineCount).toBe(1024);
+    expect(m?.figures.bits).toBe(512 * 1024);
+    expect(m?.figures.bitlineLength).toBeCloseTo(SIDE, 15);
+    expect(m?.figures.area).toBeCloseTo(SIDE * SIDE, 20);
+    expect(m?.figures.cellArea).toBeCloseTo(512 * 1024 * 8 * F * F, 20);
   });
 
   it('sums the bit-line capacitance from its parts and shares charge with the cell', () => {
@@ -62,12 +62,12 @@ describe('evaluate: one mat', () => {
           p.bitlineToBitlineCapacitancePerCell) +
       p.bitlineWireCapacitancePerLength * SIDE +
       p.senseAmpInputCapacitance;
-    expect(m?.bitlineCapacitance.total).toBeCloseTo(expected, 25);
+    expect(m?.figures.bitlineCapacitance.total).toBeCloseTo(expected, 25);
     const ctr = 11e-15 / (11e-15 + expected);
-    if (m?.read.kind !== 'chargeSharing') throw new Error('1T1C mats read by charge sharing');
-    expect(m.read.chargeTransferRatio).toBeCloseTo(ctr, 12);
-    expect(m.read.signalLow).toBeCloseTo(0.55 * ctr, 12);
-    expect(m.read.signalHigh).toBeCloseTo((1.1 - 0.55) * ctr, 12);
+    if (m?.figures.read.kind !== 'chargeSharing') throw new Error('1T1C mats read by charge sharing');
+    expect(m.figures.read.chargeTransferRatio).toBeCloseTo(ctr, 12);
+    expect(m.figures.read.signalLow).toBeCloseTo(0.55 * ctr, 12);
+    expect(m.figures.read.signalHigh).toBeCloseTo((1.1 - 0.55) * ctr, 12);
   });
 
   it('a folded 8F² mat alone has 8 F² per bit and 100 % efficiency; open 6F² has 6 F²', () => {
@@ -186,6 +186,20 @@ describe('evaluate: the demo design', () => {
     expect(r.totals.worstSenseSignal).toBeLessThan(0.15);
     expect(r.totals.arrayEfficiency).toBeGreaterThan(0.5);
     expect(r.totals.arrayEfficiency).toBeLessThan(1);
+  });
+
+  it('mats of one kind share one figures object but keep their own identity and connections', () => {
+    const r = evaluate(demoDesign());
+    const kinds = new Set(r.mats.map((m) => m.figures));
+    // Every demo mat has the same cell and counts; edge rows differ only in which strips serve them.
+    expect(kinds.size).toBeLessThan(r.mats.length);
+    expect(new Set(r.mats.map((m) => m.matId)).size).toBe(r.mats.length);
+    const [a, b] = r.mats;
+    if (!a || !b) throw new Error('demo has fewer than two mats');
+    expect(a.figures).toBe(b.figures);
+    expect(a.senseAmpStripIds).not.toEqual(b.senseAmpStripIds);
+    // Sharing changes no figure: every demo mat reads the same signal.
+    expect(r.mats.every((m) => m.figures.senseSignal === a.figures.senseSignal)).toBe(true);
   });
 });
 

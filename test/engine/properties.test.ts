@@ -52,7 +52,7 @@ describe('one mat on the demo process', () => {
       fc.property(cells, cells, (a, b) => {
         fc.pre(a !== b);
         const cbl = (n: number) =>
-          findMatReport(evaluate(designWith([mat({ cellsPerBitline: n })])), 'm1')?.bitlineCapacitance
+          findMatReport(evaluate(designWith([mat({ cellsPerBitline: n })])), 'm1')?.figures.bitlineCapacitance
             .total ?? NaN;
         const [low, high] = a < b ? [a, b] : [b, a];
         expect(cbl(low)).toBeGreaterThan(0);
@@ -68,7 +68,8 @@ describe('one mat on the demo process', () => {
       fc.property(cells, cells, (a, b) => {
         fc.pre(a !== b);
         const signal = (n: number) =>
-          findMatReport(evaluate(designWith([mat({ cellsPerBitline: n })])), 'm1')?.senseSignal ?? NaN;
+          findMatReport(evaluate(designWith([mat({ cellsPerBitline: n })])), 'm1')?.figures.senseSignal ??
+          NaN;
         const [low, high] = a < b ? [a, b] : [b, a];
         expect(signal(low)).toBeGreaterThan(signal(high));
       }),
@@ -100,9 +101,9 @@ describe('net sense margin', () => {
                 'm1',
               );
               return [
-                m?.senseMargin ?? NaN,
-                m?.senseMarginAtRefresh ?? NaN,
-                m?.senseSignalAfterRefresh ?? NaN,
+                m?.figures.senseMargin ?? NaN,
+                m?.figures.senseMarginAtRefresh ?? NaN,
+                m?.figures.senseSignalAfterRefresh ?? NaN,
               ] as const;
             };
             const [low, high] = a < b ? [a, b] : [b, a];

@@ -13,7 +13,7 @@ describe('per-mat CSV', () => {
     expect(header).toContain('bitline_capacitance_F');
     const row = lines[1]?.split(',') ?? [];
     const column = header.indexOf('bitline_capacitance_F');
-    expect(Number(row[column])).toBe(report.mats[0]?.bitlineCapacitance.total);
+    expect(Number(row[column])).toBe(report.mats[0]?.figures.bitlineCapacitance.total);
   });
 
   it('quotes names with commas and quotes (RFC 4180)', () => {
