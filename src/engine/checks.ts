@@ -11,17 +11,6 @@ interface MatIssue {
   readonly detail: string;
 }
 
-/** Issues with the same key are grouped into one finding. */
-const issueKeys = new WeakMap<MatIssue, string>();
-function issueKey(issue: MatIssue): string {
-  let key = issueKeys.get(issue);
-  if (key === undefined) {
-    key = `${issue.kind}|${issue.severity}|${issue.detail}`;
-    issueKeys.set(issue, key);
-  }
-  return key;
-}
-
 /** Issues that follow from a mat's physics alone; the same for every mat of one kind. */
 function physicsIssues(figures: MatFigures, design: Design): MatIssue[] {
   const v = (x: number) => formatQuantity(x, 'voltage');
@@ -65,8 +54,12 @@ function physicsIssues(figures: MatFigures, design: Design): MatIssue[] {
   return issues;
 }
 
+const NO_ISSUES: readonly MatIssue[] = [];
+
 /** Issues of a mat's connections, which differ from mat to mat. */
-function connectionIssues(mat: MatReport): MatIssue[] {
+function connectionIssues(mat: MatReport): readonly MatIssue[] {
+  // Most mats are fully served; they share one empty list instead of making one each.
+  if (mat.unsensedBitlines === 0 && mat.undrivenWordlines === 0) return NO_ISSUES;
   const issues: MatIssue[] = [];
   if (mat.unsensedBitlines > 0) {
     issues.push({
@@ -86,10 +79,19 @@ function connectionIssues(mat: MatReport): MatIssue[] {
 }
 
 /** Names shown before a grouped finding's detail: one name, or the count and the first few. */
-function groupLabel(labels: readonly string[]): string {
-  if (labels.length === 1) return labels[0] ?? '';
-  const shown = labels.slice(0, 3).join(', ');
-  return `${labels.length} mats (${shown}${labels.length > 3 ? ', …' : ''})`;
+function groupLabel(count: number, labels: readonly string[]): string {
+  if (count === 1) return labels[0] ?? '';
+  return `${count} mats (${labels.join(', ')}${count > labels.length ? ', …' : ''})`;
+}
+
+/** Mats named in a grouped finding's message; the finding's block ids name them all. */
+const NAMED_IN_MESSAGE = 3;
+
+interface IssueGroup {
+  readonly issue: MatIssue;
+  readonly ids: string[];
+  /** The first few mats' names, for the message. */
+  readonly labels: string[];
 }
 
 /**
@@ -103,17 +105,23 @@ export function collectFindings(
   storedHigh: StoredHighLevel,
   design: Design,
 ): Finding[] {
-  const groups = new Map<string, { issue: MatIssue; ids: string[]; labels: string[] }>();
-  const physicsCache = new Map<MatFigures, MatIssue[]>();
+  const groups = new Map<string, IssueGroup>();
+  // Mats of one kind share their issue objects, so most lookups go by identity, not by building a key.
+  const groupOfIssue = new Map<MatIssue, IssueGroup>();
+  const physicsCache = new Map<MatFigures, readonly MatIssue[]>();
   const add = (issue: MatIssue, mat: MatReport) => {
-    const key = issueKey(issue);
-    const group = groups.get(key);
-    if (group) {
-      group.ids.push(mat.matId);
-      group.labels.push(mat.name || mat.matId);
-    } else {
-      groups.set(key, { issue, ids: [mat.matId], labels: [mat.name || mat.matId] });
+    let group = groupOfIssue.get(issue);
+    if (!group) {
+      const key = `${issue.kind}|${issue.severity}|${issue.detail}`;
+      group = groups.get(key);
+      if (!group) {
+        group = { issue, ids: [], labels: [] };
+        groups.set(key, group);
+      }
+      groupOfIssue.set(issue, group);
     }
+    group.ids.push(mat.matId);
+    if (group.labels.length < NAMED_IN_MESSAGE) group.labels.push(mat.name || mat.matId);
   };
   for (const mat of mats) {
     for (const issue of connectionIssues(mat)) add(issue, mat);
@@ -131,7 +139,7 @@ export function collectFindings(
       kind: issue.kind,
       severity: issue.severity,
       blockIds: ids,
-      message: `${groupLabel(labels)}: ${issue.detail}`,
+      message: `${groupLabel(ids.length, labels)}: ${issue.detail}`,
     });
   }
   for (const o of overlaps) {

@@ -1,9 +1,16 @@
-import { abutmentOnSide, type Side } from '../geometry/abutment';
-import { linesInGaps, uncoveredParts, type Interval } from '../geometry/interval';
+import { abutmentSpan, type Side } from '../geometry/abutment';
+import {
+  kindAt,
+  ROW_DECODER_CODE,
+  SENSE_AMP_STRIP_CODE,
+  WORDLINE_DRIVER_STRIP_CODE,
+  type BlockTable,
+} from '../geometry/blockTable';
+import { uncoveredLineCount } from '../geometry/interval';
 import type { NeighbourTable } from '../geometry/neighbourGrid';
-import type { PlacedBlock, PlacedMat } from '../geometry/placedBlocks';
 import { ABUTMENT_TOLERANCE } from '../geometry/rect';
-import type { StripType } from '../model/block';
+import { bitlineEndSides, wordlineEndSides } from '../geometry/stripFit';
+import { unpartneredBitlines } from './openBitline';
 
 /** Which strips serve a mat, found from geometry alone. */
 export interface MatConnections {
@@ -15,89 +22,133 @@ export interface MatConnections {
   readonly unsensedBitlines: number;
   /** Word lines whose position no driver covers at either end. */
   readonly undrivenWordlines: number;
-  /** Sense-amplifier strips abutting each bit-line end, with the stretch of the edge they cover. */
-  readonly senseAmpContacts: readonly SenseAmpContact[];
   /** Bit-line ends (0, 1 or 2) that have a sense-amplifier strip. */
   readonly senseAmpEnds: number;
+  /** Open bit lines with no partner mat beyond their strip (see openBitline.ts); 0 for other cells. */
+  readonly unpartneredBitlines: number;
 }
 
-/** A sense-amplifier strip touching one bit-line end of a mat. */
-export interface SenseAmpContact {
-  readonly side: Side;
-  readonly stripIndex: number;
-  /** Covered stretch, measured along the mat edge from its start (m). */
-  readonly stretch: Interval;
+/**
+ * Sense-amplifier strips touching a mat's bit-line ends, kept flat so that evaluating a die allocates
+ * nothing per contact: contact k is strip `strip[k]` on side `side[k]`, covering `span[2k]` … `span[2k + 1]`
+ * of the edge (m, from the side's start).
+ */
+export interface SenseAmpContacts {
+  count: number;
+  readonly strip: Int32Array;
+  readonly side: Side[];
+  readonly span: Float64Array;
 }
 
-/** Strips that can sense bit lines. */
-const SENSING: ReadonlySet<StripType> = new Set(['senseAmpStrip']);
-/** Strips that can drive word lines: sub-word-line drivers, or a row decoder driving a small mat directly. */
-const DRIVING: ReadonlySet<StripType> = new Set(['wordlineDriverStrip', 'rowDecoder']);
+/** A mat edge rarely meets more strips than this; the scratch buffers grow when one does. */
+const INITIAL_CONTACTS = 16;
+let contacts: SenseAmpContacts = newContacts(INITIAL_CONTACTS);
+let driven = new Float64Array(2 * INITIAL_CONTACTS);
+const senseAmpIds: string[] = [];
+const driverIds: string[] = [];
 
-/** The two sides where a mat's bit lines end, and the two where its word lines end. */
-export function lineEndSides(mat: PlacedMat): { bitlineEnds: [Side, Side]; wordlineEnds: [Side, Side] } {
-  return mat.block.bitlineAxis === 'vertical'
-    ? { bitlineEnds: ['top', 'bottom'], wordlineEnds: ['left', 'right'] }
-    : { bitlineEnds: ['left', 'right'], wordlineEnds: ['top', 'bottom'] };
+function newContacts(capacity: number): SenseAmpContacts {
+  return {
+    count: 0,
+    strip: new Int32Array(capacity),
+    side: new Array<Side>(capacity).fill('top'),
+    span: new Float64Array(2 * capacity),
+  };
+}
+
+function growContacts(): void {
+  const bigger = newContacts(2 * contacts.strip.length);
+  bigger.strip.set(contacts.strip);
+  bigger.span.set(contacts.span);
+  contacts.side.forEach((s, k) => (bigger.side[k] = s));
+  bigger.count = contacts.count;
+  contacts = bigger;
 }
 
 /**
  * Finds the strips abutting a mat's line ends and counts the lines they leave unserved. A line counts
  * as served when a suitable strip covers its position at either end: with strips at both ends the
  * sense amplifiers (or drivers) are taken as interleaved, half at each end; with one end covered,
- * all of them sit there. Common practice (no source).
+ * all of them sit there. Sense-amplifier strips sense; sub-word-line driver strips and row decoders
+ * (driving a small mat directly) drive. Common practice (no source).
+ *
+ * @param at the mat's position in the table and in the neighbour table.
  */
-export function matConnections(
-  mat: PlacedMat,
-  /** The mat's position in `placed` and in the neighbour table. */
-  at: number,
-  placed: readonly PlacedBlock[],
-  neighbours: NeighbourTable,
-): MatConnections {
-  const { bitlineEnds, wordlineEnds } = lineEndSides(mat);
-  const senseAmpStripIds: string[] = [];
-  const wordlineDriverIds: string[] = [];
-  const senseAmpContacts: SenseAmpContact[] = [];
-  const drivenStretches: Interval[] = [];
+export function matConnections(table: BlockTable, at: number, neighbours: NeighbourTable): MatConnections {
+  const kind = kindAt(table, at);
+  const axis = kind.block.bitlineAxis;
+  const bitlineEnds = bitlineEndSides(axis);
+  const wordlineEnds = wordlineEndSides(axis);
+  // Ids gather in scratch lists and are copied out at their exact length: a list grown by push keeps
+  // room for 17 entries, and a die keeps two lists per mat for as long as its report lives. The scratch
+  // lists keep their length (setting it to 0 would free their storage), so counts say what is in use.
+  let senseAmpIdCount = 0;
+  let driverIdCount = 0;
+  contacts.count = 0;
+  let drivenCount = 0;
+  let top = false;
+  let bottom = false;
   const { list } = neighbours;
   const end = neighbours.end[at] as number;
   for (let k = neighbours.start[at] as number; k < end; k++) {
     const i = list[k] as number;
-    const other = placed[i];
-    if (!other || other.block.type === 'mat') continue;
-    const type = other.block.type;
-    if (SENSING.has(type)) {
-      for (const side of bitlineEnds) {
-        const stretch = abutmentOnSide(mat.rect, other.rect, side);
-        if (stretch) {
-          senseAmpContacts.push({ side, stripIndex: i, stretch });
-          senseAmpStripIds.push(other.block.id);
-        }
+    const type = table.type[i] as number;
+    if (type === SENSE_AMP_STRIP_CODE) {
+      for (let e = 0; e < 2; e++) {
+        const side = bitlineEnds[e] as Side;
+        if (contacts.count === contacts.strip.length) growContacts();
+        if (!abutmentSpan(table, at, i, side, contacts.span, 2 * contacts.count)) continue;
+        contacts.strip[contacts.count] = i;
+        contacts.side[contacts.count] = side;
+        contacts.count++;
+        if (e === 0) top = true;
+        else bottom = true;
+        senseAmpIds[senseAmpIdCount++] = table.blocks[i]?.id ?? '';
       }
-    }
-    if (DRIVING.has(type)) {
+    } else if (type === WORDLINE_DRIVER_STRIP_CODE || type === ROW_DECODER_CODE) {
       for (const side of wordlineEnds) {
-        const stretch = abutmentOnSide(mat.rect, other.rect, side);
-        if (stretch) {
-          drivenStretches.push(stretch);
-          wordlineDriverIds.push(other.block.id);
+        if (2 * drivenCount === driven.length) {
+          const bigger = new Float64Array(2 * driven.length);
+          bigger.set(driven);
+          driven = bigger;
         }
+        if (!abutmentSpan(table, at, i, side, driven, 2 * drivenCount)) continue;
+        drivenCount++;
+        driverIds[driverIdCount++] = table.blocks[i]?.id ?? '';
       }
     }
   }
-  const g = mat.geometry;
-  const unsensedGaps = uncoveredParts(
-    senseAmpContacts.map((c) => c.stretch),
-    g.wordlineLength,
-    ABUTMENT_TOLERANCE,
-  );
-  const undrivenGaps = uncoveredParts(drivenStretches, g.bitlineLength, ABUTMENT_TOLERANCE);
+  const g = kind.geometry;
+  const senseAmpEnds = (top ? 1 : 0) + (bottom ? 1 : 0);
+  // Open bit lines are counted from the contacts before the coverage count below reorders their spans.
+  const unpartnered = unpartneredBitlines(table, at, contacts, senseAmpEnds, neighbours);
   return {
-    senseAmpStripIds,
-    wordlineDriverIds,
-    unsensedBitlines: linesInGaps(unsensedGaps, g.bitlinePitch, g.bitlineCount),
-    undrivenWordlines: linesInGaps(undrivenGaps, g.wordlinePitch, g.wordlineCount),
-    senseAmpContacts,
-    senseAmpEnds: new Set(senseAmpContacts.map((c) => c.side)).size,
+    senseAmpStripIds: copyOf(senseAmpIds, senseAmpIdCount),
+    wordlineDriverIds: copyOf(driverIds, driverIdCount),
+    unsensedBitlines: uncoveredLineCount(
+      contacts.span,
+      contacts.count,
+      g.wordlineLength,
+      ABUTMENT_TOLERANCE,
+      g.bitlinePitch,
+      g.bitlineCount,
+    ),
+    undrivenWordlines: uncoveredLineCount(
+      driven,
+      drivenCount,
+      g.bitlineLength,
+      ABUTMENT_TOLERANCE,
+      g.wordlinePitch,
+      g.wordlineCount,
+    ),
+    senseAmpEnds,
+    unpartneredBitlines: unpartnered,
   };
+}
+
+/** The first `count` entries of a scratch list, in an array of exactly that length. */
+function copyOf(list: readonly string[], count: number): string[] {
+  const copy = new Array<string>(count);
+  for (let k = 0; k < count; k++) copy[k] = list[k] as string;
+  return copy;
 }

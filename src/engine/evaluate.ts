@@ -1,13 +1,13 @@
+import { blockTable, kindAt, MAT_CODE, type BlockTable, type MatKind } from '../geometry/blockTable';
 import { neighbourTable, type NeighbourTable } from '../geometry/neighbourGrid';
-import { isPlacedMat, placeBlocks, type PlacedBlock, type PlacedMat } from '../geometry/placedBlocks';
-import { ABUTMENT_TOLERANCE, overlapArea } from '../geometry/rect';
+import { ABUTMENT_TOLERANCE } from '../geometry/rect';
+import type { Mat } from '../model/block';
 import type { Design } from '../model/design';
 import { collectFindings } from './checks';
 import { matConnections } from './connectivity';
 import { matPhysics, senseAmpsOfMat, type DesignContext } from './matPhysics';
 import { offsetSigmaMultiplier } from './offset';
-import { unpartneredBitlines } from './openBitline';
-import type { Overlap } from './overlaps';
+import { findOverlaps } from './overlaps';
 import type { MatFigures, MatReport, Report } from './report';
 import { leakageAtTemperature } from './retention';
 import { storedHighLevel } from './storedLevel';
@@ -39,47 +39,46 @@ export function designContext(design: Design, senseAmpCount: number): DesignCont
 }
 
 /** Sense amplifiers of all mats: the count that shares the failure allowance. */
-export function countSenseAmps(mats: readonly PlacedMat[]): number {
+export function countSenseAmps(table: BlockTable): number {
   let count = 0;
-  for (const m of mats) count += senseAmpsOfMat(m);
+  for (let i = 0; i < table.count; i++) {
+    const kind = table.kindOf[i] as number;
+    if (kind >= 0) count += senseAmpsOfMat(table.kinds[kind] as MatKind);
+  }
   return count;
 }
 
 /**
- * Figures of one placed mat: its connections from its neighbours, then its physics. Mats with the same
- * cell, cell counts and sense-amplifier arrangement have the same physics, so with a `figuresByKind`
- * map a regular array computes it once per kind of mat and every mat of that kind shares the object.
+ * The report of mat `at` of the table: its connections from its neighbours, then its physics. Mats with
+ * the same kind and sense-amplifier arrangement have the same physics, so with a `figuresByKind` map a
+ * regular array computes it once per kind of mat and every mat of that kind shares the object.
  */
-export function evaluatePlacedMat(
-  mat: PlacedMat,
-  /** The mat's position in `placed` and in the neighbour table. */
+export function evaluateMatAt(
+  table: BlockTable,
+  /** The mat's position in the table and in the neighbour table. */
   at: number,
-  placed: readonly PlacedBlock[],
   neighbours: NeighbourTable,
   ctx: DesignContext,
-  figuresByKind?: Map<string, MatFigures>,
+  figuresByKind?: Map<number | string, MatFigures>,
 ): MatReport {
-  const connections = matConnections(mat, at, placed, neighbours);
-  const lost = unpartneredBitlines(
-    mat,
-    connections.senseAmpContacts,
-    connections.senseAmpEnds,
-    placed,
-    neighbours,
-  );
-  const kind = `${mat.cell.id}|${mat.block.cellsPerBitline}|${mat.block.cellsPerWordline}|${connections.senseAmpEnds}|${lost}`;
-  let figures = figuresByKind?.get(kind);
+  const c = matConnections(table, at, neighbours);
+  const kindIndex = table.kindOf[at] as number;
+  const lost = c.unpartneredBitlines;
+  // A number for the common case (no lost bit lines), a string otherwise: either way one map lookup.
+  const key = lost === 0 ? kindIndex * 3 + c.senseAmpEnds : `${kindIndex}|${c.senseAmpEnds}|${lost}`;
+  let figures = figuresByKind?.get(key);
   if (!figures) {
-    figures = matPhysics(mat, connections.senseAmpEnds, lost, ctx);
-    figuresByKind?.set(kind, figures);
+    figures = matPhysics(kindAt(table, at), c.senseAmpEnds, lost, ctx);
+    figuresByKind?.set(key, figures);
   }
+  const block = table.blocks[at] as Mat;
   return {
-    matId: mat.block.id,
-    name: mat.block.name,
-    senseAmpStripIds: connections.senseAmpStripIds,
-    wordlineDriverIds: connections.wordlineDriverIds,
-    unsensedBitlines: connections.unsensedBitlines,
-    undrivenWordlines: connections.undrivenWordlines,
+    matId: block.id,
+    name: block.name,
+    senseAmpStripIds: c.senseAmpStripIds,
+    wordlineDriverIds: c.wordlineDriverIds,
+    unsensedBitlines: c.unsensedBitlines,
+    undrivenWordlines: c.undrivenWordlines,
     figures,
   };
 }
@@ -93,32 +92,18 @@ export function evaluatePlacedMat(
  * @returns a {@link Report} whose numbers are all in SI units; mats appear in the design's block order.
  */
 export function evaluate(design: Design): Report {
-  const placed = placeBlocks(design);
-  // Every block's neighbours in one grid pass; they serve both the overlap check and mat connections.
-  const neighbours = neighbourTable(
-    placed.map((p) => p.rect),
-    ABUTMENT_TOLERANCE,
-  );
-  const mats = placed.filter(isPlacedMat);
-  const senseAmpCount = countSenseAmps(mats);
+  const table = blockTable(design);
+  // Every block's neighbours in one grid pass; they serve both mat connections and the overlap check.
+  const neighbours = neighbourTable(table, ABUTMENT_TOLERANCE);
+  const senseAmpCount = countSenseAmps(table);
   const ctx = designContext(design, senseAmpCount);
-  const figuresByKind = new Map<string, MatFigures>();
+  const figuresByKind = new Map<number | string, MatFigures>();
   const matReports: MatReport[] = [];
-  const overlaps: Overlap[] = [];
-  const { start, end, list } = neighbours;
-  for (let i = 0; i < placed.length; i++) {
-    const a = placed[i] as PlacedBlock;
-    // Rows are ascending, so pairs come out in design order of the first and then the second block.
-    for (let k = start[i] as number; k < (end[i] as number); k++) {
-      const j = list[k] as number;
-      if (j <= i) continue;
-      const b = placed[j] as PlacedBlock;
-      const shared = overlapArea(a.rect, b.rect);
-      if (shared > 0) overlaps.push({ firstId: a.block.id, secondId: b.block.id, area: shared });
-    }
-    if (isPlacedMat(a)) matReports.push(evaluatePlacedMat(a, i, placed, neighbours, ctx, figuresByKind));
+  for (let i = 0; i < table.count; i++) {
+    if (table.type[i] === MAT_CODE) matReports.push(evaluateMatAt(table, i, neighbours, ctx, figuresByKind));
   }
-  const totals = computeTotals(placed, mats, matReports, design, ctx.sigmaMultiplier, senseAmpCount);
+  const overlaps = findOverlaps(table, neighbours);
+  const totals = computeTotals(table, matReports, design, ctx.sigmaMultiplier, senseAmpCount);
   return {
     mats: matReports,
     totals,

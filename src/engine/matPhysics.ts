@@ -1,4 +1,4 @@
-import type { PlacedMat } from '../geometry/placedBlocks';
+import type { MatKind } from '../geometry/blockTable';
 import { isGainCell } from '../model/cell';
 import type { OperatingConditions } from '../model/operating';
 import type { ProcessProfile } from '../model/process';
@@ -26,7 +26,7 @@ export interface DesignContext {
 }
 
 /** Sense amplifiers serving a mat: one per pair of bit lines, or one per read bit line for gain cells. */
-export function senseAmpsOfMat(mat: PlacedMat): number {
+export function senseAmpsOfMat(mat: MatKind): number {
   return isGainCell(mat.cell.kind) ? mat.geometry.bitlineCount : mat.geometry.bitlineCount / 2;
 }
 
@@ -42,7 +42,7 @@ interface ReadOutcome {
 }
 
 function chargeSharingOutcome(
-  mat: PlacedMat,
+  mat: MatKind,
   ctx: DesignContext,
   cbl: number,
   required: number,
@@ -75,7 +75,7 @@ function chargeSharingOutcome(
 }
 
 function gainCellOutcome(
-  mat: PlacedMat,
+  mat: MatKind,
   ctx: DesignContext,
   cbl: number,
   required: number,
@@ -114,7 +114,7 @@ function gainCellOutcome(
  * and how many of its open bit lines lack a partner.
  */
 export function matPhysics(
-  mat: PlacedMat,
+  mat: MatKind,
   senseAmpEnds: number,
   lostBitlines: number,
   ctx: DesignContext,

@@ -1,10 +1,10 @@
-import { abutmentOnSide, type Side } from '../geometry/abutment';
-import { linesInGaps, uncoveredParts, type Interval } from '../geometry/interval';
+import { abutmentSpan, type Side } from '../geometry/abutment';
+import { kindAt, MAT_CODE, type BlockTable } from '../geometry/blockTable';
+import { uncoveredLineCount } from '../geometry/interval';
 import type { NeighbourTable } from '../geometry/neighbourGrid';
-import type { PlacedBlock, PlacedMat } from '../geometry/placedBlocks';
 import { ABUTMENT_TOLERANCE } from '../geometry/rect';
 import { isGainCell } from '../model/cell';
-import type { SenseAmpContact } from './connectivity';
+import type { SenseAmpContacts } from './connectivity';
 
 /**
  * Bit lines of an open-bit-line mat that have no partner: each sense amplifier in a strip compares a bit
@@ -17,56 +17,73 @@ import type { SenseAmpContact } from './connectivity';
  * @returns bit lines without a partner (a count, possibly fractional by the ½ share).
  */
 export function unpartneredBitlines(
-  mat: PlacedMat,
-  contacts: readonly SenseAmpContact[],
+  table: BlockTable,
+  /** The mat's position in the table. */
+  at: number,
+  contacts: SenseAmpContacts,
   senseAmpEnds: number,
-  placed: readonly PlacedBlock[],
   neighbours: NeighbourTable,
 ): number {
+  const { cell, geometry: g } = kindAt(table, at);
   // Gain cells read single-ended against a reference, so they need no partner mat.
-  if (mat.cell.bitlineArchitecture !== 'open' || isGainCell(mat.cell.kind) || contacts.length === 0) return 0;
+  if (cell.bitlineArchitecture !== 'open' || isGainCell(cell.kind) || contacts.count === 0) return 0;
   const share = senseAmpEnds >= 2 ? 0.5 : 1;
-  const g = mat.geometry;
   let lost = 0;
-  for (const contact of contacts) {
-    const strip = placed[contact.stripIndex];
-    if (!strip) continue;
-    const partnered = partnerStretches(mat, contact.side, strip, contact.stripIndex, placed, neighbours);
-    const gaps = uncoveredParts(partnered, g.wordlineLength, ABUTMENT_TOLERANCE)
-      .map((gap) => clip(gap, contact.stretch))
-      .filter((gap): gap is Interval => gap !== null);
-    lost += share * linesInGaps(gaps, g.bitlinePitch, g.bitlineCount);
+  for (let c = 0; c < contacts.count; c++) {
+    const count = partnerSpans(table, at, contacts.side[c] as Side, contacts.strip[c] as number, neighbours);
+    lost +=
+      share *
+      uncoveredLineCount(
+        partners,
+        count,
+        g.wordlineLength,
+        ABUTMENT_TOLERANCE,
+        g.bitlinePitch,
+        g.bitlineCount,
+        contacts.span[2 * c] as number,
+        contacts.span[2 * c + 1] as number,
+      );
   }
   return lost;
 }
 
-/** Stretches of the mat's edge (mat coordinates) across which an open mat lies beyond the strip. */
-function partnerStretches(
-  mat: PlacedMat,
-  side: Side,
-  strip: PlacedBlock,
-  stripIndex: number,
-  placed: readonly PlacedBlock[],
-  neighbours: NeighbourTable,
-): Interval[] {
-  const horizontal = side === 'top' || side === 'bottom';
-  const shift = horizontal ? strip.rect.x - mat.rect.x : strip.rect.y - mat.rect.y;
-  const stretches: Interval[] = [];
-  const end = neighbours.end[stripIndex] as number;
-  for (let k = neighbours.start[stripIndex] as number; k < end; k++) {
-    const other = placed[neighbours.list[k] as number];
-    if (!other || other === mat || other.block.type !== 'mat' || !('cell' in other)) continue;
-    if (other.cell.bitlineArchitecture !== 'open' || isGainCell(other.cell.kind)) continue;
-    if (other.block.bitlineAxis !== mat.block.bitlineAxis) continue;
-    // The partner touches the strip on the same side as the strip touches our mat (beyond the strip).
-    const stretch = abutmentOnSide(strip.rect, other.rect, side);
-    if (stretch) stretches.push({ start: stretch.start + shift, end: stretch.end + shift });
-  }
-  return stretches;
-}
+/** Scratch for the partner spans of one contact (pairs of start and end, m); grows when needed. */
+let partners = new Float64Array(32);
 
-function clip(gap: Interval, within: Interval): Interval | null {
-  const start = Math.max(gap.start, within.start);
-  const end = Math.min(gap.end, within.end);
-  return end > start ? { start, end } : null;
+/**
+ * Writes to `partners` the stretches of the mat's edge (mat coordinates) across which an open mat with
+ * the same bit-line axis lies beyond the strip, and returns how many there are.
+ */
+function partnerSpans(
+  table: BlockTable,
+  at: number,
+  side: Side,
+  strip: number,
+  neighbours: NeighbourTable,
+): number {
+  const { block } = kindAt(table, at);
+  const horizontal = side === 'top' || side === 'bottom';
+  const shift = horizontal
+    ? (table.x[strip] as number) - (table.x[at] as number)
+    : (table.y[strip] as number) - (table.y[at] as number);
+  let count = 0;
+  const end = neighbours.end[strip] as number;
+  for (let k = neighbours.start[strip] as number; k < end; k++) {
+    const j = neighbours.list[k] as number;
+    if (j === at || table.type[j] !== MAT_CODE) continue;
+    const other = kindAt(table, j);
+    if (other.cell.bitlineArchitecture !== 'open' || isGainCell(other.cell.kind)) continue;
+    if (other.block.bitlineAxis !== block.bitlineAxis) continue;
+    if (2 * count === partners.length) {
+      const bigger = new Float64Array(2 * partners.length);
+      bigger.set(partners);
+      partners = bigger;
+    }
+    // The partner touches the strip on the same side as the strip touches our mat (beyond the strip).
+    if (!abutmentSpan(table, strip, j, side, partners, 2 * count)) continue;
+    partners[2 * count] = (partners[2 * count] as number) + shift;
+    partners[2 * count + 1] = (partners[2 * count + 1] as number) + shift;
+    count++;
+  }
+  return count;
 }

@@ -1,6 +1,6 @@
-import type { PlacedBlock } from '../geometry/placedBlocks';
-import { ABUTMENT_TOLERANCE, overlapArea } from '../geometry/rect';
-import type { SpatialIndex } from '../geometry/spatialIndex';
+import type { BlockTable, Boxes } from '../geometry/blockTable';
+import type { NeighbourTable } from '../geometry/neighbourGrid';
+import { ABUTMENT_TOLERANCE } from '../geometry/rect';
 
 /** A pair of blocks that share area (not just an edge). */
 export interface Overlap {
@@ -11,40 +11,32 @@ export interface Overlap {
 }
 
 /**
- * Adds the pairs (i, j > i) that share area, given the indices near block i in ascending order. Abutting
- * neighbours among them share no area and are skipped.
+ * Every overlapping pair once, in design order of the first and then the second block, from the blocks'
+ * neighbour rows (abutting neighbours share no area and are skipped).
  */
-export function collectOverlaps(
-  placed: readonly PlacedBlock[],
-  i: number,
-  near: readonly number[],
-  into: Overlap[],
-): void {
-  const a = placed[i];
-  if (!a) return;
-  for (const j of near) {
-    if (j <= i) continue;
-    const b = placed[j];
-    if (!b) continue;
-    const shared = overlapArea(a.rect, b.rect);
-    if (shared > 0) into.push({ firstId: a.block.id, secondId: b.block.id, area: shared });
-  }
-}
-
-/** Every overlapping pair once, in design order of the first and then the second block, found through the spatial index (O(n log n) for sparse overlaps). */
-export function findOverlaps(placed: readonly PlacedBlock[], index: SpatialIndex): Overlap[] {
+export function findOverlaps(table: BlockTable, neighbours: NeighbourTable): Overlap[] {
   const overlaps: Overlap[] = [];
-  // Shrinking the query box by the tolerance skips neighbours that merely abut. Sorting the hits puts
-  // pairs in design order, whatever order the index returns them in (live previews rely on it).
-  for (let i = 0; i < placed.length; i++) {
-    const a = placed[i];
-    if (a)
-      collectOverlaps(
-        placed,
-        i,
-        index.near(a.rect, -ABUTMENT_TOLERANCE).sort((x, y) => x - y),
-        overlaps,
-      );
+  const { start, end, list } = neighbours;
+  for (let i = 0; i < table.count; i++) {
+    // Rows are ascending, so pairs come out in design order.
+    for (let k = start[i] as number; k < (end[i] as number); k++) {
+      const j = list[k] as number;
+      if (j <= i) continue;
+      const area = overlapAreaAt(table, i, j);
+      if (area > 0)
+        overlaps.push({ firstId: table.blocks[i]?.id ?? '', secondId: table.blocks[j]?.id ?? '', area });
+    }
   }
   return overlaps;
+}
+
+/** The area blocks i and j share (m²): rect.ts overlapArea with the same arithmetic, read from a table. */
+export function overlapAreaAt(boxes: Boxes, i: number, j: number): number {
+  const ax = boxes.x[i] as number;
+  const ay = boxes.y[i] as number;
+  const bx = boxes.x[j] as number;
+  const by = boxes.y[j] as number;
+  const w = Math.min(ax + (boxes.width[i] as number), bx + (boxes.width[j] as number)) - Math.max(ax, bx);
+  const h = Math.min(ay + (boxes.height[i] as number), by + (boxes.height[j] as number)) - Math.max(ay, by);
+  return w > ABUTMENT_TOLERANCE && h > ABUTMENT_TOLERANCE ? w * h : 0;
 }

@@ -1,21 +1,21 @@
-import { isPlacedMat, placeBlocks, type PlacedBlock } from '../geometry/placedBlocks';
+import { blockTable, MAT_CODE, rectAt, withBlocksReplaced, type BlockTable } from '../geometry/blockTable';
+import { neighbourTable, neighbourTableOf, type NeighbourTable } from '../geometry/neighbourGrid';
 import { placedDesign } from '../geometry/placedIndex';
-import { ABUTMENT_TOLERANCE, bottom, overlapArea, right, type Rect } from '../geometry/rect';
-import { neighbourTableOf, type NeighbourTable } from '../geometry/neighbourGrid';
+import { ABUTMENT_TOLERANCE, bottom, right, type Rect } from '../geometry/rect';
 import type { SpatialIndex } from '../geometry/spatialIndex';
 import type { Block } from '../model/block';
 import type { Design } from '../model/design';
 import { collectFindings } from './checks';
-import { countSenseAmps, designContext, evaluate, evaluatePlacedMat } from './evaluate';
-import { findOverlaps, type Overlap } from './overlaps';
+import { countSenseAmps, designContext, evaluate, evaluateMatAt } from './evaluate';
+import { findOverlaps, overlapAreaAt, type Overlap } from './overlaps';
 import type { Report } from './report';
 import { computeTotals } from './totals';
 
 /**
  * Live figures while a gesture changes a few blocks of a large design: instead of evaluating the whole
  * design on every pointer move, only the changed blocks and the mats beside their old and new places
- * are evaluated again, and the totals are updated by difference. The result equals evaluate() of the
- * changed design (tested), so the panels can follow a drag frame by frame on a 4,096-mat floorplan.
+ * are evaluated again, and the totals are recomputed from the mat reports. The result equals evaluate()
+ * of the changed design (tested), so the panels can follow a drag frame by frame on a 4,096-mat floorplan.
  */
 
 /** What stays fixed during one gesture: the design and report before it, and which blocks change. */
@@ -23,23 +23,28 @@ export interface PreviewBase {
   readonly design: Design;
   readonly report: Report;
   readonly changing: ReadonlySet<string>;
-  readonly placed: readonly PlacedBlock[];
+  /** The design's blocks laid out before the gesture. */
+  readonly table: BlockTable;
+  /** R-tree over the same blocks in the same order (shared with the canvas). */
   readonly index: SpatialIndex;
   readonly positionOf: ReadonlyMap<string, number>;
-  /** Placed positions of the changing blocks. */
+  /** Design positions of the changing blocks. */
   readonly changingPositions: ReadonlySet<number>;
   readonly matOrder: ReadonlyMap<string, number>;
-  /**
-   * Scratch list: the placed blocks followed by the changed ones of the latest preview. Kept between
-   * previews so that a pointer move does not copy thousands of entries.
-   */
-  readonly scratch: PlacedBlock[];
   /** Overlapping pairs among the blocks that do not change, found once per gesture. */
-  readonly staticOverlaps: readonly Overlap[];
+  readonly staticOverlaps: readonly PositionedOverlap[];
+}
+
+/** An overlap with the design positions of its two blocks, for sorting into design order. */
+interface PositionedOverlap {
+  readonly overlap: Overlap;
+  readonly first: number;
+  readonly second: number;
 }
 
 export function preparePreview(design: Design, report: Report, changingIds: Iterable<string>): PreviewBase {
-  const { placed, index, positionOf } = placedDesign(design);
+  const { index, positionOf } = placedDesign(design);
+  const table = blockTable(design);
   const changing = new Set(changingIds);
   const changingPositions = new Set<number>();
   for (const id of changing) {
@@ -50,15 +55,18 @@ export function preparePreview(design: Design, report: Report, changingIds: Iter
     design,
     report,
     changing,
-    placed,
+    table,
     index,
     positionOf,
     changingPositions,
     matOrder: new Map(report.mats.map((m, i) => [m.matId, i])),
-    scratch: placed.slice(),
-    staticOverlaps: findOverlaps(placed, index).filter(
-      (o) => !changing.has(o.firstId) && !changing.has(o.secondId),
-    ),
+    staticOverlaps: findOverlaps(table, neighbourTable(table, ABUTMENT_TOLERANCE))
+      .filter((o) => !changing.has(o.firstId) && !changing.has(o.secondId))
+      .map((overlap) => ({
+        overlap,
+        first: positionOf.get(overlap.firstId) ?? 0,
+        second: positionOf.get(overlap.secondId) ?? 0,
+      })),
   };
 }
 
@@ -77,7 +85,7 @@ function intersects(a: Rect, b: Rect, margin: number): boolean {
  * other row stays empty.
  */
 function previewNeighbours(
-  combined: readonly PlacedBlock[],
+  current: BlockTable,
   composite: SpatialIndex,
   mats: ReadonlySet<number>,
 ): NeighbourTable {
@@ -85,112 +93,89 @@ function previewNeighbours(
   const rowOf = (i: number): number[] => {
     let row = rows.get(i);
     if (!row) {
-      const rect = combined[i]?.rect;
-      row = rect ? composite.near(rect, ABUTMENT_TOLERANCE).filter((j) => j !== i) : [];
+      row = composite.near(rectAt(current, i), ABUTMENT_TOLERANCE).filter((j) => j !== i);
       rows.set(i, row);
     }
     return row;
   };
   for (const i of mats) {
-    for (const j of rowOf(i)) if (combined[j]?.block.type === 'senseAmpStrip') rowOf(j);
+    for (const j of rowOf(i)) if (current.blocks[j]?.type === 'senseAmpStrip') rowOf(j);
   }
-  return neighbourTableOf(combined.length, rows);
+  return neighbourTableOf(current.count, rows);
 }
 
 /**
  * The report of the design with the changing blocks replaced by `changed` (same ids; blocks are neither
  * added nor removed). Mats beside a changed block are evaluated again through a composite index (the
- * static index without the changing blocks, plus the moved ones); every other mat keeps its report.
+ * static index without the changing blocks, plus their new places); every other mat keeps its report.
  * Totals and findings are then recomputed from the mat reports in one linear pass. When the change
  * alters the number of sense amplifiers (a resize), every margin moves with k, so the whole design is
  * evaluated instead.
  */
 export function previewReport(base: PreviewBase, changed: readonly Block[]): Report {
-  const { design, report, placed, index, changingPositions } = base;
-  const moved = placeBlocks({ ...design, blocks: [...changed] });
-  const n = placed.length;
-  const combined = base.scratch;
-  combined.length = n;
-  combined.push(...moved);
+  const { design, report, index, changingPositions } = base;
+  const replacements = new Map<number, Block>();
+  for (const block of changed) {
+    const at = base.positionOf.get(block.id);
+    if (at !== undefined) replacements.set(at, block);
+  }
   // The design as it stands during the gesture, in design order.
-  const current = placed.slice();
-  moved.forEach((m) => {
-    const at = base.positionOf.get(m.block.id);
-    if (at !== undefined) current[at] = m;
-  });
-  const currentMats = current.filter(isPlacedMat);
-  const senseAmpCount = countSenseAmps(currentMats);
+  const current = withBlocksReplaced(base.table, replacements);
+  const senseAmpCount = countSenseAmps(current);
   if (senseAmpCount !== report.totals.senseAmpCount) {
-    const merged = new Map(changed.map((b) => [b.id, b]));
-    return evaluate({ ...design, blocks: design.blocks.map((b) => merged.get(b.id) ?? b) });
+    return evaluate({ ...design, blocks: current.blocks.slice() });
   }
 
   const composite: SpatialIndex = {
     near(rect, margin) {
       const hits = index.near(rect, margin).filter((i) => !changingPositions.has(i));
-      moved.forEach((m, j) => {
-        if (intersects(rect, m.rect, margin)) hits.push(n + j);
-      });
+      for (const i of replacements.keys()) if (intersects(rect, rectAt(current, i), margin)) hits.push(i);
       return hits;
     },
   };
-  const designOrder = (i: number) =>
-    i < n ? i : (base.positionOf.get(moved[i - n]?.block.id ?? '') ?? Number.MAX_SAFE_INTEGER);
 
   // Mats to evaluate again: the changed ones and every mat beside an old or a new place.
   const affected = new Set<number>();
-  moved.forEach((m, j) => {
-    if (isPlacedMat(m)) affected.add(n + j);
-  });
-  const around = [...[...changingPositions].map((i) => placed[i]?.rect), ...moved.map((m) => m.rect)];
+  for (const i of replacements.keys()) if (current.type[i] === MAT_CODE) affected.add(i);
+  const around: Rect[] = [];
+  for (const i of replacements.keys()) around.push(rectAt(base.table, i), rectAt(current, i));
   for (const rect of around) {
-    if (!rect) continue;
-    for (const i of composite.near(rect, ABUTMENT_TOLERANCE)) {
-      const p = combined[i];
-      if (i < n && p && isPlacedMat(p)) affected.add(i);
-    }
+    for (const i of composite.near(rect, ABUTMENT_TOLERANCE))
+      if (current.type[i] === MAT_CODE) affected.add(i);
   }
   const ctx = designContext(design, senseAmpCount);
-  const neighbours = previewNeighbours(combined, composite, affected);
+  const neighbours = previewNeighbours(current, composite, affected);
   const mats = report.mats.slice();
   for (const i of affected) {
-    const p = combined[i];
-    if (!p || !isPlacedMat(p)) continue;
-    const r = evaluatePlacedMat(p, i, combined, neighbours, ctx);
+    const r = evaluateMatAt(current, i, neighbours, ctx);
     const at = base.matOrder.get(r.matId);
     if (at !== undefined) mats[at] = r;
   }
 
   // Overlaps: the static pairs found once per gesture, plus those of the changed blocks, in design order.
-  const overlaps: { overlap: Overlap; first: number; second: number }[] = base.staticOverlaps.map((o) => ({
-    overlap: o,
-    first: base.positionOf.get(o.firstId) ?? 0,
-    second: base.positionOf.get(o.secondId) ?? 0,
-  }));
-  moved.forEach((m, j) => {
-    for (const i of composite.near(m.rect, -ABUTMENT_TOLERANCE)) {
-      if (i >= n && i - n <= j) continue;
-      const other = combined[i];
-      if (!other) continue;
-      const shared = overlapArea(m.rect, other.rect);
-      if (shared <= 0) continue;
-      const mine = designOrder(n + j);
-      const theirs = designOrder(i);
-      const mineFirst = mine < theirs;
+  const overlaps: PositionedOverlap[] = base.staticOverlaps.slice();
+  for (const i of replacements.keys()) {
+    for (const j of composite.near(rectAt(current, i), -ABUTMENT_TOLERANCE)) {
+      // A pair of two changed blocks is found from both; keep it once.
+      if (j === i || (replacements.has(j) && j < i)) continue;
+      const area = overlapAreaAt(current, i, j);
+      if (area <= 0) continue;
+      const first = Math.min(i, j);
+      const second = Math.max(i, j);
       overlaps.push({
         overlap: {
-          firstId: mineFirst ? m.block.id : other.block.id,
-          secondId: mineFirst ? other.block.id : m.block.id,
-          area: shared,
+          firstId: current.blocks[first]?.id ?? '',
+          secondId: current.blocks[second]?.id ?? '',
+          area,
         },
-        first: Math.min(mine, theirs),
-        second: Math.max(mine, theirs),
+        first,
+        second,
       });
     }
-  });
+  }
   overlaps.sort((a, b) => a.first - b.first || a.second - b.second);
 
-  const totals = computeTotals(current, currentMats, mats, design, ctx.sigmaMultiplier, senseAmpCount);
+  const totals = computeTotals(current, mats, design, ctx.sigmaMultiplier, senseAmpCount);
   const findings = collectFindings(
     mats,
     overlaps.map((o) => o.overlap),

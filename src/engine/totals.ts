@@ -1,5 +1,4 @@
-import type { PlacedBlock, PlacedMat } from '../geometry/placedBlocks';
-import { area, boundingBox } from '../geometry/rect';
+import { BLOCK_TYPE_CODES, MAT_CODE, type BlockTable } from '../geometry/blockTable';
 import type { BlockType } from '../model/block';
 import type { Design } from '../model/design';
 import {
@@ -19,27 +18,34 @@ const BAND_GRID = 1e-9;
  * form one band that a row activation crosses together (one global word line), so a band contributes
  * the largest word-line count among its mats, not the sum. Common practice (no source).
  */
-export function refreshRows(mats: readonly PlacedMat[]): number {
-  const bands = new Map<string, number>();
-  for (const m of mats) {
-    const vertical = m.block.bitlineAxis === 'vertical';
-    const start = vertical ? m.rect.y : m.rect.x;
-    const extent = vertical ? m.rect.height : m.rect.width;
-    const key = `${m.block.bitlineAxis}:${Math.round(start / BAND_GRID)}:${Math.round(extent / BAND_GRID)}`;
-    bands.set(key, Math.max(bands.get(key) ?? 0, m.geometry.wordlineCount));
+export function refreshRows(table: BlockTable): number {
+  // Bands by axis and start (on a 1 nm grid, as one exact integer), then by extent.
+  const bands = new Map<number, Map<number, number>>();
+  for (let i = 0; i < table.count; i++) {
+    if (table.type[i] !== MAT_CODE) continue;
+    const kind = table.kinds[table.kindOf[i] as number];
+    if (!kind) continue;
+    const vertical = kind.block.bitlineAxis === 'vertical';
+    const start = Math.round((vertical ? (table.y[i] as number) : (table.x[i] as number)) / BAND_GRID);
+    const extent = Math.round(
+      (vertical ? (table.height[i] as number) : (table.width[i] as number)) / BAND_GRID,
+    );
+    const key = start * 2 + (vertical ? 1 : 0);
+    let byExtent = bands.get(key);
+    if (!byExtent) {
+      byExtent = new Map();
+      bands.set(key, byExtent);
+    }
+    byExtent.set(extent, Math.max(byExtent.get(extent) ?? 0, kind.geometry.wordlineCount));
   }
   let rows = 0;
-  for (const r of bands.values()) rows += r;
+  for (const byExtent of bands.values()) for (const r of byExtent.values()) rows += r;
   return rows;
 }
 
-function refreshFigures(
-  mats: readonly PlacedMat[],
-  reports: readonly MatReport[],
-  design: Design,
-): RefreshFigures {
+function refreshFigures(table: BlockTable, reports: readonly MatReport[], design: Design): RefreshFigures {
   const o = design.operating;
-  const rows = refreshRows(mats);
+  const rows = refreshRows(table);
   const interval = refreshInterval(o.refreshWindow, o.refreshCommandsPerWindow);
   const rowsPerCommand = rowsPerRefreshCommand(rows, o.refreshCommandsPerWindow);
   const cycleTime = refreshCycleTime(rowsPerCommand, o.refreshRowsInParallel, design.process.rowCycleTime);
@@ -56,18 +62,55 @@ function refreshFigures(
   };
 }
 
-/** The mat with the smallest value of `pick`, as [value, id]; [NaN, null] without mats. */
-function worst(reports: readonly MatReport[], pick: (m: MatReport) => number): [number, string | null] {
-  let value = Number.NaN;
-  let id: string | null = null;
+/** The extreme mats of a floorplan: NaN and null without mats. */
+interface Extremes {
+  worstSenseSignal: number;
+  worstSenseSignalMatId: string | null;
+  worstSenseMargin: number;
+  worstSenseMarginMatId: string | null;
+  shortestRetention: number;
+  worstWordlineDelay: number;
+}
+
+/**
+ * Smallest signal, margin and retention and largest word-line delay over all mats, first mat winning ties,
+ * in one pass that reads the fields directly (a callback per figure would box every value it returns).
+ */
+function extremes(reports: readonly MatReport[]): Extremes {
+  const e: Extremes = {
+    worstSenseSignal: Number.NaN,
+    worstSenseSignalMatId: null,
+    worstSenseMargin: Number.NaN,
+    worstSenseMarginMatId: null,
+    shortestRetention: Number.NaN,
+    worstWordlineDelay: Number.NaN,
+  };
+  let signal = Infinity;
+  let margin = Infinity;
+  let retention = Infinity;
+  let delay = -Infinity;
+  let first = true;
   for (const m of reports) {
-    const v = pick(m);
-    if (id === null || v < value) {
-      value = v;
-      id = m.matId;
+    const f = m.figures;
+    if (first || f.senseSignal < signal) {
+      signal = f.senseSignal;
+      e.worstSenseSignalMatId = m.matId;
     }
+    if (first || f.senseMarginAtRefresh < margin) {
+      margin = f.senseMarginAtRefresh;
+      e.worstSenseMarginMatId = m.matId;
+    }
+    if (first || f.retentionTime < retention) retention = f.retentionTime;
+    if (first || f.wordlineDelay > delay) delay = f.wordlineDelay;
+    first = false;
   }
-  return [value, id];
+  if (!first) {
+    e.worstSenseSignal = signal;
+    e.worstSenseMargin = margin;
+    e.shortestRetention = retention;
+    e.worstWordlineDelay = delay;
+  }
+  return e;
 }
 
 /**
@@ -77,8 +120,7 @@ function worst(reports: readonly MatReport[], pick: (m: MatReport) => number): [
  * The total is the bounding box of every block, so gaps count against efficiency.
  */
 export function computeTotals(
-  placed: readonly PlacedBlock[],
-  mats: readonly PlacedMat[],
+  table: BlockTable,
   reports: readonly MatReport[],
   design: Design,
   offsetSigmaMultiplier: number,
@@ -93,27 +135,38 @@ export function computeTotals(
     cellArea += m.figures.usableBits * m.figures.cellFootprint;
   }
   let placedArea = 0;
-  const areaByType: Record<BlockType, number> = {
-    mat: 0,
-    senseAmpStrip: 0,
-    wordlineDriverStrip: 0,
-    rowDecoder: 0,
-    columnDecoder: 0,
-    spacer: 0,
-  };
-  for (const p of placed) {
-    const a = area(p.rect);
-    placedArea += a;
-    areaByType[p.block.type] += a;
+  // Summed per type code in a typed array: adding to a record field would box a new number each time.
+  const areaByCode = new Float64Array(BLOCK_TYPE_CODES.length);
+  let minX = Infinity;
+  let minY = Infinity;
+  let maxX = -Infinity;
+  let maxY = -Infinity;
+  for (let i = 0; i < table.count; i++) {
+    const x = table.x[i] as number;
+    const y = table.y[i] as number;
+    const w = table.width[i] as number;
+    const h = table.height[i] as number;
+    placedArea += w * h;
+    const code = table.type[i] as number;
+    areaByCode[code] = (areaByCode[code] as number) + w * h;
+    minX = Math.min(minX, x);
+    minY = Math.min(minY, y);
+    maxX = Math.max(maxX, x + w);
+    maxY = Math.max(maxY, y + h);
   }
-  const box = boundingBox(placed.map((p) => p.rect));
-  const totalArea = box ? area(box) : 0;
+  const sum = (type: BlockType) => areaByCode[BLOCK_TYPE_CODES.indexOf(type)] as number;
+  const areaByType: Record<BlockType, number> = {
+    mat: sum('mat'),
+    senseAmpStrip: sum('senseAmpStrip'),
+    wordlineDriverStrip: sum('wordlineDriverStrip'),
+    rowDecoder: sum('rowDecoder'),
+    columnDecoder: sum('columnDecoder'),
+    spacer: sum('spacer'),
+  };
+  // The bounding box of every block (rect.ts boundingBox, read from the table).
+  const totalArea = table.count > 0 ? (maxX - minX) * (maxY - minY) : 0;
   const areaPerBit = usableBits > 0 ? totalArea / usableBits : 0;
   const F = design.process.featureSize;
-  const [worstSenseSignal, worstSenseSignalMatId] = worst(reports, (m) => m.figures.senseSignal);
-  const [worstSenseMargin, worstSenseMarginMatId] = worst(reports, (m) => m.figures.senseMarginAtRefresh);
-  const [shortestRetention] = worst(reports, (m) => m.figures.retentionTime);
-  const [negativeDelay] = worst(reports, (m) => -m.figures.wordlineDelay);
   return {
     matCount: reports.length,
     bits,
@@ -128,12 +181,7 @@ export function computeTotals(
     areaPerBitInF2: areaPerBit / (F * F),
     senseAmpCount,
     offsetSigmaMultiplier,
-    worstSenseSignal,
-    worstSenseSignalMatId,
-    worstSenseMargin,
-    worstSenseMarginMatId,
-    shortestRetention,
-    worstWordlineDelay: -negativeDelay,
-    refresh: refreshFigures(mats, reports, design),
+    ...extremes(reports),
+    refresh: refreshFigures(table, reports, design),
   };
 }

@@ -1,4 +1,4 @@
-import type { Rect } from './rect';
+import type { Boxes } from './blockTable';
 
 /**
  * Neighbours of every block in compressed rows: block i's neighbours are `list[start[i]]` up to
@@ -51,11 +51,11 @@ export function neighbourTableOf(
  * pairs), with no tree and no per-query arrays, which is what a whole-die evaluation needs; arbitrary
  * point or box queries (hit-testing, live previews) use the R-tree in spatialIndex.ts instead.
  */
-export function neighbourTable(rects: readonly Rect[], margin: number): NeighbourTable {
-  const n = rects.length;
-  // Boxes in flat arrays (m): x0..x1 by y0..y1.
-  const x0 = new Float64Array(n);
-  const y0 = new Float64Array(n);
+export function neighbourTable(boxes: Boxes, margin: number): NeighbourTable {
+  const n = boxes.count;
+  // Box edges (m): x0..x1 by y0..y1.
+  const x0 = boxes.x;
+  const y0 = boxes.y;
   const x1 = new Float64Array(n);
   const y1 = new Float64Array(n);
   let minX = Infinity;
@@ -63,13 +63,10 @@ export function neighbourTable(rects: readonly Rect[], margin: number): Neighbou
   let maxX = -Infinity;
   let maxY = -Infinity;
   for (let i = 0; i < n; i++) {
-    const r = rects[i] as Rect;
-    const ax = r.x;
-    const ay = r.y;
-    const bx = r.x + r.width;
-    const by = r.y + r.height;
-    x0[i] = ax;
-    y0[i] = ay;
+    const ax = x0[i] as number;
+    const ay = y0[i] as number;
+    const bx = ax + (boxes.width[i] as number);
+    const by = ay + (boxes.height[i] as number);
     x1[i] = bx;
     y1[i] = by;
     if (ax < minX) minX = ax;
@@ -221,7 +218,7 @@ function gridShape(
   spanX: number,
   spanY: number,
 ): { columns: number; rows: number; cellSize: number } {
-  const n = x0.length;
+  const n = x1.length;
   // Sizes of the plain boxes; the grid is laid over the grown ones.
   const step = Math.max(1, Math.floor(n / SIZE_SAMPLE));
   const sizes = new Float64Array(Math.ceil(n / step));

@@ -14,14 +14,17 @@ export interface MatOutline {
   readonly bitlineAxis: BitlineAxis;
 }
 
+const ACROSS: readonly [Side, Side] = ['top', 'bottom'];
+const ALONG: readonly [Side, Side] = ['left', 'right'];
+
 /** The sides where a mat's bit lines end (top and bottom for vertical bit lines). */
 export function bitlineEndSides(axis: BitlineAxis): readonly [Side, Side] {
-  return axis === 'vertical' ? ['top', 'bottom'] : ['left', 'right'];
+  return axis === 'vertical' ? ACROSS : ALONG;
 }
 
 /** The sides where a mat's word lines end. */
 export function wordlineEndSides(axis: BitlineAxis): readonly [Side, Side] {
-  return axis === 'vertical' ? ['left', 'right'] : ['top', 'bottom'];
+  return axis === 'vertical' ? ALONG : ACROSS;
 }
 
 /** The mat sides a strip type fits against, or none for strips that do not fit themselves. */

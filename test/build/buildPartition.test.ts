@@ -5,8 +5,9 @@ import { formatBits } from '../../src/model/units';
 import { gridExtent, losesEdgeBits, planPartition, type StripSizes } from '../../src/build/partitionPlan';
 import { evaluate } from '../../src/engine';
 import { findOverlaps } from '../../src/engine/overlaps';
-import { placeBlocks } from '../../src/geometry/placedBlocks';
-import { buildSpatialIndex } from '../../src/geometry/spatialIndex';
+import { blockTable } from '../../src/geometry/blockTable';
+import { neighbourTable } from '../../src/geometry/neighbourGrid';
+import { ABUTMENT_TOLERANCE } from '../../src/geometry/rect';
 import {
   BUILTIN_CELLS,
   BUILTIN_PROCESSES,
@@ -54,8 +55,8 @@ describe('partition builder', () => {
         expect(report.totals.usableBits).toBeGreaterThanOrEqual(spec.targetBits);
         expect(report.totals.usableBits).toBe(built.plan.usableBits);
         expect(report.totals.matCount).toBe(built.plan.matCount);
-        const placed = placeBlocks(built.design);
-        expect(findOverlaps(placed, buildSpatialIndex(placed.map((p) => p.rect)))).toEqual([]);
+        const table = blockTable(built.design);
+        expect(findOverlaps(table, neighbourTable(table, ABUTMENT_TOLERANCE))).toEqual([]);
         const kinds = new Set(report.findings.map((f) => f.kind));
         for (const kind of ['overlap', 'unsensedBitlines', 'undrivenWordlines'] as const) {
           expect(kinds.has(kind)).toBe(false);

@@ -1,5 +1,12 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { linesInGaps, uncoveredParts, unionIntervals, type Interval } from '../../src/geometry/interval';
+import {
+  linesInGaps,
+  uncoveredLineCount,
+  uncoveredParts,
+  unionIntervals,
+  type Interval,
+} from '../../src/geometry/interval';
 
 const iv = (start: number, end: number): Interval => ({ start, end });
 
@@ -59,5 +66,41 @@ describe('linesInGaps: line i sits at (i + ½)·pitch', () => {
     ['pitch 2F in metres', [iv(0, 18e-9 * 2 * 512)], 18e-9 * 2, 1024, 512],
   ] as const)('%s', (_name, gaps, pitch, lineCount, expected) => {
     expect(linesInGaps(gaps, pitch, lineCount)).toBe(expected);
+  });
+});
+
+describe('uncoveredLineCount (the flat form used by evaluate)', () => {
+  const span = fc
+    .tuple(fc.integer({ min: -4, max: 44 }), fc.integer({ min: -4, max: 44 }))
+    .map(([a, b]) => iv(a * 0.25, b * 0.25));
+
+  it('counts the same lines as linesInGaps of uncoveredParts, clipped to a window', () => {
+    fc.assert(
+      fc.property(
+        fc.array(span, { maxLength: 6 }),
+        fc.integer({ min: 0, max: 40 }),
+        fc.integer({ min: 0, max: 40 }),
+        fc.constantFrom(0, 1e-9, 0.3),
+        (spans, a, b, tolerance) => {
+          const length = 10;
+          const pitch = 0.5;
+          const lineCount = 20;
+          const from = Math.min(a, b) * 0.25;
+          const to = Math.max(a, b) * 0.25;
+          const gaps = uncoveredParts(spans, length, tolerance)
+            .map((g) => iv(Math.max(g.start, from), Math.min(g.end, to)))
+            .filter((g) => g.end > g.start);
+          const flat = new Float64Array(spans.flatMap((s) => [s.start, s.end]));
+          expect(uncoveredLineCount(flat, spans.length, length, tolerance, pitch, lineCount, from, to)).toBe(
+            linesInGaps(gaps, pitch, lineCount),
+          );
+          const flatAgain = new Float64Array(spans.flatMap((s) => [s.start, s.end]));
+          expect(uncoveredLineCount(flatAgain, spans.length, length, tolerance, pitch, lineCount)).toBe(
+            linesInGaps(uncoveredParts(spans, length, tolerance), pitch, lineCount),
+          );
+        },
+      ),
+      { numRuns: 3000 },
+    );
   });
 });

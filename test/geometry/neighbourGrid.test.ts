@@ -1,5 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
+import { boxesOf } from '../../src/geometry/blockTable';
 import { neighbourTable, neighbourTableOf, neighboursOf } from '../../src/geometry/neighbourGrid';
 import { ABUTMENT_TOLERANCE, type Rect } from '../../src/geometry/rect';
 import { buildSpatialIndex } from '../../src/geometry/spatialIndex';
@@ -43,7 +44,7 @@ const wildRect = fc
 
 /** Every row of the grid's table as plain arrays. */
 function neighbourLists(rects: readonly Rect[], margin: number): number[][] {
-  const table = neighbourTable(rects, margin);
+  const table = neighbourTable(boxesOf(rects), margin);
   return rects.map((_, i) => neighboursOf(table, i));
 }
 
