@@ -11,13 +11,10 @@ import type { NeighbourTable } from '../geometry/neighbourGrid';
 import { ABUTMENT_TOLERANCE } from '../geometry/rect';
 import { bitlineEndSides, wordlineEndSides } from '../geometry/stripFit';
 import { unpartneredBitlines } from './openBitline';
+import type { ServingStripsBuilder } from './servingStrips';
 
 /** Which strips serve a mat, found from geometry alone. */
 export interface MatConnections {
-  /** Ids of sense-amplifier strips abutting the mat's bit-line ends. */
-  readonly senseAmpStripIds: readonly string[];
-  /** Ids of driver strips or row decoders abutting the mat's word-line ends. */
-  readonly wordlineDriverIds: readonly string[];
   /** Bit lines whose position no sense-amplifier strip covers at either end. */
   readonly unsensedBitlines: number;
   /** Word lines whose position no driver covers at either end. */
@@ -73,15 +70,21 @@ function growContacts(): void {
  * (driving a small mat directly) drive. Common practice (no source).
  *
  * @param at the mat's position in the table and in the neighbour table.
+ * @param serving where to record the ids of the serving strips, as mat `k` of a report.
  */
-export function matConnections(table: BlockTable, at: number, neighbours: NeighbourTable): MatConnections {
+export function matConnections(
+  table: BlockTable,
+  at: number,
+  neighbours: NeighbourTable,
+  serving: ServingStripsBuilder,
+  k: number,
+): MatConnections {
   const kind = kindAt(table, at);
   const axis = kind.block.bitlineAxis;
   const bitlineEnds = bitlineEndSides(axis);
   const wordlineEnds = wordlineEndSides(axis);
-  // Ids gather in scratch lists and are copied out at their exact length: a list grown by push keeps
-  // room for 17 entries, and a die keeps two lists per mat for as long as its report lives. The scratch
-  // lists keep their length (setting it to 0 would free their storage), so counts say what is in use.
+  // Ids gather in scratch lists (sense amplifiers first in the report, whatever order they are found in).
+  // The lists keep their length (setting it to 0 would free their storage), so counts say what is in use.
   let senseAmpIdCount = 0;
   let driverIdCount = 0;
   contacts.count = 0;
@@ -122,9 +125,8 @@ export function matConnections(table: BlockTable, at: number, neighbours: Neighb
   const senseAmpEnds = (top ? 1 : 0) + (bottom ? 1 : 0);
   // Open bit lines are counted from the contacts before the coverage count below reorders their spans.
   const unpartnered = unpartneredBitlines(table, at, contacts, senseAmpEnds, neighbours);
+  serving.set(k, senseAmpIds, senseAmpIdCount, driverIds, driverIdCount);
   return {
-    senseAmpStripIds: copyOf(senseAmpIds, senseAmpIdCount),
-    wordlineDriverIds: copyOf(driverIds, driverIdCount),
     unsensedBitlines: uncoveredLineCount(
       contacts.span,
       contacts.count,
@@ -144,11 +146,4 @@ export function matConnections(table: BlockTable, at: number, neighbours: Neighb
     senseAmpEnds,
     unpartneredBitlines: unpartnered,
   };
-}
-
-/** The first `count` entries of a scratch list, in an array of exactly that length. */
-function copyOf(list: readonly string[], count: number): string[] {
-  const copy = new Array<string>(count);
-  for (let k = 0; k < count; k++) copy[k] = list[k] as string;
-  return copy;
 }

@@ -9,6 +9,7 @@ import { matPhysics, senseAmpsOfMat, type DesignContext } from './matPhysics';
 import { offsetSigmaMultiplier } from './offset';
 import { findOverlaps } from './overlaps';
 import type { MatFigures, MatReport, Report } from './report';
+import { ServingStripsBuilder } from './servingStrips';
 import { leakageAtTemperature } from './retention';
 import { storedHighLevel } from './storedLevel';
 import { computeTotals } from './totals';
@@ -59,9 +60,12 @@ export function evaluateMatAt(
   at: number,
   neighbours: NeighbourTable,
   ctx: DesignContext,
+  /** Where the ids of the mat's serving strips go, as mat `k` of the report. */
+  serving: ServingStripsBuilder,
+  k: number,
   figuresByKind?: Map<number | string, MatFigures>,
 ): MatReport {
-  const c = matConnections(table, at, neighbours);
+  const c = matConnections(table, at, neighbours, serving, k);
   const kindIndex = table.kindOf[at] as number;
   const lost = c.unpartneredBitlines;
   // A number for the common case (no lost bit lines), a string otherwise: either way one map lookup.
@@ -75,8 +79,6 @@ export function evaluateMatAt(
   return {
     matId: block.id,
     name: block.name,
-    senseAmpStripIds: c.senseAmpStripIds,
-    wordlineDriverIds: c.wordlineDriverIds,
     unsensedBitlines: c.unsensedBitlines,
     undrivenWordlines: c.undrivenWordlines,
     figures,
@@ -98,14 +100,20 @@ export function evaluate(design: Design): Report {
   const senseAmpCount = countSenseAmps(table);
   const ctx = designContext(design, senseAmpCount);
   const figuresByKind = new Map<number | string, MatFigures>();
-  const matReports: MatReport[] = [];
-  for (let i = 0; i < table.count; i++) {
-    if (table.type[i] === MAT_CODE) matReports.push(evaluateMatAt(table, i, neighbours, ctx, figuresByKind));
+  let matCount = 0;
+  for (let i = 0; i < table.count; i++) if (table.type[i] === MAT_CODE) matCount++;
+  const matReports = new Array<MatReport>(matCount);
+  const serving = new ServingStripsBuilder(matCount);
+  for (let i = 0, k = 0; i < table.count; i++) {
+    if (table.type[i] !== MAT_CODE) continue;
+    matReports[k] = evaluateMatAt(table, i, neighbours, ctx, serving, k, figuresByKind);
+    k++;
   }
   const overlaps = findOverlaps(table, neighbours);
   const totals = computeTotals(table, matReports, design, ctx.sigmaMultiplier, senseAmpCount);
   return {
     mats: matReports,
+    servingStrips: serving.finish(),
     totals,
     storedHigh: ctx.storedHigh,
     findings: collectFindings(matReports, overlaps, ctx.storedHigh, design),

@@ -9,6 +9,7 @@ import { collectFindings } from './checks';
 import { countSenseAmps, designContext, evaluate, evaluateMatAt } from './evaluate';
 import { findOverlaps, overlapAreaAt, type Overlap } from './overlaps';
 import type { Report } from './report';
+import { ServingStripsBuilder } from './servingStrips';
 import { computeTotals } from './totals';
 
 /**
@@ -146,11 +147,15 @@ export function previewReport(base: PreviewBase, changed: readonly Block[]): Rep
   const ctx = designContext(design, senseAmpCount);
   const neighbours = previewNeighbours(current, composite, affected);
   const mats = report.mats.slice();
+  const serving = new ServingStripsBuilder(mats.length);
+  const redone = new Set<number>();
   for (const i of affected) {
-    const r = evaluateMatAt(current, i, neighbours, ctx);
-    const at = base.matOrder.get(r.matId);
-    if (at !== undefined) mats[at] = r;
+    const at = base.matOrder.get(current.blocks[i]?.id ?? '');
+    if (at === undefined) continue;
+    mats[at] = evaluateMatAt(current, i, neighbours, ctx, serving, at);
+    redone.add(at);
   }
+  for (let k = 0; k < mats.length; k++) if (!redone.has(k)) serving.copy(k, report.servingStrips, k);
 
   // Overlaps: the static pairs found once per gesture, plus those of the changed blocks, in design order.
   const overlaps: PositionedOverlap[] = base.staticOverlaps.slice();
@@ -182,5 +187,5 @@ export function previewReport(base: PreviewBase, changed: readonly Block[]): Rep
     report.storedHigh,
     design,
   );
-  return { mats, totals, storedHigh: report.storedHigh, findings };
+  return { mats, servingStrips: serving.finish(), totals, storedHigh: report.storedHigh, findings };
 }

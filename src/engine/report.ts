@@ -1,6 +1,7 @@
 import type { BlockType } from '../model/block';
 import type { BitlineArchitecture, CellKind } from '../model/cell';
 import type { BitlineCapacitance } from './bitline';
+import type { ServingStrips } from './servingStrips';
 import type { StoredHighLevel } from './storedLevel';
 
 /** 1T1C read: charge sharing between cell and bit line. Voltages in V. */
@@ -102,14 +103,13 @@ export interface MatFigures {
   readonly senseAmpFits: boolean;
 }
 
-/** One mat of the floorplan: who it is, what serves it, and its figures. */
+/**
+ * One mat of the floorplan: who it is, how well it is served, and its figures. Which strips serve it is
+ * in {@link Report.servingStrips}.
+ */
 export interface MatReport {
   readonly matId: string;
   readonly name: string;
-  /** Ids of the sense-amplifier strips abutting its bit-line ends. */
-  readonly senseAmpStripIds: readonly string[];
-  /** Ids of the driver strips or row decoders abutting its word-line ends. */
-  readonly wordlineDriverIds: readonly string[];
   /** Bit lines that reach no sense-amplifier strip. */
   readonly unsensedBitlines: number;
   /** Word lines that reach no driver. */
@@ -195,6 +195,8 @@ export interface Finding {
 /** Everything evaluate() returns for a design. */
 export interface Report {
   readonly mats: readonly MatReport[];
+  /** The strips serving each mat, indexed like `mats` (see servingStrips.ts). */
+  readonly servingStrips: ServingStrips;
   readonly totals: Totals;
   readonly storedHigh: StoredHighLevel;
   readonly findings: readonly Finding[];

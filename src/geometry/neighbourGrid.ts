@@ -53,126 +53,244 @@ export function neighbourTableOf(
  */
 export function neighbourTable(boxes: Boxes, margin: number): NeighbourTable {
   const n = boxes.count;
-  // Box edges (m): x0..x1 by y0..y1.
-  const x0 = boxes.x;
-  const y0 = boxes.y;
-  const x1 = new Float64Array(n);
-  const y1 = new Float64Array(n);
+  const pairs = new PairBuffer();
+  if (n < 2) return pairs.table(n);
+  // Each pass below is its own small function: V8 optimises a function with one hot loop reliably,
+  // while one long function of several loops kept being deoptimised and ran several times slower.
+  const bounds = extent(boxes, margin);
+  if (!bounds) {
+    allPairs(boxes, margin, pairs);
+    return pairs.table(n);
+  }
+  const grid = gridShape(boxes, bounds);
+  const cells = binBoxes(boxes, margin, grid);
+  gridPairs(boxes, margin, grid, cells, pairs);
+  return pairs.table(n);
+}
+
+/** The grid's origin and size (m): the boxes grown by the margin. */
+interface Extent {
+  readonly minX: number;
+  readonly minY: number;
+  readonly spanX: number;
+  readonly spanY: number;
+}
+
+/** The extent of the grown boxes, or null when some box is not finite. */
+function extent(boxes: Boxes, margin: number): Extent | null {
+  const { x, y, width, height } = boxes;
   let minX = Infinity;
   let minY = Infinity;
   let maxX = -Infinity;
   let maxY = -Infinity;
-  for (let i = 0; i < n; i++) {
-    const ax = x0[i] as number;
-    const ay = y0[i] as number;
-    const bx = ax + (boxes.width[i] as number);
-    const by = ay + (boxes.height[i] as number);
-    x1[i] = bx;
-    y1[i] = by;
+  for (let i = 0; i < boxes.count; i++) {
+    const ax = x[i] as number;
+    const ay = y[i] as number;
+    const bx = ax + (width[i] as number);
+    const by = ay + (height[i] as number);
     if (ax < minX) minX = ax;
     if (ay < minY) minY = ay;
     if (bx > maxX) maxX = bx;
     if (by > maxY) maxY = by;
   }
-  const pairs = new PairBuffer(n);
-  // The grid covers the boxes grown by the margin.
-  minX -= margin;
-  minY -= margin;
-  const spanX = maxX + margin - minX;
-  const spanY = maxY + margin - minY;
-  if (n < 2) return pairs.table(n);
-  if (!Number.isFinite(spanX) || !Number.isFinite(spanY)) {
-    for (let i = 0; i < n; i++) {
-      for (let j = i + 1; j < n; j++) {
-        if (meets(i, j, margin, x0, y0, x1, y1) || meets(j, i, margin, x0, y0, x1, y1)) pairs.add(i, j);
-      }
-    }
-    return pairs.table(n);
-  }
+  const spanX = maxX - minX + 2 * margin;
+  const spanY = maxY - minY + 2 * margin;
+  if (!Number.isFinite(spanX) || !Number.isFinite(spanY)) return null;
+  return { minX: minX - margin, minY: minY - margin, spanX, spanY };
+}
 
-  const { columns, rows, cellSize } = gridShape(x0, y0, x1, y1, spanX, spanY);
-  const column = (v: number) => Math.min(columns - 1, Math.max(0, Math.floor((v - minX) / cellSize)));
-  const row = (v: number) => Math.min(rows - 1, Math.max(0, Math.floor((v - minY) / cellSize)));
-
-  // Cell range of every box, and how many boxes land in each cell (counting sort).
-  const c0 = new Int32Array(n);
-  const c1 = new Int32Array(n);
-  const r0 = new Int32Array(n);
-  const r1 = new Int32Array(n);
-  const cellCount = columns * rows;
-  const start = new Int32Array(cellCount + 1);
-  for (let i = 0; i < n; i++) {
-    const a = column((x0[i] as number) - margin);
-    const b = column((x1[i] as number) + margin);
-    const c = row((y0[i] as number) - margin);
-    const d = row((y1[i] as number) + margin);
-    c0[i] = a;
-    c1[i] = b;
-    r0[i] = c;
-    r1[i] = d;
-    for (let rr = c; rr <= d; rr++)
-      for (let cc = a; cc <= b; cc++) (start[rr * columns + cc + 1] as number)++;
-  }
-  for (let k = 0; k < cellCount; k++) start[k + 1] = (start[k + 1] as number) + (start[k] as number);
-  const members = new Int32Array(start[cellCount] as number);
-  const fill = start.slice(0, cellCount);
-  // Boxes go in ascending index order, so each cell's list is ascending.
-  for (let i = 0; i < n; i++) {
-    const a = c0[i] as number;
-    const b = c1[i] as number;
-    const d = r1[i] as number;
-    for (let rr = r0[i] as number; rr <= d; rr++) {
-      for (let cc = a; cc <= b; cc++) {
-        const cell = rr * columns + cc;
-        members[fill[cell] as number] = i;
-        fill[cell] = (fill[cell] as number) + 1;
-      }
+/** Every pair compared directly: only for boxes with non-finite extent, which restore never lets through. */
+function allPairs(boxes: Boxes, margin: number, pairs: PairBuffer): void {
+  for (let i = 0; i < boxes.count; i++) {
+    for (let j = i + 1; j < boxes.count; j++) {
+      if (meets(boxes, i, j, margin) || meets(boxes, j, i, margin)) pairs.add(i, j);
     }
   }
+}
 
+interface Grid extends Extent {
+  readonly columns: number;
+  readonly rows: number;
+  readonly cellSize: number;
+}
+
+/** Which cells each grown box covers (a column and row range), and the boxes of each cell. */
+interface Binned {
+  readonly firstColumn: Int32Array;
+  readonly lastColumn: Int32Array;
+  readonly firstRow: Int32Array;
+  readonly lastRow: Int32Array;
+  /** Cell c holds `members[start[c]]` … `members[start[c + 1] − 1]`, ascending. */
+  readonly start: Int32Array;
+  readonly members: Int32Array;
+}
+
+function binBoxes(boxes: Boxes, margin: number, grid: Grid): Binned {
+  const n = boxes.count;
+  const cells: Binned = {
+    firstColumn: SCRATCH.firstColumn.take(n),
+    lastColumn: SCRATCH.lastColumn.take(n),
+    firstRow: SCRATCH.firstRow.take(n),
+    lastRow: SCRATCH.lastRow.take(n),
+    start: SCRATCH.cellStart.take(grid.columns * grid.rows + 1),
+    members: SCRATCH.members.take(0),
+  };
+  cellRanges(boxes, margin, grid, cells);
+  const cellCount = grid.columns * grid.rows;
+  cells.start.fill(0, 0, cellCount + 1);
+  countPerCell(n, grid.columns, cells);
+  const total = runningTotals(cells.start, cellCount);
+  const filled: Binned = { ...cells, members: SCRATCH.members.take(total) };
+  fillCells(n, grid.columns, filled);
+  return filled;
+}
+
+function cellRanges(boxes: Boxes, margin: number, grid: Grid, cells: Binned): void {
+  const { x, y, width, height } = boxes;
+  const { firstColumn, lastColumn, firstRow, lastRow } = cells;
+  const { minX, minY, cellSize } = grid;
+  const maxColumn = grid.columns - 1;
+  const maxRow = grid.rows - 1;
+  for (let i = 0; i < boxes.count; i++) {
+    const left = (x[i] as number) - margin - minX;
+    const right = (x[i] as number) + (width[i] as number) + margin - minX;
+    const top = (y[i] as number) - margin - minY;
+    const bottom = (y[i] as number) + (height[i] as number) + margin - minY;
+    firstColumn[i] = Math.min(maxColumn, Math.max(0, Math.floor(left / cellSize)));
+    lastColumn[i] = Math.min(maxColumn, Math.max(0, Math.floor(right / cellSize)));
+    firstRow[i] = Math.min(maxRow, Math.max(0, Math.floor(top / cellSize)));
+    lastRow[i] = Math.min(maxRow, Math.max(0, Math.floor(bottom / cellSize)));
+  }
+}
+
+/**
+ * Counts the boxes of every cell into `start`. (Hot loops here end their function: code after a loop
+ * that V8 compiled on the fly lacks type feedback and would throw the compiled loop away on every call.)
+ */
+function countPerCell(n: number, columns: number, cells: Binned): void {
+  const { firstColumn, lastColumn, firstRow, lastRow, start } = cells;
+  for (let i = 0; i < n; i++) {
+    const a = firstColumn[i] as number;
+    const b = lastColumn[i] as number;
+    const d = lastRow[i] as number;
+    for (let r = firstRow[i] as number; r <= d; r++) {
+      for (let c = a; c <= b; c++) {
+        const cell = r * columns + c;
+        start[cell] = (start[cell] as number) + 1;
+      }
+    }
+  }
+}
+
+/** Turns counts[0 … length − 1] into running totals, sets counts[length] to the sum and returns it. */
+function runningTotals(counts: Int32Array, length: number): number {
+  addUp(counts, length);
+  const sum = length > 0 ? (counts[length - 1] as number) : 0;
+  counts[length] = sum;
+  return sum;
+}
+
+function addUp(counts: Int32Array, length: number): void {
+  for (let k = 1; k < length; k++) counts[k] = (counts[k] as number) + (counts[k - 1] as number);
+}
+
+/**
+ * Puts every box in the lists of its cells. Filling backwards moves `start[cell]` from where the list
+ * ends to where it begins, and boxes taken in descending order leave each list ascending.
+ */
+function fillCells(n: number, columns: number, cells: Binned): void {
+  const { firstColumn, lastColumn, firstRow, lastRow, start, members } = cells;
+  for (let i = n - 1; i >= 0; i--) {
+    const a = firstColumn[i] as number;
+    const b = lastColumn[i] as number;
+    const top = firstRow[i] as number;
+    const d = lastRow[i] as number;
+    for (let r = top; r <= d; r++) {
+      for (let c = a; c <= b; c++) {
+        const cell = r * columns + c;
+        const at = (start[cell] as number) - 1;
+        start[cell] = at;
+        members[at] = i;
+      }
+    }
+  }
+}
+
+/** Compares the boxes that share a cell and keeps each meeting pair once. */
+function gridPairs(boxes: Boxes, margin: number, grid: Grid, cells: Binned, pairs: PairBuffer): void {
+  const { firstColumn, firstRow, start, members } = cells;
+  const columns = grid.columns;
+  const cellCount = columns * grid.rows;
   for (let cell = 0; cell < cellCount; cell++) {
     const from = start[cell] as number;
     const to = start[cell + 1] as number;
     if (to - from < 2) continue;
-    const cc = cell % columns;
-    const rr = (cell - cc) / columns;
+    const column = cell % columns;
+    const row = (cell - column) / columns;
     for (let p = from; p < to; p++) {
       const i = members[p] as number;
-      const ci = c0[i] as number;
-      const ri = r0[i] as number;
+      const ci = firstColumn[i] as number;
+      const ri = firstRow[i] as number;
       for (let q = p + 1; q < to; q++) {
         const j = members[q] as number;
         // Report the pair only in the cell holding the lower corner of the grown boxes' intersection.
-        if ((ci > (c0[j] as number) ? ci : (c0[j] as number)) !== cc) continue;
-        if ((ri > (r0[j] as number) ? ri : (r0[j] as number)) !== rr) continue;
+        const cj = firstColumn[j] as number;
+        if ((ci > cj ? ci : cj) !== column) continue;
+        const rj = firstRow[j] as number;
+        if ((ri > rj ? ri : rj) !== row) continue;
         // The box of i grown by the margin against the plain box of j, compared as a box query would be,
         // or the other way round: rounding can make the two differ by an ulp when the gap is the margin.
-        if (meets(i, j, margin, x0, y0, x1, y1) || meets(j, i, margin, x0, y0, x1, y1)) pairs.add(i, j);
+        if (meets(boxes, i, j, margin) || meets(boxes, j, i, margin)) pairs.add(i, j);
       }
     }
   }
-  return pairs.table(n);
 }
 
-/** Pairs (i < j) collected in growable typed arrays, then turned into rows of both directions. */
-class PairBuffer {
-  private first: Int32Array;
-  private second: Int32Array;
-  private count = 0;
+/**
+ * A typed buffer kept between calls for a temporary that never leaves this module, grown when a call
+ * needs more: evaluating a large die repeatedly then allocates (and zero-fills) tens of megabytes less
+ * per call. Its contents are stale; callers initialise what they read.
+ */
+class Scratch {
+  private buffer = new Int32Array(0);
 
-  constructor(expected: number) {
-    this.first = new Int32Array(Math.max(16, 4 * expected));
-    this.second = new Int32Array(this.first.length);
+  take(length: number): Int32Array {
+    if (this.buffer.length < length)
+      this.buffer = new Int32Array(Math.max(length, Math.ceil(1.5 * this.buffer.length)));
+    return this.buffer;
   }
+
+  /** Grows to at least `length`, keeping the first `keep` entries. */
+  grow(length: number, keep: number): Int32Array {
+    if (this.buffer.length >= length) return this.buffer;
+    const old = this.buffer;
+    this.take(length).set(old.subarray(0, keep));
+    return this.buffer;
+  }
+}
+
+const SCRATCH = {
+  firstColumn: new Scratch(),
+  lastColumn: new Scratch(),
+  firstRow: new Scratch(),
+  lastRow: new Scratch(),
+  cellStart: new Scratch(),
+  members: new Scratch(),
+  pairFirst: new Scratch(),
+  pairSecond: new Scratch(),
+  next: new Scratch(),
+};
+
+/** Pairs (i < j) collected in scratch buffers, then turned into rows of both directions. */
+class PairBuffer {
+  private first = SCRATCH.pairFirst.take(1024);
+  private second = SCRATCH.pairSecond.take(1024);
+  private count = 0;
 
   add(i: number, j: number): void {
     if (this.count === this.first.length) {
-      const first = new Int32Array(this.count * 2);
-      const second = new Int32Array(this.count * 2);
-      first.set(this.first);
-      second.set(this.second);
-      this.first = first;
-      this.second = second;
+      this.first = SCRATCH.pairFirst.grow(2 * this.count, this.count);
+      this.second = SCRATCH.pairSecond.grow(2 * this.count, this.count);
     }
     this.first[this.count] = i;
     this.second[this.count] = j;
@@ -180,25 +298,57 @@ class PairBuffer {
   }
 
   table(n: number): NeighbourTable {
-    const bounds = new Int32Array(n + 1);
-    for (let k = 0; k < this.count; k++) {
-      (bounds[(this.first[k] as number) + 1] as number)++;
-      (bounds[(this.second[k] as number) + 1] as number)++;
-    }
-    for (let i = 0; i < n; i++) bounds[i + 1] = (bounds[i + 1] as number) + (bounds[i] as number);
-    const list = new Int32Array(bounds[n] as number);
-    const next = bounds.slice(0, n);
-    for (let k = 0; k < this.count; k++) {
-      const i = this.first[k] as number;
-      const j = this.second[k] as number;
-      list[next[i] as number] = j;
-      next[i] = (next[i] as number) + 1;
-      list[next[j] as number] = i;
-      next[j] = (next[j] as number) + 1;
-    }
-    for (let i = 0; i < n; i++) sortRange(list, bounds[i] as number, bounds[i + 1] as number);
-    return { start: bounds.subarray(0, n), end: bounds.subarray(1), list };
+    return rowsOfPairs(this.first, this.second, this.count, n);
   }
+}
+
+/** Rows of both directions from a list of pairs (i < j), each row ascending. */
+function rowsOfPairs(first: Int32Array, second: Int32Array, count: number, n: number): NeighbourTable {
+  // Degrees go to ends[i], whose running totals are where each row ends; filling backwards moves them to
+  // where the rows begin.
+  const ends = new Int32Array(n + 1);
+  countEnds(first, second, count, ends);
+  const total = runningTotals(ends, n);
+  const list = new Int32Array(total);
+  const starts = SCRATCH.next.take(n);
+  starts.set(ends.subarray(0, n));
+  scatterPairs(first, second, count, starts, list);
+  sortRows(list, starts, ends, n);
+  return { start: starts.slice(0, n), end: ends, list };
+}
+
+/** Degree of every box, counted into `ends[i]`. */
+function countEnds(first: Int32Array, second: Int32Array, count: number, ends: Int32Array): void {
+  for (let k = 0; k < count; k++) {
+    const a = first[k] as number;
+    const b = second[k] as number;
+    ends[a] = (ends[a] as number) + 1;
+    ends[b] = (ends[b] as number) + 1;
+  }
+}
+
+/** Each pair into both rows, filled backwards from where each row ends. */
+function scatterPairs(
+  first: Int32Array,
+  second: Int32Array,
+  count: number,
+  starts: Int32Array,
+  list: Int32Array,
+): void {
+  for (let k = count - 1; k >= 0; k--) {
+    const i = first[k] as number;
+    const j = second[k] as number;
+    const at = (starts[i] as number) - 1;
+    list[at] = j;
+    starts[i] = at;
+    const bt = (starts[j] as number) - 1;
+    list[bt] = i;
+    starts[j] = bt;
+  }
+}
+
+function sortRows(list: Int32Array, starts: Int32Array, ends: Int32Array, n: number): void {
+  for (let i = 0; i < n; i++) sortRange(list, starts[i] as number, ends[i] as number);
 }
 
 /** At most this many grid cells per box, so memory stays O(n) however the boxes are spread. */
@@ -210,20 +360,13 @@ const SIZE_SAMPLE = 1024;
  * Cell size about the median box size (sampled), so a typical box spans one or two cells; enlarged when
  * the floorplan is so sparse that the grid would have more than {@link CELLS_PER_BOX} cells per box.
  */
-function gridShape(
-  x0: Float64Array,
-  y0: Float64Array,
-  x1: Float64Array,
-  y1: Float64Array,
-  spanX: number,
-  spanY: number,
-): { columns: number; rows: number; cellSize: number } {
-  const n = x1.length;
-  // Sizes of the plain boxes; the grid is laid over the grown ones.
+function gridShape(boxes: Boxes, extent: Extent): Grid {
+  const { spanX, spanY } = extent;
+  const n = boxes.count;
   const step = Math.max(1, Math.floor(n / SIZE_SAMPLE));
   const sizes = new Float64Array(Math.ceil(n / step));
   for (let k = 0, i = 0; i < n; i += step, k++) {
-    sizes[k] = Math.max((x1[i] as number) - (x0[i] as number), (y1[i] as number) - (y0[i] as number));
+    sizes[k] = Math.max(boxes.width[i] as number, boxes.height[i] as number);
   }
   sizes.sort();
   let cellSize = sizes[sizes.length >> 1] as number;
@@ -243,7 +386,7 @@ function gridShape(
       rows = Math.max(1, Math.ceil(spanY / cellSize));
     }
   }
-  return { columns, rows, cellSize };
+  return { ...extent, columns, rows, cellSize };
 }
 
 /** Insertion sort of list[from..to): rows hold a handful of entries. */
@@ -260,19 +403,12 @@ function sortRange(list: Int32Array, from: number, to: number): void {
 }
 
 /** Whether the box of `i` grown by `margin` meets the box of `j` (closed), as an R-tree query computes it. */
-function meets(
-  i: number,
-  j: number,
-  margin: number,
-  x0: Float64Array,
-  y0: Float64Array,
-  x1: Float64Array,
-  y1: Float64Array,
-): boolean {
+function meets(boxes: Boxes, i: number, j: number, margin: number): boolean {
+  const { x, y, width, height } = boxes;
   return (
-    (x0[i] as number) - margin <= (x1[j] as number) &&
-    (x0[j] as number) <= (x1[i] as number) + margin &&
-    (y0[i] as number) - margin <= (y1[j] as number) &&
-    (y0[j] as number) <= (y1[i] as number) + margin
+    (x[i] as number) - margin <= (x[j] as number) + (width[j] as number) &&
+    (x[j] as number) <= (x[i] as number) + (width[i] as number) + margin &&
+    (y[i] as number) - margin <= (y[j] as number) + (height[j] as number) &&
+    (y[j] as number) <= (y[i] as number) + (height[i] as number) + margin
   );
 }

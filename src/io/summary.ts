@@ -1,4 +1,5 @@
 import type { Finding, MatFigures, MatReport, Report } from '../engine/report';
+import { senseAmpStripIdsOf, wordlineDriverIdsOf, type ServingStrips } from '../engine/servingStrips';
 import type { BitlineArchitecture, CellKind } from '../model/cell';
 import type { Design } from '../model/design';
 
@@ -201,7 +202,7 @@ function readSummary(read: MatFigures['read']): ReadSummary {
       };
 }
 
-function matSummary(m: MatReport): MatSummary {
+function matSummary(m: MatReport, serving: ServingStrips, k: number): MatSummary {
   const cbl = m.figures.bitlineCapacitance;
   const e = m.figures.activationEnergy;
   return {
@@ -254,8 +255,8 @@ function matSummary(m: MatReport): MatSummary {
     activationEnergyPerBit_J: fig(e.perBit),
     senseAmpPitchBudget_m: fig(m.figures.senseAmpPitchBudget),
     senseAmpFits: m.figures.senseAmpFits,
-    senseAmpStripIds: [...m.senseAmpStripIds],
-    wordlineDriverIds: [...m.wordlineDriverIds],
+    senseAmpStripIds: senseAmpStripIdsOf(serving, k),
+    wordlineDriverIds: wordlineDriverIdsOf(serving, k),
     unsensedBitlines: m.unsensedBitlines,
     undrivenWordlines: m.undrivenWordlines,
   };
@@ -329,7 +330,7 @@ export function reportSummary(design: Design, report: Report): ReportSummary {
       wordlineHighNeeded_V: fig(s.wordlineHighNeeded),
       ...countFindings(report.findings),
     },
-    mats: report.mats.map(matSummary),
+    mats: report.mats.map((m, k) => matSummary(m, report.servingStrips, k)),
     findings: report.findings.map((f) => ({
       kind: f.kind,
       severity: f.severity,

@@ -5,6 +5,7 @@ import { formatBits } from '../../src/model/units';
 import { gridExtent, losesEdgeBits, planPartition, type StripSizes } from '../../src/build/partitionPlan';
 import { evaluate } from '../../src/engine';
 import { findOverlaps } from '../../src/engine/overlaps';
+import { senseAmpStripIdsOf } from '../../src/engine/servingStrips';
 import { blockTable } from '../../src/geometry/blockTable';
 import { neighbourTable } from '../../src/geometry/neighbourGrid';
 import { ABUTMENT_TOLERANCE } from '../../src/geometry/rect';
@@ -62,7 +63,9 @@ describe('partition builder', () => {
           expect(kinds.has(kind)).toBe(false);
         }
         // Every mat has sense amplifiers at both bit-line ends.
-        expect(report.mats.every((m) => m.senseAmpStripIds.length === 2)).toBe(true);
+        expect(report.mats.every((_, k) => senseAmpStripIdsOf(report.servingStrips, k).length === 2)).toBe(
+          true,
+        );
       }),
       { numRuns: 80, seed: 7 },
     );

@@ -8,6 +8,7 @@ import {
   matFigureApplies,
   TOTAL_FIGURES,
 } from '../../src/engine';
+import { senseAmpStripIdsOf, wordlineDriverIdsOf } from '../../src/engine/servingStrips';
 import { OPEN_6F2_CELL } from '../../src/model/builtins';
 import type { Block, Strip } from '../../src/model/block';
 import { demoDesign } from '../../src/model/demoDesign';
@@ -113,6 +114,11 @@ describe('evaluate: adjacency checks', () => {
 
   it('a mat with sense-amp strips on both bit-line ends and a driver on one word-line end is clean', () => {
     expect(kinds([M, saTop, saBottom, swdLeft])).toEqual([]);
+    // The strips serving it are listed by kind, in design order, and a strip elsewhere is not.
+    const far = strip('sa-far', 'senseAmpStrip', 100e-6, 100e-6, SIDE, 6e-6);
+    const r = evaluate(designWith([M, saBottom, swdLeft, far, saTop]));
+    expect(senseAmpStripIdsOf(r.servingStrips, 0)).toEqual(['sa-bottom', 'sa-top']);
+    expect(wordlineDriverIdsOf(r.servingStrips, 0)).toEqual(['swd-left']);
   });
 
   it('with one strip the sense amplifiers cannot interleave and overflow a folded 2-pitch budget', () => {
@@ -197,7 +203,7 @@ describe('evaluate: the demo design', () => {
     const [a, b] = r.mats;
     if (!a || !b) throw new Error('demo has fewer than two mats');
     expect(a.figures).toBe(b.figures);
-    expect(a.senseAmpStripIds).not.toEqual(b.senseAmpStripIds);
+    expect(senseAmpStripIdsOf(r.servingStrips, 0)).not.toEqual(senseAmpStripIdsOf(r.servingStrips, 1));
     // Sharing changes no figure: every demo mat reads the same signal.
     expect(r.mats.every((m) => m.figures.senseSignal === a.figures.senseSignal)).toBe(true);
   });

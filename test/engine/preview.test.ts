@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { evaluate, preparePreview, previewReport, type Report } from '../../src/engine';
+import { senseAmpStripIdsOf, wordlineDriverIdsOf } from '../../src/engine/servingStrips';
 import type { Block } from '../../src/model/block';
 import { demoDesign } from '../../src/model/demoDesign';
 import type { Design } from '../../src/model/design';
@@ -10,12 +11,12 @@ function findingKeys(report: Report): string[] {
   return report.findings.map((f) => `${f.kind}|${f.blockIds.join(',')}|${f.message}`).sort();
 }
 
-/** Mat reports with their strip lists sorted: the index may find neighbours in another order. */
+/** Mat reports with their serving strips, each list sorted. */
 function normalisedMats(report: Report) {
-  return report.mats.map((m) => ({
+  return report.mats.map((m, k) => ({
     ...m,
-    senseAmpStripIds: [...m.senseAmpStripIds].sort(),
-    wordlineDriverIds: [...m.wordlineDriverIds].sort(),
+    senseAmpStripIds: senseAmpStripIdsOf(report.servingStrips, k).sort(),
+    wordlineDriverIds: wordlineDriverIdsOf(report.servingStrips, k).sort(),
   }));
 }
 
