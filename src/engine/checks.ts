@@ -89,7 +89,9 @@ const NAMED_IN_MESSAGE = 3;
 
 interface IssueGroup {
   readonly issue: MatIssue;
-  readonly ids: string[];
+  /** Mats counted so far. */
+  count: number;
+  ids: string[];
   /** The first few mats' names, for the message. */
   readonly labels: string[];
 }
@@ -109,29 +111,45 @@ export function collectFindings(
   // Mats of one kind share their issue objects, so most lookups go by identity, not by building a key.
   const groupOfIssue = new Map<MatIssue, IssueGroup>();
   const physicsCache = new Map<MatFigures, readonly MatIssue[]>();
-  const add = (issue: MatIssue, mat: MatReport) => {
+  const issuesOf = (mat: MatReport): readonly MatIssue[] => {
+    // Mats of one kind share one figures object (evaluate computes it once per kind), so format it once.
+    let physics = physicsCache.get(mat.figures);
+    if (!physics) {
+      physics = physicsIssues(mat.figures, design);
+      physicsCache.set(mat.figures, physics);
+    }
+    const connection = connectionIssues(mat);
+    return connection.length === 0 ? physics : [...connection, ...physics];
+  };
+  const groupOf = (issue: MatIssue): IssueGroup => {
     let group = groupOfIssue.get(issue);
     if (!group) {
       const key = `${issue.kind}|${issue.severity}|${issue.detail}`;
       group = groups.get(key);
       if (!group) {
-        group = { issue, ids: [], labels: [] };
+        group = { issue, count: 0, ids: [], labels: [] };
         groups.set(key, group);
       }
       groupOfIssue.set(issue, group);
     }
-    group.ids.push(mat.matId);
-    if (group.labels.length < NAMED_IN_MESSAGE) group.labels.push(mat.name || mat.matId);
+    return group;
   };
+  // Two passes: count each group's mats, then fill lists of exactly that length (growing a list of tens
+  // of thousands of ids by push costs several times more).
   for (const mat of mats) {
-    for (const issue of connectionIssues(mat)) add(issue, mat);
-    // Mats of one kind share one figures object (evaluate computes it once per kind), so format it once.
-    let issues = physicsCache.get(mat.figures);
-    if (!issues) {
-      issues = physicsIssues(mat.figures, design);
-      physicsCache.set(mat.figures, issues);
+    for (const issue of issuesOf(mat)) {
+      const group = groupOf(issue);
+      group.count++;
+      if (group.labels.length < NAMED_IN_MESSAGE) group.labels.push(mat.name || mat.matId);
     }
-    for (const issue of issues) add(issue, mat);
+  }
+  for (const group of groups.values()) group.ids = new Array<string>(group.count);
+  for (const group of groups.values()) group.count = 0;
+  for (const mat of mats) {
+    for (const issue of issuesOf(mat)) {
+      const group = groupOf(issue);
+      group.ids[group.count++] = mat.matId;
+    }
   }
   const findings: Finding[] = [];
   for (const { issue, ids, labels } of groups.values()) {

@@ -16,13 +16,18 @@ import type { ServingStripsBuilder } from './servingStrips';
 /** Which strips serve a mat, found from geometry alone. */
 export interface MatConnections {
   /** Bit lines whose position no sense-amplifier strip covers at either end. */
-  readonly unsensedBitlines: number;
+  unsensedBitlines: number;
   /** Word lines whose position no driver covers at either end. */
-  readonly undrivenWordlines: number;
+  undrivenWordlines: number;
   /** Bit-line ends (0, 1 or 2) that have a sense-amplifier strip. */
-  readonly senseAmpEnds: number;
+  senseAmpEnds: number;
   /** Open bit lines with no partner mat beyond their strip (see openBitline.ts); 0 for other cells. */
-  readonly unpartneredBitlines: number;
+  unpartneredBitlines: number;
+}
+
+/** A connections record to fill; one per evaluation is enough, since each mat's is read at once. */
+export function emptyConnections(): MatConnections {
+  return { unsensedBitlines: 0, undrivenWordlines: 0, senseAmpEnds: 0, unpartneredBitlines: 0 };
 }
 
 /**
@@ -71,6 +76,7 @@ function growContacts(): void {
  *
  * @param at the mat's position in the table and in the neighbour table.
  * @param serving where to record the ids of the serving strips, as mat `k` of a report.
+ * @param into the record to fill and return (a die's evaluation reuses one rather than making one per mat).
  */
 export function matConnections(
   table: BlockTable,
@@ -78,6 +84,7 @@ export function matConnections(
   neighbours: NeighbourTable,
   serving: ServingStripsBuilder,
   k: number,
+  into: MatConnections = emptyConnections(),
 ): MatConnections {
   const kind = kindAt(table, at);
   const axis = kind.block.bitlineAxis;
@@ -126,24 +133,23 @@ export function matConnections(
   // Open bit lines are counted from the contacts before the coverage count below reorders their spans.
   const unpartnered = unpartneredBitlines(table, at, contacts, senseAmpEnds, neighbours);
   serving.set(k, senseAmpIds, senseAmpIdCount, driverIds, driverIdCount);
-  return {
-    unsensedBitlines: uncoveredLineCount(
-      contacts.span,
-      contacts.count,
-      g.wordlineLength,
-      ABUTMENT_TOLERANCE,
-      g.bitlinePitch,
-      g.bitlineCount,
-    ),
-    undrivenWordlines: uncoveredLineCount(
-      driven,
-      drivenCount,
-      g.bitlineLength,
-      ABUTMENT_TOLERANCE,
-      g.wordlinePitch,
-      g.wordlineCount,
-    ),
-    senseAmpEnds,
-    unpartneredBitlines: unpartnered,
-  };
+  into.unsensedBitlines = uncoveredLineCount(
+    contacts.span,
+    contacts.count,
+    g.wordlineLength,
+    ABUTMENT_TOLERANCE,
+    g.bitlinePitch,
+    g.bitlineCount,
+  );
+  into.undrivenWordlines = uncoveredLineCount(
+    driven,
+    drivenCount,
+    g.bitlineLength,
+    ABUTMENT_TOLERANCE,
+    g.wordlinePitch,
+    g.wordlineCount,
+  );
+  into.senseAmpEnds = senseAmpEnds;
+  into.unpartneredBitlines = unpartnered;
+  return into;
 }

@@ -4,7 +4,7 @@ import { ABUTMENT_TOLERANCE } from '../geometry/rect';
 import type { Mat } from '../model/block';
 import type { Design } from '../model/design';
 import { collectFindings } from './checks';
-import { matConnections } from './connectivity';
+import { emptyConnections, matConnections } from './connectivity';
 import { matPhysics, senseAmpsOfMat, type DesignContext } from './matPhysics';
 import { offsetSigmaMultiplier } from './offset';
 import { findOverlaps } from './overlaps';
@@ -49,6 +49,9 @@ export function countSenseAmps(table: BlockTable): number {
   return count;
 }
 
+/** Filled for one mat at a time and read at once, so one record serves every mat. */
+const connections = emptyConnections();
+
 /**
  * The report of mat `at` of the table: its connections from its neighbours, then its physics. Mats with
  * the same kind and sense-amplifier arrangement have the same physics, so with a `figuresByKind` map a
@@ -65,7 +68,7 @@ export function evaluateMatAt(
   k: number,
   figuresByKind?: Map<number | string, MatFigures>,
 ): MatReport {
-  const c = matConnections(table, at, neighbours, serving, k);
+  const c = matConnections(table, at, neighbours, serving, k, connections);
   const kindIndex = table.kindOf[at] as number;
   const lost = c.unpartneredBitlines;
   // A number for the common case (no lost bit lines), a string otherwise: either way one map lookup.
