@@ -41,6 +41,7 @@ export type {
   Finding,
   FindingKind,
   GainCellRead,
+  MatFigures,
   MatReport,
   RefreshFigures,
   Report,
@@ -48,3 +49,4 @@ export type {
   Totals,
 } from './report';
 export { preparePreview, previewReport, type PreviewBase } from './preview';
+export { senseAmpStripIdsOf, wordlineDriverIdsOf, type ServingStrips } from './servingStrips';
