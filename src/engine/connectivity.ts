@@ -7,7 +7,7 @@ import {
   type BlockTable,
 } from '../geometry/blockTable';
 import { uncoveredLineCount } from '../geometry/interval';
-import type { NeighbourTable } from '../geometry/neighbourGrid';
+import type { NeighbourTable } from '../geometry/neighbourRows';
 import { ABUTMENT_TOLERANCE } from '../geometry/rect';
 import { bitlineEndSides, wordlineEndSides } from '../geometry/stripFit';
 import { unpartneredBitlines } from './openBitline';

@@ -1,5 +1,6 @@
 import { blockTable, kindAt, MAT_CODE, type BlockTable, type MatKind } from '../geometry/blockTable';
-import { neighbourTable, type NeighbourTable } from '../geometry/neighbourGrid';
+import { neighbourTable } from '../geometry/neighbourGrid';
+import type { NeighbourTable } from '../geometry/neighbourRows';
 import { ABUTMENT_TOLERANCE } from '../geometry/rect';
 import type { Mat } from '../model/block';
 import type { Design } from '../model/design';

@@ -1,5 +1,5 @@
 import type { BlockTable, Boxes } from '../geometry/blockTable';
-import type { NeighbourTable } from '../geometry/neighbourGrid';
+import type { NeighbourTable } from '../geometry/neighbourRows';
 import { ABUTMENT_TOLERANCE } from '../geometry/rect';
 
 /** A pair of blocks that share area (not just an edge). */

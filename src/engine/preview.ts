@@ -1,5 +1,6 @@
 import { blockTable, MAT_CODE, rectAt, withBlocksReplaced, type BlockTable } from '../geometry/blockTable';
-import { neighbourTable, neighbourTableOf, type NeighbourTable } from '../geometry/neighbourGrid';
+import { neighbourTable } from '../geometry/neighbourGrid';
+import { neighbourTableOf, type NeighbourTable } from '../geometry/neighbourRows';
 import { placedDesign } from '../geometry/placedIndex';
 import { ABUTMENT_TOLERANCE, bottom, right, type Rect } from '../geometry/rect';
 import type { SpatialIndex } from '../geometry/spatialIndex';

@@ -1,43 +1,6 @@
 import type { Boxes } from './blockTable';
-
-/**
- * Neighbours of every block in compressed rows: block i's neighbours are `list[start[i]]` up to
- * `list[end[i] − 1]`, in ascending order, never i itself. Rows may sit anywhere in `list`.
- */
-export interface NeighbourTable {
-  readonly start: Int32Array;
-  readonly end: Int32Array;
-  readonly list: Int32Array;
-}
-
-/** Block i's neighbours as a plain array (for tests and small callers; hot loops read the table). */
-export function neighboursOf(table: NeighbourTable, i: number): number[] {
-  return Array.from(table.list.subarray(table.start[i] ?? 0, table.end[i] ?? 0));
-}
-
-/**
- * A table with only some rows filled, the rest empty: for callers that need the neighbours of a few
- * blocks (a live preview finds them by R-tree queries). Rows are sorted here.
- */
-export function neighbourTableOf(
-  count: number,
-  rows: ReadonlyMap<number, readonly number[]>,
-): NeighbourTable {
-  const start = new Int32Array(count);
-  const end = new Int32Array(count);
-  let total = 0;
-  for (const row of rows.values()) total += row.length;
-  const list = new Int32Array(total);
-  let at = 0;
-  for (const [i, row] of rows) {
-    if (i < 0 || i >= count) continue;
-    start[i] = at;
-    for (const j of row) list[at++] = j;
-    end[i] = at;
-    sortRange(list, start[i] as number, at);
-  }
-  return { start, end, list };
-}
+import { PairBuffer, runningTotals, type NeighbourTable } from './neighbourRows';
+import { ScratchBuffer } from './scratchBuffer';
 
 /**
  * Every block's neighbours in one pass: for each rectangle, the indices of the others whose boxes meet
@@ -45,7 +8,7 @@ export function neighbourTableOf(
  * The relation is symmetric: a pair counts when either box, grown, meets the other.
  *
  * Method: a uniform-grid broad phase ("spatial hashing"; Ericson, *Real-Time Collision Detection*, Morgan
- * Kaufmann 2005, §7.1). Boxes are binned into square cells about the size of a typical block, and only
+ * Kaufmann 2005, §7.1, section number from memory). Boxes are binned into square cells about the size of a typical block, and only
  * boxes sharing a cell are compared. A pair sharing several cells is reported once, by the cell that holds
  * the lower corner of the two boxes' intersection. For floorplans of similar-sized blocks this is O(n +
  * pairs), with no tree and no per-query arrays, which is what a whole-die evaluation needs; arbitrary
@@ -182,18 +145,6 @@ function countPerCell(n: number, columns: number, cells: Binned): void {
   }
 }
 
-/** Turns counts[0 … length − 1] into running totals, sets counts[length] to the sum and returns it. */
-function runningTotals(counts: Int32Array, length: number): number {
-  addUp(counts, length);
-  const sum = length > 0 ? (counts[length - 1] as number) : 0;
-  counts[length] = sum;
-  return sum;
-}
-
-function addUp(counts: Int32Array, length: number): void {
-  for (let k = 1; k < length; k++) counts[k] = (counts[k] as number) + (counts[k - 1] as number);
-}
-
 /**
  * Puts every box in the lists of its cells. Filling backwards moves `start[cell]` from where the list
  * ends to where it begins, and boxes taken in descending order leave each list ascending.
@@ -246,110 +197,15 @@ function gridPairs(boxes: Boxes, margin: number, grid: Grid, cells: Binned, pair
   }
 }
 
-/**
- * A typed buffer kept between calls for a temporary that never leaves this module, grown when a call
- * needs more: evaluating a large die repeatedly then allocates (and zero-fills) tens of megabytes less
- * per call. Its contents are stale; callers initialise what they read.
- */
-class Scratch {
-  private buffer = new Int32Array(0);
-
-  take(length: number): Int32Array {
-    if (this.buffer.length < length)
-      this.buffer = new Int32Array(Math.max(length, Math.ceil(1.5 * this.buffer.length)));
-    return this.buffer;
-  }
-
-  /** Grows to at least `length`, keeping the first `keep` entries. */
-  grow(length: number, keep: number): Int32Array {
-    if (this.buffer.length >= length) return this.buffer;
-    const old = this.buffer;
-    this.take(length).set(old.subarray(0, keep));
-    return this.buffer;
-  }
-}
-
+/** Reused between calls (see ScratchBuffer); none of these leave this module. */
 const SCRATCH = {
-  firstColumn: new Scratch(),
-  lastColumn: new Scratch(),
-  firstRow: new Scratch(),
-  lastRow: new Scratch(),
-  cellStart: new Scratch(),
-  members: new Scratch(),
-  pairFirst: new Scratch(),
-  pairSecond: new Scratch(),
-  next: new Scratch(),
+  firstColumn: new ScratchBuffer(),
+  lastColumn: new ScratchBuffer(),
+  firstRow: new ScratchBuffer(),
+  lastRow: new ScratchBuffer(),
+  cellStart: new ScratchBuffer(),
+  members: new ScratchBuffer(),
 };
-
-/** Pairs (i < j) collected in scratch buffers, then turned into rows of both directions. */
-class PairBuffer {
-  private first = SCRATCH.pairFirst.take(1024);
-  private second = SCRATCH.pairSecond.take(1024);
-  private count = 0;
-
-  add(i: number, j: number): void {
-    if (this.count === this.first.length) {
-      this.first = SCRATCH.pairFirst.grow(2 * this.count, this.count);
-      this.second = SCRATCH.pairSecond.grow(2 * this.count, this.count);
-    }
-    this.first[this.count] = i;
-    this.second[this.count] = j;
-    this.count++;
-  }
-
-  table(n: number): NeighbourTable {
-    return rowsOfPairs(this.first, this.second, this.count, n);
-  }
-}
-
-/** Rows of both directions from a list of pairs (i < j), each row ascending. */
-function rowsOfPairs(first: Int32Array, second: Int32Array, count: number, n: number): NeighbourTable {
-  // Degrees go to ends[i], whose running totals are where each row ends; filling backwards moves them to
-  // where the rows begin.
-  const ends = new Int32Array(n + 1);
-  countEnds(first, second, count, ends);
-  const total = runningTotals(ends, n);
-  const list = new Int32Array(total);
-  const starts = SCRATCH.next.take(n);
-  starts.set(ends.subarray(0, n));
-  scatterPairs(first, second, count, starts, list);
-  sortRows(list, starts, ends, n);
-  return { start: starts.slice(0, n), end: ends, list };
-}
-
-/** Degree of every box, counted into `ends[i]`. */
-function countEnds(first: Int32Array, second: Int32Array, count: number, ends: Int32Array): void {
-  for (let k = 0; k < count; k++) {
-    const a = first[k] as number;
-    const b = second[k] as number;
-    ends[a] = (ends[a] as number) + 1;
-    ends[b] = (ends[b] as number) + 1;
-  }
-}
-
-/** Each pair into both rows, filled backwards from where each row ends. */
-function scatterPairs(
-  first: Int32Array,
-  second: Int32Array,
-  count: number,
-  starts: Int32Array,
-  list: Int32Array,
-): void {
-  for (let k = count - 1; k >= 0; k--) {
-    const i = first[k] as number;
-    const j = second[k] as number;
-    const at = (starts[i] as number) - 1;
-    list[at] = j;
-    starts[i] = at;
-    const bt = (starts[j] as number) - 1;
-    list[bt] = i;
-    starts[j] = bt;
-  }
-}
-
-function sortRows(list: Int32Array, starts: Int32Array, ends: Int32Array, n: number): void {
-  for (let i = 0; i < n; i++) sortRange(list, starts[i] as number, ends[i] as number);
-}
 
 /** At most this many grid cells per box, so memory stays O(n) however the boxes are spread. */
 const CELLS_PER_BOX = 4;
@@ -387,19 +243,6 @@ function gridShape(boxes: Boxes, extent: Extent): Grid {
     }
   }
   return { ...extent, columns, rows, cellSize };
-}
-
-/** Insertion sort of list[from..to): rows hold a handful of entries. */
-function sortRange(list: Int32Array, from: number, to: number): void {
-  for (let k = from + 1; k < to; k++) {
-    const v = list[k] as number;
-    let m = k - 1;
-    while (m >= from && (list[m] as number) > v) {
-      list[m + 1] = list[m] as number;
-      m--;
-    }
-    list[m + 1] = v;
-  }
 }
 
 /** Whether the box of `i` grown by `margin` meets the box of `j` (closed), as an R-tree query computes it. */

@@ -1,7 +1,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { boxesOf } from '../../src/geometry/blockTable';
-import { neighbourTable, neighbourTableOf, neighboursOf } from '../../src/geometry/neighbourGrid';
+import { neighbourTable } from '../../src/geometry/neighbourGrid';
+import { neighbourTableOf, neighboursOf } from '../../src/geometry/neighbourRows';
 import { ABUTMENT_TOLERANCE, type Rect } from '../../src/geometry/rect';
 import { buildSpatialIndex } from '../../src/geometry/spatialIndex';
 
