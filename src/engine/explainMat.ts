@@ -54,28 +54,24 @@ export function explainMatFigure(
   report: Report,
 ): Explanation | undefined {
   if (!matFigureApplies(key, mat)) return undefined;
+  const f = mat.figures;
   const p = design.process;
   const o = design.operating;
-  const read = mat.figures.read;
-  const cbl = mat.figures.bitlineCapacitance;
-  const required = input('V_req', 'offset and noise stacked', mat.figures.requiredSignal, 'voltage');
+  const read = f.read;
+  const cbl = f.bitlineCapacitance;
+  const required = input('V_req', 'offset and noise stacked', f.requiredSignal, 'voltage');
   switch (key) {
     case 'bitlineCapacitance':
       return {
-        title: mat.figures.read.kind === 'gainRead' ? 'Read-bit-line capacitance' : 'Bit-line capacitance',
+        title: f.read.kind === 'gainRead' ? 'Read-bit-line capacitance' : 'Bit-line capacitance',
         symbol: 'Cbl',
         formula: 'Cbl = N·(Cj + Cbw + Cbb) + c_wire·L_bl + C_sa',
         inputs: [
-          input('N', 'cells per bit line', mat.figures.cellsPerBitline, 'count'),
+          input('N', 'cells per bit line', f.cellsPerBitline, 'count'),
           input('N·Cj', 'junction/contact', cbl.junction, 'capacitance'),
           input('N·Cbw', 'coupling to word lines', cbl.wordlineCoupling, 'capacitance'),
           input('N·Cbb', 'coupling to bit lines', cbl.bitlineCoupling, 'capacitance'),
-          input(
-            'c·L',
-            `wire (L_bl = ${(mat.figures.bitlineLength * 1e6).toPrecision(4)} µm)`,
-            cbl.wire,
-            'capacitance',
-          ),
+          input('c·L', `wire (L_bl = ${(f.bitlineLength * 1e6).toPrecision(4)} µm)`, cbl.wire, 'capacitance'),
           input('C_sa', 'sense-amplifier input', cbl.senseAmp, 'capacitance'),
         ],
         value: cbl.total,
@@ -100,11 +96,11 @@ export function explainMatFigure(
           input('A_VT', 'matching coefficient', p.senseAmpMatchingCoefficient, 'matchingCoefficient'),
           input('W', 'transistor width', p.senseAmpTransistorWidth, 'length'),
           input('L', 'transistor length', p.senseAmpTransistorLength, 'length'),
-          input('σ', 'offset standard deviation', mat.figures.offsetSigma, 'voltage'),
+          input('σ', 'offset standard deviation', f.offsetSigma, 'voltage'),
           input('k', 'σ multiplier', report.totals.offsetSigmaMultiplier, 'ratio'),
           input('n_sa', 'sense amplifiers in the design', report.totals.senseAmpCount, 'count'),
         ],
-        value: mat.figures.offsetBudget,
+        value: f.offsetBudget,
         quantity: 'voltage',
         method: `Pelgrom mismatch; k so that on average ${o.allowedSenseFailures} amplifier(s) fail (one-sided normal tail).`,
         source: `${SOURCES.pelgrom}; ${SOURCES.acklam}`,
@@ -117,8 +113,8 @@ export function explainMatFigure(
         inputs: [
           input(
             'κ',
-            `unrejected share (${mat.figures.architecture === 'folded' && mat.figures.read.kind === 'chargeSharing' ? 'folded' : 'open'})`,
-            mat.figures.architecture === 'folded' && mat.figures.read.kind === 'chargeSharing'
+            `unrejected share (${f.architecture === 'folded' && f.read.kind === 'chargeSharing' ? 'folded' : 'open'})`,
+            f.architecture === 'folded' && f.read.kind === 'chargeSharing'
               ? p.foldedNoiseFactor
               : p.openNoiseFactor,
             'ratio',
@@ -127,7 +123,7 @@ export function explainMatFigure(
           input('Cbl', 'bit-line capacitance', cbl.total, 'capacitance'),
           input('VDD', 'array voltage', p.arrayVoltage, 'voltage'),
         ],
-        value: mat.figures.noiseAllowance,
+        value: f.noiseAllowance,
         quantity: 'voltage',
         method:
           'Neighbours swing by VDD/2 and couple through Cbb; folded pairs reject more as common mode than open ones.',
@@ -138,8 +134,8 @@ export function explainMatFigure(
         title: 'Net sense margin (fresh)',
         symbol: 'M',
         formula: `M = ΔV − V_req,  V_req = ${p.offsetStacking === 'linear' ? 'k·σ + V_noise' : '√((k·σ)² + V_noise²)'}`,
-        inputs: [input('ΔV', 'sense signal', mat.figures.senseSignal, 'voltage'), required],
-        value: mat.figures.senseMargin,
+        inputs: [input('ΔV', 'sense signal', f.senseSignal, 'voltage'), required],
+        value: f.senseMargin,
         quantity: 'voltage',
         method: `Offset and noise stacked ${p.offsetStacking === 'linear' ? 'linearly (worst case)' : 'as a root sum of squares'}.`,
         source: 'H. Geib et al., IEEE JSSC, July 1992 (offset plus asymmetry stacking); common practice',
@@ -150,13 +146,13 @@ export function explainMatFigure(
         symbol: 'M_ref',
         formula: 'M_ref = ΔV(after droop I·tREFW/Cs) − V_req',
         inputs: [
-          input('I', 'cell leakage at temperature', mat.figures.leakage, 'current'),
+          input('I', 'cell leakage at temperature', f.leakage, 'current'),
           input('tREFW', 'refresh window', o.refreshWindow, 'time'),
-          input('Cs', 'storage capacitance', mat.figures.storageCapacitance, 'capacitance'),
-          input('ΔV′', 'signal after the window', mat.figures.senseSignalAfterRefresh, 'voltage'),
+          input('Cs', 'storage capacitance', f.storageCapacitance, 'capacitance'),
+          input('ΔV′', 'signal after the window', f.senseSignalAfterRefresh, 'voltage'),
           required,
         ],
-        value: mat.figures.senseMarginAtRefresh,
+        value: f.senseMarginAtRefresh,
         quantity: 'voltage',
         method: 'A stored 1 leaks for a whole refresh window at constant current before it is read.',
         source: SOURCES.common,
@@ -167,14 +163,14 @@ export function explainMatFigure(
         symbol: 't_ret',
         formula: 't_ret = Cs · ΔV_allowed / I(T),  I(T) = I_ref·exp(−Ea/k·(1/T − 1/T_ref))',
         inputs: [
-          input('Cs', 'storage capacitance', mat.figures.storageCapacitance, 'capacitance'),
-          input('ΔV_allowed', 'droop until margin is zero', mat.figures.allowedDroop, 'voltage'),
+          input('Cs', 'storage capacitance', f.storageCapacitance, 'capacitance'),
+          input('ΔV_allowed', 'droop until margin is zero', f.allowedDroop, 'voltage'),
           input('I_ref', 'leakage at reference', p.cellLeakageCurrent, 'current'),
           input('T_ref', 'reference temperature', p.leakageReferenceTemperature, 'temperature'),
           input('T', 'operating temperature', o.temperature, 'temperature'),
-          input('I(T)', 'leakage at temperature', mat.figures.leakage, 'current'),
+          input('I(T)', 'leakage at temperature', f.leakage, 'current'),
         ],
-        value: mat.figures.retentionTime,
+        value: f.retentionTime,
         quantity: 'time',
         method: 'Constant-current leakage scaled with temperature by Arrhenius.',
         source: SOURCES.arrhenius,
@@ -186,10 +182,10 @@ export function explainMatFigure(
         formula: 't_wl = 0.69·R_drv·C_wl + 0.38·R_wl·C_wl',
         inputs: [
           input('R_drv', 'driver resistance', p.wordlineDriverResistance, 'resistance'),
-          input('R_wl', 'sub-word-line resistance', mat.figures.wordlineResistance, 'resistance'),
-          input('C_wl', 'sub-word-line capacitance', mat.figures.wordlineCapacitance, 'capacitance'),
+          input('R_wl', 'sub-word-line resistance', f.wordlineResistance, 'resistance'),
+          input('C_wl', 'sub-word-line capacitance', f.wordlineCapacitance, 'capacitance'),
         ],
-        value: mat.figures.wordlineDelay,
+        value: f.wordlineDelay,
         quantity: 'time',
         method: 'Driver as lumped RC plus the line as distributed RC; 50 % point convention.',
         source: SOURCES.rabaey,
@@ -202,10 +198,10 @@ export function explainMatFigure(
             formula: 't_bl = 0.69·R_acc·(Cs·Cbl/(Cs+Cbl)) + 0.38·R_bl·Cbl',
             inputs: [
               input('R_acc', 'access transistor', p.accessTransistorResistance, 'resistance'),
-              input('R_bl', 'bit-line resistance', mat.figures.bitlineResistance, 'resistance'),
+              input('R_bl', 'bit-line resistance', f.bitlineResistance, 'resistance'),
               input('Cbl', 'bit-line capacitance', cbl.total, 'capacitance'),
             ],
-            value: mat.figures.bitlineDelay,
+            value: f.bitlineDelay,
             quantity: 'time',
             method:
               'Cell discharge through the access device plus distributed bit-line RC; 50 % point convention.',
@@ -216,7 +212,7 @@ export function explainMatFigure(
             symbol: 't_sense',
             formula: 't_sense (process input)',
             inputs: [],
-            value: mat.figures.bitlineDelay,
+            value: f.bitlineDelay,
             quantity: 'time',
             method: 'The read bit line develops for a fixed time before sensing.',
             source: SOURCES.gainCells,
@@ -230,14 +226,14 @@ export function explainMatFigure(
           input(
             'E_bl',
             read.kind === 'chargeSharing' ? 'bit lines: M·Cbl·VDD²/2' : 'read bit lines: M·C·VDD·ΔV1',
-            mat.figures.activationEnergy.bitlines,
+            f.activationEnergy.bitlines,
             'energy',
           ),
-          input('E_wl', 'word line', mat.figures.activationEnergy.wordline, 'energy'),
-          input('E_sa', 'sense-amplifier latches', mat.figures.activationEnergy.senseAmps, 'energy'),
-          input('M', 'cells per word line', mat.figures.cellsPerWordline, 'count'),
+          input('E_wl', 'word line', f.activationEnergy.wordline, 'energy'),
+          input('E_sa', 'sense-amplifier latches', f.activationEnergy.senseAmps, 'energy'),
+          input('M', 'cells per word line', f.cellsPerWordline, 'count'),
         ],
-        value: mat.figures.activationEnergy.total,
+        value: f.activationEnergy.total,
         quantity: 'energy',
         method: 'One word line of the mat activated; half-VDD precharge with equalisation.',
         source: `${SOURCES.common}; C·V² charging energy, ${SOURCES.rabaey}`,
@@ -248,10 +244,10 @@ export function explainMatFigure(
         symbol: 'E_bit',
         formula: 'E_bit = E_act / M',
         inputs: [
-          input('E_act', 'energy per activation', mat.figures.activationEnergy.total, 'energy'),
-          input('M', 'cells per word line', mat.figures.cellsPerWordline, 'count'),
+          input('E_act', 'energy per activation', f.activationEnergy.total, 'energy'),
+          input('M', 'cells per word line', f.cellsPerWordline, 'count'),
         ],
-        value: mat.figures.activationEnergy.perBit,
+        value: f.activationEnergy.perBit,
         quantity: 'energy',
         method: 'Activation energy spread over the cells the word line opens.',
         source: SOURCES.common,
@@ -262,11 +258,9 @@ export function explainMatFigure(
         symbol: 'w_sa',
         formula: 'w_sa = BL pitch × (folded pair ? 2 : 1) × (strips at both ends ? 2 : 1)',
         inputs: [input('W_needed', 'width one amplifier needs', p.senseAmpWidth, 'length')],
-        value: mat.figures.senseAmpPitchBudget,
+        value: f.senseAmpPitchBudget,
         quantity: 'length',
-        method: mat.figures.senseAmpFits
-          ? 'The amplifier fits its pitch.'
-          : 'The amplifier does NOT fit its pitch.',
+        method: f.senseAmpFits ? 'The amplifier fits its pitch.' : 'The amplifier does NOT fit its pitch.',
         source: SOURCES.keethBaker,
       };
     case 'bits':
@@ -275,12 +269,12 @@ export function explainMatFigure(
         symbol: 'bits',
         formula: 'bits = N · BL, BL = M / occupancy; usable = bits − lost open-edge bits',
         inputs: [
-          input('N', 'cells per bit line', mat.figures.cellsPerBitline, 'count'),
-          input('M', 'cells per word line', mat.figures.cellsPerWordline, 'count'),
-          input('BL', 'bit lines', mat.figures.bitlineCount, 'count'),
-          input('lost', 'bits without an open-bit-line partner', mat.figures.lostBits, 'count'),
+          input('N', 'cells per bit line', f.cellsPerBitline, 'count'),
+          input('M', 'cells per word line', f.cellsPerWordline, 'count'),
+          input('BL', 'bit lines', f.bitlineCount, 'count'),
+          input('lost', 'bits without an open-bit-line partner', f.lostBits, 'count'),
         ],
-        value: mat.figures.bits,
+        value: f.bits,
         quantity: 'count',
         method:
           'Folded bit lines hold a cell at every other word-line crossing (occupancy ½); open at every one.',
@@ -292,10 +286,10 @@ export function explainMatFigure(
         symbol: 'A_mat',
         formula: 'A_mat = L_wl · L_bl',
         inputs: [
-          input('L_wl', 'word-line length', mat.figures.wordlineLength, 'length'),
-          input('L_bl', 'bit-line length', mat.figures.bitlineLength, 'length'),
+          input('L_wl', 'word-line length', f.wordlineLength, 'length'),
+          input('L_bl', 'bit-line length', f.bitlineLength, 'length'),
         ],
-        value: mat.figures.area,
+        value: f.area,
         quantity: 'area',
         method: 'Mat outline: bit lines × bit-line pitch by word lines × word-line pitch.',
         source: SOURCES.common,

@@ -13,9 +13,10 @@ export function explainReadFigure(
   design: Design,
   report: Report,
 ): Explanation | undefined {
+  const f = mat.figures;
   const p = design.process;
-  const read = mat.figures.read;
-  const cbl = mat.figures.bitlineCapacitance;
+  const read = f.read;
+  const cbl = f.bitlineCapacitance;
   const v1 = input('V1', 'stored-1 level', report.storedHigh.level, 'voltage');
   switch (key) {
     case 'chargeTransferRatio':
@@ -25,7 +26,7 @@ export function explainReadFigure(
         symbol: 'CTR',
         formula: 'CTR = Cs / (Cs + Cbl)',
         inputs: [
-          input('Cs', 'storage capacitance', mat.figures.storageCapacitance, 'capacitance'),
+          input('Cs', 'storage capacitance', f.storageCapacitance, 'capacitance'),
           input('Cbl', 'bit-line capacitance', cbl.total, 'capacitance'),
         ],
         value: read.chargeTransferRatio,
@@ -100,7 +101,7 @@ export function explainReadFigure(
         symbol: 'ΔV0',
         formula: 'ΔV0 = min(VDD, (I_off + (N − 1)·I_unsel) · t_sense / C_RBL)',
         inputs: [
-          input('N', 'cells per bit line', mat.figures.cellsPerBitline, 'count'),
+          input('N', 'cells per bit line', f.cellsPerBitline, 'count'),
           input('t_sense', 'sense time', p.gainCellSenseTime, 'time'),
           input('C_RBL', 'read-bit-line capacitance', cbl.total, 'capacitance'),
         ],
@@ -119,7 +120,7 @@ export function explainReadFigure(
               input('ΔV1', 'signal for a stored 1', read.signalHigh, 'voltage'),
               input('ΔV0', 'signal for a stored 0', read.signalLow, 'voltage'),
             ],
-            value: mat.figures.senseSignal,
+            value: f.senseSignal,
             quantity: 'voltage',
             method: 'The sense amplifier must resolve the weaker of the two data states.',
             source: SOURCES.keethBaker,
@@ -132,7 +133,7 @@ export function explainReadFigure(
               input('ΔV1', 'drop for a stored 1', read.dropHigh, 'voltage'),
               input('ΔV0', 'drop for a stored 0', read.dropLow, 'voltage'),
             ],
-            value: mat.figures.senseSignal,
+            value: f.senseSignal,
             quantity: 'voltage',
             method: 'Single-ended read against a reference set midway between the two drops.',
             source: SOURCES.gainCells,
