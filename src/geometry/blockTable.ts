@@ -65,11 +65,17 @@ export interface BlockTable extends Boxes {
   readonly kindIndex: ReadonlyMap<string, number>;
 }
 
+/** A table while its rows are written: its list of kinds and their index still grow. */
+interface TableInProgress extends BlockTable {
+  readonly kinds: MatKind[];
+  readonly kindIndex: Map<string, number>;
+}
+
 /** Lays out every block of a design: strips are their own rectangles, mats take their size from their kind. */
 export function blockTable(design: Design): BlockTable {
   const cells = new Map(design.cells.map((c) => [c.id, c]));
-  const table = emptyTable(design.blocks, design.process.featureSize, cells, [], new Map());
-  writeRows(table, 0, design.blocks);
+  const table = emptyTable(design.blocks, design.process.featureSize, cells);
+  writeRows(table, design.blocks);
   return table;
 }
 
@@ -80,7 +86,7 @@ export function blockTable(design: Design): BlockTable {
 export function withBlocksReplaced(base: BlockTable, replacements: ReadonlyMap<number, Block>): BlockTable {
   const blocks = base.blocks.slice();
   for (const [i, block] of replacements) blocks[i] = block;
-  const table: BlockTable = {
+  const table: TableInProgress = {
     ...base,
     blocks,
     x: base.x.slice(),
@@ -117,9 +123,7 @@ function emptyTable(
   blocks: readonly Block[],
   featureSize: number,
   cells: ReadonlyMap<string, CellDefinition>,
-  kinds: MatKind[],
-  kindIndex: Map<string, number>,
-): BlockTable {
+): TableInProgress {
   const n = blocks.length;
   return {
     count: n,
@@ -130,20 +134,20 @@ function emptyTable(
     height: new Float64Array(n),
     type: new Uint8Array(n),
     kindOf: new Int32Array(n),
-    kinds,
+    kinds: [],
     featureSize,
     cells,
-    kindIndex,
+    kindIndex: new Map(),
   };
 }
 
-function writeRows(table: BlockTable, from: number, blocks: readonly Block[]): void {
+function writeRows(table: TableInProgress, blocks: readonly Block[]): void {
   // Consecutive mats are nearly always of one kind in a tiled array, so the last kind is tried first
   // before building a key.
   let last: Mat | null = null;
   let lastKind = -1;
-  for (let k = 0; k < blocks.length; k++) {
-    const block = blocks[k] as Block;
+  for (let i = 0; i < blocks.length; i++) {
+    const block = blocks[i] as Block;
     if (
       block.type === 'mat' &&
       last !== null &&
@@ -153,7 +157,6 @@ function writeRows(table: BlockTable, from: number, blocks: readonly Block[]): v
       block.bitlineAxis === last.bitlineAxis
     ) {
       const kind = table.kinds[lastKind] as MatKind;
-      const i = from + k;
       table.x[i] = block.x;
       table.y[i] = block.y;
       table.width[i] = kind.geometry.width;
@@ -162,15 +165,15 @@ function writeRows(table: BlockTable, from: number, blocks: readonly Block[]): v
       table.kindOf[i] = lastKind;
       continue;
     }
-    writeRow(table, from + k, block);
+    writeRow(table, i, block);
     if (block.type === 'mat') {
       last = block;
-      lastKind = table.kindOf[from + k] as number;
+      lastKind = table.kindOf[i] as number;
     }
   }
 }
 
-function writeRow(table: BlockTable, i: number, block: Block): void {
+function writeRow(table: TableInProgress, i: number, block: Block): void {
   table.x[i] = block.x;
   table.y[i] = block.y;
   table.type[i] = CODE_OF[block.type];
@@ -186,16 +189,15 @@ function writeRow(table: BlockTable, i: number, block: Block): void {
   table.kindOf[i] = kind;
 }
 
-function matKindOf(table: BlockTable, block: Mat): number {
+function matKindOf(table: TableInProgress, block: Mat): number {
   const key = `${block.cellId}|${block.cellsPerBitline}|${block.cellsPerWordline}|${block.bitlineAxis}`;
   const known = table.kindIndex.get(key);
   if (known !== undefined) return known;
   const cell = table.cells.get(block.cellId);
   if (!cell) throw new Error(`mat "${block.id}" uses unknown cell "${block.cellId}"`);
-  const kinds = table.kinds as MatKind[];
-  kinds.push({ block, cell, geometry: matGeometry(block, cell, table.featureSize) });
-  (table.kindIndex as Map<string, number>).set(key, kinds.length - 1);
-  return kinds.length - 1;
+  table.kinds.push({ block, cell, geometry: matGeometry(block, cell, table.featureSize) });
+  table.kindIndex.set(key, table.kinds.length - 1);
+  return table.kinds.length - 1;
 }
 
 /** Plain rectangles as flat boxes (for callers that have rectangles rather than a design). */
