@@ -46,8 +46,8 @@ export interface SenseAmpContacts {
 const INITIAL_CONTACTS = 16;
 let contacts: SenseAmpContacts = newContacts(INITIAL_CONTACTS);
 let driven = new Float64Array(2 * INITIAL_CONTACTS);
-const senseAmpIds: string[] = [];
-const driverIds: string[] = [];
+let senseAmpStrips: Int32Array = new Int32Array(INITIAL_CONTACTS);
+let driverStrips: Int32Array = new Int32Array(INITIAL_CONTACTS);
 
 function newContacts(capacity: number): SenseAmpContacts {
   return {
@@ -90,10 +90,10 @@ export function matConnections(
   const axis = kind.block.bitlineAxis;
   const bitlineEnds = bitlineEndSides(axis);
   const wordlineEnds = wordlineEndSides(axis);
-  // Ids gather in scratch lists (sense amplifiers first in the report, whatever order they are found in).
-  // The lists keep their length (setting it to 0 would free their storage), so counts say what is in use.
-  let senseAmpIdCount = 0;
-  let driverIdCount = 0;
+  // Serving strips gather in scratch lists (sense amplifiers first in the report, whatever order they
+  // are found in); counts say what is in use.
+  let senseAmpCount = 0;
+  let driverCount = 0;
   contacts.count = 0;
   let drivenCount = 0;
   let top = false;
@@ -113,7 +113,8 @@ export function matConnections(
         contacts.count++;
         if (e === 0) top = true;
         else bottom = true;
-        senseAmpIds[senseAmpIdCount++] = table.blocks[i]?.id ?? '';
+        if (senseAmpCount === senseAmpStrips.length) senseAmpStrips = grown(senseAmpStrips);
+        senseAmpStrips[senseAmpCount++] = i;
       }
     } else if (type === WORDLINE_DRIVER_STRIP_CODE || type === ROW_DECODER_CODE) {
       for (const side of wordlineEnds) {
@@ -124,7 +125,8 @@ export function matConnections(
         }
         if (!abutmentSpan(table, at, i, side, driven, 2 * drivenCount)) continue;
         drivenCount++;
-        driverIds[driverIdCount++] = table.blocks[i]?.id ?? '';
+        if (driverCount === driverStrips.length) driverStrips = grown(driverStrips);
+        driverStrips[driverCount++] = i;
       }
     }
   }
@@ -132,7 +134,7 @@ export function matConnections(
   const senseAmpEnds = (top ? 1 : 0) + (bottom ? 1 : 0);
   // Open bit lines are counted from the contacts before the coverage count below reorders their spans.
   const unpartnered = unpartneredBitlines(table, at, contacts, senseAmpEnds, neighbours);
-  serving.set(k, senseAmpIds, senseAmpIdCount, driverIds, driverIdCount);
+  serving.set(k, senseAmpStrips, senseAmpCount, driverStrips, driverCount);
   into.unsensedBitlines = uncoveredLineCount(
     contacts.span,
     contacts.count,
@@ -152,4 +154,11 @@ export function matConnections(
   into.senseAmpEnds = senseAmpEnds;
   into.unpartneredBitlines = unpartnered;
   return into;
+}
+
+/** A copy of a scratch list with twice the room. */
+function grown(list: Int32Array): Int32Array {
+  const bigger = new Int32Array(2 * list.length);
+  bigger.set(list);
+  return bigger;
 }

@@ -107,7 +107,7 @@ export function evaluate(design: Design): Report {
   let matCount = 0;
   for (let i = 0; i < table.count; i++) if (table.type[i] === MAT_CODE) matCount++;
   const matReports = new Array<MatReport>(matCount);
-  const serving = new ServingStripsBuilder(matCount);
+  const serving = new ServingStripsBuilder(design.blocks, matCount);
   for (let i = 0, k = 0; i < table.count; i++) {
     if (table.type[i] !== MAT_CODE) continue;
     matReports[k] = evaluateMatAt(table, i, neighbours, ctx, serving, k, figuresByKind);

@@ -148,7 +148,7 @@ export function previewReport(base: PreviewBase, changed: readonly Block[]): Rep
   const ctx = designContext(design, senseAmpCount);
   const neighbours = previewNeighbours(current, composite, affected);
   const mats = report.mats.slice();
-  const serving = new ServingStripsBuilder(mats.length);
+  const serving = new ServingStripsBuilder(current.blocks, mats.length);
   const redone = new Set<number>();
   for (const i of affected) {
     const at = base.matOrder.get(current.blocks[i]?.id ?? '');

@@ -1,80 +1,90 @@
+import type { Block } from '../model/block';
+
 /**
- * Which strips serve each mat of a report, stored column-wise: one list of ids for the whole report and
- * three offsets per mat. Mat k (its index in `report.mats`) is sensed by the strips
- * `ids[senseAmpStart[k]]` … `ids[driverStart[k] − 1]` and driven by `ids[driverStart[k]]` …
- * `ids[end[k] − 1]`, each group in the order its neighbours were found (ascending design position).
+ * Which strips serve each mat of a report, stored column-wise: the design positions of all serving strips
+ * in one typed list, and three offsets per mat. Mat k (its index in `report.mats`) is sensed by the blocks
+ * at `positions[offsets[3k]]` … `positions[offsets[3k + 1]] − 1` and driven by those up to
+ * `offsets[3k + 2] − 1`, each group in the order its neighbours were found (ascending design position).
  *
- * Why not two arrays on every mat report: a 65,536-mat die would carry 131,072 small arrays that the
- * garbage collector copies and traces for as long as the report lives; one list costs a single object.
+ * Why not two arrays of ids on every mat report: a 65,536-mat die would carry 131,072 small arrays that
+ * the garbage collector copies and traces for as long as the report lives, and even one list of ids as
+ * long as four per mat is a large object that the heap must map afresh on every evaluation.
  */
 export interface ServingStrips {
-  readonly ids: readonly string[];
-  readonly senseAmpStart: Int32Array;
-  readonly driverStart: Int32Array;
-  readonly end: Int32Array;
+  /** The evaluated design's blocks, in design order. */
+  readonly blocks: readonly Block[];
+  readonly positions: Int32Array;
+  readonly offsets: Int32Array;
+}
+
+function idsBetween(serving: ServingStrips, from: number, to: number): string[] {
+  const ids = new Array<string>(Math.max(0, to - from));
+  for (let p = from; p < to; p++) ids[p - from] = serving.blocks[serving.positions[p] ?? -1]?.id ?? '';
+  return ids;
 }
 
 /** Ids of the sense-amplifier strips abutting mat k's bit-line ends. */
 export function senseAmpStripIdsOf(serving: ServingStrips, k: number): string[] {
-  return serving.ids.slice(serving.senseAmpStart[k] ?? 0, serving.driverStart[k] ?? 0);
+  return idsBetween(serving, serving.offsets[3 * k] ?? 0, serving.offsets[3 * k + 1] ?? 0);
 }
 
 /** Ids of the driver strips or row decoders abutting mat k's word-line ends. */
 export function wordlineDriverIdsOf(serving: ServingStrips, k: number): string[] {
-  return serving.ids.slice(serving.driverStart[k] ?? 0, serving.end[k] ?? 0);
+  return idsBetween(serving, serving.offsets[3 * k + 1] ?? 0, serving.offsets[3 * k + 2] ?? 0);
 }
 
 /** Collects the serving strips of a report's mats, in any order of mats. */
 export class ServingStripsBuilder {
-  private readonly ids: string[];
+  private positions: Int32Array;
   private used = 0;
-  private readonly senseAmpStart: Int32Array;
-  private readonly driverStart: Int32Array;
-  private readonly end: Int32Array;
+  private readonly offsets: Int32Array;
 
-  constructor(matCount: number) {
+  constructor(
+    private readonly blocks: readonly Block[],
+    matCount: number,
+  ) {
     // A tiled mat has two sense-amplifier strips and two drivers; the list grows if a design has more.
-    this.ids = new Array<string>(4 * matCount);
-    this.senseAmpStart = new Int32Array(matCount);
-    this.driverStart = new Int32Array(matCount);
-    this.end = new Int32Array(matCount);
+    this.positions = new Int32Array(Math.max(16, 4 * matCount));
+    this.offsets = new Int32Array(3 * matCount);
   }
 
-  /** Records mat k's strips: the first `senseAmpCount` of `senseAmpIds`, then the first `driverCount` of `driverIds`. */
+  /** Records mat k's strips: the first `senseAmpCount` of `senseAmps`, then the first `driverCount` of `drivers` (design positions). */
   set(
     k: number,
-    senseAmpIds: readonly string[],
+    senseAmps: Int32Array,
     senseAmpCount: number,
-    driverIds: readonly string[],
+    drivers: Int32Array,
     driverCount: number,
   ): void {
-    this.senseAmpStart[k] = this.used;
-    for (let s = 0; s < senseAmpCount; s++) this.append(senseAmpIds[s] as string);
-    this.driverStart[k] = this.used;
-    for (let d = 0; d < driverCount; d++) this.append(driverIds[d] as string);
-    this.end[k] = this.used;
+    this.offsets[3 * k] = this.used;
+    for (let s = 0; s < senseAmpCount; s++) this.append(senseAmps[s] as number);
+    this.offsets[3 * k + 1] = this.used;
+    for (let d = 0; d < driverCount; d++) this.append(drivers[d] as number);
+    this.offsets[3 * k + 2] = this.used;
   }
 
-  /** Records mat k's strips as another report lists them for its mat `from`. */
+  /** Records mat k's strips as another report over the same blocks lists them for its mat `from`. */
   copy(k: number, other: ServingStrips, from: number): void {
-    const a = other.senseAmpStart[from] ?? 0;
-    const b = other.driverStart[from] ?? 0;
-    const c = other.end[from] ?? 0;
-    this.senseAmpStart[k] = this.used;
-    for (let s = a; s < b; s++) this.append(other.ids[s] as string);
-    this.driverStart[k] = this.used;
-    for (let d = b; d < c; d++) this.append(other.ids[d] as string);
-    this.end[k] = this.used;
+    const a = other.offsets[3 * from] ?? 0;
+    const b = other.offsets[3 * from + 1] ?? 0;
+    const c = other.offsets[3 * from + 2] ?? 0;
+    this.offsets[3 * k] = this.used;
+    for (let p = a; p < b; p++) this.append(other.positions[p] as number);
+    this.offsets[3 * k + 1] = this.used;
+    for (let p = b; p < c; p++) this.append(other.positions[p] as number);
+    this.offsets[3 * k + 2] = this.used;
   }
 
   finish(): ServingStrips {
-    this.ids.length = this.used;
-    return { ids: this.ids, senseAmpStart: this.senseAmpStart, driverStart: this.driverStart, end: this.end };
+    return { blocks: this.blocks, positions: this.positions.subarray(0, this.used), offsets: this.offsets };
   }
 
-  private append(id: string): void {
-    if (this.used < this.ids.length) this.ids[this.used] = id;
-    else this.ids.push(id);
-    this.used++;
+  private append(position: number): void {
+    if (this.used === this.positions.length) {
+      const bigger = new Int32Array(2 * this.positions.length);
+      bigger.set(this.positions);
+      this.positions = bigger;
+    }
+    this.positions[this.used++] = position;
   }
 }
