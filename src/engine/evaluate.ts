@@ -8,7 +8,7 @@ import { collectFindings } from './checks';
 import { emptyConnections, matConnections } from './connectivity';
 import { matPhysics, senseAmpsOfMat, type DesignContext } from './matPhysics';
 import { offsetSigmaMultiplier } from './offset';
-import { findOverlaps } from './overlaps';
+import { findOverlaps, overlapAreaAt } from './overlaps';
 import type { MatFigures, MatReport, Report } from './report';
 import { ServingStripsBuilder } from './servingStrips';
 import { leakageAtTemperature } from './retention';
@@ -90,6 +90,19 @@ export function evaluateMatAt(
 }
 
 /**
+ * The neighbours evaluation reads, found in one grid pass: a mat and a strip that meet (which strips
+ * serve a mat; which mats lie beyond a sense-amplifier strip) and any two blocks that overlap (the overlap
+ * check). Two strips touching at a corner, or mats side by side, serve nothing and are left out.
+ */
+export function evaluationNeighbours(table: BlockTable): NeighbourTable {
+  return neighbourTable(
+    table,
+    ABUTMENT_TOLERANCE,
+    (i, j) => (table.type[i] === MAT_CODE) !== (table.type[j] === MAT_CODE) || overlapAreaAt(table, i, j) > 0,
+  );
+}
+
+/**
  * Evaluates a validated design: lays out its blocks, finds which strips serve which mat edges, and
  * computes every mat's capacitance, read signals, offset and noise budget, margin, retention, delays and
  * energy, then the area and refresh totals and the checks.
@@ -99,8 +112,7 @@ export function evaluateMatAt(
  */
 export function evaluate(design: Design): Report {
   const table = blockTable(design);
-  // Every block's neighbours in one grid pass; they serve both mat connections and the overlap check.
-  const neighbours = neighbourTable(table, ABUTMENT_TOLERANCE);
+  const neighbours = evaluationNeighbours(table);
   const senseAmpCount = countSenseAmps(table);
   const ctx = designContext(design, senseAmpCount);
   const figuresByKind = new Map<number | string, MatFigures>();

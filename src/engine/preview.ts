@@ -1,5 +1,4 @@
 import { blockTable, MAT_CODE, rectAt, withBlocksReplaced, type BlockTable } from '../geometry/blockTable';
-import { neighbourTable } from '../geometry/neighbourGrid';
 import { neighbourTableOf, type NeighbourTable } from '../geometry/neighbourRows';
 import { placedDesign } from '../geometry/placedIndex';
 import { ABUTMENT_TOLERANCE, bottom, right, type Rect } from '../geometry/rect';
@@ -7,7 +6,7 @@ import type { SpatialIndex } from '../geometry/spatialIndex';
 import type { Block } from '../model/block';
 import type { Design } from '../model/design';
 import { collectFindings } from './checks';
-import { countSenseAmps, designContext, evaluate, evaluateMatAt } from './evaluate';
+import { countSenseAmps, designContext, evaluate, evaluateMatAt, evaluationNeighbours } from './evaluate';
 import { findOverlaps, overlapAreaAt, type Overlap } from './overlaps';
 import type { Report } from './report';
 import { ServingStripsBuilder } from './servingStrips';
@@ -62,7 +61,7 @@ export function preparePreview(design: Design, report: Report, changingIds: Iter
     positionOf,
     changingPositions,
     matOrder: new Map(report.mats.map((m, i) => [m.matId, i])),
-    staticOverlaps: findOverlaps(table, neighbourTable(table, ABUTMENT_TOLERANCE))
+    staticOverlaps: findOverlaps(table, evaluationNeighbours(table))
       .filter((o) => !changing.has(o.firstId) && !changing.has(o.secondId))
       .map((overlap) => ({
         overlap,

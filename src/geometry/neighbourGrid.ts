@@ -2,6 +2,10 @@ import type { Boxes } from './blockTable';
 import { PairBuffer, runningTotals, type NeighbourTable } from './neighbourRows';
 import { ScratchBuffer } from './scratchBuffer';
 
+/** Whether a meeting pair of boxes belongs in the table. */
+export type PairFilter = (i: number, j: number) => boolean;
+const KEEP_ALL: PairFilter = () => true;
+
 /**
  * Every block's neighbours in one pass: for each rectangle, the indices of the others whose boxes meet
  * its box grown by `margin` (closed comparison, so blocks exactly `margin` apart still count), ascending.
@@ -14,7 +18,12 @@ import { ScratchBuffer } from './scratchBuffer';
  * pairs), with no tree and no per-query arrays, which is what a whole-die evaluation needs; arbitrary
  * point or box queries (hit-testing, live previews) use the R-tree in spatialIndex.ts instead.
  */
-export function neighbourTable(boxes: Boxes, margin: number): NeighbourTable {
+export function neighbourTable(
+  boxes: Boxes,
+  margin: number,
+  /** Which meeting pairs to keep (default: all); a caller that needs only some saves storing the rest. */
+  keep: PairFilter = KEEP_ALL,
+): NeighbourTable {
   const n = boxes.count;
   const pairs = new PairBuffer();
   if (n < 2) return pairs.table(n);
@@ -22,12 +31,12 @@ export function neighbourTable(boxes: Boxes, margin: number): NeighbourTable {
   // while one long function of several loops kept being deoptimised and ran several times slower.
   const bounds = extent(boxes, margin);
   if (!bounds) {
-    allPairs(boxes, margin, pairs);
+    allPairs(boxes, margin, keep, pairs);
     return pairs.table(n);
   }
   const grid = gridShape(boxes, bounds);
   const cells = binBoxes(boxes, margin, grid);
-  gridPairs(boxes, margin, grid, cells, pairs);
+  gridPairs(boxes, margin, keep, grid, cells, pairs);
   return pairs.table(n);
 }
 
@@ -63,10 +72,10 @@ function extent(boxes: Boxes, margin: number): Extent | null {
 }
 
 /** Every pair compared directly: only for boxes with non-finite extent, which restore never lets through. */
-function allPairs(boxes: Boxes, margin: number, pairs: PairBuffer): void {
+function allPairs(boxes: Boxes, margin: number, keep: PairFilter, pairs: PairBuffer): void {
   for (let i = 0; i < boxes.count; i++) {
     for (let j = i + 1; j < boxes.count; j++) {
-      if (meets(boxes, i, j, margin) || meets(boxes, j, i, margin)) pairs.add(i, j);
+      if ((meets(boxes, i, j, margin) || meets(boxes, j, i, margin)) && keep(i, j)) pairs.add(i, j);
     }
   }
 }
@@ -167,8 +176,18 @@ function fillCells(n: number, columns: number, cells: Binned): void {
   }
 }
 
-/** Compares the boxes that share a cell and keeps each meeting pair once. */
-function gridPairs(boxes: Boxes, margin: number, grid: Grid, cells: Binned, pairs: PairBuffer): void {
+/**
+ * Compares the boxes that share a cell and keeps each meeting pair once: in the cell holding the lower
+ * corner of the grown boxes' intersection, that is where at least one of the two starts in each direction.
+ */
+function gridPairs(
+  boxes: Boxes,
+  margin: number,
+  keep: PairFilter,
+  grid: Grid,
+  cells: Binned,
+  pairs: PairBuffer,
+): void {
   const { firstColumn, firstRow, start, members } = cells;
   const columns = grid.columns;
   const cellCount = columns * grid.rows;
@@ -178,20 +197,26 @@ function gridPairs(boxes: Boxes, margin: number, grid: Grid, cells: Binned, pair
     if (to - from < 2) continue;
     const column = cell % columns;
     const row = (cell - column) / columns;
+    // Per member: bit 1 when it starts in this column, bit 2 when it starts in this row. A pair belongs
+    // to this cell when the two together have both bits.
+    const starts = SCRATCH.startsHere.take(to - from);
+    let both = 0;
     for (let p = from; p < to; p++) {
       const i = members[p] as number;
-      const ci = firstColumn[i] as number;
-      const ri = firstRow[i] as number;
+      const bits = (firstColumn[i] === column ? 1 : 0) | (firstRow[i] === row ? 2 : 0);
+      starts[p - from] = bits;
+      both |= bits;
+    }
+    if (both !== 3) continue;
+    for (let p = from; p < to; p++) {
+      const bits = starts[p - from] as number;
+      const i = members[p] as number;
       for (let q = p + 1; q < to; q++) {
+        if ((bits | (starts[q - from] as number)) !== 3) continue;
         const j = members[q] as number;
-        // Report the pair only in the cell holding the lower corner of the grown boxes' intersection.
-        const cj = firstColumn[j] as number;
-        if ((ci > cj ? ci : cj) !== column) continue;
-        const rj = firstRow[j] as number;
-        if ((ri > rj ? ri : rj) !== row) continue;
         // The box of i grown by the margin against the plain box of j, compared as a box query would be,
         // or the other way round: rounding can make the two differ by an ulp when the gap is the margin.
-        if (meets(boxes, i, j, margin) || meets(boxes, j, i, margin)) pairs.add(i, j);
+        if ((meets(boxes, i, j, margin) || meets(boxes, j, i, margin)) && keep(i, j)) pairs.add(i, j);
       }
     }
   }
@@ -205,6 +230,7 @@ const SCRATCH = {
   lastRow: new ScratchBuffer(),
   cellStart: new ScratchBuffer(),
   members: new ScratchBuffer(),
+  startsHere: new ScratchBuffer(),
 };
 
 /** At most this many grid cells per box, so memory stays O(n) however the boxes are spread. */

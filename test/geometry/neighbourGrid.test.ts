@@ -72,6 +72,18 @@ describe('neighbourTable: every pair of touching boxes in one grid pass', () => 
     );
   });
 
+  it('keeps only the pairs a filter accepts, and every one of those', () => {
+    const keep = (i: number, j: number) => (i + j) % 3 !== 0;
+    fc.assert(
+      fc.property(fc.array(latticeRect, { maxLength: 80 }), (rects) => {
+        const table = neighbourTable(boxesOf(rects), ABUTMENT_TOLERANCE, keep);
+        const expected = byTree(rects, ABUTMENT_TOLERANCE).map((row, i) => row.filter((j) => keep(i, j)));
+        expect(rects.map((_, i) => neighboursOf(table, i))).toEqual(expected);
+      }),
+      { numRuns: 200 },
+    );
+  });
+
   it('reports abutting blocks and not blocks a gap apart', () => {
     const rects: Rect[] = [
       { x: 0, y: 0, width: 10e-6, height: 10e-6 },
