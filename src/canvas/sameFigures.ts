@@ -1,4 +1,4 @@
-import type { Finding, MatReport, Report } from '../engine';
+import { findMatReport, type Finding, type MatReport, type Report } from '../engine';
 
 function sameFinding(a: Finding, b: Finding): boolean {
   return (
@@ -59,12 +59,11 @@ export function sameVisibleFigures(a: Report, b: Report, selectedIds: readonly s
     const g = b.findings[i];
     if (!f || !g || !sameFinding(f, g)) return false;
   }
-  const selected = new Set(selectedIds);
-  for (let i = 0; i < a.mats.length; i++) {
-    const m = a.mats[i];
-    const n = b.mats[i];
-    if (!m || !n || !selected.has(m.matId)) continue;
-    if (!sameMatFigures(m, n)) return false;
+  for (const id of selectedIds) {
+    const m = findMatReport(a, id);
+    const n = findMatReport(b, id);
+    if (!m && !n) continue;
+    if (!m || !n || !sameMatFigures(m, n)) return false;
   }
   return true;
 }

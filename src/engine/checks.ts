@@ -1,7 +1,8 @@
 import type { Design } from '../model/design';
 import { formatQuantity } from '../model/units';
 import type { Overlap } from './overlaps';
-import type { Finding, FindingKind, MatFigures, MatReport, Severity } from './report';
+import { figuresAt, matIdAt, matLabelAt, type MatTable } from './matTable';
+import type { Finding, FindingKind, MatFigures, Severity } from './report';
 import type { StoredHighLevel } from './storedLevel';
 
 /** A finding about one mat before grouping: what is wrong, without the mat's name. */
@@ -54,25 +55,21 @@ function physicsIssues(figures: MatFigures, design: Design): MatIssue[] {
   return issues;
 }
 
-const NO_ISSUES: readonly MatIssue[] = [];
-
 /** Issues of a mat's connections, which differ from mat to mat. */
-function connectionIssues(mat: MatReport): readonly MatIssue[] {
-  // Most mats are fully served; they share one empty list instead of making one each.
-  if (mat.unsensedBitlines === 0 && mat.undrivenWordlines === 0) return NO_ISSUES;
+function connectionIssues(unsensed: number, undriven: number, figures: MatFigures): MatIssue[] {
   const issues: MatIssue[] = [];
-  if (mat.unsensedBitlines > 0) {
+  if (unsensed > 0) {
     issues.push({
       kind: 'unsensedBitlines',
       severity: 'error',
-      detail: `${mat.unsensedBitlines} of ${mat.figures.bitlineCount} bit lines reach no sense-amplifier strip`,
+      detail: `${unsensed} of ${figures.bitlineCount} bit lines reach no sense-amplifier strip`,
     });
   }
-  if (mat.undrivenWordlines > 0) {
+  if (undriven > 0) {
     issues.push({
       kind: 'undrivenWordlines',
       severity: 'error',
-      detail: `${mat.undrivenWordlines} of ${mat.figures.wordlineCount} word lines reach no driver`,
+      detail: `${undriven} of ${figures.wordlineCount} word lines reach no driver`,
     });
   }
   return issues;
@@ -102,7 +99,7 @@ interface IssueGroup {
  * gives one line, not thousands.
  */
 export function collectFindings(
-  mats: readonly MatReport[],
+  mats: MatTable,
   overlaps: readonly Overlap[],
   storedHigh: StoredHighLevel,
   design: Design,
@@ -111,15 +108,18 @@ export function collectFindings(
   // Mats of one kind share their issue objects, so most lookups go by identity, not by building a key.
   const groupOfIssue = new Map<MatIssue, IssueGroup>();
   const physicsCache = new Map<MatFigures, readonly MatIssue[]>();
-  const issuesOf = (mat: MatReport): readonly MatIssue[] => {
+  const issuesOf = (k: number): readonly MatIssue[] => {
     // Mats of one kind share one figures object (evaluate computes it once per kind), so format it once.
-    let physics = physicsCache.get(mat.figures);
+    const figures = figuresAt(mats, k);
+    let physics = physicsCache.get(figures);
     if (!physics) {
-      physics = physicsIssues(mat.figures, design);
-      physicsCache.set(mat.figures, physics);
+      physics = physicsIssues(figures, design);
+      physicsCache.set(figures, physics);
     }
-    const connection = connectionIssues(mat);
-    return connection.length === 0 ? physics : [...connection, ...physics];
+    const unsensed = mats.unsensedBitlines[k] ?? 0;
+    const undriven = mats.undrivenWordlines[k] ?? 0;
+    if (unsensed === 0 && undriven === 0) return physics;
+    return [...connectionIssues(unsensed, undriven, figures), ...physics];
   };
   const groupOf = (issue: MatIssue): IssueGroup => {
     let group = groupOfIssue.get(issue);
@@ -136,19 +136,19 @@ export function collectFindings(
   };
   // Two passes: count each group's mats, then fill lists of exactly that length (growing a list of tens
   // of thousands of ids by push costs several times more).
-  for (const mat of mats) {
-    for (const issue of issuesOf(mat)) {
+  for (let k = 0; k < mats.count; k++) {
+    for (const issue of issuesOf(k)) {
       const group = groupOf(issue);
       group.count++;
-      if (group.labels.length < NAMED_IN_MESSAGE) group.labels.push(mat.name || mat.matId);
+      if (group.labels.length < NAMED_IN_MESSAGE) group.labels.push(matLabelAt(mats, k));
     }
   }
   for (const group of groups.values()) group.ids = new Array<string>(group.count);
   for (const group of groups.values()) group.count = 0;
-  for (const mat of mats) {
-    for (const issue of issuesOf(mat)) {
+  for (let k = 0; k < mats.count; k++) {
+    for (const issue of issuesOf(k)) {
       const group = groupOf(issue);
-      group.ids[group.count++] = mat.matId;
+      group.ids[group.count++] = matIdAt(mats, k);
     }
   }
   const findings: Finding[] = [];

@@ -11,7 +11,7 @@ import type { NeighbourTable } from '../geometry/neighbourRows';
 import { ABUTMENT_TOLERANCE } from '../geometry/rect';
 import { bitlineEndSides, wordlineEndSides } from '../geometry/stripFit';
 import { unpartneredBitlines } from './openBitline';
-import type { ServingStripsBuilder } from './servingStrips';
+import type { MatTableBuilder } from './matTable';
 
 /** Which strips serve a mat, found from geometry alone. */
 export interface MatConnections {
@@ -82,7 +82,7 @@ export function matConnections(
   table: BlockTable,
   at: number,
   neighbours: NeighbourTable,
-  serving: ServingStripsBuilder,
+  serving: MatTableBuilder,
   k: number,
   into: MatConnections = emptyConnections(),
 ): MatConnections {
@@ -134,7 +134,7 @@ export function matConnections(
   const senseAmpEnds = (top ? 1 : 0) + (bottom ? 1 : 0);
   // Open bit lines are counted from the contacts before the coverage count below reorders their spans.
   const unpartnered = unpartneredBitlines(table, at, contacts, senseAmpEnds, neighbours);
-  serving.set(k, senseAmpStrips, senseAmpCount, driverStrips, driverCount);
+  serving.setServing(k, senseAmpStrips, senseAmpCount, driverStrips, driverCount);
   into.unsensedBitlines = uncoveredLineCount(
     contacts.span,
     contacts.count,

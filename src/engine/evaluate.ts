@@ -2,7 +2,6 @@ import { blockTable, kindAt, MAT_CODE, type BlockTable, type MatKind } from '../
 import { neighbourTable } from '../geometry/neighbourGrid';
 import type { NeighbourTable } from '../geometry/neighbourRows';
 import { ABUTMENT_TOLERANCE } from '../geometry/rect';
-import type { Mat } from '../model/block';
 import type { Design } from '../model/design';
 import { collectFindings } from './checks';
 import { emptyConnections, matConnections } from './connectivity';
@@ -10,7 +9,7 @@ import { matPhysics, senseAmpsOfMat, type DesignContext } from './matPhysics';
 import { offsetSigmaMultiplier } from './offset';
 import { findOverlaps, overlapAreaAt } from './overlaps';
 import type { MatFigures, MatReport, Report } from './report';
-import { ServingStripsBuilder } from './servingStrips';
+import { matAt, matIndexOf, MatTableBuilder } from './matTable';
 import { leakageAtTemperature } from './retention';
 import { storedHighLevel } from './storedLevel';
 import { computeTotals } from './totals';
@@ -54,9 +53,10 @@ export function countSenseAmps(table: BlockTable): number {
 const connections = emptyConnections();
 
 /**
- * The report of mat `at` of the table: its connections from its neighbours, then its physics. Mats with
- * the same kind and sense-amplifier arrangement have the same physics, so with a `figuresByKind` map a
- * regular array computes it once per kind of mat and every mat of that kind shares the object.
+ * Evaluates mat `at` of the table and records it as mat `k` of the report being built: its connections
+ * from its neighbours, then its physics. Mats with the same kind and sense-amplifier arrangement have the
+ * same physics, so with a `figuresByKind` map a regular array computes it once per kind of mat and every
+ * mat of that kind shares the object.
  */
 export function evaluateMatAt(
   table: BlockTable,
@@ -64,12 +64,11 @@ export function evaluateMatAt(
   at: number,
   neighbours: NeighbourTable,
   ctx: DesignContext,
-  /** Where the ids of the mat's serving strips go, as mat `k` of the report. */
-  serving: ServingStripsBuilder,
+  mats: MatTableBuilder,
   k: number,
   figuresByKind?: Map<number | string, MatFigures>,
-): MatReport {
-  const c = matConnections(table, at, neighbours, serving, k, connections);
+): void {
+  const c = matConnections(table, at, neighbours, mats, k, connections);
   const kindIndex = table.kindOf[at] as number;
   const lost = c.unpartneredBitlines;
   // A number for the common case (no lost bit lines), a string otherwise: either way one map lookup.
@@ -79,14 +78,7 @@ export function evaluateMatAt(
     figures = matPhysics(kindAt(table, at), c.senseAmpEnds, lost, ctx);
     figuresByKind?.set(key, figures);
   }
-  const block = table.blocks[at] as Mat;
-  return {
-    matId: block.id,
-    name: block.name,
-    unsensedBitlines: c.unsensedBitlines,
-    undrivenWordlines: c.undrivenWordlines,
-    figures,
-  };
+  mats.set(k, at, figures, c.unsensedBitlines, c.undrivenWordlines);
 }
 
 /**
@@ -118,25 +110,25 @@ export function evaluate(design: Design): Report {
   const figuresByKind = new Map<number | string, MatFigures>();
   let matCount = 0;
   for (let i = 0; i < table.count; i++) if (table.type[i] === MAT_CODE) matCount++;
-  const matReports = new Array<MatReport>(matCount);
-  const serving = new ServingStripsBuilder(design.blocks, matCount);
+  const builder = new MatTableBuilder(design.blocks, matCount);
   for (let i = 0, k = 0; i < table.count; i++) {
     if (table.type[i] !== MAT_CODE) continue;
-    matReports[k] = evaluateMatAt(table, i, neighbours, ctx, serving, k, figuresByKind);
+    evaluateMatAt(table, i, neighbours, ctx, builder, k, figuresByKind);
     k++;
   }
+  const mats = builder.finish();
   const overlaps = findOverlaps(table, neighbours);
-  const totals = computeTotals(table, matReports, design, ctx.sigmaMultiplier, senseAmpCount);
+  const totals = computeTotals(table, mats, design, ctx.sigmaMultiplier, senseAmpCount);
   return {
-    mats: matReports,
-    servingStrips: serving.finish(),
+    mats,
     totals,
     storedHigh: ctx.storedHigh,
-    findings: collectFindings(matReports, overlaps, ctx.storedHigh, design),
+    findings: collectFindings(mats, overlaps, ctx.storedHigh, design),
   };
 }
 
 /** The report of one mat, or undefined when the id names no mat. */
 export function findMatReport(report: Report, matId: string): MatReport | undefined {
-  return report.mats.find((m) => m.matId === matId);
+  const k = matIndexOf(report.mats, matId);
+  return k < 0 ? undefined : matAt(report.mats, k);
 }

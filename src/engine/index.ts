@@ -49,4 +49,13 @@ export type {
   Totals,
 } from './report';
 export { preparePreview, previewReport, type PreviewBase } from './preview';
-export { senseAmpStripIdsOf, wordlineDriverIdsOf, type ServingStrips } from './servingStrips';
+export {
+  allMats,
+  figuresAt,
+  matAt,
+  matIdAt,
+  matIndexOf,
+  senseAmpStripIdsOf,
+  wordlineDriverIdsOf,
+  type MatTable,
+} from './matTable';

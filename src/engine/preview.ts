@@ -9,7 +9,7 @@ import { collectFindings } from './checks';
 import { countSenseAmps, designContext, evaluate, evaluateMatAt, evaluationNeighbours } from './evaluate';
 import { findOverlaps, overlapAreaAt, type Overlap } from './overlaps';
 import type { Report } from './report';
-import { ServingStripsBuilder } from './servingStrips';
+import { MatTableBuilder, type MatTable } from './matTable';
 import { computeTotals } from './totals';
 
 /**
@@ -31,7 +31,8 @@ export interface PreviewBase {
   readonly positionOf: ReadonlyMap<string, number>;
   /** Design positions of the changing blocks. */
   readonly changingPositions: ReadonlySet<number>;
-  readonly matOrder: ReadonlyMap<string, number>;
+  /** For each design position, the index of its mat in the report, or −1. */
+  readonly matIndexAt: Int32Array;
   /** Overlapping pairs among the blocks that do not change, found once per gesture. */
   readonly staticOverlaps: readonly PositionedOverlap[];
 }
@@ -60,7 +61,7 @@ export function preparePreview(design: Design, report: Report, changingIds: Iter
     index,
     positionOf,
     changingPositions,
-    matOrder: new Map(report.mats.map((m, i) => [m.matId, i])),
+    matIndexAt: matIndexByPosition(report.mats, table.count),
     staticOverlaps: findOverlaps(table, evaluationNeighbours(table))
       .filter((o) => !changing.has(o.firstId) && !changing.has(o.secondId))
       .map((overlap) => ({
@@ -69,6 +70,12 @@ export function preparePreview(design: Design, report: Report, changingIds: Iter
         second: positionOf.get(overlap.secondId) ?? 0,
       })),
   };
+}
+
+function matIndexByPosition(mats: MatTable, count: number): Int32Array {
+  const index = new Int32Array(count).fill(-1);
+  for (let k = 0; k < mats.count; k++) index[mats.position[k] as number] = k;
+  return index;
 }
 
 function intersects(a: Rect, b: Rect, margin: number): boolean {
@@ -146,16 +153,17 @@ export function previewReport(base: PreviewBase, changed: readonly Block[]): Rep
   }
   const ctx = designContext(design, senseAmpCount);
   const neighbours = previewNeighbours(current, composite, affected);
-  const mats = report.mats.slice();
-  const serving = new ServingStripsBuilder(current.blocks, mats.length);
+  // Every other mat keeps its row of the report's table; the figures list is extended, never reordered.
+  const builder = new MatTableBuilder(current.blocks, report.mats.count, report.mats.figures);
   const redone = new Set<number>();
   for (const i of affected) {
-    const at = base.matOrder.get(current.blocks[i]?.id ?? '');
-    if (at === undefined) continue;
-    mats[at] = evaluateMatAt(current, i, neighbours, ctx, serving, at);
-    redone.add(at);
+    const k = base.matIndexAt[i] ?? -1;
+    if (k < 0) continue;
+    evaluateMatAt(current, i, neighbours, ctx, builder, k);
+    redone.add(k);
   }
-  for (let k = 0; k < mats.length; k++) if (!redone.has(k)) serving.copy(k, report.servingStrips, k);
+  for (let k = 0; k < report.mats.count; k++) if (!redone.has(k)) builder.copy(k, report.mats);
+  const mats = builder.finish();
 
   // Overlaps: the static pairs found once per gesture, plus those of the changed blocks, in design order.
   const overlaps: PositionedOverlap[] = base.staticOverlaps.slice();
@@ -187,5 +195,5 @@ export function previewReport(base: PreviewBase, changed: readonly Block[]): Rep
     report.storedHigh,
     design,
   );
-  return { mats, servingStrips: serving.finish(), totals, storedHigh: report.storedHigh, findings };
+  return { mats, totals, storedHigh: report.storedHigh, findings };
 }

@@ -1,7 +1,7 @@
 import type { BlockType } from '../model/block';
 import type { BitlineArchitecture, CellKind } from '../model/cell';
 import type { BitlineCapacitance } from './bitline';
-import type { ServingStrips } from './servingStrips';
+import type { MatTable } from './matTable';
 import type { StoredHighLevel } from './storedLevel';
 
 /** 1T1C read: charge sharing between cell and bit line. Voltages in V. */
@@ -104,8 +104,8 @@ export interface MatFigures {
 }
 
 /**
- * One mat of the floorplan: who it is, how well it is served, and its figures. Which strips serve it is
- * in {@link Report.servingStrips}.
+ * One mat of the floorplan: who it is, how well it is served, and its figures. Reports keep their mats
+ * in a {@link MatTable}; this object is made for a mat when one is asked for.
  */
 export interface MatReport {
   readonly matId: string;
@@ -194,9 +194,8 @@ export interface Finding {
 
 /** Everything evaluate() returns for a design. */
 export interface Report {
-  readonly mats: readonly MatReport[];
-  /** The strips serving each mat, indexed like `mats` (see servingStrips.ts). */
-  readonly servingStrips: ServingStrips;
+  /** Every mat, column-wise (see matTable.ts); `matAt(report.mats, k)` gives one as an object. */
+  readonly mats: MatTable;
   readonly totals: Totals;
   readonly storedHigh: StoredHighLevel;
   readonly findings: readonly Finding[];

@@ -8,7 +8,8 @@ import {
   refreshPower,
   rowsPerRefreshCommand,
 } from './refresh';
-import type { MatReport, RefreshFigures, Totals } from './report';
+import { figuresAt, matIdAt, type MatTable } from './matTable';
+import type { RefreshFigures, Totals } from './report';
 
 /** Positions closer than this are the same band edge (m). */
 const BAND_GRID = 1e-9;
@@ -43,7 +44,7 @@ export function refreshRows(table: BlockTable): number {
   return rows;
 }
 
-function refreshFigures(table: BlockTable, reports: readonly MatReport[], design: Design): RefreshFigures {
+function refreshFigures(table: BlockTable, mats: MatTable, design: Design): RefreshFigures {
   const o = design.operating;
   const rows = refreshRows(table);
   const interval = refreshInterval(o.refreshWindow, o.refreshCommandsPerWindow);
@@ -51,7 +52,10 @@ function refreshFigures(table: BlockTable, reports: readonly MatReport[], design
   const cycleTime = refreshCycleTime(rowsPerCommand, o.refreshRowsInParallel, design.process.rowCycleTime);
   // Every word line of every mat is activated once per window.
   let energyOfAllRows = 0;
-  for (const r of reports) energyOfAllRows += r.figures.activationEnergy.total * r.figures.wordlineCount;
+  for (let k = 0; k < mats.count; k++) {
+    const f = figuresAt(mats, k);
+    energyOfAllRows += f.activationEnergy.total * f.wordlineCount;
+  }
   return {
     rows,
     interval,
@@ -76,7 +80,7 @@ interface Extremes {
  * Smallest signal, margin and retention and largest word-line delay over all mats, first mat winning ties,
  * in one pass that reads the fields directly (a callback per figure would box every value it returns).
  */
-function extremes(reports: readonly MatReport[]): Extremes {
+function extremes(mats: MatTable): Extremes {
   const e: Extremes = {
     worstSenseSignal: Number.NaN,
     worstSenseSignalMatId: null,
@@ -90,21 +94,25 @@ function extremes(reports: readonly MatReport[]): Extremes {
   let retention = Infinity;
   let delay = -Infinity;
   let first = true;
-  for (const m of reports) {
-    const f = m.figures;
+  let signalMat = -1;
+  let marginMat = -1;
+  for (let k = 0; k < mats.count; k++) {
+    const f = figuresAt(mats, k);
     if (first || f.senseSignal < signal) {
       signal = f.senseSignal;
-      e.worstSenseSignalMatId = m.matId;
+      signalMat = k;
     }
     if (first || f.senseMarginAtRefresh < margin) {
       margin = f.senseMarginAtRefresh;
-      e.worstSenseMarginMatId = m.matId;
+      marginMat = k;
     }
     if (first || f.retentionTime < retention) retention = f.retentionTime;
     if (first || f.wordlineDelay > delay) delay = f.wordlineDelay;
     first = false;
   }
   if (!first) {
+    e.worstSenseSignalMatId = matIdAt(mats, signalMat);
+    e.worstSenseMarginMatId = matIdAt(mats, marginMat);
     e.worstSenseSignal = signal;
     e.worstSenseMargin = margin;
     e.shortestRetention = retention;
@@ -121,7 +129,7 @@ function extremes(reports: readonly MatReport[]): Extremes {
  */
 export function computeTotals(
   table: BlockTable,
-  reports: readonly MatReport[],
+  mats: MatTable,
   design: Design,
   offsetSigmaMultiplier: number,
   senseAmpCount: number,
@@ -129,10 +137,11 @@ export function computeTotals(
   let bits = 0;
   let usableBits = 0;
   let cellArea = 0;
-  for (const m of reports) {
-    bits += m.figures.bits;
-    usableBits += m.figures.usableBits;
-    cellArea += m.figures.usableBits * m.figures.cellFootprint;
+  for (let k = 0; k < mats.count; k++) {
+    const f = figuresAt(mats, k);
+    bits += f.bits;
+    usableBits += f.usableBits;
+    cellArea += f.usableBits * f.cellFootprint;
   }
   let placedArea = 0;
   // Summed per type code in a typed array: adding to a record field would box a new number each time.
@@ -168,7 +177,7 @@ export function computeTotals(
   const areaPerBit = usableBits > 0 ? totalArea / usableBits : 0;
   const F = design.process.featureSize;
   return {
-    matCount: reports.length,
+    matCount: mats.count,
     bits,
     usableBits,
     lostBits: bits - usableBits,
@@ -181,7 +190,7 @@ export function computeTotals(
     areaPerBitInF2: areaPerBit / (F * F),
     senseAmpCount,
     offsetSigmaMultiplier,
-    ...extremes(reports),
-    refresh: refreshFigures(table, reports, design),
+    ...extremes(mats),
+    refresh: refreshFigures(table, mats, design),
   };
 }

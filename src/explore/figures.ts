@@ -1,4 +1,11 @@
-import type { FindingKind, MatReport, Report } from '../engine';
+import {
+  figuresAt,
+  findMatReport,
+  type FindingKind,
+  type MatFigures,
+  type MatTable,
+  type Report,
+} from '../engine';
 import type { Quantity } from '../model/units';
 
 /**
@@ -112,18 +119,22 @@ export const TABLE_FIGURES = [
   'refreshPower',
 ] as const satisfies readonly FigureKey[];
 
-function largest(mats: readonly MatReport[], pick: (m: MatReport) => number): MatReport | undefined {
-  let best: MatReport | undefined;
-  for (const m of mats) if (!best || pick(m) > pick(best)) best = m;
+/** The figures of the mat with the largest value of `pick` (the first such mat), or undefined without mats. */
+function largest(mats: MatTable, pick: (f: MatFigures) => number): MatFigures | undefined {
+  let best: MatFigures | undefined;
+  for (let k = 0; k < mats.count; k++) {
+    const f = figuresAt(mats, k);
+    if (!best || pick(f) > pick(best)) best = f;
+  }
   return best;
 }
 
 /** The comparison figures of an evaluated design. */
 export function figuresFromReport(report: Report): PartitionFigures {
   const t = report.totals;
-  const worstMargin = report.mats.find((m) => m.matId === t.worstSenseMarginMatId);
-  const slowest = largest(report.mats, (m) => m.figures.wordlineDelay);
-  const hungriest = largest(report.mats, (m) => m.figures.activationEnergy.perBit);
+  const worstMargin = findMatReport(report, t.worstSenseMarginMatId ?? '');
+  const slowest = largest(report.mats, (f) => f.wordlineDelay);
+  const hungriest = largest(report.mats, (f) => f.activationEnergy.perBit);
   const kinds = (severity: 'error' | 'warning') =>
     [...new Set(report.findings.filter((f) => f.severity === severity).map((f) => f.kind))].sort();
   return {
@@ -138,11 +149,11 @@ export function figuresFromReport(report: Report): PartitionFigures {
     senseSignalAtRefresh: worstMargin?.figures.senseSignalAfterRefresh ?? Number.NaN,
     requiredSignal: worstMargin?.figures.requiredSignal ?? Number.NaN,
     wordlineDelay: t.worstWordlineDelay,
-    wordlineResistance: slowest?.figures.wordlineResistance ?? Number.NaN,
-    wordlineCapacitance: slowest?.figures.wordlineCapacitance ?? Number.NaN,
-    activationEnergyPerBit: hungriest?.figures.activationEnergy.perBit ?? Number.NaN,
-    activationEnergy: hungriest?.figures.activationEnergy.total ?? Number.NaN,
-    cellsPerWordline: hungriest?.figures.cellsPerWordline ?? Number.NaN,
+    wordlineResistance: slowest?.wordlineResistance ?? Number.NaN,
+    wordlineCapacitance: slowest?.wordlineCapacitance ?? Number.NaN,
+    activationEnergyPerBit: hungriest?.activationEnergy.perBit ?? Number.NaN,
+    activationEnergy: hungriest?.activationEnergy.total ?? Number.NaN,
+    cellsPerWordline: hungriest?.cellsPerWordline ?? Number.NaN,
     retentionTime: t.shortestRetention,
     refreshCycleTime: t.refresh.cycleTime,
     refreshInterval: t.refresh.interval,

@@ -1,3 +1,4 @@
+import { matAt } from '../engine/matTable';
 import type { MatReport, Report } from '../engine/report';
 
 /** One CSV column: header (with its unit) and how to read it from a mat's figures (SI). */
@@ -56,6 +57,9 @@ function field(value: string | number): string {
  */
 export function matFiguresCsv(report: Report): string {
   const lines = [COLUMNS.map((c) => c.header).join(',')];
-  for (const m of report.mats) lines.push(COLUMNS.map((c) => field(c.value(m))).join(','));
+  for (let k = 0; k < report.mats.count; k++) {
+    const m = matAt(report.mats, k);
+    lines.push(COLUMNS.map((c) => field(c.value(m))).join(','));
+  }
   return `${lines.join('\r\n')}\r\n`;
 }

@@ -1,3 +1,4 @@
+import { allMats } from '../engine/matTable';
 import type { MatReport, Report } from '../engine/report';
 import type { Design } from '../model/design';
 import { formatQuantity, formatScaled } from '../model/units';
@@ -115,9 +116,9 @@ export function reportTable(design: Design, report: Report): string {
   out.push(design.name);
   out.push(`process ${p.name} (${p.id}), F = ${formatQuantity(p.featureSize, 'length')}`);
   out.push('');
-  out.push(`Mats (${formatQuantity(report.mats.length, 'count')})`);
-  if (report.mats.length === 0) out.push('  none');
-  else out.push(...columns(MAT_HEADERS, report.mats.map(matRow), 1).map((l) => `  ${l}`));
+  out.push(`Mats (${formatQuantity(report.mats.count, 'count')})`);
+  if (report.mats.count === 0) out.push('  none');
+  else out.push(...columns(MAT_HEADERS, allMats(report.mats).map(matRow), 1).map((l) => `  ${l}`));
   out.push('');
   out.push('Totals');
   out.push(...columns(['figure', 'value'], totalsRows(design, report), 2).map((l) => `  ${l}`));

@@ -1,5 +1,5 @@
 import type { Finding, MatFigures, MatReport, Report } from '../engine/report';
-import { senseAmpStripIdsOf, wordlineDriverIdsOf, type ServingStrips } from '../engine/servingStrips';
+import { allMats, senseAmpStripIdsOf, wordlineDriverIdsOf, type MatTable } from '../engine/matTable';
 import type { BitlineArchitecture, CellKind } from '../model/cell';
 import type { Design } from '../model/design';
 
@@ -202,7 +202,7 @@ function readSummary(read: MatFigures['read']): ReadSummary {
       };
 }
 
-function matSummary(m: MatReport, serving: ServingStrips, k: number): MatSummary {
+function matSummary(m: MatReport, mats: MatTable, k: number): MatSummary {
   const f = m.figures;
   const cbl = f.bitlineCapacitance;
   const e = f.activationEnergy;
@@ -256,8 +256,8 @@ function matSummary(m: MatReport, serving: ServingStrips, k: number): MatSummary
     activationEnergyPerBit_J: fig(e.perBit),
     senseAmpPitchBudget_m: fig(f.senseAmpPitchBudget),
     senseAmpFits: f.senseAmpFits,
-    senseAmpStripIds: senseAmpStripIdsOf(serving, k),
-    wordlineDriverIds: wordlineDriverIdsOf(serving, k),
+    senseAmpStripIds: senseAmpStripIdsOf(mats, k),
+    wordlineDriverIds: wordlineDriverIdsOf(mats, k),
     unsensedBitlines: m.unsensedBitlines,
     undrivenWordlines: m.undrivenWordlines,
   };
@@ -331,7 +331,7 @@ export function reportSummary(design: Design, report: Report): ReportSummary {
       wordlineHighNeeded_V: fig(s.wordlineHighNeeded),
       ...countFindings(report.findings),
     },
-    mats: report.mats.map((m, k) => matSummary(m, report.servingStrips, k)),
+    mats: allMats(report.mats).map((m, k) => matSummary(m, report.mats, k)),
     findings: report.findings.map((f) => ({
       kind: f.kind,
       severity: f.severity,

@@ -19,12 +19,10 @@ export function MetricsPanel() {
   const [openKey, setOpenKey] = useState<string | null>(null);
   const toggle = (key: string) => setOpenKey((current) => (current === key ? null : key));
 
-  // The first selected mat; a map keeps this linear when thousands of blocks are selected.
+  // The first selected mat (the lookup by id is a map, so thousands of selected blocks stay cheap).
   const mat = useMemo(() => {
-    if (selectedIds.length === 1) return findMatReport(report, selectedIds[0] ?? '');
-    const byId = new Map(report.mats.map((m) => [m.matId, m]));
     for (const id of selectedIds) {
-      const found = byId.get(id);
+      const found = findMatReport(report, id);
       if (found) return found;
     }
     return undefined;

@@ -1,3 +1,4 @@
+import { allMats } from '../../src/engine/matTable';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { buildPartition, partitionName } from '../../src/build/buildPartition';
@@ -5,7 +6,7 @@ import { formatBits } from '../../src/model/units';
 import { gridExtent, losesEdgeBits, planPartition, type StripSizes } from '../../src/build/partitionPlan';
 import { evaluate } from '../../src/engine';
 import { findOverlaps } from '../../src/engine/overlaps';
-import { senseAmpStripIdsOf } from '../../src/engine/servingStrips';
+import { senseAmpStripIdsOf } from '../../src/engine/matTable';
 import { blockTable } from '../../src/geometry/blockTable';
 import { neighbourTable } from '../../src/geometry/neighbourGrid';
 import { ABUTMENT_TOLERANCE } from '../../src/geometry/rect';
@@ -63,7 +64,7 @@ describe('partition builder', () => {
           expect(kinds.has(kind)).toBe(false);
         }
         // Every mat has sense amplifiers at both bit-line ends.
-        expect(report.mats.every((_, k) => senseAmpStripIdsOf(report.servingStrips, k).length === 2)).toBe(
+        expect(allMats(report.mats).every((_, k) => senseAmpStripIdsOf(report.mats, k).length === 2)).toBe(
           true,
         );
       }),

@@ -1,3 +1,4 @@
+import { matAt } from '../../src/engine/matTable';
 import { describe, expect, it } from 'vitest';
 import { addBlocks } from '../../src/commands/addBlocks';
 import { moveBlocks } from '../../src/commands/moveBlocks';
@@ -134,7 +135,7 @@ describe('select tool gestures', () => {
     expect(s.width).toBeCloseTo(m.width, 15);
     expect(s.x).toBeCloseTo(m.x, 15);
     expect(s.y + s.height).toBeCloseTo(m.y, 15);
-    expect(evaluate(after).mats[0]?.unsensedBitlines).toBe(0);
+    expect(matAt(evaluate(after).mats, 0).unsensedBitlines).toBe(0);
   });
 });
 

@@ -1,3 +1,4 @@
+import { matAt } from '../../src/engine/matTable';
 import { describe, expect, it } from 'vitest';
 import { createVariant } from '../../src/commands/createVariant';
 import { deleteVariant } from '../../src/commands/deleteVariant';
@@ -56,7 +57,7 @@ describe('variant commands', () => {
     expect(activeVariantId(d)).toBe('v2');
     // The report follows the active variant.
     expect(store.getState().report.totals.matCount).toBe(d.blocks.filter((b) => b.type === 'mat').length);
-    expect(store.getState().report.mats[0]?.figures.cellId).toBe(OPEN_6F2_CELL.id);
+    expect(matAt(store.getState().report.mats, 0).figures.cellId).toBe(OPEN_6F2_CELL.id);
   });
 
   it('create refuses an invalid design and leaves the document alone', () => {

@@ -1,3 +1,4 @@
+import { matAt } from '../../src/engine/matTable';
 import { describe, expect, it } from 'vitest';
 import { evaluate, findMatReport } from '../../src/engine';
 import { gainReadCurrent } from '../../src/engine/gainRead';
@@ -190,7 +191,7 @@ describe('gain cells', () => {
   });
 
   it('reads by current into a read bit line at VDD, inverting and non-destructive', () => {
-    const m = evaluate(gainDesign(64)).mats[0];
+    const m = matAt(evaluate(gainDesign(64)).mats, 0);
     if (m?.figures.read.kind !== 'gainRead') throw new Error('gain cells read by current');
     const t = LOGIC_PROCESS.gainCellSenseTime;
     expect(m.figures.read.dropHigh).toBeCloseTo(
@@ -204,8 +205,8 @@ describe('gain cells', () => {
   });
 
   it('more cells on a read bit line means less signal, and retention is microseconds in a logic process', () => {
-    const short = evaluate(gainDesign(32)).mats[0];
-    const long = evaluate(gainDesign(256)).mats[0];
+    const short = matAt(evaluate(gainDesign(32)).mats, 0);
+    const long = matAt(evaluate(gainDesign(256)).mats, 0);
     expect(long?.figures.senseSignal).toBeLessThan(short?.figures.senseSignal ?? 0);
     expect(short?.figures.retentionTime).toBeGreaterThan(1e-6);
     expect(short?.figures.retentionTime).toBeLessThan(1e-3);

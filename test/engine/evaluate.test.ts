@@ -1,3 +1,4 @@
+import { matAt, allMats } from '../../src/engine/matTable';
 import { describe, expect, it } from 'vitest';
 import {
   evaluate,
@@ -8,7 +9,7 @@ import {
   matFigureApplies,
   TOTAL_FIGURES,
 } from '../../src/engine';
-import { senseAmpStripIdsOf, wordlineDriverIdsOf } from '../../src/engine/servingStrips';
+import { senseAmpStripIdsOf, wordlineDriverIdsOf } from '../../src/engine/matTable';
 import { OPEN_6F2_CELL } from '../../src/model/builtins';
 import type { Block, Strip } from '../../src/model/block';
 import { demoDesign } from '../../src/model/demoDesign';
@@ -117,8 +118,8 @@ describe('evaluate: adjacency checks', () => {
     // The strips serving it are listed by kind, in design order, and a strip elsewhere is not.
     const far = strip('sa-far', 'senseAmpStrip', 100e-6, 100e-6, SIDE, 6e-6);
     const r = evaluate(designWith([M, saBottom, swdLeft, far, saTop]));
-    expect(senseAmpStripIdsOf(r.servingStrips, 0)).toEqual(['sa-bottom', 'sa-top']);
-    expect(wordlineDriverIdsOf(r.servingStrips, 0)).toEqual(['swd-left']);
+    expect(senseAmpStripIdsOf(r.mats, 0)).toEqual(['sa-bottom', 'sa-top']);
+    expect(wordlineDriverIdsOf(r.mats, 0)).toEqual(['swd-left']);
   });
 
   it('with one strip the sense amplifiers cannot interleave and overflow a folded 2-pitch budget', () => {
@@ -196,16 +197,16 @@ describe('evaluate: the demo design', () => {
 
   it('mats of one kind share one figures object but keep their own identity and connections', () => {
     const r = evaluate(demoDesign());
-    const kinds = new Set(r.mats.map((m) => m.figures));
+    const kinds = new Set(allMats(r.mats).map((m) => m.figures));
     // Every demo mat has the same cell and counts; edge rows differ only in which strips serve them.
-    expect(kinds.size).toBeLessThan(r.mats.length);
-    expect(new Set(r.mats.map((m) => m.matId)).size).toBe(r.mats.length);
-    const [a, b] = r.mats;
+    expect(kinds.size).toBeLessThan(r.mats.count);
+    expect(new Set(allMats(r.mats).map((m) => m.matId)).size).toBe(r.mats.count);
+    const [a, b] = allMats(r.mats);
     if (!a || !b) throw new Error('demo has fewer than two mats');
     expect(a.figures).toBe(b.figures);
-    expect(senseAmpStripIdsOf(r.servingStrips, 0)).not.toEqual(senseAmpStripIdsOf(r.servingStrips, 1));
+    expect(senseAmpStripIdsOf(r.mats, 0)).not.toEqual(senseAmpStripIdsOf(r.mats, 1));
     // Sharing changes no figure: every demo mat reads the same signal.
-    expect(r.mats.every((m) => m.figures.senseSignal === a.figures.senseSignal)).toBe(true);
+    expect(allMats(r.mats).every((m) => m.figures.senseSignal === a.figures.senseSignal)).toBe(true);
   });
 });
 
@@ -226,7 +227,7 @@ describe('explained figures', () => {
     // Source: common practice (no source): each figure in the UI must explain itself.
     const design = demoDesign();
     const report = evaluate(design);
-    const mat = report.mats[0];
+    const mat = matAt(report.mats, 0);
     if (!mat) throw new Error('demo has mats');
     for (const key of TOTAL_FIGURES) expect(explainTotal(key, report, design).title).not.toBe('');
     for (const key of MAT_FIGURES) {

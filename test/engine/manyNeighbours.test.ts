@@ -53,8 +53,8 @@ describe('evaluate: a mat served by many small strips', () => {
     const report = findMatReport(r, 'm1');
     expect(report?.unsensedBitlines).toBe(0);
     expect(report?.undrivenWordlines).toBe(0);
-    expect(senseAmpStripIdsOf(r.servingStrips, 0)).toEqual(Array.from({ length: 40 }, (_, k) => `sa-${k}`));
-    expect(wordlineDriverIdsOf(r.servingStrips, 0)).toEqual(Array.from({ length: 20 }, (_, k) => `swd-${k}`));
+    expect(senseAmpStripIdsOf(r.mats, 0)).toEqual(Array.from({ length: 40 }, (_, k) => `sa-${k}`));
+    expect(wordlineDriverIdsOf(r.mats, 0)).toEqual(Array.from({ length: 20 }, (_, k) => `swd-${k}`));
     // Sense amplifiers at one end only cannot interleave: the pitch check is the one finding.
     expect(r.findings.map((f) => f.kind)).toEqual(['senseAmpPitch']);
   });

@@ -1,7 +1,8 @@
+import { allMats } from '../../src/engine/matTable';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { evaluate, preparePreview, previewReport, type Report } from '../../src/engine';
-import { senseAmpStripIdsOf, wordlineDriverIdsOf } from '../../src/engine/servingStrips';
+import { senseAmpStripIdsOf, wordlineDriverIdsOf } from '../../src/engine/matTable';
 import type { Block } from '../../src/model/block';
 import { demoDesign } from '../../src/model/demoDesign';
 import type { Design } from '../../src/model/design';
@@ -13,10 +14,10 @@ function findingKeys(report: Report): string[] {
 
 /** Mat reports with their serving strips, each list sorted. */
 function normalisedMats(report: Report) {
-  return report.mats.map((m, k) => ({
+  return allMats(report.mats).map((m, k) => ({
     ...m,
-    senseAmpStripIds: senseAmpStripIdsOf(report.servingStrips, k).sort(),
-    wordlineDriverIds: wordlineDriverIdsOf(report.servingStrips, k).sort(),
+    senseAmpStripIds: senseAmpStripIdsOf(report.mats, k).sort(),
+    wordlineDriverIds: wordlineDriverIdsOf(report.mats, k).sort(),
   }));
 }
 

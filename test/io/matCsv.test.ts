@@ -1,3 +1,4 @@
+import { matAt } from '../../src/engine/matTable';
 import { describe, expect, it } from 'vitest';
 import { evaluate } from '../../src/engine';
 import { matFiguresCsv } from '../../src/io/matCsv';
@@ -8,12 +9,12 @@ describe('per-mat CSV', () => {
     const design = demoDesign();
     const report = evaluate(design);
     const lines = matFiguresCsv(report).trimEnd().split('\r\n');
-    expect(lines).toHaveLength(1 + report.mats.length);
+    expect(lines).toHaveLength(1 + report.mats.count);
     const header = lines[0]?.split(',') ?? [];
     expect(header).toContain('bitline_capacitance_F');
     const row = lines[1]?.split(',') ?? [];
     const column = header.indexOf('bitline_capacitance_F');
-    expect(Number(row[column])).toBe(report.mats[0]?.figures.bitlineCapacitance.total);
+    expect(Number(row[column])).toBe(matAt(report.mats, 0)?.figures.bitlineCapacitance.total);
   });
 
   it('quotes names with commas and quotes (RFC 4180)', () => {

@@ -1,0 +1,191 @@
+import type { Block } from '../model/block';
+import type { MatFigures, MatReport } from './report';
+
+/**
+ * The mats of a report, stored column-wise. Mat k (in design order of the mats) is the design block at
+ * `position[k]`; its physics is `figures[figureIndex[k]]`, shared by every mat of its kind; it leaves
+ * `unsensedBitlines[k]` bit lines and `undrivenWordlines[k]` word lines unserved. The strips serving it
+ * are the blocks at `servingPositions[servingOffsets[3k]]` … before `servingOffsets[3k + 1]` (sense
+ * amplifiers) and from there to before `servingOffsets[3k + 2]` (drivers), in ascending design position.
+ *
+ * Why columns, not one object per mat: on a 65,536-mat die, making and keeping that many small objects
+ * costs more than all the physics (the garbage collector copies and traces each one), while a panel
+ * shows a handful. {@link matAt} makes the object for one mat when it is wanted.
+ */
+export interface MatTable {
+  readonly count: number;
+  /** The evaluated design's blocks, in design order. */
+  readonly blocks: readonly Block[];
+  readonly position: Int32Array;
+  readonly figureIndex: Int32Array;
+  readonly figures: readonly MatFigures[];
+  readonly unsensedBitlines: Int32Array;
+  readonly undrivenWordlines: Int32Array;
+  readonly servingPositions: Int32Array;
+  readonly servingOffsets: Int32Array;
+}
+
+/** Id of mat k. */
+export function matIdAt(mats: MatTable, k: number): string {
+  return mats.blocks[mats.position[k] ?? -1]?.id ?? '';
+}
+
+/** Name of mat k as panels and findings show it: its name, or its id when it has none. */
+export function matLabelAt(mats: MatTable, k: number): string {
+  const block = mats.blocks[mats.position[k] ?? -1];
+  return block?.name || block?.id || '';
+}
+
+/** The figures of mat k. */
+export function figuresAt(mats: MatTable, k: number): MatFigures {
+  const figures = mats.figures[mats.figureIndex[k] ?? -1];
+  if (!figures) throw new Error(`no mat ${k} in a report of ${mats.count}`);
+  return figures;
+}
+
+/** The report of mat k as one object. */
+export function matAt(mats: MatTable, k: number): MatReport {
+  const block = mats.blocks[mats.position[k] ?? -1];
+  return {
+    matId: block?.id ?? '',
+    name: block?.name ?? '',
+    unsensedBitlines: mats.unsensedBitlines[k] ?? 0,
+    undrivenWordlines: mats.undrivenWordlines[k] ?? 0,
+    figures: figuresAt(mats, k),
+  };
+}
+
+/** Every mat's report as objects, in order (for exports and tests; panels ask for the mats they show). */
+export function allMats(mats: MatTable): MatReport[] {
+  const all = new Array<MatReport>(mats.count);
+  for (let k = 0; k < mats.count; k++) all[k] = matAt(mats, k);
+  return all;
+}
+
+const indexById = new WeakMap<MatTable, ReadonlyMap<string, number>>();
+
+/** Index of the mat with this id, or −1; the lookup map is built once per table. */
+export function matIndexOf(mats: MatTable, id: string): number {
+  let index = indexById.get(mats);
+  if (!index) {
+    const map = new Map<string, number>();
+    for (let k = 0; k < mats.count; k++) map.set(matIdAt(mats, k), k);
+    indexById.set(mats, map);
+    index = map;
+  }
+  return index.get(id) ?? -1;
+}
+
+function idsBetween(mats: MatTable, from: number, to: number): string[] {
+  const ids = new Array<string>(Math.max(0, to - from));
+  for (let p = from; p < to; p++) ids[p - from] = mats.blocks[mats.servingPositions[p] ?? -1]?.id ?? '';
+  return ids;
+}
+
+/** Ids of the sense-amplifier strips abutting mat k's bit-line ends. */
+export function senseAmpStripIdsOf(mats: MatTable, k: number): string[] {
+  return idsBetween(mats, mats.servingOffsets[3 * k] ?? 0, mats.servingOffsets[3 * k + 1] ?? 0);
+}
+
+/** Ids of the driver strips or row decoders abutting mat k's word-line ends. */
+export function wordlineDriverIdsOf(mats: MatTable, k: number): string[] {
+  return idsBetween(mats, mats.servingOffsets[3 * k + 1] ?? 0, mats.servingOffsets[3 * k + 2] ?? 0);
+}
+
+/** Fills a mat table, mat by mat in any order, or by copying mats of an earlier table over the same blocks. */
+export class MatTableBuilder {
+  private readonly position: Int32Array;
+  private readonly figureIndex: Int32Array;
+  private readonly figures: MatFigures[];
+  private readonly figureIndexOf: Map<MatFigures, number>;
+  private readonly unsensed: Int32Array;
+  private readonly undriven: Int32Array;
+  private servingPositions: Int32Array;
+  private servingUsed = 0;
+  private readonly servingOffsets: Int32Array;
+
+  constructor(
+    private readonly blocks: readonly Block[],
+    private readonly count: number,
+    /** Figures of an earlier table whose mats will be copied, so that their indices stay valid. */
+    earlierFigures: readonly MatFigures[] = [],
+  ) {
+    this.position = new Int32Array(count);
+    this.figureIndex = new Int32Array(count);
+    this.figures = earlierFigures.slice();
+    this.figureIndexOf = new Map(this.figures.map((f, i) => [f, i]));
+    this.unsensed = new Int32Array(count);
+    this.undriven = new Int32Array(count);
+    // A tiled mat has two sense-amplifier strips and two drivers; the list grows if a design has more.
+    this.servingPositions = new Int32Array(Math.max(16, 4 * count));
+    this.servingOffsets = new Int32Array(3 * count);
+  }
+
+  /** Records mat k: design position, figures, unserved lines. */
+  set(k: number, position: number, figures: MatFigures, unsensed: number, undriven: number): void {
+    this.position[k] = position;
+    let index = this.figureIndexOf.get(figures);
+    if (index === undefined) {
+      index = this.figures.length;
+      this.figures.push(figures);
+      this.figureIndexOf.set(figures, index);
+    }
+    this.figureIndex[k] = index;
+    this.unsensed[k] = unsensed;
+    this.undriven[k] = undriven;
+  }
+
+  /** Records mat k's serving strips: the first `senseAmpCount` of `senseAmps`, then the first `driverCount` of `drivers` (design positions). */
+  setServing(
+    k: number,
+    senseAmps: Int32Array,
+    senseAmpCount: number,
+    drivers: Int32Array,
+    driverCount: number,
+  ): void {
+    this.servingOffsets[3 * k] = this.servingUsed;
+    for (let s = 0; s < senseAmpCount; s++) this.appendServing(senseAmps[s] as number);
+    this.servingOffsets[3 * k + 1] = this.servingUsed;
+    for (let d = 0; d < driverCount; d++) this.appendServing(drivers[d] as number);
+    this.servingOffsets[3 * k + 2] = this.servingUsed;
+  }
+
+  /** Records mat k as mat k of `earlier`, a table over the same blocks built with `earlierFigures`. */
+  copy(k: number, earlier: MatTable): void {
+    this.position[k] = earlier.position[k] ?? 0;
+    this.figureIndex[k] = earlier.figureIndex[k] ?? 0;
+    this.unsensed[k] = earlier.unsensedBitlines[k] ?? 0;
+    this.undriven[k] = earlier.undrivenWordlines[k] ?? 0;
+    const a = earlier.servingOffsets[3 * k] ?? 0;
+    const b = earlier.servingOffsets[3 * k + 1] ?? 0;
+    const c = earlier.servingOffsets[3 * k + 2] ?? 0;
+    this.servingOffsets[3 * k] = this.servingUsed;
+    for (let p = a; p < b; p++) this.appendServing(earlier.servingPositions[p] as number);
+    this.servingOffsets[3 * k + 1] = this.servingUsed;
+    for (let p = b; p < c; p++) this.appendServing(earlier.servingPositions[p] as number);
+    this.servingOffsets[3 * k + 2] = this.servingUsed;
+  }
+
+  finish(): MatTable {
+    return {
+      count: this.count,
+      blocks: this.blocks,
+      position: this.position,
+      figureIndex: this.figureIndex,
+      figures: this.figures,
+      unsensedBitlines: this.unsensed,
+      undrivenWordlines: this.undriven,
+      servingPositions: this.servingPositions.subarray(0, this.servingUsed),
+      servingOffsets: this.servingOffsets,
+    };
+  }
+
+  private appendServing(position: number): void {
+    if (this.servingUsed === this.servingPositions.length) {
+      const bigger = new Int32Array(2 * this.servingPositions.length);
+      bigger.set(this.servingPositions);
+      this.servingPositions = bigger;
+    }
+    this.servingPositions[this.servingUsed++] = position;
+  }
+}
