@@ -1,30 +1,16 @@
-import type { Block, BlockType, Mat } from '../model/block';
+import { BLOCK_TYPES, type Block, type BlockType, type Mat } from '../model/block';
 import type { CellDefinition } from '../model/cell';
 import type { Design } from '../model/design';
 import { matGeometry, type MatGeometry } from './matGeometry';
 import type { Rect } from './rect';
 
 /** Block types in the order of their codes in {@link BlockTable.type}. */
-export const BLOCK_TYPE_CODES: readonly BlockType[] = [
-  'mat',
-  'senseAmpStrip',
-  'wordlineDriverStrip',
-  'rowDecoder',
-  'columnDecoder',
-  'spacer',
-];
-export const MAT_CODE = 0;
-export const SENSE_AMP_STRIP_CODE = 1;
-export const WORDLINE_DRIVER_STRIP_CODE = 2;
-export const ROW_DECODER_CODE = 3;
-const CODE_OF: Readonly<Record<BlockType, number>> = {
-  mat: MAT_CODE,
-  senseAmpStrip: SENSE_AMP_STRIP_CODE,
-  wordlineDriverStrip: WORDLINE_DRIVER_STRIP_CODE,
-  rowDecoder: ROW_DECODER_CODE,
-  columnDecoder: 4,
-  spacer: 5,
-};
+export const BLOCK_TYPE_CODES: readonly BlockType[] = BLOCK_TYPES;
+const CODE_OF = new Map(BLOCK_TYPE_CODES.map((type, code) => [type, code]));
+export const MAT_CODE = BLOCK_TYPE_CODES.indexOf('mat');
+export const SENSE_AMP_STRIP_CODE = BLOCK_TYPE_CODES.indexOf('senseAmpStrip');
+export const WORDLINE_DRIVER_STRIP_CODE = BLOCK_TYPE_CODES.indexOf('wordlineDriverStrip');
+export const ROW_DECODER_CODE = BLOCK_TYPE_CODES.indexOf('rowDecoder');
 
 /**
  * What a mat's shape and physics follow from: its cell and cell counts (from a mat of that kind) and the
@@ -176,7 +162,7 @@ function writeRows(table: TableInProgress, blocks: readonly Block[]): void {
 function writeRow(table: TableInProgress, i: number, block: Block): void {
   table.x[i] = block.x;
   table.y[i] = block.y;
-  table.type[i] = CODE_OF[block.type];
+  table.type[i] = CODE_OF.get(block.type) ?? -1;
   if (block.type !== 'mat') {
     table.width[i] = block.width;
     table.height[i] = block.height;

@@ -52,6 +52,9 @@ export const STRIP_TYPES = [
 ] as const;
 export type StripType = (typeof STRIP_TYPES)[number];
 
+/** Every block type: the mat, then the strips. */
+export const BLOCK_TYPES = ['mat', ...STRIP_TYPES] as const;
+
 export const stripSchema = z.object({
   ...blockBase,
   type: z.enum(STRIP_TYPES),

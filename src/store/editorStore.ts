@@ -1,5 +1,5 @@
 import { create } from 'zustand';
-import type { BitlineAxis } from '../model/block';
+import { BLOCK_TYPES, type BitlineAxis } from '../model/block';
 
 /**
  * Session state of the floorplan editor: the active tool and its options, view toggles, open dialogs and
@@ -7,16 +7,7 @@ import type { BitlineAxis } from '../model/block';
  */
 
 /** The tools of the palette, in palette order. */
-export const TOOLS = [
-  'select',
-  'pan',
-  'mat',
-  'senseAmpStrip',
-  'wordlineDriverStrip',
-  'rowDecoder',
-  'columnDecoder',
-  'spacer',
-] as const;
+export const TOOLS = ['select', 'pan', ...BLOCK_TYPES] as const;
 export type Tool = (typeof TOOLS)[number];
 /** Tools that place a strip-like block. */
 export type PlacementTool = Exclude<Tool, 'select' | 'pan' | 'mat'>;

@@ -11,27 +11,11 @@ import {
 } from '../../src/engine';
 import { senseAmpStripIdsOf, wordlineDriverIdsOf } from '../../src/engine/matTable';
 import { OPEN_6F2_CELL } from '../../src/model/builtins';
-import type { Block, Strip } from '../../src/model/block';
+import type { Block } from '../../src/model/block';
 import { demoDesign } from '../../src/model/demoDesign';
-import { designWith, mat, processWith } from '../support/designs';
+import { designWith, mat, processWith, strip } from '../support/designs';
 
 const F = 18e-9;
-const strip = (
-  id: string,
-  type: Strip['type'],
-  x: number,
-  y: number,
-  width: number,
-  height: number,
-): Strip => ({
-  id,
-  name: id,
-  type,
-  x,
-  y,
-  width,
-  height,
-});
 
 /** A folded 512×512 mat at (10 µm, 10 µm): 1024 bit lines at 2F, 1024 word lines at 2F → 36.864 µm square. */
 const SIDE = 1024 * 2 * F;

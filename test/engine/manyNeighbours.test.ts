@@ -1,32 +1,15 @@
 import { describe, expect, it } from 'vitest';
 import { evaluate, findMatReport, senseAmpStripIdsOf, wordlineDriverIdsOf } from '../../src/engine';
 import { matGeometry } from '../../src/geometry/matGeometry';
-import type { Block, Strip } from '../../src/model/block';
+import type { Block } from '../../src/model/block';
 import { DEMO_PROCESS, FOLDED_8F2_CELL, OPEN_6F2_CELL } from '../../src/model/builtins';
-import { designWith, mat } from '../support/designs';
+import { designWith, mat, strip } from '../support/designs';
 
 // Mat edges touched by more strips, and strips by more partner mats, than evaluate's scratch buffers
 // first hold (16): the buffers must grow and the answers stay the same. Expected values are arithmetic
 // on the layouts drawn here (no source needed).
 
 const F = DEMO_PROCESS.featureSize;
-
-const strip = (
-  id: string,
-  type: Strip['type'],
-  x: number,
-  y: number,
-  width: number,
-  height: number,
-): Strip => ({
-  id,
-  name: id,
-  type,
-  x,
-  y,
-  width,
-  height,
-});
 
 describe('evaluate: a mat served by many small strips', () => {
   it('40 sense-amplifier strips along one edge and 20 drivers along another serve every line', () => {

@@ -1,5 +1,5 @@
 import { BUILTIN_CELLS, DEFAULT_OPERATING, DEMO_PROCESS, FOLDED_8F2_CELL } from '../../src/model/builtins';
-import type { Block, Mat } from '../../src/model/block';
+import type { Block, Mat, Strip } from '../../src/model/block';
 import { DESIGN_FORMAT, DESIGN_VERSION, type Design } from '../../src/model/design';
 import type { ProcessProfile } from '../../src/model/process';
 
@@ -35,4 +35,16 @@ export function mat(overrides: Partial<Mat> = {}): Mat {
     bitlineAxis: 'vertical',
     ...overrides,
   };
+}
+
+/** A strip of the given type and place (m), named by its id. */
+export function strip(
+  id: string,
+  type: Strip['type'],
+  x: number,
+  y: number,
+  width: number,
+  height: number,
+): Strip {
+  return { id, name: id, type, x, y, width, height };
 }
