@@ -1,4 +1,5 @@
 import type { Block, Mat, Strip } from '../model/block';
+import { blockTable, kindAt, rectAt } from './blockTable';
 import type { CellDefinition } from '../model/cell';
 import type { Design } from '../model/design';
 import { matGeometry, matRect, type MatGeometry } from './matGeometry';
@@ -23,32 +24,17 @@ export function isPlacedMat(placed: PlacedBlock): placed is PlacedMat {
 }
 
 /**
- * Gives every block of a design its rectangle on the floorplan (m); mats also get their geometry. A strip
- * is its own rectangle (it has x, y, width and height), and mats of one kind share one geometry object,
- * so a large die allocates little here.
+ * Every block of a design with its rectangle on the floorplan (m) as objects, for the canvas and the
+ * image export; mats also get their cell and geometry. Laid out by {@link blockTable}, so a strip is its
+ * own rectangle and mats of one kind share one geometry object.
  */
 export function placeBlocks(design: Design): PlacedBlock[] {
-  const cells = new Map(design.cells.map((c) => [c.id, c]));
-  const F = design.process.featureSize;
-  const geometries = new Map<string, MatGeometry>();
-  const placed: PlacedBlock[] = new Array<PlacedBlock>(design.blocks.length);
-  for (let i = 0; i < design.blocks.length; i++) {
-    const block = design.blocks[i] as Block;
-    if (block.type !== 'mat') {
-      placed[i] = { block, rect: block };
-      continue;
-    }
-    const cell = cells.get(block.cellId);
-    if (!cell) throw new Error(`mat "${block.id}" uses unknown cell "${block.cellId}"`);
-    const key = `${block.cellId}|${block.cellsPerBitline}|${block.cellsPerWordline}|${block.bitlineAxis}`;
-    let geometry = geometries.get(key);
-    if (!geometry) {
-      geometry = matGeometry(block, cell, F);
-      geometries.set(key, geometry);
-    }
-    placed[i] = { block, rect: matRect(block, geometry), cell, geometry };
-  }
-  return placed;
+  const table = blockTable(design);
+  return design.blocks.map((block, i): PlacedBlock => {
+    if (block.type !== 'mat') return { block, rect: block };
+    const { cell, geometry } = kindAt(table, i);
+    return { block, rect: rectAt(table, i), cell, geometry };
+  });
 }
 
 /** Rectangle of one block, for hit-testing and drawing. */

@@ -6,14 +6,15 @@ import {
   rectAt,
   withBlocksReplaced,
 } from '../../src/geometry/blockTable';
+import { matGeometry, matRect } from '../../src/geometry/matGeometry';
 import { placeBlocks } from '../../src/geometry/placedBlocks';
 import type { Block } from '../../src/model/block';
 import { GAIN_3T_CELL, OPEN_6F2_CELL } from '../../src/model/builtins';
 import { demoDesign } from '../../src/model/demoDesign';
 import { designWith, mat } from '../support/designs';
 
-// The table is the evaluation's view of the same layout the canvas draws from placeBlocks(): the two must
-// agree block for block. Expected values are the layouts themselves (no source needed).
+// The table lays out every block: a strip is its own rectangle, a mat is as large as its cell, counts and F
+// make it (matGeometry). Expected values are the layouts themselves (no source needed).
 
 const mixed: Block[] = [
   mat({ id: 'a' }),
@@ -29,21 +30,31 @@ describe('blockTable', () => {
   it.each([
     ['the demo design', demoDesign()],
     ['mats of several kinds between strips', designWith(mixed)],
-  ])('gives %s the rectangles and types placeBlocks gives', (_name, design) => {
+  ])('gives %s the rectangle and type of every block', (_name, design) => {
     const table = blockTable(design);
-    const placed = placeBlocks(design);
-    expect(table.count).toBe(placed.length);
-    placed.forEach((p, i) => {
-      expect(rectAt(table, i)).toEqual({
-        x: p.rect.x,
-        y: p.rect.y,
-        width: p.rect.width,
-        height: p.rect.height,
-      });
-      expect(BLOCK_TYPE_CODES[table.type[i] ?? -1]).toBe(p.block.type);
-      if ('geometry' in p) expect(kindAt(table, i).geometry).toEqual(p.geometry);
-      else expect(table.kindOf[i]).toBe(-1);
+    expect(table.count).toBe(design.blocks.length);
+    design.blocks.forEach((block, i) => {
+      expect(BLOCK_TYPE_CODES[table.type[i] ?? -1]).toBe(block.type);
+      if (block.type !== 'mat') {
+        expect(rectAt(table, i)).toEqual({
+          x: block.x,
+          y: block.y,
+          width: block.width,
+          height: block.height,
+        });
+        expect(table.kindOf[i]).toBe(-1);
+        return;
+      }
+      const cell = design.cells.find((c) => c.id === block.cellId);
+      if (!cell) throw new Error(`no cell ${block.cellId}`);
+      const geometry = matGeometry(block, cell, design.process.featureSize);
+      expect(rectAt(table, i)).toEqual(matRect(block, geometry));
+      expect(kindAt(table, i).geometry).toEqual(geometry);
     });
+    // The canvas's placed blocks are the same layout as objects.
+    expect(
+      placeBlocks(design).map(({ rect: r }) => ({ x: r.x, y: r.y, width: r.width, height: r.height })),
+    ).toEqual(design.blocks.map((_, i) => rectAt(table, i)));
   });
 
   it('gives mats of one cell, counts and axis one kind, and others their own', () => {
