@@ -4,64 +4,12 @@ export interface Interval {
   readonly end: number;
 }
 
-/** Merges overlapping or touching intervals; the result is sorted and disjoint. */
-export function unionIntervals(intervals: readonly Interval[], tolerance = 0): Interval[] {
-  // Insertion sort: a mat edge has a handful of stretches, and this runs for every mat of a large die,
-  // so it avoids the extra arrays of filter() and sort().
-  const sorted: Interval[] = [];
-  for (const interval of intervals) {
-    if (!(interval.end > interval.start)) continue;
-    let k = sorted.length;
-    sorted.push(interval);
-    while (k > 0 && (sorted[k - 1] as Interval).start > interval.start) {
-      sorted[k] = sorted[k - 1] as Interval;
-      k--;
-    }
-    sorted[k] = interval;
-  }
-  const merged: Interval[] = [];
-  for (const next of sorted) {
-    const last = merged[merged.length - 1];
-    if (last && next.start <= last.end + tolerance) {
-      merged[merged.length - 1] = { start: last.start, end: Math.max(last.end, next.end) };
-    } else {
-      merged.push(next);
-    }
-  }
-  return merged;
-}
-
-/** The parts of [0, length] that no interval covers. */
-export function uncoveredParts(covered: readonly Interval[], length: number, tolerance = 0): Interval[] {
-  const gaps: Interval[] = [];
-  let cursor = 0;
-  for (const part of unionIntervals(covered, tolerance)) {
-    if (part.start > cursor + tolerance) gaps.push({ start: cursor, end: Math.min(part.start, length) });
-    cursor = Math.max(cursor, part.end);
-    if (cursor >= length) break;
-  }
-  if (cursor < length - tolerance) gaps.push({ start: cursor, end: length });
-  return gaps.filter((g) => g.end > g.start);
-}
-
-/**
- * How many lines at a regular pitch have their centre line inside the given gaps. Line i (from 0)
- * sits at (i + ½)·pitch, which is how bit lines and word lines are laid across a mat.
- */
-export function linesInGaps(gaps: readonly Interval[], pitch: number, lineCount: number): number {
-  let count = 0;
-  for (const gap of gaps) {
-    const first = Math.max(0, Math.ceil(gap.start / pitch - 0.5));
-    const last = Math.min(lineCount - 1, Math.ceil(gap.end / pitch - 0.5) - 1);
-    if (last >= first) count += last - first + 1;
-  }
-  return count;
-}
-
 /**
  * How many lines at a regular pitch lie in the parts of [0, length] that no span covers, counting only
- * parts within [from, to]: `linesInGaps(uncoveredParts(spans, length, tolerance) ∩ [from, to], pitch,
- * lineCount)` for spans kept flat (span k is `spans[2k]` … `spans[2k + 1]`). Sorts the spans in place and
+ * parts within [from, to]. Spans closer than `tolerance` merge, and a gap no wider than it is no gap.
+ * Line i (from 0) sits at (i + ½)·pitch, which is how bit lines and word lines are laid across a mat. The
+ * interval-by-interval form of the same count is the test oracle (test/support/intervalReference.ts);
+ * this one takes spans kept flat (span k is `spans[2k]` … `spans[2k + 1]`). Sorts the spans in place and
  * allocates nothing, because evaluate runs it for every mat edge of a die.
  */
 export function uncoveredLineCount(
@@ -74,7 +22,7 @@ export function uncoveredLineCount(
   from = 0,
   to = length,
 ): number {
-  // Keep the non-empty spans, sorted by start (insertion sort, stable like unionIntervals).
+  // Keep the non-empty spans, sorted by start (insertion sort, stable).
   let kept = 0;
   for (let k = 0; k < count; k++) {
     const s = spans[2 * k] as number;

@@ -1,12 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import {
-  linesInGaps,
-  uncoveredLineCount,
-  uncoveredParts,
-  unionIntervals,
-  type Interval,
-} from '../../src/geometry/interval';
+import { uncoveredLineCount, type Interval } from '../../src/geometry/interval';
+import { linesInGaps, uncoveredParts, unionIntervals } from '../support/intervalReference';
 
 const iv = (start: number, end: number): Interval => ({ start, end });
 
