@@ -1,6 +1,6 @@
-import type { Boxes } from './blockTable';
+import { boxesOf, type Boxes } from './blockTable';
 import type { Interval } from './interval';
-import { ABUTMENT_TOLERANCE, bottom, right, type Rect } from './rect';
+import { ABUTMENT_TOLERANCE, type Rect } from './rect';
 
 export type Side = 'top' | 'bottom' | 'left' | 'right';
 
@@ -10,31 +10,9 @@ export type Side = 'top' | 'bottom' | 'left' | 'right';
  * Abutment means the facing edges lie within {@link ABUTMENT_TOLERANCE} and the two overlap along the edge.
  */
 export function abutmentOnSide(target: Rect, neighbour: Rect, side: Side): Interval | null {
-  const tol = ABUTMENT_TOLERANCE;
-  let touching: boolean;
-  switch (side) {
-    case 'top':
-      touching = Math.abs(bottom(neighbour) - target.y) <= tol;
-      break;
-    case 'bottom':
-      touching = Math.abs(neighbour.y - bottom(target)) <= tol;
-      break;
-    case 'left':
-      touching = Math.abs(right(neighbour) - target.x) <= tol;
-      break;
-    case 'right':
-      touching = Math.abs(neighbour.x - right(target)) <= tol;
-      break;
-  }
-  if (!touching) return null;
-  const horizontalEdge = side === 'top' || side === 'bottom';
-  const start = horizontalEdge
-    ? Math.max(target.x, neighbour.x) - target.x
-    : Math.max(target.y, neighbour.y) - target.y;
-  const end = horizontalEdge
-    ? Math.min(right(target), right(neighbour)) - target.x
-    : Math.min(bottom(target), bottom(neighbour)) - target.y;
-  return end - start > tol ? { start, end } : null;
+  const stretch = new Float64Array(2);
+  if (!abutmentSpan(boxesOf([target, neighbour]), 0, 1, side, stretch, 0)) return null;
+  return { start: stretch[0] as number, end: stretch[1] as number };
 }
 
 /** Length of a rectangle's side (m). */
@@ -45,7 +23,7 @@ export function sideLength(rect: Rect, side: Side): number {
 /**
  * {@link abutmentOnSide} for two boxes of a table, without allocating: when box `neighbour` abuts side
  * `side` of box `target`, writes the covered stretch (from the side's start, m) to `out[at]` and
- * `out[at + 1]` and returns true. The arithmetic is the same, so both give the same answer.
+ * `out[at + 1]` and returns true.
  */
 export function abutmentSpan(
   boxes: Boxes,

@@ -1,7 +1,5 @@
-import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { abutmentOnSide, abutmentSpan, sideLength, type Side } from '../../src/geometry/abutment';
-import { boxesOf } from '../../src/geometry/blockTable';
+import { abutmentOnSide, sideLength, type Side } from '../../src/geometry/abutment';
 import { ABUTMENT_TOLERANCE, type Rect } from '../../src/geometry/rect';
 
 const rect = (x: number, y: number, width: number, height: number): Rect => ({ x, y, width, height });
@@ -53,25 +51,5 @@ describe('abutmentOnSide', () => {
       sideLength(r, 'left'),
       sideLength(r, 'right'),
     ]).toEqual([3, 3, 7, 7]);
-  });
-});
-
-describe('abutmentSpan (the table form used by evaluate)', () => {
-  const side = fc.constantFrom<Side>('top', 'bottom', 'left', 'right');
-  // Micrometre lattice, so that abutting and overlapping pairs are common.
-  const box = fc
-    .tuple(fc.integer({ min: 0, max: 20 }), fc.integer({ min: 0, max: 20 }), fc.nat(12), fc.nat(12))
-    .map(([x, y, w, h]) => rect(x * 1e-6, y * 1e-6, w * 1e-6, h * 1e-6));
-
-  it('gives the same stretch as abutmentOnSide for every pair and side', () => {
-    fc.assert(
-      fc.property(box, box, side, (target, neighbour, s) => {
-        const out = new Float64Array(2);
-        const found = abutmentSpan(boxesOf([target, neighbour]), 0, 1, s, out, 0);
-        const expected = abutmentOnSide(target, neighbour, s);
-        expect(found ? { start: out[0], end: out[1] } : null).toEqual(expected);
-      }),
-      { numRuns: 2000 },
-    );
   });
 });
