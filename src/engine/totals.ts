@@ -20,8 +20,13 @@ const BAND_GRID = 1e-9;
  * the largest word-line count among its mats, not the sum. Common practice (no source).
  */
 export function refreshRows(table: BlockTable): number {
-  // Bands by axis and start (on a 1 nm grid, as one exact integer), then by extent.
+  // Bands by axis and start (on a 1 nm grid, as one exact integer), then by extent. Mats of one band
+  // mostly follow each other in a tiled design, so the band of the previous mat is tried first.
   const bands = new Map<number, Map<number, number>>();
+  let lastKey = Number.NaN;
+  let lastExtent = Number.NaN;
+  let lastBand: Map<number, number> | null = null;
+  let lastRows = 0;
   for (let i = 0; i < table.count; i++) {
     if (table.type[i] !== MAT_CODE) continue;
     const kind = table.kinds[table.kindOf[i] as number];
@@ -32,12 +37,25 @@ export function refreshRows(table: BlockTable): number {
       (vertical ? (table.height[i] as number) : (table.width[i] as number)) / BAND_GRID,
     );
     const key = start * 2 + (vertical ? 1 : 0);
+    const wordlines = kind.geometry.wordlineCount;
+    if (key === lastKey && extent === lastExtent && lastBand) {
+      if (wordlines > lastRows) {
+        lastRows = wordlines;
+        lastBand.set(extent, wordlines);
+      }
+      continue;
+    }
     let byExtent = bands.get(key);
     if (!byExtent) {
       byExtent = new Map();
       bands.set(key, byExtent);
     }
-    byExtent.set(extent, Math.max(byExtent.get(extent) ?? 0, kind.geometry.wordlineCount));
+    const rows = Math.max(byExtent.get(extent) ?? 0, wordlines);
+    byExtent.set(extent, rows);
+    lastKey = key;
+    lastExtent = extent;
+    lastBand = byExtent;
+    lastRows = rows;
   }
   let rows = 0;
   for (const byExtent of bands.values()) for (const r of byExtent.values()) rows += r;
