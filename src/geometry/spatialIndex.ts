@@ -3,7 +3,8 @@ import { bottom, right, type Rect } from './rect';
 
 /**
  * A static spatial index over rectangles (a packed Hilbert R-tree from the flatbush package), so that
- * "who touches this mat" costs O(log n) and evaluating a whole die stays O(n log n).
+ * "what lies under this point" or "who touches this box" costs O(log n): hit-testing on the canvas and
+ * the live preview's queries. A whole-die evaluation finds all neighbours at once with neighbourGrid.ts.
  */
 export interface SpatialIndex {
   /** Indices of the rectangles whose boxes meet the query box grown by `margin` on every side. */
