@@ -12,6 +12,7 @@ import { formatQuantity } from '../model/units';
 import { useAppStore } from '../store/useAppStore';
 import { QuantityField } from './QuantityField';
 import { useRunCommand } from './useRunCommand';
+import { SelectField } from './SelectField';
 
 /** The design's cell definitions: pick one, copy it, edit its pitches, capacitance and read path. */
 export function CellsPanel() {
@@ -27,21 +28,13 @@ export function CellsPanel() {
   return (
     <section className="panel" aria-labelledby="cells-heading">
       <h2 id="cells-heading">Cells</h2>
-      <div className="field">
-        <label htmlFor="cell-choice">Cell</label>
-        <select
-          id="cell-choice"
-          data-testid="cell-choice"
-          value={cell.id}
-          onChange={(e) => setChosen(e.target.value)}
-        >
-          {design.cells.map((c) => (
-            <option key={c.id} value={c.id}>
-              {c.name}
-            </option>
-          ))}
-        </select>
-      </div>
+      <SelectField
+        id="cell-choice"
+        label="Cell"
+        value={cell.id}
+        options={design.cells.map((c) => ({ value: c.id, label: c.name }))}
+        onChange={setChosen}
+      />
       <p className="hint" data-testid="cell-summary">
         {CELL_KIND_LABEL[cell.kind]}, {cell.bitlineArchitecture} bit lines,{' '}
         {formatQuantity(footprintInF2(cell, F), 'ratio', 3)} F² (

@@ -1,10 +1,17 @@
 import { applyBuiltinProcess, setOffsetStacking, setProcessValue } from '../commands/processCommands';
 import { setOperatingValue } from '../commands/setOperatingValue';
 import { BUILTIN_PROCESSES } from '../model/builtins';
+import type { OffsetStacking } from '../model/process';
 import { OPERATING_FIELDS, PROCESS_FIELDS } from '../model/fieldCatalog';
 import { useAppStore } from '../store/useAppStore';
 import { QuantityField } from './QuantityField';
+import { SelectField, type SelectOption } from './SelectField';
 import { useRunCommand } from './useRunCommand';
+
+const STACKING_OPTIONS: readonly SelectOption<OffsetStacking>[] = [
+  { value: 'linear', label: 'linearly (worst case)' },
+  { value: 'rss', label: 'as root sum of squares' },
+];
 
 /** The design's own process profile and operating conditions, with built-ins to start from. */
 export function ProcessPanel() {
@@ -18,22 +25,14 @@ export function ProcessPanel() {
     <>
       <section className="panel" aria-labelledby="process-heading">
         <h2 id="process-heading">Process</h2>
-        <div className="field">
-          <label htmlFor="builtin-process">Start from</label>
-          <select
-            id="builtin-process"
-            data-testid="builtin-process"
-            value={builtin ? builtin.id : ''}
-            onChange={(e) => run(applyBuiltinProcess, { processId: e.target.value })}
-          >
-            {!builtin && <option value="">(own profile)</option>}
-            {BUILTIN_PROCESSES.map((p) => (
-              <option key={p.id} value={p.id}>
-                {p.name}
-              </option>
-            ))}
-          </select>
-        </div>
+        <SelectField
+          id="builtin-process"
+          label="Start from"
+          value={builtin ? builtin.id : null}
+          noValueLabel="(own profile)"
+          options={BUILTIN_PROCESSES.map((p) => ({ value: p.id, label: p.name }))}
+          onChange={(processId) => run(applyBuiltinProcess, { processId })}
+        />
         <p className="hint">{process.description}</p>
         <div className="panel-actions">
           <button
@@ -57,19 +56,13 @@ export function ProcessPanel() {
             onCommit={(value) => run(setProcessValue, { field: f.key, value })}
           />
         ))}
-        <div className="field">
-          <label htmlFor="offset-stacking">Offset and noise add</label>
-          <select
-            id="offset-stacking"
-            value={process.offsetStacking}
-            onChange={(e) =>
-              run(setOffsetStacking, { stacking: e.target.value === 'rss' ? 'rss' : 'linear' })
-            }
-          >
-            <option value="linear">linearly (worst case)</option>
-            <option value="rss">as root sum of squares</option>
-          </select>
-        </div>
+        <SelectField
+          id="offset-stacking"
+          label="Offset and noise add"
+          value={process.offsetStacking}
+          options={STACKING_OPTIONS}
+          onChange={(stacking) => run(setOffsetStacking, { stacking })}
+        />
       </section>
       <section className="panel" aria-labelledby="operating-heading">
         <h2 id="operating-heading">Operating conditions</h2>

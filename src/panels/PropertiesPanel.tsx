@@ -2,19 +2,12 @@ import { setBlockProperties, type BlockPropertiesPatch } from '../commands/setBl
 import { setMatCellCounts } from '../commands/setMatCellCounts';
 import { matGeometry } from '../geometry/matGeometry';
 import { blockRect } from '../geometry/placedBlocks';
-import {
-  BITLINE_AXES,
-  BLOCK_TYPE_LABEL,
-  isMat,
-  type BitlineAxis,
-  type Block,
-  type Mat,
-  type Strip,
-} from '../model/block';
+import { BITLINE_AXES, BLOCK_TYPE_LABEL, isMat, type Block, type Mat, type Strip } from '../model/block';
 import { formatBits, formatQuantity } from '../model/units';
 import { useAppStore } from '../store/useAppStore';
 import { NameField } from './NameField';
 import { QuantityField } from './QuantityField';
+import { SelectField } from './SelectField';
 import { useRunCommand } from './useRunCommand';
 
 /** The one value all blocks share, or null when they differ. */
@@ -141,38 +134,22 @@ export function PropertiesPanel() {
             value={shared(mats, (m) => m.cellsPerWordline)}
             onCommit={(v) => counts({ cellsPerWordline: v })}
           />
-          <div className="field">
-            <label htmlFor="mat-cell">Cell</label>
-            <select
-              id="mat-cell"
-              data-testid="mat-cell"
-              value={shared(mats, (m) => m.cellId) ?? ''}
-              onChange={(e) => patch({ cellId: e.target.value })}
-            >
-              {shared(mats, (m) => m.cellId) === null && <option value="">mixed</option>}
-              {design.cells.map((c) => (
-                <option key={c.id} value={c.id}>
-                  {c.name}
-                </option>
-              ))}
-            </select>
-          </div>
-          <div className="field">
-            <label htmlFor="mat-axis">Bit lines run</label>
-            <select
-              id="mat-axis"
-              data-testid="mat-axis"
-              value={shared(mats, (m) => m.bitlineAxis) ?? ''}
-              onChange={(e) => patch({ bitlineAxis: e.target.value as BitlineAxis })}
-            >
-              {shared(mats, (m) => m.bitlineAxis) === null && <option value="">mixed</option>}
-              {BITLINE_AXES.map((a) => (
-                <option key={a} value={a}>
-                  {a}
-                </option>
-              ))}
-            </select>
-          </div>
+          <SelectField
+            id="mat-cell"
+            label="Cell"
+            value={shared(mats, (m) => m.cellId)}
+            noValueLabel="mixed"
+            options={design.cells.map((c) => ({ value: c.id, label: c.name }))}
+            onChange={(cellId) => patch({ cellId })}
+          />
+          <SelectField
+            id="mat-axis"
+            label="Bit lines run"
+            value={shared(mats, (m) => m.bitlineAxis)}
+            noValueLabel="mixed"
+            options={BITLINE_AXES.map((a) => ({ value: a, label: a }))}
+            onChange={(bitlineAxis) => patch({ bitlineAxis })}
+          />
           <div className="field">
             <label htmlFor="mat-mirrored">Mirrored</label>
             <input

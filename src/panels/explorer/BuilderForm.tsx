@@ -7,6 +7,7 @@ import { CELL_KIND_LABEL, CELL_KINDS, type BitlineArchitecture, type CellKind } 
 import type { Design } from '../../model/design';
 import { useAppStore } from '../../store/useAppStore';
 import { QuantityField } from '../QuantityField';
+import { SelectField } from '../SelectField';
 
 interface Props {
   readonly design: Design;
@@ -67,66 +68,34 @@ export function BuilderForm({ design, settings, onBuilt }: Props) {
   return (
     <section className="panel" aria-labelledby="builder-heading">
       <h2 id="builder-heading">Build one partition</h2>
-      <div className="field">
-        <label htmlFor="build-kind">Cell kind</label>
-        <select
-          id="build-kind"
-          data-testid="build-kind"
-          value={kind}
-          onChange={(e) => setKind(e.target.value as CellKind)}
-        >
-          {kinds.map((k) => (
-            <option key={k} value={k}>
-              {CELL_KIND_LABEL[k]}
-            </option>
-          ))}
-        </select>
-      </div>
-      <div className="field">
-        <label htmlFor="build-architecture">Bit lines</label>
-        <select
-          id="build-architecture"
-          data-testid="build-architecture"
-          value={architecture}
-          onChange={(e) => setArchitecture(e.target.value as BitlineArchitecture)}
-        >
-          {architectures.map((a) => (
-            <option key={a} value={a}>
-              {a}
-            </option>
-          ))}
-        </select>
-      </div>
-      <div className="field">
-        <label htmlFor="build-cell">Cell</label>
-        <select
-          id="build-cell"
-          data-testid="build-cell"
-          value={cell?.id ?? ''}
-          onChange={(e) => setCell(e.target.value)}
-        >
-          {cells.map((c) => (
-            <option key={c.id} value={c.id}>
-              {c.name}
-            </option>
-          ))}
-        </select>
-      </div>
-      <div className="field">
-        <label htmlFor="build-process">Process</label>
-        <select
-          id="build-process"
-          data-testid="build-process"
-          value={processId}
-          onChange={(e) => setProcessId(e.target.value)}
-        >
-          {choices.map((c) => (
-            <option key={c.id} value={c.id}>
-              {c.label}
-            </option>
-          ))}
-        </select>
-      </div>
+      <SelectField<CellKind>
+        id="build-kind"
+        label="Cell kind"
+        value={kind}
+        options={kinds.map((k) => ({ value: k, label: CELL_KIND_LABEL[k] }))}
+        onChange={setKind}
+      />
+      <SelectField<BitlineArchitecture>
+        id="build-architecture"
+        label="Bit lines"
+        value={architecture ?? null}
+        options={architectures.map((a) => ({ value: a, label: a }))}
+        onChange={setArchitecture}
+      />
+      <SelectField
+        id="build-cell"
+        label="Cell"
+        value={cell?.id ?? null}
+        options={cells.map((c) => ({ value: c.id, label: c.name }))}
+        onChange={setCell}
+      />
+      <SelectField
+        id="build-process"
+        label="Process"
+        value={processId}
+        options={choices.map((c) => ({ value: c.id, label: c.label }))}
+        onChange={setProcessId}
+      />
       <QuantityField
         id="build-cells-per-bitline"
         label="Cells per bit line"

@@ -1,6 +1,7 @@
-import { AXIS_FIGURES, FIGURE_INFO, type AxisFigure } from '../../explore/figures';
+import { AXIS_FIGURES, FIGURE_INFO } from '../../explore/figures';
 import { useExploreStore } from '../../store/useExploreStore';
 import { QuantityField } from '../QuantityField';
+import { SelectField } from '../SelectField';
 
 /** Which figures go on the axes, and the limits that shade infeasible points. */
 export function ChartControls({ minMargin }: { readonly minMargin: number }) {
@@ -9,23 +10,24 @@ export function ChartControls({ minMargin }: { readonly minMargin: number }) {
   const maxDelay = useExploreStore((s) => s.constraints.maxDelay);
   const setAxes = useExploreStore((s) => s.setAxes);
   const setConstraints = useExploreStore((s) => s.setConstraints);
-  const axisSelect = (id: string, label: string, value: AxisFigure, pick: (a: AxisFigure) => void) => (
-    <div className="field">
-      <label htmlFor={id}>{label}</label>
-      <select id={id} data-testid={id} value={value} onChange={(e) => pick(e.target.value as AxisFigure)}>
-        {AXIS_FIGURES.map((key) => (
-          <option key={key} value={key}>
-            {FIGURE_INFO[key].label}
-          </option>
-        ))}
-      </select>
-    </div>
-  );
+  const options = AXIS_FIGURES.map((key) => ({ value: key, label: FIGURE_INFO[key].label }));
   return (
     <section className="panel" aria-labelledby="chart-heading">
       <h2 id="chart-heading">Chart</h2>
-      {axisSelect('x-axis', 'Horizontal', xAxis, (a) => setAxes({ xAxis: a }))}
-      {axisSelect('y-axis', 'Vertical', yAxis, (a) => setAxes({ yAxis: a }))}
+      <SelectField
+        id="x-axis"
+        label="Horizontal"
+        value={xAxis}
+        options={options}
+        onChange={(a) => setAxes({ xAxis: a })}
+      />
+      <SelectField
+        id="y-axis"
+        label="Vertical"
+        value={yAxis}
+        options={options}
+        onChange={(a) => setAxes({ yAxis: a })}
+      />
       <QuantityField
         id="constraint-min-margin"
         label="Minimum margin"

@@ -13,6 +13,7 @@ import { useExploreStore } from '../../store/useExploreStore';
 import { QuantityField } from '../QuantityField';
 import { RangeField } from './RangeField';
 import { seriesColour } from './seriesStyle';
+import { SelectField } from '../SelectField';
 
 const STRIP_FIELDS: readonly { key: keyof StripSizes; label: string; optional: boolean }[] = [
   { key: 'senseAmpStripHeight', label: 'Sense-amp strip height', optional: false },
@@ -32,21 +33,13 @@ export function BankControls({ settings, onChange }: Omit<Props, 'design'>) {
   return (
     <section className="panel" aria-labelledby="bank-heading">
       <h2 id="bank-heading">Bank</h2>
-      <div className="field">
-        <label htmlFor="target-capacity">Capacity</label>
-        <select
-          id="target-capacity"
-          data-testid="target-capacity"
-          value={settings.targetBits}
-          onChange={(e) => onChange({ ...settings, targetBits: Number(e.target.value) })}
-        >
-          {TARGET_CAPACITIES.map((bits) => (
-            <option key={bits} value={bits}>
-              {formatBits(bits)}
-            </option>
-          ))}
-        </select>
-      </div>
+      <SelectField
+        id="target-capacity"
+        label="Capacity"
+        value={String(settings.targetBits)}
+        options={TARGET_CAPACITIES.map((bits) => ({ value: String(bits), label: formatBits(bits) }))}
+        onChange={(bits) => onChange({ ...settings, targetBits: Number(bits) })}
+      />
       {STRIP_FIELDS.map((f) => (
         <QuantityField
           key={f.key}
