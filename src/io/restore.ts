@@ -15,7 +15,8 @@ function fail(...errors: string[]): RestoreResult {
   return { ok: false, errors };
 }
 
-function formatPath(path: readonly PropertyKey[]): string {
+/** A zod issue path as restore messages write it: `blocks[3].cellsPerBitline`. */
+export function formatPath(path: readonly PropertyKey[]): string {
   let text = '';
   for (const key of path) {
     text += typeof key === 'number' ? `[${key}]` : `${text ? '.' : ''}${String(key)}`;

@@ -3,6 +3,7 @@ import { blockSchema } from './block';
 import { cellDefinitionSchema, cellPitches, crossingOccupancy, type CellDefinition } from './cell';
 import { operatingConditionsSchema } from './operating';
 import { processProfileSchema } from './process';
+import { clipForMessage } from './messageText';
 import { MAX_COORDINATE } from './schemaParts';
 
 /** The name every Matloom design file carries, so that a stray JSON file is recognised as not ours. */
@@ -27,6 +28,25 @@ const designFields = {
   blocks: z.array(blockSchema).max(MAX_BLOCKS),
 };
 
+/**
+ * Why a mat is too long to keep, or null: a mat's size follows from its cells, so it is held within the
+ * same bound as positions ({@link MAX_COORDINATE}). Shared by the schema and the edit check.
+ */
+export function matLengthProblem(
+  mat: { id: string; cellsPerBitline: number; cellsPerWordline: number },
+  cell: CellDefinition,
+  featureSize: number,
+): string | null {
+  const { bitlinePitch, wordlinePitch } = cellPitches(cell, featureSize);
+  const occupancy = crossingOccupancy(cell.bitlineArchitecture);
+  const longest = Math.max(
+    (mat.cellsPerBitline / occupancy) * wordlinePitch,
+    (mat.cellsPerWordline / occupancy) * bitlinePitch,
+  );
+  if (!(longest > MAX_COORDINATE)) return null;
+  return `mat "${clipForMessage(mat.id)}" would be ${(longest * 1e3).toFixed(1)} mm long; the limit is ${MAX_COORDINATE * 1e3} mm`;
+}
+
 /** Checks that ids are unique, that every mat names a defined cell, and that no mat is absurdly long. */
 function checkDesignIds(
   design: {
@@ -42,7 +62,7 @@ function checkDesignIds(
       ctx.addIssue({
         code: 'custom',
         path: ['cells', index, 'id'],
-        message: `duplicate cell id "${cell.id}"`,
+        message: `duplicate cell id "${clipForMessage(cell.id)}"`,
       });
     }
     cellIds.add(cell.id);
@@ -54,7 +74,7 @@ function checkDesignIds(
       ctx.addIssue({
         code: 'custom',
         path: ['blocks', index, 'id'],
-        message: `duplicate block id "${block.id}"`,
+        message: `duplicate block id "${clipForMessage(block.id)}"`,
       });
     }
     blockIds.add(block.id);
@@ -64,24 +84,12 @@ function checkDesignIds(
       ctx.addIssue({
         code: 'custom',
         path: ['blocks', index, 'cellId'],
-        message: `mat "${block.id}" uses cell "${block.cellId}", which the design does not define`,
+        message: `mat "${clipForMessage(block.id)}" uses cell "${clipForMessage(block.cellId)}", which the design does not define`,
       });
       return;
     }
-    // A mat's size follows from its cells; keep it within the same bound as positions.
-    const { bitlinePitch, wordlinePitch } = cellPitches(cell, design.process.featureSize);
-    const occupancy = crossingOccupancy(cell.bitlineArchitecture);
-    const longest = Math.max(
-      (block.cellsPerBitline / occupancy) * wordlinePitch,
-      (block.cellsPerWordline / occupancy) * bitlinePitch,
-    );
-    if (longest > MAX_COORDINATE) {
-      ctx.addIssue({
-        code: 'custom',
-        path: ['blocks', index],
-        message: `mat "${block.id}" would be ${(longest * 1e3).toFixed(1)} mm long; the limit is ${MAX_COORDINATE * 1e3} mm`,
-      });
-    }
+    const problem = matLengthProblem(block, cell, design.process.featureSize);
+    if (problem) ctx.addIssue({ code: 'custom', path: ['blocks', index], message: problem });
   });
 }
 
@@ -94,38 +102,51 @@ export type VariantDesign = z.infer<typeof variantDesignSchema>;
  * keeps every variant in order, the active one as a null placeholder. Absent means a single variant,
  * so files written before variants existed load unchanged.
  */
-export const variantShelfSchema = z
-  .object({
-    activeId: z.string().min(1).max(80),
-    entries: z
-      .array(z.object({ id: z.string().min(1).max(80), design: variantDesignSchema.nullable() }))
-      .min(1)
-      .max(MAX_VARIANTS),
-  })
-  .superRefine((shelf, ctx) => {
-    const ids = new Set<string>();
-    shelf.entries.forEach((entry, index) => {
-      if (ids.has(entry.id)) {
+export const variantShelfSchema = shelfSchemaWith(variantDesignSchema);
+export type VariantShelf = z.infer<typeof variantShelfSchema>;
+
+/**
+ * The shelf's own rules (ids, order, which entry is the active placeholder) with each stored design
+ * checked by `entryDesign`. The edit check passes a schema that accepts any object and checks the
+ * designs that changed itself, so that a small edit does not re-validate every variant.
+ */
+export function shelfSchemaWith(entryDesign: z.ZodType<VariantDesign>) {
+  return z
+    .object({
+      activeId: z.string().min(1).max(80),
+      entries: z
+        .array(z.object({ id: z.string().min(1).max(80), design: entryDesign.nullable() }))
+        .min(1)
+        .max(MAX_VARIANTS),
+    })
+    .superRefine((shelf, ctx) => {
+      const ids = new Set<string>();
+      shelf.entries.forEach((entry, index) => {
+        if (ids.has(entry.id)) {
+          ctx.addIssue({
+            code: 'custom',
+            path: ['entries', index, 'id'],
+            message: `duplicate variant id "${clipForMessage(entry.id)}"`,
+          });
+        }
+        ids.add(entry.id);
+        if ((entry.design === null) !== (entry.id === shelf.activeId)) {
+          ctx.addIssue({
+            code: 'custom',
+            path: ['entries', index, 'design'],
+            message: 'exactly the active variant is stored as the document itself (design null)',
+          });
+        }
+      });
+      if (!ids.has(shelf.activeId)) {
         ctx.addIssue({
           code: 'custom',
-          path: ['entries', index, 'id'],
-          message: `duplicate variant id "${entry.id}"`,
-        });
-      }
-      ids.add(entry.id);
-      if ((entry.design === null) !== (entry.id === shelf.activeId)) {
-        ctx.addIssue({
-          code: 'custom',
-          path: ['entries', index, 'design'],
-          message: 'exactly the active variant is stored as the document itself (design null)',
+          path: ['activeId'],
+          message: `no variant "${clipForMessage(shelf.activeId)}"`,
         });
       }
     });
-    if (!ids.has(shelf.activeId)) {
-      ctx.addIssue({ code: 'custom', path: ['activeId'], message: `no variant "${shelf.activeId}"` });
-    }
-  });
-export type VariantShelf = z.infer<typeof variantShelfSchema>;
+}
 
 export const designSchema = z
   .object({ ...designFields, variants: variantShelfSchema.optional() })

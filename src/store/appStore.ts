@@ -1,6 +1,7 @@
 import { create } from 'zustand';
 import type { Command } from '../commands/command';
 import { evaluate, type Report } from '../engine';
+import { editProblems } from '../io/editCheck';
 import type { Design } from '../model/design';
 import { demoDesign } from '../model/demoDesign';
 import { pushHistory, redoHistory, startHistory, undoHistory, type History } from './history';
@@ -73,6 +74,12 @@ export function createAppStore(initial: Design = demoDesign()) {
       if (result.design === history.present) {
         set({ lastError: null });
         return true;
+      }
+      // Every accepted edit must still restore (reload, file, CLI): refuse it with restore's words.
+      const problems = editProblems(result.design, history.present);
+      if (problems.length > 0) {
+        set({ lastError: `${command.label} was refused: ${problems.slice(0, 3).join('; ')}` });
+        return false;
       }
       set({
         ...documentState(pushHistory(history, result.design)),
