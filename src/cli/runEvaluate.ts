@@ -1,4 +1,4 @@
-import { evaluate } from '../engine/evaluate';
+import { evaluate } from '../engine';
 import { matFiguresCsv } from '../io/matCsv';
 import { MAX_DESIGN_TEXT_LENGTH, restoreDesign } from '../io/restore';
 import { reportTable } from '../io/reportTable';

@@ -1,54 +1,54 @@
 /**
- * Matloom's physics engine: pure functions from a validated design to figures in SI units.
- * Nothing here knows about React, Konva, zustand or the DOM.
+ * Matloom's physics engine: pure functions from a validated design to figures in SI units. Nothing here
+ * knows about React, Konva, zustand or the DOM. Three parts: `physics/` (one law per file, plain numbers
+ * in and out), `evaluation/` (evaluate(), the live preview, connectivity, checks, totals, the mat table)
+ * and `figures/` (the one figure catalogue every panel, export and table loops over). Every other folder
+ * imports the engine through this file only.
  */
-export { evaluate, findMatReport } from './evaluate';
-export { bitlineCapacitance, type BitlineCapacitance } from './bitline';
-export { chargeTransferRatio, chargeSharingSignal, readSignals, type ReadSignals } from './sensing';
-export { storedHighLevel, thresholdWithBodyEffect, type StoredHighLevel } from './storedLevel';
-export { pelgromSigma, offsetSigmaMultiplier, stackOffsets } from './offset';
-export { couplingNoise } from './noise';
+
+// physics: plain numbers in, plain numbers out
+export { bitlineCapacitance, type BitlineCapacitance } from './physics/bitline';
+export { chargeTransferRatio, chargeSharingSignal, readSignals, type ReadSignals } from './physics/sensing';
+export { storedHighLevel, thresholdWithBodyEffect, type StoredHighLevel } from './physics/storedLevel';
+export { pelgromSigma, offsetSigmaMultiplier, stackOffsets } from './physics/offset';
+export { couplingNoise } from './physics/noise';
 export {
   leakageAtTemperature,
   activationEnergyForRatio,
   retentionTime,
   leakageDroop,
   BOLTZMANN,
-} from './retention';
+} from './physics/retention';
 export {
   refreshInterval,
   rowsPerRefreshCommand,
   refreshCycleTime,
   refreshBusyFraction,
   refreshPower,
-} from './refresh';
-export { drivenLineDelay, chargeSharingDelay, LUMPED_RC_50, DISTRIBUTED_RC_50 } from './delay';
-export { bitlinePairEnergy, chargingEnergy } from './energy';
-export { gainReadCurrent, gainReadSignals } from './gainRead';
-export { inverseNormal, upperTailQuantile } from './statistics';
+} from './physics/refresh';
+export { drivenLineDelay, chargeSharingDelay, LUMPED_RC_50, DISTRIBUTED_RC_50 } from './physics/delay';
+export { bitlinePairEnergy, chargingEnergy } from './physics/energy';
+export { gainReadCurrent, gainReadSignals } from './physics/gainRead';
+export { inverseNormal, upperTailQuantile } from './physics/statistics';
+
+// evaluation: a design in, a report out
+export { evaluate, findMatReport } from './evaluation/evaluate';
+export { matPhysics, senseAmpsOfMat, type DesignContext } from './evaluation/matPhysics';
+export { preparePreview, previewReport, type PreviewBase } from './evaluation/preview';
 export {
-  explainMatFigure,
-  matFigureApplies,
-  MAT_FIGURES,
-  MAT_FIGURE_GROUPS,
-  type MatFigureKey,
-} from './explainMat';
-export { explainTotal, TOTAL_FIGURES, TOTAL_FIGURE_GROUPS, type TotalFigureKey } from './explainTotals';
-export type { Explanation, ExplanationInput } from './explanation';
-export type {
-  ActivationEnergy,
-  ChargeSharingRead,
-  Finding,
-  FindingKind,
-  GainCellRead,
-  MatFigures,
-  MatReport,
-  RefreshFigures,
-  Report,
-  Severity,
-  Totals,
-} from './report';
-export { preparePreview, previewReport, type PreviewBase } from './preview';
+  FINDING_KINDS,
+  type ActivationEnergy,
+  type ChargeSharingRead,
+  type Finding,
+  type FindingKind,
+  type GainCellRead,
+  type MatFigures,
+  type MatReport,
+  type RefreshFigures,
+  type Report,
+  type Severity,
+  type Totals,
+} from './evaluation/report';
 export {
   allMats,
   figuresAt,
@@ -58,4 +58,37 @@ export {
   senseAmpStripIdsOf,
   wordlineDriverIdsOf,
   type MatTable,
-} from './matTable';
+} from './evaluation/matTable';
+
+// figures: the one catalogue
+export type { Explanation, ExplanationInput } from './figures/explanation';
+export type { FigureEntry, ScaledColumn, Working } from './figures/figure';
+export { MAT_FIGURE_GROUPS, type MatFigureEntry, type MatFigureGroup } from './figures/matFigure';
+export {
+  explainMatFigure,
+  matFigureApplies,
+  matFigureEntry,
+  MAT_FIGURE_CATALOGUE,
+  MAT_FIGURE_PANEL,
+  MAT_FIGURES,
+  type MatFigureKey,
+} from './figures/matFigures';
+export { TOTAL_FIGURE_GROUPS, type TotalFigureEntry, type TotalFigureGroup } from './figures/totalFigure';
+export {
+  explainTotal,
+  totalFigureEntry,
+  TOTAL_FIGURE_CATALOGUE,
+  TOTAL_FIGURE_PANEL,
+  TOTAL_FIGURES,
+  type TotalFigureKey,
+} from './figures/totalFigures';
+export type { BankFigureEntry, FigureContext, FigureKey, PartitionFigures } from './figures/bankFigure';
+export {
+  AXIS_FIGURES,
+  BANK_FIGURE_CATALOGUE,
+  bankFigureEntry,
+  explainFigure,
+  TABLE_FIGURES,
+  type AxisFigure,
+} from './figures/bankFigures';
+export { figuresFromReport } from './figures/bankFromReport';

@@ -1,5 +1,4 @@
-import type { FindingKind } from '../engine/report';
-import { FIGURE_INFO, type AxisFigure, type PartitionFigures } from './figures';
+import { bankFigureEntry, type AxisFigure, type FindingKind, type PartitionFigures } from '../engine';
 import { paretoFront } from './pareto';
 import type { SweepPoint } from './sweep';
 
@@ -92,7 +91,7 @@ export function chartModel(
     });
   });
   const feasibleIndices = plotted.map((p, i) => (p.state === 'feasible' ? i : -1)).filter((i) => i >= 0);
-  const direction = (axis: AxisFigure) => (FIGURE_INFO[axis].better === 'higher' ? 'max' : 'min');
+  const direction = (axis: AxisFigure) => (bankFigureEntry(axis).better === 'higher' ? 'max' : 'min');
   const front = paretoFront(
     feasibleIndices.map((i) => plotted[i] ?? { x: Number.NaN, y: Number.NaN }),
     direction(xAxis),

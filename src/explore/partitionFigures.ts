@@ -1,23 +1,26 @@
 import type { BuildSpec } from '../build/buildPartition';
 import { planPartition, type PartitionPlan } from '../build/partitionPlan';
-import { matPhysics, senseAmpsOfMat, type DesignContext } from '../engine/matPhysics';
-import { offsetSigmaMultiplier } from '../engine/offset';
 import {
+  leakageAtTemperature,
+  matPhysics,
+  offsetSigmaMultiplier,
   refreshBusyFraction,
   refreshCycleTime,
   refreshInterval,
   refreshPower,
   rowsPerRefreshCommand,
-} from '../engine/refresh';
-import type { FindingKind } from '../engine/report';
-import { leakageAtTemperature } from '../engine/retention';
-import { storedHighLevel, type StoredHighLevel } from '../engine/storedLevel';
+  senseAmpsOfMat,
+  storedHighLevel,
+  type DesignContext,
+  type FindingKind,
+  type PartitionFigures,
+  type StoredHighLevel,
+} from '../engine';
 import { matGeometry, matRect } from '../geometry/matGeometry';
 import type { PlacedMat } from '../geometry/placedBlocks';
 import type { Mat } from '../model/block';
 import type { OperatingConditions } from '../model/operating';
 import type { ProcessProfile } from '../model/process';
-import type { PartitionFigures } from './figures';
 
 /** The spec of one partition to assess: a build spec without a library or name. */
 export type PartitionPointSpec = Omit<BuildSpec, 'cells' | 'name'>;

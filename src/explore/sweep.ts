@@ -3,7 +3,7 @@ import type { StripSizes } from '../build/partitionPlan';
 import type { CellDefinition } from '../model/cell';
 import type { OperatingConditions } from '../model/operating';
 import type { ProcessProfile } from '../model/process';
-import type { PartitionFigures } from './figures';
+import type { PartitionFigures } from '../engine';
 import { partitionFigures, ProcessCache } from './partitionFigures';
 
 /**

@@ -1,46 +1,39 @@
-import { matAt } from '../engine/matTable';
-import type { MatReport, Report } from '../engine/report';
+import { matAt, MAT_FIGURE_CATALOGUE, type MatFigureEntry, type MatReport, type Report } from '../engine';
 
-/** One CSV column: header (with its unit) and how to read it from a mat's figures (SI). */
+/** One CSV column: header (with its unit) and how to read it from a mat (SI). */
 interface Column {
   readonly header: string;
   readonly value: (m: MatReport) => string | number;
 }
 
-const read = (m: MatReport, pick: 'high' | 'low'): number =>
-  m.figures.read.kind === 'chargeSharing'
-    ? pick === 'high'
-      ? m.figures.read.signalHigh
-      : m.figures.read.signalLow
-    : pick === 'high'
-      ? m.figures.read.dropHigh
-      : m.figures.read.dropLow;
+/**
+ * The figure columns come from the catalogue (engine/figures): every entry with a `csvHeader`, in catalogue
+ * order. Entries that share a header share the column, each filling it for the mats of its read style
+ * (a 1T1C mat's signal, a gain cell's drop); a figure the mat does not have leaves the field empty.
+ */
+function figureColumns(): Column[] {
+  const byHeader = new Map<string, MatFigureEntry[]>();
+  for (const entry of MAT_FIGURE_CATALOGUE) {
+    if (entry.csvHeader === undefined) continue;
+    const shared = byHeader.get(entry.csvHeader);
+    if (shared) shared.push(entry);
+    else byHeader.set(entry.csvHeader, [entry]);
+  }
+  return [...byHeader].map(([header, entries]) => ({
+    header,
+    value: (m) => {
+      const entry = entries.find((e) => e.read === undefined || e.read === m.figures.read.kind);
+      return entry ? entry.value(m.figures) : '';
+    },
+  }));
+}
 
 const COLUMNS: readonly Column[] = [
   { header: 'mat_id', value: (m) => m.matId },
   { header: 'name', value: (m) => m.name },
   { header: 'cell_id', value: (m) => m.figures.cellId },
   { header: 'architecture', value: (m) => m.figures.architecture },
-  { header: 'cells_per_bitline', value: (m) => m.figures.cellsPerBitline },
-  { header: 'cells_per_wordline', value: (m) => m.figures.cellsPerWordline },
-  { header: 'bits', value: (m) => m.figures.bits },
-  { header: 'usable_bits', value: (m) => m.figures.usableBits },
-  { header: 'area_m2', value: (m) => m.figures.area },
-  { header: 'bitline_capacitance_F', value: (m) => m.figures.bitlineCapacitance.total },
-  {
-    header: 'charge_transfer_ratio',
-    value: (m) => (m.figures.read.kind === 'chargeSharing' ? m.figures.read.chargeTransferRatio : ''),
-  },
-  { header: 'signal_or_drop_1_V', value: (m) => read(m, 'high') },
-  { header: 'signal_or_drop_0_V', value: (m) => read(m, 'low') },
-  { header: 'sense_signal_V', value: (m) => m.figures.senseSignal },
-  { header: 'offset_budget_V', value: (m) => m.figures.offsetBudget },
-  { header: 'noise_allowance_V', value: (m) => m.figures.noiseAllowance },
-  { header: 'sense_margin_at_refresh_V', value: (m) => m.figures.senseMarginAtRefresh },
-  { header: 'retention_s', value: (m) => m.figures.retentionTime },
-  { header: 'wordline_delay_s', value: (m) => m.figures.wordlineDelay },
-  { header: 'bitline_delay_s', value: (m) => m.figures.bitlineDelay },
-  { header: 'activation_energy_J', value: (m) => m.figures.activationEnergy.total },
+  ...figureColumns(),
   { header: 'unsensed_bitlines', value: (m) => m.unsensedBitlines },
   { header: 'undriven_wordlines', value: (m) => m.undrivenWordlines },
 ];

@@ -1,5 +1,11 @@
-import { allMats } from '../engine/matTable';
-import type { MatReport, Report } from '../engine/report';
+import {
+  allMats,
+  MAT_FIGURE_CATALOGUE,
+  TOTAL_FIGURE_CATALOGUE,
+  type MatFigureEntry,
+  type MatReport,
+  type Report,
+} from '../engine';
 import type { Design } from '../model/design';
 import { formatQuantity, formatScaled } from '../model/units';
 import { countFindings, REPORT_CAUTION } from './summary';
@@ -25,85 +31,63 @@ function columns(
 }
 
 /**
- * Per-mat columns. For a gain cell there is no charge-transfer ratio, and ΔV1 / ΔV0 are the read-bit-line
- * drops for a stored 1 and a stored 0.
+ * Per-mat columns: the mat, then every catalogue entry with a `cli` column (engine/figures), then how it is
+ * served. Entries sharing a header share the column: for a gain cell ΔV1 / ΔV0 are the read-bit-line
+ * drops for a stored 1 and a stored 0, and a figure the mat does not have (its charge-transfer ratio) is a dash.
  */
-const MAT_HEADERS = [
-  'mat',
-  'cells/BL',
-  'cells/WL',
-  'bits',
-  'Cbl (fF)',
-  'CTR',
-  'ΔV1 (mV)',
-  'ΔV0 (mV)',
-  'signal (mV)',
-  'margin (mV)',
-  'unsensed BL',
-  'undriven WL',
-] as const;
+interface MatColumn {
+  readonly header: string;
+  readonly text: (m: MatReport) => string;
+}
+
+function figureColumns(): MatColumn[] {
+  const byHeader = new Map<string, MatFigureEntry[]>();
+  for (const entry of MAT_FIGURE_CATALOGUE) {
+    if (entry.cli === undefined) continue;
+    const shared = byHeader.get(entry.cli.header);
+    if (shared) shared.push(entry);
+    else byHeader.set(entry.cli.header, [entry]);
+  }
+  return [...byHeader].map(([header, entries]) => ({
+    header,
+    text: (m) => {
+      const entry = entries.find((e) => e.read === undefined || e.read === m.figures.read.kind);
+      if (!entry) return '—';
+      const value = entry.value(m.figures);
+      const scale = entry.cli?.scale;
+      return scale
+        ? formatScaled(value, scale.prefix, scale.decimals)
+        : formatQuantity(value, entry.quantity);
+    },
+  }));
+}
+
+const MAT_COLUMNS: readonly MatColumn[] = [
+  { header: 'mat', text: (m) => m.matId },
+  ...figureColumns(),
+  { header: 'unsensed BL', text: (m) => formatQuantity(m.unsensedBitlines, 'count') },
+  { header: 'undriven WL', text: (m) => formatQuantity(m.undrivenWordlines, 'count') },
+];
 
 function matRow(m: MatReport): string[] {
-  const r = m.figures.read;
-  const [ctr, high, low] =
-    r.kind === 'chargeSharing'
-      ? [formatScaled(r.chargeTransferRatio, '', 4), r.signalHigh, r.signalLow]
-      : ['—', r.dropHigh, r.dropLow];
-  return [
-    m.matId,
-    formatQuantity(m.figures.cellsPerBitline, 'count'),
-    formatQuantity(m.figures.cellsPerWordline, 'count'),
-    formatQuantity(m.figures.bits, 'count'),
-    formatScaled(m.figures.bitlineCapacitance.total, 'f', 2),
-    ctr,
-    formatScaled(high, 'm', 1),
-    formatScaled(low, 'm', 1),
-    formatScaled(m.figures.senseSignal, 'm', 1),
-    formatScaled(m.figures.senseMarginAtRefresh, 'm', 1),
-    formatQuantity(m.unsensedBitlines, 'count'),
-    formatQuantity(m.undrivenWordlines, 'count'),
-  ];
+  return MAT_COLUMNS.map((c) => c.text(m));
 }
 
 function plural(count: number, word: string): string {
   return `${count} ${word}${count === 1 ? '' : 's'}`;
 }
 
-/** A worst-case figure with the mat it comes from, or a dash when there are no mats. */
-function worstOf(value: string, matId: string | null): string {
-  return matId === null ? '— (no mats)' : `${value} (${matId})`;
-}
-
+/** Every catalogue entry with a `cli` row (engine/figures), in catalogue order. */
 function totalsRows(design: Design, report: Report): [string, string][] {
-  const t = report.totals;
-  const r = t.refresh;
-  const s = report.storedHigh;
-  const q = formatQuantity;
-  const stored = s.limitedByWordline
-    ? `${q(s.level, 'voltage')}, limited by the word line (needs VPP ≥ ${q(s.wordlineHighNeeded, 'voltage')})`
-    : `${q(s.level, 'voltage')} (full array voltage)`;
-  return [
-    ['mats', q(t.matCount, 'count')],
-    ['bits', q(t.bits, 'count')],
-    ['usable bits', q(t.usableBits, 'count')],
-    ['total area (bounding box)', q(t.totalArea, 'area')],
-    ['placed area (blocks summed)', q(t.placedArea, 'area')],
-    ['cell area', q(t.cellArea, 'area')],
-    ['array efficiency', q(t.arrayEfficiency, 'percent')],
-    ['area per bit', q(t.areaPerBit, 'area')],
-    ['area per bit in F²', `${q(t.areaPerBitInF2, 'ratio')} F²`],
-    ['stored 1 level', stored],
-    ['worst sense signal', worstOf(q(t.worstSenseSignal, 'voltage'), t.worstSenseSignalMatId)],
-    ['worst margin after refresh window', worstOf(q(t.worstSenseMargin, 'voltage'), t.worstSenseMarginMatId)],
-    ['shortest retention', t.matCount === 0 ? '— (no mats)' : q(t.shortestRetention, 'time')],
-    ['worst word-line delay', t.matCount === 0 ? '— (no mats)' : q(t.worstWordlineDelay, 'time')],
-    ['operating temperature', q(design.operating.temperature, 'temperature')],
-    ['refresh interval tREFI', q(r.interval, 'time')],
-    ['rows per refresh command', q(r.rowsPerCommand, 'count')],
-    ['refresh cycle time tRFC', q(r.cycleTime, 'time')],
-    ['refresh busy fraction', q(r.busyFraction, 'percent')],
-    ['refresh power', q(r.power, 'power')],
-  ];
+  const rows: [string, string][] = [];
+  for (const entry of TOTAL_FIGURE_CATALOGUE) {
+    if (!entry.cli) continue;
+    const text = entry.cli.text
+      ? entry.cli.text(report, design)
+      : formatQuantity(entry.value(report, design), entry.quantity);
+    rows.push([entry.cli.label, text]);
+  }
+  return rows;
 }
 
 /**
@@ -118,7 +102,14 @@ export function reportTable(design: Design, report: Report): string {
   out.push('');
   out.push(`Mats (${formatQuantity(report.mats.count, 'count')})`);
   if (report.mats.count === 0) out.push('  none');
-  else out.push(...columns(MAT_HEADERS, allMats(report.mats).map(matRow), 1).map((l) => `  ${l}`));
+  else
+    out.push(
+      ...columns(
+        MAT_COLUMNS.map((c) => c.header),
+        allMats(report.mats).map(matRow),
+        1,
+      ).map((l) => `  ${l}`),
+    );
   out.push('');
   out.push('Totals');
   out.push(...columns(['figure', 'value'], totalsRows(design, report), 2).map((l) => `  ${l}`));

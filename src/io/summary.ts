@@ -1,5 +1,15 @@
-import type { Finding, MatFigures, MatReport, Report } from '../engine/report';
-import { allMats, senseAmpStripIdsOf, wordlineDriverIdsOf, type MatTable } from '../engine/matTable';
+import {
+  allMats,
+  MAT_FIGURE_CATALOGUE,
+  senseAmpStripIdsOf,
+  TOTAL_FIGURE_CATALOGUE,
+  wordlineDriverIdsOf,
+  type Finding,
+  type MatFigures,
+  type MatReport,
+  type MatTable,
+  type Report,
+} from '../engine';
 import type { BitlineArchitecture, CellKind } from '../model/cell';
 import type { Design } from '../model/design';
 
@@ -42,112 +52,41 @@ export const REPORT_UNITS = {
 /** A physics figure in SI units; null where the engine gives NaN or ±Infinity, which JSON cannot carry. */
 export type Figure = number | null;
 
-/** The read of a 1T1C cell (charge sharing) or of a gain cell (read current into a precharged line). */
-export type ReadSummary =
-  | {
-      readonly kind: 'chargeSharing';
-      readonly chargeTransferRatio_ratio: Figure;
-      readonly signalHigh_V: Figure;
-      readonly signalLow_V: Figure;
-      readonly signalHighAfterRefresh_V: Figure;
-    }
-  | {
-      readonly kind: 'gainRead';
-      readonly readCurrent_A: Figure;
-      readonly dropHigh_V: Figure;
-      readonly dropLow_V: Figure;
-      readonly dropHighAfterRefresh_V: Figure;
-    };
+/** The read of a 1T1C cell (charge sharing) or of a gain cell: its kind and its read figures' export keys. */
+export interface ReadSummary {
+  readonly kind: MatFigures['read']['kind'];
+  readonly [exportKey: string]: Figure | string;
+}
 
+/**
+ * One mat: who it is, every per-mat figure of the catalogue under its export key (engine/figures), the read
+ * figures under `read`, and how it is served.
+ */
 export interface MatSummary {
   readonly id: string;
   readonly name: string;
   readonly cellId: string;
   readonly cellKind: CellKind;
   readonly architecture: BitlineArchitecture;
-  readonly cellsPerBitline: number;
-  readonly cellsPerWordline: number;
-  readonly bitlines: number;
-  readonly wordlines: number;
-  readonly bits: number;
-  readonly usableBits: number;
-  readonly lostBits: number;
-  readonly area_m2: Figure;
-  readonly cellArea_m2: Figure;
-  readonly cellFootprint_m2: Figure;
-  readonly bitlineLength_m: Figure;
-  readonly wordlineLength_m: Figure;
-  readonly storageCapacitance_F: Figure;
-  readonly bitlineCapacitance_F: Figure;
-  readonly bitlineJunctionCapacitance_F: Figure;
-  readonly bitlineToWordlineCapacitance_F: Figure;
-  readonly bitlineToBitlineCapacitance_F: Figure;
-  readonly bitlineWireCapacitance_F: Figure;
-  readonly senseAmpInputCapacitance_F: Figure;
   readonly read: ReadSummary;
-  readonly senseSignal_V: Figure;
-  readonly senseSignalAfterRefresh_V: Figure;
-  readonly senseAmps: number;
-  readonly offsetSigma_V: Figure;
-  readonly offsetBudget_V: Figure;
-  readonly noiseAllowance_V: Figure;
-  readonly requiredSignal_V: Figure;
-  readonly senseMargin_V: Figure;
-  readonly senseMarginAtRefresh_V: Figure;
-  readonly leakage_A: Figure;
-  readonly allowedDroop_V: Figure;
-  readonly retentionTime_s: Figure;
-  readonly wordlineResistance_ohm: Figure;
-  readonly wordlineCapacitance_F: Figure;
-  readonly wordlineDelay_s: Figure;
-  readonly bitlineResistance_ohm: Figure;
-  readonly bitlineDelay_s: Figure;
-  readonly activationEnergy_J: Figure;
-  readonly activationEnergyBitlines_J: Figure;
-  readonly activationEnergyWordline_J: Figure;
-  readonly activationEnergySenseAmps_J: Figure;
-  readonly activationEnergyPerBit_J: Figure;
-  readonly senseAmpPitchBudget_m: Figure;
   readonly senseAmpFits: boolean;
   readonly senseAmpStripIds: readonly string[];
   readonly wordlineDriverIds: readonly string[];
   readonly unsensedBitlines: number;
   readonly undrivenWordlines: number;
+  readonly [exportKey: string]: Figure | string | boolean | readonly string[] | ReadSummary;
 }
 
+/** The whole design: every whole-design figure of the catalogue under its export key, and the rest. */
 export interface TotalsSummary {
-  readonly mats: number;
-  readonly bits: number;
-  readonly usableBits: number;
-  readonly lostBits: number;
-  readonly area_m2: Figure;
-  readonly placedArea_m2: Figure;
   /** placedArea split by block type (m²). */
   readonly areaByType_m2: Readonly<Record<string, Figure>>;
-  readonly cellArea_m2: Figure;
-  readonly arrayEfficiency_ratio: Figure;
-  readonly areaPerBit_m2: Figure;
-  readonly areaPerBitInF2_ratio: Figure;
-  readonly senseAmps: number;
-  readonly offsetSigmaMultiplier_ratio: Figure;
-  readonly worstSenseSignal_V: Figure;
   readonly worstSenseSignalMatId: string | null;
-  readonly worstSenseMargin_V: Figure;
   readonly worstSenseMarginMatId: string | null;
-  readonly shortestRetention_s: Figure;
-  readonly worstWordlineDelay_s: Figure;
-  readonly refreshRows: number;
-  readonly refreshInterval_s: Figure;
-  readonly refreshRowsPerCommand: number;
-  readonly refreshCycleTime_s: Figure;
-  readonly refreshBusyFraction_ratio: Figure;
-  readonly refreshPower_W: Figure;
-  readonly storedHighLevel_V: Figure;
-  readonly storedHighThreshold_V: Figure;
   readonly storedHighLimitedByWordline: boolean;
-  readonly wordlineHighNeeded_V: Figure;
   readonly errors: number;
   readonly warnings: number;
+  readonly [exportKey: string]: Figure | string | boolean | Readonly<Record<string, Figure>>;
 }
 
 export interface FindingSummary {
@@ -184,82 +123,47 @@ function fig(value: number): Figure {
   return Number.isFinite(value) ? value : null;
 }
 
-function readSummary(read: MatFigures['read']): ReadSummary {
-  return read.kind === 'chargeSharing'
-    ? {
-        kind: 'chargeSharing',
-        chargeTransferRatio_ratio: fig(read.chargeTransferRatio),
-        signalHigh_V: fig(read.signalHigh),
-        signalLow_V: fig(read.signalLow),
-        signalHighAfterRefresh_V: fig(read.signalHighAfterRefresh),
-      }
-    : {
-        kind: 'gainRead',
-        readCurrent_A: fig(read.readCurrent),
-        dropHigh_V: fig(read.dropHigh),
-        dropLow_V: fig(read.dropLow),
-        dropHighAfterRefresh_V: fig(read.dropHighAfterRefresh),
-      };
-}
-
+/** Every exported per-mat figure in catalogue order; the read figures of the mat's read style go under `read`. */
 function matSummary(m: MatReport, mats: MatTable, k: number): MatSummary {
   const f = m.figures;
-  const cbl = f.bitlineCapacitance;
-  const e = f.activationEnergy;
-  return {
+  const out: Record<string, Figure | string | boolean | readonly string[] | ReadSummary> = {
     id: m.matId,
     name: m.name,
     cellId: f.cellId,
     cellKind: f.cellKind,
     architecture: f.architecture,
-    cellsPerBitline: f.cellsPerBitline,
-    cellsPerWordline: f.cellsPerWordline,
-    bitlines: f.bitlineCount,
-    wordlines: f.wordlineCount,
-    bits: f.bits,
-    usableBits: f.usableBits,
-    lostBits: f.lostBits,
-    area_m2: fig(f.area),
-    cellArea_m2: fig(f.cellArea),
-    cellFootprint_m2: fig(f.cellFootprint),
-    bitlineLength_m: fig(f.bitlineLength),
-    wordlineLength_m: fig(f.wordlineLength),
-    storageCapacitance_F: fig(f.storageCapacitance),
-    bitlineCapacitance_F: fig(cbl.total),
-    bitlineJunctionCapacitance_F: fig(cbl.junction),
-    bitlineToWordlineCapacitance_F: fig(cbl.wordlineCoupling),
-    bitlineToBitlineCapacitance_F: fig(cbl.bitlineCoupling),
-    bitlineWireCapacitance_F: fig(cbl.wire),
-    senseAmpInputCapacitance_F: fig(cbl.senseAmp),
-    read: readSummary(f.read),
-    senseSignal_V: fig(f.senseSignal),
-    senseSignalAfterRefresh_V: fig(f.senseSignalAfterRefresh),
-    senseAmps: f.senseAmpCount,
-    offsetSigma_V: fig(f.offsetSigma),
-    offsetBudget_V: fig(f.offsetBudget),
-    noiseAllowance_V: fig(f.noiseAllowance),
-    requiredSignal_V: fig(f.requiredSignal),
-    senseMargin_V: fig(f.senseMargin),
-    senseMarginAtRefresh_V: fig(f.senseMarginAtRefresh),
-    leakage_A: fig(f.leakage),
-    allowedDroop_V: fig(f.allowedDroop),
-    retentionTime_s: fig(f.retentionTime),
-    wordlineResistance_ohm: fig(f.wordlineResistance),
-    wordlineCapacitance_F: fig(f.wordlineCapacitance),
-    wordlineDelay_s: fig(f.wordlineDelay),
-    bitlineResistance_ohm: fig(f.bitlineResistance),
-    bitlineDelay_s: fig(f.bitlineDelay),
-    activationEnergy_J: fig(e.total),
-    activationEnergyBitlines_J: fig(e.bitlines),
-    activationEnergyWordline_J: fig(e.wordline),
-    activationEnergySenseAmps_J: fig(e.senseAmps),
-    activationEnergyPerBit_J: fig(e.perBit),
-    senseAmpPitchBudget_m: fig(f.senseAmpPitchBudget),
-    senseAmpFits: f.senseAmpFits,
-    senseAmpStripIds: senseAmpStripIdsOf(mats, k),
-    wordlineDriverIds: wordlineDriverIdsOf(mats, k),
-    unsensedBitlines: m.unsensedBitlines,
-    undrivenWordlines: m.undrivenWordlines,
+  };
+  const read: Record<string, Figure | string> = { kind: f.read.kind };
+  for (const entry of MAT_FIGURE_CATALOGUE) {
+    if (entry.exportKey === null) continue;
+    if (entry.read === undefined) out[entry.exportKey] = fig(entry.value(f));
+    else {
+      out.read ??= read as ReadSummary;
+      if (entry.read === f.read.kind) read[entry.exportKey] = fig(entry.value(f));
+    }
+  }
+  out.read = read as ReadSummary;
+  out.senseAmpFits = f.senseAmpFits;
+  out.senseAmpStripIds = senseAmpStripIdsOf(mats, k);
+  out.wordlineDriverIds = wordlineDriverIdsOf(mats, k);
+  out.unsensedBitlines = m.unsensedBitlines;
+  out.undrivenWordlines = m.undrivenWordlines;
+  return out as MatSummary;
+}
+
+/** Every exported whole-design figure in catalogue order, then what is not a number. */
+function totalsSummary(design: Design, report: Report): TotalsSummary {
+  const t = report.totals;
+  const figures: Record<string, Figure> = {};
+  for (const entry of TOTAL_FIGURE_CATALOGUE)
+    if (entry.exportKey !== null) figures[entry.exportKey] = fig(entry.value(report, design));
+  return {
+    ...figures,
+    areaByType_m2: Object.fromEntries(Object.entries(t.areaByType).map(([type, a]) => [type, fig(a)])),
+    worstSenseSignalMatId: t.worstSenseSignalMatId,
+    worstSenseMarginMatId: t.worstSenseMarginMatId,
+    storedHighLimitedByWordline: report.storedHigh.limitedByWordline,
+    ...countFindings(report.findings),
   };
 }
 
@@ -275,9 +179,6 @@ export function countFindings(findings: readonly Finding[]): { errors: number; w
  * and plain objects), SI values with the unit in each key.
  */
 export function reportSummary(design: Design, report: Report): ReportSummary {
-  const t = report.totals;
-  const r = t.refresh;
-  const s = report.storedHigh;
   const o = design.operating;
   return {
     format: REPORT_FORMAT,
@@ -299,38 +200,7 @@ export function reportSummary(design: Design, report: Report): ReportSummary {
       },
     },
     units: REPORT_UNITS,
-    totals: {
-      mats: t.matCount,
-      bits: t.bits,
-      usableBits: t.usableBits,
-      lostBits: t.lostBits,
-      area_m2: fig(t.totalArea),
-      placedArea_m2: fig(t.placedArea),
-      areaByType_m2: Object.fromEntries(Object.entries(t.areaByType).map(([type, a]) => [type, fig(a)])),
-      cellArea_m2: fig(t.cellArea),
-      arrayEfficiency_ratio: fig(t.arrayEfficiency),
-      areaPerBit_m2: fig(t.areaPerBit),
-      areaPerBitInF2_ratio: fig(t.areaPerBitInF2),
-      senseAmps: t.senseAmpCount,
-      offsetSigmaMultiplier_ratio: fig(t.offsetSigmaMultiplier),
-      worstSenseSignal_V: fig(t.worstSenseSignal),
-      worstSenseSignalMatId: t.worstSenseSignalMatId,
-      worstSenseMargin_V: fig(t.worstSenseMargin),
-      worstSenseMarginMatId: t.worstSenseMarginMatId,
-      shortestRetention_s: fig(t.shortestRetention),
-      worstWordlineDelay_s: fig(t.worstWordlineDelay),
-      refreshRows: r.rows,
-      refreshInterval_s: fig(r.interval),
-      refreshRowsPerCommand: r.rowsPerCommand,
-      refreshCycleTime_s: fig(r.cycleTime),
-      refreshBusyFraction_ratio: fig(r.busyFraction),
-      refreshPower_W: fig(r.power),
-      storedHighLevel_V: fig(s.level),
-      storedHighThreshold_V: fig(s.threshold),
-      storedHighLimitedByWordline: s.limitedByWordline,
-      wordlineHighNeeded_V: fig(s.wordlineHighNeeded),
-      ...countFindings(report.findings),
-    },
+    totals: totalsSummary(design, report),
     mats: allMats(report.mats).map((m, k) => matSummary(m, report.mats, k)),
     findings: report.findings.map((f) => ({
       kind: f.kind,

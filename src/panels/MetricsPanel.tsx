@@ -3,8 +3,8 @@ import {
   explainMatFigure,
   explainTotal,
   findMatReport,
-  MAT_FIGURE_GROUPS,
-  TOTAL_FIGURE_GROUPS,
+  MAT_FIGURE_PANEL,
+  TOTAL_FIGURE_PANEL,
 } from '../engine';
 import { CELL_KIND_LABEL } from '../model/cell';
 import { useShownReport } from '../store/liveReport';
@@ -37,7 +37,7 @@ export function MetricsPanel() {
             Selected: {mat.name || mat.matId} · {CELL_KIND_LABEL[mat.figures.cellKind]}{' '}
             {mat.figures.architecture}
           </h3>
-          {MAT_FIGURE_GROUPS.map((group) => (
+          {MAT_FIGURE_PANEL.map((group) => (
             <div key={group.title} className="figure-group">
               <h4>{group.title}</h4>
               {group.keys.map((key) => {
@@ -60,18 +60,21 @@ export function MetricsPanel() {
       )}
       <div className="figures" data-testid="total-figures">
         <h3 className="figures-title">Whole floorplan</h3>
-        {TOTAL_FIGURE_GROUPS.map((group) => (
+        {TOTAL_FIGURE_PANEL.map((group) => (
           <div key={group.title} className="figure-group">
             <h4>{group.title}</h4>
-            {group.keys.map((key) => (
-              <FigureRow
-                key={key}
-                testId={`total-${key}`}
-                explanation={explainTotal(key, report, design)}
-                open={openKey === `total.${key}`}
-                onToggle={() => toggle(`total.${key}`)}
-              />
-            ))}
+            {group.keys.map((key) => {
+              const explanation = explainTotal(key, report, design);
+              return explanation ? (
+                <FigureRow
+                  key={key}
+                  testId={`total-${key}`}
+                  explanation={explanation}
+                  open={openKey === `total.${key}`}
+                  onToggle={() => toggle(`total.${key}`)}
+                />
+              ) : null;
+            })}
           </div>
         ))}
       </div>

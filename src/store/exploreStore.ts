@@ -1,5 +1,5 @@
 import { create } from 'zustand';
-import type { AxisFigure } from '../explore/figures';
+import type { AxisFigure } from '../engine';
 import type { SweepPoint, SweepRequest } from '../explore/sweep';
 import type { SweepCommand, SweepReport } from '../explore/sweepProtocol';
 import type { SweepSettings } from '../explore/sweepSettings';

@@ -1,12 +1,12 @@
-import { allMats } from '../../src/engine/matTable';
+import { allMats } from '../../src/engine/evaluation/matTable';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { buildPartition, partitionName } from '../../src/build/buildPartition';
 import { formatBits } from '../../src/model/units';
 import { gridExtent, losesEdgeBits, planPartition, type StripSizes } from '../../src/build/partitionPlan';
 import { evaluate } from '../../src/engine';
-import { findOverlaps } from '../../src/engine/overlaps';
-import { senseAmpStripIdsOf } from '../../src/engine/matTable';
+import { findOverlaps } from '../../src/engine/evaluation/overlaps';
+import { senseAmpStripIdsOf } from '../../src/engine/evaluation/matTable';
 import { blockTable } from '../../src/geometry/blockTable';
 import { neighbourTable } from '../../src/geometry/neighbourGrid';
 import { ABUTMENT_TOLERANCE } from '../../src/geometry/rect';

@@ -1,4 +1,4 @@
-import { matAt } from '../../src/engine/matTable';
+import { matAt } from '../../src/engine/evaluation/matTable';
 import { describe, expect, it } from 'vitest';
 import { createVariant } from '../../src/commands/createVariant';
 import { deleteVariant } from '../../src/commands/deleteVariant';

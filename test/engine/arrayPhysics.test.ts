@@ -1,7 +1,7 @@
-import { matAt } from '../../src/engine/matTable';
+import { matAt } from '../../src/engine/evaluation/matTable';
 import { describe, expect, it } from 'vitest';
 import { evaluate, findMatReport } from '../../src/engine';
-import { gainReadCurrent } from '../../src/engine/gainRead';
+import { gainReadCurrent } from '../../src/engine/physics/gainRead';
 import { gridFloorplan } from '../../src/geometry/gridFloorplan';
 import type { Block, Strip } from '../../src/model/block';
 import {

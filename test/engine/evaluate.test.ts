@@ -1,4 +1,4 @@
-import { matAt, allMats } from '../../src/engine/matTable';
+import { matAt, allMats } from '../../src/engine/evaluation/matTable';
 import { describe, expect, it } from 'vitest';
 import {
   evaluate,
@@ -9,7 +9,7 @@ import {
   matFigureApplies,
   TOTAL_FIGURES,
 } from '../../src/engine';
-import { senseAmpStripIdsOf, wordlineDriverIdsOf } from '../../src/engine/matTable';
+import { senseAmpStripIdsOf, wordlineDriverIdsOf } from '../../src/engine/evaluation/matTable';
 import { OPEN_6F2_CELL } from '../../src/model/builtins';
 import type { Block } from '../../src/model/block';
 import { demoDesign } from '../../src/model/demoDesign';
@@ -213,7 +213,7 @@ describe('explained figures', () => {
     const report = evaluate(design);
     const mat = matAt(report.mats, 0);
     if (!mat) throw new Error('demo has mats');
-    for (const key of TOTAL_FIGURES) expect(explainTotal(key, report, design).title).not.toBe('');
+    for (const key of TOTAL_FIGURES) expect(explainTotal(key, report, design)?.title).not.toBe('');
     for (const key of MAT_FIGURES) {
       if (matFigureApplies(key, mat)) expect(explainMatFigure(key, mat, design, report)?.title).toBeTruthy();
     }

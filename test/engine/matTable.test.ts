@@ -8,7 +8,7 @@ import {
   matIndexOf,
   MatTableBuilder,
   senseAmpStripIdsOf,
-} from '../../src/engine/matTable';
+} from '../../src/engine/evaluation/matTable';
 import { demoDesign } from '../../src/model/demoDesign';
 
 // The report's mats are columns; these checks pin the lookups the panels and exports use. Expected values

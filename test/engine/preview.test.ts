@@ -1,8 +1,8 @@
-import { allMats } from '../../src/engine/matTable';
+import { allMats } from '../../src/engine/evaluation/matTable';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { evaluate, preparePreview, previewReport, type Report } from '../../src/engine';
-import { senseAmpStripIdsOf, wordlineDriverIdsOf } from '../../src/engine/matTable';
+import { senseAmpStripIdsOf, wordlineDriverIdsOf } from '../../src/engine/evaluation/matTable';
 import type { Block } from '../../src/model/block';
 import { demoDesign } from '../../src/model/demoDesign';
 import type { Design } from '../../src/model/design';

@@ -1,9 +1,9 @@
-import { allMats } from '../../src/engine/matTable';
+import { allMats } from '../../src/engine/evaluation/matTable';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { evaluate, findMatReport } from '../../src/engine/evaluate';
-import type { MatReport } from '../../src/engine/report';
-import { chargeTransferRatio } from '../../src/engine/sensing';
+import { evaluate, findMatReport } from '../../src/engine/evaluation/evaluate';
+import type { MatReport } from '../../src/engine/evaluation/report';
+import { chargeTransferRatio } from '../../src/engine/physics/sensing';
 import { gridFloorplan } from '../../src/geometry/gridFloorplan';
 import { BUILTIN_CELLS, BUILTIN_PROCESSES, DEMO_PROCESS, FOLDED_8F2_CELL } from '../../src/model/builtins';
 import { MAX_CELLS_PER_LINE } from '../../src/model/block';

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { refreshRows } from '../../src/engine/totals';
+import { refreshRows } from '../../src/engine/evaluation/totals';
 import { blockTable } from '../../src/geometry/blockTable';
 import { matGeometry } from '../../src/geometry/matGeometry';
 import type { Block } from '../../src/model/block';

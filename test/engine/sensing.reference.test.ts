@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { chargeSharingSignal, chargeTransferRatio, readSignals } from '../../src/engine/sensing';
+import { chargeSharingSignal, chargeTransferRatio, readSignals } from '../../src/engine/physics/sensing';
 
 describe('charge sharing against published worked figures', () => {
   it('Keeth & Baker style 1T1C read: 3.3 V, Vcc/2 precharge, Cs = 50 fF, Cbl = 300 fF', () => {

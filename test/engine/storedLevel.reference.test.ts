@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { storedHighLevel, thresholdWithBodyEffect } from '../../src/engine/storedLevel';
+import { storedHighLevel, thresholdWithBodyEffect } from '../../src/engine/physics/storedLevel';
 import { processWith } from '../support/designs';
 
 describe('access-transistor threshold and stored-1 level', () => {

@@ -1,7 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { chartModel, infeasibleBecause } from '../../src/explore/chartData';
-import { explainFigure } from '../../src/explore/explainFigure';
-import { AXIS_FIGURES, FIGURE_INFO, TABLE_FIGURES } from '../../src/explore/figures';
+import { AXIS_FIGURES, bankFigureEntry, explainFigure, TABLE_FIGURES } from '../../src/engine';
 import { dominates } from '../../src/explore/pareto';
 import { runSweepRange, sweepSize } from '../../src/explore/sweep';
 import { defaultSweepSettings, sweepRequestFor } from '../../src/explore/sweepSettings';
@@ -38,8 +37,8 @@ describe('chart model', () => {
       for (const y of AXIS_FIGURES) {
         if (x === y) continue;
         const model = chartModel(points, x, y, limits);
-        const dx = FIGURE_INFO[x].better === 'higher' ? 'max' : 'min';
-        const dy = FIGURE_INFO[y].better === 'higher' ? 'max' : 'min';
+        const dx = bankFigureEntry(x).better === 'higher' ? 'max' : 'min';
+        const dy = bankFigureEntry(y).better === 'higher' ? 'max' : 'min';
         const feasible = model.plotted.filter((p) => p.state !== 'infeasible');
         const onFront = new Set(model.front);
         model.plotted.forEach((p, i) => {
@@ -72,7 +71,7 @@ describe('figure explanations', () => {
       expect(e.value).toBe(f[key]);
       expect(e.formula.length).toBeGreaterThan(3);
       expect(e.source.length).toBeGreaterThan(3);
-      expect(e.quantity).toBe(FIGURE_INFO[key].quantity);
+      expect(e.quantity).toBe(bankFigureEntry(key).quantity);
     }
   });
 });

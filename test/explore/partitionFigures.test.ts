@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { buildPartition } from '../../src/build/buildPartition';
 import { evaluate } from '../../src/engine';
-import { figuresFromReport, type FigureKey } from '../../src/explore/figures';
+import { figuresFromReport, type FigureKey } from '../../src/engine';
 import { partitionFigures, ProcessCache } from '../../src/explore/partitionFigures';
 import { matGeometry } from '../../src/geometry/matGeometry';
 import {

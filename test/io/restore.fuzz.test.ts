@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { evaluate } from '../../src/engine/evaluate';
-import type { Totals } from '../../src/engine/report';
+import { evaluate } from '../../src/engine/evaluation/evaluate';
+import type { Totals } from '../../src/engine/evaluation/report';
 import { restoreDesign } from '../../src/io/restore';
 import { demoDesign } from '../../src/model/demoDesign';
 import { designSchema } from '../../src/model/design';

@@ -1,4 +1,4 @@
-import { AXIS_FIGURES, FIGURE_INFO } from '../../explore/figures';
+import { AXIS_FIGURES, bankFigureEntry } from '../../engine';
 import { useExploreStore } from '../../store/useExploreStore';
 import { QuantityField } from '../QuantityField';
 import { SelectField } from '../SelectField';
@@ -10,7 +10,7 @@ export function ChartControls({ minMargin }: { readonly minMargin: number }) {
   const maxDelay = useExploreStore((s) => s.constraints.maxDelay);
   const setAxes = useExploreStore((s) => s.setAxes);
   const setConstraints = useExploreStore((s) => s.setConstraints);
-  const options = AXIS_FIGURES.map((key) => ({ value: key, label: FIGURE_INFO[key].label }));
+  const options = AXIS_FIGURES.map((key) => ({ value: key, label: bankFigureEntry(key).label }));
   return (
     <section className="panel" aria-labelledby="chart-heading">
       <h2 id="chart-heading">Chart</h2>

@@ -3,7 +3,7 @@ import { buildPartition, shortProcessName } from '../../build/buildPartition';
 import { markerPath, ScatterChart, type ScatterDatum, type ShadedBand } from '../../charts/ScatterChart';
 import { createVariant } from '../../commands/createVariant';
 import { chartModel, type FeasibilityLimits } from '../../explore/chartData';
-import { FIGURE_INFO, type AxisFigure } from '../../explore/figures';
+import { bankFigureEntry, type AxisFigure } from '../../engine';
 import { pointBuildSpec, type SweepRequest } from '../../explore/sweep';
 import { defaultSweepSettings } from '../../explore/sweepSettings';
 import { formatQuantity } from '../../model/units';
@@ -95,8 +95,8 @@ export function ExplorerView() {
     }
   };
 
-  const xInfo = FIGURE_INFO[xAxis];
-  const yInfo = FIGURE_INFO[yAxis];
+  const xInfo = bankFigureEntry(xAxis);
+  const yInfo = bankFigureEntry(yAxis);
   const builtPoint = lastBuilt ? run.points[lastBuilt.pointIndex] : undefined;
   const percent = run.total > 0 ? Math.round((run.done / run.total) * 100) : 0;
 

@@ -1,8 +1,7 @@
 import { useState } from 'react';
 import { shortProcessName } from '../../build/buildPartition';
 import { checkName, infeasibleBecause, type FeasibilityLimits } from '../../explore/chartData';
-import { explainFigure } from '../../explore/explainFigure';
-import { FIGURE_INFO, type FigureKey } from '../../explore/figures';
+import { bankFigureEntry, explainFigure, type FigureKey } from '../../engine';
 import type { SweepPoint, SweepRequest } from '../../explore/sweep';
 import { CELL_KIND_LABEL } from '../../model/cell';
 import { formatQuantity } from '../../model/units';
@@ -56,14 +55,14 @@ export function PointCard({ point, request, limits, onFront, explainable = false
                 <td>
                   {explainable ? (
                     <button type="button" className="link" onClick={() => setOpen(open === key ? null : key)}>
-                      {FIGURE_INFO[key].label}
+                      {bankFigureEntry(key).label}
                     </button>
                   ) : (
-                    FIGURE_INFO[key].label
+                    bankFigureEntry(key).label
                   )}
                 </td>
                 <td className="num" data-testid={`${testId}-${key}`}>
-                  {formatQuantity(f[key], FIGURE_INFO[key].quantity)}
+                  {formatQuantity(f[key], bankFigureEntry(key).quantity)}
                 </td>
               </tr>
             ))}

@@ -4,8 +4,13 @@ import { deleteVariant } from '../../commands/deleteVariant';
 import { duplicateVariant } from '../../commands/duplicateVariant';
 import { renameVariant } from '../../commands/renameVariant';
 import { switchVariant } from '../../commands/switchVariant';
-import { explainFigure } from '../../explore/explainFigure';
-import { FIGURE_INFO, figuresFromReport, TABLE_FIGURES, type FigureKey } from '../../explore/figures';
+import {
+  bankFigureEntry,
+  explainFigure,
+  figuresFromReport,
+  TABLE_FIGURES,
+  type FigureKey,
+} from '../../engine';
 import { isMat } from '../../model/block';
 import type { VariantDesign } from '../../model/design';
 import { hasRoomForVariant, variantEntries } from '../../model/variants';
@@ -164,7 +169,7 @@ export function VariantsView() {
               );
             })}
             {TABLE_FIGURES.map((key) => {
-              const info = FIGURE_INFO[key];
+              const info = bankFigureEntry(key);
               const ref = reference?.figures[key] ?? Number.NaN;
               const anyDiff = columns.some((c) => differs(c.figures[key], ref));
               return (
@@ -226,7 +231,7 @@ export function VariantsView() {
       {open && openColumn && (
         <div className="variant-explanation">
           <h3>
-            {openColumn.name}: {FIGURE_INFO[open.key].label}
+            {openColumn.name}: {bankFigureEntry(open.key).label}
           </h3>
           <ExplanationCard
             explanation={explainFigure(open.key, openColumn.figures, {

@@ -1,10 +1,10 @@
-import { blockTable, MAT_CODE, rectAt, withBlocksReplaced, type BlockTable } from '../geometry/blockTable';
-import { neighbourTableOf, type NeighbourTable } from '../geometry/neighbourRows';
-import { placedDesign } from '../geometry/placedIndex';
-import { ABUTMENT_TOLERANCE, bottom, right, type Rect } from '../geometry/rect';
-import type { SpatialIndex } from '../geometry/spatialIndex';
-import type { Block } from '../model/block';
-import type { Design } from '../model/design';
+import { blockTable, MAT_CODE, rectAt, withBlocksReplaced, type BlockTable } from '../../geometry/blockTable';
+import { neighbourTableOf, type NeighbourTable } from '../../geometry/neighbourRows';
+import { placedDesign } from '../../geometry/placedIndex';
+import { ABUTMENT_TOLERANCE, bottom, right, type Rect } from '../../geometry/rect';
+import type { SpatialIndex } from '../../geometry/spatialIndex';
+import type { Block } from '../../model/block';
+import type { Design } from '../../model/design';
 import { collectFindings } from './checks';
 import { countSenseAmps, designContext, evaluate, evaluateMatAt, evaluationNeighbours } from './evaluate';
 import { findOverlaps, overlapAreaAt, type Overlap } from './overlaps';

@@ -1,18 +1,18 @@
-import type { MatKind } from '../geometry/blockTable';
-import { isGainCell } from '../model/cell';
-import type { OperatingConditions } from '../model/operating';
-import type { ProcessProfile } from '../model/process';
-import { bitlineCapacitance } from './bitline';
-import { chargeSharingDelay, drivenLineDelay } from './delay';
-import { bitlinePairEnergy, chargingEnergy, readBitlineRestoreEnergy } from './energy';
-import { gainReadSignals, minimumGainLevel } from './gainRead';
-import { couplingNoise } from './noise';
-import { pelgromSigma, stackOffsets } from './offset';
+import type { MatKind } from '../../geometry/blockTable';
+import { isGainCell } from '../../model/cell';
+import type { OperatingConditions } from '../../model/operating';
+import type { ProcessProfile } from '../../model/process';
+import { bitlineCapacitance } from '../physics/bitline';
+import { chargeSharingDelay, drivenLineDelay } from '../physics/delay';
+import { bitlinePairEnergy, chargingEnergy, readBitlineRestoreEnergy } from '../physics/energy';
+import { gainReadSignals, minimumGainLevel } from '../physics/gainRead';
+import { couplingNoise } from '../physics/noise';
+import { pelgromSigma, stackOffsets } from '../physics/offset';
 import type { ActivationEnergy, ChargeSharingRead, GainCellRead, MatFigures } from './report';
-import { leakageDroop, retentionTime } from './retention';
-import { senseAmpPitchBudget } from './senseAmpPitch';
-import { chargeTransferRatio, readSignals } from './sensing';
-import type { StoredHighLevel } from './storedLevel';
+import { leakageDroop, retentionTime } from '../physics/retention';
+import { senseAmpPitchBudget } from '../physics/senseAmpPitch';
+import { chargeTransferRatio, readSignals } from '../physics/sensing';
+import type { StoredHighLevel } from '../physics/storedLevel';
 
 /** Design-wide values every mat needs, computed once per evaluation. */
 export interface DesignContext {

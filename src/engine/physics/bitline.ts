@@ -1,4 +1,4 @@
-import type { ProcessProfile } from '../model/process';
+import type { ProcessProfile } from '../../model/process';
 
 /** Parts of one bit line's capacitance (F), each shown in the breakdown. */
 export interface BitlineCapacitance {

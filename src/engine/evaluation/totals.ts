@@ -1,13 +1,13 @@
-import { BLOCK_TYPE_CODES, MAT_CODE, type BlockTable } from '../geometry/blockTable';
-import type { BlockType } from '../model/block';
-import type { Design } from '../model/design';
+import { BLOCK_TYPE_CODES, MAT_CODE, type BlockTable } from '../../geometry/blockTable';
+import type { BlockType } from '../../model/block';
+import type { Design } from '../../model/design';
 import {
   refreshBusyFraction,
   refreshCycleTime,
   refreshInterval,
   refreshPower,
   rowsPerRefreshCommand,
-} from './refresh';
+} from '../physics/refresh';
 import { figuresAt, matIdAt, type MatTable } from './matTable';
 import type { RefreshFigures, Totals } from './report';
 

@@ -1,4 +1,4 @@
-import type { GainRead } from '../model/cell';
+import type { GainRead } from '../../model/cell';
 
 /**
  * Saturation current of the storage (read) transistor with its gate at the stored level V:

@@ -1,4 +1,4 @@
-import type { ProcessProfile } from '../model/process';
+import type { ProcessProfile } from '../../model/process';
 
 /**
  * Threshold voltage with body effect (the standard long-channel MOSFET form):

@@ -1,17 +1,17 @@
-import { blockTable, kindAt, MAT_CODE, type BlockTable, type MatKind } from '../geometry/blockTable';
-import { neighbourTable } from '../geometry/neighbourGrid';
-import type { NeighbourTable } from '../geometry/neighbourRows';
-import { ABUTMENT_TOLERANCE } from '../geometry/rect';
-import type { Design } from '../model/design';
+import { blockTable, kindAt, MAT_CODE, type BlockTable, type MatKind } from '../../geometry/blockTable';
+import { neighbourTable } from '../../geometry/neighbourGrid';
+import type { NeighbourTable } from '../../geometry/neighbourRows';
+import { ABUTMENT_TOLERANCE } from '../../geometry/rect';
+import type { Design } from '../../model/design';
 import { collectFindings } from './checks';
 import { emptyConnections, matConnections } from './connectivity';
 import { matPhysics, senseAmpsOfMat, type DesignContext } from './matPhysics';
-import { offsetSigmaMultiplier } from './offset';
+import { offsetSigmaMultiplier } from '../physics/offset';
 import { findOverlaps, overlapAreaAt } from './overlaps';
 import type { MatFigures, MatReport, Report } from './report';
 import { matAt, matIndexOf, MatTableBuilder } from './matTable';
-import { leakageAtTemperature } from './retention';
-import { storedHighLevel } from './storedLevel';
+import { leakageAtTemperature } from '../physics/retention';
+import { storedHighLevel } from '../physics/storedLevel';
 import { computeTotals } from './totals';
 
 /** Smallest leakage the engine uses (A): far below any physical cell, 1e-30 A keeps retention finite. */

@@ -1,4 +1,4 @@
-import type { Block } from '../model/block';
+import type { Block } from '../../model/block';
 import type { MatFigures, MatReport } from './report';
 
 /**

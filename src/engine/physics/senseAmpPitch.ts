@@ -1,4 +1,4 @@
-import type { BitlineArchitecture } from '../model/cell';
+import type { BitlineArchitecture } from '../../model/cell';
 
 /**
  * Width along the strip available to one sense amplifier (m). A folded pair spans two bit-line

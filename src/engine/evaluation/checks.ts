@@ -1,9 +1,9 @@
-import type { Design } from '../model/design';
-import { formatQuantity } from '../model/units';
+import type { Design } from '../../model/design';
+import { formatQuantity } from '../../model/units';
 import type { Overlap } from './overlaps';
 import { figuresAt, matIdAt, matLabelAt, type MatTable } from './matTable';
 import type { Finding, FindingKind, MatFigures, Severity } from './report';
-import type { StoredHighLevel } from './storedLevel';
+import type { StoredHighLevel } from '../physics/storedLevel';
 
 /** A finding about one mat before grouping: what is wrong, without the mat's name. */
 interface MatIssue {

@@ -1,8 +1,8 @@
-import type { BlockType } from '../model/block';
-import type { BitlineArchitecture, CellKind } from '../model/cell';
-import type { BitlineCapacitance } from './bitline';
+import type { BlockType } from '../../model/block';
+import type { BitlineArchitecture, CellKind } from '../../model/cell';
+import type { BitlineCapacitance } from '../physics/bitline';
 import type { MatTable } from './matTable';
-import type { StoredHighLevel } from './storedLevel';
+import type { StoredHighLevel } from '../physics/storedLevel';
 
 /** 1T1C read: charge sharing between cell and bit line. Voltages in V. */
 export interface ChargeSharingRead {

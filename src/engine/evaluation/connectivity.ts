@@ -1,15 +1,15 @@
-import { abutmentSpan, type Side } from '../geometry/abutment';
+import { abutmentSpan, type Side } from '../../geometry/abutment';
 import {
   kindAt,
   ROW_DECODER_CODE,
   SENSE_AMP_STRIP_CODE,
   WORDLINE_DRIVER_STRIP_CODE,
   type BlockTable,
-} from '../geometry/blockTable';
-import { uncoveredLineCount } from '../geometry/interval';
-import type { NeighbourTable } from '../geometry/neighbourRows';
-import { ABUTMENT_TOLERANCE } from '../geometry/rect';
-import { bitlineEndSides, wordlineEndSides } from '../geometry/stripFit';
+} from '../../geometry/blockTable';
+import { uncoveredLineCount } from '../../geometry/interval';
+import type { NeighbourTable } from '../../geometry/neighbourRows';
+import { ABUTMENT_TOLERANCE } from '../../geometry/rect';
+import { bitlineEndSides, wordlineEndSides } from '../../geometry/stripFit';
 import { unpartneredBitlines } from './openBitline';
 import type { MatTableBuilder } from './matTable';
 

@@ -1,9 +1,9 @@
-import { abutmentSpan, type Side } from '../geometry/abutment';
-import { kindAt, MAT_CODE, type BlockTable } from '../geometry/blockTable';
-import { uncoveredLineCount } from '../geometry/interval';
-import type { NeighbourTable } from '../geometry/neighbourRows';
-import { ABUTMENT_TOLERANCE } from '../geometry/rect';
-import { isGainCell } from '../model/cell';
+import { abutmentSpan, type Side } from '../../geometry/abutment';
+import { kindAt, MAT_CODE, type BlockTable } from '../../geometry/blockTable';
+import { uncoveredLineCount } from '../../geometry/interval';
+import type { NeighbourTable } from '../../geometry/neighbourRows';
+import { ABUTMENT_TOLERANCE } from '../../geometry/rect';
+import { isGainCell } from '../../model/cell';
 import type { SenseAmpContacts } from './connectivity';
 
 /**

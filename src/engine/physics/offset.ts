@@ -1,4 +1,4 @@
-import type { OffsetStacking } from '../model/process';
+import type { OffsetStacking } from '../../model/process';
 import { upperTailQuantile } from './statistics';
 
 /**

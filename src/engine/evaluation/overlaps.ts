@@ -1,6 +1,6 @@
-import type { BlockTable, Boxes } from '../geometry/blockTable';
-import type { NeighbourTable } from '../geometry/neighbourRows';
-import { ABUTMENT_TOLERANCE } from '../geometry/rect';
+import type { BlockTable, Boxes } from '../../geometry/blockTable';
+import type { NeighbourTable } from '../../geometry/neighbourRows';
+import { ABUTMENT_TOLERANCE } from '../../geometry/rect';
 
 /** A pair of blocks that share area (not just an edge). */
 export interface Overlap {

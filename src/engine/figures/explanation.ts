@@ -1,4 +1,4 @@
-import type { Quantity } from '../model/units';
+import type { Quantity } from '../../model/units';
 
 /** One input of a formula, in SI units. */
 export interface ExplanationInput {

@@ -1,0 +1,70 @@
+import type { FindingKind } from '../evaluation/report';
+import type { FigureEntry, Working } from './figure';
+
+/**
+ * The figures that compare one partition (a bank) with another: the explorer computes them for every
+ * sweep point (fast, in closed form) and the variants table reads them from evaluate()'s report, and a
+ * test keeps the two equal. SI units throughout.
+ */
+export interface PartitionFigures {
+  readonly matCount: number;
+  readonly usableBits: number;
+  /** Bounding box of the whole bank (m²). */
+  readonly totalArea: number;
+  /** Usable bits × cell footprint (m²). */
+  readonly cellArea: number;
+  /** totalArea / usableBits (m²). */
+  readonly areaPerBit: number;
+  readonly areaPerBitInF2: number;
+  /** cellArea / totalArea. */
+  readonly arrayEfficiency: number;
+  /** Worst net sense margin after a refresh window (V). */
+  readonly senseMargin: number;
+  /** Sense signal left after a refresh window, of the worst mat (V). */
+  readonly senseSignalAtRefresh: number;
+  /** Offset and noise stacked, of the worst mat (V). */
+  readonly requiredSignal: number;
+  /** Slowest word line (s). */
+  readonly wordlineDelay: number;
+  /** Its resistance (Ω) and capacitance (F). */
+  readonly wordlineResistance: number;
+  readonly wordlineCapacitance: number;
+  /** Highest activation energy per bit of any mat (J), and that mat's activation energy (J) and cells per word line. */
+  readonly activationEnergyPerBit: number;
+  readonly activationEnergy: number;
+  readonly cellsPerWordline: number;
+  /** Shortest retention (s). */
+  readonly retentionTime: number;
+  /** tRFC (s), tREFI (s) and tRFC / tREFI. */
+  readonly refreshCycleTime: number;
+  readonly refreshInterval: number;
+  readonly refreshBusyFraction: number;
+  /** Average refresh power (W). */
+  readonly refreshPower: number;
+  /** Kinds of check that report an error, and a warning, sorted. */
+  readonly errorKinds: readonly FindingKind[];
+  readonly warningKinds: readonly FindingKind[];
+}
+
+/** The numeric comparison figures. */
+export type FigureKey = {
+  [K in keyof PartitionFigures]: PartitionFigures[K] extends number ? K : never;
+}[keyof PartitionFigures];
+
+/** Values of the design (or sweep) a figure came from that its explanation names. */
+export interface FigureContext {
+  readonly featureSize: number;
+  readonly wordlineDriverResistance: number;
+  readonly refreshWindow: number;
+}
+
+/** A comparison figure of a bank: how to show it, which way is better, and how it explains itself. */
+export interface BankFigureEntry<Key extends FigureKey = FigureKey> extends FigureEntry<Key> {
+  /** Which way is better; 'neither' for sizes that only describe a partition (mats, bits, bank area). */
+  readonly better: 'lower' | 'higher' | 'neither';
+  readonly explain: (figures: PartitionFigures, context: FigureContext) => Working;
+}
+
+/** Declares one catalogue entry, keeping its key as a literal type. */
+export const bankFigure = <const Key extends FigureKey>(entry: BankFigureEntry<Key>): BankFigureEntry<Key> =>
+  entry;

@@ -1,0 +1,426 @@
+import type { Design } from '../../model/design';
+import type { MatReport, Report } from '../evaluation/report';
+import { explanationOf } from './figure';
+import { input, SOURCES, type Explanation } from './explanation';
+import { FORMULAS } from './formulas';
+import { matFigure, MAT_FIGURE_GROUPS, type MatFigureEntry, type MatFigureGroup } from './matFigure';
+import { READ_FIGURES } from './matReadFigures';
+import { MAT_SIZE_FIGURES, MAT_PARASITIC_FIGURES } from './matSizeFigures';
+
+/**
+ * The catalogue of per-mat figures, in the order of the JSON summary; the panel shows the entries that
+ * have a group, group by group in {@link MAT_FIGURE_GROUPS} order and in this order within a group.
+ */
+export const MAT_FIGURE_CATALOGUE = [
+  ...MAT_SIZE_FIGURES,
+  matFigure({
+    key: 'bitlineCapacitance',
+    label: 'Bit-line capacitance',
+    quantity: 'capacitance',
+    group: 'Sensing',
+    exportKey: 'bitlineCapacitance_F',
+    csvHeader: 'bitline_capacitance_F',
+    cli: { header: 'Cbl (fF)', scale: { prefix: 'f', decimals: 2 } },
+    value: (f) => f.bitlineCapacitance.total,
+    explain: (mat) => {
+      const f = mat.figures;
+      const cbl = f.bitlineCapacitance;
+      return {
+        title: f.read.kind === 'gainRead' ? 'Read-bit-line capacitance' : undefined,
+        symbol: 'Cbl',
+        formula: 'Cbl = N·(Cj + Cbw + Cbb) + c_wire·L_bl + C_sa',
+        inputs: [
+          input('N', 'cells per bit line', f.cellsPerBitline, 'count'),
+          input('N·Cj', 'junction/contact', cbl.junction, 'capacitance'),
+          input('N·Cbw', 'coupling to word lines', cbl.wordlineCoupling, 'capacitance'),
+          input('N·Cbb', 'coupling to bit lines', cbl.bitlineCoupling, 'capacitance'),
+          input('c·L', `wire (L_bl = ${(f.bitlineLength * 1e6).toPrecision(4)} µm)`, cbl.wire, 'capacitance'),
+          input('C_sa', 'sense-amplifier input', cbl.senseAmp, 'capacitance'),
+        ],
+        method: 'Sum of parallel parasitic capacitances (lumped), shown as a breakdown.',
+        source: SOURCES.keethBaker,
+      };
+    },
+  }),
+  ...MAT_PARASITIC_FIGURES,
+  ...READ_FIGURES,
+  matFigure({
+    key: 'senseAmpCount',
+    label: 'Sense amplifiers',
+    quantity: 'count',
+    group: null,
+    exportKey: 'senseAmps',
+    value: (f) => f.senseAmpCount,
+  }),
+  matFigure({
+    key: 'offsetSigma',
+    label: 'Offset standard deviation',
+    quantity: 'voltage',
+    group: null,
+    exportKey: 'offsetSigma_V',
+    value: (f) => f.offsetSigma,
+  }),
+  matFigure({
+    key: 'offsetBudget',
+    label: 'Sense-amplifier offset budget',
+    quantity: 'voltage',
+    group: 'Sensing',
+    exportKey: 'offsetBudget_V',
+    csvHeader: 'offset_budget_V',
+    value: (f) => f.offsetBudget,
+    explain: (mat, design, report) => {
+      const p = design.process;
+      return {
+        symbol: 'k·σ',
+        formula: 'σ = A_VT / √(W·L);  k = Φ⁻¹(1 − failures / sense amps)',
+        inputs: [
+          input('A_VT', 'matching coefficient', p.senseAmpMatchingCoefficient, 'matchingCoefficient'),
+          input('W', 'transistor width', p.senseAmpTransistorWidth, 'length'),
+          input('L', 'transistor length', p.senseAmpTransistorLength, 'length'),
+          input('σ', 'offset standard deviation', mat.figures.offsetSigma, 'voltage'),
+          input('k', 'σ multiplier', report.totals.offsetSigmaMultiplier, 'ratio'),
+          input('n_sa', 'sense amplifiers in the design', report.totals.senseAmpCount, 'count'),
+        ],
+        method: `Pelgrom mismatch; k so that on average ${design.operating.allowedSenseFailures} amplifier(s) fail (one-sided normal tail).`,
+        source: `${SOURCES.pelgrom}; ${SOURCES.acklam}`,
+      };
+    },
+  }),
+  matFigure({
+    key: 'noiseAllowance',
+    label: 'Coupling-noise allowance',
+    quantity: 'voltage',
+    group: 'Sensing',
+    exportKey: 'noiseAllowance_V',
+    csvHeader: 'noise_allowance_V',
+    value: (f) => f.noiseAllowance,
+    explain: (mat, design) => {
+      const f = mat.figures;
+      const p = design.process;
+      const folded = f.architecture === 'folded' && f.read.kind === 'chargeSharing';
+      return {
+        symbol: 'V_noise',
+        formula: 'V_noise = κ · (Cbb / Cbl) · VDD / 2',
+        inputs: [
+          input(
+            'κ',
+            `unrejected share (${folded ? 'folded' : 'open'})`,
+            folded ? p.foldedNoiseFactor : p.openNoiseFactor,
+            'ratio',
+          ),
+          input('Cbb', 'coupling to bit lines', f.bitlineCapacitance.bitlineCoupling, 'capacitance'),
+          input('Cbl', 'bit-line capacitance', f.bitlineCapacitance.total, 'capacitance'),
+          input('VDD', 'array voltage', p.arrayVoltage, 'voltage'),
+        ],
+        method:
+          'Neighbours swing by VDD/2 and couple through Cbb; folded pairs reject more as common mode than open ones.',
+        source: `capacitive divider (common practice); ${SOURCES.westeHarris}`,
+      };
+    },
+  }),
+  matFigure({
+    key: 'requiredSignal',
+    label: 'Offset and noise stacked',
+    quantity: 'voltage',
+    group: null,
+    exportKey: 'requiredSignal_V',
+    value: (f) => f.requiredSignal,
+  }),
+  matFigure({
+    key: 'senseMargin',
+    label: 'Net sense margin (fresh)',
+    quantity: 'voltage',
+    group: 'Sensing',
+    exportKey: 'senseMargin_V',
+    value: (f) => f.senseMargin,
+    explain: (mat, design) => {
+      const p = design.process;
+      return {
+        symbol: 'M',
+        formula: `M = ΔV − V_req,  V_req = ${p.offsetStacking === 'linear' ? 'k·σ + V_noise' : '√((k·σ)² + V_noise²)'}`,
+        inputs: [
+          input('ΔV', 'sense signal', mat.figures.senseSignal, 'voltage'),
+          input('V_req', 'offset and noise stacked', mat.figures.requiredSignal, 'voltage'),
+        ],
+        method: `Offset and noise stacked ${p.offsetStacking === 'linear' ? 'linearly (worst case)' : 'as a root sum of squares'}.`,
+        source: 'H. Geib et al., IEEE JSSC, July 1992 (offset plus asymmetry stacking); common practice',
+      };
+    },
+  }),
+  matFigure({
+    key: 'senseMarginAtRefresh',
+    label: 'Net sense margin at refresh',
+    quantity: 'voltage',
+    group: 'Sensing',
+    exportKey: 'senseMarginAtRefresh_V',
+    csvHeader: 'sense_margin_at_refresh_V',
+    cli: { header: 'margin (mV)', scale: { prefix: 'm', decimals: 1 } },
+    value: (f) => f.senseMarginAtRefresh,
+    explain: (mat, design) => {
+      const f = mat.figures;
+      return {
+        symbol: 'M_ref',
+        formula: 'M_ref = ΔV(after droop I·tREFW/Cs) − V_req',
+        inputs: [
+          input('I', 'cell leakage at temperature', f.leakage, 'current'),
+          input('tREFW', 'refresh window', design.operating.refreshWindow, 'time'),
+          input('Cs', 'storage capacitance', f.storageCapacitance, 'capacitance'),
+          input('ΔV′', 'signal after the window', f.senseSignalAfterRefresh, 'voltage'),
+          input('V_req', 'offset and noise stacked', f.requiredSignal, 'voltage'),
+        ],
+        method: 'A stored 1 leaks for a whole refresh window at constant current before it is read.',
+        source: SOURCES.common,
+      };
+    },
+  }),
+  matFigure({
+    key: 'leakage',
+    label: 'Cell leakage at temperature',
+    quantity: 'current',
+    group: null,
+    exportKey: 'leakage_A',
+    value: (f) => f.leakage,
+  }),
+  matFigure({
+    key: 'allowedDroop',
+    label: 'Droop until the margin is zero',
+    quantity: 'voltage',
+    group: null,
+    exportKey: 'allowedDroop_V',
+    value: (f) => f.allowedDroop,
+  }),
+  matFigure({
+    key: 'retentionTime',
+    label: 'Retention time',
+    quantity: 'time',
+    group: 'Retention and speed',
+    exportKey: 'retentionTime_s',
+    csvHeader: 'retention_s',
+    value: (f) => f.retentionTime,
+    explain: (mat, design) => {
+      const f = mat.figures;
+      const p = design.process;
+      return {
+        symbol: 't_ret',
+        formula: `${FORMULAS.retention},  ${FORMULAS.leakageAtTemperature}`,
+        inputs: [
+          input('Cs', 'storage capacitance', f.storageCapacitance, 'capacitance'),
+          input('ΔV_allowed', 'droop until margin is zero', f.allowedDroop, 'voltage'),
+          input('I_ref', 'leakage at reference', p.cellLeakageCurrent, 'current'),
+          input('T_ref', 'reference temperature', p.leakageReferenceTemperature, 'temperature'),
+          input('T', 'operating temperature', design.operating.temperature, 'temperature'),
+          input('I(T)', 'leakage at temperature', f.leakage, 'current'),
+        ],
+        method: 'Constant-current leakage scaled with temperature by Arrhenius.',
+        source: SOURCES.arrhenius,
+      };
+    },
+  }),
+  matFigure({
+    key: 'wordlineResistance',
+    label: 'Sub-word-line resistance',
+    quantity: 'resistance',
+    group: null,
+    exportKey: 'wordlineResistance_ohm',
+    value: (f) => f.wordlineResistance,
+  }),
+  matFigure({
+    key: 'wordlineCapacitance',
+    label: 'Sub-word-line capacitance',
+    quantity: 'capacitance',
+    group: null,
+    exportKey: 'wordlineCapacitance_F',
+    value: (f) => f.wordlineCapacitance,
+  }),
+  matFigure({
+    key: 'wordlineDelay',
+    label: 'Word-line delay (50 %)',
+    quantity: 'time',
+    group: 'Retention and speed',
+    exportKey: 'wordlineDelay_s',
+    csvHeader: 'wordline_delay_s',
+    value: (f) => f.wordlineDelay,
+    explain: (mat, design) => ({
+      symbol: 't_wl',
+      formula: FORMULAS.wordlineDelay,
+      inputs: [
+        input('R_drv', 'driver resistance', design.process.wordlineDriverResistance, 'resistance'),
+        input('R_wl', 'sub-word-line resistance', mat.figures.wordlineResistance, 'resistance'),
+        input('C_wl', 'sub-word-line capacitance', mat.figures.wordlineCapacitance, 'capacitance'),
+      ],
+      method: 'Driver as lumped RC plus the line as distributed RC; 50 % point convention.',
+      source: SOURCES.rabaey,
+    }),
+  }),
+  matFigure({
+    key: 'bitlineResistance',
+    label: 'Bit-line resistance',
+    quantity: 'resistance',
+    group: null,
+    exportKey: 'bitlineResistance_ohm',
+    value: (f) => f.bitlineResistance,
+  }),
+  matFigure({
+    key: 'bitlineDelay',
+    label: 'Bit-line development (50 %)',
+    quantity: 'time',
+    group: 'Retention and speed',
+    exportKey: 'bitlineDelay_s',
+    csvHeader: 'bitline_delay_s',
+    value: (f) => f.bitlineDelay,
+    explain: (mat, design) => {
+      const f = mat.figures;
+      return f.read.kind === 'chargeSharing'
+        ? {
+            symbol: 't_bl',
+            formula: 't_bl = 0.69·R_acc·(Cs·Cbl/(Cs+Cbl)) + 0.38·R_bl·Cbl',
+            inputs: [
+              input('R_acc', 'access transistor', design.process.accessTransistorResistance, 'resistance'),
+              input('R_bl', 'bit-line resistance', f.bitlineResistance, 'resistance'),
+              input('Cbl', 'bit-line capacitance', f.bitlineCapacitance.total, 'capacitance'),
+            ],
+            method:
+              'Cell discharge through the access device plus distributed bit-line RC; 50 % point convention.',
+            source: SOURCES.rabaey,
+          }
+        : {
+            title: 'Read-bit-line sense time',
+            symbol: 't_sense',
+            formula: 't_sense (process input)',
+            inputs: [],
+            method: 'The read bit line develops for a fixed time before sensing.',
+            source: SOURCES.gainCells,
+          };
+    },
+  }),
+  matFigure({
+    key: 'activationEnergy',
+    label: 'Energy per activation',
+    quantity: 'energy',
+    group: 'Energy',
+    exportKey: 'activationEnergy_J',
+    csvHeader: 'activation_energy_J',
+    value: (f) => f.activationEnergy.total,
+    explain: (mat) => {
+      const f = mat.figures;
+      return {
+        symbol: 'E_act',
+        formula: 'E_act = E_bl + C_wl·V_wl² + M·C_sa·VDD²',
+        inputs: [
+          input(
+            'E_bl',
+            f.read.kind === 'chargeSharing' ? 'bit lines: M·Cbl·VDD²/2' : 'read bit lines: M·C·VDD·ΔV1',
+            f.activationEnergy.bitlines,
+            'energy',
+          ),
+          input('E_wl', 'word line', f.activationEnergy.wordline, 'energy'),
+          input('E_sa', 'sense-amplifier latches', f.activationEnergy.senseAmps, 'energy'),
+          input('M', 'cells per word line', f.cellsPerWordline, 'count'),
+        ],
+        method: 'One word line of the mat activated; half-VDD precharge with equalisation.',
+        source: `${SOURCES.common}; C·V² charging energy, ${SOURCES.rabaey}`,
+      };
+    },
+  }),
+  matFigure({
+    key: 'activationEnergyBitlines',
+    label: 'Activation energy of the bit lines',
+    quantity: 'energy',
+    group: null,
+    exportKey: 'activationEnergyBitlines_J',
+    value: (f) => f.activationEnergy.bitlines,
+  }),
+  matFigure({
+    key: 'activationEnergyWordline',
+    label: 'Activation energy of the word line',
+    quantity: 'energy',
+    group: null,
+    exportKey: 'activationEnergyWordline_J',
+    value: (f) => f.activationEnergy.wordline,
+  }),
+  matFigure({
+    key: 'activationEnergySenseAmps',
+    label: 'Activation energy of the sense amplifiers',
+    quantity: 'energy',
+    group: null,
+    exportKey: 'activationEnergySenseAmps_J',
+    value: (f) => f.activationEnergy.senseAmps,
+  }),
+  matFigure({
+    key: 'energyPerBit',
+    label: 'Activation energy per bit',
+    quantity: 'energy',
+    group: 'Energy',
+    exportKey: 'activationEnergyPerBit_J',
+    value: (f) => f.activationEnergy.perBit,
+    explain: (mat) => ({
+      symbol: 'E_bit',
+      formula: FORMULAS.energyPerBit,
+      inputs: [
+        input('E_act', 'energy per activation', mat.figures.activationEnergy.total, 'energy'),
+        input('M', 'cells per word line', mat.figures.cellsPerWordline, 'count'),
+      ],
+      method: 'Activation energy spread over the cells the word line opens.',
+      source: SOURCES.common,
+    }),
+  }),
+  matFigure({
+    key: 'senseAmpPitchBudget',
+    label: 'Sense-amplifier pitch budget',
+    quantity: 'length',
+    group: 'Area',
+    exportKey: 'senseAmpPitchBudget_m',
+    value: (f) => f.senseAmpPitchBudget,
+    explain: (mat, design) => ({
+      symbol: 'w_sa',
+      formula: 'w_sa = BL pitch × (folded pair ? 2 : 1) × (strips at both ends ? 2 : 1)',
+      inputs: [input('W_needed', 'width one amplifier needs', design.process.senseAmpWidth, 'length')],
+      method: mat.figures.senseAmpFits
+        ? 'The amplifier fits its pitch.'
+        : 'The amplifier does NOT fit its pitch.',
+      source: SOURCES.keethBaker,
+    }),
+  }),
+] as const;
+
+/** Every per-mat figure's key. */
+export type MatFigureKey = (typeof MAT_FIGURE_CATALOGUE)[number]['key'];
+
+const BY_KEY: ReadonlyMap<string, MatFigureEntry> = new Map(MAT_FIGURE_CATALOGUE.map((e) => [e.key, e]));
+
+/** The catalogue entry of a per-mat figure. */
+export function matFigureEntry(key: MatFigureKey): MatFigureEntry {
+  const entry = BY_KEY.get(key);
+  if (!entry) throw new Error(`no mat figure "${key}"`);
+  return entry;
+}
+
+/** The per-mat figures a panel shows, group by group in display order. */
+export const MAT_FIGURE_PANEL: readonly {
+  readonly title: MatFigureGroup;
+  readonly keys: readonly MatFigureKey[];
+}[] = MAT_FIGURE_GROUPS.map((title) => ({
+  title,
+  keys: MAT_FIGURE_CATALOGUE.filter((e) => e.group === title).map((e) => e.key),
+}));
+
+/** Keys of the per-mat figures a panel shows, in display order. */
+export const MAT_FIGURES: readonly MatFigureKey[] = MAT_FIGURE_PANEL.flatMap((g) => g.keys);
+
+/** Whether a figure applies to this mat's read style. */
+export function matFigureApplies(key: MatFigureKey, mat: MatReport): boolean {
+  const read = matFigureEntry(key).read;
+  return read === undefined || read === mat.figures.read.kind;
+}
+
+/** Explains one figure of one mat; undefined when it does not apply to the mat's read style or is only exported. */
+export function explainMatFigure(
+  key: MatFigureKey,
+  mat: MatReport,
+  design: Design,
+  report: Report,
+): Explanation | undefined {
+  const entry = matFigureEntry(key);
+  if (!entry.explain || !matFigureApplies(key, mat)) return undefined;
+  return explanationOf(entry, entry.value(mat.figures), entry.explain(mat, design, report));
+}

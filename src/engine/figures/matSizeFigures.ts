@@ -1,0 +1,188 @@
+import { input, SOURCES } from './explanation';
+import { matFigure } from './matFigure';
+
+/** Catalogue entries of a mat's size: its counts, areas and line lengths (first in the JSON summary). */
+export const MAT_SIZE_FIGURES = [
+  matFigure({
+    key: 'cellsPerBitline',
+    label: 'Cells per bit line',
+    quantity: 'count',
+    group: null,
+    exportKey: 'cellsPerBitline',
+    csvHeader: 'cells_per_bitline',
+    cli: { header: 'cells/BL' },
+    value: (f) => f.cellsPerBitline,
+  }),
+  matFigure({
+    key: 'cellsPerWordline',
+    label: 'Cells per word line',
+    quantity: 'count',
+    group: null,
+    exportKey: 'cellsPerWordline',
+    csvHeader: 'cells_per_wordline',
+    cli: { header: 'cells/WL' },
+    value: (f) => f.cellsPerWordline,
+  }),
+  matFigure({
+    key: 'bitlineCount',
+    label: 'Bit lines',
+    quantity: 'count',
+    group: null,
+    exportKey: 'bitlines',
+    value: (f) => f.bitlineCount,
+  }),
+  matFigure({
+    key: 'wordlineCount',
+    label: 'Word lines',
+    quantity: 'count',
+    group: null,
+    exportKey: 'wordlines',
+    value: (f) => f.wordlineCount,
+  }),
+  matFigure({
+    key: 'bits',
+    label: 'Bits in the mat',
+    quantity: 'count',
+    group: 'Area',
+    exportKey: 'bits',
+    csvHeader: 'bits',
+    cli: { header: 'bits' },
+    value: (f) => f.bits,
+    explain: (mat) => {
+      const f = mat.figures;
+      return {
+        symbol: 'bits',
+        formula: 'bits = N · BL, BL = M / occupancy; usable = bits − lost open-edge bits',
+        inputs: [
+          input('N', 'cells per bit line', f.cellsPerBitline, 'count'),
+          input('M', 'cells per word line', f.cellsPerWordline, 'count'),
+          input('BL', 'bit lines', f.bitlineCount, 'count'),
+          input('lost', 'bits without an open-bit-line partner', f.lostBits, 'count'),
+        ],
+        method:
+          'Folded bit lines hold a cell at every other word-line crossing (occupancy ½); open at every one.',
+        source: `${SOURCES.westeHarris} (array styles); ${SOURCES.common} for the counting`,
+      };
+    },
+  }),
+  matFigure({
+    key: 'usableBits',
+    label: 'Usable bits',
+    quantity: 'count',
+    group: null,
+    exportKey: 'usableBits',
+    csvHeader: 'usable_bits',
+    value: (f) => f.usableBits,
+  }),
+  matFigure({
+    key: 'lostBits',
+    label: 'Bits without an open-bit-line partner',
+    quantity: 'count',
+    group: null,
+    exportKey: 'lostBits',
+    value: (f) => f.lostBits,
+  }),
+  matFigure({
+    key: 'area',
+    label: 'Mat area',
+    quantity: 'area',
+    group: 'Area',
+    exportKey: 'area_m2',
+    csvHeader: 'area_m2',
+    value: (f) => f.area,
+    explain: (mat) => ({
+      symbol: 'A_mat',
+      formula: 'A_mat = L_wl · L_bl',
+      inputs: [
+        input('L_wl', 'word-line length', mat.figures.wordlineLength, 'length'),
+        input('L_bl', 'bit-line length', mat.figures.bitlineLength, 'length'),
+      ],
+      method: 'Mat outline: bit lines × bit-line pitch by word lines × word-line pitch.',
+      source: SOURCES.common,
+    }),
+  }),
+  matFigure({
+    key: 'cellArea',
+    label: 'Cell area',
+    quantity: 'area',
+    group: null,
+    exportKey: 'cellArea_m2',
+    value: (f) => f.cellArea,
+  }),
+  matFigure({
+    key: 'cellFootprint',
+    label: 'Cell footprint',
+    quantity: 'area',
+    group: null,
+    exportKey: 'cellFootprint_m2',
+    value: (f) => f.cellFootprint,
+  }),
+  matFigure({
+    key: 'bitlineLength',
+    label: 'Bit-line length',
+    quantity: 'length',
+    group: null,
+    exportKey: 'bitlineLength_m',
+    value: (f) => f.bitlineLength,
+  }),
+  matFigure({
+    key: 'wordlineLength',
+    label: 'Word-line length',
+    quantity: 'length',
+    group: null,
+    exportKey: 'wordlineLength_m',
+    value: (f) => f.wordlineLength,
+  }),
+  matFigure({
+    key: 'storageCapacitance',
+    label: 'Storage capacitance',
+    quantity: 'capacitance',
+    group: null,
+    exportKey: 'storageCapacitance_F',
+    value: (f) => f.storageCapacitance,
+  }),
+] as const;
+
+/** The parts of the bit-line capacitance, exported beside its total. */
+export const MAT_PARASITIC_FIGURES = [
+  matFigure({
+    key: 'bitlineJunctionCapacitance',
+    label: 'Bit-line junction and contact capacitance',
+    quantity: 'capacitance',
+    group: null,
+    exportKey: 'bitlineJunctionCapacitance_F',
+    value: (f) => f.bitlineCapacitance.junction,
+  }),
+  matFigure({
+    key: 'bitlineToWordlineCapacitance',
+    label: 'Bit-line coupling to word lines',
+    quantity: 'capacitance',
+    group: null,
+    exportKey: 'bitlineToWordlineCapacitance_F',
+    value: (f) => f.bitlineCapacitance.wordlineCoupling,
+  }),
+  matFigure({
+    key: 'bitlineToBitlineCapacitance',
+    label: 'Bit-line coupling to bit lines',
+    quantity: 'capacitance',
+    group: null,
+    exportKey: 'bitlineToBitlineCapacitance_F',
+    value: (f) => f.bitlineCapacitance.bitlineCoupling,
+  }),
+  matFigure({
+    key: 'bitlineWireCapacitance',
+    label: 'Bit-line wire capacitance',
+    quantity: 'capacitance',
+    group: null,
+    exportKey: 'bitlineWireCapacitance_F',
+    value: (f) => f.bitlineCapacitance.wire,
+  }),
+  matFigure({
+    key: 'senseAmpInputCapacitance',
+    label: 'Sense-amplifier input capacitance',
+    quantity: 'capacitance',
+    group: null,
+    exportKey: 'senseAmpInputCapacitance_F',
+    value: (f) => f.bitlineCapacitance.senseAmp,
+  }),
+] as const;

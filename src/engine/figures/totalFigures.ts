@@ -1,0 +1,206 @@
+import type { Design } from '../../model/design';
+import { formatQuantity } from '../../model/units';
+import type { Report } from '../evaluation/report';
+import { explanationOf } from './figure';
+import { input, SOURCES, type Explanation } from './explanation';
+import { FORMULAS } from './formulas';
+import { TOTAL_AREA_FIGURES } from './totalAreaFigures';
+import {
+  totalFigure,
+  TOTAL_FIGURE_GROUPS,
+  type TotalFigureEntry,
+  type TotalFigureGroup,
+} from './totalFigure';
+import { TOTAL_REFRESH_FIGURES } from './totalRefreshFigures';
+
+const worstOf = (id: string | null) => `Smallest over all mats (mat ${id ?? '—'}).`;
+
+/** A worst-case figure with the mat it comes from, or a dash when there are no mats (CLI text). */
+const worstText = (value: string, matId: string | null) =>
+  matId === null ? '— (no mats)' : `${value} (${matId})`;
+
+/**
+ * The catalogue of whole-design figures, in the order of the JSON summary; the panel shows the entries
+ * that have a group, group by group in {@link TOTAL_FIGURE_GROUPS} order, and the CLI prints those with
+ * a `cli` row, in this order.
+ */
+export const TOTAL_FIGURE_CATALOGUE = [
+  ...TOTAL_AREA_FIGURES,
+  totalFigure({
+    key: 'storedHigh',
+    label: 'Stored-1 level',
+    quantity: 'voltage',
+    group: 'Worst case',
+    exportKey: 'storedHighLevel_V',
+    cli: {
+      label: 'stored 1 level',
+      text: (r) => {
+        const s = r.storedHigh;
+        const level = formatQuantity(s.level, 'voltage');
+        return s.limitedByWordline
+          ? `${level}, limited by the word line (needs VPP ≥ ${formatQuantity(s.wordlineHighNeeded, 'voltage')})`
+          : `${level} (full array voltage)`;
+      },
+    },
+    value: (r) => r.storedHigh.level,
+    explain: (r, design) => {
+      const p = design.process;
+      return {
+        symbol: 'V1',
+        formula: 'V1 = min(VDD, VPP − Vt(V1)),  Vt(V) = Vt0 + γ(√(2φF + V) − √2φF)',
+        inputs: [
+          input('VDD', 'array voltage', p.arrayVoltage, 'voltage'),
+          input('VPP', 'word-line high', p.wordlineHighVoltage, 'voltage'),
+          input('Vt0', 'zero-bias threshold', p.accessThresholdVoltage, 'voltage'),
+          input('γ', 'body-effect coefficient', p.bodyEffectCoefficient, 'sqrtVoltage'),
+          input('2φF', 'surface potential', p.surfacePotential, 'voltage'),
+          input('Vt(V1)', 'threshold at the stored level', r.storedHigh.threshold, 'voltage'),
+          input('VPP_min', 'VPP for a full 1', r.storedHigh.wordlineHighNeeded, 'voltage'),
+        ],
+        method: 'Solved by bisection, since the threshold rises with the stored level (body effect).',
+        source:
+          'body-effect equation, Weste & Harris, CMOS VLSI Design, 4th ed., 2011, §2.4; VPP ≥ VDD + Vt rule (common practice)',
+      };
+    },
+  }),
+  totalFigure({
+    key: 'worstSenseSignal',
+    label: 'Worst sense signal',
+    quantity: 'voltage',
+    group: 'Worst case',
+    exportKey: 'worstSenseSignal_V',
+    cli: {
+      label: 'worst sense signal',
+      text: (r) =>
+        worstText(formatQuantity(r.totals.worstSenseSignal, 'voltage'), r.totals.worstSenseSignalMatId),
+    },
+    value: (r) => r.totals.worstSenseSignal,
+    explain: (r) => ({
+      symbol: 'ΔV_min',
+      formula: 'ΔV_min = min over mats of the sense signal',
+      inputs: [input('mats', 'mats', r.totals.matCount, 'count')],
+      method: worstOf(r.totals.worstSenseSignalMatId),
+      source: SOURCES.westeHarris,
+    }),
+  }),
+  totalFigure({
+    key: 'worstSenseMargin',
+    label: 'Worst margin at refresh',
+    quantity: 'voltage',
+    group: 'Worst case',
+    exportKey: 'worstSenseMargin_V',
+    cli: {
+      label: 'worst margin after refresh window',
+      text: (r) =>
+        worstText(formatQuantity(r.totals.worstSenseMargin, 'voltage'), r.totals.worstSenseMarginMatId),
+    },
+    value: (r) => r.totals.worstSenseMargin,
+    explain: (r, design) => ({
+      symbol: 'M_min',
+      formula: 'M_min = min over mats of (ΔV after a refresh window − V_req)',
+      inputs: [input('target', 'minimum margin target', design.operating.minimumSenseMargin, 'voltage')],
+      method: worstOf(r.totals.worstSenseMarginMatId),
+      source: SOURCES.common,
+    }),
+  }),
+  totalFigure({
+    key: 'shortestRetention',
+    label: 'Shortest retention',
+    quantity: 'time',
+    group: 'Worst case',
+    exportKey: 'shortestRetention_s',
+    cli: {
+      label: 'shortest retention',
+      text: (r) =>
+        r.totals.matCount === 0 ? '— (no mats)' : formatQuantity(r.totals.shortestRetention, 'time'),
+    },
+    value: (r) => r.totals.shortestRetention,
+    explain: (_r, design) => ({
+      symbol: 't_ret,min',
+      formula: `t_ret,min = min over mats of ${FORMULAS.retention.replace('t_ret = ', '')}`,
+      inputs: [
+        input('tREFW', 'refresh window', design.operating.refreshWindow, 'time'),
+        input('T', 'temperature', design.operating.temperature, 'temperature'),
+      ],
+      method: 'Must exceed the refresh window.',
+      source: SOURCES.arrhenius,
+    }),
+  }),
+  totalFigure({
+    key: 'worstWordlineDelay',
+    label: 'Slowest word line',
+    quantity: 'time',
+    group: 'Worst case',
+    exportKey: 'worstWordlineDelay_s',
+    cli: {
+      label: 'worst word-line delay',
+      text: (r) =>
+        r.totals.matCount === 0 ? '— (no mats)' : formatQuantity(r.totals.worstWordlineDelay, 'time'),
+    },
+    value: (r) => r.totals.worstWordlineDelay,
+    explain: (_r, design) => ({
+      symbol: 't_wl,max',
+      formula: `t_wl,max = max over mats of ${FORMULAS.wordlineDelay.replace('t_wl = ', '')}`,
+      inputs: [input('R_drv', 'driver resistance', design.process.wordlineDriverResistance, 'resistance')],
+      method: 'Longest sub-word line.',
+      source: SOURCES.rabaey,
+    }),
+  }),
+  totalFigure({
+    key: 'operatingTemperature',
+    label: 'Operating temperature',
+    quantity: 'temperature',
+    group: null,
+    exportKey: null,
+    cli: { label: 'operating temperature' },
+    value: (_r, design) => design.operating.temperature,
+  }),
+  ...TOTAL_REFRESH_FIGURES,
+  totalFigure({
+    key: 'storedHighThreshold',
+    label: 'Threshold at the stored-1 level',
+    quantity: 'voltage',
+    group: null,
+    exportKey: 'storedHighThreshold_V',
+    value: (r) => r.storedHigh.threshold,
+  }),
+  totalFigure({
+    key: 'wordlineHighNeeded',
+    label: 'Word-line high for a full 1',
+    quantity: 'voltage',
+    group: null,
+    exportKey: 'wordlineHighNeeded_V',
+    value: (r) => r.storedHigh.wordlineHighNeeded,
+  }),
+] as const;
+
+/** Every whole-design figure's key. */
+export type TotalFigureKey = (typeof TOTAL_FIGURE_CATALOGUE)[number]['key'];
+
+const BY_KEY: ReadonlyMap<string, TotalFigureEntry> = new Map(TOTAL_FIGURE_CATALOGUE.map((e) => [e.key, e]));
+
+/** The catalogue entry of a whole-design figure. */
+export function totalFigureEntry(key: TotalFigureKey): TotalFigureEntry {
+  const entry = BY_KEY.get(key);
+  if (!entry) throw new Error(`no total figure "${key}"`);
+  return entry;
+}
+
+/** The whole-design figures a panel shows, group by group in display order. */
+export const TOTAL_FIGURE_PANEL: readonly {
+  readonly title: TotalFigureGroup;
+  readonly keys: readonly TotalFigureKey[];
+}[] = TOTAL_FIGURE_GROUPS.map((title) => ({
+  title,
+  keys: TOTAL_FIGURE_CATALOGUE.filter((e) => e.group === title).map((e) => e.key),
+}));
+
+/** Keys of the whole-design figures a panel shows, in display order. */
+export const TOTAL_FIGURES: readonly TotalFigureKey[] = TOTAL_FIGURE_PANEL.flatMap((g) => g.keys);
+
+/** Explains one whole-design figure; undefined for a figure that is only exported. */
+export function explainTotal(key: TotalFigureKey, report: Report, design: Design): Explanation | undefined {
+  const entry = totalFigureEntry(key);
+  if (!entry.explain) return undefined;
+  return explanationOf(entry, entry.value(report, design), entry.explain(report, design));
+}
