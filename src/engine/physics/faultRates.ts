@@ -1,0 +1,70 @@
+/**
+ * Expected faults per mat (or per repair domain) from the three failure sources: random defects with kill
+ * ratios, sense amplifiers whose offset exceeds the developed signal, and weak cells whose retention is
+ * shorter than the refresh window. Plain numbers, SI units.
+ */
+import { normalUpperTail } from './normalTail';
+
+/** Expected numbers of faulty cells, word lines (rows) and bit-line pairs (columns) in one region. */
+export interface FaultCounts {
+  /** Single faulty cells, each repairable by a spare row or a spare column. */
+  readonly cells: number;
+  /** Whole faulty word lines; only a spare row repairs one. */
+  readonly rows: number;
+  /** Whole faulty bit-line pairs (a column with its sense amplifier); only a spare column repairs one. */
+  readonly columns: number;
+}
+
+/** Fraction of the defects landing in an array that kill one cell, one word line or one bit-line pair. */
+export interface KillRatios {
+  readonly singleCell: number;
+  readonly wordLine: number;
+  readonly bitLine: number;
+}
+
+export const NO_FAULTS: FaultCounts = { cells: 0, rows: 0, columns: 0 };
+
+/**
+ * Faults from random defects in an array region: defects fall at density D (per m²) over the region's area
+ * A; a fraction k of them (the kill ratio, the critical-area share of each fault kind) makes a fault, so
+ * λ = D·A·k for each kind. Poisson statistics; clustering is applied at die scale by the yield model.
+ * Source: the critical-area / kill-ratio method of defect yield modelling (Stapper; W. Maly) [from memory].
+ */
+export function defectFaults(area: number, defectDensity: number, kill: KillRatios): FaultCounts {
+  const defects = area * defectDensity;
+  return {
+    cells: defects * kill.singleCell,
+    rows: defects * kill.wordLine,
+    columns: defects * kill.bitLine,
+  };
+}
+
+/**
+ * Probability that a sense amplifier fails: its input offset, Gaussian with σ, exceeds the developed signal
+ * ΔV in the direction that opposes the datum. Either sign of offset opposes one of the two data, so both
+ * tails count: p = 2·Q(ΔV/σ). A failing sense amplifier loses its whole bit-line pair: a column fault.
+ * Source: common practice (no source); two-tailed offset budget as in the reference shelf, entry 24.
+ */
+export function senseAmpFailureProbability(developedSignal: number, offsetSigma: number): number {
+  if (!(offsetSigma > 0)) return developedSignal > 0 ? 0 : 1;
+  if (!(developedSignal > 0)) return 1;
+  return Math.min(1, 2 * normalUpperTail(developedSignal / offsetSigma));
+}
+
+/** Faults from the parametric sources of one region: failing sense amplifiers (columns) and weak cells. */
+export function parametricFaults(
+  senseAmps: number,
+  senseAmpFailure: number,
+  cells: number,
+  weakCellFraction: number,
+): FaultCounts {
+  return { cells: cells * weakCellFraction, rows: 0, columns: senseAmps * senseAmpFailure };
+}
+
+export function addFaults(a: FaultCounts, b: FaultCounts): FaultCounts {
+  return { cells: a.cells + b.cells, rows: a.rows + b.rows, columns: a.columns + b.columns };
+}
+
+export function scaleFaults(a: FaultCounts, factor: number): FaultCounts {
+  return { cells: a.cells * factor, rows: a.rows * factor, columns: a.columns * factor };
+}
