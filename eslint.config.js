@@ -5,7 +5,7 @@ import tseslint from 'typescript-eslint';
 import reactHooks from 'eslint-plugin-react-hooks';
 import globals from 'globals';
 
-const uiPackages = ['react', 'react-dom', 'react-konva', 'konva', 'zustand', 'zustand/*', 'd3', 'd3-*'];
+const uiPackages = ['react', 'react-dom', 'konva', 'konva/*', 'zustand', 'zustand/*', 'd3', 'd3-*'];
 
 export default tseslint.config(
   { ignores: ['dist', 'node_modules', 'reports', 'test-results', 'playwright-report'] },

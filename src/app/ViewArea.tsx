@@ -1,12 +1,19 @@
-import type { ReactNode } from 'react';
+import { lazy, Suspense, type ReactNode } from 'react';
 import { switchVariant } from '../commands/switchVariant';
 import { activeVariantId, variantEntries } from '../model/variants';
-import { ExplorerView } from '../panels/explorer/ExplorerView';
-import { VariantsView } from '../panels/variants/VariantsView';
 import { useAppStore } from '../store/useAppStore';
 import { useExploreStore } from '../store/useExploreStore';
 import type { MainView } from '../store/exploreStore';
 import '../panels/explore.css';
+
+// The explorer (with d3 and its charts) and the variants table load when first opened, so the first
+// load carries only the floorplan editor.
+const ExplorerView = lazy(() =>
+  import('../panels/explorer/ExplorerView').then((m) => ({ default: m.ExplorerView })),
+);
+const VariantsView = lazy(() =>
+  import('../panels/variants/VariantsView').then((m) => ({ default: m.VariantsView })),
+);
 
 const VIEWS: readonly { id: MainView; label: string }[] = [
   { id: 'floorplan', label: 'Floorplan' },
@@ -62,8 +69,10 @@ export function ViewArea({ children }: { readonly children: ReactNode }) {
       </nav>
       <div className="view-body">
         {view === 'floorplan' && children}
-        {view === 'explorer' && <ExplorerView />}
-        {view === 'variants' && <VariantsView />}
+        <Suspense fallback={<p className="view-loading">Loading…</p>}>
+          {view === 'explorer' && <ExplorerView />}
+          {view === 'variants' && <VariantsView />}
+        </Suspense>
       </div>
     </div>
   );

@@ -1,6 +1,8 @@
 import { matGeometry } from '../geometry/matGeometry';
-import { MAX_CELLS_PER_LINE, type Mat } from '../model/block';
-import { isGainCell, type CellDefinition } from '../model/cell';
+import type { Mat } from '../model/block';
+import { MAX_CELLS_PER_LINE } from '../model/blockLimits';
+import type { CellDefinition } from '../model/cell';
+import { isGainCell } from '../model/cellBasics';
 
 /** Sizes of the periphery around the mats (m). Strips must be wider than zero; decoders may be absent (0). */
 export interface StripSizes {

@@ -1,10 +1,9 @@
-import type Konva from 'konva';
 import { useEffect, useRef, useState } from 'react';
-import { Layer, Shape, Stage } from 'react-konva';
 import { useEditorStore } from '../store/editorStore';
 import { useAppStore } from '../store/useAppStore';
 import { CanvasController } from './CanvasController';
 import { CANVAS_BACKGROUND } from './blockStyle';
+import { mountPaintedStage, type PaintedStage } from './paintedStage';
 import './canvas.css';
 
 function useElementSize(ref: React.RefObject<HTMLDivElement | null>) {
@@ -22,65 +21,41 @@ function useElementSize(ref: React.RefObject<HTMLDivElement | null>) {
   return size;
 }
 
-type Paint = (ctx: CanvasRenderingContext2D) => void;
-
-/** One Konva layer holding one shape that paints itself; nothing in it takes pointer events. */
-function PaintedLayer({ layerRef, paint }: { layerRef: React.Ref<Konva.Layer>; paint: Paint }) {
-  return (
-    <Layer ref={layerRef} listening={false} imageSmoothingEnabled={false}>
-      <Shape sceneFunc={(context) => paint(context._context)} listening={false} perfectDrawEnabled={false} />
-    </Layer>
-  );
-}
-
 /**
- * The floorplan canvas: a Konva stage with four painted layers (grid, blocks, overlay, rulers). React
- * mounts it once; the {@link CanvasController} handles input and repaints, so pointer moves never
- * re-render React components here.
+ * The floorplan canvas: a Konva stage with four painted layers (grid, blocks, overlay, rulers), mounted
+ * once through Konva itself; the {@link CanvasController} handles input and repaints, so pointer moves
+ * never re-render React components here.
  */
 export function FloorplanCanvas() {
   const containerRef = useRef<HTMLDivElement>(null);
+  const stageRef = useRef<PaintedStage | null>(null);
   const size = useElementSize(containerRef);
   const [controller] = useState(() => new CanvasController(useAppStore, useEditorStore));
-  const grid = useRef<Konva.Layer>(null);
-  const blocks = useRef<Konva.Layer>(null);
-  const overlay = useRef<Konva.Layer>(null);
-  const rulers = useRef<Konva.Layer>(null);
   const mounted = size.width > 0;
 
   useEffect(() => {
     const element = containerRef.current;
-    if (!mounted || !element || !grid.current || !blocks.current || !overlay.current || !rulers.current)
-      return;
-    controller.attach(element, {
-      grid: grid.current,
-      blocks: blocks.current,
-      overlay: overlay.current,
-      rulers: rulers.current,
+    if (!mounted || !element) return;
+    const view = controller.view;
+    const stage = mountPaintedStage(element, view.width || 1, view.height || 1, CANVAS_BACKGROUND, {
+      grid: view.paintGrid,
+      blocks: view.paintBlocks,
+      overlay: view.paintOverlay,
+      rulers: view.paintRulers,
     });
-    return () => controller.detach();
+    stageRef.current = stage;
+    controller.attach(element, stage.layers);
+    return () => {
+      controller.detach();
+      stage.destroy();
+      stageRef.current = null;
+    };
   }, [controller, mounted]);
 
   useEffect(() => {
+    stageRef.current?.resize(size.width, size.height);
     controller.setSize(size.width, size.height);
   }, [controller, size]);
 
-  const view = controller.view;
-  return (
-    <div ref={containerRef} className="floorplan" data-testid="floorplan" tabIndex={-1}>
-      {mounted && (
-        <Stage
-          width={size.width}
-          height={size.height}
-          listening={false}
-          style={{ background: CANVAS_BACKGROUND }}
-        >
-          <PaintedLayer layerRef={grid} paint={view.paintGrid} />
-          <PaintedLayer layerRef={blocks} paint={view.paintBlocks} />
-          <PaintedLayer layerRef={overlay} paint={view.paintOverlay} />
-          <PaintedLayer layerRef={rulers} paint={view.paintRulers} />
-        </Stage>
-      )}
-    </div>
-  );
+  return <div ref={containerRef} className="floorplan" data-testid="floorplan" tabIndex={-1} />;
 }

@@ -1,4 +1,4 @@
-import type Konva from 'konva';
+import type { Layer } from 'konva/lib/Layer';
 import type { Severity } from '../engine';
 import { placedDesign } from '../geometry/placedIndex';
 import type { AppStore } from '../store/appStore';
@@ -12,10 +12,10 @@ import { markersOf, sameMarkers, type Scene } from './paint/scene';
 import { timed } from './perfProbe';
 
 export interface CanvasLayers {
-  readonly grid: Konva.Layer;
-  readonly blocks: Konva.Layer;
-  readonly overlay: Konva.Layer;
-  readonly rulers: Konva.Layer;
+  readonly grid: Layer;
+  readonly blocks: Layer;
+  readonly overlay: Layer;
+  readonly rulers: Layer;
 }
 
 /** What the view asks of the controller when it paints. */

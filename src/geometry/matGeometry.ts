@@ -1,4 +1,5 @@
-import { cellPitches, crossingOccupancy, type CellDefinition } from '../model/cell';
+import type { CellDefinition } from '../model/cell';
+import { cellPitches, crossingOccupancy } from '../model/cellBasics';
 import type { Mat } from '../model/block';
 import type { Rect } from './rect';
 

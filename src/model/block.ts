@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { MAX_CELLS_PER_LINE } from './blockLimits';
 import { MAX_COORDINATE, finite, positive, wholeCount } from './schemaParts';
 
 /**
@@ -7,8 +8,7 @@ import { MAX_COORDINATE, finite, positive, wholeCount } from './schemaParts';
  * every other block carries its own width and height.
  */
 
-/** Cells on one bit line or one word line; large enough for any real mat, small enough to stay sane. */
-export const MAX_CELLS_PER_LINE = 16384;
+export { MAX_CELLS_PER_LINE } from './blockLimits';
 
 const coordinate = (label: string) => finite(label, -MAX_COORDINATE, MAX_COORDINATE);
 // At least 10 nm: far below any strip, and far above the 1 nm abutment tolerance the checks rely on.

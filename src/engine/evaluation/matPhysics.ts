@@ -1,5 +1,5 @@
 import type { MatKind } from '../../geometry/blockTable';
-import { isGainCell } from '../../model/cell';
+import { isGainCell } from '../../model/cellBasics';
 import type { OperatingConditions } from '../../model/operating';
 import type { ProcessProfile } from '../../model/process';
 import { bitlineCapacitance } from '../physics/bitline';
