@@ -1,7 +1,8 @@
 import { gridFloorplan } from '../geometry/gridFloorplan';
 import { formatBits } from '../model/units';
 import { BUILTIN_CELLS } from '../model/builtins';
-import { CELL_KIND_LABEL, type CellDefinition } from '../model/cell';
+import type { CellDefinition } from '../model/cell';
+import { CELL_KIND_LABEL } from '../model/cellBasics';
 import { DESIGN_FORMAT, DESIGN_VERSION, type VariantDesign } from '../model/design';
 import type { OperatingConditions } from '../model/operating';
 import type { ProcessProfile } from '../model/process';

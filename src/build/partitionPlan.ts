@@ -1,6 +1,6 @@
 import { matGeometry } from '../geometry/matGeometry';
 import type { Mat } from '../model/block';
-import { MAX_CELLS_PER_LINE } from '../model/blockLimits';
+import { MAX_CELLS_PER_LINE } from '../model/blockBasics';
 import type { CellDefinition } from '../model/cell';
 import { isGainCell } from '../model/cellBasics';
 

@@ -1,4 +1,5 @@
-import { BLOCK_TYPES, type Block, type BlockType, type Mat } from '../model/block';
+import type { Block, BlockType, Mat } from '../model/block';
+import { BLOCK_TYPES } from '../model/blockBasics';
 import type { CellDefinition } from '../model/cell';
 import type { Design } from '../model/design';
 import { matGeometry, type MatGeometry } from './matGeometry';

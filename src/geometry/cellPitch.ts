@@ -1,5 +1,6 @@
 import type { BitlineAxis } from '../model/block';
-import { crossingOccupancy, type CellDefinition } from '../model/cell';
+import type { CellDefinition } from '../model/cell';
+import { crossingOccupancy } from '../model/cellBasics';
 
 /** A step along the canvas axes (m). */
 export interface Step {

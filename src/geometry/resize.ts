@@ -1,4 +1,5 @@
-import { MAX_CELLS_PER_LINE, type Mat } from '../model/block';
+import type { Mat } from '../model/block';
+import { MAX_CELLS_PER_LINE } from '../model/blockBasics';
 import type { CellDefinition } from '../model/cell';
 import { matCellStep } from './cellPitch';
 import { matGeometry } from './matGeometry';

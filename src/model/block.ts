@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { MAX_CELLS_PER_LINE } from './blockLimits';
+import { BITLINE_AXES, MAX_CELLS_PER_LINE, STRIP_TYPES } from './blockBasics';
 import { MAX_COORDINATE, finite, positive, wholeCount } from './schemaParts';
 
 /**
@@ -8,7 +8,14 @@ import { MAX_COORDINATE, finite, positive, wholeCount } from './schemaParts';
  * every other block carries its own width and height.
  */
 
-export { MAX_CELLS_PER_LINE } from './blockLimits';
+export {
+  BITLINE_AXES,
+  BLOCK_TYPES,
+  MAX_CELLS_PER_LINE,
+  STRIP_TYPES,
+  type BitlineAxis,
+  type StripType,
+} from './blockBasics';
 
 const coordinate = (label: string) => finite(label, -MAX_COORDINATE, MAX_COORDINATE);
 // At least 10 nm: far below any strip, and far above the 1 nm abutment tolerance the checks rely on.
@@ -20,10 +27,6 @@ const blockBase = {
   x: coordinate('x'),
   y: coordinate('y'),
 };
-
-/** Which way the bit lines run across the canvas. */
-export const BITLINE_AXES = ['vertical', 'horizontal'] as const;
-export type BitlineAxis = (typeof BITLINE_AXES)[number];
 
 export const matSchema = z.object({
   ...blockBase,
@@ -41,19 +44,6 @@ export const matSchema = z.object({
    */
   mirrored: z.boolean().optional(),
 });
-
-/** Strips and other rectangular blocks. A spacer serves nothing: it only takes area (a gap kept on purpose). */
-export const STRIP_TYPES = [
-  'senseAmpStrip',
-  'wordlineDriverStrip',
-  'rowDecoder',
-  'columnDecoder',
-  'spacer',
-] as const;
-export type StripType = (typeof STRIP_TYPES)[number];
-
-/** Every block type: the mat, then the strips. */
-export const BLOCK_TYPES = ['mat', ...STRIP_TYPES] as const;
 
 export const stripSchema = z.object({
   ...blockBase,

@@ -3,7 +3,7 @@ import { kindAt, MAT_CODE, type BlockTable } from '../../geometry/blockTable';
 import { uncoveredLineCount } from '../../geometry/interval';
 import type { NeighbourTable } from '../../geometry/neighbourRows';
 import { ABUTMENT_TOLERANCE } from '../../geometry/rect';
-import { isGainCell } from '../../model/cell';
+import { isGainCell } from '../../model/cellBasics';
 import type { SenseAmpContacts } from './connectivity';
 
 /**

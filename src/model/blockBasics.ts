@@ -1,0 +1,22 @@
+// The plain facts about blocks, apart from their schema (block.ts), so that code which only computes
+// (the engine and the sweep worker) does not load the validation library.
+
+/** Cells on one bit line or one word line; large enough for any real mat, small enough to stay sane. */
+export const MAX_CELLS_PER_LINE = 16384;
+
+/** Which way the bit lines run across the canvas. */
+export const BITLINE_AXES = ['vertical', 'horizontal'] as const;
+export type BitlineAxis = (typeof BITLINE_AXES)[number];
+
+/** Strips and other rectangular blocks. A spacer serves nothing: it only takes area (a gap kept on purpose). */
+export const STRIP_TYPES = [
+  'senseAmpStrip',
+  'wordlineDriverStrip',
+  'rowDecoder',
+  'columnDecoder',
+  'spacer',
+] as const;
+export type StripType = (typeof STRIP_TYPES)[number];
+
+/** Every block type: the mat, then the strips. */
+export const BLOCK_TYPES = ['mat', ...STRIP_TYPES] as const;
