@@ -33,7 +33,21 @@ export { inverseNormal, upperTailQuantile } from './physics/statistics';
 
 // evaluation: a design in, a report out
 export { evaluate, findMatReport } from './evaluation/evaluate';
-export { matPhysics, senseAmpsOfMat, type DesignContext } from './evaluation/matPhysics';
+export {
+  cellLeakage,
+  matPhysics,
+  MINIMUM_LEAKAGE,
+  senseAmpsOfMat,
+  type DesignContext,
+} from './evaluation/matPhysics';
+export {
+  firingKinds,
+  MAT_RULES,
+  storedHighSeverity,
+  type CheckedFigures,
+  type CheckLimits,
+  type MatRule,
+} from './evaluation/checkRules';
 export { preparePreview, previewReport, type PreviewBase } from './evaluation/preview';
 export {
   FINDING_KINDS,

@@ -1,7 +1,8 @@
 import type { BuildSpec } from '../build/buildPartition';
 import { planPartition, type PartitionPlan } from '../build/partitionPlan';
 import {
-  leakageAtTemperature,
+  cellLeakage,
+  firingKinds,
   matPhysics,
   offsetSigmaMultiplier,
   refreshBusyFraction,
@@ -12,7 +13,6 @@ import {
   senseAmpsOfMat,
   storedHighLevel,
   type DesignContext,
-  type FindingKind,
   type PartitionFigures,
   type StoredHighLevel,
 } from '../engine';
@@ -45,12 +45,7 @@ export class ProcessCache {
     const entry = {
       operating,
       storedHigh: storedHighLevel(process),
-      leakage: leakageAtTemperature(
-        process.cellLeakageCurrent,
-        process.leakageReferenceTemperature,
-        process.leakageActivationEnergy,
-        operating.temperature,
-      ),
+      leakage: cellLeakage(process, operating),
     };
     this.entries.set(process, entry);
     return entry;
@@ -119,14 +114,12 @@ export function partitionFigures(
     process.rowCycleTime,
   );
 
-  const errorKinds: FindingKind[] = [];
-  const warningKinds: FindingKind[] = [];
-  if (plan.lostBits > 0) warningKinds.push('openBitlineEdge');
-  if (!mat.senseAmpFits) errorKinds.push('senseAmpPitch');
-  if (mat.retentionTime < operating.refreshWindow) errorKinds.push('retention');
-  if (mat.senseMarginAtRefresh < 0) errorKinds.push('senseMargin');
-  else if (mat.senseMarginAtRefresh < operating.minimumSenseMargin) warningKinds.push('senseMargin');
-  if (shared.storedHigh.limitedByWordline) warningKinds.push('storedHighLimited');
+  // The engine's own check rules; the representative mat loses no bits, the bank's edge rows do.
+  const { errorKinds, warningKinds } = firingKinds(
+    { ...mat, lostBits: plan.lostBits },
+    { process, operating },
+    shared.storedHigh,
+  );
 
   return {
     ok: true,
@@ -156,8 +149,8 @@ export function partitionFigures(
         plan.matCount * mat.activationEnergy.total * mat.wordlineCount,
         operating.refreshWindow,
       ),
-      errorKinds: errorKinds.sort(),
-      warningKinds: warningKinds.sort(),
+      errorKinds,
+      warningKinds,
     },
   };
 }

@@ -1,6 +1,6 @@
 import type { BitlineAxis } from '../model/block';
 import type { CellDefinition } from '../model/cell';
-import { crossingOccupancy } from '../model/cellBasics';
+import { cellPitches, crossingOccupancy } from '../model/cellBasics';
 
 /** A step along the canvas axes (m). */
 export interface Step {
@@ -11,11 +11,11 @@ export interface Step {
 /**
  * Line pitches of a mat along the canvas axes (m): with vertical bit lines, neighbouring bit lines sit one
  * bit-line pitch apart in x and neighbouring word lines one word-line pitch apart in y; horizontal swaps
- * them. Moves snap to these, so a moved mat stays on its neighbours' line grid.
+ * them. Moves snap to these, so a moved mat stays on its neighbours' line grid. The pitches are the
+ * cell's (its override when it has one, else multiples of F), the same that size the mat.
  */
 export function matLinePitch(cell: CellDefinition, featureSize: number, axis: BitlineAxis): Step {
-  const bitlinePitch = cell.bitlinePitchInF * featureSize;
-  const wordlinePitch = cell.wordlinePitchInF * featureSize;
+  const { bitlinePitch, wordlinePitch } = cellPitches(cell, featureSize);
   return axis === 'vertical' ? { x: bitlinePitch, y: wordlinePitch } : { x: wordlinePitch, y: bitlinePitch };
 }
 

@@ -15,6 +15,7 @@ import type { Block, Mat } from '../../src/model/block';
 import { demoDesign } from '../../src/model/demoDesign';
 import type { Design } from '../../src/model/design';
 import { DEFAULT_TOOL_OPTIONS } from '../../src/store/editorStore';
+import { FOLDED_8F2_CELL } from '../../src/model/builtins';
 import { designWith, mat } from '../support/designs';
 
 const NO_KEYS = { shift: false, alt: false };
@@ -136,6 +137,60 @@ describe('select tool gestures', () => {
     expect(s.x).toBeCloseTo(m.x, 15);
     expect(s.y + s.height).toBeCloseTo(m.y, 15);
     expect(matAt(evaluate(after).mats, 0).unsensedBitlines).toBe(0);
+  });
+});
+
+describe('a mat whose cell overrides its pitches', () => {
+  // Folded cell drawn at 50 nm bit-line pitch and 40 nm word-line pitch instead of 2F = 36 nm: lines step
+  // 50 nm across and 40 nm down, and one cell (two folded bit lines, two word lines) 100 nm × 80 nm
+  // (arithmetic). Before the fix, moves, resizes and drawing snapped to the F-based 36 nm / 72 nm steps.
+  const base = designWith([mat({ id: 'm', x: 0, y: 0 })]);
+  const overridden: Design = {
+    ...base,
+    cells: base.cells.map((c) =>
+      c.id === FOLDED_8F2_CELL.id
+        ? { ...c, pitchOverride: { bitlinePitch: 50e-9, wordlinePitch: 40e-9 } }
+        : c,
+    ),
+  };
+  const rect = rectOf(overridden, 'm');
+  const centre = { x: rect.x + rect.width / 2, y: rect.y + rect.height / 2 };
+  const isWhole = (value: number, step: number) =>
+    expect(Math.abs(value / step - Math.round(value / step))).toBeLessThan(1e-6);
+
+  it('is sized from the override', () => {
+    expect(rect.width).toBeCloseTo(512 * 100e-9, 15);
+    expect(rect.height).toBeCloseTo(512 * 80e-9, 15);
+  });
+
+  it('moves in whole line pitches of the override', () => {
+    const press = pressWithSelectTool(context(overridden), centre, false);
+    const p = { x: centre.x + 1.013e-6, y: centre.y + 0.507e-6 };
+    press.gesture.move(p, NO_KEYS);
+    const args = press.gesture.finish(p, true, NO_KEYS).call?.args as { dx: number; dy: number };
+    isWhole(args.dx, 50e-9);
+    isWhole(args.dy, 40e-9);
+    expect(args.dx).toBeCloseTo(20 * 50e-9, 15);
+    expect(args.dy).toBeCloseTo(13 * 40e-9, 15);
+  });
+
+  it('resizes in whole cells of the override', () => {
+    const east = { x: rect.x + rect.width, y: centre.y };
+    const press = pressWithSelectTool(context(overridden, ['m']), east, false);
+    expect(press.handle).toBe('e');
+    const p = { x: east.x - 10 * 100e-9, y: east.y };
+    press.gesture.move(p, NO_KEYS);
+    const m = apply(overridden, press.gesture.finish(p, true, NO_KEYS)).blocks[0] as Mat;
+    expect(m.cellsPerWordline).toBe(502);
+  });
+
+  it('draws in whole cells of the override', () => {
+    const empty = { ...overridden, blocks: [] };
+    const g = new DrawMatGesture(context(empty), { x: 0, y: 0 });
+    const p = { x: 100 * 100e-9 + 10e-9, y: 50 * 80e-9 - 10e-9 };
+    g.move(p, NO_KEYS);
+    const drawn = apply(empty, g.finish(p, true, NO_KEYS)).blocks[0] as Mat;
+    expect(drawn).toMatchObject({ cellsPerWordline: 100, cellsPerBitline: 50 });
   });
 });
 

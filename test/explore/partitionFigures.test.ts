@@ -99,6 +99,31 @@ describe('fast partition figures agree with evaluate() on the built design', () 
       }),
       { numRuns: 150, seed: 20_240_611 },
     );
+  }, 60_000);
+
+  it('a cell that does not leak: the explorer floors the leakage as evaluate() does (finite retention, same checks)', () => {
+    const spec = {
+      targetBits: 4 * 2 ** 20,
+      cell: FOLDED_8F2_CELL,
+      process: { ...DEMO_PROCESS, cellLeakageCurrent: 0 },
+      operating: DEFAULT_OPERATING,
+      cellsPerBitline: 512,
+      cellsPerWordline: 512,
+      strips: {
+        senseAmpStripHeight: 6e-6,
+        wordlineDriverStripWidth: 3e-6,
+        rowDecoderWidth: 0,
+        columnDecoderHeight: 0,
+      },
+    };
+    const fast = partitionFigures(spec);
+    const built = buildPartition(spec);
+    if (!fast.ok || !built.ok) throw new Error('expected a plan');
+    const slow = figuresFromReport(evaluate(built.design));
+    expect(Number.isFinite(fast.figures.retentionTime)).toBe(true);
+    for (const key of NUMERIC) expectRelativelyClose(fast.figures[key], slow[key], 1e-9, key);
+    expect(fast.figures.errorKinds).toEqual(slow.errorKinds);
+    expect(fast.figures.warningKinds).toEqual(slow.warningKinds);
   });
 
   it('for the demo-like 64 Mib folded bank, figure by figure', () => {

@@ -1,6 +1,7 @@
 import { handlePosition, RESIZE_HANDLES } from '../../geometry/resize';
 import type { Rect } from '../../geometry/rect';
 import { isPlacedMat, type PlacedMat } from '../../geometry/placedBlocks';
+import { cellPitches } from '../../model/cell';
 import { formatQuantity } from '../../model/units';
 import {
   BITLINE_STROKE,
@@ -78,7 +79,10 @@ function paintCellKey(ctx: CanvasRenderingContext2D, scene: Scene): void {
   // Far from cell scale no mat can show its lines: skip the search over the visible blocks.
   const F = scene.design.process.featureSize;
   const finestPitch = Math.min(
-    ...scene.design.cells.map((c) => Math.min(c.bitlinePitchInF, c.wordlinePitchInF) * F),
+    ...scene.design.cells.map((c) => {
+      const { bitlinePitch, wordlinePitch } = cellPitches(c, F);
+      return Math.min(bitlinePitch, wordlinePitch);
+    }),
   );
   if (finestPitch * k < LINES_MIN_PITCH_PX) return;
   const view = visibleWorld(scene.viewport, scene.width, scene.height);

@@ -1,5 +1,6 @@
 import type { Design } from '../../model/design';
 import { formatQuantity } from '../../model/units';
+import { MAT_RULES, storedHighSeverity } from './checkRules';
 import type { Overlap } from './overlaps';
 import { figuresAt, matIdAt, matLabelAt, type MatTable } from './matTable';
 import type { Finding, FindingKind, MatFigures, Severity } from './report';
@@ -12,45 +13,12 @@ interface MatIssue {
   readonly detail: string;
 }
 
-/** Issues that follow from a mat's physics alone; the same for every mat of one kind. */
+/** Issues that follow from a mat's physics alone (the shared rules); the same for every mat of one kind. */
 function physicsIssues(figures: MatFigures, design: Design): MatIssue[] {
-  const v = (x: number) => formatQuantity(x, 'voltage');
   const issues: MatIssue[] = [];
-  const margin = figures.senseMarginAtRefresh;
-  const minimum = design.operating.minimumSenseMargin;
-  if (margin < 0) {
-    issues.push({
-      kind: 'senseMargin',
-      severity: 'error',
-      detail: `sense margin ${v(margin)} after a refresh window (signal ${v(figures.senseSignalAfterRefresh)} < offset and noise ${v(figures.requiredSignal)})`,
-    });
-  } else if (margin < minimum) {
-    issues.push({
-      kind: 'senseMargin',
-      severity: 'warning',
-      detail: `sense margin ${v(margin)} is below the ${v(minimum)} target`,
-    });
-  }
-  if (!figures.senseAmpFits) {
-    issues.push({
-      kind: 'senseAmpPitch',
-      severity: 'error',
-      detail: `a sense amplifier needs ${formatQuantity(design.process.senseAmpWidth, 'length')} but its bit-line pitch budget is ${formatQuantity(figures.senseAmpPitchBudget, 'length')}`,
-    });
-  }
-  if (figures.retentionTime < design.operating.refreshWindow) {
-    issues.push({
-      kind: 'retention',
-      severity: 'error',
-      detail: `retention ${formatQuantity(figures.retentionTime, 'time')} is shorter than the ${formatQuantity(design.operating.refreshWindow, 'time')} refresh window`,
-    });
-  }
-  if (figures.lostBits > 0) {
-    issues.push({
-      kind: 'openBitlineEdge',
-      severity: 'warning',
-      detail: `${formatQuantity(figures.lostBits, 'count')} bits on open bit lines have no partner mat beyond their sense-amplifier strip and are lost`,
-    });
+  for (const rule of MAT_RULES) {
+    const severity = rule.check(figures, design);
+    if (severity) issues.push({ kind: rule.kind, severity, detail: rule.detail(figures, design, severity) });
   }
   return issues;
 }
@@ -168,10 +136,11 @@ export function collectFindings(
       message: `${o.firstId} and ${o.secondId} overlap by ${formatQuantity(o.area, 'area')}`,
     });
   }
-  if (storedHigh.limitedByWordline) {
+  const storedHighLimited = storedHighSeverity(storedHigh);
+  if (storedHighLimited) {
     findings.push({
       kind: 'storedHighLimited',
-      severity: 'warning',
+      severity: storedHighLimited,
       blockIds: [],
       message:
         `word-line high level stores a 1 at only ${formatQuantity(storedHigh.level, 'voltage')} of ` +

@@ -5,17 +5,13 @@ import { ABUTMENT_TOLERANCE } from '../../geometry/rect';
 import type { Design } from '../../model/design';
 import { collectFindings } from './checks';
 import { emptyConnections, matConnections } from './connectivity';
-import { matPhysics, senseAmpsOfMat, type DesignContext } from './matPhysics';
+import { cellLeakage, matPhysics, senseAmpsOfMat, type DesignContext } from './matPhysics';
 import { offsetSigmaMultiplier } from '../physics/offset';
 import { findOverlaps, overlapAreaAt } from './overlaps';
 import type { MatFigures, MatReport, Report } from './report';
 import { matAt, matIndexOf, MatTableBuilder } from './matTable';
-import { leakageAtTemperature } from '../physics/retention';
 import { storedHighLevel } from '../physics/storedLevel';
 import { computeTotals } from './totals';
-
-/** Smallest leakage the engine uses (A): far below any physical cell, 1e-30 A keeps retention finite. */
-export const MINIMUM_LEAKAGE = 1e-30;
 
 /** The design-wide values every mat needs (stored level, k of the offset budget, leakage at temperature). */
 export function designContext(design: Design, senseAmpCount: number): DesignContext {
@@ -25,17 +21,7 @@ export function designContext(design: Design, senseAmpCount: number): DesignCont
     operating,
     storedHigh: storedHighLevel(process),
     sigmaMultiplier: offsetSigmaMultiplier(senseAmpCount, operating.allowedSenseFailures),
-    // Floored so that zero leakage (allowed) or an exp() underflow at low temperature still gives a
-    // finite, if enormous, retention time instead of Infinity or 0/0.
-    leakage: Math.max(
-      MINIMUM_LEAKAGE,
-      leakageAtTemperature(
-        process.cellLeakageCurrent,
-        process.leakageReferenceTemperature,
-        process.leakageActivationEnergy,
-        operating.temperature,
-      ),
-    ),
+    leakage: cellLeakage(process, operating),
   };
 }
 

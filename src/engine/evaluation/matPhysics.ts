@@ -9,7 +9,7 @@ import { gainReadSignals, minimumGainLevel } from '../physics/gainRead';
 import { couplingNoise } from '../physics/noise';
 import { pelgromSigma, stackOffsets } from '../physics/offset';
 import type { ActivationEnergy, ChargeSharingRead, GainCellRead, MatFigures } from './report';
-import { leakageDroop, retentionTime } from '../physics/retention';
+import { leakageAtTemperature, leakageDroop, retentionTime } from '../physics/retention';
 import { senseAmpPitchBudget } from '../physics/senseAmpPitch';
 import { chargeTransferRatio, readSignals } from '../physics/sensing';
 import type { StoredHighLevel } from '../physics/storedLevel';
@@ -23,6 +23,26 @@ export interface DesignContext {
   readonly sigmaMultiplier: number;
   /** Cell leakage at the operating temperature (A). */
   readonly leakage: number;
+}
+
+/** Smallest leakage the engine uses (A): far below any physical cell, 1e-30 A keeps retention finite. */
+export const MINIMUM_LEAKAGE = 1e-30;
+
+/**
+ * Cell leakage at the operating temperature (A), Arrhenius-scaled from the process's reference value.
+ * Floored so that zero leakage (allowed) or an exp() underflow at low temperature still gives a finite,
+ * if enormous, retention time instead of Infinity or 0/0. evaluate() and the explorer both use it.
+ */
+export function cellLeakage(process: ProcessProfile, operating: OperatingConditions): number {
+  return Math.max(
+    MINIMUM_LEAKAGE,
+    leakageAtTemperature(
+      process.cellLeakageCurrent,
+      process.leakageReferenceTemperature,
+      process.leakageActivationEnergy,
+      operating.temperature,
+    ),
+  );
 }
 
 /** Sense amplifiers serving a mat: one per pair of bit lines, or one per read bit line for gain cells. */
