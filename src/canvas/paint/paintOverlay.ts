@@ -1,7 +1,7 @@
 import { handlePosition, RESIZE_HANDLES } from '../../geometry/resize';
 import type { Rect } from '../../geometry/rect';
 import { isPlacedMat, type PlacedMat } from '../../geometry/placedBlocks';
-import { cellPitches } from '../../model/cell';
+import { cellPitches } from '../../model/cellBasics';
 import { formatQuantity } from '../../model/units';
 import {
   BITLINE_STROKE,
