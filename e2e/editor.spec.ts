@@ -107,6 +107,12 @@ test.describe('floorplan editor journeys', () => {
 
     await page.keyboard.press('r');
     await expect(app.field('mat-axis')).toHaveValue('horizontal');
+    // Inside a list box Ctrl+Z belongs to the box: nothing is undone.
+    await app.field('mat-axis').focus();
+    await page.keyboard.press('Control+z');
+    await expect(app.field('mat-axis')).toHaveValue('horizontal');
+    await expect(page.getByTestId('undo')).toBeEnabled();
+    await app.field('mat-axis').evaluate((el) => (el as HTMLElement).blur());
     await page.keyboard.press('Control+z');
     await expect(app.field('mat-axis')).toHaveValue('vertical');
     await page.keyboard.press('m');

@@ -2,31 +2,24 @@ import { BITLINE_AXES, BLOCK_TYPE_LABEL, type BitlineAxis } from '../model/block
 import { useEditorStore, isPlacementTool } from '../store/editorStore';
 import { useAppStore } from '../store/useAppStore';
 import { QuantityField } from '../panels/QuantityField';
-import { editorActions } from './actions';
+import { CommandButton } from './CommandButton';
+import type { ActionId } from './editorCommands';
 
-/** Buttons for what the keyboard does to the selection, each with its key. */
+/** Buttons for the editor commands on the selection, each with its key (editorCommands.ts). */
+const SELECTION_COMMANDS = [
+  ['edit.rotate', 'rotate'],
+  ['edit.mirrorLeftRight', 'mirror-lr'],
+  ['edit.mirrorTopBottom', 'mirror-tb'],
+  ['edit.duplicate', 'duplicate'],
+  ['edit.stepAndRepeat', 'step-repeat'],
+  ['edit.delete', 'delete'],
+] as const satisfies readonly (readonly [ActionId, string])[];
+
 function SelectionActions() {
-  const setStepRepeatOpen = useEditorStore((s) => s.setStepRepeatOpen);
-  const buttons: { id: string; label: string; key: string; run(): void }[] = [
-    { id: 'rotate', label: 'Rotate 90°', key: 'R', run: () => void editorActions.rotate() },
-    { id: 'mirror-lr', label: 'Mirror ↔', key: 'M', run: () => void editorActions.mirror('leftRight') },
-    { id: 'mirror-tb', label: 'Mirror ↕', key: 'Shift+M', run: () => void editorActions.mirror('topBottom') },
-    { id: 'duplicate', label: 'Duplicate', key: 'Ctrl+D', run: editorActions.duplicate },
-    { id: 'step-repeat', label: 'Step and repeat…', key: 'T', run: () => setStepRepeatOpen(true) },
-    { id: 'delete', label: 'Delete', key: 'Del', run: () => void editorActions.deleteSelection() },
-  ];
   return (
     <div className="block-actions" role="group" aria-label="Selection">
-      {buttons.map((b) => (
-        <button
-          key={b.id}
-          type="button"
-          data-testid={`action-${b.id}`}
-          title={`${b.label} (${b.key})`}
-          onClick={b.run}
-        >
-          {b.label}
-        </button>
+      {SELECTION_COMMANDS.map(([id, testId]) => (
+        <CommandButton key={id} id={id} testId={`action-${testId}`} />
       ))}
     </div>
   );
@@ -42,9 +35,7 @@ export function ToolOptionsBar() {
   const setOptions = useEditorStore((s) => s.setOptions);
   const setThickness = useEditorStore((s) => s.setThickness);
   const gridVisible = useEditorStore((s) => s.gridVisible);
-  const toggleGrid = useEditorStore((s) => s.toggleGrid);
   const cells = useAppStore((s) => s.history.present.cells);
-  const requestFit = useAppStore((s) => s.requestFit);
   const selectedCount = useAppStore((s) => s.selectedIds.length);
   const cellId = cells.some((c) => c.id === options.cellId) ? options.cellId : (cells[0]?.id ?? '');
 
@@ -118,26 +109,9 @@ export function ToolOptionsBar() {
         </span>
       )}
       <div className="view-buttons">
-        <button type="button" onClick={requestFit} title="Zoom to fit (F)" data-testid="zoom-fit">
-          Fit
-        </button>
-        <button
-          type="button"
-          onClick={editorActions.frameSelection}
-          title="Zoom to the selection (Z)"
-          data-testid="zoom-selection"
-        >
-          Selection
-        </button>
-        <button
-          type="button"
-          aria-pressed={gridVisible}
-          onClick={toggleGrid}
-          title="Grid (G)"
-          data-testid="toggle-grid"
-        >
-          Grid
-        </button>
+        <CommandButton id="view.fitAll" testId="zoom-fit" text="Fit" />
+        <CommandButton id="view.frameSelection" testId="zoom-selection" />
+        <CommandButton id="view.grid" testId="toggle-grid" pressed={gridVisible} />
       </div>
     </div>
   );

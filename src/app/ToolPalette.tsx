@@ -1,10 +1,6 @@
 import { TOOLS, useEditorStore } from '../store/editorStore';
-import { SHORTCUTS, toolKey } from './keymap';
+import { commandTitle, editorCommand, keysText, toolKey } from './editorCommands';
 import { ToolIcon } from './ToolIcon';
-
-const TOOL_TITLE = Object.fromEntries(
-  SHORTCUTS.filter((s) => s.group === 'Tools').map((s) => [s.action, s.description]),
-);
 
 /** The tool palette down the left of the canvas; each tool shows its number key. */
 export function ToolPalette() {
@@ -20,8 +16,8 @@ export function ToolPalette() {
           className="tool-button"
           data-testid={`tool-${t}`}
           aria-pressed={tool === t}
-          title={`${TOOL_TITLE[`tool.${t}`] ?? t} (${toolKey(t)})`}
-          aria-label={`${TOOL_TITLE[`tool.${t}`] ?? t} (${toolKey(t)})`}
+          title={commandTitle(editorCommand(`tool.${t}`))}
+          aria-label={commandTitle(editorCommand(`tool.${t}`))}
           onClick={() => setTool(t)}
         >
           <ToolIcon tool={t} />
@@ -32,8 +28,8 @@ export function ToolPalette() {
         type="button"
         className="tool-button help-button"
         data-testid="open-help"
-        title="Keyboard shortcuts (?)"
-        aria-label="Keyboard shortcuts (?)"
+        title={`${editorCommand('help').label} (${keysText(editorCommand('help'))})`}
+        aria-label={`${editorCommand('help').label} (${keysText(editorCommand('help'))})`}
         onClick={() => setHelpOpen(true)}
       >
         ?

@@ -1,40 +1,13 @@
-import { useEffect } from 'react';
 import { useAppStore } from '../store/useAppStore';
+import { CommandButton } from './CommandButton';
 import { FileMenu } from './FileMenu';
 
-/** True when focus is in a text field, where Ctrl+Z belongs to the field. */
-function typingInField(target: EventTarget | null): boolean {
-  return target instanceof HTMLInputElement || target instanceof HTMLTextAreaElement;
-}
-
-/** Top bar: design name, undo/redo with shortcuts, frame-all. */
+/**
+ * Top bar: design name, the file menu, undo, redo and frame-all. Their keys are the editor commands'
+ * (editorCommands.ts), caught by the app's one key listener (useEditorShortcuts.ts).
+ */
 export function Toolbar() {
   const name = useAppStore((s) => s.history.present.name);
-  const canUndo = useAppStore((s) => s.history.past.length > 0);
-  const canRedo = useAppStore((s) => s.history.future.length > 0);
-  const undo = useAppStore((s) => s.undo);
-  const redo = useAppStore((s) => s.redo);
-  const requestFit = useAppStore((s) => s.requestFit);
-
-  useEffect(() => {
-    const onKey = (e: KeyboardEvent) => {
-      if (typingInField(e.target)) return;
-      const mod = e.ctrlKey || e.metaKey;
-      const key = e.key.toLowerCase();
-      if (mod && key === 'z' && !e.shiftKey) {
-        e.preventDefault();
-        undo();
-      } else if (mod && ((key === 'z' && e.shiftKey) || key === 'y')) {
-        e.preventDefault();
-        redo();
-      } else if (!mod && key === 'f') {
-        requestFit();
-      }
-    };
-    window.addEventListener('keydown', onKey);
-    return () => window.removeEventListener('keydown', onKey);
-  }, [undo, redo, requestFit]);
-
   return (
     <header className="toolbar">
       <h1 className="brand">Matloom</h1>
@@ -43,21 +16,9 @@ export function Toolbar() {
       </span>
       <FileMenu />
       <div className="actions">
-        <button type="button" onClick={undo} disabled={!canUndo} title="Undo (Ctrl+Z)" data-testid="undo">
-          Undo
-        </button>
-        <button
-          type="button"
-          onClick={redo}
-          disabled={!canRedo}
-          title="Redo (Ctrl+Shift+Z)"
-          data-testid="redo"
-        >
-          Redo
-        </button>
-        <button type="button" onClick={requestFit} title="Frame the whole floorplan (F)">
-          Frame all
-        </button>
+        <CommandButton id="edit.undo" testId="undo" />
+        <CommandButton id="edit.redo" testId="redo" />
+        <CommandButton id="view.fitAll" />
       </div>
     </header>
   );

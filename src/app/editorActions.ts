@@ -16,11 +16,9 @@ import { snapToPitch } from '../geometry/snapping';
 import { restoreDesign } from '../io/restore';
 import type { Design } from '../model/design';
 import type { AppStore } from '../store/appStore';
-import type { EditorStore, Tool } from '../store/editorStore';
-import type { ActionId } from './keymap';
+import type { EditorStore } from '../store/editorStore';
+import { editorCommand, type ActionId } from './editorCommands';
 
-/** Zoom step of the + and − keys. */
-const KEY_ZOOM = 1.25;
 /** Shift+arrow nudges this many pitches. */
 const BIG_NUDGE = 10;
 
@@ -132,67 +130,14 @@ export function createEditorActions(app: AppStore, editor: EditorStore, canvas: 
     escape,
   };
 
-  /** Runs the action a shortcut names; `shift` makes nudges ten times larger. */
+  /** Runs an editor command (editorCommands.ts); `shift` makes nudges ten times larger. */
   function perform(action: ActionId, shift = false): void {
-    if (action.startsWith('tool.')) {
-      editor.getState().setTool(action.slice(5) as Tool);
-      return;
-    }
-    switch (action) {
-      case 'edit.delete':
-        return void actions.deleteSelection();
-      case 'edit.duplicate':
-        return actions.duplicate();
-      case 'edit.copy':
-        return void copy();
-      case 'edit.cut':
-        if (copy()) actions.deleteSelection();
-        return;
-      case 'edit.paste':
-        return void paste();
-      case 'edit.selectAll':
-        return actions.selectAll();
-      case 'edit.rotate':
-        return void actions.rotate();
-      case 'edit.mirrorLeftRight':
-        return void actions.mirror('leftRight');
-      case 'edit.mirrorTopBottom':
-        return void actions.mirror('topBottom');
-      case 'edit.stepAndRepeat':
-        if (selection().length > 0) editor.getState().setStepRepeatOpen(true);
-        return;
-      case 'edit.nudgeLeft':
-        return nudge(-1, 0, shift);
-      case 'edit.nudgeRight':
-        return nudge(1, 0, shift);
-      case 'edit.nudgeUp':
-        return nudge(0, -1, shift);
-      case 'edit.nudgeDown':
-        return nudge(0, 1, shift);
-      case 'view.frameSelection':
-        return actions.frameSelection();
-      case 'view.fitAll':
-        return app.getState().requestFit();
-      case 'view.zoomIn':
-        return zoom(KEY_ZOOM);
-      case 'view.zoomOut':
-        return zoom(1 / KEY_ZOOM);
-      case 'view.grid':
-        return editor.getState().toggleGrid();
-      case 'help':
-        return editor.getState().setHelpOpen(!editor.getState().helpOpen);
-      case 'escape':
-        return escape();
-      case 'edit.undo':
-        return app.getState().undo();
-      case 'edit.redo':
-        return app.getState().redo();
-      default:
-        return;
-    }
+    editorCommand(action).run({ actions, app, editor }, shift);
   }
 
   return { ...actions, perform };
 }
 
 export type EditorActions = ReturnType<typeof createEditorActions>;
+/** The actions a command runs with. */
+export type EditorActionsCore = Omit<EditorActions, 'perform'>;

@@ -3,9 +3,11 @@ import { activeCanvas } from '../canvas/canvasBridge';
 import { useEditorStore } from '../store/editorStore';
 import { useAppStore } from '../store/useAppStore';
 import { editorActions } from './actions';
+import { commandEnabled, editorCommand } from './editorCommands';
+import { commandStateOf } from './useCommand';
 import { actionForKey } from './keymap';
 
-/** True when focus is in a text field or list box, where keys belong to the field. */
+/** True when focus is in a text field or list box, where keys (Ctrl+Z too) belong to the field. */
 function typingInField(target: EventTarget | null): boolean {
   return (
     target instanceof HTMLInputElement ||
@@ -16,31 +18,31 @@ function typingInField(target: EventTarget | null): boolean {
 }
 
 /**
- * The editor's keyboard shortcuts (see keymap.ts) and the clipboard. Keys are caught in the capture
- * phase so that, during a drag, Escape or an undo cancels the drag before anything else sees the key.
- * Copy and paste also go through the browser's clipboard events, so blocks copied in one tab paste in
- * another; the pasted text is read through io/restore like any design file.
+ * The app's one key listener: every editor command's keys (editorCommands.ts) and the clipboard. Keys
+ * are caught in the capture phase so that, during a drag, Escape or an undo cancels the drag before
+ * anything else sees the key. Copy and paste also go through the browser's clipboard events, so blocks
+ * copied in one tab paste in another; the pasted text is read through io/restore like any design file.
  */
 export function useEditorShortcuts(): void {
   useEffect(() => {
     let pasteHandled = false;
     const onKeyDown = (e: KeyboardEvent) => {
       if (typingInField(e.target)) return;
+      const action = actionForKey(e);
       const canvas = activeCanvas();
       if (canvas?.gestureActive()) {
-        const undoKey = (e.ctrlKey || e.metaKey) && ['z', 'y'].includes(e.key.toLowerCase());
-        if (e.key === 'Escape' || undoKey) {
+        if (action === 'escape' || action === 'edit.undo' || action === 'edit.redo') {
           e.preventDefault();
           e.stopImmediatePropagation();
           canvas.cancelGesture();
         }
         return;
       }
-      const action = actionForKey(e);
       if (!action) return;
+      const command = editorCommand(action);
       const editor = useEditorStore.getState();
       const dialogOpen = editor.helpOpen || editor.stepRepeatOpen;
-      if (dialogOpen && action !== 'escape' && action !== 'help') return;
+      if (dialogOpen && !command.inDialogs) return;
       if (action === 'edit.paste') {
         // The browser's paste event brings the clipboard text; without one, paste what was copied here.
         pasteHandled = false;
@@ -51,7 +53,8 @@ export function useEditorShortcuts(): void {
       }
       // Copy and cut leave the key to the browser too, so that its copy event can fill the clipboard.
       if (action !== 'edit.copy' && action !== 'edit.cut') e.preventDefault();
-      editorActions.perform(action, e.shiftKey);
+      if (commandEnabled(command, commandStateOf(useAppStore.getState())))
+        editorActions.perform(action, e.shiftKey);
     };
     const onCopy = (e: ClipboardEvent) => {
       if (typingInField(e.target) || useAppStore.getState().selectedIds.length === 0) return;

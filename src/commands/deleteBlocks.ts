@@ -9,7 +9,6 @@ export interface DeleteBlocksArgs {
 export const deleteBlocks: Command<DeleteBlocksArgs> = {
   id: 'block.delete',
   label: 'Delete',
-  shortcut: 'Delete',
   run(design: Design, args: DeleteBlocksArgs): CommandResult {
     const doomed = new Set(args.ids);
     const blocks = design.blocks.filter((b) => !doomed.has(b.id));

@@ -38,7 +38,6 @@ export function shiftedCopies(
 export const duplicateBlocks: Command<DuplicateBlocksArgs> = {
   id: 'block.duplicate',
   label: 'Duplicate',
-  shortcut: 'Ctrl+D',
   run(design: Design, args: DuplicateBlocksArgs): CommandResult {
     if (!Number.isFinite(args.dx) || !Number.isFinite(args.dy)) {
       return { ok: false, error: 'duplicate needs a finite offset' };

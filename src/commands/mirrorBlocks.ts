@@ -18,7 +18,6 @@ export interface MirrorBlocksArgs {
 export const mirrorBlocks: Command<MirrorBlocksArgs> = {
   id: 'block.mirror',
   label: 'Mirror',
-  shortcut: 'M',
   run(design: Design, args: MirrorBlocksArgs): CommandResult {
     if (args.axis !== 'leftRight' && args.axis !== 'topBottom') {
       return { ok: false, error: 'mirror axis must be leftRight or topBottom' };

@@ -23,7 +23,6 @@ export interface PasteBlocksArgs {
 export const pasteBlocks: Command<PasteBlocksArgs> = {
   id: 'block.paste',
   label: 'Paste',
-  shortcut: 'Ctrl+V',
   run(design: Design, args: PasteBlocksArgs): CommandResult {
     if (args.blocks.length === 0) return { ok: false, error: 'the clipboard holds no blocks' };
     if (!Number.isFinite(args.dx) || !Number.isFinite(args.dy)) {

@@ -16,7 +16,6 @@ export interface RotateBlocksArgs {
 export const rotateBlocks: Command<RotateBlocksArgs> = {
   id: 'block.rotate',
   label: 'Rotate 90°',
-  shortcut: 'R',
   run(design: Design, args: RotateBlocksArgs): CommandResult {
     const targets = new Set(args.ids);
     const chosen = design.blocks.filter((b) => targets.has(b.id));

@@ -31,7 +31,6 @@ function checkCount(label: string, n: number): string | null {
 export const stepAndRepeat: Command<StepAndRepeatArgs> = {
   id: 'block.stepAndRepeat',
   label: 'Step and repeat',
-  shortcut: 'T',
   run(design: Design, args: StepAndRepeatArgs): CommandResult {
     const error = checkCount('columns', args.columns) ?? checkCount('rows', args.rows);
     if (error) return { ok: false, error };

@@ -1,5 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { actionForKey, SHORTCUTS, toolKey, type ActionId } from '../../src/app/keymap';
+import { commandTitle, COMMANDS, editorCommand } from '../../src/app/editorCommands';
+import { chordLabel } from '../../src/app/keyChord';
 import { TOOLS } from '../../src/store/editorStore';
 
 const key = (
@@ -38,22 +40,49 @@ describe('keyboard shortcuts', () => {
     [key('Escape'), 'escape'],
     [key('='), 'view.zoomIn'],
     [key('-'), 'view.zoomOut'],
-    // Left to the toolbar's own handler: undo, redo, zoom to fit.
-    [key('z', { ctrl: true }), null],
-    [key('y', { ctrl: true }), null],
-    [key('f'), null],
+    // One listener for every command, the toolbar's too.
+    [key('z', { ctrl: true }), 'edit.undo'],
+    [key('Z', { meta: true, shift: true }), 'edit.redo'],
+    [key('y', { ctrl: true }), 'edit.redo'],
+    [key('f'), 'view.fitAll'],
+    [key('F', { shift: true }), 'view.fitAll'],
+    // A key without Ctrl is not the Ctrl command, nor the other way round.
+    [key('r', { ctrl: true }), null],
+    [key('Escape', { ctrl: true }), null],
     // Alt combinations belong to the browser.
     [key('r', { alt: true }), null],
   ] as const)('%j → %s', (input, action) => {
     expect(actionForKey(input)).toBe(action);
   });
 
-  it('every tool has a number key in palette order, and every listed action is reachable or the toolbar’s', () => {
+  it('every tool has a number key in palette order, and every listed action is reachable', () => {
     expect(TOOLS.map(toolKey)).toEqual(['1', '2', '3', '4', '5', '6', '7', '8']);
     const listed = new Set(SHORTCUTS.map((s) => s.action));
     for (const tool of TOOLS) expect(listed.has(`tool.${tool}` as ActionId)).toBe(true);
-    for (const s of SHORTCUTS.filter((x) => x.handledByToolbar)) {
-      expect(['edit.undo', 'edit.redo', 'view.fitAll']).toContain(s.action);
+  });
+
+  it('no two commands share a chord, and every chord reaches its own command', () => {
+    const seen = new Map<string, string>();
+    for (const command of COMMANDS) {
+      for (const chord of command.keys) {
+        const label = chordLabel(chord) + (chord.shift === undefined ? ' (any shift)' : '');
+        expect(seen.get(label), label).toBeUndefined();
+        seen.set(label, command.id);
+        const input = key(chord.key, { ctrl: chord.mod ?? false, shift: chord.shift ?? false });
+        expect(actionForKey(input), label).toBe(command.id);
+      }
     }
+  });
+
+  it('the help lists each row’s keys as the commands declare them', () => {
+    const row = (action: ActionId) => SHORTCUTS.find((s) => s.action === action)?.keys;
+    expect(row('edit.undo')).toBe('Ctrl+Z');
+    expect(row('edit.redo')).toBe('Ctrl+Shift+Z / Ctrl+Y');
+    expect(row('edit.delete')).toBe('Delete / Backspace');
+    expect(row('edit.mirrorTopBottom')).toBe('Shift+M');
+    expect(row('escape')).toBe('Esc');
+    expect(row('view.zoomIn')).toBe('+ / −');
+    expect(SHORTCUTS.some((s) => s.action === 'view.zoomOut')).toBe(false);
+    expect(commandTitle(editorCommand('view.fitAll'))).toBe('Zoom to fit the whole floorplan (F)');
   });
 });
