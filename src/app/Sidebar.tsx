@@ -4,15 +4,17 @@ import { ChecksPanel } from '../panels/ChecksPanel';
 import { MetricsPanel } from '../panels/MetricsPanel';
 import { ProcessPanel } from '../panels/ProcessPanel';
 import { PropertiesPanel } from '../panels/PropertiesPanel';
+import { YieldPanel } from '../panels/YieldPanel';
 
 const TABS = [
   { id: 'floorplan', label: 'Selection' },
   { id: 'process', label: 'Process' },
   { id: 'cells', label: 'Cells' },
+  { id: 'yield', label: 'Yield' },
 ] as const;
 type TabId = (typeof TABS)[number]['id'];
 
-/** Right-hand panels, in tabs: the selection and its figures; the process; the cell library. */
+/** Right-hand panels, in tabs: the selection and its figures; the process; the cell library; yield and redundancy. */
 export function Sidebar() {
   const [tab, setTab] = useState<TabId>('floorplan');
   return (
@@ -40,6 +42,7 @@ export function Sidebar() {
       )}
       {tab === 'process' && <ProcessPanel />}
       {tab === 'cells' && <CellsPanel />}
+      {tab === 'yield' && <YieldPanel />}
     </aside>
   );
 }

@@ -30,6 +30,14 @@ export { drivenLineDelay, chargeSharingDelay, LUMPED_RC_50, DISTRIBUTED_RC_50 } 
 export { bitlinePairEnergy, chargingEnergy } from './physics/energy';
 export { gainReadCurrent, gainReadSignals } from './physics/gainRead';
 export { inverseNormal, upperTailQuantile } from './physics/statistics';
+export { poissonYield, negativeBinomialYield, grossDiesPerWafer, goodDiesPerWafer } from './physics/yield';
+export {
+  RepairSimulation,
+  estimateRepairProbability,
+  type MonteCarloDomainClass,
+  type RepairMonteCarloRequest,
+  type RepairMonteCarloResult,
+} from './physics/repairMonteCarlo';
 
 // evaluation: a design in, a report out
 export { evaluate, findMatReport } from './evaluation/evaluate';
@@ -49,6 +57,12 @@ export {
   type MatRule,
 } from './evaluation/checkRules';
 export { preparePreview, previewReport, type PreviewBase } from './evaluation/preview';
+export {
+  computeYieldFigures,
+  repairSettingsOf,
+  yieldFiguresOf,
+  type YieldFigures,
+} from './evaluation/yieldFigures';
 export {
   FINDING_KINDS,
   type ActivationEnergy,

@@ -1,4 +1,4 @@
-import type { RepairMonteCarloRequest, RepairMonteCarloResult } from '../engine/physics/repairMonteCarlo';
+import type { RepairMonteCarloRequest, RepairMonteCarloResult } from '../engine';
 
 /** Messages between the app and the repair Monte-Carlo worker. */
 export type RepairCommand = {

@@ -3,7 +3,7 @@
  * pure and tested in Node. It posts the running estimate after each chunk; the app cancels a run by
  * terminating the worker.
  */
-import { RepairSimulation } from '../engine/physics/repairMonteCarlo';
+import { RepairSimulation } from '../engine';
 import { runRepairChunks, type RepairCommand, type RepairReport } from './repairProtocol';
 
 interface WorkerScope {

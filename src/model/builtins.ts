@@ -1,5 +1,6 @@
 import type { CellDefinition } from './cell';
 import type { OperatingConditions } from './operating';
+import type { RepairSettings } from './repair';
 import type { ProcessProfile } from './process';
 
 /**
@@ -235,4 +236,29 @@ export const DEFAULT_OPERATING: OperatingConditions = {
   refreshRowsInParallel: 4,
   minimumSenseMargin: 0.02,
   allowedSenseFailures: 1,
+};
+
+/**
+ * Invented yield scenario, inside published ranges: D0 = 1 /cm² (textbook die-yield examples use
+ * 0.016–1.25 /cm²), clustering α = 2 (textbook examples use α = 2–4), kill ratios of a few tens of
+ * per cent for single cells and a few per cent for whole lines (invented), 2 spare rows and 2 spare columns
+ * per mat row (common practice: a few spares per sub-array), a 6 µm² fuse with its program device and latch
+ * and a 1 µm² compare bit (invented), 512 copies of the demo's 8 Mib floorplan (a 4 Gib die) on
+ * 30 mm², about 59 % of it arrays (commodity DRAM dies are about half array), 300 mm wafer.
+ */
+export const DEFAULT_REPAIR: RepairSettings = {
+  defectDensity: 10_000,
+  defectClustering: 2,
+  killRatioCell: 0.3,
+  killRatioWordline: 0.05,
+  killRatioBitline: 0.05,
+  killRatioPeriphery: 0.5,
+  spareRows: 2,
+  spareColumns: 2,
+  repairDomain: 'matRow',
+  fuseArea: 6e-12,
+  compareBitArea: 1e-12,
+  floorplanCopiesPerDie: 512,
+  dieArea: 30e-6,
+  waferDiameter: 0.3,
 };

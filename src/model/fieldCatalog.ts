@@ -1,6 +1,7 @@
 import type { GainRead } from './cell';
 import type { OperatingConditions } from './operating';
 import type { ProcessProfile } from './process';
+import type { RepairSettings } from './repair';
 import type { Quantity } from './units';
 
 /** A numeric field people can edit, with how to show and read it. */
@@ -15,6 +16,7 @@ type NumericKeys<T> = { [K in keyof T]: T[K] extends number ? K : never }[keyof 
 export type ProcessNumericField = NumericKeys<ProcessProfile>;
 export type OperatingNumericField = NumericKeys<OperatingConditions>;
 export type GainReadField = NumericKeys<GainRead>;
+export type RepairNumericField = NumericKeys<RepairSettings>;
 
 /** Process fields in the order the process panel shows them. */
 export const PROCESS_FIELDS: readonly FieldInfo<ProcessNumericField>[] = [
@@ -70,4 +72,21 @@ export const GAIN_READ_FIELDS: readonly FieldInfo<GainReadField>[] = [
   { key: 'readThresholdVoltage', label: 'Read Vt', quantity: 'voltage' },
   { key: 'readOffCurrent', label: 'Read off-current', quantity: 'current' },
   { key: 'unselectedLeakageCurrent', label: 'Unselected-cell leakage', quantity: 'current' },
+];
+
+/** Yield inputs (defects, redundancy, die and wafer) in panel order. */
+export const REPAIR_FIELDS: readonly FieldInfo<RepairNumericField>[] = [
+  { key: 'defectDensity', label: 'Killing-defect density D0', quantity: 'defectDensity' },
+  { key: 'defectClustering', label: 'Defect clustering α', quantity: 'ratio' },
+  { key: 'killRatioCell', label: 'Kill ratio, single cell', quantity: 'ratio' },
+  { key: 'killRatioWordline', label: 'Kill ratio, word line', quantity: 'ratio' },
+  { key: 'killRatioBitline', label: 'Kill ratio, bit-line pair', quantity: 'ratio' },
+  { key: 'killRatioPeriphery', label: 'Kill ratio, periphery', quantity: 'ratio' },
+  { key: 'spareRows', label: 'Spare rows per domain', quantity: 'count' },
+  { key: 'spareColumns', label: 'Spare columns per domain', quantity: 'count' },
+  { key: 'fuseArea', label: 'Fuse area', quantity: 'area' },
+  { key: 'compareBitArea', label: 'Compare-bit area', quantity: 'area' },
+  { key: 'floorplanCopiesPerDie', label: 'Floorplan copies per die', quantity: 'count' },
+  { key: 'dieArea', label: 'Die area', quantity: 'area' },
+  { key: 'waferDiameter', label: 'Wafer diameter', quantity: 'length' },
 ];

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { repairSettingsSchema } from './repair';
 import { nonNegative, positive, wholeCount } from './schemaParts';
 
 /**
@@ -18,6 +19,8 @@ export const operatingConditionsSchema = z.object({
   minimumSenseMargin: nonNegative('minimum sense margin', 1),
   /** Expected number of failing sense amplifiers the array may have (repaired by redundancy). */
   allowedSenseFailures: positive('allowed sense-amplifier failures', 1e-9, 1e6),
+  /** Defects, redundancy and wafer for the yield figures; absent = the built-in defaults. */
+  repair: repairSettingsSchema.optional(),
 });
 
 export type OperatingConditions = z.infer<typeof operatingConditionsSchema>;

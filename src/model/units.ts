@@ -27,6 +27,8 @@ export const QUANTITIES = {
   transconductance: { unit: 'A/V²', preferredPrefix: null },
   /** Activation energy, shown in eV; a bare number is read as eV. */
   activationEnergy: { unit: 'J', preferredPrefix: null },
+  /** Defects per area, shown per cm² as the trade quotes D0; a bare number is read as per cm². */
+  defectDensity: { unit: '/m²', preferredPrefix: null },
   ratio: { unit: '', preferredPrefix: null },
   percent: { unit: '%', preferredPrefix: null },
   count: { unit: '', preferredPrefix: null },
@@ -57,6 +59,8 @@ const PREFIX_EXPONENT = new Map<string, number>([
 const ZERO_CELSIUS_IN_KELVIN = 273.15;
 /** 1 mV·µm in V·m. */
 const MILLIVOLT_MICROMETRE = 1e-9;
+/** 1 per cm² in per m². */
+const PER_SQUARE_CENTIMETRE = 1e4;
 /** 1 eV in J (exact, SI 2019). */
 const ELECTRONVOLT = 1.602176634e-19;
 
@@ -91,6 +95,8 @@ export function formatQuantity(value: number, quantity: Quantity, digits = DEFAU
       return `${trimNumber(value / MILLIVOLT_MICROMETRE, digits)} mV·µm`;
     case 'activationEnergy':
       return `${trimNumber(value / ELECTRONVOLT, digits)} eV`;
+    case 'defectDensity':
+      return `${trimNumber(value / PER_SQUARE_CENTIMETRE, digits)} /cm²`;
     default:
       return formatWithPrefix(value, unit, digits);
   }
@@ -154,6 +160,12 @@ export function parseQuantity(text: string, quantity: Quantity): ParseResult {
     if (rest === '' || rest === 'eV') return { ok: true, value: magnitude * ELECTRONVOLT };
     if (rest === 'J') return { ok: true, value: magnitude };
     return { ok: false, error: `"${text}": expected an energy such as "0.79 eV"` };
+  }
+  if (quantity === 'defectDensity') {
+    const unit = rest.replace('²', '2');
+    if (unit === '' || unit === '/cm2') return { ok: true, value: magnitude * PER_SQUARE_CENTIMETRE };
+    if (unit === '/m2') return { ok: true, value: magnitude };
+    return { ok: false, error: `"${text}": expected a defect density such as "0.5 /cm²"` };
   }
   if (quantity === 'percent') {
     if (rest === '' || rest === '%') return { ok: true, value: magnitude / 100 };

@@ -60,7 +60,7 @@ export function MetricsPanel() {
       )}
       <div className="figures" data-testid="total-figures">
         <h3 className="figures-title">Whole floorplan</h3>
-        {TOTAL_FIGURE_PANEL.map((group) => (
+        {TOTAL_FIGURE_PANEL.filter((group) => group.title !== 'Yield').map((group) => (
           <div key={group.title} className="figure-group">
             <h4>{group.title}</h4>
             {group.keys.map((key) => {

@@ -12,6 +12,7 @@ import {
   type TotalFigureGroup,
 } from './totalFigure';
 import { TOTAL_REFRESH_FIGURES } from './totalRefreshFigures';
+import { TOTAL_YIELD_FIGURES } from './totalYieldFigures';
 
 const worstOf = (id: string | null) => `Smallest over all mats (mat ${id ?? '—'}).`;
 
@@ -172,6 +173,7 @@ export const TOTAL_FIGURE_CATALOGUE = [
     exportKey: 'wordlineHighNeeded_V',
     value: (r) => r.storedHigh.wordlineHighNeeded,
   }),
+  ...TOTAL_YIELD_FIGURES,
 ] as const;
 
 /** Every whole-design figure's key. */

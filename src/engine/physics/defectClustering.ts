@@ -6,7 +6,7 @@
 
 /**
  * E[f(X)] for X ~ Gamma(shape α, mean 1): ∫ f(x)·α^α x^(α−1) e^(−αx)/Γ(α) dx, by adaptive Simpson
- * quadrature (relative tolerance 1e-10) up to the point where the gamma tail holds less than 1e-16 of the
+ * quadrature (absolute tolerance 1e-8) up to the point where the gamma tail holds less than 1e-16 of the
  * mass. For α < 1 the substitution t = x^α removes the x^(α−1) singularity (x^(α−1) dx = dt/α).
  *
  * @param f a function of the density multiplier x ≥ 0 with values in [0, 1].
@@ -35,9 +35,12 @@ export function clusteredExpectation(f: (multiplier: number) => number, clusteri
   return integrate(integrand, upperX);
 }
 
-/** ∫_0^upper g by adaptive Simpson over 32 starting panels. */
+/** Absolute tolerance of the integral (the results are probabilities, shown to 4 digits). */
+const TOLERANCE = 1e-8;
+
+/** ∫_0^upper g by adaptive Simpson over 16 starting panels. */
 function integrate(g: (x: number) => number, upper: number): number {
-  const panels = 32;
+  const panels = 16;
   const width = upper / panels;
   let total = 0;
   for (let i = 0; i < panels; i++) {
@@ -47,7 +50,7 @@ function integrate(g: (x: number) => number, upper: number): number {
     const fb = g(b);
     const fm = g((a + b) / 2);
     const whole = ((b - a) / 6) * (fa + 4 * fm + fb);
-    total += adaptiveSimpson(g, a, b, fa, fm, fb, whole, 1e-12, 40);
+    total += adaptiveSimpson(g, a, b, fa, fm, fb, whole, TOLERANCE / panels, 30);
   }
   return total;
 }

@@ -68,3 +68,41 @@ export function addFaults(a: FaultCounts, b: FaultCounts): FaultCounts {
 export function scaleFaults(a: FaultCounts, factor: number): FaultCounts {
   return { cells: a.cells * factor, rows: a.rows * factor, columns: a.columns * factor };
 }
+
+/** Weak-cell tail of the retention distribution (two-population model). */
+export interface RetentionTail {
+  /** Share of the cells in the tail (ratio). */
+  readonly fraction: number;
+  /** Median leakage of a tail cell over the main population's (ratio ≥ 1). */
+  readonly medianLeakageMultiplier: number;
+  /** Spread σ of ln(leakage) within the tail. */
+  readonly spread: number;
+}
+
+/**
+ * Share of cells whose retention is shorter than the refresh window. Retention is inversely proportional
+ * to leakage (constant-current droop t = C·ΔV/I), so a cell fails when its leakage exceeds the main
+ * population's by more than r = t_typical / t_REFW. Main cells all fail when r < 1; tail cells, whose
+ * leakage multiplier is log-normal with median M and spread σ, fail with probability Q((ln r − ln M)/σ).
+ * Source: two-population retention model (T. Hamamoto, S. Sugiura, S. Sawada, "On the retention time
+ * distribution of dynamic random access memory (DRAM)", IEEE Trans. Electron Devices 45(6), 1998) [from
+ * memory]. Without a tail the answer is 0 or 1 (every cell is like the typical one).
+ */
+export function weakCellFraction(
+  typicalRetention: number,
+  refreshWindow: number,
+  tail?: RetentionTail,
+): number {
+  if (!(refreshWindow > 0)) return 0;
+  if (!(typicalRetention >= 0)) return 0;
+  const ratio = typicalRetention / refreshWindow;
+  const mainFails = ratio < 1 ? 1 : 0;
+  if (!tail || !(tail.fraction > 0)) return mainFails;
+  const tailFails =
+    tail.spread > 0
+      ? normalUpperTail((Math.log(ratio) - Math.log(tail.medianLeakageMultiplier)) / tail.spread)
+      : tail.medianLeakageMultiplier > ratio
+        ? 1
+        : 0;
+  return (1 - tail.fraction) * mainFails + tail.fraction * Math.max(mainFails, tailFails);
+}

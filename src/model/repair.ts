@@ -1,0 +1,49 @@
+import { z } from 'zod';
+import { nonNegative, positive, wholeCount } from './schemaParts';
+
+/** Which mats share one pool of spare rows and columns. */
+export const REPAIR_DOMAINS = ['mat', 'matRow', 'bank'] as const;
+export type RepairDomainKind = (typeof REPAIR_DOMAINS)[number];
+
+export const REPAIR_DOMAIN_LABEL: Readonly<Record<RepairDomainKind, string>> = {
+  mat: 'each mat',
+  matRow: 'each mat row (mats along one word-line band)',
+  bank: 'the whole floorplan',
+};
+
+/**
+ * Defects, redundancy and wafer: the operating inputs of the yield figures (SI units: defect density in
+ * defects per m², lengths in m, areas in m²). Optional on the operating conditions; a design without them
+ * uses {@link DEFAULT_REPAIR}.
+ */
+export const repairSettingsSchema = z.object({
+  /** Killing-defect density D0 (defects per m²; 0.1 /cm² = 1000 /m²). */
+  defectDensity: nonNegative('defect density', 1e7),
+  /** Negative-binomial cluster parameter α of the defects (small = strongly clustered). */
+  defectClustering: positive('defect clustering α', 0.01, 1e6),
+  /** Share of the defects in a mat that kill one cell (ratio). */
+  killRatioCell: nonNegative('single-cell kill ratio', 1),
+  /** Share of the defects in a mat that kill a whole word line (ratio). */
+  killRatioWordline: nonNegative('word-line kill ratio', 1),
+  /** Share of the defects in a mat that kill a whole bit-line pair (ratio). */
+  killRatioBitline: nonNegative('bit-line kill ratio', 1),
+  /** Share of the defects outside the mats (periphery) that kill the die (ratio). */
+  killRatioPeriphery: nonNegative('periphery kill ratio', 1),
+  /** Spare word lines per repair domain. */
+  spareRows: wholeCount('spare rows per domain', 0, 256),
+  /** Spare bit-line pairs (columns) per repair domain. */
+  spareColumns: wholeCount('spare columns per domain', 0, 256),
+  repairDomain: z.enum(REPAIR_DOMAINS),
+  /** Area of one fuse with its programming device and sense latch (m²). */
+  fuseArea: nonNegative('fuse area', 1e-6),
+  /** Area of one address-compare bit (XOR and its share of the match gate) (m²). */
+  compareBitArea: nonNegative('compare-bit area', 1e-6),
+  /** How many copies of this floorplan the die holds. */
+  floorplanCopiesPerDie: wholeCount('floorplan copies per die', 1, 1_000_000),
+  /** Die area (m²); must hold the floorplan copies. */
+  dieArea: positive('die area', 1e-8, 1e-2),
+  /** Usable wafer diameter (m). */
+  waferDiameter: positive('wafer diameter', 0.01, 0.5),
+});
+
+export type RepairSettings = z.infer<typeof repairSettingsSchema>;
