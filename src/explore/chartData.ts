@@ -29,6 +29,9 @@ const CHECK_NAMES: Record<FindingKind, string> = {
   senseAmpPitch: 'sense-amplifier pitch',
   retention: 'retention',
   openBitlineEdge: 'open-array edge',
+  noRowDecoder: 'no row decoder',
+  noColumnDecoder: 'no column decoder',
+  backToBackStrips: 'strips back to back',
 };
 
 export function checkName(kind: FindingKind): string {

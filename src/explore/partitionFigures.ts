@@ -120,6 +120,10 @@ export function partitionFigures(
     { process, operating },
     shared.storedHigh,
   );
+  // A built bank's strips chain every mat to the decoders along its edges, when it has them.
+  if (!(spec.strips.rowDecoderWidth > 0)) warningKinds.push('noRowDecoder');
+  if (!(spec.strips.columnDecoderHeight > 0)) warningKinds.push('noColumnDecoder');
+  warningKinds.sort();
 
   return {
     ok: true,

@@ -10,7 +10,10 @@ const MAX_LISTED = 200;
  * and frames them on the canvas, where they are marked in the colour of their severity.
  */
 export function ChecksPanel() {
-  const findings = useShownReport().findings;
+  const report = useShownReport();
+  const findings = report.findings;
+  // With no mat there is nothing the checks could fail on; 'all clear' would claim too much.
+  const empty = report.totals.matCount === 0 && findings.length === 0;
   const select = useAppStore((s) => s.select);
   const requestFrame = useEditorStore((s) => s.requestFrame);
   const ordered = [...findings].sort((a, b) =>
@@ -19,11 +22,19 @@ export function ChecksPanel() {
   return (
     <section className="panel" aria-labelledby="checks-heading">
       <h2 id="checks-heading">
-        Checks <span className="count">{findings.length === 0 ? 'all clear' : findings.length}</span>
+        Checks{' '}
+        <span className="count">
+          {empty ? 'nothing yet' : findings.length === 0 ? 'all clear' : findings.length}
+        </span>
       </h2>
-      {ordered.length === 0 ? (
+      {empty ? (
+        <p className="hint" data-testid="checks-empty">
+          Nothing to check yet: draw a mat, then the strips and decoders that serve it.
+        </p>
+      ) : ordered.length === 0 ? (
         <p className="hint" data-testid="checks-clear">
-          Every bit line reaches a sense amplifier, every word line a driver, and no blocks overlap.
+          Every bit line reaches a sense amplifier and a column decoder, every word line a driver and a row
+          decoder, and no blocks overlap.
         </p>
       ) : (
         <ul className="findings" data-testid="findings">

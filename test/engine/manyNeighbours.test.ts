@@ -39,7 +39,7 @@ describe('evaluate: a mat served by many small strips', () => {
     expect(senseAmpStripIdsOf(r.mats, 0)).toEqual(Array.from({ length: 40 }, (_, k) => `sa-${k}`));
     expect(wordlineDriverIdsOf(r.mats, 0)).toEqual(Array.from({ length: 20 }, (_, k) => `swd-${k}`));
     // Sense amplifiers at one end only cannot interleave: the pitch check is the one finding.
-    expect(r.findings.map((f) => f.kind)).toEqual(['senseAmpPitch']);
+    expect(r.findings.map((f) => f.kind)).toEqual(['senseAmpPitch', 'noRowDecoder', 'noColumnDecoder']);
   });
 
   it('leaves exactly the lines under a missing strip unsensed', () => {

@@ -1,6 +1,7 @@
 import type { Design } from '../../model/design';
 import { formatQuantity } from '../../model/units';
 import { MAT_RULES, storedHighSeverity } from './checkRules';
+import { groupLabel } from './findingText';
 import type { Overlap } from './overlaps';
 import { figuresAt, matIdAt, matLabelAt, type MatTable } from './matTable';
 import type { Finding, FindingKind, MatFigures, Severity } from './report';
@@ -43,14 +44,18 @@ function connectionIssues(unsensed: number, undriven: number, figures: MatFigure
   return issues;
 }
 
-/** Names shown before a grouped finding's detail: one name, or the count and the first few. */
-function groupLabel(count: number, labels: readonly string[]): string {
-  if (count === 1) return labels[0] ?? '';
-  return `${count} mats (${labels.join(', ')}${count > labels.length ? ', …' : ''})`;
-}
-
 /** Mats named in a grouped finding's message; the finding's block ids name them all. */
 const NAMED_IN_MESSAGE = 3;
+
+/** User-visible names of the blocks in `overlaps` (their id when unnamed); looked up only when some overlap. */
+function blockNamer(design: Design, overlaps: readonly Overlap[]): (id: string) => string {
+  if (overlaps.length === 0) return (id) => id;
+  const wanted = new Set<string>();
+  for (const o of overlaps) wanted.add(o.firstId).add(o.secondId);
+  const names = new Map<string, string>();
+  for (const b of design.blocks) if (wanted.has(b.id)) names.set(b.id, b.name || b.id);
+  return (id) => names.get(id) ?? id;
+}
 
 interface IssueGroup {
   readonly issue: MatIssue;
@@ -128,12 +133,13 @@ export function collectFindings(
       message: `${groupLabel(ids.length, labels)}: ${issue.detail}`,
     });
   }
+  const nameOf = blockNamer(design, overlaps);
   for (const o of overlaps) {
     findings.push({
       kind: 'overlap',
       severity: 'error',
       blockIds: [o.firstId, o.secondId],
-      message: `${o.firstId} and ${o.secondId} overlap by ${formatQuantity(o.area, 'area')}`,
+      message: `${nameOf(o.firstId)} and ${nameOf(o.secondId)} overlap by ${formatQuantity(o.area, 'area')}`,
     });
   }
   const storedHighLimited = storedHighSeverity(storedHigh);

@@ -4,6 +4,7 @@ import type { NeighbourTable } from '../../geometry/neighbourRows';
 import { ABUTMENT_TOLERANCE } from '../../geometry/rect';
 import type { Design } from '../../model/design';
 import { collectFindings } from './checks';
+import { layoutFindings } from './layoutFindings';
 import { emptyConnections, matConnections } from './connectivity';
 import { cellLeakage, matPhysics, senseAmpsOfMat, type DesignContext } from './matPhysics';
 import { offsetSigmaMultiplier } from '../physics/offset';
@@ -109,7 +110,7 @@ export function evaluate(design: Design): Report {
     mats,
     totals,
     storedHigh: ctx.storedHigh,
-    findings: collectFindings(mats, overlaps, ctx.storedHigh, design),
+    findings: [...collectFindings(mats, overlaps, ctx.storedHigh, design), ...layoutFindings(table, mats)],
   };
 }
 

@@ -6,6 +6,7 @@ import type { SpatialIndex } from '../../geometry/spatialIndex';
 import type { Block } from '../../model/block';
 import type { Design } from '../../model/design';
 import { collectFindings } from './checks';
+import { layoutFindings } from './layoutFindings';
 import { countSenseAmps, designContext, evaluate, evaluateMatAt, evaluationNeighbours } from './evaluate';
 import { findOverlaps, overlapAreaAt, type Overlap } from './overlaps';
 import type { Report } from './report';
@@ -189,11 +190,14 @@ export function previewReport(base: PreviewBase, changed: readonly Block[]): Rep
   overlaps.sort((a, b) => a.first - b.first || a.second - b.second);
 
   const totals = computeTotals(current, mats, design, ctx.sigmaMultiplier, senseAmpCount);
-  const findings = collectFindings(
-    mats,
-    overlaps.map((o) => o.overlap),
-    report.storedHigh,
-    design,
-  );
+  const findings = [
+    ...collectFindings(
+      mats,
+      overlaps.map((o) => o.overlap),
+      report.storedHigh,
+      design,
+    ),
+    ...layoutFindings(current, mats),
+  ];
   return { mats, totals, storedHigh: report.storedHigh, findings };
 }

@@ -181,6 +181,9 @@ export const FINDING_KINDS = [
   'senseAmpPitch',
   'retention',
   'openBitlineEdge',
+  'noRowDecoder',
+  'noColumnDecoder',
+  'backToBackStrips',
 ] as const;
 export type FindingKind = (typeof FINDING_KINDS)[number];
 
