@@ -9,15 +9,26 @@ import { editorActions } from './actions';
 /** The form inside the dialog; mounted fresh on each opening so its defaults follow the selection. */
 function StepRepeatForm({ close }: { close(): void }) {
   const box = editorActions.selectionBox();
+  const pitches = editorActions.selectionPitches();
+  const canShare = !!pitches && (pitches.sharesX || pitches.sharesY);
   const selectedCount = useAppStore((s) => s.selectedIds.length);
   const [columns, setColumns] = useState(2);
   const [rows, setRows] = useState(1);
-  const [pitchX, setPitchX] = useState(box?.width ?? 0);
-  const [pitchY, setPitchY] = useState(box?.height ?? 0);
+  const [shareStrips, setShareStrips] = useState(canShare);
+  const start = canShare ? pitches?.sharing : pitches?.abutting;
+  const [pitchX, setPitchX] = useState(start?.x ?? 0);
+  const [pitchY, setPitchY] = useState(start?.y ?? 0);
   const [error, setError] = useState<string | null>(null);
   // Enter in a field commits it and submits the form in the same event, before React re-renders, so
   // the values also live in a ref that the submit reads.
-  const values = useRef({ columns, rows, pitchX, pitchY });
+  const values = useRef({ columns, rows, pitchX, pitchY, shareStrips });
+  const chooseSharing = (share: boolean) => {
+    const pitch = share ? pitches?.sharing : pitches?.abutting;
+    values.current = { ...values.current, shareStrips: share, pitchX: pitch?.x ?? 0, pitchY: pitch?.y ?? 0 };
+    setShareStrips(share);
+    setPitchX(pitch?.x ?? 0);
+    setPitchY(pitch?.y ?? 0);
+  };
   const count = (label: string, key: 'columns' | 'rows', set: (n: number) => void) => (n: number) => {
     if (!Number.isInteger(n) || n < 1 || n > MAX_REPEAT)
       return `${label} must be a whole number from 1 to ${MAX_REPEAT}`;
@@ -43,8 +54,24 @@ function StepRepeatForm({ close }: { close(): void }) {
     >
       <p className="hint">
         {selectedCount} selected block{selectedCount === 1 ? '' : 's'}
-        {box ? `, ${formatQuantity(box.width, 'length')} × ${formatQuantity(box.height, 'length')}` : ''}. The
-        default pitch makes the copies abut.
+        {box ? `, ${formatQuantity(box.width, 'length')} × ${formatQuantity(box.height, 'length')}` : ''}.
+      </p>
+      {canShare && (
+        <label className="check-field">
+          <input
+            type="checkbox"
+            data-testid="repeat-share"
+            checked={shareStrips}
+            onChange={(e) => chooseSharing(e.target.checked)}
+          />{' '}
+          Neighbours share edge strips (one sense-amplifier strip between two mat rows, one driver strip
+          between two columns)
+        </label>
+      )}
+      <p className="hint">
+        {shareStrips
+          ? 'The pitch lays each copy’s edge strip on its neighbour’s, which is kept once.'
+          : 'The pitch makes the copies abut, each with its own strips.'}
       </p>
       <QuantityField
         id="repeat-columns"

@@ -12,6 +12,7 @@ import { rotateBlocks } from '../commands/rotateBlocks';
 import { stepAndRepeat, type StepAndRepeatArgs } from '../commands/stepAndRepeat';
 import { blockRect } from '../geometry/placedBlocks';
 import { boundingBox, type Rect } from '../geometry/rect';
+import { repeatPitches, type RepeatPitches } from '../geometry/repeatPitch';
 import { snapToPitch } from '../geometry/snapping';
 import { restoreDesign } from '../io/restore';
 import type { Design } from '../model/design';
@@ -42,6 +43,15 @@ export function clipboardText(design: Design, ids: readonly string[]): string | 
 export function createEditorActions(app: AppStore, editor: EditorStore, canvas: () => CanvasHandle | null) {
   const selection = () => app.getState().selectedIds;
   const design = () => app.getState().history.present;
+
+  /** Step-and-repeat pitches of the selection: abutting, and sharing its edge strips. */
+  function selectionPitches(): RepeatPitches | null {
+    const d = design();
+    const wanted = new Set(selection());
+    return repeatPitches(
+      d.blocks.filter((b) => wanted.has(b.id)).map((b) => ({ type: b.type, rect: blockRect(d, b) })),
+    );
+  }
 
   function selectionBox(): Rect | null {
     const d = design();
@@ -107,6 +117,7 @@ export function createEditorActions(app: AppStore, editor: EditorStore, canvas: 
 
   const actions = {
     selectionBox,
+    selectionPitches,
     copy,
     paste,
     deleteSelection: () =>

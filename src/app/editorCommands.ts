@@ -52,11 +52,11 @@ const hasSelection = (s: CommandState) => s.selectionCount > 0;
 const TOOL_DESCRIPTIONS: Record<Tool, string> = {
   select: 'Select, move and resize',
   pan: 'Pan the view',
-  mat: 'Draw a mat (drag; snaps to whole cells)',
+  mat: 'Draw a mat (drag: cell counts in 64s; Shift: powers of two; Alt: any count)',
   senseAmpStrip: 'Place a sense-amplifier strip (fits a bit-line edge)',
   wordlineDriverStrip: 'Place a sub-word-line driver strip (fits a word-line edge)',
-  rowDecoder: 'Place a row decoder',
-  columnDecoder: 'Place a column decoder',
+  rowDecoder: 'Place a row decoder (fits the left or right side of a stack of mats and strips)',
+  columnDecoder: 'Place a column decoder (fits the top or bottom of a stack of mats and strips)',
   spacer: 'Place a spacer',
 };
 

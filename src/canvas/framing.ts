@@ -8,9 +8,17 @@ import { fitViewport } from './viewportMath';
 /** Room kept around framed blocks (px), beyond the rulers. */
 const FRAME_MARGIN_PX = 36;
 
-/** The viewport showing the whole floorplan. */
+/**
+ * What an empty floorplan shows (m): about 120 µm × 80 µm, so that a drag across a fifth of the canvas
+ * draws a mat of a few hundred cells per line (a folded 8F² cell at F = 18 nm steps 72 nm per cell),
+ * not thousands.
+ */
+export const EMPTY_FLOORPLAN_BOX = { x: 0, y: 0, width: 120e-6, height: 80e-6 };
+
+/** The viewport showing the whole floorplan, or the empty sheet's default box when there is nothing. */
 export function frameEverything(design: Design, width: number, height: number): Viewport {
-  return frameBox(boundingBox(design.blocks.map((b) => blockRect(design, b))), width, height);
+  const box = boundingBox(design.blocks.map((b) => blockRect(design, b))) ?? EMPTY_FLOORPLAN_BOX;
+  return frameBox(box, width, height);
 }
 
 /**

@@ -1,5 +1,6 @@
 import type { Block } from '../model/block';
 import { MAX_BLOCKS, type Design } from '../model/design';
+import { placeKey } from '../geometry/repeatPitch';
 import { idAllocator } from './blockIds';
 import type { Command, CommandResult } from './command';
 import { shiftedCopies } from './duplicateBlocks';
@@ -16,12 +17,33 @@ export interface StepAndRepeatArgs {
   /** Distance from one copy to the next (m). */
   readonly pitchX: number;
   readonly pitchY: number;
+  /**
+   * Leave out a copied sense-amplifier or driver strip that would land exactly on a strip already there
+   * (same type and rectangle): at the sharing pitch neighbours then share one strip.
+   */
+  readonly shareStrips?: boolean;
 }
 
 function checkCount(label: string, n: number): string | null {
   return Number.isInteger(n) && n >= 1 && n <= MAX_REPEAT
     ? null
     : `${label} must be a whole number from 1 to ${MAX_REPEAT}`;
+}
+
+/** The copies less every strip that lands on a strip of its type already in the design or copied before it. */
+function withoutCoincidentStrips(design: Design, copies: readonly Block[]): Block[] {
+  const taken = new Set<string>();
+  for (const b of design.blocks) if (b.type !== 'mat') taken.add(placeKey(b.type, b));
+  const kept: Block[] = [];
+  for (const c of copies) {
+    if (c.type === 'senseAmpStrip' || c.type === 'wordlineDriverStrip') {
+      const key = placeKey(c.type, c);
+      if (taken.has(key)) continue;
+      taken.add(key);
+    }
+    kept.push(c);
+  }
+  return kept;
 }
 
 /**
@@ -64,8 +86,9 @@ export const stepAndRepeat: Command<StepAndRepeatArgs> = {
         );
       }
     }
-    const problem = checkBlocks(design, copies);
+    const kept = args.shareStrips ? withoutCoincidentStrips(design, copies) : copies;
+    const problem = checkBlocks(design, kept);
     if (problem) return { ok: false, error: problem };
-    return { ok: true, design: { ...design, blocks: [...design.blocks, ...copies] } };
+    return { ok: true, design: { ...design, blocks: [...design.blocks, ...kept] } };
   },
 };

@@ -16,12 +16,27 @@ export interface DraggedMat {
   readonly bits: number;
 }
 
-function wholeCells(length: number, step: number): number {
-  return Math.min(MAX_CELLS_PER_LINE, Math.max(1, Math.round(length / step)));
+/**
+ * How a drawn mat's cell counts round: to multiples of {@link ROUND_CELLS} (the default), to powers of
+ * two, or to whole cells (free). Decoders address powers of two, and arrays are built in round counts.
+ */
+export type CellRounding = 'round' | 'powerOfTwo' | 'free';
+
+/** The step of the default rounding: 64 cells per line. */
+export const ROUND_CELLS = 64;
+
+/** Cells along a dragged length (m) at `step` metres per cell, rounded as asked, at least one step. */
+export function roundedCells(length: number, step: number, rounding: CellRounding): number {
+  const cells = length / step;
+  let n: number;
+  if (rounding === 'round') n = ROUND_CELLS * Math.max(1, Math.round(cells / ROUND_CELLS));
+  else if (rounding === 'powerOfTwo') n = 2 ** Math.max(0, Math.round(Math.log2(Math.max(1, cells))));
+  else n = Math.max(1, Math.round(cells));
+  return Math.min(MAX_CELLS_PER_LINE, n);
 }
 
 /**
- * The mat that fills the box from `anchor` to `pointer` (m), rounded to whole cells of `cell`: the
+ * The mat that fills the box from `anchor` to `pointer` (m), its cell counts rounded as `rounding` says: the
  * corner at the anchor stays put and the mat grows towards the pointer, whichever way that lies.
  */
 export function matFromDrag(
@@ -30,10 +45,11 @@ export function matFromDrag(
   cell: CellDefinition,
   featureSize: number,
   axis: BitlineAxis,
+  rounding: CellRounding = 'free',
 ): DraggedMat {
   const step = matCellStep(cell, featureSize, axis);
-  const cellsAlongX = wholeCells(Math.abs(pointer.x - anchor.x), step.x);
-  const cellsAlongY = wholeCells(Math.abs(pointer.y - anchor.y), step.y);
+  const cellsAlongX = roundedCells(Math.abs(pointer.x - anchor.x), step.x, rounding);
+  const cellsAlongY = roundedCells(Math.abs(pointer.y - anchor.y), step.y, rounding);
   // With vertical bit lines x runs along the word lines (cells per word line); horizontal swaps.
   const cellsPerWordline = axis === 'vertical' ? cellsAlongX : cellsAlongY;
   const cellsPerBitline = axis === 'vertical' ? cellsAlongY : cellsAlongX;

@@ -3,7 +3,8 @@ import { setMatCellCounts } from '../commands/setMatCellCounts';
 import { matGeometry } from '../geometry/matGeometry';
 import { blockRect } from '../geometry/placedBlocks';
 import { BITLINE_AXES, BLOCK_TYPE_LABEL, isMat, type Block, type Mat, type Strip } from '../model/block';
-import { formatBits, formatQuantity } from '../model/units';
+import { formatMatSizeAndBits } from '../model/matSize';
+import { formatQuantity } from '../model/units';
 import { useAppStore } from '../store/useAppStore';
 import { NameField } from './NameField';
 import { QuantityField } from './QuantityField';
@@ -64,8 +65,8 @@ export function PropertiesPanel() {
           {geometry && (
             <span className="mat-size" data-testid="mat-size">
               <br />
-              {formatQuantity(geometry.wordlineCount, 'count')} rows ×{' '}
-              {formatQuantity(geometry.bitlineCount, 'count')} columns · {formatBits(geometry.bits)}
+              {single.type === 'mat' &&
+                formatMatSizeAndBits(single.cellsPerBitline, single.cellsPerWordline, geometry.bits)}
             </span>
           )}
         </p>

@@ -98,7 +98,7 @@ describe('select tool gestures', () => {
     // 10 cells of 4F = 72 nm narrower (arithmetic: folded 8F² adds 2 bit lines per cell per word line).
     const p = { x: east.x - 10 * 72e-9, y: east.y };
     press.gesture.move(p, NO_KEYS);
-    expect(press.gesture.preview().label).toContain('1,004 columns');
+    expect(press.gesture.preview().label).toContain('512 × 502 cells/BL × cells/WL');
     const result = press.gesture.finish(p, true, NO_KEYS);
     expect(result.call?.command).toBe(reshapeBlocks);
     const m = apply(design, result).blocks.find((b) => b.id === 'mat-r0c0') as Mat;
@@ -195,25 +195,41 @@ describe('a mat whose cell overrides its pitches', () => {
 });
 
 describe('drawing tools', () => {
-  it('a drag with the mat tool adds a mat sized in whole cells; a click adds the default mat', () => {
+  it('a drag with the mat tool adds a mat of round cell counts (64s; powers of two with Shift; free with Alt)', () => {
     const empty = designWith([]);
     const ctx = context(empty);
-    const g = new DrawMatGesture(ctx, { x: 0, y: 0 });
-    // 100 × 50 cells of 72 nm (folded 8F², F = 18 nm).
-    const p = { x: 100 * 72e-9 + 10e-9, y: 50 * 72e-9 - 10e-9 };
-    g.move(p, NO_KEYS);
-    expect(g.preview().label).toBe('100 rows × 200 columns · 9.766 Kib');
-    const result = g.finish(p, true, NO_KEYS);
-    expect(result.call?.command).toBe(addBlocks);
-    expect(result.select).toBe('added');
-    const drawn = apply(empty, result).blocks[0] as Mat;
-    expect(drawn).toMatchObject({ id: 'mat-1', name: 'Mat 1', cellsPerWordline: 100, cellsPerBitline: 50 });
+    const ALT = { shift: false, alt: true };
+    const SHIFT = { shift: true, alt: false };
+    // 200 × 50 cells of 72 nm (folded 8F², F = 18 nm): 200 per word line across, 50 per bit line down.
+    const p = { x: 200 * 72e-9 + 10e-9, y: 50 * 72e-9 - 10e-9 };
+    const drawWith = (keys: typeof NO_KEYS) => {
+      const g = new DrawMatGesture(ctx, { x: 0, y: 0 });
+      g.move(p, keys);
+      return { label: g.preview().label, result: g.finish(p, true, keys) };
+    };
+    const round = drawWith(NO_KEYS);
+    // Nearest multiples of 64: 192 and 64; 64 × 384 bit lines = 24 Kib (arithmetic).
+    expect(round.label).toBe('64 × 192 cells/BL × cells/WL · 24 Kib');
+    expect(round.result.call?.command).toBe(addBlocks);
+    expect(round.result.select).toBe('added');
+    expect(apply(empty, round.result).blocks[0]).toMatchObject({
+      id: 'mat-1',
+      name: 'Mat 1',
+      cellsPerWordline: 192,
+      cellsPerBitline: 64,
+    });
+    expect(apply(empty, drawWith(SHIFT).result).blocks[0]).toMatchObject({
+      cellsPerWordline: 256,
+      cellsPerBitline: 64,
+    });
+    const drawn = apply(empty, drawWith(ALT).result).blocks[0] as Mat;
+    expect(drawn).toMatchObject({ cellsPerWordline: 200, cellsPerBitline: 50 });
 
     const click = new DrawMatGesture(ctx, { x: 1e-6, y: 1e-6 }).finish({ x: 1e-6, y: 1e-6 }, false, NO_KEYS);
     expect(apply(empty, click).blocks[0]).toMatchObject({ cellsPerBitline: 512, cellsPerWordline: 512 });
   });
 
-  it('placing strips near a lone mat’s edges serves its bit lines and word lines until its checks clear', () => {
+  it('placing strips near a lone mat’s edges, then decoders beside the stack, clears its checks', () => {
     let design = designWith([mat({ id: 'm', x: 20e-6, y: 20e-6 })]);
     const r = rectOf(design, 'm');
     expect(evaluate(design).findings.map((f) => f.kind)).toEqual(['unsensedBitlines', 'undrivenWordlines']);
@@ -231,8 +247,28 @@ describe('drawing tools', () => {
       expect(hover.fit?.matId).toBe('m');
       design = apply(design, new PlaceStripGesture(ctx, tool, point).finish(point, false, NO_KEYS));
     }
+    expect(evaluate(design).findings.map((f) => f.kind)).toEqual(['noRowDecoder', 'noColumnDecoder']);
+    // The stack is the mat with its three strips; the decoders fit along its left side and its bottom.
+    const stack = { x: r.x - 3e-6, y: r.y - 6e-6, width: r.width + 3e-6, height: r.height + 12e-6 };
+    const decoders: [Block['type'], { x: number; y: number }][] = [
+      ['rowDecoder', { x: stack.x - 2e-6, y: r.y + r.height / 2 }],
+      ['columnDecoder', { x: r.x + r.width / 2, y: stack.y + stack.height + 3e-6 }],
+    ];
+    for (const [tool, point] of decoders) {
+      if (tool === 'mat') continue;
+      const ctx = context(design);
+      expect(placementAt(ctx, tool, point, buildSnapTargets([])).stack?.stack.matCount).toBe(1);
+      design = apply(design, new PlaceStripGesture(ctx, tool, point).finish(point, false, NO_KEYS));
+    }
+    const rowDecoder = rectOf(design, 'rowdec-1');
+    expect(rowDecoder.x + rowDecoder.width).toBeCloseTo(stack.x, 12);
+    expect(rowDecoder.y).toBeCloseTo(stack.y, 12);
+    expect(rowDecoder.height).toBeCloseTo(stack.height, 12);
+    const columnDecoder = rectOf(design, 'coldec-1');
+    expect(columnDecoder).toMatchObject({ y: expect.closeTo(stack.y + stack.height, 12) });
+    expect(columnDecoder.width).toBeCloseTo(stack.width, 12);
     expect(evaluate(design).findings).toEqual([]);
-    expect(design.blocks.map((b) => b.id)).toEqual(['m', 'sa-1', 'sa-2', 'swd-1']);
+    expect(design.blocks.map((b) => b.id)).toEqual(['m', 'sa-1', 'sa-2', 'swd-1', 'rowdec-1', 'coldec-1']);
   });
 
   it('away from mats a strip gets its default size, and a drag draws its rectangle', () => {

@@ -1,12 +1,12 @@
 import { addBlocks } from '../../commands/addBlocks';
 import { nextNumberedId } from '../../commands/blockIds';
 import { matLinePitch } from '../../geometry/cellPitch';
-import { matFromDrag, type DraggedMat } from '../../geometry/matFromDrag';
+import { matFromDrag, type CellRounding, type DraggedMat } from '../../geometry/matFromDrag';
 import { matGeometry } from '../../geometry/matGeometry';
 import { snapPoint, type SnapTargets } from '../../geometry/snapping';
 import type { Mat } from '../../model/block';
 import type { CellDefinition } from '../../model/cell';
-import { formatBits, formatQuantity } from '../../model/units';
+import { formatMatSizeAndBits } from '../../model/matSize';
 import {
   chosenCell,
   commandCall,
@@ -21,14 +21,15 @@ import {
   type WorldPoint,
 } from './gesture';
 
-/** "1,024 rows × 2,048 columns · 1 Mib": word lines × bit lines and the bits they hold. */
-export function matSizeLabel(rows: number, columns: number, bits: number): string {
-  return `${formatQuantity(rows, 'count')} rows × ${formatQuantity(columns, 'count')} columns · ${formatBits(bits)}`;
+/** Round counts by default, powers of two with Shift, whole cells with Alt (which also turns snapping off). */
+export function drawnMatRounding(modifiers: Modifiers): CellRounding {
+  return modifiers.alt ? 'free' : modifiers.shift ? 'powerOfTwo' : 'round';
 }
 
 /**
  * Drawing a mat: the press fixes one corner (snapped to other blocks' edges or the cell grid) and the
- * drag sizes the mat in whole cells of the chosen cell, showing rows × columns and capacity. A click
+ * drag sizes the mat in round cell counts of the chosen cell (multiples of 64; powers of two with Shift;
+ * free with Alt), showing its size and capacity. A click
  * without a drag places a mat of the default cell counts.
  */
 export class DrawMatGesture implements Gesture {
@@ -69,6 +70,7 @@ export class DrawMatGesture implements Gesture {
       this.cell,
       this.ctx.design.process.featureSize,
       this.ctx.options.bitlineAxis,
+      drawnMatRounding(modifiers),
     );
   }
 
@@ -115,7 +117,7 @@ export class DrawMatGesture implements Gesture {
       ghosts: [{ type: 'mat', rect: { x: mat.x, y: mat.y, width: g.width, height: g.height } }],
       guideX: this.guideX,
       guideY: this.guideY,
-      label: matSizeLabel(g.wordlineCount, g.bitlineCount, g.bits),
+      label: formatMatSizeAndBits(mat.cellsPerBitline, mat.cellsPerWordline, g.bits),
     };
   }
 

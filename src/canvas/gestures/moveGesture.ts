@@ -2,7 +2,8 @@ import { moveBlocks } from '../../commands/moveBlocks';
 import { reshapeBlocks } from '../../commands/reshapeBlocks';
 import { boundingBox, type Rect } from '../../geometry/rect';
 import { snapMove, type SnapTargets } from '../../geometry/snapping';
-import { fitDroppedStrip, type StripFit } from '../../geometry/stripFit';
+import { decoderSides, fitDroppedDecoder, stackOutlines } from '../../geometry/stackFit';
+import { fitDroppedStrip } from '../../geometry/stripFit';
 import type { Block } from '../../model/block';
 import { formatQuantity } from '../../model/units';
 import {
@@ -23,8 +24,8 @@ import {
 
 /**
  * Dragging the selection: the move goes in whole cell pitches, edges snap to line up with or abut other
- * blocks (with a guide), and a lone sense-amplifier or driver strip dropped against a suitable mat edge
- * takes that edge's length. One move is one command.
+ * blocks (with a guide), a lone sense-amplifier or driver strip dropped against a suitable mat edge
+ * takes that edge's length, and a lone decoder dropped against a stack's side takes that side's length. One move is one command.
  */
 export class MoveGesture implements Gesture {
   readonly hiddenIds: ReadonlySet<string>;
@@ -36,7 +37,7 @@ export class MoveGesture implements Gesture {
   private dy = 0;
   private guideX: number | null = null;
   private guideY: number | null = null;
-  private fit: StripFit | null = null;
+  private fit: { readonly rect: Rect; readonly describe: string } | null = null;
 
   constructor(
     private readonly ctx: EditorContext,
@@ -87,14 +88,22 @@ export class MoveGesture implements Gesture {
     this.fit = this.fitLoneStrip();
   }
 
-  /** A lone sense-amplifier or driver strip dropped against a suitable mat edge. */
-  private fitLoneStrip(): StripFit | null {
+  /**
+   * A lone sense-amplifier or driver strip dropped against a suitable mat edge, or a lone decoder dropped
+   * against a suitable side of a stack of mats and strips.
+   */
+  private fitLoneStrip(): { readonly rect: Rect; readonly describe: string } | null {
     const only = this.originals[0];
     const rect = this.rects[0];
     if (this.originals.length !== 1 || !only || !rect || only.type === 'mat') return null;
     const moved = { ...rect, x: rect.x + this.dx, y: rect.y + this.dy };
+    if (decoderSides(only.type).length > 0) {
+      const stack = fitDroppedDecoder(only.type, moved, stackOutlines(this.ctx.placed));
+      return stack && { rect: stack.rect, describe: `the ${stack.side} of the stack` };
+    }
     const mats = matsNear(this.ctx.placed, moved, 2 * this.ctx.metresPerPixel, this.hiddenIds);
-    return fitDroppedStrip(only.type, moved, mats);
+    const fit = fitDroppedStrip(only.type, moved, mats);
+    return fit && { rect: fit.rect, describe: `${labelOf(this.ctx.design, fit.matId)} ${fit.side} edge` };
   }
 
   changedBlocks(): readonly Block[] | null {
@@ -116,7 +125,7 @@ export class MoveGesture implements Gesture {
     });
     const shift = `Δx ${formatQuantity(this.dx, 'length')}, Δy ${formatQuantity(this.dy, 'length')}`;
     const label = fit
-      ? `${shift} · fits ${labelOf(this.ctx.design, fit.matId)} ${fit.side} edge, ${formatQuantity(
+      ? `${shift} · fits ${fit.describe}, ${formatQuantity(
           Math.max(fit.rect.width, fit.rect.height),
           'length',
         )}`

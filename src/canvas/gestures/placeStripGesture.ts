@@ -2,6 +2,7 @@ import { addBlocks } from '../../commands/addBlocks';
 import { nextNumberedId } from '../../commands/blockIds';
 import type { Rect } from '../../geometry/rect';
 import { snapPoint, type SnapTargets } from '../../geometry/snapping';
+import { decoderSides, fitDecoderAtPoint, stackOutlines, type StackFit } from '../../geometry/stackFit';
 import { fitStripAtPoint, type StripFit } from '../../geometry/stripFit';
 import { BLOCK_TYPE_LABEL, type Strip } from '../../model/block';
 import { formatQuantity } from '../../model/units';
@@ -44,12 +45,15 @@ const LIES_ACROSS: Record<PlacementTool, boolean> = {
 export interface Placement {
   readonly rect: Rect;
   readonly fit: StripFit | null;
+  /** For a decoder: the stack side it spans. */
+  readonly stack: StackFit | null;
   readonly label: string;
 }
 
 /**
  * The placement for a click at `point`: a sense-amplifier strip near a mat's bit-line edge (or a driver
- * strip near a word-line edge) spans that edge; anything else gets its default size with its top-left
+ * strip near a word-line edge) spans that edge; a row decoder near the left or right side of a stack of
+ * mats and strips (a column decoder near its top or bottom) spans that side; anything else gets its default size with its top-left
  * corner at the snapped point.
  */
 export function placementAt(
@@ -61,13 +65,27 @@ export function placementAt(
   const thickness = ctx.options.thickness[tool];
   const reach = Math.max(12 * ctx.metresPerPixel, thickness);
   const probe = { x: point.x, y: point.y, width: 0, height: 0 };
-  const fit = fitStripAtPoint(tool, point, matsNear(ctx.placed, probe, reach), thickness, reach);
   const kind = BLOCK_TYPE_LABEL[tool];
+  if (decoderSides(tool).length > 0) {
+    const stack = fitDecoderAtPoint(tool, point, stackOutlines(ctx.placed), thickness, reach);
+    if (stack) {
+      const length = Math.max(stack.rect.width, stack.rect.height);
+      const mats = formatQuantity(stack.stack.matCount, 'count');
+      return {
+        rect: stack.rect,
+        fit: null,
+        stack,
+        label: `${kind} along the ${stack.side} of the stack of ${mats} mat${stack.stack.matCount === 1 ? '' : 's'} · ${formatQuantity(length, 'length')}`,
+      };
+    }
+  }
+  const fit = fitStripAtPoint(tool, point, matsNear(ctx.placed, probe, reach), thickness, reach);
   if (fit) {
     const length = Math.max(fit.rect.width, fit.rect.height);
     return {
       rect: fit.rect,
       fit,
+      stack: null,
       label: `${kind} on ${labelOf(ctx.design, fit.matId)} ${fit.side} edge · ${formatQuantity(length, 'length')}`,
     };
   }
@@ -83,6 +101,7 @@ export function placementAt(
   return {
     rect,
     fit: null,
+    stack: null,
     label: `${kind} ${formatQuantity(rect.width, 'length')} × ${formatQuantity(rect.height, 'length')}`,
   };
 }

@@ -5,7 +5,8 @@ import { handlePosition, resizeMat, resizeRect, type ResizeHandle } from '../../
 import type { Rect } from '../../geometry/rect';
 import { snapPoint, type SnapTargets } from '../../geometry/snapping';
 import type { Block } from '../../model/block';
-import { formatBits, formatQuantity } from '../../model/units';
+import { formatMatSizeAndBits } from '../../model/matSize';
+import { formatQuantity } from '../../model/units';
 import {
   cellOf,
   commandCall,
@@ -98,7 +99,7 @@ export class ResizeGesture implements Gesture {
       const cell = cellOf(this.ctx.design, b.cellId);
       if (cell) {
         const g = matGeometry(b, cell, this.ctx.design.process.featureSize);
-        label = `${formatQuantity(g.wordlineCount, 'count')} rows × ${formatQuantity(g.bitlineCount, 'count')} columns · ${formatBits(g.bits)}`;
+        label = formatMatSizeAndBits(b.cellsPerBitline, b.cellsPerWordline, g.bits);
       }
     }
     return { ghosts: [{ type: b.type, rect }], guideX: this.guideX, guideY: this.guideY, label };

@@ -1,5 +1,6 @@
 import { crossingOccupancy } from '../../model/cell';
 import type { PlacedMat } from '../../geometry/placedBlocks';
+import { formatMatSize } from '../../model/matSize';
 import { formatBits, formatQuantity } from '../../model/units';
 import { BITLINE_STROKE, BLOCK_STYLE, STORAGE_NODE_FILL, WORDLINE_STROKE } from '../blockStyle';
 import { pxPerMetre, visibleWorld, type Scene } from './scene';
@@ -12,7 +13,7 @@ const NODES_MIN_PITCH_PX = 9;
 /**
  * Level of detail inside one mat: at high zoom its bit lines, word lines and storage nodes (only the
  * visible part is drawn); at medium zoom a few strokes and an arrow along the bit lines; labels with
- * the mat's name, rows × columns and capacity when they fit; and a corner mark showing its handedness.
+ * the mat's name, its size (cells/BL × cells/WL, see model/matSize.ts) and capacity when they fit; and a corner mark showing its handedness.
  */
 export function paintMatDetail(ctx: CanvasRenderingContext2D, mat: PlacedMat, scene: Scene): void {
   const { viewport } = scene;
@@ -50,12 +51,11 @@ export function paintMatDetail(ctx: CanvasRenderingContext2D, mat: PlacedMat, sc
   if (w >= 96 && h >= 44) {
     const size = Math.max(10, Math.min(13, Math.floor(h / 6)));
     ctx.font = `${size}px system-ui, sans-serif`;
-    const rows = formatQuantity(g.wordlineCount, 'count');
-    const columns = formatQuantity(g.bitlineCount, 'count');
-    const long = `${rows} rows × ${columns} cols`;
+    const long = formatMatSize(mat.block.cellsPerBitline, mat.block.cellsPerWordline);
+    const short = `${formatQuantity(mat.block.cellsPerBitline, 'count')} × ${formatQuantity(mat.block.cellsPerWordline, 'count')}`;
     const lines = [
       mat.block.name || mat.block.id,
-      ctx.measureText(long).width < w - 32 ? long : `${rows} × ${columns}`,
+      ctx.measureText(long).width < w - 32 ? long : short,
       `${formatBits(g.bits)} · BL ${vertical ? '↕' : '↔'}`,
     ];
     ctx.textAlign = 'left';
