@@ -184,12 +184,13 @@ describe('a mat whose cell overrides its pitches', () => {
     expect(m.cellsPerWordline).toBe(502);
   });
 
-  it('draws in whole cells of the override', () => {
+  it('draws in whole cells of the override (Alt: any count)', () => {
     const empty = { ...overridden, blocks: [] };
     const g = new DrawMatGesture(context(empty), { x: 0, y: 0 });
     const p = { x: 100 * 100e-9 + 10e-9, y: 50 * 80e-9 - 10e-9 };
-    g.move(p, NO_KEYS);
-    const drawn = apply(empty, g.finish(p, true, NO_KEYS)).blocks[0] as Mat;
+    const alt = { shift: false, alt: true };
+    g.move(p, alt);
+    const drawn = apply(empty, g.finish(p, true, alt)).blocks[0] as Mat;
     expect(drawn).toMatchObject({ cellsPerWordline: 100, cellsPerBitline: 50 });
   });
 });
