@@ -5,6 +5,7 @@ import { MAX_DESIGN_TEXT_LENGTH } from '../io/restore';
 import { openDesignText } from '../store/openDesignText';
 import { reportSummary } from '../io/summary';
 import { useAppStore } from '../store/useAppStore';
+import { ModalDialog } from './a11y/ModalDialog';
 import { downloadBlob, fileBaseName } from './download';
 
 /** Largest file the Open button reads (bytes); the same limit restore applies to text. */
@@ -106,32 +107,42 @@ export function FileMenu() {
       <button
         type="button"
         data-testid="export-png-menu"
-        aria-expanded={pngOpen}
-        onClick={() => setPngOpen(!pngOpen)}
+        aria-haspopup="dialog"
+        title="Export the floorplan as a PNG picture…"
+        onClick={() => setPngOpen(true)}
       >
         PNG…
       </button>
       {pngOpen && (
-        <div className="png-options" role="dialog" aria-label="PNG export options">
-          <label>
-            <input
-              type="radio"
-              name="png-region"
-              checked={png.region === 'all'}
-              onChange={() => setPng({ ...png, region: 'all' })}
-            />{' '}
-            whole floorplan
-          </label>
-          <label>
-            <input
-              type="radio"
-              name="png-region"
-              data-testid="png-region-view"
-              checked={png.region === 'view'}
-              onChange={() => setPng({ ...png, region: 'view' })}
-            />{' '}
-            current view
-          </label>
+        <ModalDialog
+          className="png-options"
+          titleId="png-dialog-title"
+          testId="png-dialog"
+          onClose={() => setPngOpen(false)}
+        >
+          <h2 id="png-dialog-title">Export a PNG picture</h2>
+          <fieldset>
+            <legend>Region</legend>
+            <label>
+              <input
+                type="radio"
+                name="png-region"
+                checked={png.region === 'all'}
+                onChange={() => setPng({ ...png, region: 'all' })}
+              />{' '}
+              whole floorplan
+            </label>
+            <label>
+              <input
+                type="radio"
+                name="png-region"
+                data-testid="png-region-view"
+                checked={png.region === 'view'}
+                onChange={() => setPng({ ...png, region: 'view' })}
+              />{' '}
+              current view
+            </label>
+          </fieldset>
           <label>
             resolution{' '}
             <select
@@ -163,19 +174,25 @@ export function FileMenu() {
             />{' '}
             title block
           </label>
-          <button
-            type="button"
-            data-testid="export-png"
-            onClick={async () => {
-              const s = current();
-              const canvas = renderFloorplanImage(s.history.present, s.report, png, liveView());
-              downloadBlob(await canvasToPngBlob(canvas), `${base()}.png`);
-              setPngOpen(false);
-            }}
-          >
-            Export PNG
-          </button>
-        </div>
+          <div className="dialog-buttons">
+            <button type="button" title="Close without exporting (Esc)" onClick={() => setPngOpen(false)}>
+              Cancel
+            </button>
+            <button
+              type="button"
+              data-testid="export-png"
+              title="Render the picture and download it"
+              onClick={async () => {
+                const s = current();
+                const canvas = renderFloorplanImage(s.history.present, s.report, png, liveView());
+                downloadBlob(await canvasToPngBlob(canvas), `${base()}.png`);
+                setPngOpen(false);
+              }}
+            >
+              Export PNG
+            </button>
+          </div>
+        </ModalDialog>
       )}
     </div>
   );

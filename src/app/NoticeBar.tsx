@@ -12,7 +12,7 @@ export function NoticeBar() {
       data-testid="notice"
     >
       <span>{notice.text}</span>
-      <button type="button" onClick={() => setNotice(null)} aria-label="Dismiss">
+      <button type="button" onClick={() => setNotice(null)} aria-label="Dismiss" title="Dismiss this message">
         ×
       </button>
     </div>

@@ -5,44 +5,79 @@ import { MetricsPanel } from '../panels/MetricsPanel';
 import { ProcessPanel } from '../panels/ProcessPanel';
 import { PropertiesPanel } from '../panels/PropertiesPanel';
 import { YieldPanel } from '../panels/YieldPanel';
+import { useUiStore } from '../store/uiStore';
+import { TabBar, TabPanels, type TabSpec } from './a11y/TabBar';
 
-const TABS = [
-  { id: 'floorplan', label: 'Selection' },
-  { id: 'process', label: 'Process' },
-  { id: 'cells', label: 'Cells' },
-  { id: 'yield', label: 'Yield' },
-] as const;
-type TabId = (typeof TABS)[number]['id'];
+type TabId = 'floorplan' | 'process' | 'cells' | 'yield';
+const TABS: readonly TabSpec<TabId>[] = [
+  {
+    id: 'floorplan',
+    label: 'Selection',
+    title: 'The selected blocks, the checks and the figures',
+    testId: 'tab-floorplan',
+  },
+  { id: 'process', label: 'Process', title: 'Process and operating conditions', testId: 'tab-process' },
+  { id: 'cells', label: 'Cells', title: 'The cell library', testId: 'tab-cells' },
+  { id: 'yield', label: 'Yield', title: 'Die yield, redundancy and repair', testId: 'tab-yield' },
+];
 
-/** Right-hand panels, in tabs: the selection and its figures; the process; the cell library; yield and redundancy. */
+/** Right-hand panels, in tabs: the selection and its figures; the process; the cell library; yield and redundancy. Folds away. */
 export function Sidebar() {
   const [tab, setTab] = useState<TabId>('floorplan');
+  const collapsed = useUiStore((s) => s.sidebarCollapsed);
+  const setCollapsed = useUiStore((s) => s.setSidebarCollapsed);
+  if (collapsed) {
+    return (
+      <aside className="sidebar collapsed" aria-label="Panels (folded)">
+        <button
+          type="button"
+          className="fold-button"
+          data-testid="expand-sidebar"
+          title="Show the panels"
+          aria-label="Show the panels"
+          aria-expanded={false}
+          onClick={() => setCollapsed(false)}
+        >
+          «
+        </button>
+      </aside>
+    );
+  }
   return (
-    <aside className="sidebar">
-      <div className="tabs" role="tablist">
-        {TABS.map((t) => (
-          <button
-            key={t.id}
-            type="button"
-            role="tab"
-            aria-selected={tab === t.id}
-            data-testid={`tab-${t.id}`}
-            onClick={() => setTab(t.id)}
-          >
-            {t.label}
-          </button>
-        ))}
+    <aside className="sidebar" aria-label="Panels">
+      <div className="sidebar-head">
+        <TabBar<TabId>
+          tabs={TABS}
+          selected={tab}
+          idPrefix="sidebar"
+          label="Panels"
+          className="tabs"
+          onSelect={setTab}
+        />
+        <button
+          type="button"
+          className="fold-button"
+          data-testid="collapse-sidebar"
+          title="Fold the panels away"
+          aria-label="Fold the panels away"
+          aria-expanded={true}
+          onClick={() => setCollapsed(true)}
+        >
+          »
+        </button>
       </div>
-      {tab === 'floorplan' && (
-        <>
-          <PropertiesPanel />
-          <ChecksPanel />
-          <MetricsPanel />
-        </>
-      )}
-      {tab === 'process' && <ProcessPanel />}
-      {tab === 'cells' && <CellsPanel />}
-      {tab === 'yield' && <YieldPanel />}
+      <TabPanels tabs={TABS} selected={tab} idPrefix="sidebar">
+        {tab === 'floorplan' && (
+          <>
+            <PropertiesPanel />
+            <ChecksPanel />
+            <MetricsPanel />
+          </>
+        )}
+        {tab === 'process' && <ProcessPanel />}
+        {tab === 'cells' && <CellsPanel />}
+        {tab === 'yield' && <YieldPanel />}
+      </TabPanels>
     </aside>
   );
 }

@@ -4,6 +4,7 @@ import { formatQuantity } from '../model/units';
 import { QuantityField } from '../panels/QuantityField';
 import { useEditorStore } from '../store/editorStore';
 import { useAppStore } from '../store/useAppStore';
+import { ModalDialog } from './a11y/ModalDialog';
 import { editorActions } from './actions';
 
 /** The form inside the dialog; mounted fresh on each opening so its defaults follow the selection. */
@@ -111,10 +112,10 @@ function StepRepeatForm({ close }: { close(): void }) {
         </p>
       )}
       <div className="dialog-buttons">
-        <button type="button" onClick={close}>
+        <button type="button" onClick={close} title="Close without repeating (Esc)">
           Cancel
         </button>
-        <button type="submit" data-testid="repeat-apply">
+        <button type="submit" data-testid="repeat-apply" title="Make the copies (one undo step)">
           Repeat
         </button>
       </div>
@@ -129,18 +130,9 @@ export function StepRepeatDialog() {
   if (!open) return null;
   const close = () => setOpen(false);
   return (
-    <div className="modal-backdrop" onClick={close}>
-      <div
-        className="modal"
-        role="dialog"
-        aria-modal="true"
-        aria-labelledby="step-repeat-title"
-        data-testid="step-repeat"
-        onClick={(e) => e.stopPropagation()}
-      >
-        <h2 id="step-repeat-title">Step and repeat</h2>
-        <StepRepeatForm close={close} />
-      </div>
-    </div>
+    <ModalDialog titleId="step-repeat-title" testId="step-repeat" onClose={close}>
+      <h2 id="step-repeat-title">Step and repeat</h2>
+      <StepRepeatForm close={close} />
+    </ModalDialog>
   );
 }

@@ -4,6 +4,7 @@ import { activeVariantId, variantEntries } from '../model/variants';
 import { useAppStore } from '../store/useAppStore';
 import { useExploreStore } from '../store/useExploreStore';
 import type { MainView } from '../store/exploreStore';
+import { TabBar, TabPanels, type TabSpec } from './a11y/TabBar';
 import '../panels/explore.css';
 
 // The explorer (with d3 and its charts) and the variants table load when first opened, so the first
@@ -15,11 +16,12 @@ const VariantsView = lazy(() =>
   import('../panels/variants/VariantsView').then((m) => ({ default: m.VariantsView })),
 );
 
-const VIEWS: readonly { id: MainView; label: string }[] = [
-  { id: 'floorplan', label: 'Floorplan' },
-  { id: 'explorer', label: 'Explorer' },
-  { id: 'variants', label: 'Variants' },
-];
+const VIEW_TITLES: Record<MainView, { label: string; title: string }> = {
+  floorplan: { label: 'Floorplan', title: 'The floorplan editor: draw and place blocks' },
+  explorer: { label: 'Explorer', title: 'Sweep partitions and compare them on a chart' },
+  variants: { label: 'Variants', title: 'The variants of this design side by side' },
+};
+const VIEW_ORDER: readonly MainView[] = ['floorplan', 'explorer', 'variants'];
 
 /**
  * The main area: a bar to choose the floorplan, the design-space explorer or the variants table, and
@@ -32,25 +34,33 @@ export function ViewArea({ children }: { readonly children: ReactNode }) {
   const execute = useAppStore((s) => s.execute);
   const requestFit = useAppStore((s) => s.requestFit);
   const variants = variantEntries(design);
+  const tabs: TabSpec<MainView>[] = VIEW_ORDER.map((id) => ({
+    id,
+    title: VIEW_TITLES[id].title,
+    testId: `view-${id}`,
+    label: (
+      <>
+        {VIEW_TITLES[id].label}
+        {id === 'variants' && (
+          <span className="badge" aria-label={`(${variants.length})`}>
+            {variants.length}
+          </span>
+        )}
+      </>
+    ),
+  }));
   return (
     <div className="view-area">
       <nav className="view-bar" aria-label="Views">
-        <div className="view-tabs" role="tablist">
-          {VIEWS.map((v) => (
-            <button
-              key={v.id}
-              type="button"
-              role="tab"
-              aria-selected={view === v.id}
-              data-testid={`view-${v.id}`}
-              onClick={() => setView(v.id)}
-            >
-              {v.label}
-              {v.id === 'variants' && <span className="badge">{variants.length}</span>}
-            </button>
-          ))}
-        </div>
-        <label className="variant-switcher">
+        <TabBar
+          tabs={tabs}
+          selected={view}
+          idPrefix="view"
+          label="Views"
+          className="view-tabs"
+          onSelect={setView}
+        />
+        <label className="variant-switcher" title="Which variant is being edited">
           Variant
           <select
             data-testid="variant-switcher"
@@ -67,13 +77,13 @@ export function ViewArea({ children }: { readonly children: ReactNode }) {
           </select>
         </label>
       </nav>
-      <div className="view-body">
+      <TabPanels tabs={tabs} selected={view} idPrefix="view" className="view-body">
         {view === 'floorplan' && children}
         <Suspense fallback={<p className="view-loading">Loading…</p>}>
           {view === 'explorer' && <ExplorerView />}
           {view === 'variants' && <VariantsView />}
         </Suspense>
-      </div>
+      </TabPanels>
     </div>
   );
 }

@@ -2,6 +2,7 @@ import { useEffect } from 'react';
 import { activeCanvas } from '../canvas/canvasBridge';
 import { useEditorStore } from '../store/editorStore';
 import { useAppStore } from '../store/useAppStore';
+import { keyOwnedByWidget } from './a11y/keyOwnership';
 import { editorActions } from './actions';
 import { commandEnabled, editorCommand } from './editorCommands';
 import { commandStateOf } from './useCommand';
@@ -27,7 +28,7 @@ export function useEditorShortcuts(): void {
   useEffect(() => {
     let pasteHandled = false;
     const onKeyDown = (e: KeyboardEvent) => {
-      if (typingInField(e.target)) return;
+      if (typingInField(e.target) || keyOwnedByWidget(e)) return;
       const action = actionForKey(e);
       const canvas = activeCanvas();
       if (canvas?.gestureActive()) {

@@ -57,5 +57,16 @@ export function FloorplanCanvas() {
     controller.setSize(size.width, size.height);
   }, [controller, size]);
 
-  return <div ref={containerRef} className="floorplan" data-testid="floorplan" tabIndex={-1} />;
+  return (
+    <div
+      ref={containerRef}
+      className="floorplan"
+      data-testid="floorplan"
+      tabIndex={0}
+      role="application"
+      aria-label="Floorplan canvas"
+      aria-roledescription="floorplan editor"
+      aria-describedby="selection-announcer"
+    />
+  );
 }

@@ -1,16 +1,23 @@
 import type { BlockType } from '../model/block';
 
-/** Matloom's own block palette: fill and outline per block type. */
+/**
+ * Matloom's own block palette: fill and outline per block type. The fills are tints of the Okabe–Ito
+ * colours (M. Okabe and K. Ito, "Color Universal Design (CUD): how to make figures and presentations that
+ * are friendly to colorblind people", 2002): bluish green for mats, orange for sense-amplifier strips,
+ * reddish purple for driver strips, sky blue for decoders, grey for spacers. They were chosen so that
+ * every two types stay apart under simulated protanopia, deuteranopia and tritanopia;
+ * test/canvas/colourVision.test.ts computes the differences.
+ */
 export const BLOCK_STYLE: Record<
   BlockType,
   { fill: string; selectedFill: string; stroke: string; text: string }
 > = {
-  mat: { fill: '#cfe7df', selectedFill: '#b4d3f2', stroke: '#2f6f5e', text: '#173b32' },
-  senseAmpStrip: { fill: '#f4d9a6', selectedFill: '#e9c98a', stroke: '#a8742a', text: '#5a3c10' },
-  wordlineDriverStrip: { fill: '#ddd0ee', selectedFill: '#c9b5e6', stroke: '#6d4f99', text: '#392653' },
-  rowDecoder: { fill: '#d5dbe3', selectedFill: '#bcc8d8', stroke: '#4f5d70', text: '#27303c' },
-  columnDecoder: { fill: '#d5dbe3', selectedFill: '#bcc8d8', stroke: '#4f5d70', text: '#27303c' },
-  spacer: { fill: '#ebe8e1', selectedFill: '#d9d4c8', stroke: '#9a9284', text: '#4c463b' },
+  mat: { fill: '#95c2ad', selectedFill: '#86b2b6', stroke: '#2f6f5e', text: '#173b32' },
+  senseAmpStrip: { fill: '#f3d6bc', selectedFill: '#dac4c1', stroke: '#a8742a', text: '#5a3c10' },
+  wordlineDriverStrip: { fill: '#ddb0c7', selectedFill: '#c6a3c9', stroke: '#6d4f99', text: '#392653' },
+  rowDecoder: { fill: '#c3def4', selectedFill: '#afcbed', stroke: '#4f5d70', text: '#27303c' },
+  columnDecoder: { fill: '#c3def4', selectedFill: '#afcbed', stroke: '#4f5d70', text: '#27303c' },
+  spacer: { fill: '#dedede', selectedFill: '#c7cbdb', stroke: '#8a8276', text: '#4c463b' },
 };
 
 /** Short tags drawn on blocks that are large enough on screen. */

@@ -1,12 +1,17 @@
 import { symbol, symbolCircle } from 'd3';
 import { useEffect, useRef } from 'react';
-import { MARGIN, MARKER_SHAPES, type ScatterDatum } from './chartStyle';
+import {
+  INFEASIBLE_FILL,
+  MARGIN,
+  MARKER_OUTLINE,
+  MARKER_SHAPES,
+  MARKER_SIZE,
+  type ScatterDatum,
+} from './chartStyle';
 import { stampSprite, type Sprite } from './spriteRaster';
 
-/** Marker area (px²), the side of the square sprite holding one (px), and the grey of infeasible points. */
-const MARKER_SIZE = 42;
+/** Side of the square sprite holding one marker (px). */
 const SPRITE_PX = 12;
-export const INFEASIBLE_FILL = '#b5b9c0';
 
 /** Sprites drawn so far, by colour, shape, feasibility and pixel ratio. */
 const sprites = new Map<string, Sprite>();
@@ -25,12 +30,13 @@ function markerSprite(fill: string, shape: number, infeasible: boolean, ratio: n
   if (context) {
     context.setTransform(ratio, 0, 0, ratio, side / 2, side / 2);
     const path = new Path2D(symbol(MARKER_SHAPES[shape] ?? symbolCircle, MARKER_SIZE)() ?? '');
-    context.globalAlpha = infeasible ? 0.45 : 0.85;
+    context.globalAlpha = infeasible ? 0.45 : 0.9;
     context.fillStyle = fill;
     context.fill(path);
     if (!infeasible) {
-      context.strokeStyle = 'rgba(255, 255, 255, 0.8)';
-      context.lineWidth = 0.6;
+      context.globalAlpha = 1;
+      context.strokeStyle = MARKER_OUTLINE;
+      context.lineWidth = 0.7;
       context.stroke(path);
     }
     sprite = { width: side, height: side, data: context.getImageData(0, 0, side, side).data };

@@ -1,7 +1,8 @@
 export type { PointState, ScatterDatum } from './chartStyle';
 export { markerPath } from './chartStyle';
 import { curveStepAfter, line, symbol } from 'd3';
-import { useMemo, useRef, type ReactNode } from 'react';
+import { useImperativeHandle, useMemo, useRef, type ReactNode, type Ref } from 'react';
+import { scatterSvgText, svgToPng } from './chartExport';
 import { axisScale, axisTicks, type AxisScale } from './chartScale';
 import { MARGIN, MARKER_SHAPES, type ScatterDatum } from './chartStyle';
 import { nearestIndex } from './nearestPoint';
@@ -34,6 +35,14 @@ interface ScatterChartProps {
   onPick(index: number): void;
   /** What to show beside the hovered point. */
   renderTooltip(index: number): ReactNode;
+  /** Receives the chart's picture exports. */
+  readonly exportRef?: Ref<ScatterExport>;
+}
+
+/** The chart as a picture file. */
+export interface ScatterExport {
+  svg(): string | null;
+  png(scale?: number): Promise<Blob | null>;
 }
 
 /** A pointer within this many pixels of a point picks it. */
@@ -46,8 +55,10 @@ const FRONT_SHAPE_PATHS = MARKER_SHAPES.map((t) => symbol(t, 90)() ?? '');
  * layer (bands, grid) and a front layer (ticks, front, hover), so a sweep of 100,000 points stays fluid.
  */
 export function ScatterChart(props: ScatterChartProps) {
-  const { data, front, x, y, bands, hovered, onHover, onPick, renderTooltip } = props;
+  const { data, front, x, y, bands, hovered, onHover, onPick, renderTooltip, exportRef } = props;
   const boxRef = useRef<HTMLDivElement>(null);
+  const backRef = useRef<SVGSVGElement>(null);
+  const frontRef = useRef<SVGSVGElement>(null);
   const { width, height } = useElementSize(boxRef);
   const plotW = Math.max(10, width - MARGIN.left - MARGIN.right);
   const plotH = Math.max(10, height - MARGIN.top - MARGIN.bottom);
@@ -86,6 +97,20 @@ export function ScatterChart(props: ScatterChartProps) {
     return points.length > 1 ? (line().curve(curveStepAfter)(points.map((p) => [p[0], p[1]])) ?? '') : '';
   }, [front, screen]);
 
+  useImperativeHandle(exportRef, () => {
+    const svg = () =>
+      backRef.current && frontRef.current && width > 0
+        ? scatterSvgText({ back: backRef.current, front: frontRef.current }, data, screen, width, height)
+        : null;
+    return {
+      svg,
+      png: async (scale = 2) => {
+        const text = svg();
+        return text ? svgToPng(text, width, height, scale) : null;
+      },
+    };
+  }, [data, screen, width, height]);
+
   const hoveredAt = hovered !== null ? screen[hovered] : undefined;
   const hoveredDatum = hovered !== null ? data[hovered] : undefined;
 
@@ -93,7 +118,7 @@ export function ScatterChart(props: ScatterChartProps) {
     <div className="scatter" ref={boxRef} data-testid="scatter" data-points={data.length}>
       {width > 0 && (
         <>
-          <svg className="layer" width={width} height={height} aria-hidden="true">
+          <svg ref={backRef} className="layer" width={width} height={height} aria-hidden="true">
             <g transform={`translate(${MARGIN.left},${MARGIN.top})`}>
               <Bands bands={bands} xs={xs} ys={ys} width={plotW} height={plotH} />
               <Grid xs={xs} ys={ys} width={plotW} height={plotH} />
@@ -101,6 +126,7 @@ export function ScatterChart(props: ScatterChartProps) {
           </svg>
           <PointsCanvas data={data} screen={screen} width={width} height={height} />
           <svg
+            ref={frontRef}
             className="layer"
             width={width}
             height={height}

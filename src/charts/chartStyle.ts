@@ -36,3 +36,15 @@ export const MARKER_SHAPES = [
 export function markerPath(shape: number, size = 42): string {
   return symbol(MARKER_SHAPES[shape % MARKER_SHAPES.length] ?? symbolCircle, size)() ?? '';
 }
+
+/** Background of the plot area. */
+export const PLOT_BACKGROUND = '#fffefb';
+/**
+ * Outline of every feasible marker, so that a light series colour still has a boundary of 3:1 or more
+ * against the plot (WCAG 2.1, success criterion 1.4.11).
+ */
+export const MARKER_OUTLINE = '#1f2328';
+
+/** Marker area (px²) of a plotted point, and the grey of infeasible points. */
+export const MARKER_SIZE = 42;
+export const INFEASIBLE_FILL = '#b5b9c0';

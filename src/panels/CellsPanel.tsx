@@ -45,6 +45,7 @@ export function CellsPanel() {
         <button
           type="button"
           data-testid="copy-cell"
+          title="Make an editable copy of this cell"
           onClick={() => {
             if (run(copyCell, { cellId: cell.id }) === null) {
               const cells = useAppStore.getState().history.present.cells;
@@ -106,6 +107,7 @@ export function CellsPanel() {
         <div className="panel-actions">
           <button
             type="button"
+            title="Drop the typed pitches and derive them from the feature size"
             onClick={() => run(setCellPitchOverride, { cellId: cell.id, override: null })}
           >
             Derive pitches from F again

@@ -48,6 +48,7 @@ export function ChecksPanel() {
                   requestFrame(f.blockIds);
                 }}
                 disabled={f.blockIds.length === 0}
+                title="Select and frame the blocks of this finding"
               >
                 <span className="severity">{f.severity}</span> {f.message}
               </button>

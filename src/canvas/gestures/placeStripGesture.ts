@@ -24,7 +24,7 @@ import {
 } from './gesture';
 
 /** Id stems and display names of placed blocks. */
-const NAMING: Record<PlacementTool, { prefix: string; name: string }> = {
+export const NAMING: Record<PlacementTool, { prefix: string; name: string }> = {
   senseAmpStrip: { prefix: 'sa', name: 'SA' },
   wordlineDriverStrip: { prefix: 'swd', name: 'SWD' },
   rowDecoder: { prefix: 'rowdec', name: 'Row decoder' },

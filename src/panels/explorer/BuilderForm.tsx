@@ -111,7 +111,13 @@ export function BuilderForm({ design, settings, onBuilt }: Props) {
         onCommit={(v) => whole(v) ?? (setWl(v), null)}
       />
       <div className="panel-actions">
-        <button type="button" data-testid="build-partition" onClick={build} disabled={!cell || !process}>
+        <button
+          type="button"
+          data-testid="build-partition"
+          title="Build this partition as a new variant and edit it"
+          onClick={build}
+          disabled={!cell || !process}
+        >
           Build {formatBits(settings.targetBits)} bank as a variant
         </button>
       </div>

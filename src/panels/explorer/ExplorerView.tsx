@@ -1,19 +1,29 @@
-import { useMemo, useState } from 'react';
+import { useMemo, useRef, useState } from 'react';
 import { buildPartition, shortProcessName } from '../../build/buildPartition';
-import { markerPath, ScatterChart, type ScatterDatum, type ShadedBand } from '../../charts/ScatterChart';
+import { downloadBlob, fileBaseName } from '../../app/download';
+import {
+  markerPath,
+  ScatterChart,
+  type ScatterDatum,
+  type ScatterExport,
+  type ShadedBand,
+} from '../../charts/ScatterChart';
 import { createVariant } from '../../commands/createVariant';
 import { chartModel, type FeasibilityLimits } from '../../explore/chartData';
 import { bankFigureEntry, type AxisFigure } from '../../engine';
 import { pointBuildSpec, type SweepRequest } from '../../explore/sweep';
-import { defaultSweepSettings } from '../../explore/sweepSettings';
+import { sweepPointsCsv } from '../../explore/pointsCsv';
 import { formatQuantity } from '../../model/units';
+import { defaultSweepSettings } from '../../explore/sweepSettings';
 import { useAppStore } from '../../store/useAppStore';
 import { useExploreStore } from '../../store/useExploreStore';
 import { BuilderForm } from './BuilderForm';
 import { ChartControls } from './ChartControls';
+import { FrontTable } from './FrontTable';
 import { PointCard } from './PointCard';
 import { seriesColour } from './seriesStyle';
 import { BankControls, SweepControls } from './SweepControls';
+import { sweepAnnouncement, sweepStatusText } from './sweepStatusText';
 
 /** Infeasible stretches of the axes that carry a constrained figure. */
 function constraintBands(xAxis: AxisFigure, yAxis: AxisFigure, limits: FeasibilityLimits): ShadedBand[] {
@@ -50,6 +60,7 @@ export function ExplorerView() {
   const [hovered, setHovered] = useState<number | null>(null);
   const [pickError, setPickError] = useState<string | null>(null);
   const [builtByForm, setBuiltByForm] = useState<string | null>(null);
+  const chart = useRef<ScatterExport>(null);
 
   const settings = useMemo(() => stored ?? defaultSweepSettings(design), [stored, design]);
   const minMargin =
@@ -98,6 +109,8 @@ export function ExplorerView() {
   const xInfo = bankFigureEntry(xAxis);
   const yInfo = bankFigureEntry(yAxis);
   const builtPoint = lastBuilt ? run.points[lastBuilt.pointIndex] : undefined;
+  const exportBase = () =>
+    `${fileBaseName(design.name)}-${xAxis}-vs-${yAxis}`.replace(/([a-z])([A-Z])/g, '$1-$2').toLowerCase();
   const percent = run.total > 0 ? Math.round((run.done / run.total) * 100) : 0;
 
   return (
@@ -113,6 +126,7 @@ export function ExplorerView() {
           <div
             className="progress"
             role="progressbar"
+            aria-label="Sweep progress"
             aria-valuemin={0}
             aria-valuemax={100}
             aria-valuenow={percent}
@@ -120,27 +134,62 @@ export function ExplorerView() {
             <div className="progress-bar" style={{ width: `${percent}%` }} data-testid="sweep-progress" />
           </div>
           <span>
-            {run.status === 'idle' && 'No sweep yet.'}
-            {run.status === 'running' &&
-              `Sweeping… ${run.done.toLocaleString('en-US')} of ${run.total.toLocaleString('en-US')} points`}
-            {run.status === 'cancelled' &&
-              `Cancelled after ${run.done.toLocaleString('en-US')} of ${run.total.toLocaleString('en-US')} points.`}
-            {run.status === 'failed' && `The sweep failed: ${run.error ?? 'unknown error'}`}
-            {run.status === 'done' &&
-              `${run.total.toLocaleString('en-US')} points in ${formatQuantity(run.elapsed ?? 0, 'time', 3)}`}
+            {sweepStatusText(run)}
             {run.points.length > 0 &&
               ` · ${model.counts.feasible.toLocaleString('en-US')} feasible · ${model.front.length} on the front` +
                 (model.counts.unplanned > 0
                   ? ` · ${model.counts.unplanned.toLocaleString('en-US')} need too many mats`
                   : '')}
           </span>
+          {run.points.length > 0 && request && (
+            <span className="chart-exports">
+              <button
+                type="button"
+                data-testid="export-points-csv"
+                title="Every point with every figure, its feasibility and whether it is on the front, as CSV"
+                onClick={() => {
+                  const front = new Set(model.front.map((i) => model.plotted[i]?.point ?? -1));
+                  const text = sweepPointsCsv(run.points, request, limits, front);
+                  downloadBlob(new Blob([text], { type: 'text/csv' }), `${exportBase()}.points.csv`);
+                }}
+              >
+                Points CSV
+              </button>
+              <button
+                type="button"
+                data-testid="export-chart-svg"
+                title="The chart as an SVG drawing"
+                onClick={() => {
+                  const text = chart.current?.svg();
+                  if (text)
+                    downloadBlob(new Blob([text], { type: 'image/svg+xml' }), `${exportBase()}.chart.svg`);
+                }}
+              >
+                Chart SVG
+              </button>
+              <button
+                type="button"
+                data-testid="export-chart-png"
+                title="The chart as a PNG picture at twice its size on screen"
+                onClick={async () => {
+                  const blob = await chart.current?.png(2);
+                  if (blob) downloadBlob(blob, `${exportBase()}.chart.png`);
+                }}
+              >
+                Chart PNG
+              </button>
+            </span>
+          )}
+        </div>
+        <div className="sr-only" role="status" aria-live="polite" data-testid="sweep-announcer">
+          {sweepAnnouncement(run, model.counts.feasible, model.front.length)}
         </div>
         {run.points.length === 0 ? (
           <div className="chart-empty">
             <p>
               Run a sweep to see {yInfo.label.toLowerCase()} against {xInfo.label.toLowerCase()} for every
               partition, with the Pareto front of the feasible ones. Hover a point for its figures; click it
-              to build that bank as a new variant.
+              (or use the Build buttons in the table of front points) to build that bank as a new variant.
             </p>
           </div>
         ) : (
@@ -161,6 +210,7 @@ export function ExplorerView() {
             hovered={hovered !== null && hovered < data.length ? hovered : null}
             onHover={setHovered}
             onPick={pick}
+            exportRef={chart}
             renderTooltip={() =>
               hoveredPoint && request ? (
                 <>
@@ -178,6 +228,17 @@ export function ExplorerView() {
           />
         )}
         {request && run.points.length > 0 && <SeriesLegend request={request} />}
+        {request && model.front.length > 0 && (
+          <FrontTable
+            model={model}
+            points={run.points}
+            request={request}
+            xAxis={xAxis}
+            yAxis={yAxis}
+            onFocusPoint={setHovered}
+            onBuild={pick}
+          />
+        )}
         {pickError && (
           <p className="field-error" role="alert">
             {pickError}

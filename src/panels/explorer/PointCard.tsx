@@ -54,7 +54,13 @@ export function PointCard({ point, request, limits, onFront, explainable = false
               <tr key={key}>
                 <td>
                   {explainable ? (
-                    <button type="button" className="link" onClick={() => setOpen(open === key ? null : key)}>
+                    <button
+                      type="button"
+                      className="link"
+                      title="Show formula, inputs and source"
+                      aria-expanded={open === key}
+                      onClick={() => setOpen(open === key ? null : key)}
+                    >
                       {bankFigureEntry(key).label}
                     </button>
                   ) : (

@@ -134,7 +134,13 @@ export function SweepControls({ design, settings, onChange }: Props) {
       <div className="sweep-run">
         <span data-testid="sweep-size">{size.toLocaleString('en-US')} points</span>
         {running ? (
-          <button type="button" className="primary" data-testid="cancel-sweep" onClick={cancelSweep}>
+          <button
+            type="button"
+            className="primary"
+            data-testid="cancel-sweep"
+            title="Stop the sweep; the points so far stay"
+            onClick={cancelSweep}
+          >
             Cancel
           </button>
         ) : (
@@ -147,7 +153,7 @@ export function SweepControls({ design, settings, onChange }: Props) {
             title={
               size > MAX_SWEEP_POINTS
                 ? `at most ${MAX_SWEEP_POINTS.toLocaleString('en-US')} points`
-                : undefined
+                : 'Assess every partition of the sweep and chart it'
             }
           >
             Run sweep

@@ -114,6 +114,7 @@ export function VariantsView() {
                       <button
                         type="button"
                         data-testid={`switch-${c.id}`}
+                        title="Edit this variant on the floorplan"
                         onClick={() => {
                           const refused = run(switchVariant, { variantId: c.id });
                           act(refused);
@@ -123,12 +124,18 @@ export function VariantsView() {
                         Switch to
                       </button>
                     )}
-                    <button type="button" data-testid={`rename-${c.id}`} onClick={() => setRenaming(c.id)}>
+                    <button
+                      type="button"
+                      data-testid={`rename-${c.id}`}
+                      title="Rename this variant"
+                      onClick={() => setRenaming(c.id)}
+                    >
                       Rename
                     </button>
                     <button
                       type="button"
                       data-testid={`duplicate-${c.id}`}
+                      title="Copy this variant as a new one"
                       disabled={!hasRoomForVariant(design)}
                       onClick={() => act(run(duplicateVariant, { variantId: c.id }))}
                     >
@@ -137,6 +144,7 @@ export function VariantsView() {
                     <button
                       type="button"
                       data-testid={`delete-${c.id}`}
+                      title="Delete this variant (undoable)"
                       disabled={columns.length === 1}
                       onClick={() => act(run(deleteVariant, { variantId: c.id }))}
                     >
@@ -192,6 +200,7 @@ export function VariantsView() {
                           type="button"
                           className="value"
                           data-testid={`variant-${c.id}-${key}`}
+                          title="Show formula, inputs and source"
                           onClick={() =>
                             setOpen(open?.id === c.id && open.key === key ? null : { id: c.id, key })
                           }

@@ -1,0 +1,100 @@
+import { shortProcessName } from '../../build/buildPartition';
+import type { ChartModel } from '../../explore/chartData';
+import { bankFigureEntry, type AxisFigure } from '../../engine';
+import type { SweepPoint, SweepRequest } from '../../explore/sweep';
+import { formatQuantity } from '../../model/units';
+import { markerPath } from '../../charts/ScatterChart';
+import { seriesColour } from './seriesStyle';
+
+interface FrontTableProps {
+  readonly model: ChartModel;
+  readonly points: readonly SweepPoint[];
+  readonly request: SweepRequest;
+  readonly xAxis: AxisFigure;
+  readonly yAxis: AxisFigure;
+  /** Index into the plotted points of the row in use, shown on the chart. */
+  onFocusPoint(plottedIndex: number | null): void;
+  onBuild(plottedIndex: number): void;
+}
+
+/**
+ * The Pareto-front points as a table, best first along the horizontal axis: what partition each is, its
+ * two charted figures, and a button that builds it as a new variant. It is the keyboard's way to the
+ * front; focusing a row's button rings its point on the chart.
+ */
+export function FrontTable({ model, points, request, xAxis, yAxis, onFocusPoint, onBuild }: FrontTableProps) {
+  const xInfo = bankFigureEntry(xAxis);
+  const yInfo = bankFigureEntry(yAxis);
+  return (
+    <div className="front-table-box">
+      <table className="front-table" data-testid="front-table">
+        <caption>
+          Pareto front: {model.front.length} point{model.front.length === 1 ? '' : 's'}, best{' '}
+          {xInfo.label.toLowerCase()} first
+        </caption>
+        <thead>
+          <tr>
+            <th scope="col">Cell · process</th>
+            <th scope="col">Cells per BL × WL</th>
+            <th scope="col">Mats</th>
+            <th scope="col" className="num">
+              {xInfo.label}
+            </th>
+            <th scope="col" className="num">
+              {yInfo.label}
+            </th>
+            <th scope="col">
+              <span className="sr-only">Build</span>
+            </th>
+          </tr>
+        </thead>
+        <tbody>
+          {model.front.map((plottedIndex, rank) => {
+            const plotted = model.plotted[plottedIndex];
+            const point = plotted ? points[plotted.point] : undefined;
+            if (!plotted || !point?.figures) return null;
+            const cell = request.cells[point.cellIndex];
+            const process = request.processes[point.processIndex];
+            const title = `${cell?.name ?? '?'} · ${process ? shortProcessName(process) : '?'}`;
+            return (
+              <tr key={plottedIndex} data-testid="front-row">
+                <th scope="row">
+                  <svg width="12" height="12" viewBox="-6 -6 12 12" aria-hidden="true">
+                    <path
+                      d={markerPath(point.processIndex, 40)}
+                      fill={seriesColour(point.cellIndex)}
+                      stroke="#1f2328"
+                      strokeWidth={0.7}
+                    />
+                  </svg>{' '}
+                  {title}
+                </th>
+                <td>
+                  {point.cellsPerBitline} × {point.cellsPerWordline}
+                </td>
+                <td>
+                  {point.matRows} × {point.matColumns}
+                </td>
+                <td className="num">{formatQuantity(point.figures[xAxis], xInfo.quantity)}</td>
+                <td className="num">{formatQuantity(point.figures[yAxis], yInfo.quantity)}</td>
+                <td>
+                  <button
+                    type="button"
+                    data-testid={`build-front-${rank}`}
+                    title="Build this bank as a new variant and edit it"
+                    aria-label={`Build ${title}, ${point.cellsPerBitline} × ${point.cellsPerWordline}, as a new variant`}
+                    onFocus={() => onFocusPoint(plottedIndex)}
+                    onBlur={() => onFocusPoint(null)}
+                    onClick={() => onBuild(plottedIndex)}
+                  >
+                    Build
+                  </button>
+                </td>
+              </tr>
+            );
+          })}
+        </tbody>
+      </table>
+    </div>
+  );
+}
