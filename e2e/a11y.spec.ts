@@ -17,7 +17,7 @@ test('every view, tab and dialog has no critical or serious accessibility violat
   await page.goto('/');
   await page.getByTestId('floorplan').locator('canvas').first().waitFor();
   await expectNoSeriousViolations(page, 'floorplan');
-  for (const tab of ['process', 'cells', 'floorplan'] as const) {
+  for (const tab of ['process', 'cells', 'yield', 'floorplan'] as const) {
     await page.getByTestId(`tab-${tab}`).click();
     await expectNoSeriousViolations(page, `sidebar tab ${tab}`);
   }
