@@ -1,24 +1,45 @@
 /**
- * Frame times of the floorplan canvas while panning and dragging a mat on a 4,096-mat floorplan,
- * measured in Debian's Chromium. This is a measurement, not a test: it prints figures and asserts
- * nothing. Run with `npm run bench:canvas` (builds first), or `npx tsx e2e/measure/frameTimes.ts`
- * against an existing build. The server port comes from E2E_PORT (default 4173).
+ * Canvas benches in Debian's Chromium (`npm run bench:canvas`, builds first; or `npx tsx
+ * e2e/measure/frameTimes.ts` against an existing build; port from E2E_PORT). A measurement, not a
+ * test: it prints figures beside their goals and asserts nothing.
  *
- * How: the page records the time between animation frames (requestAnimationFrame) while the script
- * feeds real mouse input through the DevTools protocol every 8 ms without waiting for the page, so
- * the browser receives input faster than it paints and every frame has work to do. The app's own
- * probe (`?perf`) adds the time from each pointer event to the live report reaching the panels.
+ * Every time is taken at the next paint (see paintTiming.ts): frames from paint to paint while the
+ * script feeds real mouse input through the DevTools protocol every 8 ms without waiting for the page;
+ * an edit from its input event to the paint of the frame after it; a load from navigation start to the
+ * first idle moment after the floorplan is shown.
  */
 import { spawn, type ChildProcess } from 'node:child_process';
+import { cpus } from 'node:os';
 import { fileURLToPath } from 'node:url';
-import { chromium, type CDPSession, type Page } from '@playwright/test';
+import { chromium, type Browser, type CDPSession, type Page } from '@playwright/test';
+import {
+  armEditTimer,
+  armedResult,
+  benchLine,
+  HEADER,
+  installPaintMarks,
+  loadAverage,
+  startRecording,
+  stats,
+  stopRecording,
+  type Goal,
+} from './paintTiming';
 
 const port = Number(process.env.E2E_PORT ?? 4173);
 const base = `http://127.0.0.1:${port}`;
-const GRID = process.env.FRAME_GRID ?? '64x64';
 /** Mouse moves per gesture and the pause between them (ms). */
 const MOVES = 240;
 const MOVE_INTERVAL_MS = 8;
+/** Repetitions of each timed edit and of each load. */
+const EDIT_RUNS = Number(process.env.EDIT_RUNS ?? 5);
+const LOAD_RUNS = Number(process.env.LOAD_RUNS ?? 3);
+/** Grids to measure: side × side mats (FRAME_GRIDS=64,256). */
+const SIDES = (process.env.FRAME_GRIDS ?? '64,256').split(',').map(Number);
+
+const FRAME_GOALS: Record<number, { pan: Goal; drag: Goal; edit: Goal; load: Goal }> = {
+  64: { pan: { median: 16.7, p95: 33 }, drag: { median: 16.7, p95: 33 }, edit: { median: 50 }, load: {} },
+  256: { pan: { median: 33 }, drag: {}, edit: { median: 100 }, load: { median: 1200 } },
+};
 
 const sleep = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
 
@@ -48,107 +69,66 @@ async function startServer(): Promise<ChildProcess | null> {
   throw new Error(`vite preview did not start on port ${port}`);
 }
 
-interface Stats {
-  frames: number;
-  median: number;
-  p95: number;
-  max: number;
-  over16_7: number;
-}
-
-function stats(samples: readonly number[]): Stats {
-  const sorted = [...samples].sort((a, b) => a - b);
-  const at = (q: number) => sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))] ?? NaN;
-  return {
-    frames: sorted.length,
-    median: at(0.5),
-    p95: at(0.95),
-    max: sorted[sorted.length - 1] ?? NaN,
-    over16_7: sorted.filter((t) => t > 17.5).length,
+/**
+ * Runs before the app: once the status bar shows the block count, waits for the first idle moment
+ * and records its time since navigation start (ms) in window.__loadIdle.
+ */
+const LOAD_IDLE_SCRIPT = `(() => {
+  window.__loadIdle = NaN;
+  const poll = () => {
+    const text = document.querySelector('[data-testid="block-count"]')?.textContent ?? '';
+    if (!text.includes(',')) return requestAnimationFrame(poll);
+    requestIdleCallback(() => { window.__loadIdle = performance.now(); });
   };
+  requestAnimationFrame(poll);
+})()`;
+
+/** Opens a generated grid; returns the time to the first idle moment after it is shown (ms). */
+async function openGrid(page: Page, side: number): Promise<number> {
+  await page.goto(`${base}/?generate=${side}x${side}&perf`);
+  await page.waitForFunction('!Number.isNaN(window.__loadIdle)', undefined, { timeout: 60_000 });
+  const idle = Number(await page.evaluate('window.__loadIdle'));
+  await installPaintMarks(page);
+  return idle;
 }
 
-// The in-page code is passed as text: tsx compiles functions with helpers that do not exist in the page.
+type Mouse = (
+  type: 'mouseMoved' | 'mousePressed' | 'mouseReleased',
+  x: number,
+  y: number,
+  buttons: number,
+) => Promise<unknown>;
 
-/** Starts recording frame deltas in the page. */
-async function startFrames(page: Page): Promise<void> {
-  await page.evaluate(`(() => {
-    window.frameDeltas = [];
-    window.recording = true;
-    let last = performance.now();
-    const tick = (now) => {
-      window.frameDeltas.push(now - last);
-      last = now;
-      if (window.recording) requestAnimationFrame(tick);
-    };
-    requestAnimationFrame(tick);
-  })()`);
+function mouseOf(cdp: CDPSession): Mouse {
+  return (type, x, y, buttons) =>
+    cdp.send('Input.dispatchMouseEvent', { type, x, y, button: 'left', buttons, clickCount: 1 });
 }
 
-/** Stops recording; the first delta spans the time before recording began and is dropped. */
-async function stopFrames(page: Page): Promise<number[]> {
-  return page.evaluate(`(() => {
-    window.recording = false;
-    return window.frameDeltas.slice(1);
-  })()`);
-}
-
-/** The app's probe samples since the last call (and clears them). */
-interface Probe {
-  latency: number[];
-  compute: number[];
-  paintBlocks: number[];
-  paintOverlay: number[];
-}
-
-async function probe(page: Page): Promise<Probe> {
-  return page.evaluate(`(() => {
-    const perf = window.matloomPerf;
-    const take = (a) => (a ? a.splice(0, a.length) : []);
-    return {
-      latency: take(perf?.liveReportLatency),
-      compute: take(perf?.liveReportCompute),
-      paintBlocks: take(perf?.paintBlocks),
-      paintOverlay: take(perf?.paintOverlay),
-    };
-  })()`);
-}
-
-/** Presses at `from`, moves along `step` MOVES times at a steady pace without waiting for frames, releases. */
+/**
+ * Presses at `from`, moves along `step` MOVES times at a steady pace without waiting for frames,
+ * then releases; returns the frame durations during the moves and the release's time to paint.
+ */
 async function gesture(
   page: Page,
-  cdp: CDPSession,
+  mouse: Mouse,
   from: { x: number; y: number },
   step: { x: number; y: number },
-): Promise<{ frames: number[]; dropMs: number }> {
-  const mouse = (
-    type: 'mouseMoved' | 'mousePressed' | 'mouseReleased',
-    x: number,
-    y: number,
-    buttons: number,
-  ) => cdp.send('Input.dispatchMouseEvent', { type, x, y, button: 'left', buttons, clickCount: 1 });
+): Promise<{ frames: number[]; releaseMs: number }> {
   await mouse('mouseMoved', from.x, from.y, 0);
   await mouse('mousePressed', from.x, from.y, 1);
-  await startFrames(page);
+  await startRecording(page);
   const sent: Promise<unknown>[] = [];
   for (let i = 1; i <= MOVES; i++) {
     sent.push(mouse('mouseMoved', from.x + step.x * i, from.y + step.y * i, 1));
     await sleep(MOVE_INTERVAL_MS);
   }
   await Promise.all(sent);
-  const frames = await stopFrames(page);
-  // The release commits the gesture (one command, a full evaluation): time it to the next frame.
-  await page.evaluate(`(() => {
-    window.dropMs = NaN;
-    window.addEventListener('pointerup', () => {
-      const start = performance.now();
-      requestAnimationFrame(() => { window.dropMs = performance.now() - start; });
-    }, { once: true, capture: true });
-  })()`);
+  const frames = await stopRecording(page);
+  await armEditTimer(page, 'pointerup');
   await mouse('mouseReleased', from.x + step.x * MOVES, from.y + step.y * MOVES, 0);
-  await sleep(700);
-  const dropMs = Number(await page.evaluate('window.dropMs'));
-  return { frames, dropMs };
+  const releaseMs = await armedResult(page);
+  await sleep(300);
+  return { frames, releaseMs };
 }
 
 async function view(page: Page) {
@@ -172,9 +152,89 @@ async function matCentre(page: Page, row: number, column: number) {
   return { x: v.box.x + v.x + xUm * v.scale, y: v.box.y + v.y + yUm * v.scale };
 }
 
-function line(label: string, s: Stats): string {
-  const f = (n: number) => n.toFixed(1).padStart(6);
-  return `${label.padEnd(34)} ${String(s.frames).padStart(6)} ${f(s.median)} ${f(s.p95)} ${f(s.max)} ${String(s.over16_7).padStart(8)}`;
+/** Times `act` from its input event to the next paint, `runs` times. */
+async function timedEdits(page: Page, eventType: string, runs: number, act: (run: number) => Promise<void>) {
+  const times: number[] = [];
+  for (let r = 0; r < runs; r++) {
+    await armEditTimer(page, eventType);
+    await act(r);
+    times.push(await armedResult(page));
+    await sleep(400);
+  }
+  return times;
+}
+
+async function measureGrid(browser: Browser, side: number, lines: string[]): Promise<void> {
+  const mats = (side * side).toLocaleString('en-US');
+  const goals = FRAME_GOALS[side] ?? { pan: {}, drag: {}, edit: {}, load: {} };
+  const context = await browser.newContext({ viewport: { width: 1400, height: 860 } });
+  await context.addInitScript(LOAD_IDLE_SCRIPT);
+  const page = await context.newPage();
+  const loads: number[] = [];
+  for (let r = 0; r < LOAD_RUNS; r++) loads.push(await openGrid(page, side));
+  lines.push(benchLine(`load until idle, ${mats} mats (cold page each run)`, stats(loads), goals.load));
+
+  const cdp = await context.newCDPSession(page);
+  const mouse = mouseOf(cdp);
+  const whole = await view(page);
+  const centre = { x: whole.box.x + whole.box.width / 2, y: whole.box.y + whole.box.height / 2 };
+
+  await page.keyboard.press('2');
+  const pan = await gesture(page, mouse, centre, { x: 0.5, y: 0.3 });
+  lines.push(benchLine(`pan frame, ${mats} mats, whole floorplan in view`, stats(pan.frames), goals.pan));
+  await page.getByTestId('zoom-fit').click();
+  await sleep(300);
+
+  await page.keyboard.press('1');
+  const released: number[] = [];
+  const dragFrames: number[] = [];
+  const undos: number[] = [];
+  const mid = Math.floor(side / 2);
+  for (let r = 0; r < EDIT_RUNS; r++) {
+    // Nothing selected, so the press never lands on a resize handle of the block moved last time.
+    await page.keyboard.press('Escape');
+    const from = await matCentre(page, mid, mid);
+    // About 150 × 60 px at 4,096 mats (several mats); a few mats' width on a whole-die view.
+    const stepPx = side <= 64 ? 1 : 0.1;
+    const drag = await gesture(page, mouse, from, { x: 0.6 * stepPx, y: 0.25 * stepPx });
+    dragFrames.push(...drag.frames);
+    released.push(drag.releaseMs);
+    undos.push(...(await timedEdits(page, 'keydown', 1, () => page.keyboard.press('Control+z'))));
+    // The undo must have taken back the move, not the opening of the grid.
+    const count = await page.getByTestId('block-count').textContent();
+    if (!count?.includes(',')) throw new Error(`the move was not committed (undo reached "${count}")`);
+  }
+  lines.push(benchLine(`drag frame, ${mats} mats, whole floorplan in view`, stats(dragFrames), goals.drag));
+  lines.push(
+    benchLine(`edit to paint: move (drag release), ${mats} mats, whole view`, stats(released), goals.edit),
+  );
+  lines.push(benchLine(`edit to paint: undo (Ctrl+Z), ${mats} mats, whole view`, stats(undos), goals.edit));
+
+  // Cells per bit line of the selected mat, typed into the properties panel and committed with Enter.
+  // On a whole-die view a mat is a pixel or two wide and a press lands on a strip: zoom in to pick it.
+  let where = 'whole floorplan in view';
+  if (side > 64) {
+    const m = await matCentre(page, mid, mid);
+    await page.mouse.move(m.x, m.y);
+    for (let i = 0; i < 24; i++) await page.mouse.wheel(0, -100);
+    await sleep(500);
+    where = `zoomed to the mat (${(await view(page)).scale.toFixed(2)} px/µm)`;
+  }
+  const at = await matCentre(page, mid, mid);
+  await page.mouse.click(at.x, at.y);
+  const field = page.locator('#cells-per-bitline');
+  await field.waitFor({ timeout: 5000 }).catch(async (error: unknown) => {
+    await page.screenshot({ path: '/tmp/speed/nofield.png' });
+    throw error;
+  });
+  const counts = await timedEdits(page, 'keydown', EDIT_RUNS, async (r) => {
+    await field.fill(r % 2 === 0 ? '256' : '512');
+    await field.press('Enter');
+  });
+  lines.push(
+    benchLine(`edit to paint: cells per bit line, ${mats} mats, ${where}`, stats(counts), goals.edit),
+  );
+  await context.close();
 }
 
 async function main() {
@@ -183,91 +243,20 @@ async function main() {
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
     args: ['--headless', '--no-sandbox', '--disable-gpu', '--no-first-run'],
   });
+  const lines: string[] = [];
   try {
-    const page = await browser.newPage({ viewport: { width: 1400, height: 860 } });
-    const started = Date.now();
-    await page.goto(`${base}/?generate=${GRID}&perf`);
-    await page.getByTestId('floorplan').locator('canvas').first().waitFor();
-    await page.waitForFunction(() =>
-      document.querySelector('[data-testid="block-count"]')?.textContent?.includes(','),
-    );
-    const loadMs = Date.now() - started;
-    const blocks = await page.getByTestId('block-count').textContent();
-    const cdp = await page.context().newCDPSession(page);
-    const rows: string[] = [];
-    const probes: string[] = [];
-
-    const scenario = async (
-      label: string,
-      tool: string,
-      from: { x: number; y: number },
-      step: { x: number; y: number },
-    ) => {
-      await page.keyboard.press(tool);
-      await probe(page);
-      const result = await gesture(page, cdp, from, step);
-      const s = stats(result.frames);
-      rows.push(`${line(label, s)} ${result.dropMs.toFixed(0).padStart(8)}`);
-      const p = await probe(page);
-      const paint = stats(p.paintBlocks);
-      const overlay = stats(p.paintOverlay);
-      probes.push(
-        `${label.padEnd(34)} paints: blocks layer ${p.paintBlocks.length}× median ${paint.median.toFixed(1)} ms ` +
-          `(p95 ${paint.p95.toFixed(1)}), overlay ${p.paintOverlay.length}× median ${overlay.median.toFixed(2)} ms`,
-      );
-      if (p.latency.length > 0) {
-        const lat = stats(p.latency);
-        const comp = stats(p.compute);
-        probes.push(
-          `${label.padEnd(34)} live reports ${p.latency.length}: compute median ${comp.median.toFixed(2)} ms, ` +
-            `p95 ${comp.p95.toFixed(2)} ms; pointer event → figures median ${lat.median.toFixed(1)} ms, p95 ${lat.p95.toFixed(1)} ms`,
-        );
-      }
-    };
-
-    // 1. Whole floorplan in view: every one of the 12,418 blocks is painted each frame of a pan.
-    const whole = await view(page);
-    const centre = { x: whole.box.x + whole.box.width / 2, y: whole.box.y + whole.box.height / 2 };
-    await scenario('pan, whole floorplan in view', '2', centre, { x: 0.5, y: 0.3 });
-    await page.getByTestId('zoom-fit').click();
-    await sleep(300);
-    await scenario('drag a mat, whole floorplan in view', '1', await matCentre(page, 30, 30), {
-      x: 0.6,
-      y: 0.25,
-    });
-    await page.keyboard.press('Control+z');
-    await sleep(500);
-
-    // 2. Zoomed in so that mats carry labels and line hints (about 160 px per mat).
-    const m = await matCentre(page, 20, 20);
-    await page.mouse.move(m.x, m.y);
-    for (let i = 0; i < 14; i++) {
-      await page.mouse.wheel(0, -100);
-      await sleep(30);
-    }
-    await sleep(300);
-    const close = await view(page);
-    const closeCentre = { x: close.box.x + close.box.width / 2, y: close.box.y + close.box.height / 2 };
-    await scenario(`pan, zoomed in (${close.scale.toFixed(2)} px/µm)`, '2', closeCentre, { x: 1.2, y: 0.6 });
-    await scenario(`drag a mat, zoomed in`, '1', await matCentre(page, 20, 20), { x: 1.5, y: 0.4 });
-
-    console.log(`Matloom canvas frame times: ${GRID} mats (${blocks}), page ready in ${loadMs} ms`);
-    console.log(
-      `Chromium headless, software rendering; ${MOVES} mouse moves every ${MOVE_INTERVAL_MS} ms per gesture.`,
-    );
-    console.log(
-      `${'gesture'.padEnd(34)} ${'frames'.padStart(6)} ${'median'.padStart(6)} ${'p95'.padStart(6)} ${'max'.padStart(6)} ${'>16.7ms'.padStart(8)}`,
-    );
-    for (const r of rows) console.log(r);
-    console.log(
-      'Frame times in ms between animation frames; "release" is the time from letting go to the next frame ' +
-        '(the one command and the full evaluation). Where the time goes:',
-    );
-    for (const p of probes) console.log(p);
+    for (const side of SIDES) await measureGrid(browser, side, lines);
   } finally {
     await browser.close();
     server?.kill();
   }
+  console.log('Matloom canvas bench, Chromium headless (software rendering), production build.');
+  console.log(
+    `${cpus().length} CPUs, load average at the end ${loadAverage()}; ${MOVES} mouse moves every ` +
+      `${MOVE_INTERVAL_MS} ms per gesture; times in ms, each taken at the next paint.`,
+  );
+  console.log(HEADER);
+  for (const line of lines) console.log(line);
 }
 
 main().catch((error: unknown) => {

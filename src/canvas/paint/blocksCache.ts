@@ -27,12 +27,15 @@ function sameKey(a: CacheKey | null, b: CacheKey): boolean {
  * The painted blocks kept as a bitmap half a screen larger than the view on every side. Panning only
  * moves the bitmap, so a pan over 12,000 blocks costs one image copy per frame; the bitmap is painted
  * again when the document, the zoom or the set of moving blocks changes, or when a pan runs past its
- * edge. Finding markers are drawn over it on every paint, so checks can change during a drag without
- * repainting the blocks.
+ * edge. Finding markers have a second bitmap of the same size and origin, painted again only when the
+ * markers change (checks can change during a drag without repainting the blocks, and a pan never
+ * strokes a marker).
  */
 export class BlocksCache {
   private canvas: HTMLCanvasElement | null = null;
+  private markerCanvas: HTMLCanvasElement | null = null;
   private key: CacheKey | null = null;
+  private markersPainted: Scene['markers'] | null = null;
   private originX = 0;
   private originY = 0;
   private marginX = 0;
@@ -58,20 +61,48 @@ export class BlocksCache {
       Math.abs(dy) > this.marginY
     ) {
       this.render(scene, key);
+      this.markersPainted = null;
       dx = 0;
       dy = 0;
     }
-    const canvas = this.canvas;
-    if (canvas && canvas.width > 0 && canvas.height > 0) {
-      ctx.drawImage(
-        canvas,
-        dx - this.marginX,
-        dy - this.marginY,
-        canvas.width / ratio,
-        canvas.height / ratio,
-      );
+    if (this.markersPainted !== scene.markers) this.renderMarkers(scene, key);
+    for (const canvas of [this.canvas, this.markerCanvas]) {
+      if (canvas && canvas.width > 0 && canvas.height > 0) {
+        ctx.drawImage(
+          canvas,
+          dx - this.marginX,
+          dy - this.marginY,
+          canvas.width / ratio,
+          canvas.height / ratio,
+        );
+      }
     }
-    paintMarkers(ctx, scene);
+  }
+
+  /** The markers on their own bitmap, with the same size and origin as the blocks' one. */
+  private renderMarkers(scene: Scene, key: CacheKey): void {
+    this.markerCanvas ??= document.createElement('canvas');
+    const canvas = this.markerCanvas;
+    const base = this.canvas;
+    if (!base) return;
+    if (canvas.width !== base.width || canvas.height !== base.height) {
+      canvas.width = base.width;
+      canvas.height = base.height;
+    }
+    const ctx = canvas.getContext('2d');
+    if (!ctx) return;
+    const width = scene.width + 2 * this.marginX;
+    const height = scene.height + 2 * this.marginY;
+    ctx.setTransform(key.ratio, 0, 0, key.ratio, 0, 0);
+    ctx.clearRect(0, 0, width, height);
+    const v = scene.viewport;
+    paintMarkers(ctx, {
+      ...scene,
+      viewport: { ...v, offsetX: this.originX + this.marginX, offsetY: this.originY + this.marginY },
+      width,
+      height,
+    });
+    this.markersPainted = scene.markers;
   }
 
   private render(scene: Scene, key: CacheKey): void {

@@ -1,5 +1,7 @@
 import { isPlacedMat, type PlacedBlock } from '../../geometry/placedBlocks';
+import type { Rect } from '../../geometry/rect';
 import type { BlockType } from '../../model/block';
+import { aggregateRuns } from './aggregateRuns';
 import { BLOCK_STYLE, BLOCK_TAG, ERROR_STROKE, WARNING_STROKE } from '../blockStyle';
 import { paintMatDetail } from './paintMatDetail';
 import { pxPerMetre, visibleWorld, type Scene } from './scene';
@@ -17,6 +19,20 @@ const TYPE_ORDER: readonly BlockType[] = [
   'wordlineDriverStrip',
   'senseAmpStrip',
 ];
+
+/** Blocks closer than this on screen merge into one run when they are too small to outline (px). */
+const RUN_GAP_PX = 1;
+
+function fillSnapped(ctx: CanvasRenderingContext2D, r: Rect, k: number, ox: number, oy: number): void {
+  const x0 = Math.round(r.x * k + ox);
+  const y0 = Math.round(r.y * k + oy);
+  const x1 = Math.round((r.x + r.width) * k + ox);
+  const y1 = Math.round((r.y + r.height) * k + oy);
+  ctx.fillRect(x0, y0, Math.max(1, x1 - x0), Math.max(1, y1 - y0));
+}
+
+/** Up to this many markers of one severity are drawn one by one; more are merged into runs. */
+const MERGE_MARKERS_FROM = 64;
 
 /** The blocks layer without a cache: the blocks, then the finding markers on top. */
 export function paintBlocks(ctx: CanvasRenderingContext2D, scene: Scene): void {
@@ -51,20 +67,23 @@ export function paintBlockShapes(ctx: CanvasRenderingContext2D, scene: Scene): v
   }
 
   // Rectangles are snapped to whole pixels and filled one by one: axis-aligned, pixel-aligned fills
-  // need no anti-aliasing, which keeps a frame of 12,000 blocks cheap to rasterise.
+  // need no anti-aliasing. Blocks too small for an outline are merged into runs first (level of
+  // detail), so a whole-die view paints rows of mats, not every mat.
   const detailed: PlacedBlock[] = [];
   for (const type of TYPE_ORDER) {
     const list = byType.get(type);
     if (!list) continue;
     const style = BLOCK_STYLE[type];
     ctx.fillStyle = style.fill;
+    const small: Rect[] = [];
     for (const p of list) {
-      const x0 = Math.round(p.rect.x * k + ox);
-      const y0 = Math.round(p.rect.y * k + oy);
-      const x1 = Math.round((p.rect.x + p.rect.width) * k + ox);
-      const y1 = Math.round((p.rect.y + p.rect.height) * k + oy);
-      ctx.fillRect(x0, y0, Math.max(1, x1 - x0), Math.max(1, y1 - y0));
+      if (p.rect.width * k < OUTLINE_MIN_PX || p.rect.height * k < OUTLINE_MIN_PX) {
+        small.push(p.rect);
+        continue;
+      }
+      fillSnapped(ctx, p.rect, k, ox, oy);
     }
+    for (const r of aggregateRuns(small, k, RUN_GAP_PX)) fillSnapped(ctx, r, k, ox, oy);
     ctx.beginPath();
     let outlined = 0;
     for (const p of list) {
@@ -135,7 +154,11 @@ function paintStripTag(
   ctx.restore();
 }
 
-/** Outlines and tints on blocks named by findings, in the colour of the worst severity. */
+/**
+ * Outlines and tints on blocks named by findings, in the colour of the worst severity. A flagged block
+ * smaller than the marker size is shown at that size; markers that touch merge into runs (a whole die
+ * whose every mat has the same warning gets one marked area, not one outline per mat).
+ */
 export function paintMarkers(ctx: CanvasRenderingContext2D, scene: Scene): void {
   const { viewport, placed } = scene;
   const k = pxPerMetre(viewport);
@@ -143,8 +166,7 @@ export function paintMarkers(ctx: CanvasRenderingContext2D, scene: Scene): void 
   const oy = viewport.offsetY;
   for (const severity of ['warning', 'error'] as const) {
     const colour = severity === 'error' ? ERROR_STROKE : WARNING_STROKE;
-    ctx.beginPath();
-    let any = false;
+    const marks: Rect[] = [];
     for (const [id, s] of scene.markers) {
       if (s !== severity || scene.hidden.has(id)) continue;
       const i = placed.positionOf.get(id);
@@ -163,10 +185,13 @@ export function paintMarkers(ctx: CanvasRenderingContext2D, scene: Scene): void 
         y -= (MARKER_MIN_PX - h) / 2;
         h = MARKER_MIN_PX;
       }
-      ctx.rect(x + 1, y + 1, w - 2, h - 2);
-      any = true;
+      marks.push({ x, y, width: w, height: h });
     }
-    if (!any) continue;
+    if (marks.length === 0) continue;
+    // Merging only where markers overlap or touch: separate findings stay separate outlines.
+    const runs = marks.length > MERGE_MARKERS_FROM ? aggregateRuns(marks, 1, 0) : marks;
+    ctx.beginPath();
+    for (const r of runs) ctx.rect(r.x + 1, r.y + 1, r.width - 2, r.height - 2);
     ctx.fillStyle = severity === 'error' ? 'rgba(198, 40, 40, 0.16)' : 'rgba(201, 133, 0, 0.16)';
     ctx.fill();
     ctx.strokeStyle = colour;
