@@ -57,6 +57,7 @@ export {
   type MatRule,
 } from './evaluation/checkRules';
 export { preparePreview, previewReport, type PreviewBase } from './evaluation/preview';
+export { editReport } from './evaluation/editReport';
 export {
   computeYieldFigures,
   repairSettingsOf,

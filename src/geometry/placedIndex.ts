@@ -1,7 +1,9 @@
 import type { Design } from '../model/design';
+import type { Block } from '../model/block';
+import { matGeometry, matRect } from './matGeometry';
 import { placeBlocks, type PlacedBlock } from './placedBlocks';
 import { containsPoint, type Rect } from './rect';
-import { buildSpatialIndex, type SpatialIndex } from './spatialIndex';
+import { buildSpatialIndex, withMovedRects, type SpatialIndex } from './spatialIndex';
 
 /** A design's blocks with their rectangles, an index over them, and where each id sits in the list. */
 export interface PlacedDesign {
@@ -27,6 +29,43 @@ export function placedDesign(design: Design): PlacedDesign {
   };
   cache.set(design, result);
   return result;
+}
+
+/**
+ * The placed design of `next`, an edit of `previous` that replaced the blocks at the `changed` positions
+ * with new versions of themselves (model/designEdit.ts): the other blocks keep their placement, the ids
+ * keep their positions and the R-tree is updated, not rebuilt. Kept like {@link placedDesign}.
+ */
+export function placedDesignAfterEdit(
+  previous: Design,
+  next: Design,
+  changed: readonly number[],
+): PlacedDesign {
+  const cached = cache.get(next);
+  if (cached) return cached;
+  const before = cache.get(previous);
+  if (!before) return placedDesign(next);
+  const placed = before.placed.slice();
+  const moved = new Map<number, Rect>();
+  for (const i of changed) {
+    const block = next.blocks[i];
+    if (!block) return placedDesign(next);
+    const p = placeOne(next, block);
+    placed[i] = p;
+    moved.set(i, p.rect);
+  }
+  const index = withMovedRects(before.index, moved) ?? buildSpatialIndex(placed.map((p) => p.rect));
+  const result: PlacedDesign = { placed, index, positionOf: before.positionOf };
+  cache.set(next, result);
+  return result;
+}
+
+function placeOne(design: Design, block: Block): PlacedBlock {
+  if (block.type !== 'mat') return { block, rect: block };
+  const cell = design.cells.find((c) => c.id === block.cellId);
+  if (!cell) throw new Error(`mat "${block.id}" uses unknown cell "${block.cellId}"`);
+  const geometry = matGeometry(block, cell, design.process.featureSize);
+  return { block, rect: matRect(block, geometry), cell, geometry };
 }
 
 /** The topmost block under a point (m): the last one in drawing order, or null. */

@@ -21,3 +21,37 @@ export function buildSpatialIndex(rects: readonly Rect[]): SpatialIndex {
       index.search(rect.x - margin, rect.y - margin, right(rect) + margin, bottom(rect) + margin),
   };
 }
+
+/** Most moved rectangles an index carries over its R-tree before it is built again. */
+const MOST_MOVED = 256;
+
+/** An R-tree with some of its rectangles moved since it was built: queries skip their old boxes. */
+class MovedIndex implements SpatialIndex {
+  constructor(
+    readonly base: SpatialIndex,
+    readonly moved: ReadonlyMap<number, Rect>,
+  ) {}
+
+  near(rect: Rect, margin: number): number[] {
+    const hits = this.base.near(rect, margin).filter((i) => !this.moved.has(i));
+    const x0 = rect.x - margin;
+    const y0 = rect.y - margin;
+    const x1 = right(rect) + margin;
+    const y1 = bottom(rect) + margin;
+    for (const [i, r] of this.moved)
+      if (r.x <= x1 && right(r) >= x0 && r.y <= y1 && bottom(r) >= y0) hits.push(i);
+    return hits;
+  }
+}
+
+/**
+ * The index after the rectangles at some positions changed (an edit of a few blocks): the R-tree is
+ * kept and the changed rectangles are searched beside it, so an edit on a whole die updates the index
+ * instead of building it again. Null once too many rectangles have moved: then build a new one.
+ */
+export function withMovedRects(index: SpatialIndex, changed: ReadonlyMap<number, Rect>): SpatialIndex | null {
+  const base = index instanceof MovedIndex ? index.base : index;
+  const moved = new Map(index instanceof MovedIndex ? index.moved : []);
+  for (const [i, r] of changed) moved.set(i, r);
+  return moved.size > MOST_MOVED ? null : new MovedIndex(base, moved);
+}

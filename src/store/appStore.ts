@@ -1,9 +1,10 @@
 import { create } from 'zustand';
 import type { Command } from '../commands/command';
-import { evaluate, type Report } from '../engine';
+import { editReport, evaluate, type Report } from '../engine';
 import { editProblems } from '../io/editCheck';
 import type { Design } from '../model/design';
 import { demoDesign } from '../model/demoDesign';
+import { blocksEditedInPlace } from '../model/designEdit';
 import { pushHistory, redoHistory, startHistory, undoHistory, type History } from './history';
 
 /** Camera over the floorplan: screen px = world µm × scale + offset. Session state, never undone. */
@@ -45,7 +46,34 @@ export interface Notice {
   readonly text: string;
 }
 
-const documentState = (history: History<Design>) => ({ history, report: evaluate(history.present) });
+/** Most blocks an edit may change and still be evaluated incrementally (more: evaluate it whole). */
+const INCREMENTAL_EDIT_LIMIT = 64;
+
+/**
+ * Reports of the documents seen, so undo and redo reuse them. Documents are immutable, so a report
+ * stays right for as long as its document lives (in the history).
+ */
+const reports = new WeakMap<Design, Report>();
+
+/**
+ * The document state after a change from `from` to the new present. An edit of a few blocks in place
+ * (a move, new cell counts) is evaluated through the live preview's incremental path; anything else is
+ * evaluated whole. A document seen before takes its report from the cache.
+ */
+function documentState(history: History<Design>, from?: { design: Design; report: Report }) {
+  const design = history.present;
+  const changed = from ? blocksEditedInPlace(from.design, design, INCREMENTAL_EDIT_LIMIT) : null;
+  let report = reports.get(design);
+  if (!report) {
+    report =
+      from && changed && changed.length > 0
+        ? editReport(from.design, from.report, design, changed)
+        : evaluate(design);
+    reports.set(design, report);
+  }
+  // Same ids in the same places: the selection still names blocks that exist.
+  return { history, report, sameIds: changed !== null };
+}
 
 /** Keeps only ids that still name a block after a document change. */
 function liveSelection(design: Design, ids: readonly string[]): readonly string[] {
@@ -55,9 +83,25 @@ function liveSelection(design: Design, ids: readonly string[]): readonly string[
   return kept.length === ids.length ? ids : kept;
 }
 
+function withoutFlag<T extends { sameIds: boolean }>(state: T): Omit<T, 'sameIds'> {
+  const { sameIds, ...rest } = state;
+  void sameIds;
+  return rest;
+}
+
+/** The new document state and the selection that still applies, from the state before. */
+function moveTo(history: History<Design>, before: AppState) {
+  const { sameIds, ...state } = documentState(history, {
+    design: before.history.present,
+    report: before.report,
+  });
+  const selectedIds = sameIds ? before.selectedIds : liveSelection(history.present, before.selectedIds);
+  return { ...state, selectedIds };
+}
+
 export function createAppStore(initial: Design = demoDesign()) {
   return create<AppState>()((set, get) => ({
-    ...documentState(startHistory(initial)),
+    ...withoutFlag(documentState(startHistory(initial))),
     selectedIds: [],
     viewport: { scale: 3, offsetX: 20, offsetY: 20 },
     lastError: null,
@@ -65,7 +109,7 @@ export function createAppStore(initial: Design = demoDesign()) {
     notice: null,
 
     execute(command, args) {
-      const { history, selectedIds } = get();
+      const { history } = get();
       const result = command.run(history.present, args);
       if (!result.ok) {
         set({ lastError: result.error });
@@ -81,22 +125,18 @@ export function createAppStore(initial: Design = demoDesign()) {
         set({ lastError: `${command.label} was refused: ${problems.slice(0, 3).join('; ')}` });
         return false;
       }
-      set({
-        ...documentState(pushHistory(history, result.design)),
-        selectedIds: liveSelection(result.design, selectedIds),
-        lastError: null,
-      });
+      set({ ...moveTo(pushHistory(history, result.design), get()), lastError: null });
       return true;
     },
     undo() {
       const history = undoHistory(get().history);
       if (history === get().history) return;
-      set({ ...documentState(history), selectedIds: liveSelection(history.present, get().selectedIds) });
+      set(moveTo(history, get()));
     },
     redo() {
       const history = redoHistory(get().history);
       if (history === get().history) return;
-      set({ ...documentState(history), selectedIds: liveSelection(history.present, get().selectedIds) });
+      set(moveTo(history, get()));
     },
     select(ids) {
       set({ selectedIds: ids });
@@ -109,7 +149,7 @@ export function createAppStore(initial: Design = demoDesign()) {
     },
     replaceDesign(design) {
       set({
-        ...documentState(pushHistory(get().history, design)),
+        ...withoutFlag(documentState(pushHistory(get().history, design))),
         selectedIds: [],
         lastError: null,
         fitRequest: get().fitRequest + 1,

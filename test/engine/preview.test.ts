@@ -1,36 +1,10 @@
-import { allMats } from '../../src/engine/evaluation/matTable';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { evaluate, preparePreview, previewReport, type Report } from '../../src/engine';
-import { senseAmpStripIdsOf, wordlineDriverIdsOf } from '../../src/engine/evaluation/matTable';
+import { evaluate, preparePreview, previewReport } from '../../src/engine';
 import type { Block } from '../../src/model/block';
 import { demoDesign } from '../../src/model/demoDesign';
 import type { Design } from '../../src/model/design';
-
-/** Findings compared as a set: the preview may list them in another order. */
-function findingKeys(report: Report): string[] {
-  return report.findings.map((f) => `${f.kind}|${f.blockIds.join(',')}|${f.message}`).sort();
-}
-
-/** Mat reports with their serving strips, each list sorted. */
-function normalisedMats(report: Report) {
-  return allMats(report.mats).map((m, k) => ({
-    ...m,
-    senseAmpStripIds: senseAmpStripIdsOf(report.mats, k).sort(),
-    wordlineDriverIds: wordlineDriverIdsOf(report.mats, k).sort(),
-  }));
-}
-
-function expectSameReport(preview: Report, full: Report) {
-  expect(normalisedMats(preview)).toEqual(normalisedMats(full));
-  expect(findingKeys(preview)).toEqual(findingKeys(full));
-  for (const [key, value] of Object.entries(full.totals)) {
-    const got = preview.totals[key as keyof typeof full.totals];
-    if (typeof value === 'number') expect(got as number).toBeCloseTo(value, 20);
-    else if (typeof value === 'object' && value !== null) expect(got).toEqual(value);
-    else expect(got).toBe(value);
-  }
-}
+import { expectSameReport } from '../support/sameReport';
 
 function withChanges(design: Design, changed: readonly Block[]): Design {
   const byId = new Map(changed.map((b) => [b.id, b]));

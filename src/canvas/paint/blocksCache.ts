@@ -1,6 +1,16 @@
+import { placedDesign } from '../../geometry/placedIndex';
+import type { Rect } from '../../geometry/rect';
 import type { Design } from '../../model/design';
+import { blocksEditedInPlace } from '../../model/designEdit';
 import { paintBlockShapes, paintMarkers } from './paintBlocks';
-import type { Scene } from './scene';
+import { pxPerMetre, type Scene } from './scene';
+
+/** Most blocks an edit may change for the bitmaps to be repainted around them only. */
+const MOST_REPAINTED_BLOCKS = 64;
+/** Margin around a changed block that is repainted (px): markers and outlines reach this far out. */
+const REPAINT_MARGIN_PX = 6;
+/** Past this share of the bitmap, a repaint in place costs as much as painting all of it. */
+const MOST_REPAINTED_SHARE = 0.5;
 
 interface CacheKey {
   readonly design: Design;
@@ -54,17 +64,19 @@ export class BlocksCache {
     };
     let dx = scene.viewport.offsetX - this.originX;
     let dy = scene.viewport.offsetY - this.originY;
-    if (
-      !this.canvas ||
-      !sameKey(this.key, key) ||
-      Math.abs(dx) > this.marginX ||
-      Math.abs(dy) > this.marginY
-    ) {
+    const pannedOut = Math.abs(dx) > this.marginX || Math.abs(dy) > this.marginY;
+    if (!this.canvas || pannedOut || !sameKey(this.key, key)) {
+      if (!pannedOut && this.repaintEdited(scene, key)) return this.show(ctx, scene, key, dx, dy);
       this.render(scene, key);
       this.markersPainted = null;
       dx = 0;
       dy = 0;
     }
+    this.show(ctx, scene, key, dx, dy);
+  }
+
+  private show(ctx: CanvasRenderingContext2D, scene: Scene, key: CacheKey, dx: number, dy: number): void {
+    const ratio = key.ratio;
     if (this.markersPainted !== scene.markers) this.renderMarkers(scene, key);
     for (const canvas of [this.canvas, this.markerCanvas]) {
       if (canvas && canvas.width > 0 && canvas.height > 0) {
@@ -77,6 +89,72 @@ export class BlocksCache {
         );
       }
     }
+  }
+
+  /**
+   * After an edit of a few blocks in place (or when the blocks a gesture hides change), repaints the
+   * bitmaps only around the old and new places of those blocks. False when that does not apply (zoom
+   * or size changed, another kind of change, too many blocks): then everything is painted again.
+   */
+  private repaintEdited(scene: Scene, key: CacheKey): boolean {
+    const was = this.key;
+    const canvas = this.canvas;
+    if (!was || !canvas || was.scale !== key.scale || was.width !== key.width) return false;
+    if (was.height !== key.height || was.ratio !== key.ratio) return false;
+    const changed =
+      was.design === key.design ? [] : blocksEditedInPlace(was.design, key.design, MOST_REPAINTED_BLOCKS);
+    if (!changed) return false;
+    const before = placedDesign(was.design);
+    const after = placedDesign(key.design);
+    const positions = new Set(changed);
+    if (was.hidden !== key.hidden) {
+      for (const id of [...was.hidden, ...key.hidden]) {
+        const i = after.positionOf.get(id);
+        if (i !== undefined) positions.add(i);
+      }
+    }
+    if (positions.size > MOST_REPAINTED_BLOCKS) return false;
+    const k = pxPerMetre(scene.viewport);
+    const left = this.originX + this.marginX;
+    const top = this.originY + this.marginY;
+    let x0 = Infinity;
+    let y0 = Infinity;
+    let x1 = -Infinity;
+    let y1 = -Infinity;
+    const include = (r: Rect | undefined) => {
+      if (!r) return;
+      x0 = Math.min(x0, r.x * k + left);
+      y0 = Math.min(y0, r.y * k + top);
+      x1 = Math.max(x1, (r.x + r.width) * k + left);
+      y1 = Math.max(y1, (r.y + r.height) * k + top);
+    };
+    for (const i of positions) {
+      include(before.placed[i]?.rect);
+      include(after.placed[i]?.rect);
+    }
+    const width = scene.width + 2 * this.marginX;
+    const height = scene.height + 2 * this.marginY;
+    const region = {
+      x: Math.max(0, Math.floor(x0) - REPAINT_MARGIN_PX),
+      y: Math.max(0, Math.floor(y0) - REPAINT_MARGIN_PX),
+      width: 0,
+      height: 0,
+    };
+    region.width = Math.min(width, Math.ceil(x1) + REPAINT_MARGIN_PX) - region.x;
+    region.height = Math.min(height, Math.ceil(y1) + REPAINT_MARGIN_PX) - region.y;
+    this.key = key;
+    if (region.width <= 0 || region.height <= 0) return true;
+    if (region.width * region.height > MOST_REPAINTED_SHARE * width * height) return false;
+    const inRegion: Scene = {
+      ...scene,
+      viewport: { scale: scene.viewport.scale, offsetX: left - region.x, offsetY: top - region.y },
+      width: region.width,
+      height: region.height,
+    };
+    repaintRegion(canvas, key.ratio, region, (ctx) => paintBlockShapes(ctx, inRegion));
+    if (this.markerCanvas && this.markersPainted === scene.markers)
+      repaintRegion(this.markerCanvas, key.ratio, region, (ctx) => paintMarkers(ctx, inRegion));
+    return true;
   }
 
   /** The markers on their own bitmap, with the same size and origin as the blocks' one. */
@@ -129,4 +207,24 @@ export class BlocksCache {
     this.originX = v.offsetX;
     this.originY = v.offsetY;
   }
+}
+
+/** Clears one region of a bitmap (px) and paints it again, with the origin moved to the region's corner. */
+function repaintRegion(
+  canvas: HTMLCanvasElement,
+  ratio: number,
+  region: Rect,
+  paint: (ctx: CanvasRenderingContext2D) => void,
+): void {
+  const ctx = canvas.getContext('2d');
+  if (!ctx) return;
+  ctx.save();
+  ctx.setTransform(ratio, 0, 0, ratio, 0, 0);
+  ctx.beginPath();
+  ctx.rect(region.x, region.y, region.width, region.height);
+  ctx.clip();
+  ctx.clearRect(region.x, region.y, region.width, region.height);
+  ctx.translate(region.x, region.y);
+  paint(ctx);
+  ctx.restore();
 }

@@ -8,7 +8,8 @@ import { layoutFindings } from './layoutFindings';
 import { emptyConnections, matConnections } from './connectivity';
 import { cellLeakage, matPhysics, senseAmpsOfMat, type DesignContext } from './matPhysics';
 import { offsetSigmaMultiplier } from '../physics/offset';
-import { findOverlaps, overlapAreaAt } from './overlaps';
+import { findPositionedOverlaps, overlapAreaAt } from './overlaps';
+import { rememberReportState } from './reportState';
 import type { MatFigures, MatReport, Report } from './report';
 import { matAt, matIndexOf, MatTableBuilder } from './matTable';
 import { storedHighLevel } from '../physics/storedLevel';
@@ -104,14 +105,24 @@ export function evaluate(design: Design): Report {
     k++;
   }
   const mats = builder.finish();
-  const overlaps = findOverlaps(table, neighbours);
+  const overlaps = findPositionedOverlaps(table, neighbours);
   const totals = computeTotals(table, mats, design, ctx.sigmaMultiplier, senseAmpCount);
-  return {
+  const report: Report = {
     mats,
     totals,
     storedHigh: ctx.storedHigh,
-    findings: [...collectFindings(mats, overlaps, ctx.storedHigh, design), ...layoutFindings(table, mats)],
+    findings: [
+      ...collectFindings(
+        mats,
+        overlaps.map((o) => o.overlap),
+        ctx.storedHigh,
+        design,
+      ),
+      ...layoutFindings(table, mats),
+    ],
   };
+  rememberReportState(report, { table, overlaps });
+  return report;
 }
 
 /** The report of one mat, or undefined when the id names no mat. */

@@ -10,12 +10,24 @@ export interface Overlap {
   readonly area: number;
 }
 
+/** An overlap with the design positions of its two blocks (first < second). */
+export interface PositionedOverlap {
+  readonly overlap: Overlap;
+  readonly first: number;
+  readonly second: number;
+}
+
 /**
  * Every overlapping pair once, in design order of the first and then the second block, from the blocks'
  * neighbour rows (abutting neighbours share no area and are skipped).
  */
 export function findOverlaps(table: BlockTable, neighbours: NeighbourTable): Overlap[] {
-  const overlaps: Overlap[] = [];
+  return findPositionedOverlaps(table, neighbours).map((o) => o.overlap);
+}
+
+/** {@link findOverlaps} with the design positions of each pair, so a later edit can update the list. */
+export function findPositionedOverlaps(table: BlockTable, neighbours: NeighbourTable): PositionedOverlap[] {
+  const overlaps: PositionedOverlap[] = [];
   const { start, end, list } = neighbours;
   for (let i = 0; i < table.count; i++) {
     // Rows are ascending, so pairs come out in design order.
@@ -24,7 +36,11 @@ export function findOverlaps(table: BlockTable, neighbours: NeighbourTable): Ove
       if (j <= i) continue;
       const area = overlapAreaAt(table, i, j);
       if (area > 0)
-        overlaps.push({ firstId: table.blocks[i]?.id ?? '', secondId: table.blocks[j]?.id ?? '', area });
+        overlaps.push({
+          overlap: { firstId: table.blocks[i]?.id ?? '', secondId: table.blocks[j]?.id ?? '', area },
+          first: i,
+          second: j,
+        });
     }
   }
   return overlaps;

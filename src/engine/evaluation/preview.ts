@@ -8,7 +8,8 @@ import type { Design } from '../../model/design';
 import { collectFindings } from './checks';
 import { layoutFindings } from './layoutFindings';
 import { countSenseAmps, designContext, evaluate, evaluateMatAt, evaluationNeighbours } from './evaluate';
-import { findOverlaps, overlapAreaAt, type Overlap } from './overlaps';
+import { findPositionedOverlaps, overlapAreaAt, type PositionedOverlap } from './overlaps';
+import { rememberReportState, reportState } from './reportState';
 import type { Report } from './report';
 import { MatTableBuilder, type MatTable } from './matTable';
 import { computeTotals } from './totals';
@@ -38,16 +39,13 @@ export interface PreviewBase {
   readonly staticOverlaps: readonly PositionedOverlap[];
 }
 
-/** An overlap with the design positions of its two blocks, for sorting into design order. */
-interface PositionedOverlap {
-  readonly overlap: Overlap;
-  readonly first: number;
-  readonly second: number;
-}
-
 export function preparePreview(design: Design, report: Report, changingIds: Iterable<string>): PreviewBase {
   const { index, positionOf } = placedDesign(design);
-  const table = blockTable(design);
+  // The table and overlaps evaluate() (or the previous edit) left with the report, when it is this design's.
+  const known = reportState(report);
+  const state = known && known.table.count === design.blocks.length ? known : undefined;
+  const table = state?.table ?? blockTable(design);
+  const overlaps = state?.overlaps ?? findPositionedOverlaps(table, evaluationNeighbours(table));
   const changing = new Set(changingIds);
   const changingPositions = new Set<number>();
   for (const id of changing) {
@@ -63,13 +61,9 @@ export function preparePreview(design: Design, report: Report, changingIds: Iter
     positionOf,
     changingPositions,
     matIndexAt: matIndexByPosition(report.mats, table.count),
-    staticOverlaps: findOverlaps(table, evaluationNeighbours(table))
-      .filter((o) => !changing.has(o.firstId) && !changing.has(o.secondId))
-      .map((overlap) => ({
-        overlap,
-        first: positionOf.get(overlap.firstId) ?? 0,
-        second: positionOf.get(overlap.secondId) ?? 0,
-      })),
+    staticOverlaps: overlaps.filter(
+      (o) => !changingPositions.has(o.first) && !changingPositions.has(o.second),
+    ),
   };
 }
 
@@ -199,5 +193,7 @@ export function previewReport(base: PreviewBase, changed: readonly Block[]): Rep
     ),
     ...layoutFindings(current, mats),
   ];
-  return { mats, totals, storedHigh: report.storedHigh, findings };
+  const result: Report = { mats, totals, storedHigh: report.storedHigh, findings };
+  rememberReportState(result, { table: current, overlaps });
+  return result;
 }

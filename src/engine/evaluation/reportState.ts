@@ -1,0 +1,23 @@
+import type { BlockTable } from '../../geometry/blockTable';
+import type { PositionedOverlap } from './overlaps';
+import type { Report } from './report';
+
+/**
+ * What evaluating a design left behind besides its report: the laid-out block table and the overlapping
+ * pairs with their positions. An edit of a few blocks starts from these (see editReport.ts) instead of
+ * laying out and pairing the whole design again. Kept beside the report, for as long as it lives.
+ */
+export interface ReportState {
+  readonly table: BlockTable;
+  readonly overlaps: readonly PositionedOverlap[];
+}
+
+const states = new WeakMap<Report, ReportState>();
+
+export function rememberReportState(report: Report, state: ReportState): void {
+  states.set(report, state);
+}
+
+export function reportState(report: Report): ReportState | undefined {
+  return states.get(report);
+}
