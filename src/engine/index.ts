@@ -60,8 +60,12 @@ export { preparePreview, previewReport, type PreviewBase } from './evaluation/pr
 export { editReport } from './evaluation/editReport';
 export {
   computeYieldFigures,
+  matDomainShare,
   repairSettingsOf,
+  repeatedShare,
   yieldFiguresOf,
+  yieldOfDomains,
+  type DomainSum,
   type YieldFigures,
 } from './evaluation/yieldFigures';
 export {

@@ -12,13 +12,19 @@ import {
   rowsPerRefreshCommand,
   senseAmpsOfMat,
   storedHighLevel,
+  matDomainShare,
+  repeatedShare,
+  yieldOfDomains,
   type DesignContext,
+  type DomainSum,
   type PartitionFigures,
+  type MatFigures,
   type StoredHighLevel,
 } from '../engine';
 import { matGeometry, matRect } from '../geometry/matGeometry';
 import type { PlacedMat } from '../geometry/placedBlocks';
 import type { Mat } from '../model/block';
+import { DEFAULT_REPAIR } from '../model/builtins';
 import type { OperatingConditions } from '../model/operating';
 import type { ProcessProfile } from '../model/process';
 
@@ -66,6 +72,7 @@ const SENSE_AMP_ENDS = 2;
 export function partitionFigures(
   spec: PartitionPointSpec,
   cache: ProcessCache = new ProcessCache(),
+  options: YieldOptions = {},
 ): PartitionFiguresResult {
   const { process, operating, cell } = spec;
   const planned = planPartition({
@@ -125,6 +132,8 @@ export function partitionFigures(
   if (!(spec.strips.columnDecoderHeight > 0)) warningKinds.push('noColumnDecoder');
   warningKinds.sort();
 
+  const y = bankYield(spec, plan, mat, options);
+
   return {
     ok: true,
     plan,
@@ -153,8 +162,55 @@ export function partitionFigures(
         plan.matCount * mat.activationEnergy.total * mat.wordlineCount,
         operating.refreshWindow,
       ),
+      dieYield: y?.dieYield ?? Number.NaN,
+      repairProbability: y?.repairProbability ?? Number.NaN,
+      redundancyArea: y?.redundancyArea ?? Number.NaN,
+      areaPerBitWithRedundancy: y?.areaPerBitWithRedundancy ?? Number.NaN,
+      goodDiesPerWafer: y?.goodDiesPerWafer ?? Number.NaN,
+      spareRows: y?.settings.spareRows ?? Number.NaN,
+      spareColumns: y?.settings.spareColumns ?? Number.NaN,
       errorKinds,
       warningKinds,
     },
   };
+}
+
+/** Whether and with which spares a point's yield is assessed (about a millisecond a point). */
+export interface YieldOptions {
+  /** false leaves the yield figures NaN (a sweep that does not plot them stays fast). */
+  readonly withYield?: boolean;
+  readonly spareRows?: number;
+  readonly spareColumns?: number;
+}
+
+/**
+ * The bank's yield figures from its representative mat: the repair domains are the mats, the mat rows
+ * (matColumns mats each) or the whole bank, and the sense-amplifier strips are matRows + 1 rows of
+ * strips the width of the mats (as gridFloorplan lays them).
+ */
+function bankYield(spec: PartitionPointSpec, plan: PartitionPlan, mat: MatFigures, options: YieldOptions) {
+  if (options.withYield === false) return null;
+  const base = spec.operating.repair ?? DEFAULT_REPAIR;
+  const settings = {
+    ...base,
+    spareRows: options.spareRows ?? base.spareRows,
+    spareColumns: options.spareColumns ?? base.spareColumns,
+  };
+  const share = matDomainShare(mat, settings, spec.operating.refreshWindow);
+  let domains: DomainSum[];
+  if (settings.repairDomain === 'mat') domains = Array.from({ length: plan.matCount }, () => share);
+  else if (settings.repairDomain === 'matRow')
+    domains = Array.from({ length: plan.matRows }, () => repeatedShare(share, plan.matColumns));
+  else domains = [repeatedShare(share, plan.matCount)];
+  const stripArea = (plan.matRows + 1) * plan.matColumns * plan.matWidth * spec.strips.senseAmpStripHeight;
+  const matArea = plan.matCount * plan.matWidth * plan.matHeight;
+  return yieldOfDomains({
+    domains,
+    mats: [mat],
+    settings,
+    refreshWindow: spec.operating.refreshWindow,
+    floorplanArea: plan.width * plan.height,
+    usableBits: plan.usableBits,
+    stripShare: matArea > 0 ? stripArea / matArea : 0,
+  });
 }

@@ -4,6 +4,7 @@ import type { CellDefinition } from '../model/cell';
 import type { OperatingConditions } from '../model/operating';
 import type { ProcessProfile } from '../model/process';
 import type { PartitionFigures } from '../engine';
+import { DEFAULT_REPAIR } from '../model/builtins';
 import { partitionFigures, ProcessCache } from './partitionFigures';
 
 /**
@@ -18,6 +19,11 @@ export interface SweepRequest {
   readonly cellsPerWordline: readonly number[];
   readonly cells: readonly CellDefinition[];
   readonly processes: readonly ProcessProfile[];
+  /**
+   * Spare rows and columns per repair domain to sweep; each partition is assessed with every pair and
+   * the yield figures are computed (about a millisecond a point). Absent: no yield figures (NaN).
+   */
+  readonly spares?: { readonly rows: readonly number[]; readonly columns: readonly number[] };
 }
 
 /** One assessed combination. Indices point into the request's lists. */
@@ -29,6 +35,9 @@ export interface SweepPoint {
   readonly processIndex: number;
   readonly matRows: number;
   readonly matColumns: number;
+  /** The spares this point assumes, or null when the sweep does not assess yield. */
+  readonly spareRows: number | null;
+  readonly spareColumns: number | null;
   /** Null when no bank could be planned (see `problem`). */
   readonly figures: PartitionFigures | null;
   readonly problem: string | null;
@@ -37,7 +46,8 @@ export interface SweepPoint {
 /** Most points one sweep may have; a sweep holds every point in memory. */
 export const MAX_SWEEP_POINTS = 100_000;
 
-export function sweepSize(request: SweepRequest): number {
+/** Partitions of a sweep (every combination but the spares). */
+function partitionCount(request: SweepRequest): number {
   return (
     request.cellsPerBitline.length *
     request.cellsPerWordline.length *
@@ -46,7 +56,15 @@ export function sweepSize(request: SweepRequest): number {
   );
 }
 
-/** Which values point `index` combines: cells per word line vary fastest, the process slowest. */
+export function sweepSize(request: SweepRequest): number {
+  const spares = request.spares ? request.spares.rows.length * request.spares.columns.length : 1;
+  return partitionCount(request) * spares;
+}
+
+/**
+ * Which values point `index` combines: cells per word line vary fastest, then cells per bit line, cell,
+ * process, spare columns and spare rows (slowest).
+ */
 export function sweepCoordinates(request: SweepRequest, index: number) {
   const nWl = request.cellsPerWordline.length;
   const nBl = request.cellsPerBitline.length;
@@ -54,12 +72,18 @@ export function sweepCoordinates(request: SweepRequest, index: number) {
   const wl = index % nWl;
   const bl = Math.floor(index / nWl) % nBl;
   const cellIndex = Math.floor(index / (nWl * nBl)) % nCell;
-  const processIndex = Math.floor(index / (nWl * nBl * nCell));
+  const nProcess = request.processes.length;
+  const processIndex = Math.floor(index / (nWl * nBl * nCell)) % Math.max(1, nProcess);
+  const spareIndex = Math.floor(index / Math.max(1, partitionCount(request)));
+  const spares = request.spares;
+  const nColumns = spares ? Math.max(1, spares.columns.length) : 1;
   return {
     cellsPerBitline: request.cellsPerBitline[bl] ?? Number.NaN,
     cellsPerWordline: request.cellsPerWordline[wl] ?? Number.NaN,
     cellIndex,
     processIndex,
+    spareRows: spares ? (spares.rows[Math.floor(spareIndex / nColumns)] ?? null) : null,
+    spareColumns: spares ? (spares.columns[spareIndex % nColumns] ?? null) : null,
   };
 }
 
@@ -68,11 +92,18 @@ export function pointBuildSpec(request: SweepRequest, point: SweepPoint): Omit<B
   const cell = request.cells[point.cellIndex];
   const process = request.processes[point.processIndex];
   if (!cell || !process) throw new Error(`point ${point.index} is outside the sweep`);
+  const repair = request.operating.repair ?? DEFAULT_REPAIR;
   return {
     targetBits: request.targetBits,
     cell,
     process,
-    operating: request.operating,
+    operating:
+      point.spareRows === null || point.spareColumns === null
+        ? request.operating
+        : {
+            ...request.operating,
+            repair: { ...repair, spareRows: point.spareRows, spareColumns: point.spareColumns },
+          },
     cellsPerBitline: point.cellsPerBitline,
     cellsPerWordline: point.cellsPerWordline,
     strips: request.strips,
@@ -104,6 +135,11 @@ export function runSweepRange(
         strips: request.strips,
       },
       cache,
+      {
+        withYield: c.spareRows !== null && c.spareColumns !== null,
+        spareRows: c.spareRows ?? undefined,
+        spareColumns: c.spareColumns ?? undefined,
+      },
     );
     points.push({
       index,

@@ -21,7 +21,15 @@ export interface SweepSettings {
   readonly cellIds: readonly string[];
   /** Process choices to sweep: {@link DESIGN_PROCESS} for the active design's own, or a built-in id. */
   readonly processIds: readonly string[];
+  /** Spare rows and columns per repair domain to sweep (yield figures), or null to leave yield out. */
+  readonly spares: { readonly rows: CountRange; readonly columns: CountRange } | null;
 }
+
+/** Spares swept when someone turns the spare sweep on. */
+export const DEFAULT_SPARE_SWEEP = {
+  rows: { from: 0, to: 4, step: 1 },
+  columns: { from: 0, to: 4, step: 1 },
+};
 
 /** The process choice that means "the active design's process, as edited". */
 export const DESIGN_PROCESS = 'design';
@@ -45,6 +53,7 @@ export function defaultSweepSettings(design: Design): SweepSettings {
     cellsPerWordline: { from: 128, to: 2048, step: 128 },
     cellIds: design.cells.map((c) => c.id),
     processIds: processChoices(design).map((c) => c.id),
+    spares: null,
   };
 }
 
@@ -77,5 +86,13 @@ export function sweepRequestFor(settings: SweepSettings, design: Design): SweepR
     cellsPerWordline: rangeValues(settings.cellsPerWordline),
     cells: design.cells.filter((c) => settings.cellIds.includes(c.id)),
     processes,
+    ...(settings.spares
+      ? { spares: { rows: spareValues(settings.spares.rows), columns: spareValues(settings.spares.columns) } }
+      : {}),
   };
+}
+
+/** Spare counts of a range (0 allowed, unlike cell counts). */
+export function spareValues(range: CountRange): number[] {
+  return steppedValues(range.from, range.to, range.step);
 }

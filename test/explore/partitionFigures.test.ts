@@ -36,6 +36,11 @@ const NUMERIC: readonly FigureKey[] = [
   'refreshInterval',
   'refreshBusyFraction',
   'refreshPower',
+  'dieYield',
+  'repairProbability',
+  'redundancyArea',
+  'areaPerBitWithRedundancy',
+  'goodDiesPerWafer',
 ];
 
 const specArbitrary = fc
@@ -92,7 +97,7 @@ describe('fast partition figures agree with evaluate() on the built design', () 
         const built = buildPartition(spec);
         expect(fast.ok).toBe(built.ok);
         if (!fast.ok || !built.ok) return;
-        const slow = figuresFromReport(evaluate(built.design));
+        const slow = figuresFromReport(evaluate(built.design), built.design);
         for (const key of NUMERIC) expectRelativelyClose(fast.figures[key], slow[key], 1e-9, key);
         expect(fast.figures.errorKinds).toEqual(slow.errorKinds);
         expect(fast.figures.warningKinds).toEqual(slow.warningKinds);
@@ -119,7 +124,7 @@ describe('fast partition figures agree with evaluate() on the built design', () 
     const fast = partitionFigures(spec);
     const built = buildPartition(spec);
     if (!fast.ok || !built.ok) throw new Error('expected a plan');
-    const slow = figuresFromReport(evaluate(built.design));
+    const slow = figuresFromReport(evaluate(built.design), built.design);
     expect(Number.isFinite(fast.figures.retentionTime)).toBe(true);
     for (const key of NUMERIC) expectRelativelyClose(fast.figures[key], slow[key], 1e-9, key);
     expect(fast.figures.errorKinds).toEqual(slow.errorKinds);
@@ -144,7 +149,7 @@ describe('fast partition figures agree with evaluate() on the built design', () 
     const fast = partitionFigures(spec);
     const built = buildPartition(spec);
     if (!fast.ok || !built.ok) throw new Error('expected a plan');
-    const slow = figuresFromReport(evaluate(built.design));
+    const slow = figuresFromReport(evaluate(built.design), built.design);
     for (const key of NUMERIC) expectRelativelyClose(fast.figures[key], slow[key], 1e-9, key);
     expect(fast.figures.errorKinds).toEqual([]);
   });

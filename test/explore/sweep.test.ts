@@ -43,7 +43,8 @@ describe('sweep core', () => {
   it('gives each point the figures of its own partition, or says why it has none', () => {
     const points = runSweepRange(request, 0, sweepSize(request));
     for (const p of points.filter((_, i) => i % 17 === 0)) {
-      const direct = partitionFigures(pointBuildSpec(request, p));
+      // A sweep without spares leaves the yield figures out (NaN), and so does this direct call.
+      const direct = partitionFigures(pointBuildSpec(request, p), undefined, { withYield: false });
       expect(direct.ok ? direct.figures : null).toEqual(p.figures);
     }
     // 8 cells per word line make mats so small that 32 Mib needs too many of them.
@@ -57,12 +58,16 @@ describe('sweep core', () => {
       cellsPerWordline: 8,
       cellIndex: 0,
       processIndex: 0,
+      spareRows: null,
+      spareColumns: null,
     });
     expect(sweepCoordinates(request, 1)).toEqual({
       cellsPerBitline: 64,
       cellsPerWordline: 256,
       cellIndex: 0,
       processIndex: 0,
+      spareRows: null,
+      spareColumns: null,
     });
     expect(sweepCoordinates(request, 3).cellsPerBitline).toBe(128);
     expect(sweepCoordinates(request, 12).cellIndex).toBe(1);
@@ -74,5 +79,45 @@ describe('sweep core', () => {
     expect(steppedValues(100, 120, 7)).toEqual([100, 107, 114]);
     expect(steppedValues(5, 1, 1)).toEqual([]);
     expect(steppedValues(1, 5, 0)).toEqual([]);
+  });
+});
+
+describe('sweeping spares', () => {
+  const withSpares: SweepRequest = {
+    ...request,
+    cellsPerBitline: [512],
+    cellsPerWordline: [512],
+    cells: request.cells.slice(0, 1),
+    processes: request.processes.slice(0, 1),
+    spares: { rows: [0, 1, 2], columns: [0, 2] },
+  };
+
+  it('assesses every partition with every spare pair, spare rows slowest; each point as built alone', () => {
+    expect(sweepSize(withSpares)).toBe(6);
+    const points = runSweepRange(withSpares, 0, 6);
+    expect(points.map((p) => [p.spareRows, p.spareColumns])).toEqual([
+      [0, 0],
+      [0, 2],
+      [1, 0],
+      [1, 2],
+      [2, 0],
+      [2, 2],
+    ]);
+    expect(points.every((p) => p.figures && Number.isFinite(p.figures.dieYield))).toBe(true);
+    for (const p of points) {
+      const direct = partitionFigures(pointBuildSpec(withSpares, p));
+      expect(direct.ok ? direct.figures : null).toEqual(p.figures);
+    }
+  });
+
+  it('more spares: repair probability never falls and redundancy area grows; no spare sweep leaves yield out', () => {
+    const points = runSweepRange(withSpares, 0, 6);
+    const at = (r: number, c: number) =>
+      points.find((p) => p.spareRows === r && p.spareColumns === c)?.figures;
+    expect(at(2, 2)?.repairProbability ?? 0).toBeGreaterThanOrEqual(at(0, 0)?.repairProbability ?? 1);
+    expect(at(2, 2)?.redundancyArea ?? 0).toBeGreaterThan(at(0, 0)?.redundancyArea ?? Infinity);
+    const plain = runSweepRange({ ...withSpares, spares: undefined }, 0, 1)[0];
+    expect(plain?.spareRows).toBeNull();
+    expect(Number.isNaN(plain?.figures?.dieYield)).toBe(true);
   });
 });

@@ -15,7 +15,7 @@ import { redundancyArea } from '../physics/redundancyArea';
 import type { MonteCarloDomainClass, RepairMonteCarloRequest } from '../physics/repairMonteCarlo';
 import { goodDiesPerWafer, grossDiesPerWafer } from '../physics/yield';
 import { figuresAt, type MatTable } from './matTable';
-import type { Report } from './report';
+import type { MatFigures, Report } from './report';
 
 /** The yield figures of a design on its die (SI; counts per die unless named otherwise). */
 export interface YieldFigures {
@@ -63,7 +63,7 @@ export function repairSettingsOf(design: Design): RepairSettings {
 }
 
 /** One repair domain of a floorplan copy, before identical domains are counted together. */
-interface DomainSum {
+export interface DomainSum {
   rows: number;
   columns: number;
   area: number;
@@ -74,17 +74,41 @@ interface DomainSum {
 /** Positions closer than this share a mat-row band (m). */
 const BAND_GRID = 1e-9;
 
+/** One mat's share of a repair domain: its lines, area and expected faults of each source. */
+export function matDomainShare(f: MatFigures, settings: RepairSettings, refreshWindow: number): DomainSum {
+  const kill = {
+    singleCell: settings.killRatioCell,
+    wordLine: settings.killRatioWordline,
+    bitLine: settings.killRatioBitline,
+  };
+  const saFailure = senseAmpFailureProbability(f.senseSignal, f.offsetSigma);
+  const weak = weakCellFraction(f.retentionTime, refreshWindow);
+  return {
+    rows: f.wordlineCount,
+    columns: f.architecture === 'folded' ? f.bitlineCount / 2 : f.bitlineCount,
+    area: f.area,
+    defects: defectFaults(f.area, settings.defectDensity, kill),
+    parametric: parametricFaults(f.senseAmpCount, saFailure, f.usableBits, weak),
+  };
+}
+
+/** A domain made of `n` copies of one mat's share. */
+export function repeatedShare(share: DomainSum, n: number): DomainSum {
+  return {
+    rows: share.rows * n,
+    columns: share.columns * n,
+    area: share.area * n,
+    defects: scale(share.defects, n),
+    parametric: scale(share.parametric, n),
+  };
+}
+
 /**
  * The repair domains of one floorplan copy. A mat is one domain; a mat row groups the mats of one band
  * along the word lines (same start across them, as the refresh rows count them); the bank is every mat.
  */
 function domainsOf(mats: MatTable, design: Design, settings: RepairSettings): DomainSum[] {
   const byKey = new Map<string, DomainSum>();
-  const kill = {
-    singleCell: settings.killRatioCell,
-    wordLine: settings.killRatioWordline,
-    bitLine: settings.killRatioBitline,
-  };
   for (let k = 0; k < mats.count; k++) {
     const f = figuresAt(mats, k);
     const block = mats.blocks[mats.position[k] ?? -1];
@@ -95,20 +119,15 @@ function domainsOf(mats: MatTable, design: Design, settings: RepairSettings): Do
       const vertical = block.type === 'mat' && block.bitlineAxis === 'vertical';
       key = `${vertical ? 'v' : 'h'}${Math.round((vertical ? block.y : block.x) / BAND_GRID)}`;
     }
-    const columns = f.architecture === 'folded' ? f.bitlineCount / 2 : f.bitlineCount;
-    const saFailure = senseAmpFailureProbability(f.senseSignal, f.offsetSigma);
-    const weak = weakCellFraction(f.retentionTime, design.operating.refreshWindow);
-    const defects = defectFaults(f.area, settings.defectDensity, kill);
-    const parametric = parametricFaults(f.senseAmpCount, saFailure, f.usableBits, weak);
+    const share = matDomainShare(f, settings, design.operating.refreshWindow);
     const sum = byKey.get(key);
-    if (!sum) {
-      byKey.set(key, { rows: f.wordlineCount, columns, area: f.area, defects, parametric });
-    } else {
-      sum.rows += f.wordlineCount;
-      sum.columns += columns;
-      sum.area += f.area;
-      sum.defects = add(sum.defects, defects);
-      sum.parametric = add(sum.parametric, parametric);
+    if (!sum) byKey.set(key, { ...share });
+    else {
+      sum.rows += share.rows;
+      sum.columns += share.columns;
+      sum.area += share.area;
+      sum.defects = add(sum.defects, share.defects);
+      sum.parametric = add(sum.parametric, share.parametric);
     }
   }
   return [...byKey.values()];
@@ -154,12 +173,38 @@ function domainClasses(domains: readonly DomainSum[]): { count: number; domain: 
  */
 export function computeYieldFigures(report: Report, design: Design): YieldFigures {
   const settings = repairSettingsOf(design);
+  const areaByType = report.totals.areaByType;
+  return yieldOfDomains({
+    domains: domainsOf(report.mats, design, settings),
+    mats: report.mats.figures,
+    settings,
+    refreshWindow: design.operating.refreshWindow,
+    floorplanArea: report.totals.totalArea,
+    usableBits: report.totals.usableBits,
+    stripShare: areaByType.mat > 0 ? areaByType.senseAmpStrip / areaByType.mat : 0,
+  });
+}
+
+/** What the yield figures need of a floorplan, from a report or from the explorer's closed form. */
+export interface YieldInputs {
+  readonly domains: readonly DomainSum[];
+  /** The kinds of mat (for the worst sense-amp failure and weak-cell share). */
+  readonly mats: readonly MatFigures[];
+  readonly settings: RepairSettings;
+  readonly refreshWindow: number;
+  readonly floorplanArea: number;
+  readonly usableBits: number;
+  /** Sense-amplifier strip area over mat area. */
+  readonly stripShare: number;
+}
+
+/** The yield figures of one floorplan's repair domains on its die. */
+export function yieldOfDomains(inputs: YieldInputs): YieldFigures {
+  const { settings, stripShare } = inputs;
   const problems: string[] = [];
   const copies = settings.floorplanCopiesPerDie;
-  const domains = domainsOf(report.mats, design, settings);
+  const domains = inputs.domains;
   const classes = domainClasses(domains);
-  const areaByType = report.totals.areaByType;
-  const stripShare = areaByType.mat > 0 ? areaByType.senseAmpStrip / areaByType.mat : 0;
 
   let defectTotal = NO_FAULTS;
   let parametricTotal = NO_FAULTS;
@@ -185,12 +230,12 @@ export function computeYieldFigures(report: Report, design: Design): YieldFigure
     spareColumnArea += cost.spareColumns * count;
     fuseAndCompareArea += cost.fuseAndCompare * count;
   }
-  for (const f of report.mats.figures) {
+  for (const f of inputs.mats) {
     senseAmpFailure = Math.max(senseAmpFailure, senseAmpFailureProbability(f.senseSignal, f.offsetSigma));
-    weakCells = Math.max(weakCells, weakCellFraction(f.retentionTime, design.operating.refreshWindow));
+    weakCells = Math.max(weakCells, weakCellFraction(f.retentionTime, inputs.refreshWindow));
   }
   const redundancy = spareRowArea + spareColumnArea + fuseAndCompareArea;
-  const floorplanArea = report.totals.totalArea;
+  const floorplanArea = inputs.floorplanArea;
   const peripheryArea = settings.dieArea - copies * floorplanArea;
   if (peripheryArea < 0) {
     problems.push(
@@ -229,7 +274,7 @@ export function computeYieldFigures(report: Report, design: Design): YieldFigure
   );
   const dieAreaWithRedundancy = settings.dieArea + copies * redundancy;
   const gross = grossDiesPerWafer(settings.waferDiameter, dieAreaWithRedundancy);
-  const usableBits = report.totals.usableBits;
+  const usableBits = inputs.usableBits;
 
   const monteCarloClasses: MonteCarloDomainClass[] = classes.map(({ count, domain }) => ({
     count: count * copies,

@@ -41,6 +41,18 @@ export interface PartitionFigures {
   readonly refreshBusyFraction: number;
   /** Average refresh power (W). */
   readonly refreshPower: number;
+  /** Die yield with the repair settings (NaN when the sweep did not ask for yield). */
+  readonly dieYield: number;
+  /** Probability that every repair domain of the die is repaired. */
+  readonly repairProbability: number;
+  /** Redundancy area of the bank: spares, fuses and comparators (m²). */
+  readonly redundancyArea: number;
+  /** (bank area + redundancy) / usable bits (m²). */
+  readonly areaPerBitWithRedundancy: number;
+  readonly goodDiesPerWafer: number;
+  /** Spare rows and columns per repair domain the yield figures assume. */
+  readonly spareRows: number;
+  readonly spareColumns: number;
   /** Kinds of check that report an error, and a warning, sorted. */
   readonly errorKinds: readonly FindingKind[];
   readonly warningKinds: readonly FindingKind[];

@@ -8,6 +8,7 @@ import {
   type FigureKey,
   type PartitionFigures,
 } from './bankFigure';
+import { BANK_YIELD_FIGURES } from './bankYieldFigures';
 
 /** An entry for a figure that is counted or measured from the floorplan. */
 function countedFigure<const Key extends FigureKey>(
@@ -202,6 +203,7 @@ export const BANK_FIGURE_CATALOGUE = [
       source: SOURCES.common,
     }),
   }),
+  ...BANK_YIELD_FIGURES,
 ] as const satisfies readonly BankFigureEntry[];
 
 const BY_KEY = new Map<FigureKey, BankFigureEntry>(BANK_FIGURE_CATALOGUE.map((e) => [e.key, e]));
@@ -224,6 +226,9 @@ export const AXIS_FIGURES = [
   'areaPerBitInF2',
   'retentionTime',
   'refreshPower',
+  'dieYield',
+  'goodDiesPerWafer',
+  'areaPerBitWithRedundancy',
 ] as const satisfies readonly FigureKey[];
 export type AxisFigure = (typeof AXIS_FIGURES)[number];
 
@@ -241,6 +246,11 @@ export const TABLE_FIGURES = [
   'retentionTime',
   'refreshBusyFraction',
   'refreshPower',
+  'dieYield',
+  'repairProbability',
+  'goodDiesPerWafer',
+  'redundancyArea',
+  'areaPerBitWithRedundancy',
 ] as const satisfies readonly FigureKey[];
 
 /** Formula, inputs and source of one comparison figure, for the variants table and the explorer's point card. */

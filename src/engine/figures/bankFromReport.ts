@@ -1,6 +1,8 @@
 import { figuresAt, type MatTable } from '../evaluation/matTable';
 import { findMatReport } from '../evaluation/evaluate';
 import type { MatFigures, Report } from '../evaluation/report';
+import { yieldFiguresOf } from '../evaluation/yieldFigures';
+import type { Design } from '../../model/design';
 import type { PartitionFigures } from './bankFigure';
 
 /** The figures of the mat with the largest value of `pick` (the first such mat), or undefined without mats. */
@@ -13,8 +15,9 @@ function largest(mats: MatTable, pick: (f: MatFigures) => number): MatFigures | 
   return best;
 }
 
-/** The comparison figures of an evaluated design. */
-export function figuresFromReport(report: Report): PartitionFigures {
+/** The comparison figures of an evaluated design (the design gives the yield settings). */
+export function figuresFromReport(report: Report, design: Design): PartitionFigures {
+  const y = yieldFiguresOf(report, design);
   const t = report.totals;
   const worstMargin = findMatReport(report, t.worstSenseMarginMatId ?? '');
   const slowest = largest(report.mats, (f) => f.wordlineDelay);
@@ -43,6 +46,13 @@ export function figuresFromReport(report: Report): PartitionFigures {
     refreshInterval: t.refresh.interval,
     refreshBusyFraction: t.refresh.busyFraction,
     refreshPower: t.refresh.power,
+    dieYield: y.dieYield,
+    repairProbability: y.repairProbability,
+    redundancyArea: y.redundancyArea,
+    areaPerBitWithRedundancy: y.areaPerBitWithRedundancy,
+    goodDiesPerWafer: y.goodDiesPerWafer,
+    spareRows: y.settings.spareRows,
+    spareColumns: y.settings.spareColumns,
     errorKinds: kinds('error'),
     warningKinds: kinds('warning'),
   };

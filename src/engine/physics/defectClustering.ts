@@ -6,7 +6,7 @@
 
 /**
  * E[f(X)] for X ~ Gamma(shape α, mean 1): ∫ f(x)·α^α x^(α−1) e^(−αx)/Γ(α) dx, by adaptive Simpson
- * quadrature (absolute tolerance 1e-8) up to the point where the gamma tail holds less than 1e-16 of the
+ * quadrature (absolute tolerance 1e-7) up to the point where the gamma tail holds less than 1e-16 of the
  * mass. For α < 1 the substitution t = x^α removes the x^(α−1) singularity (x^(α−1) dx = dt/α).
  *
  * @param f a function of the density multiplier x ≥ 0 with values in [0, 1].
@@ -36,21 +36,24 @@ export function clusteredExpectation(f: (multiplier: number) => number, clusteri
 }
 
 /** Absolute tolerance of the integral (the results are probabilities, shown to 4 digits). */
-const TOLERANCE = 1e-8;
+const TOLERANCE = 1e-7;
 
-/** ∫_0^upper g by adaptive Simpson over 16 starting panels. */
+/**
+ * ∫_0^upper g by adaptive Simpson over panels that shrink geometrically towards 0 (upper/2^k), so a
+ * sharp feature near zero (a large fault count decays like e^(−λx)) is never stepped over.
+ */
 function integrate(g: (x: number) => number, upper: number): number {
-  const panels = 16;
-  const width = upper / panels;
+  const panels = 24;
   let total = 0;
+  let b = upper;
   for (let i = 0; i < panels; i++) {
-    const a = i * width;
-    const b = a + width;
+    const a = i === panels - 1 ? 0 : b / 2;
     const fa = g(a);
     const fb = g(b);
     const fm = g((a + b) / 2);
     const whole = ((b - a) / 6) * (fa + 4 * fm + fb);
     total += adaptiveSimpson(g, a, b, fa, fm, fb, whole, TOLERANCE / panels, 30);
+    b = a;
   }
   return total;
 }

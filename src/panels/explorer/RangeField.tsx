@@ -6,16 +6,27 @@ interface RangeFieldProps {
   readonly id: string;
   readonly label: string;
   readonly value: CountRange;
+  /** Smallest value "from" and "to" may take (1 for cell counts, 0 for spares); the step is at least 1. */
+  readonly min?: number;
+  /** Largest value. */
+  readonly max?: number;
   onCommit(range: CountRange): void;
 }
 
-function parseWhole(text: string): number | null {
+function parseWhole(text: string, min: number, max: number): number | null {
   const n = Number(text.trim());
-  return Number.isInteger(n) && n >= 1 && n <= MAX_CELLS_PER_LINE ? n : null;
+  return Number.isInteger(n) && n >= min && n <= max ? n : null;
 }
 
-/** From, to and step of a swept cell count: whole numbers from 1 to 16,384; commits on Enter or blur. */
-export function RangeField({ id, label, value, onCommit }: RangeFieldProps) {
+/** From, to and step of a swept count: whole numbers (1 to 16,384 unless told); commits on Enter or blur. */
+export function RangeField({
+  id,
+  label,
+  value,
+  min = 1,
+  max = MAX_CELLS_PER_LINE,
+  onCommit,
+}: RangeFieldProps) {
   const [text, setText] = useState({ from: `${value.from}`, to: `${value.to}`, step: `${value.step}` });
   const [error, setError] = useState<string | null>(null);
   useEffect(() => {
@@ -24,11 +35,11 @@ export function RangeField({ id, label, value, onCommit }: RangeFieldProps) {
   }, [value]);
 
   const commit = () => {
-    const from = parseWhole(text.from);
-    const to = parseWhole(text.to);
-    const step = parseWhole(text.step);
+    const from = parseWhole(text.from, min, max);
+    const to = parseWhole(text.to, min, max);
+    const step = parseWhole(text.step, 1, max);
     if (from === null || to === null || step === null) {
-      setError(`whole numbers from 1 to ${MAX_CELLS_PER_LINE.toLocaleString('en-US')}`);
+      setError(`whole numbers from ${min} to ${max.toLocaleString('en-US')}`);
       return;
     }
     if (to < from) {

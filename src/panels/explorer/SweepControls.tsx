@@ -2,6 +2,7 @@ import type { StripSizes } from '../../build/partitionPlan';
 import { formatBits } from '../../model/units';
 import { MAX_SWEEP_POINTS, sweepSize } from '../../explore/sweep';
 import {
+  DEFAULT_SPARE_SWEEP,
   processChoices,
   sweepRequestFor,
   TARGET_CAPACITIES,
@@ -125,6 +126,42 @@ export function SweepControls({ design, settings, onChange }: Props) {
             {c.label}
           </label>
         ))}
+      </fieldset>
+      <fieldset className="checklist">
+        <legend>Yield</legend>
+        <label>
+          <input
+            type="checkbox"
+            checked={settings.spares !== null}
+            data-testid="sweep-spares"
+            onChange={(e) => onChange({ ...settings, spares: e.target.checked ? DEFAULT_SPARE_SWEEP : null })}
+          />
+          Sweep spare rows and columns (die yield, good dies per wafer; about 1 ms a point)
+        </label>
+        {settings.spares && (
+          <>
+            <RangeField
+              id="sweep-spare-rows"
+              label="Spare rows per domain"
+              min={0}
+              max={256}
+              value={settings.spares.rows}
+              onCommit={(rows) =>
+                settings.spares && onChange({ ...settings, spares: { ...settings.spares, rows } })
+              }
+            />
+            <RangeField
+              id="sweep-spare-columns"
+              label="Spare columns per domain"
+              min={0}
+              max={256}
+              value={settings.spares.columns}
+              onCommit={(columns) =>
+                settings.spares && onChange({ ...settings, spares: { ...settings.spares, columns } })
+              }
+            />
+          </>
+        )}
       </fieldset>
       <p className="hint">
         Operating conditions come from the active design:{' '}

@@ -64,7 +64,7 @@ export function VariantsView() {
     const errors = report.findings.filter((f) => f.severity === 'error').length;
     return {
       ...v,
-      figures: figuresFromReport(report),
+      figures: figuresFromReport(report, v.design),
       errors,
       warnings: report.findings.length - errors,
       about: describe(v.design),

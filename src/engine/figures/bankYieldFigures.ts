@@ -1,0 +1,90 @@
+import { input, SOURCES } from './explanation';
+import { bankFigure } from './bankFigure';
+
+const SPARES = (f: { spareRows: number; spareColumns: number }) => [
+  input('R', 'spare rows per domain', f.spareRows, 'count'),
+  input('C', 'spare columns per domain', f.spareColumns, 'count'),
+];
+const STAPPER =
+  'C. H. Stapper, negative-binomial yield model, IBM J. Res. Dev., 1980s (from memory); Hennessy & Patterson, Computer Architecture: A Quantitative Approach, 5th ed., 2012, ch. 1';
+
+/** Comparison figures of a bank's yield and redundancy (explorer axes, point card, variants table). */
+export const BANK_YIELD_FIGURES = [
+  bankFigure({
+    key: 'dieYield',
+    label: 'Die yield',
+    quantity: 'percent',
+    better: 'higher',
+    exportKey: null,
+    explain: (f) => ({
+      symbol: 'Y',
+      formula: 'Y = E_x[ P_repair(x) · e^(−λ_periphery·x) ],  x ~ Gamma(α, mean 1)',
+      inputs: [...SPARES(f), input('P_repair', 'repair probability', f.repairProbability, 'percent')],
+      method:
+        'Every repair domain repaired (sparse-limit lower bound for single-cell faults) and no killing periphery defect, over a clustered defect density. First-order estimate.',
+      source: STAPPER,
+    }),
+  }),
+  bankFigure({
+    key: 'repairProbability',
+    label: 'Repair probability',
+    quantity: 'percent',
+    better: 'higher',
+    exportKey: null,
+    explain: (f) => ({
+      symbol: 'P_repair',
+      formula: 'P = E_x[ Π_domains Σ_{i≤R} Σ_{j≤C} P(i)·P(j)·P(cells ≤ R−i+C−j) ]',
+      inputs: SPARES(f),
+      method:
+        'Faulty lines Binomial(lines, 1 − e^(−λ/lines)); each single-cell fault takes one spare of either kind.',
+      source: `${STAPPER}; ${SOURCES.common} for the repair rule`,
+    }),
+  }),
+  bankFigure({
+    key: 'redundancyArea',
+    label: 'Redundancy area',
+    quantity: 'area',
+    better: 'lower',
+    exportKey: null,
+    explain: (f) => ({
+      symbol: 'A_red',
+      formula: 'A_red = Σ_domains [R·A/rows + C·(A/cols)·(1 + A_strip/A_mat) + fuses and comparators]',
+      inputs: SPARES(f),
+      method: 'Spare lines of cells (columns with their sense amplifiers) and a fuse set per spare.',
+      source: `${SOURCES.common}; K. Itoh, VLSI Memory Chip Design, Springer, 2001 (from memory)`,
+    }),
+  }),
+  bankFigure({
+    key: 'areaPerBitWithRedundancy',
+    label: 'Area per bit with redundancy',
+    quantity: 'area',
+    better: 'lower',
+    exportKey: null,
+    explain: (f) => ({
+      symbol: 'A/bit',
+      formula: 'A/bit = (A_total + A_red) / usable bits',
+      inputs: [
+        input('A_total', 'bank area', f.totalArea, 'area'),
+        input('A_red', 'redundancy area', f.redundancyArea, 'area'),
+        input('bits', 'usable bits', f.usableBits, 'count'),
+      ],
+      method: 'Area per bit once spares and fuses are paid for.',
+      source: SOURCES.takahashi,
+    }),
+  }),
+  bankFigure({
+    key: 'goodDiesPerWafer',
+    label: 'Good dies per wafer',
+    quantity: 'count',
+    better: 'higher',
+    exportKey: null,
+    explain: (f) => ({
+      symbol: 'N_good',
+      formula: 'N_good = ⌊π(d/2)²/S − π·d/√(2S)⌋ · Y, S = die area + redundancy of every copy',
+      inputs: [input('Y', 'die yield', f.dieYield, 'percent'), ...SPARES(f)],
+      method: 'Gross dies per wafer (die grown by its redundancy) times the die yield.',
+      source:
+        'J. L. Hennessy, D. A. Patterson, Computer Architecture: A Quantitative Approach, 5th ed., 2012, ch. 1',
+    }),
+  }),
+] as const;
