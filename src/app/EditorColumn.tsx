@@ -1,13 +1,30 @@
 import { FloorplanCanvas } from '../canvas/FloorplanCanvas';
 import { BlockOutline } from '../panels/outline/BlockOutline';
 import { SelectionAnnouncer } from './a11y/SelectionAnnouncer';
-import { ShortcutHelp } from './ShortcutHelp';
+import { lazy, Suspense } from 'react';
+import { useEditorStore } from '../store/editorStore';
 import { StatusBar } from './StatusBar';
-import { StepRepeatDialog } from './StepRepeatDialog';
 import { ToolOptionsBar } from './ToolOptionsBar';
 import { ToolPalette } from './ToolPalette';
 import { useEditorShortcuts } from './useEditorShortcuts';
 import './editor.css';
+
+// The dialogs load the first time they open: they are not part of the first load.
+const ShortcutHelp = lazy(() => import('./ShortcutHelp').then((m) => ({ default: m.ShortcutHelp })));
+const StepRepeatDialog = lazy(() =>
+  import('./StepRepeatDialog').then((m) => ({ default: m.StepRepeatDialog })),
+);
+
+function Dialogs() {
+  const help = useEditorStore((s) => s.helpOpen);
+  const stepRepeat = useEditorStore((s) => s.stepRepeatOpen);
+  return (
+    <Suspense fallback={null}>
+      {help && <ShortcutHelp />}
+      {stepRepeat && <StepRepeatDialog />}
+    </Suspense>
+  );
+}
 
 /** The floorplan editor: tool palette, block list, tool options, the canvas and a status bar, plus its dialogs. */
 export function EditorColumn() {
@@ -20,8 +37,7 @@ export function EditorColumn() {
       <FloorplanCanvas />
       <StatusBar />
       <SelectionAnnouncer />
-      <ShortcutHelp />
-      <StepRepeatDialog />
+      <Dialogs />
     </div>
   );
 }

@@ -1,9 +1,7 @@
 import { useRef, useState } from 'react';
-import { canvasToPngBlob, renderFloorplanImage, type ImageOptions } from '../canvas/floorplanImage';
-import { matFiguresCsv } from '../io/matCsv';
+import type { ImageOptions } from '../canvas/floorplanImage';
 import { MAX_DESIGN_TEXT_LENGTH } from '../io/restore';
 import { openDesignText } from '../store/openDesignText';
-import { reportSummary } from '../io/summary';
 import { useAppStore } from '../store/useAppStore';
 import { ModalDialog } from './a11y/ModalDialog';
 import { downloadBlob, fileBaseName } from './download';
@@ -81,8 +79,10 @@ export function FileMenu() {
         type="button"
         data-testid="export-summary"
         title="Design, figures and checks as JSON, units in every key"
-        onClick={() => {
+        onClick={async () => {
           const s = current();
+          // Exports load on first use: they are not part of the first load.
+          const { reportSummary } = await import('../io/summary');
           downloadBlob(
             jsonBlob({ design: s.history.present, report: reportSummary(s.history.present, s.report) }),
             `${base()}.summary.json`,
@@ -95,12 +95,11 @@ export function FileMenu() {
         type="button"
         data-testid="export-csv"
         title="Per-mat figures as CSV"
-        onClick={() =>
-          downloadBlob(
-            new Blob([matFiguresCsv(current().report)], { type: 'text/csv' }),
-            `${base()}.mats.csv`,
-          )
-        }
+        onClick={async () => {
+          const report = current().report;
+          const { matFiguresCsv } = await import('../io/matCsv');
+          downloadBlob(new Blob([matFiguresCsv(report)], { type: 'text/csv' }), `${base()}.mats.csv`);
+        }}
       >
         CSV
       </button>
@@ -184,6 +183,7 @@ export function FileMenu() {
               title="Render the picture and download it"
               onClick={async () => {
                 const s = current();
+                const { canvasToPngBlob, renderFloorplanImage } = await import('../canvas/floorplanImage');
                 const canvas = renderFloorplanImage(s.history.present, s.report, png, liveView());
                 downloadBlob(await canvasToPngBlob(canvas), `${base()}.png`);
                 setPngOpen(false);

@@ -1,12 +1,14 @@
-import { useState } from 'react';
-import { CellsPanel } from '../panels/CellsPanel';
+import { lazy, Suspense, useState } from 'react';
 import { ChecksPanel } from '../panels/ChecksPanel';
 import { MetricsPanel } from '../panels/MetricsPanel';
-import { ProcessPanel } from '../panels/ProcessPanel';
 import { PropertiesPanel } from '../panels/PropertiesPanel';
-import { YieldPanel } from '../panels/YieldPanel';
 import { useUiStore } from '../store/uiStore';
 import { TabBar, TabPanels, type TabSpec } from './a11y/TabBar';
+
+// The tabs behind the first one load when first opened, so the first load carries only the editor.
+const ProcessPanel = lazy(() => import('../panels/ProcessPanel').then((m) => ({ default: m.ProcessPanel })));
+const CellsPanel = lazy(() => import('../panels/CellsPanel').then((m) => ({ default: m.CellsPanel })));
+const YieldPanel = lazy(() => import('../panels/YieldPanel').then((m) => ({ default: m.YieldPanel })));
 
 type TabId = 'floorplan' | 'process' | 'cells' | 'yield';
 const TABS: readonly TabSpec<TabId>[] = [
@@ -74,9 +76,11 @@ export function Sidebar() {
             <MetricsPanel />
           </>
         )}
-        {tab === 'process' && <ProcessPanel />}
-        {tab === 'cells' && <CellsPanel />}
-        {tab === 'yield' && <YieldPanel />}
+        <Suspense fallback={<p className="panel-loading">Loading…</p>}>
+          {tab === 'process' && <ProcessPanel />}
+          {tab === 'cells' && <CellsPanel />}
+          {tab === 'yield' && <YieldPanel />}
+        </Suspense>
       </TabPanels>
     </aside>
   );

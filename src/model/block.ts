@@ -11,6 +11,7 @@ import { MAX_COORDINATE, finite, positive, wholeCount } from './schemaParts';
 export {
   BITLINE_AXES,
   BLOCK_TYPES,
+  BLOCK_TYPE_LABEL,
   MAX_CELLS_PER_LINE,
   STRIP_TYPES,
   type BitlineAxis,
@@ -62,13 +63,3 @@ export type BlockType = Block['type'];
 export function isMat(block: Block): block is Mat {
   return block.type === 'mat';
 }
-
-/** Human names of block types, for panels, checks and exports. */
-export const BLOCK_TYPE_LABEL: Record<BlockType, string> = {
-  mat: 'mat',
-  senseAmpStrip: 'sense-amplifier strip',
-  wordlineDriverStrip: 'sub-word-line driver strip',
-  rowDecoder: 'row decoder',
-  columnDecoder: 'column decoder',
-  spacer: 'spacer',
-};

@@ -1,3 +1,5 @@
+import type { BlockType } from './block';
+
 // The plain facts about blocks, apart from their schema (block.ts), so that code which only computes
 // (the engine and the sweep worker) does not load the validation library.
 
@@ -20,3 +22,13 @@ export type StripType = (typeof STRIP_TYPES)[number];
 
 /** Every block type: the mat, then the strips. */
 export const BLOCK_TYPES = ['mat', ...STRIP_TYPES] as const;
+
+/** Human names of block types, for panels, checks and exports. */
+export const BLOCK_TYPE_LABEL: Record<BlockType, string> = {
+  mat: 'mat',
+  senseAmpStrip: 'sense-amplifier strip',
+  wordlineDriverStrip: 'sub-word-line driver strip',
+  rowDecoder: 'row decoder',
+  columnDecoder: 'column decoder',
+  spacer: 'spacer',
+};

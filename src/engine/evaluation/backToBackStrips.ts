@@ -5,7 +5,7 @@ import {
   type BlockTable,
 } from '../../geometry/blockTable';
 import { ABUTMENT_TOLERANCE } from '../../geometry/rect';
-import { BLOCK_TYPE_LABEL } from '../../model/block';
+import { BLOCK_TYPE_LABEL } from '../../model/blockBasics';
 import type { MatTable } from './matTable';
 import type { Finding } from './report';
 
