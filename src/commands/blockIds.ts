@@ -17,6 +17,26 @@ export function idAllocator(design: Design): (base: string) => string {
   };
 }
 
+/**
+ * Fresh display names for copied blocks: a name the design (or an earlier copy) already uses gets the
+ * first free " (n)" from 2 on, after any such suffix it had ("Mat 1.1" → "Mat 1.1 (2)", "Mat 1.1 (2)" →
+ * "Mat 1.1 (3)"), so every message that names a block points at one block. Empty names stay empty.
+ */
+export function nameAllocator(design: Design): (name: string) => string {
+  const taken = new Set<string>();
+  for (const b of design.blocks) if (b.name) taken.add(b.name);
+  return (name: string) => {
+    if (!name) return name;
+    let fresh = name.slice(0, 120);
+    if (taken.has(fresh)) {
+      const stem = name.replace(/ \(\d+\)$/, '').slice(0, 110);
+      for (let n = 2; taken.has(fresh); n++) fresh = `${stem} (${n})`;
+    }
+    taken.add(fresh);
+    return fresh;
+  };
+}
+
 /** The next free "prefix-N" id and its number (N from 1), for newly drawn blocks. */
 export function nextNumberedId(design: Design, prefix: string): { id: string; number: number } {
   const taken = new Set(design.blocks.map((b) => b.id));

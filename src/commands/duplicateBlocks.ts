@@ -1,6 +1,6 @@
 import { MAX_BLOCKS, type Design } from '../model/design';
 import type { Block } from '../model/block';
-import { idAllocator } from './blockIds';
+import { idAllocator, nameAllocator } from './blockIds';
 import type { Command, CommandResult } from './command';
 import { checkBlocks } from './validateBlocks';
 
@@ -17,10 +17,11 @@ export interface CopyTag {
   readonly name: string;
 }
 
-/** Copies of blocks shifted by (dx, dy), with fresh ids from `allocate`. */
+/** Copies of blocks shifted by (dx, dy), with fresh ids from `allocate` and unique names from `rename`. */
 export function shiftedCopies(
   originals: readonly Block[],
   allocate: (base: string) => string,
+  rename: (name: string) => string,
   dx: number,
   dy: number,
   tag: CopyTag = { id: '', name: '' },
@@ -28,7 +29,7 @@ export function shiftedCopies(
   return originals.map((b) => ({
     ...b,
     id: allocate(`${b.id}${tag.id}`),
-    name: b.name ? `${b.name}${tag.name}`.slice(0, 120) : b.name,
+    name: b.name ? rename(`${b.name}${tag.name}`.slice(0, 120)) : b.name,
     x: b.x + dx,
     y: b.y + dy,
   }));
@@ -48,7 +49,7 @@ export const duplicateBlocks: Command<DuplicateBlocksArgs> = {
     if (design.blocks.length + originals.length > MAX_BLOCKS) {
       return { ok: false, error: `a design holds at most ${MAX_BLOCKS.toLocaleString('en-US')} blocks` };
     }
-    const copies = shiftedCopies(originals, idAllocator(design), args.dx, args.dy);
+    const copies = shiftedCopies(originals, idAllocator(design), nameAllocator(design), args.dx, args.dy);
     const error = checkBlocks(design, copies);
     if (error) return { ok: false, error };
     return { ok: true, design: { ...design, blocks: [...design.blocks, ...copies] } };

@@ -1,7 +1,7 @@
 import type { Block } from '../model/block';
 import type { CellDefinition } from '../model/cell';
 import { MAX_BLOCKS, type Design } from '../model/design';
-import { idAllocator } from './blockIds';
+import { idAllocator, nameAllocator } from './blockIds';
 import type { Command, CommandResult } from './command';
 import { shiftedCopies } from './duplicateBlocks';
 import { checkBlocks } from './validateBlocks';
@@ -17,7 +17,7 @@ export interface PasteBlocksArgs {
 }
 
 /**
- * Pastes copied blocks. Ids that clash get a suffix; a cell the design already has (same id) is used as
+ * Pastes copied blocks. Ids that clash get a suffix, and so do names (" (2)"); a cell the design already has (same id) is used as
  * it is, and a cell it lacks comes along with the blocks.
  */
 export const pasteBlocks: Command<PasteBlocksArgs> = {
@@ -41,7 +41,7 @@ export const pasteBlocks: Command<PasteBlocksArgs> = {
       known.add(cell.id);
     }
     const withCells = newCells.length > 0 ? { ...design, cells: [...design.cells, ...newCells] } : design;
-    const copies = shiftedCopies(args.blocks, idAllocator(design), args.dx, args.dy);
+    const copies = shiftedCopies(args.blocks, idAllocator(design), nameAllocator(design), args.dx, args.dy);
     const error = checkBlocks(withCells, copies);
     if (error) return { ok: false, error };
     return { ok: true, design: { ...withCells, blocks: [...design.blocks, ...copies] } };

@@ -1,7 +1,7 @@
 import type { Block } from '../model/block';
 import { MAX_BLOCKS, type Design } from '../model/design';
 import { placeKey } from '../geometry/repeatPitch';
-import { idAllocator } from './blockIds';
+import { idAllocator, nameAllocator } from './blockIds';
 import type { Command, CommandResult } from './command';
 import { shiftedCopies } from './duplicateBlocks';
 import { checkBlocks } from './validateBlocks';
@@ -74,12 +74,13 @@ export const stepAndRepeat: Command<StepAndRepeatArgs> = {
       };
     }
     const allocate = idAllocator(design);
+    const rename = nameAllocator(design);
     const copies: Block[] = [];
     for (let row = 0; row < args.rows; row++) {
       for (let column = 0; column < args.columns; column++) {
         if (row === 0 && column === 0) continue;
         copies.push(
-          ...shiftedCopies(originals, allocate, column * args.pitchX, row * args.pitchY, {
+          ...shiftedCopies(originals, allocate, rename, column * args.pitchX, row * args.pitchY, {
             id: `-${row + 1}-${column + 1}`,
             name: ` (${row + 1},${column + 1})`,
           }),

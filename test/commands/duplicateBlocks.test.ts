@@ -11,8 +11,17 @@ describe('command: duplicate', () => {
       expect(addedBlockIds(before, d)).toEqual(['mat-r0c0-2']);
       const copy = blockById(d, 'mat-r0c0-2');
       expect(copy.x).toBeCloseTo(blockById(design, 'mat-r0c0').x + 1e-6, 15);
-      expect(copy.name).toBe('Mat 1.1');
+      expect(copy.name).toBe('Mat 1.1 (2)');
     });
+  });
+
+  it('names stay unique: a copy of a copy takes the next free number', () => {
+    const once = duplicateBlocks.run(demoDesign(), { ids: ['mat-r0c0'], dx: 0, dy: 1e-3 });
+    if (!once.ok) throw new Error(once.error);
+    const twice = duplicateBlocks.run(once.design, { ids: ['mat-r0c0', 'mat-r0c0-2'], dx: 1e-3, dy: 0 });
+    if (!twice.ok) throw new Error(twice.error);
+    const names = twice.design.blocks.map((b) => b.name).filter((n) => n.startsWith('Mat 1.1'));
+    expect(names).toEqual(['Mat 1.1', 'Mat 1.1 (2)', 'Mat 1.1 (3)', 'Mat 1.1 (4)']);
   });
 
   it('is deterministic: the same document and arguments give the same ids', () => {

@@ -13,6 +13,9 @@ describe('command: paste', () => {
     runUndoRedo(design, pasteBlocks, { blocks: clip, cells: [], dx: 0, dy: 200e-6 }, (d, before) => {
       expect(addedBlockIds(before, d)).toEqual(['mat-r0c0-2', 'sa-r0c0-2']);
       expect(blockById(d, 'sa-r0c0-2').y).toBeCloseTo(blockById(design, 'sa-r0c0').y + 200e-6, 15);
+      // Names that clash get the next free number, so messages name one block each.
+      expect(blockById(d, 'mat-r0c0-2').name).toBe('Mat 1.1 (2)');
+      expect(new Set(d.blocks.map((b) => b.name)).size).toBe(d.blocks.length);
     });
   });
 
