@@ -128,4 +128,39 @@ test.describe('sketching a bank by hand', () => {
     );
     expect(errors).toEqual([]);
   });
+
+  test('changing a mat’s cell keeps its capacity and its bank whole: no new finding, one undo step', async ({
+    page,
+  }) => {
+    const errors = await noPageErrors(page);
+    const app = new EditorPage(page);
+    await app.openWith('?blank');
+    await app.drag(await app.canvasPoint(260, 160), await app.canvasPoint(420, 300));
+    const m = await selectedMatRect(app);
+    await page.keyboard.press('4');
+    await app.click(await app.worldPoint(m.x + m.width / 2, m.y - 0.2e-6));
+    await app.click(await app.worldPoint(m.x + m.width / 2, m.y + m.height + 0.2e-6));
+    await page.keyboard.press('5');
+    await app.click(await app.worldPoint(m.x - 0.2e-6, m.y + m.height / 2));
+    await page.keyboard.press('6');
+    await app.click(await app.worldPoint(m.x - 4e-6, m.y + m.height / 2));
+    await page.keyboard.press('7');
+    await app.click(await app.worldPoint(m.x + m.width / 2, m.y + m.height + 7e-6));
+    await app.expectChecksClear();
+
+    await page.keyboard.press('1');
+    await app.click(await app.worldPoint(m.x + m.width / 2, m.y + m.height / 2));
+    const size = await page.getByTestId('mat-size').textContent();
+    await app.field('mat-cell').selectOption({ label: '1T1C eDRAM folded 50F²' });
+    // Same cells and bits, a larger mat (5F pitches), its strips and decoders moved and re-fitted.
+    await expect(page.getByTestId('mat-size')).toHaveText(size ?? '');
+    await expect(app.field('block-x')).toHaveValue(await app.field('block-x').inputValue());
+    await app.expectChecksClear();
+    await page.getByTestId('zoom-fit').click();
+    await page.screenshot({ path: test.info().outputPath('3-cell-changed.png') });
+    await page.keyboard.press('Control+z');
+    await expect(app.field('mat-cell')).toHaveValue('dram-folded-8f2');
+    await app.expectChecksClear();
+    expect(errors).toEqual([]);
+  });
 });

@@ -1,4 +1,3 @@
-import type { Block } from '../model/block';
 import { cellDefinitionSchema, type CellDefinition } from '../model/cell';
 import type { Design } from '../model/design';
 import type { GainReadField } from '../model/fieldCatalog';
@@ -87,27 +86,6 @@ export const renameCell: Command<{ readonly cellId: string; readonly name: strin
   },
 };
 
-/** Gives one or more mats another cell definition; their size follows the new pitches. */
-export const setMatCell: Command<{ readonly matIds: readonly string[]; readonly cellId: string }> = {
-  id: 'mat.setCell',
-  label: 'Change mat cell',
-  run(design: Design, { matIds, cellId }): CommandResult {
-    if (!design.cells.some((c) => c.id === cellId)) return { ok: false, error: `no cell "${cellId}"` };
-    const targets = new Set(matIds);
-    let found = false;
-    let changed = false;
-    const blocks = design.blocks.map((b): Block => {
-      if (b.type !== 'mat' || !targets.has(b.id)) return b;
-      found = true;
-      if (b.cellId === cellId) return b;
-      changed = true;
-      return { ...b, cellId };
-    });
-    if (!found) return { ok: false, error: 'no mat selected' };
-    return { ok: true, design: changed ? { ...design, blocks } : design };
-  },
-};
-
 /** Sets drawn pitches (m) that replace the F-based ones, or clears them with null. */
 export const setCellPitchOverride: Command<{
   readonly cellId: string;
@@ -119,3 +97,5 @@ export const setCellPitchOverride: Command<{
     return replaceCell(design, cellId, (c) => ({ ...c, pitchOverride: override ? { ...override } : null }));
   },
 };
+
+export { setMatCell } from './setMatCell';

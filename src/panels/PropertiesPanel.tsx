@@ -1,5 +1,8 @@
 import { setBlockProperties, type BlockPropertiesPatch } from '../commands/setBlockProperties';
+import { useState } from 'react';
+import { setMatCell } from '../commands/setMatCell';
 import { setMatCellCounts } from '../commands/setMatCellCounts';
+import { ANCHOR_CORNERS, type AnchorCorner } from '../geometry/stretchMap';
 import { matGeometry } from '../geometry/matGeometry';
 import { blockRect } from '../geometry/placedBlocks';
 import { BITLINE_AXES, BLOCK_TYPE_LABEL, isMat, type Block, type Mat, type Strip } from '../model/block';
@@ -10,6 +13,13 @@ import { NameField } from './NameField';
 import { QuantityField } from './QuantityField';
 import { SelectField } from './SelectField';
 import { useRunCommand } from './useRunCommand';
+
+const ANCHOR_LABEL: Record<AnchorCorner, string> = {
+  topLeft: 'top-left',
+  topRight: 'top-right',
+  bottomLeft: 'bottom-left',
+  bottomRight: 'bottom-right',
+};
 
 /** The one value all blocks share, or null when they differ. */
 function shared<B, V>(blocks: readonly B[], pick: (b: B) => V): V | null {
@@ -42,6 +52,9 @@ export function PropertiesPanel() {
   const ids = blocks.map((b) => b.id);
 
   const patch = (p: BlockPropertiesPatch) => run(setBlockProperties, { ids, patch: p });
+  // How a cell change resizes the mats: session choices, not part of the document.
+  const [anchor, setAnchor] = useState<AnchorCorner>('topLeft');
+  const [keepCounts, setKeepCounts] = useState(false);
   const counts = (args: { cellsPerBitline?: number; cellsPerWordline?: number }) =>
     run(setMatCellCounts, { matIds: mats.map((m) => m.id), ...args });
 
@@ -141,8 +154,27 @@ export function PropertiesPanel() {
             value={shared(mats, (m) => m.cellId)}
             noValueLabel="mixed"
             options={design.cells.map((c) => ({ value: c.id, label: c.name }))}
-            onChange={(cellId) => patch({ cellId })}
+            onChange={(cellId) =>
+              run(setMatCell, { matIds: mats.map((m) => m.id), cellId, keepCounts, anchor })
+            }
           />
+          <SelectField
+            id="cell-change-anchor"
+            label="On a cell change, keep"
+            value={anchor}
+            options={ANCHOR_CORNERS.map((c) => ({ value: c, label: `${ANCHOR_LABEL[c]} corner` }))}
+            onChange={(c) => setAnchor(c)}
+          />
+          <div className="field">
+            <label htmlFor="cell-change-keep-counts">…and keep cell counts (not capacity)</label>
+            <input
+              id="cell-change-keep-counts"
+              data-testid="cell-change-keep-counts"
+              type="checkbox"
+              checked={keepCounts}
+              onChange={(e) => setKeepCounts(e.target.checked)}
+            />
+          </div>
           <SelectField
             id="mat-axis"
             label="Bit lines run"
