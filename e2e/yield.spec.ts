@@ -2,6 +2,8 @@ import { expect, test } from '@playwright/test';
 import { evaluate, yieldFiguresOf } from '../src/engine';
 import { DEFAULT_REPAIR } from '../src/model/builtins';
 import { formatQuantity } from '../src/model/units';
+import { blockRect } from '../src/geometry/placedBlocks';
+import { EditorPage } from './editorPage';
 import { FloorplanPage, loadDemoDesign } from './floorplanPage';
 
 test('yield tab: figures explain themselves, fewer spares lower the repair probability, Monte Carlo agrees', async ({
@@ -47,4 +49,27 @@ test('yield tab: figures explain themselves, fewer spares lower the repair proba
   expect(withoutSpares.dieYield).toBeGreaterThanOrEqual(lo - half - 1e-4);
   expect(withoutSpares.dieYield).toBeLessThanOrEqual(hi + half + 1e-4);
   await page.screenshot({ path: 'test-results/yield-panel.png', fullPage: true });
+});
+
+test('close up, the spare rows and columns of a repair domain are drawn in its first mat', async ({
+  page,
+}) => {
+  const app = new EditorPage(page);
+  const demo = loadDemoDesign();
+  await app.open();
+  // The demo's repair domain is the mat row; its spares sit in the row's first mat (mat-r0c0), along
+  // its far word line (bottom edge) and its last bit lines (right edge). Zoom onto that corner.
+  const centre = await app.centreOf(demo, 'mat-r0c0');
+  const block = demo.blocks.find((b) => b.id === 'mat-r0c0');
+  if (!block) throw new Error('no mat-r0c0');
+  const { scale } = await app.camera();
+  const rect = blockRect(demo, block);
+  const corner = {
+    x: Math.round(centre.x + (rect.width * 1e6 * scale) / 2 - 2),
+    y: Math.round(centre.y + (rect.height * 1e6 * scale) / 2 - 2),
+  };
+  await page.mouse.move(corner.x, corner.y);
+  for (let i = 0; i < 40 && (await app.camera()).scale < 300; i++) await page.mouse.wheel(0, -200);
+  expect((await app.camera()).scale).toBeGreaterThan(300);
+  await page.screenshot({ path: 'test-results/yield-spares-close-up.png' });
 });

@@ -4,6 +4,7 @@ import { formatMatSize } from '../../model/matSize';
 import { formatBits, formatQuantity } from '../../model/units';
 import { BITLINE_STROKE, BLOCK_STYLE, STORAGE_NODE_FILL, WORDLINE_STROKE } from '../blockStyle';
 import { pxPerMetre, visibleWorld, type Scene } from './scene';
+import { paintSpareLines } from './spareLines';
 
 /** Individual lines are drawn once neighbouring lines are this far apart on screen (px). */
 export const LINES_MIN_PITCH_PX = 4;
@@ -30,8 +31,10 @@ export function paintMatDetail(ctx: CanvasRenderingContext2D, mat: PlacedMat, sc
   ctx.rect(x, y, w, h);
   ctx.clip();
   const minPitchPx = Math.min(g.bitlinePitch, g.wordlinePitch) * k;
-  if (minPitchPx >= LINES_MIN_PITCH_PX) paintCells(ctx, mat, scene, minPitchPx >= NODES_MIN_PITCH_PX);
-  else if (Math.min(w, h) >= 40) paintDirectionHint(ctx, x, y, w, h, vertical);
+  if (minPitchPx >= LINES_MIN_PITCH_PX) {
+    paintCells(ctx, mat, scene, minPitchPx >= NODES_MIN_PITCH_PX);
+    paintSpareLines(ctx, mat, scene);
+  } else if (Math.min(w, h) >= 40) paintDirectionHint(ctx, x, y, w, h, vertical);
 
   if (Math.min(w, h) >= 16) {
     // Handedness: a small triangle in the corner where the first cell sits.

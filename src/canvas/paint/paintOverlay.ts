@@ -3,6 +3,8 @@ import type { Rect } from '../../geometry/rect';
 import { isPlacedMat, type PlacedMat } from '../../geometry/placedBlocks';
 import { cellPitches } from '../../model/cellBasics';
 import { formatQuantity } from '../../model/units';
+import { repairSettingsOf } from '../../engine';
+import { REPAIR_DOMAIN_LABEL } from '../../model/repair';
 import {
   BITLINE_STROKE,
   BLOCK_STYLE,
@@ -12,6 +14,7 @@ import {
   WORDLINE_STROKE,
 } from '../blockStyle';
 import { LINES_MIN_PITCH_PX } from './paintMatDetail';
+import { SPARE_FILL, SPARE_STROKE } from './spareLines';
 import type { GesturePreview } from '../gestures/gesture';
 import { pxPerMetre, RULER_SIZE, toScreen, visibleWorld, type Scene } from './scene';
 
@@ -113,6 +116,13 @@ function paintCellKey(ctx: CanvasRenderingContext2D, scene: Scene): void {
     ],
     [STORAGE_NODE_FILL, `storage nodes (${shown.cell.name})`, 0],
   ];
+  const repair = repairSettingsOf(scene.design);
+  if (repair.spareRows + repair.spareColumns > 0)
+    rows.push([
+      SPARE_FILL,
+      `spares: ${repair.spareRows} rows + ${repair.spareColumns} columns per ${REPAIR_DOMAIN_LABEL[repair.repairDomain].replace(/^each /, '')} (Yield tab)`,
+      -1,
+    ]);
   ctx.font = '12px system-ui, sans-serif';
   const w = Math.max(...rows.map(([, text]) => ctx.measureText(text).width)) + 40;
   const h = rows.length * 18 + 10;
@@ -125,7 +135,13 @@ function paintCellKey(ctx: CanvasRenderingContext2D, scene: Scene): void {
   ctx.strokeRect(x + 0.5, y + 0.5, w, h);
   rows.forEach(([colour, text, width], i) => {
     const cy = y + 14 + i * 18;
-    if (width > 0) {
+    if (width < 0) {
+      ctx.fillStyle = colour;
+      ctx.fillRect(x + 9, cy - 5, 16, 10);
+      ctx.strokeStyle = SPARE_STROKE;
+      ctx.lineWidth = 1;
+      ctx.strokeRect(x + 9, cy - 5, 16, 10);
+    } else if (width > 0) {
       ctx.strokeStyle = colour;
       ctx.lineWidth = width;
       ctx.beginPath();
