@@ -1,20 +1,28 @@
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { App } from './app/App';
-import { designFromQuery } from './app/startupDesign';
+import { documentSession } from './app/session';
 import { useEditorStore } from './store/editorStore';
 import { useAppStore } from './store/useAppStore';
 import './app/app.css';
 
-const requested = designFromQuery(window.location.search);
-if (requested) useAppStore.getState().replaceDesign(requested);
-// On an empty sheet the first thing to do is draw a mat, so its tool is chosen.
-if (requested && requested.blocks.length === 0) useEditorStore.getState().setTool('mat');
-
 const root = document.getElementById('root');
 if (!root) throw new Error('index.html has no #root element');
-createRoot(root).render(
-  <StrictMode>
-    <App />
-  </StrictMode>,
-);
+
+// The first document (share link, start address, this tab's document, the newest, or the demo) is open
+// before anything is drawn, so the canvas never shows one design and then another.
+void documentSession
+  .start(window.location)
+  .catch(() => undefined)
+  .finally(() => {
+    // On an empty sheet the first thing to do is draw a mat, so its tool is chosen.
+    const started = useAppStore.getState().history.present;
+    if (new URLSearchParams(window.location.search).has('blank') && started.blocks.length === 0) {
+      useEditorStore.getState().setTool('mat');
+    }
+    createRoot(root).render(
+      <StrictMode>
+        <App />
+      </StrictMode>,
+    );
+  });

@@ -2,14 +2,16 @@ import { EditorColumn } from './EditorColumn';
 import { NoticeBar } from './NoticeBar';
 import { Sidebar } from './Sidebar';
 import { Toolbar } from './Toolbar';
-import { useAutosave } from './useAutosave';
+import { StorageProblemBar } from './StorageProblemBar';
+import { useDocumentGuards } from './useDocumentGuards';
 import { ViewArea } from './ViewArea';
 
 export function App() {
-  useAutosave();
+  useDocumentGuards();
   return (
     <div className="app">
       <Toolbar />
+      <StorageProblemBar />
       <NoticeBar />
       <main className="workspace">
         <ViewArea>

@@ -1,13 +1,8 @@
-import { useRef, useState } from 'react';
+import { useState } from 'react';
 import type { ImageOptions } from '../canvas/floorplanImage';
-import { MAX_DESIGN_TEXT_LENGTH } from '../io/restore';
-import { openDesignText } from '../store/openDesignText';
 import { useAppStore } from '../store/useAppStore';
 import { ModalDialog } from './a11y/ModalDialog';
 import { downloadBlob, fileBaseName } from './download';
-
-/** Largest file the Open button reads (bytes); the same limit restore applies to text. */
-const MAX_FILE_BYTES = MAX_DESIGN_TEXT_LENGTH;
 
 function jsonBlob(value: unknown): Blob {
   return new Blob([`${JSON.stringify(value, null, 2)}\n`], { type: 'application/json' });
@@ -24,57 +19,16 @@ function liveView() {
   };
 }
 
-/** Open, save and export: design files, PNG pictures, JSON summaries and CSV tables. */
+/** Exports: PNG pictures, JSON summaries and CSV tables. */
 export function FileMenu() {
-  const fileInput = useRef<HTMLInputElement>(null);
   const [pngOpen, setPngOpen] = useState(false);
   const [png, setPng] = useState<ImageOptions>({ region: 'all', scale: 2, legend: true, titleBlock: true });
-  const setNotice = useAppStore((s) => s.setNotice);
-
-  const openFile = async (file: File) => {
-    if (file.size > MAX_FILE_BYTES) {
-      setNotice({
-        kind: 'error',
-        text: `${file.name} is ${file.size.toLocaleString('en-US')} bytes; the limit is ${MAX_FILE_BYTES.toLocaleString('en-US')}. Nothing was changed.`,
-      });
-      return;
-    }
-    openDesignText(useAppStore, await file.text(), file.name);
-  };
 
   const current = () => useAppStore.getState();
   const base = () => fileBaseName(current().history.present.name);
 
   return (
     <div className="file-menu">
-      <button
-        type="button"
-        data-testid="open-file"
-        onClick={() => fileInput.current?.click()}
-        title="Open a design file"
-      >
-        Open…
-      </button>
-      <input
-        ref={fileInput}
-        type="file"
-        accept=".json,application/json"
-        hidden
-        data-testid="open-file-input"
-        onChange={(e) => {
-          const file = e.target.files?.[0];
-          e.target.value = '';
-          if (file) void openFile(file);
-        }}
-      />
-      <button
-        type="button"
-        data-testid="save-file"
-        title="Save the design as a file"
-        onClick={() => downloadBlob(jsonBlob(current().history.present), `${base()}.matloom.json`)}
-      >
-        Save
-      </button>
       <button
         type="button"
         data-testid="export-summary"

@@ -2,7 +2,7 @@ import { useEditorStore } from '../store/editorStore';
 import { ModalDialog } from './a11y/ModalDialog';
 import { SHORTCUTS } from './keymap';
 
-const GROUPS = ['Tools', 'Edit', 'View'] as const;
+const GROUPS = ['File', 'Tools', 'Edit', 'View'] as const;
 
 /** Every keyboard shortcut, opened with "?" and closed with Escape or the button. */
 export function ShortcutHelp() {

@@ -1,6 +1,8 @@
 import { useAppStore } from '../store/useAppStore';
 import { CommandButton } from './CommandButton';
+import { DocumentMenu } from './DocumentMenu';
 import { FileMenu } from './FileMenu';
+import { StorageStatus } from './StorageStatus';
 
 /**
  * Top bar: design name, the file menu, undo, redo and frame-all. Their keys are the editor commands'
@@ -11,9 +13,11 @@ export function Toolbar() {
   return (
     <header className="toolbar">
       <h1 className="brand">Matloom</h1>
-      <span className="design-name" data-testid="design-name">
+      <span className="design-name" data-testid="design-name" title={name}>
         {name}
       </span>
+      <StorageStatus />
+      <DocumentMenu />
       <FileMenu />
       <div className="actions">
         <CommandButton id="edit.undo" testId="undo" />

@@ -1,5 +1,7 @@
 import type { AppStore } from '../store/appStore';
 import { TOOLS, type EditorStore, type Tool } from '../store/editorStore';
+import { saveDesignFile } from './designFiles';
+import { openDesignFromDisk, startNewDocument } from './documentActions';
 import type { EditorActionsCore } from './editorActions';
 import { chordLabel, type KeyChord } from './keyChord';
 
@@ -29,7 +31,7 @@ export interface EditorCommand {
   readonly label: string;
   /** What it does, for the shortcut help and tooltips. */
   readonly description: string;
-  readonly group: 'Tools' | 'Edit' | 'View';
+  readonly group: 'File' | 'Tools' | 'Edit' | 'View';
   readonly keys: readonly KeyChord[];
   /**
    * Its row in the shortcut help: the keys as written there when one row stands for several commands
@@ -93,6 +95,32 @@ const nudge = <const Id extends string>(
 
 /** Every editor command, in the order of the shortcut help. */
 export const EDITOR_COMMANDS = [
+  {
+    id: 'file.new',
+    label: 'New',
+    description: 'Start a new, empty design (the open one stays under Recent)',
+    group: 'File',
+    // Browsers keep Ctrl+N for a new window, so New is a button only.
+    keys: [],
+    help: false,
+    run: () => startNewDocument(),
+  },
+  {
+    id: 'file.open',
+    label: 'Open',
+    description: 'Open a design file (or drop one on the page)',
+    group: 'File',
+    keys: [{ key: 'o', mod: true, shift: false }],
+    run: () => void openDesignFromDisk(),
+  },
+  {
+    id: 'file.save',
+    label: 'Save',
+    description: 'Save the design to a file (back to the file it came from where the browser allows)',
+    group: 'File',
+    keys: [{ key: 's', mod: true, shift: false }],
+    run: () => void saveDesignFile(),
+  },
   ...toolCommands,
   {
     id: 'view.pan',

@@ -27,8 +27,18 @@ export interface AppState {
   readonly lastError: string | null;
   /** Bumped to ask the canvas to frame the whole floorplan. */
   readonly fitRequest: number;
-  /** A message for the person (file refused, autosave kept aside, export done); null when none. */
+  /** A message for the person (file refused, stored design kept aside, export done); null when none. */
   readonly notice: Notice | null;
+  /** Which stored document this is (its keys in browser storage); every new document gets a fresh one. */
+  readonly documentId: string;
+  /**
+   * The design as it is in a file (last saved or opened), or as it was started from something that can
+   * be made again (the demo, a generated grid, a share link); null when no file holds it. The tab warns
+   * before closing while the document differs from it.
+   */
+  readonly inFile: Design | null;
+  /** Why keeping the design in browser storage failed; stays until the design is saved to a file. */
+  readonly storageProblem: string | null;
 
   execute<A>(command: Command<A>, args: A): boolean;
   undo(): void;
@@ -36,9 +46,21 @@ export interface AppState {
   select(ids: readonly string[]): void;
   setViewport(viewport: Viewport): void;
   requestFit(): void;
-  /** Opens a restored design as one undoable step, so the design it replaces is never lost. */
-  replaceDesign(design: Design): void;
+  /**
+   * Starts another document (new, opened, reopened): a fresh history under its own storage id, so the
+   * document it replaces stays where it was stored and is never overwritten.
+   */
+  startDocument(design: Design, start: DocumentStart): void;
+  /** Records that `design` is now in a file: the close warning and any storage problem are cleared. */
+  markInFile(design: Design): void;
+  setStorageProblem(problem: string | null): void;
   setNotice(notice: Notice | null): void;
+}
+
+/** How a document starts: its storage id, and whether a file (or a reproducible source) holds it. */
+export interface DocumentStart {
+  readonly documentId: string;
+  readonly inFile: boolean;
 }
 
 export interface Notice {
@@ -99,6 +121,9 @@ function moveTo(history: History<Design>, before: AppState) {
   return { ...state, selectedIds };
 }
 
+/** Id of a store's first document until the app starts one (tests never store it). */
+export const UNSTORED_DOCUMENT_ID = 'unstored';
+
 export function createAppStore(initial: Design = demoDesign()) {
   return create<AppState>()((set, get) => ({
     ...withoutFlag(documentState(startHistory(initial))),
@@ -107,6 +132,9 @@ export function createAppStore(initial: Design = demoDesign()) {
     lastError: null,
     fitRequest: 0,
     notice: null,
+    documentId: UNSTORED_DOCUMENT_ID,
+    inFile: initial,
+    storageProblem: null,
 
     execute(command, args) {
       const { history } = get();
@@ -147,13 +175,21 @@ export function createAppStore(initial: Design = demoDesign()) {
     requestFit() {
       set({ fitRequest: get().fitRequest + 1 });
     },
-    replaceDesign(design) {
+    startDocument(design, start) {
       set({
-        ...withoutFlag(documentState(pushHistory(get().history, design))),
+        ...withoutFlag(documentState(startHistory(design))),
+        documentId: start.documentId,
+        inFile: start.inFile ? design : null,
         selectedIds: [],
         lastError: null,
         fitRequest: get().fitRequest + 1,
       });
+    },
+    markInFile(design) {
+      set({ inFile: design, storageProblem: null });
+    },
+    setStorageProblem(problem) {
+      set({ storageProblem: problem });
     },
     setNotice(notice) {
       set({ notice });

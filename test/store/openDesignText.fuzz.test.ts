@@ -21,30 +21,43 @@ describe('opening malformed files', () => {
         .tuple(fc.integer({ min: 0, max: demoText.length - 1 }), fc.constantFrom('"', '}', '-', 'x', '9'))
         .map(([at, ch]) => demoText.slice(0, at) + ch + demoText.slice(at + 1)),
     );
+    const documentId = store.getState().documentId;
     fc.assert(
       fc.property(malformed, (text) => {
         const opened = openDesignText(store, text, 'fuzz.json');
         if (opened) {
-          // A replaced character can leave a valid design (e.g. a digit); undo restores the original.
-          store.getState().undo();
-          store.setState({ history: { ...store.getState().history, future: [] } });
+          // A replaced character can leave a valid design (e.g. a digit): it opens as a new document.
+          expect(store.getState().documentId).not.toBe(documentId);
+          store.setState({ history: before, documentId });
         }
-        expect(store.getState().history.present).toBe(before.present);
-        expect(store.getState().history.past).toHaveLength(0);
+        expect(store.getState().history).toBe(before);
+        expect(store.getState().documentId).toBe(documentId);
       }),
       { numRuns: 3000 },
     );
   });
 
-  it('opens a good file as one undoable step', () => {
+  it('opens a good file as a new document with its own history, in a file', () => {
     const store = createAppStore(demoDesign());
-    const original = store.getState().history.present;
+    const documentId = store.getState().documentId;
     expect(openDesignText(store, JSON.stringify({ ...demoDesign(), name: 'Other' }), 'other.json')).toBe(
       true,
     );
-    expect(store.getState().history.present.name).toBe('Other');
-    expect(store.getState().notice?.kind).toBe('info');
-    store.getState().undo();
-    expect(store.getState().history.present).toBe(original);
+    const state = store.getState();
+    expect(state.history.present.name).toBe('Other');
+    expect(state.history.past).toHaveLength(0);
+    expect(state.documentId).not.toBe(documentId);
+    expect(state.inFile).toBe(state.history.present);
+    expect(state.notice?.kind).toBe('info');
+  });
+
+  it('quotes a long file name cut short, with control characters escaped', () => {
+    const store = createAppStore(demoDesign());
+    openDesignText(store, 'nonsense', `${'x'.repeat(500)}\u001b[31m.json`);
+    const text = store.getState().notice?.text ?? '';
+    expect(text).toContain('…');
+    expect(text.length).toBeLessThan(300);
+    openDesignText(store, 'nonsense', 'evil\u001b[2J.json');
+    expect(store.getState().notice?.text).toContain('evil\\u001b[2J.json');
   });
 });

@@ -1,0 +1,191 @@
+import { readFileSync } from 'node:fs';
+import { expect, test } from '@playwright/test';
+import { restoreDesign } from '../src/io/restore';
+import { DocumentsPage, installStoreAccess } from './documentsPage';
+import { loadDemoDesign } from './floorplanPage';
+
+test.beforeEach(async ({ page }) => installStoreAccess(page));
+
+test('an edited design survives opening a generated one; both are kept, and the first reopens intact', async ({
+  page,
+}) => {
+  const app = new DocumentsPage(page);
+  const demo = loadDemoDesign();
+  await app.openAt('/');
+  await app.clickBlock(demo, 'mat-r0c1');
+  await app.setCellsPerWordline('384');
+  await app.waitUntilKept();
+
+  await app.openAt('/?generate=64x64');
+  await expect(page.getByTestId('design-name')).toContainText('Generated 64 × 64');
+  // One key press edits the generated design (select all, then nudge).
+  await page.keyboard.press('Control+a');
+  await page.keyboard.press('ArrowRight');
+  await app.waitUntilKept();
+  const designs = (await app.storedKeys()).filter((k) => k.startsWith('design:'));
+  expect(designs).toHaveLength(2);
+
+  await app.reopenRecent(demo.name);
+  await expect(page.getByTestId('design-name')).toHaveText(demo.name);
+  await app.clickBlock(demo, 'mat-r0c1');
+  await expect(page.getByTestId('cells-per-wordline')).toHaveValue('384');
+});
+
+test('a reload reopens the tab’s design; a stored design that no longer restores is kept aside every time', async ({
+  page,
+}) => {
+  const app = new DocumentsPage(page);
+  const demo = loadDemoDesign();
+  await app.openAt('/');
+  await app.clickBlock(demo, 'mat-r0c1');
+  await app.setCellsPerWordline('384');
+  await app.waitUntilKept();
+  await page.reload();
+  await app.canvasArea.locator('canvas').first().waitFor();
+  await app.clickBlock(demo, 'mat-r0c1');
+  await expect(page.getByTestId('cells-per-wordline')).toHaveValue('384');
+
+  for (const round of [1, 2]) {
+    const [key] = (await app.storedKeys()).filter((k) => k.startsWith('design:'));
+    expect(key).toBeDefined();
+    const broken = `{"format":"matloom-design","version":1,"round":${round}`;
+    await app.putStored(key as string, broken);
+    await page.reload();
+    await expect(page.getByTestId('notice')).toContainText('could not be restored');
+    await expect(page.getByTestId('notice')).toContainText('kept aside unchanged under "unreadable:');
+    const aside = (await app.storedKeys()).filter((k) => k.startsWith('unreadable:'));
+    expect(aside).toHaveLength(round);
+    const texts = await Promise.all(aside.map((k) => app.storedText(k)));
+    expect(texts).toContain(broken);
+    // Make a fresh stored design for the next round.
+    await app.clickBlock(demo, 'mat-r0c1');
+    await app.setCellsPerWordline(String(300 + round));
+    await app.waitUntilKept();
+  }
+});
+
+test('a 65,536-mat design is kept and survives a reload', async ({ page }) => {
+  test.setTimeout(240_000);
+  const app = new DocumentsPage(page);
+  await page.goto('/?generate=256x256');
+  await app.canvasArea.locator('canvas').first().waitFor({ timeout: 120_000 });
+  await page.keyboard.press('Control+a');
+  await page.keyboard.press('ArrowRight');
+  await app.waitUntilKept(120_000);
+  await expect(page).toHaveURL(/\/$/);
+  await page.reload();
+  await app.canvasArea.locator('canvas').first().waitFor({ timeout: 120_000 });
+  await expect(page.getByTestId('design-name')).toContainText('Generated 256 × 256');
+  await expect(page.getByTestId('notice')).toHaveCount(0);
+  const [key] = (await app.storedKeys()).filter((k) => k.startsWith('design:'));
+  const size = await page.evaluate(
+    (k) => withStore('readonly', (s) => s.get(k)).then((b) => (b as Blob).size),
+    key as string,
+  );
+  expect(size).toBeGreaterThan(20_000_000);
+});
+
+test('Ctrl+S downloads a file that restores; Ctrl+O writes back to the picked file; a dropped file opens', async ({
+  page,
+}) => {
+  const app = new DocumentsPage(page);
+  await app.openAt('/');
+  const [download] = await Promise.all([page.waitForEvent('download'), page.keyboard.press('Control+s')]);
+  const saved = readFileSync(await download.path(), 'utf8');
+  expect(restoreDesign(saved).ok).toBe(true);
+
+  // A file picker that hands over a file with a writable handle, as Chromium's does.
+  await page.evaluate(
+    (text) => {
+      const written: string[] = [];
+      (window as unknown as { written: string[] }).written = written;
+      const handle = {
+        kind: 'file',
+        name: 'picked.matloom.json',
+        getFile: async () => new File([text], 'picked.matloom.json', { type: 'application/json' }),
+        createWritable: async () => {
+          let data = '';
+          return {
+            write: async (blob: Blob) => void (data = await blob.text()),
+            close: async () => void written.push(data),
+          };
+        },
+      };
+      (window as unknown as { showOpenFilePicker: () => Promise<unknown[]> }).showOpenFilePicker =
+        async () => [handle];
+    },
+    JSON.stringify({ ...loadDemoDesign(), name: 'Picked design' }),
+  );
+  await page.keyboard.press('Control+o');
+  await expect(page.getByTestId('design-name')).toHaveText('Picked design');
+  await page.keyboard.press('Control+s');
+  await expect(page.getByTestId('notice')).toContainText('Saved to picked.matloom.json');
+  const written = await page.evaluate(() => (window as unknown as { written: string[] }).written);
+  expect(written).toHaveLength(1);
+  expect(JSON.parse(written[0] as string).name).toBe('Picked design');
+
+  // Drop a UTF-16 file with a byte-order mark on the page.
+  const dropped = JSON.stringify({ ...loadDemoDesign(), name: 'Dropped design' });
+  const utf16 = [0xff, 0xfe, ...Array.from(Buffer.from(dropped, 'utf16le'))];
+  await page.evaluate((bytes) => {
+    const transfer = new DataTransfer();
+    transfer.items.add(new File([new Uint8Array(bytes)], 'dropped.json', { type: 'application/json' }));
+    window.dispatchEvent(new DragEvent('dragover', { dataTransfer: transfer, cancelable: true }));
+    window.dispatchEvent(new DragEvent('drop', { dataTransfer: transfer, cancelable: true }));
+  }, utf16);
+  await expect(page.getByTestId('design-name')).toHaveText('Dropped design');
+});
+
+test('the tab asks before closing while changes are in no file, and not after Save', async ({ page }) => {
+  const app = new DocumentsPage(page);
+  const demo = loadDemoDesign();
+  await app.openAt('/');
+  await app.clickBlock(demo, 'mat-r0c1');
+  await app.setCellsPerWordline('384');
+  const asked: string[] = [];
+  page.on('dialog', (dialog) => void asked.push(dialog.type()));
+  await page.reload();
+  expect(asked).toEqual(['beforeunload']);
+  await app.canvasArea.locator('canvas').first().waitFor();
+  await Promise.all([page.waitForEvent('download'), page.getByTestId('save-file').click()]);
+  await page.reload();
+  expect(asked).toEqual(['beforeunload']);
+});
+
+test('when storage fails, the notice stays until the design is saved to a file', async ({ page }) => {
+  await page.addInitScript(() => {
+    IDBObjectStore.prototype.put = function () {
+      throw new DOMException('The quota has been exceeded.', 'QuotaExceededError');
+    };
+  });
+  const app = new DocumentsPage(page);
+  const demo = loadDemoDesign();
+  await app.openAt('/');
+  await app.clickBlock(demo, 'mat-r0c1');
+  await app.setCellsPerWordline('384');
+  const problem = page.getByTestId('storage-problem');
+  await expect(problem).toContainText('QuotaExceededError');
+  await app.clickBlock(demo, 'mat-r0c0');
+  await expect(problem).toBeVisible();
+  await Promise.all([page.waitForEvent('download'), page.getByTestId('storage-problem-save').click()]);
+  await expect(problem).toHaveCount(0);
+});
+
+test('a share link carries the design and opens as a new document', async ({ page, context }) => {
+  await context.grantPermissions(['clipboard-read', 'clipboard-write']);
+  const app = new DocumentsPage(page);
+  const demo = loadDemoDesign();
+  await app.openAt('/');
+  await app.clickBlock(demo, 'mat-r0c1');
+  await app.setCellsPerWordline('384');
+  await page.getByTestId('share-link').click();
+  await expect(page.getByTestId('share-link')).toHaveAttribute('data-link', /#design=/);
+  const link = (await page.getByTestId('share-link').getAttribute('data-link')) as string;
+
+  const other = await context.newPage();
+  const viewer = new DocumentsPage(other);
+  await viewer.openAt(link);
+  await expect(other.getByTestId('notice')).toContainText('Opened a shared design as a new document');
+  await viewer.clickBlock(demo, 'mat-r0c1');
+  await expect(other.getByTestId('cells-per-wordline')).toHaveValue('384');
+});

@@ -1,0 +1,91 @@
+import { useEffect, useRef, useState } from 'react';
+import type { DocumentAbout } from '../io/documentShelf';
+import { useAppStore } from '../store/useAppStore';
+import { CommandButton } from './CommandButton';
+import { openDesignFile } from './designFiles';
+import { makeShareLink, registerFileInput } from './documentActions';
+import { documentSession } from './session';
+import './documents.css';
+
+function savedWhen(ms: number): string {
+  return new Date(ms).toLocaleString(undefined, { dateStyle: 'short', timeStyle: 'short' });
+}
+
+/** New, Open, Save, the recent designs and a share link. */
+export function DocumentMenu() {
+  const fileInput = useRef<HTMLInputElement>(null);
+  const [recent, setRecent] = useState<DocumentAbout[] | null>(null);
+  const documentId = useAppStore((s) => s.documentId);
+  const [link, setLink] = useState<string | null>(null);
+  useEffect(() => registerFileInput(() => fileInput.current?.click()), []);
+
+  const toggleRecent = async () => {
+    if (recent) setRecent(null);
+    else setRecent(await documentSession.recent());
+  };
+
+  return (
+    <div className="document-menu">
+      <CommandButton id="file.new" testId="new-design" />
+      <CommandButton id="file.open" testId="open-file" text="Open…" />
+      <input
+        ref={fileInput}
+        type="file"
+        accept=".json,application/json"
+        hidden
+        data-testid="open-file-input"
+        onChange={(e) => {
+          const file = e.target.files?.[0];
+          e.target.value = '';
+          if (file) void openDesignFile(file);
+        }}
+      />
+      <CommandButton id="file.save" testId="save-file" />
+      <button
+        type="button"
+        data-testid="recent-menu"
+        aria-expanded={recent !== null}
+        onClick={() => void toggleRecent()}
+      >
+        Recent
+      </button>
+      <button
+        type="button"
+        data-testid="share-link"
+        title="Copy a link that carries this design"
+        data-link={link ?? undefined}
+        onClick={async () => setLink(await makeShareLink())}
+      >
+        Share link
+      </button>
+      {recent && (
+        <div className="recent-list" role="dialog" aria-label="Recent designs" data-testid="recent-list">
+          {recent.length === 0 && <p>No designs kept in this browser yet.</p>}
+          <ul>
+            {recent.map((entry) => (
+              <li key={entry.id}>
+                <button
+                  type="button"
+                  data-testid="recent-entry"
+                  data-document-id={entry.id}
+                  disabled={entry.id === documentId}
+                  title={entry.name}
+                  onClick={async () => {
+                    setRecent(null);
+                    if (await documentSession.reopen(entry.id)) useAppStore.getState().setNotice(null);
+                  }}
+                >
+                  <span className="recent-name">{entry.name}</span>
+                  <span className="recent-about">
+                    {entry.blockCount.toLocaleString('en-US')} blocks · {savedWhen(entry.savedAt)}
+                    {entry.id === documentId ? ' · open' : ''}
+                  </span>
+                </button>
+              </li>
+            ))}
+          </ul>
+        </div>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,201 @@
+import {
+  listDocuments,
+  loadDocument,
+  newDocumentId,
+  saveDocument,
+  type DocumentAbout,
+  type KeyValueArea,
+} from '../io/documentShelf';
+import { restoreDesign } from '../io/restore';
+import { restoreShared, sharedPayload } from '../io/shareLink';
+import type { Design } from '../model/design';
+import { demoDesign } from '../model/demoDesign';
+import type { AppStore } from '../store/appStore';
+import { browserArea, claimDocument } from './browserArea';
+import { DocumentKeeper, SESSION_DOCUMENT_KEY, type KeeperStatus } from './documentKeeper';
+import { designFromQuery } from './startupDesign';
+
+/** Where versions before IndexedDB kept their one autosave (localStorage); moved into a document once. */
+const OLD_AUTOSAVE_KEY = 'matloom.autosave.v1';
+/** How long a reload waits for the page it replaces to let go of its document (ms). */
+const RELOAD_CLAIM_WAIT = 3000;
+
+/**
+ * The tab's documents: which one opens at start, keeping it stored, reopening a recent one and starting
+ * new ones. Every start other than a reopen makes a new document id, so nothing started here ever
+ * writes over another document.
+ */
+export class DocumentSession {
+  private release: (() => void) | null = null;
+  /** The document id this tab holds the lock of. */
+  private claimedId: string | null = null;
+  private readonly keeper: DocumentKeeper | null;
+  status: KeeperStatus = 'idle';
+  private statusListeners = new Set<() => void>();
+
+  constructor(
+    private readonly store: AppStore,
+    private readonly area: KeyValueArea | null = browserArea(),
+  ) {
+    this.keeper = area ? new DocumentKeeper(store, area) : null;
+  }
+
+  /** Opens the first document: a share link, a start address, this tab's document, the newest one, or the demo. */
+  async start(location: { search: string; hash: string }): Promise<void> {
+    const notices: string[] = [];
+    await this.moveOldAutosave();
+    const payload = sharedPayload(location.hash);
+    if (payload !== null) {
+      const shared = await restoreShared(payload);
+      if (shared.ok) {
+        this.startNew(shared.design, true);
+        this.store.getState().setNotice({ kind: 'info', text: 'Opened a shared design as a new document.' });
+        return this.watch();
+      }
+      notices.push(
+        `The shared design in this address could not be opened: ${shared.errors.slice(0, 2).join('; ')}.`,
+      );
+    }
+    const requested = designFromQuery(location.search);
+    if (requested) {
+      this.startNew(requested, true);
+      return this.watch(notices);
+    }
+    const ownId = readSessionId();
+    if (ownId && (await this.reopen(ownId, RELOAD_CLAIM_WAIT, notices))) return this.watch(notices);
+    for (const about of await this.recent()) {
+      if (about.id === ownId) continue;
+      if (await this.reopen(about.id, 0, notices)) return this.watch(notices);
+    }
+    this.startNew(demoDesign(), true);
+    return this.watch(notices);
+  }
+
+  /** Newest first; empty without storage. */
+  async recent(): Promise<DocumentAbout[]> {
+    if (!this.area) return [];
+    try {
+      return await listDocuments(this.area);
+    } catch {
+      return [];
+    }
+  }
+
+  /**
+   * Starts a new document with `design` under a fresh id. `reproducible`: the design can be made again
+   * (demo, generated, blank, shared link) or is in a file, so closing the tab unedited loses nothing, and
+   * it is stored only once edited.
+   */
+  startNew(design: Design, reproducible: boolean): void {
+    this.letGo();
+    const id = newDocumentId();
+    this.keeper?.markWritten(id, reproducible ? design : null);
+    this.store.getState().startDocument(design, { documentId: id, inFile: reproducible });
+  }
+
+  /** Reopens a stored document; false (with a notice line) when it cannot be. */
+  async reopen(id: string, waitMs = 0, notices: string[] = []): Promise<boolean> {
+    if (!this.area) return false;
+    if (id === this.store.getState().documentId) return true;
+    const release = await claimDocument(id, waitMs);
+    if (!release) {
+      notices.push('That design is open in another tab.');
+      this.flushNotices(notices);
+      return false;
+    }
+    const loaded = await loadDocument(this.area, id);
+    if (loaded.kind !== 'restored') {
+      release();
+      if (loaded.kind !== 'none') notices.push(loaded.message);
+      this.flushNotices(notices);
+      return false;
+    }
+    this.keeper?.flushNow();
+    this.letGo();
+    this.release = release;
+    this.claimedId = id;
+    this.keeper?.markWritten(id, loaded.design);
+    this.store.getState().startDocument(loaded.design, { documentId: id, inFile: false });
+    try {
+      sessionStorage.setItem(SESSION_DOCUMENT_KEY, id);
+    } catch {
+      // Only the reload shortcut is lost.
+    }
+    return true;
+  }
+
+  /** Writes a pending change at once (page hide). */
+  flush(): void {
+    this.keeper?.flushNow();
+  }
+
+  onStatus(listener: () => void): () => void {
+    this.statusListeners.add(listener);
+    return () => this.statusListeners.delete(listener);
+  }
+
+  private watch(notices: string[] = []): void {
+    this.flushNotices(notices);
+    // Hold the lock of whichever document is open (new ones, files opened, reopened ones).
+    const claimOpen = () => {
+      const id = this.store.getState().documentId;
+      if (id === this.claimedId) return;
+      this.letGo();
+      this.claimedId = id;
+      void claimDocument(id).then((release) => {
+        if (this.claimedId === id) this.release = release;
+        else release?.();
+      });
+    };
+    claimOpen();
+    this.store.subscribe((state, previous) => {
+      if (state.documentId !== previous.documentId) claimOpen();
+    });
+    if (!this.keeper) {
+      this.store
+        .getState()
+        .setStorageProblem(
+          'This browser offers no storage to keep designs in (IndexedDB). Save to a file to keep your work.',
+        );
+      return;
+    }
+    this.keeper.watch((status) => {
+      this.status = status;
+      for (const listener of this.statusListeners) listener();
+    });
+  }
+
+  private flushNotices(notices: string[]): void {
+    if (notices.length > 0) this.store.getState().setNotice({ kind: 'error', text: notices.join(' ') });
+  }
+
+  private letGo(): void {
+    this.release?.();
+    this.release = null;
+    this.claimedId = null;
+  }
+
+  /** Moves the single autosave of earlier versions into a document of its own, then removes it. */
+  private async moveOldAutosave(): Promise<void> {
+    if (!this.area) return;
+    try {
+      const text = localStorage.getItem(OLD_AUTOSAVE_KEY);
+      if (text === null) return;
+      const restored = restoreDesign(text);
+      // A text that no longer restores stays where it is: nothing is dropped.
+      if (!restored.ok) return;
+      await saveDocument(this.area, newDocumentId(), restored.design, text);
+      localStorage.removeItem(OLD_AUTOSAVE_KEY);
+    } catch {
+      // Left in localStorage; a later start tries again.
+    }
+  }
+}
+
+function readSessionId(): string | null {
+  try {
+    return sessionStorage.getItem(SESSION_DOCUMENT_KEY);
+  } catch {
+    return null;
+  }
+}

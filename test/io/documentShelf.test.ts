@@ -1,0 +1,151 @@
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { designTextPieces } from '../../src/io/designText';
+import {
+  designKey,
+  listDocuments,
+  listKeptAside,
+  loadDocument,
+  newDocumentId,
+  saveDocument,
+  type KeyValueArea,
+} from '../../src/io/documentShelf';
+import { demoDesign } from '../../src/model/demoDesign';
+import { designFromQuery } from '../../src/app/startupDesign';
+
+// Source: common practice (no source): stored work is never dropped, and a message says only what is true.
+
+/** An in-memory key-value area; `failSet` makes every write fail as a full disk would. */
+function memoryArea(
+  failSet: (key: string) => boolean = () => false,
+): KeyValueArea & { data: Map<string, unknown> } {
+  const data = new Map<string, unknown>();
+  return {
+    data,
+    get: async (k) => data.get(k),
+    set: async (k, v) => {
+      if (failSet(k)) throw new DOMException('The quota has been exceeded.', 'QuotaExceededError');
+      data.set(k, v);
+    },
+    del: async (k) => void data.delete(k),
+    keys: async () => [...data.keys()],
+  };
+}
+
+const textOf = (design: unknown) => JSON.stringify(design);
+
+describe('document shelf', () => {
+  it('keeps each document under its own id and lists them newest first', async () => {
+    const area = memoryArea();
+    const first = { ...demoDesign(), name: 'First' };
+    const second = { ...demoDesign(), name: 'Second' };
+    await saveDocument(area, 'a', first, textOf(first), 1000);
+    await saveDocument(area, 'b', second, new Blob([textOf(second)]), 2000);
+    expect((await listDocuments(area)).map((d) => d.name)).toEqual(['Second', 'First']);
+    const a = await loadDocument(area, 'a');
+    const b = await loadDocument(area, 'b');
+    expect(a.kind === 'restored' && a.design.name).toBe('First');
+    expect(b.kind === 'restored' && b.design.name).toBe('Second');
+    expect(await loadDocument(area, 'missing')).toEqual({ kind: 'none' });
+  });
+
+  it('keeps a bad stored design aside under a new key every time, and says so', async () => {
+    const area = memoryArea();
+    for (const [round, now] of [
+      [1, 10],
+      [2, 20],
+    ] as const) {
+      area.data.set(designKey('a'), `{"broken":${round}`);
+      const loaded = await loadDocument(area, 'a', now);
+      expect(loaded.kind).toBe('keptAside');
+      if (loaded.kind === 'keptAside') expect(loaded.message).toContain(`unreadable:a:${now}`);
+      expect(area.data.has(designKey('a'))).toBe(false);
+    }
+    const aside = await listKeptAside(area);
+    expect(aside).toHaveLength(2);
+    expect(aside.map((k) => area.data.get(k))).toEqual(['{"broken":1', '{"broken":2']);
+  });
+
+  it('does not claim a copy was kept when writing it failed, and leaves the design where it was', async () => {
+    const area = memoryArea((k) => k.startsWith('unreadable:'));
+    area.data.set(designKey('a'), '{"broken":true');
+    const loaded = await loadDocument(area, 'a');
+    expect(loaded.kind).toBe('unreadable');
+    if (loaded.kind === 'unreadable') {
+      expect(loaded.message).toContain('keeping a copy aside failed');
+      expect(loaded.message).not.toContain('was kept aside');
+    }
+    expect(area.data.get(designKey('a'))).toBe('{"broken":true');
+  });
+
+  it('reports a storage failure to the caller', async () => {
+    const area = memoryArea(() => true);
+    await expect(saveDocument(area, 'a', demoDesign(), '{}')).rejects.toThrow(/quota/);
+  });
+
+  it(
+    'valid designs with one field broken are kept aside, never restored, never lost',
+    { timeout: 60_000 },
+    async () => {
+      const base = JSON.parse(textOf(demoDesign())) as Record<string, unknown>;
+      const broken = fc.oneof(
+        fc.constant({ ...base, name: '' }),
+        fc.constant({ ...base, name: 'x'.repeat(201) }),
+        fc.constant({ ...base, version: 99 }),
+        fc.constant({ ...base, blocks: 'none' }),
+        fc.constant({ ...base, process: { ...(base.process as object), featureSize: -1 } }),
+        fc.constant({ ...base, cells: [] }),
+        fc.integer({ min: 0, max: 15 }).map((i) => ({
+          ...base,
+          blocks: (base.blocks as Record<string, unknown>[]).map((b, k) =>
+            k === i ? { ...b, x: 'left' } : b,
+          ),
+        })),
+        fc.integer({ min: 0, max: 15 }).map((i) => ({
+          ...base,
+          blocks: (base.blocks as Record<string, unknown>[]).map((b, k) =>
+            k === i || k === (i + 1) % 16 ? { ...b, id: 'dup' } : b,
+          ),
+        })),
+      );
+      await fc.assert(
+        fc.asyncProperty(broken, fc.nat(), async (design, now) => {
+          const area = memoryArea();
+          const text = textOf(design);
+          area.data.set(designKey('d'), text);
+          const loaded = await loadDocument(area, 'd', now);
+          expect(loaded.kind).toBe('keptAside');
+          expect(area.data.get(`unreadable:d:${now}`)).toBe(text);
+          expect(({} as Record<string, unknown>).polluted).toBeUndefined();
+        }),
+        { numRuns: 200 },
+      );
+    },
+  );
+
+  it('reads a stored design with a __proto__ key without polluting objects', async () => {
+    const area = memoryArea();
+    area.data.set(designKey('p'), `{"__proto__":{"polluted":true},${textOf(demoDesign()).slice(1)}`);
+    const loaded = await loadDocument(area, 'p');
+    expect(loaded.kind).toBe('restored');
+    expect(({} as Record<string, unknown>).polluted).toBeUndefined();
+    if (loaded.kind === 'restored') expect(Object.getPrototypeOf(loaded.design)).toBe(Object.prototype);
+  });
+
+  it('makes distinct ids', () => {
+    const ids = new Set(Array.from({ length: 1000 }, () => newDocumentId(42)));
+    expect(ids.size).toBe(1000);
+  });
+});
+
+describe('design text in pieces', () => {
+  it('joins to exactly JSON.stringify of the design, for any piece size', () => {
+    const design = designFromQuery('?generate=5x7');
+    if (!design) throw new Error('no generated design');
+    for (const size of [1, 3, 100, 5000]) {
+      expect(Array.from(designTextPieces(design, size)).join('')).toBe(JSON.stringify(design));
+    }
+    const empty = { ...design, blocks: [] };
+    expect(Array.from(designTextPieces(empty)).join('')).toBe(JSON.stringify(empty));
+  });
+});
