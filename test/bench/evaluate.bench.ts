@@ -47,6 +47,8 @@ function median(values: readonly number[]): number {
 interface Row {
   readonly mats: number;
   readonly blocks: number;
+  readonly runs: number;
+  readonly minMs: number;
   readonly medianMs: number;
   /** Median process CPU time per run (ms), all threads: shows how much of the wall time was ours. */
   readonly cpuMs: number;
@@ -83,6 +85,8 @@ function measure(side: number): Row {
   return {
     mats,
     blocks: design.blocks.length,
+    runs,
+    minMs: Math.min(...times),
     medianMs,
     cpuMs: median(cpu),
     usPerMat: (medianMs * 1000) / mats,
@@ -92,10 +96,12 @@ function measure(side: number): Row {
 const rows = SIDES.map(measure);
 const fmt = (n: number, decimals: number) => n.toFixed(decimals);
 const table = [
-  ['mats', 'blocks', 'median ms', 'cpu ms', 'µs per mat'],
+  ['warm: mats', 'blocks', 'runs', 'min ms', 'median ms', 'cpu ms', 'µs per mat'],
   ...rows.map((r) => [
     r.mats.toLocaleString('en-US'),
     r.blocks.toLocaleString('en-US'),
+    String(r.runs),
+    fmt(r.minMs, 2),
     fmt(r.medianMs, 2),
     fmt(r.cpuMs, 2),
     fmt(r.usPerMat, 3),

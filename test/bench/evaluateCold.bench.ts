@@ -1,0 +1,41 @@
+/**
+ * evaluate() cold: the first three calls on a 4,096-mat floorplan in a fresh Node process (no JIT
+ * warm-up), over several processes (`npm run bench`). Goal: each of the first three calls ≤ 15 ms.
+ * Prints load average, process count, min and median per call; never fails the build.
+ */
+import { spawnSync } from 'node:child_process';
+import { cpus, loadavg } from 'node:os';
+import { fileURLToPath } from 'node:url';
+
+const PROCESSES = 7;
+const GOAL_MS = 15;
+const CHILD = fileURLToPath(new URL('./evaluateColdChild.ts', import.meta.url));
+
+const calls: number[][] = [[], [], []];
+const cpuCalls: number[][] = [[], [], []];
+for (let p = 0; p < PROCESSES; p++) {
+  const child = spawnSync(process.execPath, ['--import', 'tsx', CHILD], { encoding: 'utf8' });
+  if (child.status !== 0) throw new Error(`cold child failed: ${child.stderr}`);
+  const { times, cpu } = JSON.parse(child.stdout.trim().split('\n').pop() ?? '{}') as {
+    times: number[];
+    cpu: number[];
+  };
+  times.forEach((t, i) => calls[i]?.push(t));
+  cpu.forEach((t, i) => cpuCalls[i]?.push(t));
+}
+
+const median = (v: readonly number[]) => [...v].sort((a, b) => a - b)[Math.floor(v.length / 2)] ?? NaN;
+const load = loadavg()
+  .map((l) => l.toFixed(2))
+  .join(' ');
+console.log(
+  `evaluate() cold, 4,096 mats, first calls in a fresh process (${cpus().length} CPUs, load ${load})`,
+);
+calls.forEach((times, i) => {
+  const med = median(times);
+  console.log(
+    `cold call ${i + 1}: ${PROCESSES} processes  min ${Math.min(...times).toFixed(1)} ms  median ` +
+      `${med.toFixed(1)} ms  (goal ≤ ${GOAL_MS} ms: ${med <= GOAL_MS ? 'met' : 'NOT met'}); ` +
+      `CPU median ${median(cpuCalls[i] ?? []).toFixed(1)} ms`,
+  );
+});
