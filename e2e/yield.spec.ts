@@ -4,6 +4,7 @@ import { DEFAULT_REPAIR } from '../src/model/builtins';
 import { formatQuantity } from '../src/model/units';
 import { blockRect } from '../src/geometry/placedBlocks';
 import { EditorPage } from './editorPage';
+import { ExplorerPage } from './explorerPage';
 import { FloorplanPage, loadDemoDesign } from './floorplanPage';
 
 test('yield tab: figures explain themselves, fewer spares lower the repair probability, Monte Carlo agrees', async ({
@@ -72,4 +73,28 @@ test('close up, the spare rows and columns of a repair domain are drawn in its f
   for (let i = 0; i < 40 && (await app.camera()).scale < 300; i++) await page.mouse.wheel(0, -200);
   expect((await app.camera()).scale).toBeGreaterThan(300);
   await page.screenshot({ path: 'test-results/yield-spares-close-up.png' });
+});
+
+test('explorer: sweep spares, plot die yield against area per bit with redundancy, a Pareto front; variants carry yield', async ({
+  page,
+}) => {
+  const explorer = new ExplorerPage(page);
+  await explorer.open();
+  await explorer.setRange('bl', 256, 1024, 256);
+  await explorer.setRange('wl', 512, 1024, 512);
+  await page.getByTestId('sweep-spares').check();
+  // 4 × 2 partitions × the cells and processes ticked × 5 × 5 spare pairs.
+  expect((await explorer.sweepSize()) % 25).toBe(0);
+  await explorer.runSweep();
+  await page.getByTestId('x-axis').selectOption('areaPerBitWithRedundancy');
+  await page.getByTestId('y-axis').selectOption('dieYield');
+  await expect(page.getByTestId('y-axis-label')).toContainText('Die yield');
+  await expect(page.getByTestId('front-point').first()).toBeVisible();
+  await page.screenshot({ path: 'test-results/yield-explorer.png' });
+  await explorer.hoverFrontPoint(0);
+  await expect(explorer.figure('hover-point', 'dieYield')).toContainText('%');
+
+  await page.getByTestId('view-variants').click();
+  await expect(page.getByTestId('variant-v1-dieYield')).toContainText('%');
+  await expect(page.getByTestId('variant-v1-goodDiesPerWafer')).not.toHaveText('—');
 });

@@ -8,8 +8,27 @@ const SPARES = (f: { spareRows: number; spareColumns: number }) => [
 const STAPPER =
   'C. H. Stapper, negative-binomial yield model, IBM J. Res. Dev., 1980s (from memory); Hennessy & Patterson, Computer Architecture: A Quantitative Approach, 5th ed., 2012, ch. 1';
 
+/** A spare count the yield figures assume: an input, shown beside them. */
+const spareCount = <const Key extends 'spareRows' | 'spareColumns'>(key: Key, label: string) =>
+  bankFigure({
+    key,
+    label,
+    quantity: 'count',
+    better: 'neither',
+    exportKey: null,
+    explain: (f) => ({
+      symbol: key === 'spareRows' ? 'R' : 'C',
+      formula: `${label} (the Yield tab, or the explorer's spare sweep)`,
+      inputs: SPARES(f),
+      method: 'An input of the yield figures.',
+      source: SOURCES.common,
+    }),
+  });
+
 /** Comparison figures of a bank's yield and redundancy (explorer axes, point card, variants table). */
 export const BANK_YIELD_FIGURES = [
+  spareCount('spareRows', 'Spare rows per domain'),
+  spareCount('spareColumns', 'Spare columns per domain'),
   bankFigure({
     key: 'dieYield',
     label: 'Die yield',

@@ -20,6 +20,16 @@ export const CARD_FIGURES: readonly FigureKey[] = [
   'usableBits',
 ];
 
+/** Yield figures a card adds when the sweep assessed them (spares swept). */
+const YIELD_CARD_FIGURES: readonly FigureKey[] = [
+  'dieYield',
+  'repairProbability',
+  'goodDiesPerWafer',
+  'areaPerBitWithRedundancy',
+  'spareRows',
+  'spareColumns',
+];
+
 interface PointCardProps {
   readonly point: SweepPoint;
   readonly request: SweepRequest;
@@ -50,28 +60,30 @@ export function PointCard({ point, request, limits, onFront, explainable = false
       {f && (
         <table className="point-figures">
           <tbody>
-            {CARD_FIGURES.map((key) => (
-              <tr key={key}>
-                <td>
-                  {explainable ? (
-                    <button
-                      type="button"
-                      className="link"
-                      title="Show formula, inputs and source"
-                      aria-expanded={open === key}
-                      onClick={() => setOpen(open === key ? null : key)}
-                    >
-                      {bankFigureEntry(key).label}
-                    </button>
-                  ) : (
-                    bankFigureEntry(key).label
-                  )}
-                </td>
-                <td className="num" data-testid={`${testId}-${key}`}>
-                  {formatQuantity(f[key], bankFigureEntry(key).quantity)}
-                </td>
-              </tr>
-            ))}
+            {(Number.isFinite(f.dieYield) ? [...CARD_FIGURES, ...YIELD_CARD_FIGURES] : CARD_FIGURES).map(
+              (key) => (
+                <tr key={key}>
+                  <td>
+                    {explainable ? (
+                      <button
+                        type="button"
+                        className="link"
+                        title="Show formula, inputs and source"
+                        aria-expanded={open === key}
+                        onClick={() => setOpen(open === key ? null : key)}
+                      >
+                        {bankFigureEntry(key).label}
+                      </button>
+                    ) : (
+                      bankFigureEntry(key).label
+                    )}
+                  </td>
+                  <td className="num" data-testid={`${testId}-${key}`}>
+                    {formatQuantity(f[key], bankFigureEntry(key).quantity)}
+                  </td>
+                </tr>
+              ),
+            )}
           </tbody>
         </table>
       )}
