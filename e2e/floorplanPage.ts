@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
 import type { Locator, Page } from '@playwright/test';
 import { blockRect } from '../src/geometry/placedBlocks';
-import { DEMO_FILE_NAME } from '../src/model/demoDesign';
+import { DEMO_FILE_NAME } from '../src/designs/demoDesign';
 import { restoreDesign } from '../src/io/restore';
 import type { Design } from '../src/model/design';
 

@@ -9,7 +9,7 @@ import {
 import { restoreDesign } from '../io/restore';
 import { restoreShared, sharedPayload } from '../io/shareLink';
 import type { Design } from '../model/design';
-import { demoDesign } from '../model/demoDesign';
+import { demoDesign } from '../designs/demoDesign';
 import type { AppStore } from '../store/appStore';
 import { browserArea, claimDocument } from './browserArea';
 import { DocumentKeeper, SESSION_DOCUMENT_KEY, type KeeperStatus } from './documentKeeper';

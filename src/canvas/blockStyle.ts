@@ -1,4 +1,4 @@
-import type { BlockType } from '../model/block';
+import { BLOCK_TYPE_LABEL, BLOCK_TYPES, type BlockType } from '../model/block';
 
 /**
  * Matloom's own block palette: fill and outline per block type. The fills are tints of the Okabe–Ito
@@ -39,3 +39,55 @@ export const CANVAS_BACKGROUND = '#f7f6f2';
 export const BITLINE_STROKE = '#2f6f5e';
 export const WORDLINE_STROKE = '#7a55b0';
 export const STORAGE_NODE_FILL = '#1f4f43';
+
+/** One row of the legend: a swatch and its words. */
+export interface LegendRow {
+  /** Short words beside the swatch. */
+  readonly label: string;
+  /** Full words, for a tooltip. */
+  readonly title: string;
+  readonly fill: string;
+  readonly stroke: string;
+  /** A check marker (drawn with a heavier outline) rather than a block colour. */
+  readonly marker: boolean;
+}
+
+/** Short legend words where the block type's own name is long. */
+const LEGEND_LABEL: Partial<Record<BlockType, string>> = {
+  senseAmpStrip: 'SA strip',
+  wordlineDriverStrip: 'SWD strip',
+  rowDecoder: 'decoder',
+  columnDecoder: 'decoder',
+};
+
+/**
+ * The legend, on screen (Legend.tsx) and in the exported image (floorplanImage.ts): every block colour
+ * in block-type order (types that share a colour once), then the two check markers.
+ */
+export const LEGEND_ROWS: readonly LegendRow[] = [
+  ...BLOCK_TYPES.filter(
+    (type, i) => BLOCK_TYPES.findIndex((t) => BLOCK_STYLE[t].fill === BLOCK_STYLE[type].fill) === i,
+  ).map((type) => ({
+    label: LEGEND_LABEL[type] ?? BLOCK_TYPE_LABEL[type],
+    title: BLOCK_TYPES.filter((t) => BLOCK_STYLE[t].fill === BLOCK_STYLE[type].fill)
+      .map((t) => BLOCK_TYPE_LABEL[t])
+      .join(', '),
+    fill: BLOCK_STYLE[type].fill,
+    stroke: BLOCK_STYLE[type].stroke,
+    marker: false,
+  })),
+  {
+    label: 'error',
+    title: 'a check that fails',
+    fill: 'rgba(198, 40, 40, 0.16)',
+    stroke: ERROR_STROKE,
+    marker: true,
+  },
+  {
+    label: 'warning',
+    title: 'a check that warns',
+    fill: 'rgba(201, 133, 0, 0.16)',
+    stroke: WARNING_STROKE,
+    marker: true,
+  },
+];

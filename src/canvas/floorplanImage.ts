@@ -1,11 +1,10 @@
 import type { Report } from '../engine';
 import { placeBlocks } from '../geometry/placedBlocks';
 import { boundingBox } from '../geometry/rect';
-import { BLOCK_TYPE_LABEL, type BlockType } from '../model/block';
 import type { Design } from '../model/design';
 import { formatQuantity } from '../model/units';
 import type { Viewport } from '../store/appStore';
-import { BLOCK_STYLE, CANVAS_BACKGROUND, ERROR_STROKE } from './blockStyle';
+import { BLOCK_STYLE, CANVAS_BACKGROUND, ERROR_STROKE, LEGEND_ROWS } from './blockStyle';
 import { fitViewport, MICROMETRES_PER_METRE } from './viewportMath';
 
 /** What a PNG export shows. */
@@ -21,7 +20,6 @@ export interface ImageOptions {
 /** Size of the image at 1× when exporting the whole floorplan (CSS px). */
 export const WHOLE_FLOORPLAN_WIDTH = 1200;
 const TITLE_BLOCK_HEIGHT = 92;
-const LEGEND_TYPES: readonly BlockType[] = ['mat', 'senseAmpStrip', 'wordlineDriverStrip', 'rowDecoder'];
 
 /** Output size in CSS px (before scale) for the chosen region. */
 export function imageFrame(
@@ -93,12 +91,8 @@ export function renderFloorplanImage(
 }
 
 function drawLegend(ctx: CanvasRenderingContext2D, width: number, height: number) {
-  const rows = [
-    ...LEGEND_TYPES.map((t) => ({ label: t === 'rowDecoder' ? 'decoder' : BLOCK_TYPE_LABEL[t], type: t })),
-    null,
-  ];
-  const boxW = 190;
-  const boxH = rows.length * 17 + 10;
+  const boxW = 230;
+  const boxH = LEGEND_ROWS.length * 17 + 10;
   const x0 = width - boxW - 10;
   const y0 = height - boxH - 10;
   ctx.fillStyle = 'rgba(255,255,255,0.92)';
@@ -106,18 +100,17 @@ function drawLegend(ctx: CanvasRenderingContext2D, width: number, height: number
   ctx.strokeStyle = '#d4d0c6';
   ctx.strokeRect(x0, y0, boxW, boxH);
   ctx.font = '12px sans-serif';
-  rows.forEach((row, i) => {
+  LEGEND_ROWS.forEach((row, i) => {
     const y = y0 + 8 + i * 17;
-    if (row) {
-      ctx.fillStyle = BLOCK_STYLE[row.type].fill;
-      ctx.fillRect(x0 + 8, y, 14, 10);
-      ctx.strokeStyle = BLOCK_STYLE[row.type].stroke;
-    } else {
-      ctx.strokeStyle = ERROR_STROKE;
-    }
+    ctx.fillStyle = row.fill;
+    ctx.fillRect(x0 + 8, y, 14, 10);
+    ctx.strokeStyle = row.stroke;
+    ctx.lineWidth = row.marker ? 2 : 1;
     ctx.strokeRect(x0 + 8, y, 14, 10);
+    ctx.lineWidth = 1;
     ctx.fillStyle = '#1f2328';
-    ctx.fillText(row ? row.label : 'failing check', x0 + 30, y + 10);
+    // The image has room for the full words; the status bar shows the short ones.
+    ctx.fillText(row.title, x0 + 30, y + 10);
   });
 }
 

@@ -5,7 +5,7 @@
  */
 import { writeFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
-import { DEMO_FILE_NAME, demoDesign } from '../model/demoDesign';
+import { DEMO_FILE_NAME, demoDesign } from '../designs/demoDesign';
 
 const target = fileURLToPath(new URL(`../../public/${DEMO_FILE_NAME}`, import.meta.url));
 writeFileSync(target, `${JSON.stringify(demoDesign(), null, 2)}\n`, 'utf8');

@@ -1,5 +1,5 @@
-import type { BuildSpec } from '../build/buildPartition';
-import { planPartition, type PartitionPlan } from '../build/partitionPlan';
+import type { BuildSpec } from '../designs/buildPartition';
+import { planPartition, type PartitionPlan } from '../designs/partitionPlan';
 import {
   cellLeakage,
   firingKinds,

@@ -1,4 +1,4 @@
-import { shortProcessName } from '../build/buildPartition';
+import { shortProcessName } from '../designs/buildPartition';
 import { BANK_FIGURE_CATALOGUE } from '../engine';
 import { formatQuantity, QUANTITIES, type Quantity } from '../model/units';
 import { infeasibleBecause, type FeasibilityLimits } from './chartData';

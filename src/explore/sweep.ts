@@ -1,5 +1,5 @@
-import type { BuildSpec } from '../build/buildPartition';
-import type { StripSizes } from '../build/partitionPlan';
+import type { BuildSpec } from '../designs/buildPartition';
+import type { StripSizes } from '../designs/partitionPlan';
 import type { CellDefinition } from '../model/cell';
 import type { OperatingConditions } from '../model/operating';
 import type { ProcessProfile } from '../model/process';

@@ -1,4 +1,5 @@
-import type { StripSizes } from '../build/partitionPlan';
+import { DEMO_STRIPS } from '../designs/demoSizes';
+import type { StripSizes } from '../designs/partitionPlan';
 import { BUILTIN_PROCESSES } from '../model/builtins';
 import type { Design } from '../model/design';
 import type { ProcessProfile } from '../model/process';
@@ -37,18 +38,11 @@ export const DESIGN_PROCESS = 'design';
 /** Capacities offered for a bank (bits). */
 export const TARGET_CAPACITIES: readonly number[] = [4, 16, 64, 256, 1024, 4096].map((m) => m * 2 ** 20);
 
-/** Periphery of the invented demo bank. */
-export const DEFAULT_STRIPS: StripSizes = {
-  senseAmpStripHeight: 6e-6,
-  wordlineDriverStripWidth: 3e-6,
-  rowDecoderWidth: 18e-6,
-  columnDecoderHeight: 14e-6,
-};
-
 export function defaultSweepSettings(design: Design): SweepSettings {
   return {
     targetBits: 64 * 2 ** 20,
-    strips: DEFAULT_STRIPS,
+    // Periphery of the invented demo bank.
+    strips: DEMO_STRIPS,
     cellsPerBitline: { from: 64, to: 1024, step: 64 },
     cellsPerWordline: { from: 128, to: 2048, step: 128 },
     cellIds: design.cells.map((c) => c.id),

@@ -3,7 +3,7 @@ import type { Command } from '../commands/command';
 import { editReport, evaluate, type Report } from '../engine';
 import { editProblems } from '../io/editCheck';
 import type { Design } from '../model/design';
-import { demoDesign } from '../model/demoDesign';
+import { demoDesign } from '../designs/demoDesign';
 import { blocksEditedInPlace } from '../model/designEdit';
 import { pushHistory, redoHistory, startHistory, undoHistory, type History } from './history';
 

@@ -1,4 +1,5 @@
 import { create } from 'zustand';
+import { DEMO_MAT, DEMO_STRIPS } from '../designs/demoSizes';
 import { BLOCK_TYPES, type BitlineAxis } from '../model/block';
 
 /**
@@ -32,13 +33,13 @@ export interface ToolOptions {
 export const DEFAULT_TOOL_OPTIONS: ToolOptions = {
   cellId: '',
   bitlineAxis: 'vertical',
-  cellsPerBitline: 512,
-  cellsPerWordline: 512,
+  cellsPerBitline: DEMO_MAT.cellsPerBitline,
+  cellsPerWordline: DEMO_MAT.cellsPerWordline,
   thickness: {
-    senseAmpStrip: 6e-6,
-    wordlineDriverStrip: 3e-6,
-    rowDecoder: 18e-6,
-    columnDecoder: 14e-6,
+    senseAmpStrip: DEMO_STRIPS.senseAmpStripHeight,
+    wordlineDriverStrip: DEMO_STRIPS.wordlineDriverStripWidth,
+    rowDecoder: DEMO_STRIPS.rowDecoderWidth,
+    columnDecoder: DEMO_STRIPS.columnDecoderHeight,
     spacer: 5e-6,
   },
   length: {

@@ -1,4 +1,4 @@
-import { demoDesign } from '../model/demoDesign';
+import { demoDesign } from '../designs/demoDesign';
 import { createAppStore } from './appStore';
 
 /**

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { clipboardText, createEditorActions } from '../../src/app/editorActions';
 import { blockRect } from '../../src/geometry/placedBlocks';
 import { restoreDesign } from '../../src/io/restore';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 import { createAppStore } from '../../src/store/appStore';
 import { createEditorStore } from '../../src/store/editorStore';
 

@@ -9,7 +9,7 @@
 import { cpus, loadavg } from 'node:os';
 import { performance } from 'node:perf_hooks';
 import { evaluate } from '../../src/engine/evaluation/evaluate';
-import { gridFloorplan } from '../../src/geometry/gridFloorplan';
+import { gridFloorplan } from '../../src/designs/gridFloorplan';
 import { DEMO_PROCESS, FOLDED_8F2_CELL } from '../../src/model/builtins';
 import type { Design } from '../../src/model/design';
 import { designWith } from '../support/designs';

@@ -12,7 +12,7 @@ import { blockRect } from '../../src/geometry/placedBlocks';
 import { placedDesign } from '../../src/geometry/placedIndex';
 import { buildSnapTargets } from '../../src/geometry/snapping';
 import type { Block, Mat } from '../../src/model/block';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 import type { Design } from '../../src/model/design';
 import { DEFAULT_TOOL_OPTIONS } from '../../src/store/editorStore';
 import { FOLDED_8F2_CELL } from '../../src/model/builtins';

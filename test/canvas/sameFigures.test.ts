@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { sameVisibleFigures } from '../../src/canvas/sameFigures';
 import { evaluate, preparePreview, previewReport } from '../../src/engine';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 
 describe('skipping panel updates that would show nothing new', () => {
   const design = demoDesign();

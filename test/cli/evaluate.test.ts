@@ -3,7 +3,7 @@ import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { EXIT, runEvaluateCli } from '../../src/cli/runEvaluate';
 import { MAX_DESIGN_TEXT_LENGTH } from '../../src/io/restore';
-import { DEMO_FILE_NAME, demoDesign } from '../../src/model/demoDesign';
+import { DEMO_FILE_NAME, demoDesign } from '../../src/designs/demoDesign';
 import { designWith, mat } from '../support/designs';
 
 const DEMO_PATH = fileURLToPath(new URL(`../../public/${DEMO_FILE_NAME}`, import.meta.url));

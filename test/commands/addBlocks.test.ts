@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { addBlocks } from '../../src/commands/addBlocks';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 import { designWith, mat } from '../support/designs';
 import { blockById, expectRefused, runUndoRedo } from '../support/commandSteps';
 

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { deleteBlocks } from '../../src/commands/deleteBlocks';
 import { evaluate } from '../../src/engine';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 import { expectRefused, runUndoRedo } from '../support/commandSteps';
 
 describe('command: delete blocks', () => {

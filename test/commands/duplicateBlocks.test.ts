@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { addedBlockIds } from '../../src/commands/blockIds';
 import { duplicateBlocks } from '../../src/commands/duplicateBlocks';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 import { blockById, expectRefused, runUndoRedo } from '../support/commandSteps';
 
 describe('command: duplicate', () => {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { mirrorBlocks } from '../../src/commands/mirrorBlocks';
 import { blockRect } from '../../src/geometry/placedBlocks';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 import { blockById, expectRefused, runUndoRedo } from '../support/commandSteps';
 
 describe('command: mirror', () => {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { moveBlocks } from '../../src/commands/moveBlocks';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 import { blockById, expectRefused, runUndoRedo } from '../support/commandSteps';
 
 describe('command: move blocks', () => {

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { addedBlockIds } from '../../src/commands/blockIds';
 import { pasteBlocks } from '../../src/commands/pasteBlocks';
 import { OPEN_6F2_CELL } from '../../src/model/builtins';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 import { designWith, mat } from '../support/designs';
 import { blockById, expectRefused, runUndoRedo } from '../support/commandSteps';
 

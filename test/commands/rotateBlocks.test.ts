@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { rotateBlocks } from '../../src/commands/rotateBlocks';
 import { blockRect } from '../../src/geometry/placedBlocks';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 import { designWith, mat } from '../support/designs';
 import { blockById, expectRefused, runUndoRedo } from '../support/commandSteps';
 

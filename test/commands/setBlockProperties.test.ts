@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { setBlockProperties } from '../../src/commands/setBlockProperties';
 import { OPEN_6F2_CELL } from '../../src/model/builtins';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 import { blockById, expectRefused, runUndoRedo } from '../support/commandSteps';
 
 describe('command: set block properties', () => {

@@ -5,7 +5,7 @@ import { matGeometry } from '../../src/geometry/matGeometry';
 import { blockRect } from '../../src/geometry/placedBlocks';
 import type { Block, Mat } from '../../src/model/block';
 import { EDRAM_CELL, FOLDED_8F2_CELL, OPEN_6F2_CELL } from '../../src/model/builtins';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 import type { Design } from '../../src/model/design';
 import { blockById, expectRefused, runUndoRedo } from '../support/commandSteps';
 import { designWith, mat, strip } from '../support/designs';

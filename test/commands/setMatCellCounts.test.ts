@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { setMatCellCounts } from '../../src/commands/setMatCellCounts';
 import { findMatReport } from '../../src/engine';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 import { createAppStore } from '../../src/store/appStore';
 
 describe('command: set cells per line', () => {

@@ -3,7 +3,7 @@ import { addBlocks } from '../../src/commands/addBlocks';
 import { stepAndRepeat } from '../../src/commands/stepAndRepeat';
 import { evaluate } from '../../src/engine';
 import { blockRect } from '../../src/geometry/placedBlocks';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 import { repeatPitches } from '../../src/geometry/repeatPitch';
 import { designWith, mat, strip } from '../support/designs';
 import { blockById, expectRefused, runUndoRedo } from '../support/commandSteps';

@@ -2,7 +2,7 @@ import { matAt } from '../../src/engine/evaluation/matTable';
 import { describe, expect, it } from 'vitest';
 import { evaluate, findMatReport } from '../../src/engine';
 import { gainReadCurrent } from '../../src/engine/physics/gainRead';
-import { gridFloorplan } from '../../src/geometry/gridFloorplan';
+import { gridFloorplan } from '../../src/designs/gridFloorplan';
 import type { Block, Strip } from '../../src/model/block';
 import {
   EDRAM_CELL,

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { editReport, evaluate, type Report } from '../../src/engine';
-import { gridFloorplan } from '../../src/geometry/gridFloorplan';
+import { gridFloorplan } from '../../src/designs/gridFloorplan';
 import { placedDesign, placedDesignAfterEdit } from '../../src/geometry/placedIndex';
 import type { Block } from '../../src/model/block';
 import { DEMO_PROCESS, FOLDED_8F2_CELL } from '../../src/model/builtins';

@@ -12,7 +12,7 @@ import {
 import { senseAmpStripIdsOf, wordlineDriverIdsOf } from '../../src/engine/evaluation/matTable';
 import { OPEN_6F2_CELL } from '../../src/model/builtins';
 import type { Block } from '../../src/model/block';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 import { designWith, mat, processWith, strip } from '../support/designs';
 
 const F = 18e-9;

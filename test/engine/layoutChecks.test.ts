@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { evaluate } from '../../src/engine';
 import { previewReport, preparePreview } from '../../src/engine';
-import { gridFloorplan } from '../../src/geometry/gridFloorplan';
+import { gridFloorplan } from '../../src/designs/gridFloorplan';
 import type { Block } from '../../src/model/block';
 import { DEMO_PROCESS, FOLDED_8F2_CELL } from '../../src/model/builtins';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 import { designWith, mat, strip } from '../support/designs';
 
 const F = 18e-9;

@@ -9,7 +9,7 @@ import {
   MatTableBuilder,
   senseAmpStripIdsOf,
 } from '../../src/engine/evaluation/matTable';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 
 // The report's mats are columns; these checks pin the lookups the panels and exports use. Expected values
 // come from the demo design itself (16 mats in a 4 × 4 grid, ids "mat-r{row}c{column}").

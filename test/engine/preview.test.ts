@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { evaluate, preparePreview, previewReport } from '../../src/engine';
 import type { Block } from '../../src/model/block';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 import type { Design } from '../../src/model/design';
 import { expectSameReport } from '../support/sameReport';
 

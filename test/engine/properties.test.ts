@@ -4,7 +4,7 @@ import { describe, expect, it } from 'vitest';
 import { evaluate, findMatReport } from '../../src/engine/evaluation/evaluate';
 import type { MatReport } from '../../src/engine/evaluation/report';
 import { chargeTransferRatio } from '../../src/engine/physics/sensing';
-import { gridFloorplan } from '../../src/geometry/gridFloorplan';
+import { gridFloorplan } from '../../src/designs/gridFloorplan';
 import { BUILTIN_CELLS, BUILTIN_PROCESSES, DEMO_PROCESS, FOLDED_8F2_CELL } from '../../src/model/builtins';
 import { MAX_CELLS_PER_LINE } from '../../src/model/block';
 import { designWith, mat } from '../support/designs';

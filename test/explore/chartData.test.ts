@@ -4,7 +4,7 @@ import { AXIS_FIGURES, bankFigureEntry, explainFigure, TABLE_FIGURES } from '../
 import { dominates } from '../../src/explore/pareto';
 import { runSweepRange, sweepSize } from '../../src/explore/sweep';
 import { defaultSweepSettings, sweepRequestFor } from '../../src/explore/sweepSettings';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 
 const design = demoDesign();
 const request = sweepRequestFor(

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { buildPartition } from '../../src/build/buildPartition';
+import { buildPartition } from '../../src/designs/buildPartition';
 import { evaluate } from '../../src/engine';
 import { figuresFromReport, type FigureKey } from '../../src/engine';
 import { partitionFigures, ProcessCache } from '../../src/explore/partitionFigures';

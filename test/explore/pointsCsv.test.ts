@@ -4,7 +4,7 @@ import { BANK_FIGURE_CATALOGUE } from '../../src/engine';
 import { displayUnit, sweepPointsCsv } from '../../src/explore/pointsCsv';
 import { runSweepRange, sweepSize } from '../../src/explore/sweep';
 import { defaultSweepSettings, sweepRequestFor } from '../../src/explore/sweepSettings';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 
 const design = demoDesign();
 const request = sweepRequestFor(

@@ -10,7 +10,7 @@ import { matGeometry, matRect } from '../../src/geometry/matGeometry';
 import { placeBlocks } from '../../src/geometry/placedBlocks';
 import type { Block } from '../../src/model/block';
 import { GAIN_3T_CELL, OPEN_6F2_CELL } from '../../src/model/builtins';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 import { designWith, mat } from '../support/designs';
 
 // The table lays out every block: a strip is its own rectangle, a mat is as large as its cell, counts and F

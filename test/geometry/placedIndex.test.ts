@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { blockAt, blocksInside, placedDesign } from '../../src/geometry/placedIndex';
 import { blockRect } from '../../src/geometry/placedBlocks';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 
 describe('placed design: hit-testing and box selection', () => {
   const design = demoDesign();

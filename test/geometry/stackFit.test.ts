@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { placedDesign } from '../../src/geometry/placedIndex';
 import { fitDecoderAtPoint, fitDroppedDecoder, stackOutlines } from '../../src/geometry/stackFit';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 import { designWith, mat, strip } from '../support/designs';
 
 /** The demo: a 4 × 4 grid with an 18 µm row decoder on the left and a 14 µm column decoder below. */

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { decodeDesignBytes } from '../../src/io/decodeText';
 import { restoreShared, shareFragment, sharedPayload } from '../../src/io/shareLink';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 
 // Source: The Unicode Standard, §23.8 (byte-order marks: EF BB BF for UTF-8, FF FE / FE FF for UTF-16),
 // from memory.

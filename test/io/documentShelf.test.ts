@@ -10,7 +10,7 @@ import {
   saveDocument,
   type KeyValueArea,
 } from '../../src/io/documentShelf';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 import { designFromQuery } from '../../src/app/startupDesign';
 
 // Source: common practice (no source): stored work is never dropped, and a message says only what is true.

@@ -27,7 +27,7 @@ import { switchVariant } from '../../src/commands/switchVariant';
 import { editProblems } from '../../src/io/editCheck';
 import { restoreDesign } from '../../src/io/restore';
 import { BUILTIN_PROCESSES } from '../../src/model/builtins';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 import type { Design } from '../../src/model/design';
 import { OPERATING_FIELDS, PROCESS_FIELDS } from '../../src/model/fieldCatalog';
 import { variantEntries } from '../../src/model/variants';

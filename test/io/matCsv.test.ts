@@ -2,7 +2,7 @@ import { matAt } from '../../src/engine/evaluation/matTable';
 import { describe, expect, it } from 'vitest';
 import { evaluate } from '../../src/engine';
 import { matFiguresCsv } from '../../src/io/matCsv';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 
 describe('per-mat CSV', () => {
   it('has a header with units and one row per mat, numbers in SI', () => {

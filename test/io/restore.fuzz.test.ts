@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { evaluate } from '../../src/engine/evaluation/evaluate';
 import type { Totals } from '../../src/engine/evaluation/report';
 import { restoreDesign } from '../../src/io/restore';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 import { designSchema } from '../../src/model/design';
 
 // Source for every property here: common practice (no source): a loader never throws on bad input, and

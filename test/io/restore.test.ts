@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { MAX_DESIGN_TEXT_LENGTH, restoreDesign, type RestoreResult } from '../../src/io/restore';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 import { DESIGN_VERSION } from '../../src/model/design';
 
 /** The demo design as a mutable JSON tree, for breaking one field at a time. */

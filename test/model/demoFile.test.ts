@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
-import { DEMO_FILE_NAME, demoDesign } from '../../src/model/demoDesign';
+import { DEMO_FILE_NAME, demoDesign } from '../../src/designs/demoDesign';
 
 const DEMO_PATH = fileURLToPath(new URL(`../../public/${DEMO_FILE_NAME}`, import.meta.url));
 const STALE = `public/${DEMO_FILE_NAME} is out of date with demoDesign(); run \`npx tsx src/cli/writeDemo.ts\``;

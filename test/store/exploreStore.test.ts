@@ -2,7 +2,7 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { runSweepRange, sweepSize, type SweepRequest } from '../../src/explore/sweep';
 import type { SweepCommand, SweepReport } from '../../src/explore/sweepProtocol';
 import { defaultSweepSettings, sweepRequestFor } from '../../src/explore/sweepSettings';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 import { createExploreStore, type SweepWorker } from '../../src/store/exploreStore';
 
 /** A worker that runs in-process: each step() delivers one chunk, as the real one posts them. */

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { moveBlocks } from '../../src/commands/moveBlocks';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 import { createAppStore } from '../../src/store/appStore';
 
 describe('undo depth of the editor', () => {

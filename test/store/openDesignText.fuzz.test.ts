@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 import { createAppStore } from '../../src/store/appStore';
 import { openDesignText } from '../../src/store/openDesignText';
 

@@ -1,7 +1,7 @@
 import { expect } from 'vitest';
 import type { Command } from '../../src/commands/command';
 import type { Design } from '../../src/model/design';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 import { createAppStore } from '../../src/store/appStore';
 
 /**

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { buildPartition } from '../../build/buildPartition';
+import { buildPartition } from '../../designs/buildPartition';
 import { formatBits } from '../../model/units';
 import { createVariant } from '../../commands/createVariant';
 import { processChoices, type SweepSettings } from '../../explore/sweepSettings';

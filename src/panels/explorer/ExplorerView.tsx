@@ -1,5 +1,5 @@
 import { useMemo, useRef, useState } from 'react';
-import { buildPartition, shortProcessName } from '../../build/buildPartition';
+import { buildPartition, shortProcessName } from '../../designs/buildPartition';
 import { downloadBlob, fileBaseName } from '../../app/download';
 import {
   markerPath,

@@ -1,4 +1,4 @@
-import { shortProcessName } from '../../build/buildPartition';
+import { shortProcessName } from '../../designs/buildPartition';
 import type { ChartModel } from '../../explore/chartData';
 import { bankFigureEntry, type AxisFigure } from '../../engine';
 import type { SweepPoint, SweepRequest } from '../../explore/sweep';

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { shortProcessName } from '../../build/buildPartition';
+import { shortProcessName } from '../../designs/buildPartition';
 import { checkName, infeasibleBecause, type FeasibilityLimits } from '../../explore/chartData';
 import { bankFigureEntry, explainFigure, type FigureKey } from '../../engine';
 import type { SweepPoint, SweepRequest } from '../../explore/sweep';

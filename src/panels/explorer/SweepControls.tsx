@@ -1,4 +1,4 @@
-import type { StripSizes } from '../../build/partitionPlan';
+import type { StripSizes } from '../../designs/partitionPlan';
 import { formatBits } from '../../model/units';
 import { MAX_SWEEP_POINTS, sweepSize } from '../../explore/sweep';
 import {

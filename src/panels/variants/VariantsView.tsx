@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { shortProcessName } from '../../build/buildPartition';
+import { shortProcessName } from '../../designs/buildPartition';
 import { deleteVariant } from '../../commands/deleteVariant';
 import { duplicateVariant } from '../../commands/duplicateVariant';
 import { renameVariant } from '../../commands/renameVariant';

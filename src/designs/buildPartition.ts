@@ -1,4 +1,4 @@
-import { gridFloorplan } from '../geometry/gridFloorplan';
+import { gridFloorplan } from './gridFloorplan';
 import { formatBits } from '../model/units';
 import { BUILTIN_CELLS } from '../model/builtins';
 import type { CellDefinition } from '../model/cell';

@@ -1,9 +1,9 @@
 import { allMats } from '../../src/engine/evaluation/matTable';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { buildPartition, partitionName } from '../../src/build/buildPartition';
+import { buildPartition, partitionName } from '../../src/designs/buildPartition';
 import { formatBits } from '../../src/model/units';
-import { gridExtent, losesEdgeBits, planPartition, type StripSizes } from '../../src/build/partitionPlan';
+import { gridExtent, losesEdgeBits, planPartition, type StripSizes } from '../../src/designs/partitionPlan';
 import { evaluate } from '../../src/engine';
 import { findOverlaps } from '../../src/engine/evaluation/overlaps';
 import { senseAmpStripIdsOf } from '../../src/engine/evaluation/matTable';

@@ -1,6 +1,6 @@
 import type { Block, BitlineAxis, Strip } from '../model/block';
 import type { CellDefinition } from '../model/cell';
-import { matGeometry } from './matGeometry';
+import { matGeometry } from '../geometry/matGeometry';
 
 /** What to tile: a grid of identical mats with their strips and decoders. Sizes in metres. */
 export interface GridFloorplanSpec {
