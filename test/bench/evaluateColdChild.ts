@@ -1,7 +1,7 @@
 /** One fresh process for evaluateCold.bench.ts: times the first three evaluate() calls, prints wall and CPU times (ms) as JSON. */
 import { performance } from 'node:perf_hooks';
 import { evaluate } from '../../src/engine/evaluation/evaluate';
-import { gridFloorplan } from '../../src/geometry/gridFloorplan';
+import { gridFloorplan } from '../../src/designs/gridFloorplan';
 import { DEMO_PROCESS, FOLDED_8F2_CELL } from '../../src/model/builtins';
 import { designWith } from '../support/designs';
 
