@@ -46,8 +46,41 @@ test('every view, tab and dialog has no critical or serious accessibility violat
   await page.getByTestId('run-sweep').click();
   await expect(page.getByTestId('sweep-status')).toHaveAttribute('data-status', 'done', { timeout: 30_000 });
   await expectNoSeriousViolations(page, 'explorer after a sweep');
+  // The block menu on the floorplan.
+  await page.getByTestId('view-floorplan').click();
+  await page.getByTestId('outline-list').focus();
+  await page.keyboard.press('Enter');
+  await page.getByTestId('floorplan').focus();
+  await page.keyboard.press('Shift+F10');
+  await expect(page.getByTestId('block-menu')).toBeVisible();
+  await expectNoSeriousViolations(page, 'block menu');
+  await page.keyboard.press('Escape');
 
   await page.getByTestId('view-variants').click();
   await expect(page.getByTestId('variants-view')).toBeVisible();
   await expectNoSeriousViolations(page, 'variants');
+});
+
+test('the dark theme has no critical or serious accessibility violation either', async ({ page }) => {
+  test.setTimeout(120_000);
+  await page.emulateMedia({ colorScheme: 'dark' });
+  await page.goto('/');
+  await page.getByTestId('floorplan').locator('canvas').first().waitFor();
+  await expect(page.locator('html')).toHaveAttribute('data-theme', 'dark');
+  await expectNoSeriousViolations(page, 'dark floorplan');
+  for (const tab of ['process', 'cells', 'yield', 'floorplan'] as const) {
+    await page.getByTestId(`tab-${tab}`).click();
+    await expectNoSeriousViolations(page, `dark sidebar tab ${tab}`);
+  }
+  await page.getByTestId('open-help').click();
+  await expectNoSeriousViolations(page, 'dark shortcut help');
+  await page.keyboard.press('Escape');
+  await page.getByTestId('view-explorer').click();
+  await page.getByTestId('run-sweep').click();
+  await expect(page.getByTestId('sweep-status')).toHaveAttribute('data-status', 'done', { timeout: 30_000 });
+  await page.getByTestId('build-front-0').click();
+  await expectNoSeriousViolations(page, 'dark explorer after a sweep');
+  await page.getByTestId('view-variants').click();
+  await expect(page.getByTestId('variants-view')).toBeVisible();
+  await expectNoSeriousViolations(page, 'dark variants');
 });

@@ -3,11 +3,13 @@ import { NoticeBar } from './NoticeBar';
 import { Sidebar } from './Sidebar';
 import { Toolbar } from './Toolbar';
 import { StorageProblemBar } from './StorageProblemBar';
+import { useAddressState } from './useAddressState';
 import { useDocumentGuards } from './useDocumentGuards';
 import { ViewArea } from './ViewArea';
 
 export function App() {
   useDocumentGuards();
+  useAddressState();
   return (
     <div className="app">
       <Toolbar />

@@ -3,6 +3,7 @@ import { BlockOutline } from '../panels/outline/BlockOutline';
 import { SelectionAnnouncer } from './a11y/SelectionAnnouncer';
 import { lazy, Suspense } from 'react';
 import { useEditorStore } from '../store/editorStore';
+import { BlockMenu } from './BlockMenu';
 import { StatusBar } from './StatusBar';
 import { ToolOptionsBar } from './ToolOptionsBar';
 import { ToolPalette } from './ToolPalette';
@@ -37,6 +38,7 @@ export function EditorColumn() {
       <FloorplanCanvas />
       <StatusBar />
       <SelectionAnnouncer />
+      <BlockMenu />
       <Dialogs />
     </div>
   );

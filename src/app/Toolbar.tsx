@@ -3,6 +3,7 @@ import { CommandButton } from './CommandButton';
 import { DocumentMenu } from './DocumentMenu';
 import { FileMenu } from './FileMenu';
 import { StorageStatus } from './StorageStatus';
+import { ThemeChoice } from './ThemeChoice';
 
 /**
  * Top bar: design name, the file menu, undo, redo and frame-all. Their keys are the editor commands'
@@ -20,6 +21,7 @@ export function Toolbar() {
       <DocumentMenu />
       <FileMenu />
       <div className="actions">
+        <ThemeChoice />
         <CommandButton id="edit.undo" testId="undo" />
         <CommandButton id="edit.redo" testId="redo" />
         <CommandButton id="view.fitAll" />

@@ -261,6 +261,15 @@ export const EDITOR_COMMANDS = [
   nudge('edit.nudgeUp', 'ArrowUp', 0, -1, false),
   nudge('edit.nudgeDown', 'ArrowDown', 0, 1, false),
   {
+    id: 'edit.blockMenu',
+    label: 'Block menu',
+    description: 'Open the menu of commands for the selection (or right-click a block)',
+    group: 'Edit',
+    keys: [{ key: 'ContextMenu' }, { key: 'F10', shift: true }],
+    enabled: hasSelection,
+    run: ({ editor }) => editor.getState().setContextMenu({ at: null }),
+  },
+  {
     id: 'view.fitAll',
     label: 'Frame all',
     description: 'Zoom to fit the whole floorplan',

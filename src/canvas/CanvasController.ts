@@ -1,5 +1,5 @@
 import { addedBlockIds } from '../commands/blockIds';
-import { placedDesign } from '../geometry/placedIndex';
+import { blockAt, placedDesign } from '../geometry/placedIndex';
 import type { AppState, AppStore, Viewport } from '../store/appStore';
 import { isPlacementTool, type EditorState, type EditorStore } from '../store/editorStore';
 import { useLiveReport } from '../store/liveReport';
@@ -20,12 +20,12 @@ import { pressWithSelectTool } from './gestures/selectPress';
 import { HoverPreview } from './hoverPreview';
 import { LiveReportLoop } from './liveReportLoop';
 import { pxPerMetre } from './paint/scene';
-import { screenToWorld, zoomAround } from './viewportMath';
+import { TouchPinch } from './touchPinch';
+import { screenToWorld } from './viewportMath';
+import { applyWheel, wheelIntent } from './wheelAndPinch';
 
 /** A press becomes a drag once the pointer has moved this far (px). */
 const DRAG_THRESHOLD_PX = 3;
-/** Zoom factor per pixel of wheel travel: a 100-px notch zooms by about 16 %. */
-const WHEEL_ZOOM_PER_PX = 0.0015;
 
 interface Press {
   readonly gesture: Gesture;
@@ -61,6 +61,7 @@ export class CanvasController {
   private readonly hover = new HoverPreview();
   private readonly cursor = new CanvasCursor();
   private readonly live: LiveReportLoop;
+  private readonly touch = new TouchPinch();
   private readonly cleanups: (() => void)[] = [];
 
   constructor(
@@ -102,13 +103,15 @@ export class CanvasController {
     listen('pointerdown', (e) => this.onPointerDown(e));
     listen('pointermove', (e) => this.onPointerMove(e));
     listen('pointerup', (e) => this.onPointerUp(e));
-    listen('pointercancel', () => this.cancelGesture());
+    listen('pointercancel', (e) => {
+      if (!this.touch.up(e.pointerId)) this.cancelGesture();
+    });
     // Capture ends by itself after pointerup (the gesture is over by then); losing it earlier, say when
     // the window loses focus mid-drag, cancels the gesture.
     listen('lostpointercapture', () => this.cancelGesture());
     listen('pointerleave', () => this.onPointerLeave());
     listen('wheel', (e) => this.onWheel(e), { passive: false });
-    listen('contextmenu', (e) => e.preventDefault());
+    listen('contextmenu', (e) => this.onContextMenu(e));
     const onKey = (e: KeyboardEvent) => this.onSpace(e);
     window.addEventListener('keydown', onKey);
     window.addEventListener('keyup', onKey);
@@ -190,7 +193,7 @@ export class CanvasController {
 
   // ---- pointer input ---------------------------------------------------------------------------
 
-  private local(e: PointerEvent | WheelEvent): { x: number; y: number } {
+  private local(e: MouseEvent): { x: number; y: number } {
     const box = this.view.element?.getBoundingClientRect();
     return { x: e.clientX - (box?.left ?? 0), y: e.clientY - (box?.top ?? 0) };
   }
@@ -217,7 +220,16 @@ export class CanvasController {
   }
 
   private onPointerDown(e: PointerEvent): void {
-    if ((e.button !== 0 && e.button !== 1) || this.press || this.pan) return;
+    if (e.pointerType === 'touch') {
+      const p = this.local(e);
+      if (this.touch.down(e.pointerId, p, this.app.getState().viewport)) {
+        // A second finger: whatever the first began gives way to the pinch.
+        this.cancelGesture();
+        this.view.element?.setPointerCapture(e.pointerId);
+        return;
+      }
+    }
+    if ((e.button !== 0 && e.button !== 1) || this.press || this.pan || this.touch.active) return;
     // Keyboard shortcuts belong to the canvas again once it is clicked.
     const focused = document.activeElement;
     if (focused instanceof HTMLElement && focused !== document.body) focused.blur();
@@ -252,6 +264,11 @@ export class CanvasController {
 
   private onPointerMove(e: PointerEvent): void {
     const p = this.local(e);
+    if (e.pointerType === 'touch') {
+      const pinched = this.touch.move(e.pointerId, p);
+      if (pinched) this.app.getState().setViewport(pinched);
+      if (this.touch.active) return;
+    }
     this.pointer = p;
     const at = this.world(p);
     this.editor.getState().setPointer(at);
@@ -286,6 +303,7 @@ export class CanvasController {
   }
 
   private onPointerUp(e: PointerEvent): void {
+    if (e.pointerType === 'touch' && (this.touch.up(e.pointerId) || this.touch.active)) return;
     if (this.pan) {
       this.pan = null;
       this.updateCursor(this.world(this.local(e)));
@@ -319,12 +337,22 @@ export class CanvasController {
     this.view.redraw('rulers');
   }
 
+  /** Two-finger scroll pans, pinch (Ctrl+wheel) and a mouse wheel zoom around the pointer. */
   private onWheel(e: WheelEvent): void {
     e.preventDefault();
     const p = this.local(e);
-    const travel = e.deltaMode === 1 ? e.deltaY * 33 : e.deltaY;
-    const factor = Math.exp(-travel * WHEEL_ZOOM_PER_PX);
-    this.app.getState().setViewport(zoomAround(this.app.getState().viewport, factor, p.x, p.y));
+    this.app.getState().setViewport(applyWheel(this.app.getState().viewport, wheelIntent(e), p.x, p.y));
+  }
+
+  /** A right-click (or a long press) on a block selects it, unless it is selected, and opens the block menu. */
+  private onContextMenu(e: MouseEvent): void {
+    e.preventDefault();
+    if (this.press || this.pan) return;
+    const at = this.world(this.local(e));
+    const hit = blockAt(placedDesign(this.app.getState().history.present), at.x, at.y);
+    if (!hit) return;
+    if (!this.app.getState().selectedIds.includes(hit)) this.app.getState().select([hit]);
+    this.editor.getState().setContextMenu({ at: { x: e.clientX, y: e.clientY } });
   }
 
   /** Holding Space turns the next drag into a pan, as in most drawing editors. */

@@ -66,6 +66,11 @@ export interface EditorState {
   /** Copied blocks as the text of a small design file (read back through io/restore). */
   readonly clipboard: string | null;
   readonly frameRequest: FrameRequest | null;
+  /**
+   * The block menu when open: where it was asked for (page px), or `at: null` when opened from the keyboard
+   * (it then sits over the canvas); null when closed.
+   */
+  readonly contextMenu: { readonly at: { readonly x: number; readonly y: number } | null } | null;
   /** World position under the pointer (m), or null when it is off the canvas. */
   readonly pointer: { readonly x: number; readonly y: number } | null;
 
@@ -77,6 +82,7 @@ export interface EditorState {
   setStepRepeatOpen(open: boolean): void;
   setClipboard(text: string): void;
   requestFrame(ids: readonly string[]): void;
+  setContextMenu(menu: { at: { x: number; y: number } | null } | null): void;
   setPointer(pointer: { x: number; y: number } | null): void;
 }
 
@@ -89,6 +95,7 @@ export function createEditorStore() {
     stepRepeatOpen: false,
     clipboard: null,
     frameRequest: null,
+    contextMenu: null,
     pointer: null,
     setTool: (tool) => set({ tool }),
     setOptions: (patch) => set({ options: { ...get().options, ...patch } }),
@@ -100,6 +107,7 @@ export function createEditorStore() {
     setClipboard: (clipboard) => set({ clipboard }),
     requestFrame: (ids) => set({ frameRequest: { ids, serial: (get().frameRequest?.serial ?? 0) + 1 } }),
     setPointer: (pointer) => set({ pointer }),
+    setContextMenu: (contextMenu) => set({ contextMenu }),
   }));
 }
 

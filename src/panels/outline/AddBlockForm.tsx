@@ -11,6 +11,9 @@ import { useEditorStore } from '../../store/editorStore';
 import { useAppStore } from '../../store/useAppStore';
 import { newBlockFromForm, type NewBlockForm } from './newBlock';
 
+/** Windows shorter than this (px) open with the form folded. */
+const SHORT_WINDOW_PX = 800;
+
 type TextKey = 'x' | 'y' | 'width' | 'height' | 'cellsPerBitline' | 'cellsPerWordline';
 
 const FIELDS: readonly { key: TextKey; label: string; forMat: boolean | 'both' }[] = [
@@ -43,7 +46,8 @@ export function AddBlockForm() {
   });
   const [errors, setErrors] = useState<Partial<Record<keyof NewBlockForm, string>>>({});
   const [refused, setRefused] = useState<string | null>(null);
-  const [open, setOpen] = useState(true);
+  // On a short window the form starts folded, so the block list keeps room.
+  const [open, setOpen] = useState(() => window.innerHeight >= SHORT_WINDOW_PX);
   const cellId = design.cells.some((c) => c.id === form.cellId) ? form.cellId : (design.cells[0]?.id ?? '');
   const isMat = form.type === 'mat';
 
