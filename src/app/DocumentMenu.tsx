@@ -44,6 +44,7 @@ export function DocumentMenu() {
       <button
         type="button"
         data-testid="recent-menu"
+        title="Designs opened or saved recently in this browser"
         aria-expanded={recent !== null}
         onClick={() => void toggleRecent()}
       >

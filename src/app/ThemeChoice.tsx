@@ -31,7 +31,7 @@ export function ThemeChoice() {
   useAppliedTheme(theme);
   return (
     <label className="theme-choice" title="Colour theme: follow the system, or always light or dark">
-      Theme
+      <span className="theme-word">Theme</span>
       <select
         data-testid="theme-choice"
         value={theme}
