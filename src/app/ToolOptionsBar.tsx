@@ -109,7 +109,7 @@ export function ToolOptionsBar() {
         </span>
       )}
       <div className="view-buttons">
-        <CommandButton id="view.fitAll" testId="zoom-fit" text="Fit" />
+        <CommandButton id="view.fitAll" testId="zoom-fit" />
         <CommandButton id="view.frameSelection" testId="zoom-selection" />
         <CommandButton id="view.grid" testId="toggle-grid" pressed={gridVisible} />
       </div>

@@ -6,7 +6,7 @@ import { StorageStatus } from './StorageStatus';
 import { ThemeChoice } from './ThemeChoice';
 
 /**
- * Top bar: design name, the file menu, undo, redo and frame-all. Their keys are the editor commands'
+ * Top bar: design name, the file menu, undo and redo (Fit lives in the canvas bar, its one place). Their keys are the editor commands'
  * (editorCommands.ts), caught by the app's one key listener (useEditorShortcuts.ts).
  */
 export function Toolbar() {
@@ -24,7 +24,6 @@ export function Toolbar() {
         <ThemeChoice />
         <CommandButton id="edit.undo" testId="undo" />
         <CommandButton id="edit.redo" testId="redo" />
-        <CommandButton id="view.fitAll" />
       </div>
     </header>
   );

@@ -271,8 +271,8 @@ export const EDITOR_COMMANDS = [
   },
   {
     id: 'view.fitAll',
-    label: 'Frame all',
-    description: 'Zoom to fit the whole floorplan',
+    label: 'Fit',
+    description: 'Fit: show the whole floorplan',
     group: 'View',
     keys: [{ key: 'f' }],
     inDialogs: true,

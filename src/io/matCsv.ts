@@ -29,8 +29,8 @@ function figureColumns(): Column[] {
 }
 
 const COLUMNS: readonly Column[] = [
+  { header: 'name', value: (m) => m.name || m.matId },
   { header: 'mat_id', value: (m) => m.matId },
-  { header: 'name', value: (m) => m.name },
   { header: 'cell_id', value: (m) => m.figures.cellId },
   { header: 'architecture', value: (m) => m.figures.architecture },
   ...figureColumns(),

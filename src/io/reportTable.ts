@@ -63,7 +63,8 @@ function figureColumns(): MatColumn[] {
 }
 
 const MAT_COLUMNS: readonly MatColumn[] = [
-  { header: 'mat', text: (m) => m.matId },
+  { header: 'mat', text: (m) => m.name || m.matId },
+  { header: 'id', text: (m) => m.matId },
   ...figureColumns(),
   { header: 'unsensed BL', text: (m) => formatQuantity(m.unsensedBitlines, 'count') },
   { header: 'undriven WL', text: (m) => formatQuantity(m.undrivenWordlines, 'count') },

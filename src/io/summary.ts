@@ -12,6 +12,7 @@ import {
 } from '../engine';
 import type { BitlineArchitecture, CellKind } from '../model/cell';
 import type { Design } from '../model/design';
+import { formatMatSize } from '../model/matSize';
 
 /**
  * The report as a plain JSON object for export files and `npm run evaluate -- --json`. Every number
@@ -81,7 +82,10 @@ export interface MatSummary {
 export interface TotalsSummary {
   /** placedArea split by block type (m²). */
   readonly areaByType_m2: Readonly<Record<string, Figure>>;
+  /** The worst mats by name (as every message names them), with their ids beside. */
+  readonly worstSenseSignalMat: string | null;
   readonly worstSenseSignalMatId: string | null;
+  readonly worstSenseMarginMat: string | null;
   readonly worstSenseMarginMatId: string | null;
   readonly storedHighLimitedByWordline: boolean;
   readonly errors: number;
@@ -92,6 +96,8 @@ export interface TotalsSummary {
 export interface FindingSummary {
   readonly kind: Finding['kind'];
   readonly severity: Finding['severity'];
+  /** The blocks by name, as the message names them; `blockIds` holds their ids in the same order. */
+  readonly blocks: readonly string[];
   readonly blockIds: readonly string[];
   readonly message: string;
 }
@@ -127,8 +133,9 @@ function fig(value: number): Figure {
 function matSummary(m: MatReport, mats: MatTable, k: number): MatSummary {
   const f = m.figures;
   const out: Record<string, Figure | string | boolean | readonly string[] | ReadSummary> = {
+    name: m.name || m.matId,
     id: m.matId,
-    name: m.name,
+    size: formatMatSize(f.cellsPerBitline, f.cellsPerWordline),
     cellId: f.cellId,
     cellKind: f.cellKind,
     architecture: f.architecture,
@@ -160,7 +167,9 @@ function totalsSummary(design: Design, report: Report): TotalsSummary {
   return {
     ...figures,
     areaByType_m2: Object.fromEntries(Object.entries(t.areaByType).map(([type, a]) => [type, fig(a)])),
+    worstSenseSignalMat: t.worstSenseSignalMatName,
     worstSenseSignalMatId: t.worstSenseSignalMatId,
+    worstSenseMarginMat: t.worstSenseMarginMatName,
     worstSenseMarginMatId: t.worstSenseMarginMatId,
     storedHighLimitedByWordline: report.storedHigh.limitedByWordline,
     ...countFindings(report.findings),
@@ -180,6 +189,7 @@ export function countFindings(findings: readonly Finding[]): { errors: number; w
  */
 export function reportSummary(design: Design, report: Report): ReportSummary {
   const o = design.operating;
+  const nameOf = new Map(design.blocks.map((b) => [b.id, b.name]));
   return {
     format: REPORT_FORMAT,
     version: REPORT_VERSION,
@@ -205,6 +215,7 @@ export function reportSummary(design: Design, report: Report): ReportSummary {
     findings: report.findings.map((f) => ({
       kind: f.kind,
       severity: f.severity,
+      blocks: f.blockIds.map((id) => nameOf.get(id) || id),
       blockIds: [...f.blockIds],
       message: f.message,
     })),

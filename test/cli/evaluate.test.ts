@@ -36,7 +36,8 @@ describe('npm run evaluate', () => {
     expect(r.stderr).toBe('');
     expect(r.code).toBe(EXIT.ok);
     expect(r.stdout).toMatch(/^Wren bank section \(invented demo\)\n/);
-    expect(r.stdout).toMatch(/\n {2}mat-r3c3 +512 +512 +524,288 /);
+    // Mats by name, ids beside.
+    expect(r.stdout).toMatch(/\n {2}Mat 4\.4 +mat-r3c3 +512 +512 +524,288 /);
     expect(r.stdout).toMatch(/\nTotals\n/);
     expect(r.stdout).toMatch(/\n {2}bits +8,388,608\n/);
     expect(r.stdout).toMatch(/\n {2}total area \(bounding box\) +[\d.]+ (µm²|mm²)\n/);
@@ -65,8 +66,8 @@ describe('npm run evaluate', () => {
     expect(r.code).toBe(EXIT.ok);
     const lines = r.stdout.trimEnd().split('\r\n');
     expect(lines).toHaveLength(17);
-    expect(lines[0]).toMatch(/^mat_id,name,cell_id,/);
-    expect(lines[1]).toMatch(/^mat-r0c0,Mat 1\.1,dram-folded-8f2,folded,512,512,/);
+    expect(lines[0]).toMatch(/^name,mat_id,cell_id,/);
+    expect(lines[1]).toMatch(/^Mat 1\.1,mat-r0c0,dram-folded-8f2,folded,512,512,/);
   });
 
   it('--json and --csv together are a usage error', () => {

@@ -160,9 +160,12 @@ export interface Totals {
   /** Smallest sense signal of any mat (V), or NaN without mats. */
   readonly worstSenseSignal: number;
   readonly worstSenseSignalMatId: string | null;
+  /** Its user-visible name (its id when unnamed), as messages and exports name mats. */
+  readonly worstSenseSignalMatName: string | null;
   /** Smallest margin at the end of the refresh window (V), or NaN without mats. */
   readonly worstSenseMargin: number;
   readonly worstSenseMarginMatId: string | null;
+  readonly worstSenseMarginMatName: string | null;
   /** Shortest retention time of any mat (s), or NaN without mats. */
   readonly shortestRetention: number;
   /** Longest word-line delay (s), or NaN without mats. */

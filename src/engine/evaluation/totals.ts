@@ -8,7 +8,7 @@ import {
   refreshPower,
   rowsPerRefreshCommand,
 } from '../physics/refresh';
-import { figuresAt, matIdAt, type MatTable } from './matTable';
+import { figuresAt, matIdAt, matLabelAt, type MatTable } from './matTable';
 import type { RefreshFigures, Totals } from './report';
 
 /** Positions closer than this are the same band edge (m). */
@@ -88,8 +88,10 @@ function refreshFigures(table: BlockTable, mats: MatTable, design: Design): Refr
 interface Extremes {
   worstSenseSignal: number;
   worstSenseSignalMatId: string | null;
+  worstSenseSignalMatName: string | null;
   worstSenseMargin: number;
   worstSenseMarginMatId: string | null;
+  worstSenseMarginMatName: string | null;
   shortestRetention: number;
   worstWordlineDelay: number;
 }
@@ -102,8 +104,10 @@ function extremes(mats: MatTable): Extremes {
   const e: Extremes = {
     worstSenseSignal: Number.NaN,
     worstSenseSignalMatId: null,
+    worstSenseSignalMatName: null,
     worstSenseMargin: Number.NaN,
     worstSenseMarginMatId: null,
+    worstSenseMarginMatName: null,
     shortestRetention: Number.NaN,
     worstWordlineDelay: Number.NaN,
   };
@@ -131,6 +135,8 @@ function extremes(mats: MatTable): Extremes {
   if (!first) {
     e.worstSenseSignalMatId = matIdAt(mats, signalMat);
     e.worstSenseMarginMatId = matIdAt(mats, marginMat);
+    e.worstSenseSignalMatName = matLabelAt(mats, signalMat);
+    e.worstSenseMarginMatName = matLabelAt(mats, marginMat);
     e.worstSenseSignal = signal;
     e.worstSenseMargin = margin;
     e.shortestRetention = retention;

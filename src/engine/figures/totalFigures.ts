@@ -14,11 +14,11 @@ import {
 import { TOTAL_REFRESH_FIGURES } from './totalRefreshFigures';
 import { TOTAL_YIELD_FIGURES } from './totalYieldFigures';
 
-const worstOf = (id: string | null) => `Smallest over all mats (mat ${id ?? '—'}).`;
+const worstOf = (name: string | null) => `Smallest over all mats (${name ?? '—'}).`;
 
 /** A worst-case figure with the mat it comes from, or a dash when there are no mats (CLI text). */
-const worstText = (value: string, matId: string | null) =>
-  matId === null ? '— (no mats)' : `${value} (${matId})`;
+const worstText = (value: string, matName: string | null) =>
+  matName === null ? '— (no mats)' : `${value} (${matName})`;
 
 /**
  * The catalogue of whole-design figures, in the order of the JSON summary; the panel shows the entries
@@ -73,14 +73,14 @@ export const TOTAL_FIGURE_CATALOGUE = [
     cli: {
       label: 'worst sense signal',
       text: (r) =>
-        worstText(formatQuantity(r.totals.worstSenseSignal, 'voltage'), r.totals.worstSenseSignalMatId),
+        worstText(formatQuantity(r.totals.worstSenseSignal, 'voltage'), r.totals.worstSenseSignalMatName),
     },
     value: (r) => r.totals.worstSenseSignal,
     explain: (r) => ({
       symbol: 'ΔV_min',
       formula: 'ΔV_min = min over mats of the sense signal',
       inputs: [input('mats', 'mats', r.totals.matCount, 'count')],
-      method: worstOf(r.totals.worstSenseSignalMatId),
+      method: worstOf(r.totals.worstSenseSignalMatName),
       source: SOURCES.westeHarris,
     }),
   }),
@@ -93,14 +93,14 @@ export const TOTAL_FIGURE_CATALOGUE = [
     cli: {
       label: 'worst margin after refresh window',
       text: (r) =>
-        worstText(formatQuantity(r.totals.worstSenseMargin, 'voltage'), r.totals.worstSenseMarginMatId),
+        worstText(formatQuantity(r.totals.worstSenseMargin, 'voltage'), r.totals.worstSenseMarginMatName),
     },
     value: (r) => r.totals.worstSenseMargin,
     explain: (r, design) => ({
       symbol: 'M_min',
       formula: 'M_min = min over mats of (ΔV after a refresh window − V_req)',
       inputs: [input('target', 'minimum margin target', design.operating.minimumSenseMargin, 'voltage')],
-      method: worstOf(r.totals.worstSenseMarginMatId),
+      method: worstOf(r.totals.worstSenseMarginMatName),
       source: SOURCES.common,
     }),
   }),
