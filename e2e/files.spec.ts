@@ -1,4 +1,4 @@
-import { readFileSync } from 'node:fs';
+import { readFileSync, writeFileSync } from 'node:fs';
 import { expect, test, type Page } from '@playwright/test';
 import { restoreDesign } from '../src/io/restore';
 import { FloorplanPage, loadDemoDesign } from './floorplanPage';
@@ -50,8 +50,11 @@ test('PNG export decodes at the requested size; summary JSON and CSV carry the f
   await app.open();
   await page.getByTestId('export-png-menu').click();
   await page.getByTestId('png-scale').selectOption('3');
-  const whole = pngSize(await download(page, 'export-png'));
-  expect(whole.width).toBe(1200 * 3);
+  const wholeBytes = await download(page, 'export-png');
+  writeFileSync(test.info().outputPath('floorplan-3x.png'), wholeBytes);
+  const whole = pngSize(wholeBytes);
+  // The floorplan's 1,200 px and a 250 px side panel (legend and scale bar beside it, never on it).
+  expect(whole.width).toBe((1200 + 250) * 3);
 
   await page.getByTestId('export-png-menu').click();
   await page.getByTestId('png-region-view').check();
@@ -59,7 +62,7 @@ test('PNG export decodes at the requested size; summary JSON and CSV carry the f
   await page.getByTestId('png-title').uncheck();
   const view = pngSize(await download(page, 'export-png'));
   const box = await app.canvasArea.boundingBox();
-  expect(view.width).toBe(Math.round(box?.width ?? 0));
+  expect(view.width).toBe(Math.round(box?.width ?? 0) + 250);
   expect(view.height).toBe(Math.round(box?.height ?? 0));
 
   const summary = JSON.parse((await download(page, 'export-summary')).toString('utf8'));

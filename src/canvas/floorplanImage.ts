@@ -2,9 +2,11 @@ import type { Report } from '../engine';
 import { placeBlocks } from '../geometry/placedBlocks';
 import { boundingBox } from '../geometry/rect';
 import type { Design } from '../model/design';
+import { formatMatSize } from '../model/matSize';
 import { formatQuantity } from '../model/units';
 import type { Viewport } from '../store/appStore';
 import { BLOCK_STYLE, CANVAS_BACKGROUND, ERROR_STROKE, LEGEND_ROWS } from './blockStyle';
+import { imageLayout, NAMED_STRIPS_FROM_SCALE, scaleBar, SIDE_PANEL_WIDTH } from './imageLayout';
 import { fitViewport, MICROMETRES_PER_METRE } from './viewportMath';
 
 /** What a PNG export shows. */
@@ -48,14 +50,15 @@ export function renderFloorplanImage(
   const frame = imageFrame(design, options, view);
   const scale = Math.min(4, Math.max(1, Math.round(options.scale)));
   const titleHeight = options.titleBlock ? TITLE_BLOCK_HEIGHT : 0;
+  const layout = imageLayout(frame.width);
   const canvas = document.createElement('canvas');
-  canvas.width = frame.width * scale;
+  canvas.width = layout.width * scale;
   canvas.height = (frame.height + titleHeight) * scale;
   const ctx = canvas.getContext('2d');
   if (!ctx) throw new Error('this browser cannot draw on a canvas');
   ctx.scale(scale, scale);
   ctx.fillStyle = CANVAS_BACKGROUND;
-  ctx.fillRect(0, 0, frame.width, frame.height + titleHeight);
+  ctx.fillRect(0, 0, layout.width, frame.height + titleHeight);
 
   const flagged = new Set(report.findings.filter((f) => f.severity === 'error').flatMap((f) => f.blockIds));
   const v = frame.viewport;
@@ -81,20 +84,70 @@ export function renderFloorplanImage(
       ctx.fillStyle = style.text;
       ctx.font = '12px sans-serif';
       ctx.fillText(p.block.name || p.block.id, x + 6, y + 16);
-      ctx.fillText(`${p.block.cellsPerBitline} × ${p.block.cellsPerWordline}`, x + 6, y + 31);
+      ctx.fillText(formatMatSize(p.block.cellsPerBitline, p.block.cellsPerWordline), x + 6, y + 31);
+    } else if (p.block.type !== 'mat' && scale >= NAMED_STRIPS_FROM_SCALE) {
+      drawStripName(ctx, p.block.name || p.block.id, x, y, w, h, style.text);
     }
   }
   ctx.restore();
-  if (options.legend) drawLegend(ctx, frame.width, frame.height);
-  if (options.titleBlock) drawTitleBlock(ctx, design, report, frame.height, frame.width);
+  // The side panel: the legend at its top, the scale bar under it; both beside the floorplan, never on it.
+  let panelY = 10;
+  if (options.legend) panelY = drawLegend(ctx, layout.panelX, panelY) + 14;
+  drawScaleBar(ctx, layout.panelX, panelY, k);
+  if (options.titleBlock) drawTitleBlock(ctx, design, report, frame.height, layout.width);
   return canvas;
 }
 
-function drawLegend(ctx: CanvasRenderingContext2D, width: number, height: number) {
-  const boxW = 230;
+/** A strip's or decoder's name along its length, when it fits (9 px text; turned for standing strips). */
+function drawStripName(
+  ctx: CanvasRenderingContext2D,
+  name: string,
+  x: number,
+  y: number,
+  w: number,
+  h: number,
+  colour: string,
+) {
+  ctx.font = '9px sans-serif';
+  const standing = h > w;
+  const length = standing ? h : w;
+  const thickness = standing ? w : h;
+  if (thickness < 10 || ctx.measureText(name).width > length - 6) return;
+  ctx.save();
+  ctx.fillStyle = colour;
+  ctx.textAlign = 'center';
+  ctx.textBaseline = 'middle';
+  ctx.translate(x + w / 2, y + h / 2);
+  if (standing) ctx.rotate(-Math.PI / 2);
+  ctx.fillText(name, 0, 0);
+  ctx.restore();
+}
+
+/** A scale bar of a round length with its label, at (x0, y0) in the side panel. */
+function drawScaleBar(ctx: CanvasRenderingContext2D, x0: number, y0: number, pixelsPerMetre: number) {
+  const bar = scaleBar(pixelsPerMetre);
+  const x = x0 + 18;
+  const y = y0 + 18;
+  ctx.strokeStyle = '#1f2328';
+  ctx.lineWidth = 2;
+  ctx.beginPath();
+  ctx.moveTo(x, y - 5);
+  ctx.lineTo(x, y);
+  ctx.lineTo(x + bar.pixels, y);
+  ctx.lineTo(x + bar.pixels, y - 5);
+  ctx.stroke();
+  ctx.fillStyle = '#1f2328';
+  ctx.font = '12px sans-serif';
+  ctx.textAlign = 'left';
+  ctx.textBaseline = 'alphabetic';
+  ctx.fillText(formatQuantity(bar.length, 'length'), x, y + 16);
+}
+
+/** Draws the legend in the side panel from its top (x0, y0); returns where it ends (px). */
+function drawLegend(ctx: CanvasRenderingContext2D, x0: number, y0: number): number {
+  const boxW = SIDE_PANEL_WIDTH - 20;
   const boxH = LEGEND_ROWS.length * 17 + 10;
-  const x0 = width - boxW - 10;
-  const y0 = height - boxH - 10;
+  x0 += 10;
   ctx.fillStyle = 'rgba(255,255,255,0.92)';
   ctx.fillRect(x0, y0, boxW, boxH);
   ctx.strokeStyle = '#d4d0c6';
@@ -112,6 +165,7 @@ function drawLegend(ctx: CanvasRenderingContext2D, width: number, height: number
     // The image has room for the full words; the status bar shows the short ones.
     ctx.fillText(row.title, x0 + 30, y + 10);
   });
+  return y0 + boxH;
 }
 
 function drawTitleBlock(
