@@ -3,7 +3,7 @@ import { evaluate } from '../../src/engine';
 import { matFiguresCsv } from '../../src/io/matCsv';
 import { reportTable } from '../../src/io/reportTable';
 import { reportSummary } from '../../src/io/summary';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 import type { Design } from '../../src/model/design';
 
 /** The demo with one mat moved onto its neighbour: an overlap finding that names two mats. */
