@@ -83,6 +83,6 @@ describe('keyboard shortcuts', () => {
     expect(row('escape')).toBe('Esc');
     expect(row('view.zoomIn')).toBe('+ / −');
     expect(SHORTCUTS.some((s) => s.action === 'view.zoomOut')).toBe(false);
-    expect(commandTitle(editorCommand('view.fitAll'))).toBe('Zoom to fit the whole floorplan (F)');
+    expect(commandTitle(editorCommand('view.fitAll'))).toBe('Fit: show the whole floorplan (F)');
   });
 });
