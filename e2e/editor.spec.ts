@@ -213,10 +213,9 @@ test.describe('floorplan editor journeys', () => {
     const app = new EditorPage(page);
     await app.openWith('?generate=64x64');
     await expect(app.blockCount()).toHaveText('12,418 blocks');
-    // 2 million sense amplifiers share the failure budget, so k grows and every mat's margin falls just
-    // under the 20 mV target: one grouped warning, no errors.
-    await expect(app.findings()).toHaveCount(1);
-    await expect(app.findings().first()).toContainText('4096 mats');
+    // The whole 2 Gb die: 2 million sense amplifiers share the two-tailed failure budget (k ≈ 5.0), and
+    // the margin (≈ 32 mV developed) still clears the 20 mV target: no findings.
+    await expect(app.findings()).toHaveCount(0);
     const c = await app.camera();
     // Mat r10c10 of the generated grid, at the demo's spacing (µm): see src/app/startupDesign.ts.
     const centre = await app.worldPoint(
@@ -228,7 +227,6 @@ test.describe('floorplan editor journeys', () => {
     await expect(app.summary()).toContainText('Mat 11.11');
     await expect(page.getByTestId('findings')).toBeVisible();
     await page.keyboard.press('Control+z');
-    await expect(app.findings()).toHaveCount(1);
-    await expect(app.findings().first()).toContainText('below the 20 mV target');
+    await expect(app.findings()).toHaveCount(0);
   });
 });

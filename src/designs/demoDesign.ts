@@ -29,7 +29,8 @@ export function demoDesign(): Design {
     name: 'Wren bank section (invented demo)',
     lengthUnit: 'm',
     process: { ...DEMO_PROCESS },
-    operating: { ...DEFAULT_OPERATING },
+    // The section is one of 256 on the 2 Gb die: the offset budget and the weakest cell are the die's.
+    operating: { ...DEFAULT_OPERATING, floorplanCopiesPerDie: 256 },
     cells: BUILTIN_CELLS.map((c) => ({ ...c })),
     blocks: demoGrid(4, 4),
   };
@@ -40,6 +41,8 @@ export function generatedDemoGrid(rows: number, columns: number): Design {
   return {
     ...demoDesign(),
     name: `Generated ${rows} × ${columns}-mat floorplan (invented demo process)`,
+    // A generated floorplan is its own die (64 × 64 demo mats are the whole 2 Gb chip).
+    operating: { ...DEFAULT_OPERATING, floorplanCopiesPerDie: 1 },
     blocks: demoGrid(rows, columns),
   };
 }

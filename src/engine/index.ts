@@ -38,16 +38,28 @@ export {
   type RepairMonteCarloRequest,
   type RepairMonteCarloResult,
 } from './physics/repairMonteCarlo';
+export { drivenLineTime } from './physics/rcLine';
+export {
+  wordlineCapacitance,
+  wordlineTiming,
+  type WordlineCapacitance,
+  type WordlineTiming,
+} from './physics/wordline';
+export {
+  developedShare,
+  developmentTimeConstant,
+  equaliseTime,
+  latchTime,
+  restoreTime,
+  rowTiming,
+  type RowTiming,
+} from './physics/rowTiming';
 
 // evaluation: a design in, a report out
 export { evaluate, findMatReport } from './evaluation/evaluate';
-export {
-  cellLeakage,
-  matPhysics,
-  MINIMUM_LEAKAGE,
-  senseAmpsOfMat,
-  type DesignContext,
-} from './evaluation/matPhysics';
+export { FULLY_SERVED, matPhysics, senseAmpsOfMat, type MatService } from './evaluation/matPhysics';
+export { cellLeakage, designContext, MINIMUM_LEAKAGE, type DesignContext } from './evaluation/designContext';
+export { refreshRowCycle } from './evaluation/totals';
 export {
   firingKinds,
   MAT_RULES,

@@ -1,21 +1,21 @@
 import type { BuildSpec } from '../designs/buildPartition';
 import { planPartition, type PartitionPlan } from '../designs/partitionPlan';
 import {
-  cellLeakage,
+  designContext,
   firingKinds,
+  FULLY_SERVED,
   matPhysics,
-  offsetSigmaMultiplier,
   refreshBusyFraction,
   refreshCycleTime,
   refreshInterval,
   refreshPower,
+  refreshRowCycle,
   rowsPerRefreshCommand,
   senseAmpsOfMat,
   storedHighLevel,
   matDomainShare,
   repeatedShare,
   yieldOfDomains,
-  type DesignContext,
   type DomainSum,
   type PartitionFigures,
   type MatFigures,
@@ -42,17 +42,13 @@ export type PartitionFiguresResult =
 export class ProcessCache {
   private readonly entries = new Map<
     ProcessProfile,
-    { operating: OperatingConditions; storedHigh: StoredHighLevel; leakage: number }
+    { operating: OperatingConditions; storedHigh: StoredHighLevel }
   >();
 
   get(process: ProcessProfile, operating: OperatingConditions) {
     const hit = this.entries.get(process);
     if (hit && hit.operating === operating) return hit;
-    const entry = {
-      operating,
-      storedHigh: storedHighLevel(process),
-      leakage: cellLeakage(process, operating),
-    };
+    const entry = { operating, storedHigh: storedHighLevel(process) };
     this.entries.set(process, entry);
     return entry;
   }
@@ -100,14 +96,16 @@ export function partitionFigures(
   const placed: PlacedMat = { block, rect: matRect(block, geometry), cell, geometry };
   const shared = cache.get(process, operating);
   const senseAmpCount = senseAmpsOfMat(placed) * plan.matCount;
-  const ctx: DesignContext = {
+  const ctx = designContext(
     process,
     operating,
-    storedHigh: shared.storedHigh,
-    sigmaMultiplier: offsetSigmaMultiplier(senseAmpCount, operating.allowedSenseFailures),
-    leakage: shared.leakage,
-  };
-  const mat = matPhysics(placed, SENSE_AMP_ENDS, 0, ctx);
+    senseAmpCount,
+    geometry.bits * plan.matCount,
+    shared.storedHigh,
+  );
+  // Every mat has strips at both bit-line ends and drivers at both word-line ends; the open-array edge
+  // loss changes only the usable bits, which the plan counts.
+  const mat = matPhysics(placed, { ...FULLY_SERVED, senseAmpEnds: SENSE_AMP_ENDS }, ctx);
 
   const totalArea = plan.width * plan.height;
   const cellArea = plan.usableBits * geometry.cellArea;
@@ -115,15 +113,18 @@ export function partitionFigures(
   // Mats side by side share a row (one band), so the bank has matRows × word lines rows to refresh.
   const rows = plan.matRows * geometry.wordlineCount;
   const interval = refreshInterval(operating.refreshWindow, operating.refreshCommandsPerWindow);
-  const cycle = refreshCycleTime(
-    rowsPerRefreshCommand(rows, operating.refreshCommandsPerWindow),
-    operating.refreshRowsInParallel,
-    process.rowCycleTime,
-  );
+  const refreshed = mat.needsRefresh;
+  const cycle = refreshed
+    ? refreshCycleTime(
+        rowsPerRefreshCommand(rows, operating.refreshCommandsPerWindow),
+        operating.refreshRowsInParallel,
+        refreshRowCycle(process.rowCycleTimeOverride, mat.timing.rc).rowCycleTime,
+      )
+    : 0;
 
   // The engine's own check rules; the representative mat loses no bits, the bank's edge rows do.
   const { errorKinds, warningKinds } = firingKinds(
-    { ...mat, lostBits: plan.lostBits },
+    { ...mat, unpartneredBits: plan.lostBits },
     { process, operating },
     shared.storedHigh,
   );
@@ -158,10 +159,12 @@ export function partitionFigures(
       refreshCycleTime: cycle,
       refreshInterval: interval,
       refreshBusyFraction: refreshBusyFraction(cycle, interval),
-      refreshPower: refreshPower(
-        plan.matCount * mat.activationEnergy.total * mat.wordlineCount,
-        operating.refreshWindow,
-      ),
+      refreshPower: refreshed
+        ? refreshPower(
+            plan.matCount * mat.activationEnergy.total * mat.wordlineCount,
+            operating.refreshWindow,
+          )
+        : 0,
       dieYield: y?.dieYield ?? Number.NaN,
       repairProbability: y?.repairProbability ?? Number.NaN,
       redundancyArea: y?.redundancyArea ?? Number.NaN,

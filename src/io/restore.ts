@@ -1,4 +1,5 @@
 import { DESIGN_FORMAT, DESIGN_VERSION, designSchema, type Design } from '../model/design';
+import { MIGRATIONS } from './migrations';
 
 /** Largest design text we will read (bytes of UTF-16 text ≈ characters); a whole die fits easily. */
 export const MAX_DESIGN_TEXT_LENGTH = 64 * 1024 * 1024;
@@ -7,9 +8,6 @@ export const MAX_DESIGN_TEXT_LENGTH = 64 * 1024 * 1024;
 export type RestoreResult =
   | { readonly ok: true; readonly design: Design; readonly migratedFrom: number | null }
   | { readonly ok: false; readonly errors: readonly string[] };
-
-/** Migrations from older format versions, keyed by the version they upgrade from. */
-const MIGRATIONS: Record<number, (old: Record<string, unknown>) => Record<string, unknown>> = {};
 
 function fail(...errors: string[]): RestoreResult {
   return { ok: false, errors };

@@ -1,5 +1,11 @@
 import { z } from 'zod';
-import { BITLINE_ARCHITECTURES, CELL_KINDS, isGainCell } from './cellBasics';
+import {
+  BITLINE_ARCHITECTURES,
+  CELL_KIND_LABEL,
+  CELL_KINDS,
+  isDifferentialCell,
+  readsByCurrent,
+} from './cellBasics';
 import { nonNegative, positive } from './schemaParts';
 
 export {
@@ -10,7 +16,11 @@ export {
   cellPitches,
   crossingOccupancy,
   footprintInF2,
+  isDifferentialCell,
   isGainCell,
+  needsRefresh,
+  readsByCurrent,
+  seriesReadDevices,
   type BitlineArchitecture,
   type CellKind,
 } from './cellBasics';
@@ -25,6 +35,11 @@ export const gainReadSchema = z.object({
   readOffCurrent: nonNegative('read off-current', 1e-3),
   /** Leakage each unselected cell adds to the read bit line (A). */
   unselectedLeakageCurrent: nonNegative('unselected-cell read-bit-line leakage', 1e-3),
+  /**
+   * Gate-to-storage-node overlap of the write transistor (F): when the write word line falls after a write
+   * it pulls the stored level down by V_WWL·Cc/(Cc + Cs). Gain cells only; 0 for 4T and 6T.
+   */
+  writeCouplingCapacitance: nonNegative('write word-line coupling capacitance', 1e-12).default(0),
 });
 export type GainRead = z.infer<typeof gainReadSchema>;
 
@@ -47,12 +62,27 @@ export const cellDefinitionSchema = z
       .nullable(),
     /** Storage capacitance of one cell (F): the capacitor for 1T1C, the storage node for gain cells. */
     storageCapacitance: positive('storage capacitance', 1e-18, 1e-12),
-    /** Read-path devices; required for gain cells, null for 1T1C. */
+    /** Read-path devices; required for cells read by current (gain, 4T, 6T), null for 1T1C. */
     gainRead: gainReadSchema.nullable(),
+    /** Standby current one static (6T) cell draws from the supply (A); 0 for dynamic cells. */
+    holdCurrent: nonNegative('hold current', 1e-3).default(0),
   })
   .superRefine((cell, ctx) => {
-    if (isGainCell(cell.kind) && cell.gainRead === null) {
-      ctx.addIssue({ code: 'custom', path: ['gainRead'], message: 'a gain cell needs its read-path values' });
+    if (readsByCurrent(cell.kind) && cell.gainRead === null) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['gainRead'],
+        message: `a ${CELL_KIND_LABEL[cell.kind]} needs its read-path values`,
+      });
+    }
+    if (isDifferentialCell(cell.kind) !== (cell.bitlineArchitecture === 'paired')) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['bitlineArchitecture'],
+        message: isDifferentialCell(cell.kind)
+          ? `a ${CELL_KIND_LABEL[cell.kind]} holds both lines of its pair: its bit lines are "paired"`
+          : 'only 4T and 6T cells hold both lines of a pair ("paired" bit lines)',
+      });
     }
   });
 

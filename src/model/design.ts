@@ -9,7 +9,7 @@ import { MAX_COORDINATE } from './schemaParts';
 /** The name every Matloom design file carries, so that a stray JSON file is recognised as not ours. */
 export const DESIGN_FORMAT = 'matloom-design';
 /** Current version of the design format; older versions are migrated by io/restore. */
-export const DESIGN_VERSION = 1;
+export const DESIGN_VERSION = 2;
 /** Most blocks one design may hold: a whole die of small mats with their strips. */
 export const MAX_BLOCKS = 300_000;
 /** Most variants one document may hold. */

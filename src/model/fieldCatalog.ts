@@ -28,11 +28,28 @@ export const PROCESS_FIELDS: readonly FieldInfo<ProcessNumericField>[] = [
   { key: 'bodyEffectCoefficient', label: 'Body effect γ', quantity: 'sqrtVoltage' },
   { key: 'surfacePotential', label: 'Surface potential 2φF', quantity: 'voltage' },
   { key: 'bitlineJunctionCapacitancePerCell', label: 'BL junction C per cell', quantity: 'capacitance' },
-  { key: 'bitlineToWordlineCapacitancePerCell', label: 'BL–WL coupling per cell', quantity: 'capacitance' },
-  { key: 'bitlineToBitlineCapacitancePerCell', label: 'BL–BL coupling per cell', quantity: 'capacitance' },
+  {
+    key: 'bitlineToWordlineCapacitancePerCrossing',
+    label: 'BL–WL coupling per crossing',
+    quantity: 'capacitance',
+  },
+  {
+    key: 'bitlineToBitlineCapacitancePerCrossing',
+    label: 'BL–BL coupling per crossing',
+    quantity: 'capacitance',
+  },
   { key: 'bitlineWireCapacitancePerLength', label: 'BL wire C per length', quantity: 'capacitancePerLength' },
   { key: 'bitlineResistancePerLength', label: 'BL resistance per length', quantity: 'resistancePerLength' },
-  { key: 'wordlineGateCapacitancePerCell', label: 'WL gate C per cell', quantity: 'capacitance' },
+  {
+    key: 'wordlineGateCapacitancePerActiveCrossing',
+    label: 'WL gate C per active crossing',
+    quantity: 'capacitance',
+  },
+  {
+    key: 'wordlinePassingCapacitancePerCrossing',
+    label: 'WL C per passing crossing',
+    quantity: 'capacitance',
+  },
   {
     key: 'wordlineWireCapacitancePerLength',
     label: 'WL wire C per length',
@@ -43,6 +60,8 @@ export const PROCESS_FIELDS: readonly FieldInfo<ProcessNumericField>[] = [
   { key: 'accessTransistorResistance', label: 'Access transistor R_on', quantity: 'resistance' },
   { key: 'senseAmpInputCapacitance', label: 'Sense-amp input C', quantity: 'capacitance' },
   { key: 'senseAmpSwitchedCapacitance', label: 'Sense-amp switched C', quantity: 'capacitance' },
+  { key: 'senseAmpLatchResistance', label: 'Sense-amp latch 1/gm', quantity: 'resistance' },
+  { key: 'equaliserResistance', label: 'Equaliser R_on', quantity: 'resistance' },
   { key: 'senseAmpMatchingCoefficient', label: 'Sense-amp A_VT', quantity: 'matchingCoefficient' },
   { key: 'senseAmpTransistorWidth', label: 'Sense-amp W', quantity: 'length' },
   { key: 'senseAmpTransistorLength', label: 'Sense-amp L', quantity: 'length' },
@@ -50,10 +69,14 @@ export const PROCESS_FIELDS: readonly FieldInfo<ProcessNumericField>[] = [
   { key: 'foldedNoiseFactor', label: 'Noise factor, folded', quantity: 'ratio' },
   { key: 'openNoiseFactor', label: 'Noise factor, open', quantity: 'ratio' },
   { key: 'gainCellSenseTime', label: 'Gain-cell sense time', quantity: 'time' },
-  { key: 'rowCycleTime', label: 'Row cycle tRC', quantity: 'time' },
+  { key: 'rowCycleTimeOverride', label: 'tRC for refresh (0 = computed)', quantity: 'time' },
   { key: 'cellLeakageCurrent', label: 'Cell leakage', quantity: 'current' },
   { key: 'leakageReferenceTemperature', label: 'Leakage given at', quantity: 'temperature' },
   { key: 'leakageActivationEnergy', label: 'Leakage activation energy', quantity: 'activationEnergy' },
+  { key: 'tailCellFraction', label: 'Weak-cell tail fraction', quantity: 'ratio' },
+  { key: 'tailLeakageMultiplier', label: 'Tail leakage × typical', quantity: 'ratio' },
+  { key: 'tailLeakageSpread', label: 'Tail spread σ(ln I)', quantity: 'ratio' },
+  { key: 'tailActivationEnergy', label: 'Tail activation energy', quantity: 'activationEnergy' },
 ];
 
 /** Operating conditions in panel order. */
@@ -64,6 +87,10 @@ export const OPERATING_FIELDS: readonly FieldInfo<OperatingNumericField>[] = [
   { key: 'refreshRowsInParallel', label: 'Rows refreshed in parallel', quantity: 'count' },
   { key: 'minimumSenseMargin', label: 'Minimum sense margin', quantity: 'voltage' },
   { key: 'allowedSenseFailures', label: 'Allowed failing sense amps', quantity: 'ratio' },
+  { key: 'floorplanCopiesPerDie', label: 'Floorplan copies per die', quantity: 'count' },
+  { key: 'senseFireTime', label: 'Sense fires after WL on', quantity: 'time' },
+  { key: 'restoreFraction', label: 'Restore to share of 1', quantity: 'ratio' },
+  { key: 'equaliseResidual', label: 'Equalise residual', quantity: 'voltage' },
 ];
 
 /** Gain-cell read-path fields. */

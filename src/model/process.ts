@@ -7,7 +7,10 @@ export type OffsetStacking = (typeof OFFSET_STACKINGS)[number];
 
 /**
  * A process profile: the technology numbers the engine needs, all in SI units.
- * Per-cell parasitics are the share of one cell along its bit line or word line.
+ * Parasitics are counted by crossing, not by cell: a bit line crosses every word line of its mat and a
+ * word line every bit line, and in a folded array a line crosses twice as many lines as it has cells.
+ * A crossing where the word line is the gate of that bit line's cell is "active"; elsewhere the word
+ * line passes by (over isolation or a neighbour's active area).
  */
 export const processProfileSchema = z
   .object({
@@ -30,16 +33,27 @@ export const processProfileSchema = z
     surfacePotential: positive('surface potential 2φF', 0.1, 3),
     /** Bit-line capacitance per cell from the cell's junction and contact (F). */
     bitlineJunctionCapacitancePerCell: nonNegative('bit-line junction capacitance per cell', 1e-12),
-    /** Bit-line to word-line coupling per cell (F). */
-    bitlineToWordlineCapacitancePerCell: nonNegative('bit-line to word-line capacitance per cell', 1e-12),
-    /** Bit-line to neighbouring bit-line coupling per cell (F). */
-    bitlineToBitlineCapacitancePerCell: nonNegative('bit-line to bit-line capacitance per cell', 1e-12),
+    /** Bit-line to word-line coupling at one crossing (F); seen by the bit line and by the word line. */
+    bitlineToWordlineCapacitancePerCrossing: nonNegative(
+      'bit-line to word-line capacitance per crossing',
+      1e-12,
+    ),
+    /** Coupling of a bit line to its two neighbours over one word-line pitch of its run (F). */
+    bitlineToBitlineCapacitancePerCrossing: nonNegative(
+      'bit-line to bit-line capacitance per crossing',
+      1e-12,
+    ),
     /** Bit-line wire capacitance to everything else, per metre of bit line (F/m). */
     bitlineWireCapacitancePerLength: nonNegative('bit-line wire capacitance per length', 1e-6),
     /** Bit-line resistance per metre (Ω/m). */
     bitlineResistancePerLength: nonNegative('bit-line resistance per length', 1e15),
-    /** Word-line gate load per cell (F). */
-    wordlineGateCapacitancePerCell: nonNegative('word-line gate capacitance per cell', 1e-12),
+    /** Word-line gate load where the word line is the gate of a cell's access transistor (F). */
+    wordlineGateCapacitancePerActiveCrossing: nonNegative(
+      'word-line gate capacitance per active crossing',
+      1e-12,
+    ),
+    /** Word-line load where it passes a bit line without gating a cell (folded arrays) (F). */
+    wordlinePassingCapacitancePerCrossing: nonNegative('word-line passing capacitance per crossing', 1e-12),
     /** Word-line wire capacitance per metre (F/m). */
     wordlineWireCapacitancePerLength: nonNegative('word-line wire capacitance per length', 1e-6),
     /** Word-line resistance per metre (Ω/m). */
@@ -48,6 +62,13 @@ export const processProfileSchema = z
     senseAmpInputCapacitance: nonNegative('sense-amplifier input capacitance', 1e-12),
     /** Capacitance the sense-amplifier latch switches rail to rail per sense (F). */
     senseAmpSwitchedCapacitance: nonNegative('sense-amplifier switched capacitance', 1e-12),
+    /**
+     * 1/gm of the sense-amplifier latch's cross-coupled pair (Ω): with the bit line on each latch node the
+     * regeneration time constant is τ = C_bl / gm.
+     */
+    senseAmpLatchResistance: positive('sense-amplifier latch resistance 1/gm', 1, 1e9),
+    /** On-resistance of the equaliser that shorts a bit-line pair during precharge (Ω). */
+    equaliserResistance: positive('equaliser resistance', 1, 1e9),
     /** Pelgrom matching coefficient A_VT of the sense-amplifier pair (V·m); 2.5 mV·µm = 2.5e-9 V·m. */
     senseAmpMatchingCoefficient: nonNegative('sense-amplifier matching coefficient A_VT', 1e-6),
     /** Gate width W of one sense-amplifier input transistor (m). */
@@ -68,8 +89,11 @@ export const processProfileSchema = z
     accessTransistorResistance: nonNegative('access transistor resistance', 1e12),
     /** Time a gain-cell read bit line is allowed to develop before sensing (s). */
     gainCellSenseTime: positive('gain-cell sense time', 1e-12, 1e-3),
-    /** Row cycle time tRC: one activate-precharge (s). */
-    rowCycleTime: positive('row cycle time', 1e-10, 1e-3),
+    /**
+     * Row cycle time tRC the refresh figures use instead of the computed one (s); 0 keeps the computed
+     * tRC = tRAS + tRP of the slowest mat.
+     */
+    rowCycleTimeOverride: nonNegative('row cycle time override', 1e-3),
     /** Storage-node leakage current of one cell at the reference temperature (A). */
     cellLeakageCurrent: nonNegative('cell leakage current', 1e-6),
     /** Temperature at which the leakage current is given (K). */
@@ -80,6 +104,15 @@ export const processProfileSchema = z
      * scaled leakage finite.
      */
     leakageActivationEnergy: nonNegative('leakage activation energy', 3.2e-19),
+    /**
+     * Weak-cell tail of the retention distribution (two-population model): the share of cells in the tail,
+     * the median tail leakage as a multiple of the main cell's, the spread σ of ln(leakage) within the
+     * tail, and the tail's own activation energy (J).
+     */
+    tailCellFraction: nonNegative('tail cell fraction', 1),
+    tailLeakageMultiplier: positive('tail leakage multiplier', 1, 1e9),
+    tailLeakageSpread: nonNegative('tail leakage spread σ(ln I)', 5),
+    tailActivationEnergy: nonNegative('tail activation energy', 3.2e-19),
   })
   .superRefine((p, ctx) => {
     if (p.prechargeVoltage > p.arrayVoltage) {

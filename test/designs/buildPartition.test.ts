@@ -131,7 +131,8 @@ describe('partition builder', () => {
     ['1T1C folded 8F² on Halden D18', FOLDED_8F2_CELL, 64e-3, [128, 256, 512], [256, 512, 1024, 2048]],
     ['1T1C open 6F² on Halden D18', OPEN_6F2_CELL, 64e-3, [64, 128, 256], [256, 512, 1024]],
     ['eDRAM folded on Halden D18', EDRAM_CELL, 64e-3, [128, 512, 1024], [256, 1024]],
-    ['3T gain cell on Halden D18, 10 ms refresh', GAIN_3T_CELL, 10e-3, [64, 256], [128, 1024]],
+    // The weakest of the bank's 16 Mi cells (two-population retention) sets the window: 2 ms, not 10 ms.
+    ['3T gain cell on Halden D18, 2 ms refresh', GAIN_3T_CELL, 2e-3, [64, 256], [128, 1024]],
   ] as const)('gives a design with no failing check for sane inputs: %s', (_, cell, window, bls, wls) => {
     for (const cellsPerBitline of bls) {
       for (const cellsPerWordline of wls) {

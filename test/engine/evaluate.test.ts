@@ -10,10 +10,10 @@ import {
   TOTAL_FIGURES,
 } from '../../src/engine';
 import { senseAmpStripIdsOf, wordlineDriverIdsOf } from '../../src/engine/evaluation/matTable';
-import { OPEN_6F2_CELL } from '../../src/model/builtins';
 import type { Block } from '../../src/model/block';
 import { demoDesign } from '../../src/designs/demoDesign';
-import { designWith, mat, processWith, strip } from '../support/designs';
+import { DEMO_PROCESS, FOLDED_8F2_CELL, OPEN_6F2_CELL } from '../../src/model/builtins';
+import { designWith, mat, processWith, servedMatFigures, strip } from '../support/designs';
 
 const F = 18e-9;
 
@@ -41,11 +41,10 @@ describe('evaluate: one mat', () => {
     const p = processWith({});
     const r = evaluate(designWith([M, saTop, swdLeft], p));
     const m = findMatReport(r, 'm1');
+    // Arithmetic: a folded bit line of 512 cells crosses 1024 word lines; couplings count crossings.
     const expected =
-      512 *
-        (p.bitlineJunctionCapacitancePerCell +
-          p.bitlineToWordlineCapacitancePerCell +
-          p.bitlineToBitlineCapacitancePerCell) +
+      512 * p.bitlineJunctionCapacitancePerCell +
+      1024 * (p.bitlineToWordlineCapacitancePerCrossing + p.bitlineToBitlineCapacitancePerCrossing) +
       p.bitlineWireCapacitancePerLength * SIDE +
       p.senseAmpInputCapacitance;
     expect(m?.figures.bitlineCapacitance.total).toBeCloseTo(expected, 25);
@@ -56,37 +55,45 @@ describe('evaluate: one mat', () => {
     expect(m.figures.read.signalHigh).toBeCloseTo((1.1 - 0.55) * ctr, 12);
   });
 
-  it('a folded 8F² mat alone has 8 F² per bit and 100 % efficiency; open 6F² has 6 F²', () => {
+  it('a folded 8F² mat has 8 F² per bit and fills its outline; open 6F² has 6 F²', () => {
     // Source: cell footprints 8F² folded, 6F² open (common practice; shared/REFERENCES.md entry 16).
-    expect(evaluate(designWith([M])).totals.areaPerBitInF2).toBeCloseTo(8, 9);
-    expect(evaluate(designWith([M])).totals.arrayEfficiency).toBeCloseTo(1, 9);
-    const open = evaluate(designWith([mat({ cellId: OPEN_6F2_CELL.id })]));
-    expect(open.totals.areaPerBitInF2).toBeCloseTo(6, 9);
+    const folded = servedMatFigures(FOLDED_8F2_CELL, DEMO_PROCESS, 512);
+    expect(folded.cellFootprint / (F * F)).toBeCloseTo(8, 9);
+    expect(folded.cellArea / folded.area).toBeCloseTo(1, 9);
+    expect(servedMatFigures(OPEN_6F2_CELL, DEMO_PROCESS, 512).cellFootprint / (F * F)).toBeCloseTo(6, 9);
   });
 
   it('array efficiency of a 1 Gb, 0.109 µm² cell on 180 mm² is 65.0 %', () => {
     // Source: Takahashi et al., "A Multigigabit DRAM Technology With 6F² Open-Bitline Cell…",
     // IEEE JSSC 36(11), 2001: 1 Gb, cell 0.109 µm², die 180 mm² (published inputs; arithmetic → 65.0 %).
-    // Four open 6F² mats of 16384 × 16384 cells = 2^30 bits with F chosen so that 6F² = 0.109 µm²;
-    // a filler block makes the bounding box 180 mm².
-    const f = Math.sqrt(0.109e-12 / 6);
-    const side = 16384 * 3 * f; // word-line length (bit-line pitch 3F)
-    const height = 16384 * 2 * f;
-    const mats: Block[] = [0, 1, 2, 3].map((i) =>
-      mat({
-        id: `m${i}`,
-        cellId: OPEN_6F2_CELL.id,
-        cellsPerBitline: 16384,
-        cellsPerWordline: 16384,
-        x: 0,
-        y: i * height,
-      }),
-    );
-    const fillerHeight = 180e-6 / side - 4 * height;
-    const design = designWith(
-      [...mats, strip('filler', 'columnDecoder', 0, 4 * height, side, fillerHeight)],
-      processWith({ featureSize: f }),
-    );
+    // Four folded mats of 2^28 cells with a drawn cell of 0.109 µm², sense-amplifier strips between and
+    // around them and a driver strip beside them (so every bit is usable); a filler block makes the
+    // bounding box 180 mm².
+    const f = 18e-9;
+    const cell = {
+      ...FOLDED_8F2_CELL,
+      id: 'takahashi',
+      // 0.109 µm² = bit-line pitch × word-line pitch / ½.
+      pitchOverride: { bitlinePitch: Math.sqrt(0.109e-12 / 2), wordlinePitch: Math.sqrt(0.109e-12 / 2) },
+    };
+    const pitch = cell.pitchOverride.bitlinePitch;
+    const side = 16384 * pitch; // 16384 bit lines across (8192 cells per word line)
+    const height = 2 * 16384 * pitch; // 32768 word lines along (16384 cells per bit line)
+    const sa = 10e-6;
+    const driver = 10e-6;
+    const blocks: Block[] = [strip('sa0', 'senseAmpStrip', driver, 0, side, sa)];
+    for (let i = 0; i < 4; i++) {
+      const y = sa + i * (height + sa);
+      blocks.push(
+        mat({ id: `m${i}`, cellId: cell.id, cellsPerBitline: 16384, cellsPerWordline: 8192, x: driver, y }),
+        strip(`sa${i + 1}`, 'senseAmpStrip', driver, y + height, side, sa),
+        strip(`d${i}`, 'wordlineDriverStrip', 0, y, driver, height),
+      );
+    }
+    const used = sa + 4 * (height + sa);
+    const fillerHeight = 180e-6 / (side + driver) - used;
+    blocks.push(strip('filler', 'columnDecoder', 0, used, side + driver, fillerHeight));
+    const design = { ...designWith(blocks, processWith({ featureSize: f })), cells: [cell] };
     const t = evaluate(design).totals;
     expect(t.bits).toBe(2 ** 30);
     expect(t.totalArea).toBeCloseTo(180e-6, 12);

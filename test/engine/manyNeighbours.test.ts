@@ -103,12 +103,15 @@ describe('evaluate: an open-bit-line mat with many partner mats', () => {
     expect(20 * narrow.width).toBeCloseTo(gWide.width, 15);
   });
 
-  it('with every partner present no bit of the wide mat is lost', () => {
-    expect(findMatReport(evaluate(designWith(layout(null))), 'wide')?.figures.lostBits).toBe(0);
+  it('with every partner present no bit line of the wide mat that reaches the strip lacks a partner', () => {
+    const report = findMatReport(evaluate(designWith(layout(null))), 'wide');
+    expect(report?.figures.unpartneredBits).toBe(0);
+    // Half of its bit lines go to its other edge, where there is no strip: those are unsensed.
+    expect(report?.unsensedBitlines).toBe(gWide.bitlineCount / 2);
   });
 
-  it('without one partner its 32 bit lines of the wide mat lose their 256 cells each', () => {
+  it('without one partner, the 16 of its 32 bit lines there that go to this edge lose their 256 cells each', () => {
     const report = findMatReport(evaluate(designWith(layout(4))), 'wide');
-    expect(report?.figures.lostBits).toBe(narrowCells * 256);
+    expect(report?.figures.unpartneredBits).toBe((narrowCells / 2) * 256);
   });
 });

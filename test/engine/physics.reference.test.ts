@@ -45,11 +45,12 @@ describe('sense-amplifier offset', () => {
     expect(inverseNormal(p)).toBeCloseTo(z, 5);
   });
 
-  it('a one-sided 5σ tail is 2.8665e-7, so k = 5 for 1 failure in 3.4886 million amplifiers', () => {
-    // Source: Abramowitz & Stegun, Table 26.1, Q(5) = 2.8665e-7 (from memory).
+  it('a one-sided 5σ tail is 2.8665e-7; both tails count, so k = 5 for 1 failure in 1.7443 million amplifiers', () => {
+    // Source: Abramowitz & Stegun, Table 26.1, Q(5) = 2.8665e-7 (from memory); two-tailed budget
+    // 2·Q(k) = f/N (common practice, no source): N = 1/(2·2.8665e-7) = 1.7443e6.
     expect(upperTailQuantile(2.8665e-7)).toBeCloseTo(5, 3);
-    expect(offsetSigmaMultiplier(1 / 2.8665e-7, 1)).toBeCloseTo(5, 3);
-    expect(offsetSigmaMultiplier(10, 10)).toBe(0);
+    expect(offsetSigmaMultiplier(1 / (2 * 2.8665e-7), 1)).toBeCloseTo(5, 3);
+    expect(offsetSigmaMultiplier(10, 20)).toBe(0);
   });
 });
 

@@ -7,7 +7,7 @@ import { chargeTransferRatio } from '../../src/engine/physics/sensing';
 import { gridFloorplan } from '../../src/designs/gridFloorplan';
 import { BUILTIN_CELLS, BUILTIN_PROCESSES, DEMO_PROCESS, FOLDED_8F2_CELL } from '../../src/model/builtins';
 import { MAX_CELLS_PER_LINE } from '../../src/model/block';
-import { designWith, mat } from '../support/designs';
+import { designWith, mat, servedMatFigures } from '../support/designs';
 
 /** Capacitances in the ranges the schema allows (F): Cs from 1 aF to 1 pF, Cbl up to 100 pF. */
 const storage = fc.double({ min: 1e-18, max: 1e-12, noNaN: true });
@@ -96,16 +96,10 @@ describe('net sense margin', () => {
           fc.integer({ min: 1, max: 2048 }),
           (cell, process, a, b) => {
             fc.pre(a !== b);
+            // A mat served at both ends, as in an array (a lone mat without strips senses nothing).
             const margins = (n: number) => {
-              const m = findMatReport(
-                evaluate(designWith([mat({ cellId: cell.id, cellsPerBitline: n })], process)),
-                'm1',
-              );
-              return [
-                m?.figures.senseMargin ?? NaN,
-                m?.figures.senseMarginAtRefresh ?? NaN,
-                m?.figures.senseSignalAfterRefresh ?? NaN,
-              ] as const;
+              const f = servedMatFigures(cell, process, n);
+              return [f.senseMargin, f.senseMarginAtRefresh, f.senseSignalAfterRefresh] as const;
             };
             const [low, high] = a < b ? [a, b] : [b, a];
             const [freshLow, agedLow, agedSignalLow] = margins(low);
@@ -122,12 +116,31 @@ describe('net sense margin', () => {
   );
 });
 
-/** Every number in a mat report, by dotted name, that is NaN. */
+/**
+ * Every number in a mat report, by dotted name, that is NaN, less those that honestly do not exist: the
+ * figures of a mat with no usable bit, the retention of a static cell, the latch and the steps after it when there is no signal to latch, and the
+ * turn-on time when the word line never reaches the turn-on level.
+ */
 function nanFigures(report: MatReport): string[] {
+  const f = report.figures;
+  const absent = new Set<string>();
+  if (f.usableBits === 0) {
+    // Nothing is sensed (a lone open mat has no partner): no margin, retention or row cycle exists.
+    for (const k of ['senseMargin', 'senseMarginAtRefresh', 'retentionTime', 'weakestRetentionTime'])
+      absent.add(`figures.${k}`);
+    for (const k of ['latch', 'restore', 'equalise', 'rcd', 'ras', 'rp', 'rc'])
+      absent.add(`figures.timing.${k}`);
+  }
+  if (!f.needsRefresh) absent.add('figures.retentionTime').add('figures.weakestRetentionTime');
+  if (!(f.senseSignal > 0)) for (const k of ['latch', 'rcd', 'ras', 'rc']) absent.add(`figures.timing.${k}`);
+  if (!(f.wordlineTiming.turnOnShare < 1)) {
+    absent.add('figures.wordlineTiming.toTurnOn').add('figures.timing.wordlineOn');
+    for (const k of ['rcd', 'ras', 'rc']) absent.add(`figures.timing.${k}`);
+  }
   const found: string[] = [];
   const walk = (value: unknown, name: string) => {
     if (typeof value === 'number') {
-      if (Number.isNaN(value)) found.push(name);
+      if (Number.isNaN(value) && !absent.has(name)) found.push(name);
     } else if (typeof value === 'object' && value !== null) {
       for (const [key, inner] of Object.entries(value)) walk(inner, name ? `${name}.${key}` : key);
     }
@@ -176,10 +189,19 @@ describe('grid floorplans from gridFloorplan', () => {
     },
   );
 
-  it('a lone folded mat with no strips reaches exactly its cell area: efficiency 1 (the bound is tight)', () => {
+  it('folded 8F² cells tile their mat exactly: cell area = mat area (the efficiency bound is tight)', () => {
     // Source: folded 8F² cells tile the mat outline exactly (common practice, no source; arithmetic).
-    const report = evaluate(designWith([mat()], DEMO_PROCESS));
-    expect(report.totals.arrayEfficiency).toBeCloseTo(1, 12);
+    const f = servedMatFigures(FOLDED_8F2_CELL, DEMO_PROCESS, 512);
+    expect(f.cellArea / f.area).toBeCloseTo(1, 12);
     expect(FOLDED_8F2_CELL.bitlineArchitecture).toBe('folded');
+  });
+
+  it('a lone mat with no strips senses nothing: no usable bit, efficiency 0, no area per bit', () => {
+    // Source: a bit on a line that reaches no sense amplifier cannot be read (common practice, no source).
+    const report = evaluate(designWith([mat()], DEMO_PROCESS));
+    expect(report.totals.usableBits).toBe(0);
+    expect(report.totals.arrayEfficiency).toBe(0);
+    expect(report.totals.areaPerBit).toBeNaN();
+    expect(report.totals.worstSenseMargin).toBeNaN();
   });
 });

@@ -28,7 +28,7 @@ const request: SweepRequest = {
 describe('sweep core', () => {
   it('visits every combination once, and chunks add up to the whole', () => {
     const n = sweepSize(request);
-    expect(n).toBe(4 * 3 * 6 * 3);
+    expect(n).toBe(4 * 3 * BUILTIN_CELLS.length * 3);
     const whole = runSweepRange(request, 0, n);
     const chunked = [0, 50, 100, 150, n].flatMap((s, k, a) =>
       k + 1 < a.length ? runSweepRange(request, s, a[k + 1] ?? n) : [],
@@ -71,7 +71,7 @@ describe('sweep core', () => {
     });
     expect(sweepCoordinates(request, 3).cellsPerBitline).toBe(128);
     expect(sweepCoordinates(request, 12).cellIndex).toBe(1);
-    expect(sweepCoordinates(request, 72).processIndex).toBe(1);
+    expect(sweepCoordinates(request, 12 * BUILTIN_CELLS.length).processIndex).toBe(1);
   });
 
   it('steps values inclusively and refuses a step that goes nowhere', () => {

@@ -99,11 +99,35 @@ const TOTALS_UNDEFINED_WITHOUT_MATS: readonly (keyof Totals)[] = [
   'worstWordlineDelay',
 ];
 
+/**
+ * Totals that may not exist for a valid design, as NaN ("—" with a reason in the app): no usable bit
+ * (area per bit), no sensed mat or no signal to latch (row timing, margin), no refreshed mat (retention),
+ * a word line that never reaches the turn-on level or an access device that never turns off (row timing),
+ * or nothing placed (efficiency). Never ±Infinity.
+ */
+const TOTALS_THAT_MAY_NOT_EXIST: readonly string[] = [
+  'worstSenseSignal',
+  'worstSenseMargin',
+  'shortestRetention',
+  'shortestWeakestRetention',
+  'worstWordlineTurnOn',
+  'worstRowToColumnDelay',
+  'worstRowCycleTime',
+  'areaPerBit',
+  'areaPerBitInF2',
+  'arrayEfficiency',
+  'refresh.cycleTime',
+  'refresh.rowCycleTime',
+  'refresh.busyFraction',
+];
+
 /** Numeric totals that are NaN or infinite, by name; those undefined without mats are allowed then. */
 function nonFiniteTotals(totals: Totals): string[] {
   const bad: string[] = [];
   const check = (name: string, value: unknown) => {
-    if (typeof value === 'number' && !Number.isFinite(value)) bad.push(`${name} = ${value}`);
+    if (typeof value !== 'number' || Number.isFinite(value)) return;
+    if (Number.isNaN(value) && TOTALS_THAT_MAY_NOT_EXIST.includes(name)) return;
+    bad.push(`${name} = ${value}`);
   };
   for (const [key, value] of Object.entries(totals)) {
     if (totals.matCount === 0 && (TOTALS_UNDEFINED_WITHOUT_MATS as readonly string[]).includes(key)) continue;

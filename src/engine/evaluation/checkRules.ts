@@ -10,7 +10,7 @@ import type { FindingKind, MatFigures, Severity } from './report';
  * (explore/partitionFigures.ts), so the two cannot disagree.
  */
 
-/** The figures a mat rule reads (SI); a bank reports the lost bits of the whole bank. */
+/** The figures a mat rule reads (SI); a bank reports the unpartnered bits of the whole bank. */
 export type CheckedFigures = Pick<
   MatFigures,
   | 'senseMarginAtRefresh'
@@ -19,7 +19,8 @@ export type CheckedFigures = Pick<
   | 'senseAmpFits'
   | 'senseAmpPitchBudget'
   | 'retentionTime'
-  | 'lostBits'
+  | 'weakestRetentionTime'
+  | 'unpartneredBits'
 >;
 
 /** Process and operating values the rules compare against. */
@@ -60,16 +61,17 @@ export const MAT_RULES: readonly MatRule[] = [
       `a sense amplifier needs ${formatQuantity(process.senseAmpWidth, 'length')} but its bit-line pitch budget is ${formatQuantity(f.senseAmpPitchBudget, 'length')}`,
   },
   {
+    // The refresh window is set by the weakest cell on the die, not by a typical one.
     kind: 'retention',
-    check: (f, { operating }) => (f.retentionTime < operating.refreshWindow ? 'error' : null),
+    check: (f, { operating }) => (f.weakestRetentionTime < operating.refreshWindow ? 'error' : null),
     detail: (f, { operating }) =>
-      `retention ${formatQuantity(f.retentionTime, 'time')} is shorter than the ${formatQuantity(operating.refreshWindow, 'time')} refresh window`,
+      `the weakest cell's retention ${formatQuantity(f.weakestRetentionTime, 'time')} (typical cell ${formatQuantity(f.retentionTime, 'time')}) is shorter than the ${formatQuantity(operating.refreshWindow, 'time')} refresh window`,
   },
   {
     kind: 'openBitlineEdge',
-    check: (f) => (f.lostBits > 0 ? 'warning' : null),
+    check: (f) => (f.unpartneredBits > 0 ? 'warning' : null),
     detail: (f) =>
-      `${formatQuantity(f.lostBits, 'count')} bits on open bit lines have no partner mat beyond their sense-amplifier strip and are lost`,
+      `${formatQuantity(f.unpartneredBits, 'count')} bits on open bit lines have no partner mat beyond their sense-amplifier strip and are lost`,
   },
 ];
 

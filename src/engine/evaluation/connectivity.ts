@@ -10,7 +10,7 @@ import { uncoveredLineCount } from '../../geometry/interval';
 import type { NeighbourTable } from '../../geometry/neighbourRows';
 import { ABUTMENT_TOLERANCE } from '../../geometry/rect';
 import { bitlineEndSides, wordlineEndSides } from '../../geometry/stripFit';
-import { unpartneredBitlines } from './openBitline';
+import { pairsAcrossStrips, unpartneredBitlines, unsensedOpenBitlines } from './openBitline';
 import type { MatTableBuilder } from './matTable';
 
 /** Which strips serve a mat, found from geometry alone. */
@@ -133,16 +133,20 @@ export function matConnections(
   const g = kind.geometry;
   const senseAmpEnds = (top ? 1 : 0) + (bottom ? 1 : 0);
   // Open bit lines are counted from the contacts before the coverage count below reorders their spans.
-  const unpartnered = unpartneredBitlines(table, at, contacts, senseAmpEnds, neighbours);
+  const open = pairsAcrossStrips(kind.cell);
+  const unpartnered = unpartneredBitlines(table, at, contacts, neighbours);
   serving.setServing(k, senseAmpStrips, senseAmpCount, driverStrips, driverCount);
-  into.unsensedBitlines = uncoveredLineCount(
-    contacts.span,
-    contacts.count,
-    g.wordlineLength,
-    ABUTMENT_TOLERANCE,
-    g.bitlinePitch,
-    g.bitlineCount,
-  );
+  // Open bit lines go half to each edge; other lines are served by a strip at either end.
+  into.unsensedBitlines = open
+    ? unsensedOpenBitlines(contacts, bitlineEnds, g.wordlineLength, g.bitlinePitch, g.bitlineCount)
+    : uncoveredLineCount(
+        contacts.span,
+        contacts.count,
+        g.wordlineLength,
+        ABUTMENT_TOLERANCE,
+        g.bitlinePitch,
+        g.bitlineCount,
+      );
   into.undrivenWordlines = uncoveredLineCount(
     driven,
     drivenCount,

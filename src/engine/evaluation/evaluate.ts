@@ -6,33 +6,37 @@ import type { Design } from '../../model/design';
 import { collectFindings } from './checks';
 import { layoutFindings } from './layoutFindings';
 import { emptyConnections, matConnections } from './connectivity';
-import { cellLeakage, matPhysics, senseAmpsOfMat, type DesignContext } from './matPhysics';
-import { offsetSigmaMultiplier } from '../physics/offset';
+import { designContext as contextOf, type DesignContext } from './designContext';
+import { matPhysics, senseAmpsOfMat } from './matPhysics';
 import { findPositionedOverlaps, overlapAreaAt } from './overlaps';
 import { rememberReportState } from './reportState';
 import type { MatFigures, MatReport, Report } from './report';
 import { matAt, matIndexOf, MatTableBuilder } from './matTable';
-import { storedHighLevel } from '../physics/storedLevel';
 import { computeTotals } from './totals';
 
-/** The design-wide values every mat needs (stored level, k of the offset budget, leakage at temperature). */
-export function designContext(design: Design, senseAmpCount: number): DesignContext {
-  const { process, operating } = design;
-  return {
-    process,
-    operating,
-    storedHigh: storedHighLevel(process),
-    sigmaMultiplier: offsetSigmaMultiplier(senseAmpCount, operating.allowedSenseFailures),
-    leakage: cellLeakage(process, operating),
-  };
+export { MINIMUM_LEAKAGE } from './designContext';
+
+/** The design-wide values every mat needs, for a design whose floorplan has these counts. */
+export function designContext(design: Design, senseAmpCount: number, cellCount: number): DesignContext {
+  return contextOf(design.process, design.operating, senseAmpCount, cellCount);
 }
 
-/** Sense amplifiers of all mats: the count that shares the failure allowance. */
+/** Sense amplifiers of all mats: the floorplan's share of the die's failure allowance. */
 export function countSenseAmps(table: BlockTable): number {
   let count = 0;
   for (let i = 0; i < table.count; i++) {
     const kind = table.kindOf[i] as number;
     if (kind >= 0) count += senseAmpsOfMat(table.kinds[kind] as MatKind);
+  }
+  return count;
+}
+
+/** Cells of all mats: the floorplan's share of the die's cells, among which the weakest is sought. */
+export function countCells(table: BlockTable): number {
+  let count = 0;
+  for (let i = 0; i < table.count; i++) {
+    const kind = table.kindOf[i] as number;
+    if (kind >= 0) count += (table.kinds[kind] as MatKind).geometry.bits;
   }
   return count;
 }
@@ -59,11 +63,16 @@ export function evaluateMatAt(
   const c = matConnections(table, at, neighbours, mats, k, connections);
   const kindIndex = table.kindOf[at] as number;
   const lost = c.unpartneredBitlines;
-  // A number for the common case (no lost bit lines), a string otherwise: either way one map lookup.
-  const key = lost === 0 ? kindIndex * 3 + c.senseAmpEnds : `${kindIndex}|${c.senseAmpEnds}|${lost}`;
+  const unsensed = c.unsensedBitlines;
+  const undriven = c.undrivenWordlines;
+  // A number for the common case (every line served), a string otherwise: either way one map lookup.
+  const key =
+    lost === 0 && unsensed === 0 && undriven === 0
+      ? kindIndex * 3 + c.senseAmpEnds
+      : `${kindIndex}|${c.senseAmpEnds}|${lost}|${unsensed}|${undriven}`;
   let figures = figuresByKind?.get(key);
   if (!figures) {
-    figures = matPhysics(kindAt(table, at), c.senseAmpEnds, lost, ctx);
+    figures = matPhysics(kindAt(table, at), c, ctx);
     figuresByKind?.set(key, figures);
   }
   mats.set(k, at, figures, c.unsensedBitlines, c.undrivenWordlines);
@@ -94,7 +103,7 @@ export function evaluate(design: Design): Report {
   const table = blockTable(design);
   const neighbours = evaluationNeighbours(table);
   const senseAmpCount = countSenseAmps(table);
-  const ctx = designContext(design, senseAmpCount);
+  const ctx = designContext(design, senseAmpCount, countCells(table));
   const figuresByKind = new Map<number | string, MatFigures>();
   let matCount = 0;
   for (let i = 0; i < table.count; i++) if (table.type[i] === MAT_CODE) matCount++;
@@ -106,20 +115,13 @@ export function evaluate(design: Design): Report {
   }
   const mats = builder.finish();
   const overlaps = findPositionedOverlaps(table, neighbours);
-  const totals = computeTotals(table, mats, design, ctx.sigmaMultiplier, senseAmpCount);
+  const overlapList = overlaps.map((o) => o.overlap);
+  const totals = computeTotals(table, mats, design, ctx, senseAmpCount, overlapList);
   const report: Report = {
     mats,
     totals,
     storedHigh: ctx.storedHigh,
-    findings: [
-      ...collectFindings(
-        mats,
-        overlaps.map((o) => o.overlap),
-        ctx.storedHigh,
-        design,
-      ),
-      ...layoutFindings(table, mats),
-    ],
+    findings: [...collectFindings(mats, overlapList, ctx.storedHigh, design), ...layoutFindings(table, mats)],
   };
   rememberReportState(report, { table, overlaps });
   return report;

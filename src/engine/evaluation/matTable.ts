@@ -19,7 +19,7 @@ export interface MatTable {
   readonly position: Int32Array;
   readonly figureIndex: Int32Array;
   readonly figures: readonly MatFigures[];
-  readonly unsensedBitlines: Int32Array;
+  readonly unsensedBitlines: Float64Array;
   readonly undrivenWordlines: Int32Array;
   readonly servingPositions: Int32Array;
   readonly servingOffsets: Int32Array;
@@ -98,7 +98,7 @@ export class MatTableBuilder {
   private readonly figureIndex: Int32Array;
   private readonly figures: MatFigures[];
   private readonly figureIndexOf: Map<MatFigures, number>;
-  private readonly unsensed: Int32Array;
+  private readonly unsensed: Float64Array;
   private readonly undriven: Int32Array;
   private servingPositions: Int32Array;
   private servingUsed = 0;
@@ -114,7 +114,7 @@ export class MatTableBuilder {
     this.figureIndex = new Int32Array(count);
     this.figures = earlierFigures.slice();
     this.figureIndexOf = new Map(this.figures.map((f, i) => [f, i]));
-    this.unsensed = new Int32Array(count);
+    this.unsensed = new Float64Array(count);
     this.undriven = new Int32Array(count);
     // A tiled mat has two sense-amplifier strips and two drivers; the list grows if a design has more.
     this.servingPositions = new Int32Array(Math.max(16, 4 * count));

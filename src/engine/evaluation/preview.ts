@@ -7,7 +7,14 @@ import type { Block } from '../../model/block';
 import type { Design } from '../../model/design';
 import { collectFindings } from './checks';
 import { layoutFindings } from './layoutFindings';
-import { countSenseAmps, designContext, evaluate, evaluateMatAt, evaluationNeighbours } from './evaluate';
+import {
+  countCells,
+  countSenseAmps,
+  designContext,
+  evaluate,
+  evaluateMatAt,
+  evaluationNeighbours,
+} from './evaluate';
 import { findPositionedOverlaps, overlapAreaAt, type PositionedOverlap } from './overlaps';
 import { rememberReportState, reportState } from './reportState';
 import type { Report } from './report';
@@ -112,8 +119,8 @@ function previewNeighbours(
  * added nor removed). Mats beside a changed block are evaluated again through a composite index (the
  * static index without the changing blocks, plus their new places); every other mat keeps its report.
  * Totals and findings are then recomputed from the mat reports in one linear pass. When the change
- * alters the number of sense amplifiers (a resize), every margin moves with k, so the whole design is
- * evaluated instead.
+ * alters the number of sense amplifiers or cells (a resize), every margin moves with k and every
+ * retention with the weakest cell, so the whole design is evaluated instead.
  */
 export function previewReport(base: PreviewBase, changed: readonly Block[]): Report {
   const { design, report, index, changingPositions } = base;
@@ -125,7 +132,9 @@ export function previewReport(base: PreviewBase, changed: readonly Block[]): Rep
   // The design as it stands during the gesture, in design order.
   const current = withBlocksReplaced(base.table, replacements);
   const senseAmpCount = countSenseAmps(current);
-  if (senseAmpCount !== report.totals.senseAmpCount) {
+  const cellCount = countCells(current);
+  // k of the offset budget follows the sense-amplifier count, the weakest cell the cell count.
+  if (senseAmpCount !== report.totals.senseAmpCount || cellCount !== report.totals.bits) {
     return evaluate({ ...design, blocks: current.blocks.slice() });
   }
 
@@ -146,7 +155,7 @@ export function previewReport(base: PreviewBase, changed: readonly Block[]): Rep
     for (const i of composite.near(rect, ABUTMENT_TOLERANCE))
       if (current.type[i] === MAT_CODE) affected.add(i);
   }
-  const ctx = designContext(design, senseAmpCount);
+  const ctx = designContext(design, senseAmpCount, cellCount);
   const neighbours = previewNeighbours(current, composite, affected);
   // Every other mat keeps its row of the report's table; the figures list is extended, never reordered.
   const builder = new MatTableBuilder(current.blocks, report.mats.count, report.mats.figures);
@@ -183,14 +192,10 @@ export function previewReport(base: PreviewBase, changed: readonly Block[]): Rep
   }
   overlaps.sort((a, b) => a.first - b.first || a.second - b.second);
 
-  const totals = computeTotals(current, mats, design, ctx.sigmaMultiplier, senseAmpCount);
+  const overlapList = overlaps.map((o) => o.overlap);
+  const totals = computeTotals(current, mats, design, ctx, senseAmpCount, overlapList);
   const findings = [
-    ...collectFindings(
-      mats,
-      overlaps.map((o) => o.overlap),
-      report.storedHigh,
-      design,
-    ),
+    ...collectFindings(mats, overlapList, report.storedHigh, design),
     ...layoutFindings(current, mats),
   ];
   const result: Report = { mats, totals, storedHigh: report.storedHigh, findings };

@@ -2,23 +2,35 @@ import type { BlockType } from '../../model/block';
 import type { BitlineArchitecture, CellKind } from '../../model/cell';
 import type { BitlineCapacitance } from '../physics/bitline';
 import type { MatTable } from './matTable';
+import type { RowTiming } from '../physics/rowTiming';
 import type { StoredHighLevel } from '../physics/storedLevel';
+import type { WordlineCapacitance, WordlineTiming } from '../physics/wordline';
 
 /** 1T1C read: charge sharing between cell and bit line. Voltages in V. */
 export interface ChargeSharingRead {
   readonly kind: 'chargeSharing';
   readonly chargeTransferRatio: number;
-  /** Rise of the bit line reading a stored 1 (negative: the 1 reads as a 0). */
+  /** Full rise of the bit line reading a stored 1, once charge sharing has settled (negative: the 1 reads as a 0). */
   readonly signalHigh: number;
-  /** Fall of the bit line reading a stored 0. */
+  /** Full fall of the bit line reading a stored 0. */
   readonly signalLow: number;
-  /** Rise for a stored 1 that has leaked for a whole refresh window. */
+  /** Full rise for a stored 1 that has leaked for a whole refresh window. */
   readonly signalHighAfterRefresh: number;
+  /** Charge-sharing time constant τ (s). */
+  readonly developmentTimeConstant: number;
+  /** Share of the full signal developed when the sense amplifier fires: 1 − e^(−t/τ). */
+  readonly developedShare: number;
 }
 
-/** Gain-cell read: current into a read bit line precharged to VDD. */
+/** Read by cell current (gain cells, 4T, 6T): current into a read bit line precharged to VDD. */
 export interface GainCellRead {
   readonly kind: 'gainRead';
+  /** True for 4T and 6T: the cell pulls one line of its own pair, the other sees leakage only. */
+  readonly differential: boolean;
+  /** Transistors in series on the read path (2T: 1; 3T, 4T, 6T: 2). */
+  readonly seriesDevices: number;
+  /** Stored-level loss when the write word line falls (gain cells) (V). */
+  readonly writeCouplingLoss: number;
   /** Read current of a cell holding a 1 (A). */
   readonly readCurrent: number;
   /** Read-bit-line drop for a stored 1 (V). */
@@ -54,9 +66,15 @@ export interface MatFigures {
   readonly wordlineCount: number;
   /** Cells in the mat. */
   readonly bits: number;
-  /** Cells that can be read: bits less those on unpartnered open bit lines. */
+  /**
+   * Cells that can be read: on bit lines that reach a sense amplifier (with a partner, for open arrays)
+   * and on word lines that reach a driver; never negative.
+   */
   readonly usableBits: number;
+  /** bits − usableBits. */
   readonly lostBits: number;
+  /** Bits on open bit lines whose sense amplifier has no partner line beyond its strip. */
+  readonly unpartneredBits: number;
   /** Mat outline area (m²). */
   readonly area: number;
   /** Area of its cells = bits × cell footprint (m²). */
@@ -67,9 +85,17 @@ export interface MatFigures {
   readonly storageCapacitance: number;
   readonly bitlineCapacitance: BitlineCapacitance;
   readonly read: ChargeSharingRead | GainCellRead;
-  /** Signal the sense amplifier can count on (V): min(ΔV1, ΔV0) for 1T1C, (ΔV1 − ΔV0)/2 for gain cells. */
+  /**
+   * Signal once fully developed (V): min(ΔV1, ΔV0) of charge sharing for 1T1C; for current reads it grows
+   * for as long as the sense time lasts, so full = developed.
+   */
+  readonly fullSenseSignal: number;
+  /**
+   * Signal developed when the sense amplifier fires, the one the margin uses (V): the full signal ×
+   * (1 − e^(−t/τ)) for 1T1C, (ΔV1 − ΔV0)/2 for gain cells, ΔV1 − ΔV0 for 4T and 6T.
+   */
   readonly senseSignal: number;
-  /** Sense signal at the end of a refresh window of leakage (V). */
+  /** Developed sense signal at the end of a refresh window of typical leakage (V). */
   readonly senseSignalAfterRefresh: number;
   /** Sense amplifiers serving the mat's bit lines. */
   readonly senseAmpCount: number;
@@ -80,23 +106,39 @@ export interface MatFigures {
   readonly noiseAllowance: number;
   /** Offset budget and noise stacked (V). */
   readonly requiredSignal: number;
-  /** senseSignal − requiredSignal (V). */
+  /** senseSignal − requiredSignal (V); NaN when no bit line of the mat is sensed. */
   readonly senseMargin: number;
-  /** senseSignalAfterRefresh − requiredSignal (V): the figure the margin check uses. */
+  /** senseSignalAfterRefresh − requiredSignal (V): the figure the margin check uses; NaN when unsensed. */
   readonly senseMarginAtRefresh: number;
-  /** Cell leakage at the operating temperature (A). */
+  /** Typical cell leakage at the operating temperature (A). */
   readonly leakage: number;
+  /** Leakage of the weakest cell on the die (two-population model) (A). */
+  readonly weakestLeakage: number;
   /** How far a stored 1 may droop before the margin reaches zero (V). */
   readonly allowedDroop: number;
-  /** Time to that droop (s). */
+  /** Whether the cell's data leaks away (every kind but 6T SRAM). */
+  readonly needsRefresh: boolean;
+  /** Typical cell's time to that droop (s); NaN for a static cell or an unsensed mat. */
   readonly retentionTime: number;
+  /** Weakest cell's time to that droop (s), checked against the refresh window; NaN as above. */
+  readonly weakestRetentionTime: number;
   readonly wordlineResistance: number;
+  /** Total word-line capacitance (F); its parts in wordlineCapacitanceParts. */
   readonly wordlineCapacitance: number;
-  /** 50 % word-line delay, driver plus distributed RC (s). */
+  readonly wordlineCapacitanceParts: WordlineCapacitance;
+  /** Level the word line rises to (V): VPP for 1T1C and 4T, VDD for gain-cell read lines and 6T. */
+  readonly wordlineHighLevel: number;
+  /** 50 % far-end word-line delay, driver plus distributed RC (s). */
   readonly wordlineDelay: number;
+  /** Far-end word-line times to turn-on, 90 % and fall-off (s). */
+  readonly wordlineTiming: WordlineTiming;
   readonly bitlineResistance: number;
-  /** 50 % bit-line development time (s); the sense time for gain cells. */
+  /** 50 % point of the bit-line development (τ·ln 2) for 1T1C; the sense time for current reads (s). */
   readonly bitlineDelay: number;
+  /** The row timing chain; NaN steps when no bit line of the mat is sensed. */
+  readonly timing: RowTiming;
+  /** Standby power of the mat's cells (6T: bits × I_hold × VDD; 0 for dynamic cells) (W). */
+  readonly standbyPower: number;
   readonly activationEnergy: ActivationEnergy;
   /** Width available to one sense amplifier along its strip (m). */
   readonly senseAmpPitchBudget: number;
@@ -127,6 +169,9 @@ export interface RefreshFigures {
   readonly rowsPerCommand: number;
   /** tRFC (s). */
   readonly cycleTime: number;
+  /** The tRC used: computed (slowest mat's) or the process override (s). */
+  readonly rowCycleTime: number;
+  readonly rowCycleTimeOverridden: boolean;
   /** tRFC / tREFI. */
   readonly busyFraction: number;
   /** Average refresh power (W). */
@@ -153,9 +198,11 @@ export interface Totals {
   readonly areaPerBit: number;
   /** areaPerBit / F². */
   readonly areaPerBitInF2: number;
-  /** Sense amplifiers in the design; sets the k of the offset budget. */
+  /** Sense amplifiers in the floorplan. */
   readonly senseAmpCount: number;
-  /** k in k·σ. */
+  /** Sense amplifiers the offset budget is spread over: senseAmpCount × floorplan copies per die. */
+  readonly senseAmpsOnDie: number;
+  /** k in k·σ, two-tailed over senseAmpsOnDie. */
   readonly offsetSigmaMultiplier: number;
   /** Smallest sense signal of any mat (V), or NaN without mats. */
   readonly worstSenseSignal: number;
@@ -166,10 +213,24 @@ export interface Totals {
   readonly worstSenseMargin: number;
   readonly worstSenseMarginMatId: string | null;
   readonly worstSenseMarginMatName: string | null;
-  /** Shortest retention time of any mat (s), or NaN without mats. */
+  /** Shortest typical-cell retention time of any refreshed mat (s), or NaN without one. */
   readonly shortestRetention: number;
-  /** Longest word-line delay (s), or NaN without mats. */
+  /** Shortest weakest-cell retention time of any refreshed mat (s), or NaN without one. */
+  readonly shortestWeakestRetention: number;
+  /** Longest 50 % word-line delay (s), or NaN without mats. */
   readonly worstWordlineDelay: number;
+  /** Longest word-line delay to the access turn-on (s), or NaN without mats. */
+  readonly worstWordlineTurnOn: number;
+  /** Longest word-line delay to 90 % (s), or NaN without mats. */
+  readonly worstWordlineNinety: number;
+  /** Slowest sensed mat's tRCD (s), or NaN without one. */
+  readonly worstRowToColumnDelay: number;
+  /** Slowest sensed mat's tRC (s), or NaN without one: the row cycle refresh uses unless overridden. */
+  readonly worstRowCycleTime: number;
+  /** Standby power of static (6T) cells (W). */
+  readonly standbyPower: number;
+  /** Overlap area between mats, counted once in the cell area (m²). */
+  readonly matOverlapArea: number;
   readonly refresh: RefreshFigures;
 }
 

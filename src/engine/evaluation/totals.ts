@@ -1,6 +1,9 @@
 import { BLOCK_TYPE_CODES, MAT_CODE, type BlockTable } from '../../geometry/blockTable';
 import type { BlockType } from '../../model/block';
+import { needsRefresh } from '../../model/cellBasics';
 import type { Design } from '../../model/design';
+import type { DesignContext } from './designContext';
+import type { Overlap } from './overlaps';
 import {
   refreshBusyFraction,
   refreshCycleTime,
@@ -9,7 +12,7 @@ import {
   rowsPerRefreshCommand,
 } from '../physics/refresh';
 import { figuresAt, matIdAt, matLabelAt, type MatTable } from './matTable';
-import type { RefreshFigures, Totals } from './report';
+import type { MatFigures, RefreshFigures, Totals } from './report';
 
 /** Positions closer than this are the same band edge (m). */
 const BAND_GRID = 1e-9;
@@ -17,7 +20,8 @@ const BAND_GRID = 1e-9;
 /**
  * Rows to refresh. Mats side by side along the word-line direction, with the same extent across it,
  * form one band that a row activation crosses together (one global word line), so a band contributes
- * the largest word-line count among its mats, not the sum. Common practice (no source).
+ * the largest word-line count among its mats, not the sum. Mats of static (6T) cells are not refreshed.
+ * Common practice (no source).
  */
 export function refreshRows(table: BlockTable): number {
   // Bands by axis and start (on a 1 nm grid, as one exact integer), then by extent. Mats of one band
@@ -30,7 +34,8 @@ export function refreshRows(table: BlockTable): number {
   for (let i = 0; i < table.count; i++) {
     if (table.type[i] !== MAT_CODE) continue;
     const kind = table.kinds[table.kindOf[i] as number];
-    if (!kind) continue;
+    // Static cells need no refresh and add no rows.
+    if (!kind || !needsRefresh(kind.cell.kind)) continue;
     const vertical = kind.block.bitlineAxis === 'vertical';
     const start = Math.round((vertical ? (table.y[i] as number) : (table.x[i] as number)) / BAND_GRID);
     const extent = Math.round(
@@ -62,29 +67,50 @@ export function refreshRows(table: BlockTable): number {
   return rows;
 }
 
-function refreshFigures(table: BlockTable, mats: MatTable, design: Design): RefreshFigures {
+/**
+ * The tRC the refresh figures use: the process override when it is set (> 0), else the computed tRC of
+ * the slowest sensed mat (NaN when no mat is sensed).
+ */
+export function refreshRowCycle(
+  override: number,
+  computed: number,
+): { rowCycleTime: number; rowCycleTimeOverridden: boolean } {
+  return override > 0
+    ? { rowCycleTime: override, rowCycleTimeOverridden: true }
+    : { rowCycleTime: computed, rowCycleTimeOverridden: false };
+}
+
+function refreshFigures(
+  table: BlockTable,
+  mats: MatTable,
+  design: Design,
+  computedRowCycle: number,
+): RefreshFigures {
   const o = design.operating;
   const rows = refreshRows(table);
   const interval = refreshInterval(o.refreshWindow, o.refreshCommandsPerWindow);
   const rowsPerCommand = rowsPerRefreshCommand(rows, o.refreshCommandsPerWindow);
-  const cycleTime = refreshCycleTime(rowsPerCommand, o.refreshRowsInParallel, design.process.rowCycleTime);
-  // Every word line of every mat is activated once per window.
+  const cycle = refreshRowCycle(design.process.rowCycleTimeOverride, computedRowCycle);
+  const cycleTime =
+    rows > 0 ? refreshCycleTime(rowsPerCommand, o.refreshRowsInParallel, cycle.rowCycleTime) : 0;
+  // Every word line of every refreshed mat is activated once per window.
   let energyOfAllRows = 0;
   for (let k = 0; k < mats.count; k++) {
     const f = figuresAt(mats, k);
-    energyOfAllRows += f.activationEnergy.total * f.wordlineCount;
+    if (f.needsRefresh) energyOfAllRows += f.activationEnergy.total * f.wordlineCount;
   }
   return {
     rows,
     interval,
     rowsPerCommand,
     cycleTime,
+    ...cycle,
     busyFraction: refreshBusyFraction(cycleTime, interval),
     power: refreshPower(energyOfAllRows, o.refreshWindow),
   };
 }
 
-/** The extreme mats of a floorplan: NaN and null without mats. */
+/** The extreme mats of a floorplan: NaN and null without mats (or without a sensed mat). */
 interface Extremes {
   worstSenseSignal: number;
   worstSenseSignalMatId: string | null;
@@ -93,7 +119,23 @@ interface Extremes {
   worstSenseMarginMatId: string | null;
   worstSenseMarginMatName: string | null;
   shortestRetention: number;
+  shortestWeakestRetention: number;
   worstWordlineDelay: number;
+  worstWordlineTurnOn: number;
+  worstWordlineNinety: number;
+  worstRowToColumnDelay: number;
+  worstRowCycleTime: number;
+  standbyPower: number;
+}
+
+/** min that ignores NaN (a figure that does not exist for that mat). */
+function lower(current: number, value: number): number {
+  return value < current || (Number.isNaN(current) && !Number.isNaN(value)) ? value : current;
+}
+
+/** max that ignores NaN. */
+function higher(current: number, value: number): number {
+  return value > current || (Number.isNaN(current) && !Number.isNaN(value)) ? value : current;
 }
 
 /**
@@ -101,62 +143,86 @@ interface Extremes {
  * in one pass that reads the fields directly (a callback per figure would box every value it returns).
  */
 function extremes(mats: MatTable): Extremes {
+  const nan = Number.NaN;
   const e: Extremes = {
-    worstSenseSignal: Number.NaN,
+    worstSenseSignal: nan,
     worstSenseSignalMatId: null,
     worstSenseSignalMatName: null,
-    worstSenseMargin: Number.NaN,
+    worstSenseMargin: nan,
     worstSenseMarginMatId: null,
     worstSenseMarginMatName: null,
-    shortestRetention: Number.NaN,
-    worstWordlineDelay: Number.NaN,
+    shortestRetention: nan,
+    shortestWeakestRetention: nan,
+    worstWordlineDelay: nan,
+    worstWordlineTurnOn: nan,
+    worstWordlineNinety: nan,
+    worstRowToColumnDelay: nan,
+    worstRowCycleTime: nan,
+    standbyPower: 0,
   };
-  let signal = Infinity;
-  let margin = Infinity;
-  let retention = Infinity;
-  let delay = -Infinity;
-  let first = true;
   let signalMat = -1;
   let marginMat = -1;
+  let previous: MatFigures | null = null;
   for (let k = 0; k < mats.count; k++) {
     const f = figuresAt(mats, k);
-    if (first || f.senseSignal < signal) {
-      signal = f.senseSignal;
-      signalMat = k;
+    e.standbyPower += f.standbyPower;
+    // Mats of one kind share their figures: the extremes of the others need no second look.
+    if (f === previous) continue;
+    previous = f;
+    // Only a mat with a sensed bit line has a signal and a margin to report.
+    if (f.usableBits > 0) {
+      if (signalMat < 0 || f.senseSignal < e.worstSenseSignal) {
+        e.worstSenseSignal = f.senseSignal;
+        signalMat = k;
+      }
+      if (marginMat < 0 || f.senseMarginAtRefresh < e.worstSenseMargin) {
+        e.worstSenseMargin = f.senseMarginAtRefresh;
+        marginMat = k;
+      }
     }
-    if (first || f.senseMarginAtRefresh < margin) {
-      margin = f.senseMarginAtRefresh;
-      marginMat = k;
-    }
-    if (first || f.retentionTime < retention) retention = f.retentionTime;
-    if (first || f.wordlineDelay > delay) delay = f.wordlineDelay;
-    first = false;
+    e.shortestRetention = lower(e.shortestRetention, f.retentionTime);
+    e.shortestWeakestRetention = lower(e.shortestWeakestRetention, f.weakestRetentionTime);
+    e.worstWordlineDelay = higher(e.worstWordlineDelay, f.wordlineDelay);
+    e.worstWordlineTurnOn = higher(e.worstWordlineTurnOn, f.wordlineTiming.toTurnOn);
+    e.worstWordlineNinety = higher(e.worstWordlineNinety, f.wordlineTiming.toNinetyPercent);
+    e.worstRowToColumnDelay = higher(e.worstRowToColumnDelay, f.timing.rcd);
+    e.worstRowCycleTime = higher(e.worstRowCycleTime, f.timing.rc);
   }
-  if (!first) {
+  if (signalMat >= 0) {
     e.worstSenseSignalMatId = matIdAt(mats, signalMat);
-    e.worstSenseMarginMatId = matIdAt(mats, marginMat);
     e.worstSenseSignalMatName = matLabelAt(mats, signalMat);
+  }
+  if (marginMat >= 0) {
+    e.worstSenseMarginMatId = matIdAt(mats, marginMat);
     e.worstSenseMarginMatName = matLabelAt(mats, marginMat);
-    e.worstSenseSignal = signal;
-    e.worstSenseMargin = margin;
-    e.shortestRetention = retention;
-    e.worstWordlineDelay = delay;
   }
   return e;
+}
+
+/** Area where two mats overlap (m²), summed over pairs: those cells exist once, not twice. */
+function matOverlapArea(table: BlockTable, overlaps: readonly Overlap[]): number {
+  if (overlaps.length === 0) return 0;
+  const matIds = new Set<string>();
+  for (let i = 0; i < table.count; i++) if (table.type[i] === MAT_CODE) matIds.add(table.blocks[i]?.id ?? '');
+  let area = 0;
+  for (const o of overlaps) if (matIds.has(o.firstId) && matIds.has(o.secondId)) area += o.area;
+  return area;
 }
 
 /**
  * Whole-floorplan figures. Array efficiency η = usable bits·A_cell / A_total and area per bit =
  * A_total / usable bits (= A_cell / η). Source: the definition used by Takahashi et al., "A Multigigabit
  * DRAM Technology With 6F² Open-Bitline Cell…", IEEE JSSC 36(11), 2001 (cell area over die area).
- * The total is the bounding box of every block, so gaps count against efficiency.
+ * The total is the bounding box of every block, so gaps count against efficiency. Where mats overlap
+ * (an error the checks report) their shared area is counted once, so η never exceeds 100 %.
  */
 export function computeTotals(
   table: BlockTable,
   mats: MatTable,
   design: Design,
-  offsetSigmaMultiplier: number,
+  ctx: DesignContext,
   senseAmpCount: number,
+  overlaps: readonly Overlap[],
 ): Totals {
   let bits = 0;
   let usableBits = 0;
@@ -198,8 +264,12 @@ export function computeTotals(
   };
   // The bounding box of every block (rect.ts boundingBox, read from the table).
   const totalArea = table.count > 0 ? (maxX - minX) * (maxY - minY) : 0;
-  const areaPerBit = usableBits > 0 ? totalArea / usableBits : 0;
+  // Area per bit does not exist without a usable bit: NaN, shown as "—" with the reason.
+  const areaPerBit = usableBits > 0 ? totalArea / usableBits : Number.NaN;
   const F = design.process.featureSize;
+  const overlapArea = matOverlapArea(table, overlaps);
+  const cellAreaOnce = Math.max(0, cellArea - overlapArea);
+  const e = extremes(mats);
   return {
     matCount: mats.count,
     bits,
@@ -208,13 +278,15 @@ export function computeTotals(
     totalArea,
     placedArea,
     areaByType,
-    cellArea,
-    arrayEfficiency: totalArea > 0 ? cellArea / totalArea : 0,
+    cellArea: cellAreaOnce,
+    arrayEfficiency: totalArea > 0 ? Math.min(1, cellAreaOnce / totalArea) : Number.NaN,
     areaPerBit,
     areaPerBitInF2: areaPerBit / (F * F),
     senseAmpCount,
-    offsetSigmaMultiplier,
-    ...extremes(mats),
-    refresh: refreshFigures(table, mats, design),
+    senseAmpsOnDie: ctx.senseAmpsOnDie,
+    offsetSigmaMultiplier: ctx.sigmaMultiplier,
+    ...e,
+    matOverlapArea: overlapArea,
+    refresh: refreshFigures(table, mats, design, e.worstRowCycleTime),
   };
 }

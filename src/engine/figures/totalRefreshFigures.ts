@@ -64,7 +64,14 @@ export const TOTAL_REFRESH_FIGURES = [
       inputs: [
         input('rows/cmd', 'rows per command', r.totals.refresh.rowsPerCommand, 'count'),
         input('n_par', 'rows refreshed in parallel', design.operating.refreshRowsInParallel, 'count'),
-        input('tRC', 'row cycle time', design.process.rowCycleTime, 'time'),
+        input(
+          'tRC',
+          r.totals.refresh.rowCycleTimeOverridden
+            ? 'row cycle time (process override)'
+            : 'row cycle time (computed: the slowest mat’s tRAS + tRP)',
+          r.totals.refresh.rowCycleTime,
+          'time',
+        ),
       ],
       method: 'Rows of one command go in parallel groups, one row cycle each.',
       source: SOURCES.common,

@@ -1,18 +1,39 @@
 import type { GainRead } from '../../model/cell';
 
 /**
- * Saturation current of the storage (read) transistor with its gate at the stored level V:
- *   I = (β/2)·(V − Vt)² for V > Vt, else 0 (long-channel square law).
- * Source: Shichman–Hodges square law, e.g. Sedra & Smith, Microelectronic Circuits (from memory).
+ * Saturation current of the read path with the storage transistor's gate at the stored level V:
+ *   I = (β/(2·n))·(V − Vt)² for V > Vt, else 0 (long-channel square law),
+ * where n equal transistors in series act as one of n times the length (β/n): the 3T cell's read-access
+ * and storage devices, or the 4T/6T cell's access and pull-down devices, give n = 2; the 2T cell's
+ * storage device alone gives n = 1.
+ * Source: Shichman–Hodges square law, e.g. Sedra & Smith, Microelectronic Circuits (from memory); series
+ * stack as one longer device: N. Weste, D. Harris, CMOS VLSI Design, 4th ed., 2011, §4.3 (from memory).
  */
-export function gainReadCurrent(read: GainRead, storedLevel: number): number {
+export function gainReadCurrent(read: GainRead, storedLevel: number, seriesDevices = 1): number {
   const overdrive = storedLevel - read.readThresholdVoltage;
-  return overdrive > 0 ? (read.readTransconductance / 2) * overdrive * overdrive : 0;
+  const beta = read.readTransconductance / Math.max(1, seriesDevices);
+  return overdrive > 0 ? (beta / 2) * overdrive * overdrive : 0;
 }
 
-/** Stored level that gives read current I: V = Vt + √(2I/β) (V). */
-export function levelForReadCurrent(read: GainRead, current: number): number {
-  return read.readThresholdVoltage + Math.sqrt((2 * Math.max(0, current)) / read.readTransconductance);
+/** Stored level that gives read current I: V = Vt + √(2·n·I/β) (V). */
+export function levelForReadCurrent(read: GainRead, current: number, seriesDevices = 1): number {
+  const beta = read.readTransconductance / Math.max(1, seriesDevices);
+  return read.readThresholdVoltage + Math.sqrt((2 * Math.max(0, current)) / beta);
+}
+
+/**
+ * Stored level after the write word line falls: the write transistor's gate overlap Cc and the storage
+ * node Cs divide the fall, ΔV = V_WWL·Cc/(Cc + Cs) (charge conservation, arithmetic; the effect is
+ * described for 2T and 3T gain cells by Meinerzhagen et al., Gain-Cell Embedded DRAMs, Springer, 2018;
+ * from memory).
+ */
+export function writeCouplingLoss(
+  read: GainRead,
+  storageCapacitance: number,
+  writeWordlineSwing: number,
+): number {
+  const cc = read.writeCouplingCapacitance;
+  return cc > 0 ? (writeWordlineSwing * cc) / (cc + storageCapacitance) : 0;
 }
 
 /** The read-bit-line swings of a gain cell and the signal left for the sense amplifier (V). */
@@ -45,12 +66,16 @@ export function gainReadSignals(
   readBitlineCapacitance: number,
   senseTime: number,
   arrayVoltage: number,
+  seriesDevices = 1,
+  differential = false,
 ): GainReadSignals {
   const swing = (current: number) => Math.min(arrayVoltage, (current * senseTime) / readBitlineCapacitance);
-  const readCurrent = gainReadCurrent(read, storedHigh);
+  const readCurrent = gainReadCurrent(read, storedHigh, seriesDevices);
   const dropHigh = swing(readCurrent);
   const dropLow = swing(read.readOffCurrent + (cellsPerBitline - 1) * read.unselectedLeakageCurrent);
-  return { readCurrent, dropHigh, dropLow, senseSignal: (dropHigh - dropLow) / 2 };
+  // A differential cell (4T, 6T) pulls one line of its own pair while the other sees only leakage: the
+  // whole difference is the signal. A single-ended cell is compared with a reference midway.
+  return { readCurrent, dropHigh, dropLow, senseSignal: (dropHigh - dropLow) / (differential ? 1 : 2) };
 }
 
 /**
@@ -65,8 +90,10 @@ export function minimumGainLevel(
   readBitlineCapacitance: number,
   senseTime: number,
   arrayVoltage: number,
+  seriesDevices = 1,
+  differential = false,
 ): number {
-  const neededDrop = 2 * requiredSignal + dropLow;
+  const neededDrop = (differential ? 1 : 2) * requiredSignal + dropLow;
   if (neededDrop > arrayVoltage) return Infinity;
-  return levelForReadCurrent(read, (neededDrop * readBitlineCapacitance) / senseTime);
+  return levelForReadCurrent(read, (neededDrop * readBitlineCapacitance) / senseTime, seriesDevices);
 }

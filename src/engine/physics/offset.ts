@@ -16,16 +16,17 @@ export function pelgromSigma(matchingCoefficient: number, width: number, length:
 }
 
 /**
- * How many σ of offset the sense amplifiers must tolerate so that, of `senseAmpCount` amplifiers, on
- * average no more than `allowedFailures` see an offset beyond the budget against their signal:
- * k = Φ⁻¹(1 − p) with p = allowedFailures / senseAmpCount (one-sided: an offset hurts only when it
- * opposes the data). Common practice (no source) for the failure-count budget.
+ * How many σ of offset the sense amplifiers must tolerate so that, of `senseAmpCount` amplifiers on the
+ * die, on average no more than `allowedFailures` see an offset beyond the budget. An amplifier reads both
+ * data, so an offset beyond the budget in either direction opposes one of them: both tails count,
+ *   P(|offset| > k·σ) = 2·Q(k) = allowedFailures / senseAmpCount  →  k = Q⁻¹(f / (2N)).
+ * Common practice (no source) for the failure-count budget (shared/REFERENCES.md entry 24).
  *
  * @returns k ≥ 0 (0 when every amplifier may fail).
  */
 export function offsetSigmaMultiplier(senseAmpCount: number, allowedFailures: number): number {
   if (senseAmpCount <= 0) return 0;
-  const p = Math.min(0.5, allowedFailures / senseAmpCount);
+  const p = Math.min(0.5, allowedFailures / (2 * senseAmpCount));
   // Math.max also turns the −0 of p = ½ into 0.
   return Math.max(0, upperTailQuantile(p));
 }

@@ -1,3 +1,5 @@
+import { upperTailQuantile } from './statistics';
+
 /** Boltzmann constant (J/K), exact since the 2019 SI redefinition (BIPM, The International System of Units, 9th ed., 2019). */
 export const BOLTZMANN = 1.380649e-23;
 
@@ -52,4 +54,29 @@ export function retentionTime(storageCapacitance: number, allowedDroop: number, 
 /** Voltage a storage node loses in `time` to a constant `leakage`: ΔV = I·t/Cs (V). */
 export function leakageDroop(leakage: number, time: number, storageCapacitance: number): number {
   return (leakage * time) / storageCapacitance;
+}
+
+/**
+ * Leakage of the weakest cell among `cells` in a two-population retention model: most cells leak
+ * `typicalLeakage`; a share `tailFraction` belongs to a tail whose leakage is log-normal with median
+ * `tailMedianLeakage` and spread σ = `tailSpread` in ln(I). The weakest of the n = tailFraction·cells tail
+ * cells sits at the expected largest of n normal samples, Blom's plotting position
+ * z = Φ⁻¹((n − 0.375)/(n + 0.25)) (G. Blom, Statistical Estimates and Transformed Beta-Variables, Wiley,
+ * 1958; from memory). With no tail cell on the die the typical leakage is the weakest.
+ * Two-population model: T. Hamamoto, S. Sugiura, S. Sawada, "On the retention time distribution of
+ * dynamic random access memory (DRAM)", IEEE Trans. Electron Devices 45(6), 1998 (from memory).
+ *
+ * @returns the weakest cell's leakage (A), never below the typical leakage.
+ */
+export function weakestCellLeakage(
+  typicalLeakage: number,
+  tailMedianLeakage: number,
+  tailFraction: number,
+  tailSpread: number,
+  cells: number,
+): number {
+  const n = tailFraction * cells;
+  if (!(n >= 1)) return typicalLeakage;
+  const z = upperTailQuantile(0.625 / (n + 0.25));
+  return Math.max(typicalLeakage, tailMedianLeakage * Math.exp(tailSpread * z));
 }

@@ -24,7 +24,7 @@ export function BuilderForm({ design, settings, onBuilt }: Props) {
   const execute = useAppStore((s) => s.execute);
   const kinds = CELL_KINDS.filter((k) => design.cells.some((c) => c.kind === k));
   const [kind, setKind] = useState<CellKind>(kinds[0] ?? 'dram-1t1c');
-  const architectures = (['folded', 'open'] as const).filter((a) =>
+  const architectures = (['folded', 'open', 'paired'] as const).filter((a) =>
     design.cells.some((c) => c.kind === kind && c.bitlineArchitecture === a),
   );
   const [architectureChoice, setArchitecture] = useState<BitlineArchitecture>('folded');
