@@ -74,12 +74,14 @@ export function wordlineTiming(
 ): WordlineTiming {
   const t = (share: number) => drivenLineTime(driverResistance, lineResistance, lineCapacitance, share);
   const turnOnShare = highLevel > 0 ? turnOnLevel / highLevel : Infinity;
+  // Falling from V_high to V_off is the same curve as rising through 1 − V_off/V_high; a threshold at
+  // (or rounding to) 0 V is never reached, so the fall time does not exist.
+  const fallShare = highLevel > 0 ? 1 - offLevel / highLevel : Infinity;
   return {
     toHalf: t(0.5),
     toTurnOn: turnOnShare < 1 ? t(Math.max(0, turnOnShare)) : Number.NaN,
     toNinetyPercent: t(0.9),
-    // Falling from V_high to V_off is the same curve as rising through 1 − V_off/V_high.
-    toFallOff: offLevel <= 0 ? Number.NaN : highLevel > 0 ? t(Math.max(0, 1 - offLevel / highLevel)) : 0,
+    toFallOff: fallShare < 1 ? t(Math.max(0, fallShare)) : Number.NaN,
     turnOnShare,
   };
 }
