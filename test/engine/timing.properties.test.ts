@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { offsetSigmaMultiplier } from '../../src/engine/offset';
-import { drivenLineTime } from '../../src/engine/rcLine';
+import { offsetSigmaMultiplier } from '../../src/engine/physics/offset';
+import { drivenLineTime } from '../../src/engine/physics/rcLine';
 import { BUILTIN_CELLS, BUILTIN_PROCESSES, DEFAULT_OPERATING } from '../../src/model/builtins';
 import { servedMatFigures } from '../support/designs';
 

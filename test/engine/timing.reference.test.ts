@@ -1,14 +1,14 @@
 import { describe, expect, it } from 'vitest';
-import { offsetSigmaMultiplier } from '../../src/engine/offset';
-import { drivenLineTime } from '../../src/engine/rcLine';
-import { weakestCellLeakage } from '../../src/engine/retention';
+import { offsetSigmaMultiplier } from '../../src/engine/physics/offset';
+import { drivenLineTime } from '../../src/engine/physics/rcLine';
+import { weakestCellLeakage } from '../../src/engine/physics/retention';
 import {
   developedShare,
   developmentTimeConstant,
   latchTime,
   restoreTime,
   rowTiming,
-} from '../../src/engine/rowTiming';
+} from '../../src/engine/physics/rowTiming';
 import { DYNAMIC_4T_CELL, SRAM_6T_CELL } from '../../src/model/builtins';
 import { footprintInF2 } from '../../src/model/cell';
 
