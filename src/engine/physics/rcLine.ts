@@ -13,8 +13,9 @@
 
 /** Eigen-terms kept: the 16th decays as exp(−(15.5π)²·s), negligible beyond s ≈ 0.02 (a 1 % swing). */
 const TERMS = 16;
-const ROOT_ITERATIONS = 50;
-const TIME_ITERATIONS = 60;
+/** Most Newton steps per eigenvalue (it converges in a handful); bisection steps for a time (2⁻⁴⁰). */
+const ROOT_ITERATIONS = 40;
+const TIME_ITERATIONS = 40;
 
 /** The eigenvalues βₙ² and weights aₙ of a line with source-to-line resistance ratio r. */
 export interface LineModes {
@@ -22,7 +23,10 @@ export interface LineModes {
   readonly weights: Float64Array;
 }
 
-/** βₙ in (nπ, nπ + π/2) solves r·β·sin β − cos β = 0 (β·tan β = 1/r), found by bisection. */
+/**
+ * βₙ in (nπ, nπ + π/2) solves h(β) = r·β·sin β − cos β = 0 (β·tan β = 1/r), by Newton steps kept inside
+ * the bracket (a bisection step whenever Newton would leave it).
+ */
 export function lineModes(ratio: number): LineModes {
   const rates = new Float64Array(TERMS);
   const weights = new Float64Array(TERMS);
@@ -32,14 +36,25 @@ export function lineModes(ratio: number): LineModes {
     let high = n * Math.PI + Math.PI / 2;
     let beta = high;
     if (r > 0) {
-      const g = (b: number) => r * b * Math.sin(b) - Math.cos(b);
-      const gLow = g(low);
-      for (let i = 0; i < ROOT_ITERATIONS; i++) {
-        const mid = (low + high) / 2;
-        if (g(mid) * gLow > 0) low = mid;
-        else high = mid;
-      }
+      // h(low) has the sign of −cos(nπ), h(high) the opposite one.
+      const lowSign = n % 2 === 0 ? -1 : 1;
       beta = (low + high) / 2;
+      for (let i = 0; i < ROOT_ITERATIONS; i++) {
+        const sin = Math.sin(beta);
+        const cos = Math.cos(beta);
+        const h = r * beta * sin - cos;
+        if (h === 0) break;
+        if (Math.sign(h) === lowSign) low = beta;
+        else high = beta;
+        const slope = r * sin + r * beta * cos + sin;
+        let next = beta - h / slope;
+        if (!(next > low && next < high)) next = (low + high) / 2;
+        if (Math.abs(next - beta) < 1e-15 * (1 + beta)) {
+          beta = next;
+          break;
+        }
+        beta = next;
+      }
     }
     rates[n] = beta * beta;
     weights[n] = Math.sin(beta) / beta / (0.5 + Math.sin(2 * beta) / (4 * beta));
@@ -65,13 +80,15 @@ export function drivenLineTime(
   lineResistance: number,
   lineCapacitance: number,
   fraction: number,
+  /** The line's modes when the caller asks several fractions of one line (lineModes(Rd/Rw)). */
+  knownModes?: LineModes,
 ): number {
   if (!(fraction >= 0)) return Number.NaN;
   if (fraction >= 1) return Infinity;
   if (fraction === 0 || lineCapacitance <= 0) return 0;
   if (lineResistance <= 0) return -driverResistance * lineCapacitance * Math.log1p(-fraction);
   const tau = lineResistance * lineCapacitance;
-  const modes = lineModes(driverResistance / lineResistance);
+  const modes = knownModes ?? lineModes(driverResistance / lineResistance);
   // The response rises monotonically; bracket s, then bisect. The slowest mode bounds the upper end.
   const slowest = modes.rates[0] as number;
   let high = Math.max(1, (-Math.log1p(-fraction) + 5) / slowest);

@@ -1,5 +1,5 @@
 import type { ProcessProfile } from '../../model/process';
-import { drivenLineTime } from './rcLine';
+import { drivenLineTime, lineModes } from './rcLine';
 
 /** Parts of one (sub-)word line's capacitance (F). */
 export interface WordlineCapacitance {
@@ -72,7 +72,10 @@ export function wordlineTiming(
   turnOnLevel: number,
   offLevel: number,
 ): WordlineTiming {
-  const t = (share: number) => drivenLineTime(driverResistance, lineResistance, lineCapacitance, share);
+  // One set of modes serves every level of the same line.
+  const modes = lineResistance > 0 ? lineModes(driverResistance / lineResistance) : undefined;
+  const t = (share: number) =>
+    drivenLineTime(driverResistance, lineResistance, lineCapacitance, share, modes);
   const turnOnShare = highLevel > 0 ? turnOnLevel / highLevel : Infinity;
   // Falling from V_high to V_off is the same curve as rising through 1 − V_off/V_high; a threshold at
   // (or rounding to) 0 V is never reached, so the fall time does not exist.
