@@ -4,7 +4,7 @@ import { evaluate, findMatReport } from '../../src/engine';
 import { matGeometry } from '../../src/geometry/matGeometry';
 import type { Block, Mat } from '../../src/model/block';
 import { DEMO_PROCESS, OPEN_6F2_CELL, VERTICAL_4F2_CELL } from '../../src/model/builtins';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 import { designWith, mat, strip } from '../support/designs';
 
 // Open bit lines conserve counts: half of a mat's bit lines go to each of its edges, and a strip pairs
