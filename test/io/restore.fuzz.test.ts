@@ -97,6 +97,7 @@ const TOTALS_UNDEFINED_WITHOUT_MATS: readonly (keyof Totals)[] = [
   'worstSenseMargin',
   'shortestRetention',
   'worstWordlineDelay',
+  'worstWordlineNinety',
 ];
 
 /**
