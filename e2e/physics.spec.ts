@@ -25,10 +25,9 @@ test('switch a mat to a 3T gain cell and see a current-mode read explained', asy
   await page.getByTestId('metric-dropHigh').click();
   await expect(page.getByTestId('explanation')).toContainText('I_read · t_sense / C_RBL');
   await expect(page.getByTestId('explanation')).toContainText('Source:');
-  // The bigger gain cell no longer fits between the strips: the engine says so. The list in the browser
-  // currently shows a stale live-preview report after this cell change (5 findings, no overlap, while
-  // evaluate() and the store give 25 with the overlaps) — an open bug between the live preview and the
-  // commit path, reported in notes/issue-10.md; the list assertion waits for that fix.
+  // Changing the cell in the panel keeps the mat's capacity, so the mat stays in its place; the same cell
+  // swap with the cell counts kept (the design above) grows the mat into its neighbours, which the engine
+  // reports as overlaps. In the app, the 3T mat's read cannot beat the die's offset budget: a margin error.
   expect(evaluate(edited).findings.some((f) => f.kind === 'overlap')).toBe(true);
   await expect(page.getByTestId('findings')).toContainText('sense margin');
 });
