@@ -28,12 +28,13 @@ export const MAT_FIGURE_CATALOGUE = [
       return {
         title: f.read.kind === 'gainRead' ? 'Read-bit-line capacitance' : undefined,
         symbol: 'Cbl',
-        formula: 'Cbl = N·(Cj + Cbw + Cbb) + c_wire·L_bl + C_sa',
+        formula: 'Cbl = N·Cj + N_wl·(Cbw + Cbb) + c_wire·L_bl + C_sa  (N_wl word lines crossed)',
         inputs: [
           input('N', 'cells per bit line', f.cellsPerBitline, 'count'),
+          input('N_wl', 'word lines crossed', f.wordlineCount, 'count'),
           input('N·Cj', 'junction/contact', cbl.junction, 'capacitance'),
-          input('N·Cbw', 'coupling to word lines', cbl.wordlineCoupling, 'capacitance'),
-          input('N·Cbb', 'coupling to bit lines', cbl.bitlineCoupling, 'capacitance'),
+          input('N_wl·Cbw', 'coupling to word lines crossed', cbl.wordlineCoupling, 'capacitance'),
+          input('N_wl·Cbb', 'coupling to bit lines', cbl.bitlineCoupling, 'capacitance'),
           input('c·L', `wire (L_bl = ${(f.bitlineLength * 1e6).toPrecision(4)} µm)`, cbl.wire, 'capacitance'),
           input('C_sa', 'sense-amplifier input', cbl.senseAmp, 'capacitance'),
         ],
@@ -72,16 +73,18 @@ export const MAT_FIGURE_CATALOGUE = [
       const p = design.process;
       return {
         symbol: 'k·σ',
-        formula: 'σ = A_VT / √(W·L);  k = Φ⁻¹(1 − failures / sense amps)',
+        formula: 'σ = A_VT / √(W·L);  k = Q⁻¹(failures / (2 · sense amps on the die))',
         inputs: [
           input('A_VT', 'matching coefficient', p.senseAmpMatchingCoefficient, 'matchingCoefficient'),
           input('W', 'transistor width', p.senseAmpTransistorWidth, 'length'),
           input('L', 'transistor length', p.senseAmpTransistorLength, 'length'),
           input('σ', 'offset standard deviation', mat.figures.offsetSigma, 'voltage'),
           input('k', 'σ multiplier', report.totals.offsetSigmaMultiplier, 'ratio'),
-          input('n_sa', 'sense amplifiers in the design', report.totals.senseAmpCount, 'count'),
+          input('n_sa', 'sense amplifiers in this floorplan', report.totals.senseAmpCount, 'count'),
+          input('copies', 'floorplan copies per die', design.operating.floorplanCopiesPerDie, 'count'),
+          input('N', 'sense amplifiers on the die', report.totals.senseAmpsOnDie, 'count'),
         ],
-        method: `Pelgrom mismatch; k so that on average ${design.operating.allowedSenseFailures} amplifier(s) fail (one-sided normal tail).`,
+        method: `Pelgrom mismatch; k so that on average ${design.operating.allowedSenseFailures} amplifier(s) of the die fail; an offset beyond k·σ either way opposes one datum, so both tails count.`,
         source: `${SOURCES.pelgrom}; ${SOURCES.acklam}`,
       };
     },
@@ -246,9 +249,22 @@ export const MAT_FIGURE_CATALOGUE = [
       inputs: [
         input('R_drv', 'driver resistance', design.process.wordlineDriverResistance, 'resistance'),
         input('R_wl', 'sub-word-line resistance', mat.figures.wordlineResistance, 'resistance'),
-        input('C_wl', 'sub-word-line capacitance', mat.figures.wordlineCapacitance, 'capacitance'),
+        input(
+          'C_wl',
+          'sub-word-line capacitance (gates, passing, BL crossings, wire)',
+          mat.figures.wordlineCapacitance,
+          'capacitance',
+        ),
+        input('t_on', 'far end to turn-on Vpre + Vt(Vpre)', mat.figures.wordlineTiming.toTurnOn, 'time'),
+        input(
+          't_90',
+          'far end to 90 % of the high level',
+          mat.figures.wordlineTiming.toNinetyPercent,
+          'time',
+        ),
       ],
-      method: 'Driver as lumped RC plus the line as distributed RC; 50 % point convention.',
+      method:
+        'Exact step response of a distributed RC line driven through R_drv (eigen-series); 50 % point shown, turn-on and 90 % beside it.',
       source: SOURCES.rabaey,
     }),
   }),
