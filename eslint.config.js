@@ -7,6 +7,99 @@ import globals from 'globals';
 
 const uiPackages = ['react', 'react-dom', 'konva', 'konva/*', 'zustand', 'zustand/*', 'd3', 'd3-*'];
 
+/**
+ * The layer table of DEVELOPERS.md ("Layers"): which folders of src each folder may import. Every other
+ * folder of src is off limits, and the engine is reached only through src/engine/index.ts. Change the
+ * table, DEVELOPERS.md and the folder's README.md together.
+ */
+const FOLDERS = [
+  'model',
+  'geometry',
+  'engine',
+  'designs',
+  'io',
+  'cli',
+  'explore',
+  'commands',
+  'store',
+  'canvas',
+  'charts',
+  'panels',
+  'app',
+];
+const MAY_IMPORT = {
+  model: [],
+  geometry: ['model'],
+  engine: ['model', 'geometry'],
+  designs: ['model', 'geometry'],
+  io: ['model', 'engine'],
+  cli: ['model', 'engine', 'io', 'designs'],
+  explore: ['model', 'geometry', 'engine', 'designs'],
+  commands: ['model', 'geometry'],
+  store: ['model', 'engine', 'commands', 'io', 'designs', 'explore'],
+  canvas: ['model', 'geometry', 'engine', 'commands', 'store'],
+  charts: [],
+  panels: [
+    'model',
+    'geometry',
+    'engine',
+    'commands',
+    'store',
+    'canvas',
+    'charts',
+    'explore',
+    'designs',
+    'app',
+  ],
+  app: FOLDERS.filter((f) => f !== 'app'),
+};
+/** Folders that stay free of UI packages (pure TypeScript, tested in Node). */
+const PURE = ['model', 'geometry', 'engine', 'designs', 'io', 'cli', 'explore', 'commands'];
+const ENGINE_PARTS = ['physics', 'evaluation', 'figures'];
+const insideEngine = ENGINE_PARTS.flatMap((part) => [`**/engine/${part}`, `**/engine/${part}/**`]);
+
+function layerRule(folder) {
+  const forbidden = FOLDERS.filter((f) => f !== folder && !MAY_IMPORT[folder].includes(f));
+  const patterns = [];
+  if (forbidden.length > 0)
+    patterns.push({
+      group: forbidden.flatMap((f) => [`**/${f}`, `**/${f}/**`]),
+      message: `src/${folder} may import only ${MAY_IMPORT[folder].join(', ') || 'nothing of ours'} (DEVELOPERS.md, Layers).`,
+    });
+  if (folder !== 'engine')
+    patterns.push({
+      group: insideEngine,
+      message: 'Other folders import the engine through src/engine/index.ts only.',
+    });
+  if (PURE.includes(folder))
+    patterns.push({
+      group: uiPackages,
+      message: `src/${folder} stays free of UI code (React, Konva, zustand, d3).`,
+    });
+  return { files: [`src/${folder}/**`], rules: { 'no-restricted-imports': ['error', { patterns }] } };
+}
+
+/**
+ * Inside the engine: physics imports only the model; evaluation not the figures; figures read the model
+ * and evaluation's report types. (A file's last matching config wins, so each part repeats the engine's
+ * own patterns.)
+ */
+const ENGINE_PART_RULES = [
+  ['physics', ['geometry', 'evaluation', 'figures']],
+  ['evaluation', ['figures']],
+  ['figures', ['geometry']],
+].map(([part, forbidden]) => {
+  const engine = layerRule('engine').rules['no-restricted-imports'][1].patterns;
+  const own = {
+    group: forbidden.flatMap((f) => [`**/${f}`, `**/${f}/**`]),
+    message: `engine/${part} may not import ${forbidden.join(', ')} (DEVELOPERS.md, Layers).`,
+  };
+  return {
+    files: [`src/engine/${part}/**`],
+    rules: { 'no-restricted-imports': ['error', { patterns: [...engine, own] }] },
+  };
+});
+
 export default tseslint.config(
   { ignores: ['dist', 'node_modules', 'reports', 'test-results', 'playwright-report'] },
   js.configs.recommended,
@@ -26,32 +119,6 @@ export default tseslint.config(
       'react-hooks/exhaustive-deps': 'error',
     },
   },
-  {
-    files: [
-      'src/model/**',
-      'src/geometry/**',
-      'src/engine/**',
-      'src/io/**',
-      'src/cli/**',
-      'src/build/**',
-      'src/explore/**',
-    ],
-    rules: {
-      'no-restricted-imports': [
-        'error',
-        {
-          patterns: [
-            {
-              group: uiPackages,
-              message: 'The model, geometry, engine, io, cli, build and explore layers stay free of UI code.',
-            },
-            {
-              group: ['**/store/**', '**/canvas/**', '**/panels/**', '**/commands/**', '**/app/**'],
-              message: 'Lower layers never import upper layers.',
-            },
-          ],
-        },
-      ],
-    },
-  },
+  ...FOLDERS.map(layerRule),
+  ...ENGINE_PART_RULES,
 );

@@ -12,14 +12,14 @@ import { setOperatingValue } from '../../src/commands/setOperatingValue';
 import { findMatReport } from '../../src/engine';
 import { EDRAM_PROCESS, GAIN_3T_CELL, OPEN_6F2_CELL } from '../../src/model/builtins';
 import type { Design } from '../../src/model/design';
-import { expectRefused, runUndoRedo } from '../support/commandCheck';
+import { expectRefused, runAndCheckChange } from '../support/commandSteps';
 
 const cell = (d: Design, id: string) => d.cells.find((c) => c.id === id);
 const mat = (d: Design, id: string) => d.blocks.find((b) => b.id === id);
 
 describe('process commands', () => {
   it('use a built-in process: run, undo, redo', () => {
-    runUndoRedo(
+    runAndCheckChange(
       applyBuiltinProcess,
       { processId: EDRAM_PROCESS.id },
       (d) => d.process.id === EDRAM_PROCESS.id,
@@ -28,7 +28,7 @@ describe('process commands', () => {
   });
 
   it('set a process value, and the report follows', () => {
-    const store = runUndoRedo(
+    const store = runAndCheckChange(
       setProcessValue,
       { field: 'arrayVoltage', value: 1.2 },
       (d) => d.process.arrayVoltage === 1.2,
@@ -46,13 +46,13 @@ describe('process commands', () => {
   });
 
   it('set offset stacking: run, undo, redo', () => {
-    runUndoRedo(setOffsetStacking, { stacking: 'rss' }, (d) => d.process.offsetStacking === 'rss');
+    runAndCheckChange(setOffsetStacking, { stacking: 'rss' }, (d) => d.process.offsetStacking === 'rss');
   });
 });
 
 describe('operating-condition commands', () => {
   it('set the temperature: run, undo, redo; retention shortens when hotter', () => {
-    const store = runUndoRedo(
+    const store = runAndCheckChange(
       setOperatingValue,
       { field: 'temperature', value: 368.15 },
       (d) => d.operating.temperature === 368.15,
@@ -71,7 +71,7 @@ describe('operating-condition commands', () => {
 
 describe('cell commands', () => {
   it('copy a cell: run, undo, redo', () => {
-    runUndoRedo(
+    runAndCheckChange(
       copyCell,
       { cellId: OPEN_6F2_CELL.id },
       (d) => cell(d, `${OPEN_6F2_CELL.id}-copy`) !== undefined,
@@ -80,7 +80,7 @@ describe('cell commands', () => {
   });
 
   it('set a cell value: run, undo, redo; mats using it resize', () => {
-    const store = runUndoRedo(
+    const store = runAndCheckChange(
       setCellValue,
       { cellId: 'dram-folded-8f2', field: 'storageCapacitance', value: 20e-15 },
       (d) => cell(d, 'dram-folded-8f2')?.storageCapacitance === 20e-15,
@@ -94,7 +94,7 @@ describe('cell commands', () => {
   });
 
   it('set a gain-cell read value: run, undo, redo; refused on a 1T1C cell', () => {
-    runUndoRedo(
+    runAndCheckChange(
       setGainReadValue,
       { cellId: GAIN_3T_CELL.id, field: 'readThresholdVoltage', value: 0.25 },
       (d) => cell(d, GAIN_3T_CELL.id)?.gainRead?.readThresholdVoltage === 0.25,
@@ -107,12 +107,12 @@ describe('cell commands', () => {
   });
 
   it('rename a cell and set a drawn pitch: run, undo, redo', () => {
-    runUndoRedo(
+    runAndCheckChange(
       renameCell,
       { cellId: 'gain-2t', name: 'My 2T' },
       (d) => cell(d, 'gain-2t')?.name === 'My 2T',
     );
-    runUndoRedo(
+    runAndCheckChange(
       setCellPitchOverride,
       { cellId: 'dram-folded-8f2', override: { bitlinePitch: 40e-9, wordlinePitch: 40e-9 } },
       (d) => cell(d, 'dram-folded-8f2')?.pitchOverride?.bitlinePitch === 40e-9,
@@ -121,7 +121,7 @@ describe('cell commands', () => {
   });
 
   it('give mats another cell: run, undo, redo', () => {
-    runUndoRedo(setMatCell, { matIds: ['mat-r0c0'], cellId: OPEN_6F2_CELL.id }, (d) => {
+    runAndCheckChange(setMatCell, { matIds: ['mat-r0c0'], cellId: OPEN_6F2_CELL.id }, (d) => {
       const m = mat(d, 'mat-r0c0');
       return m?.type === 'mat' && m.cellId === OPEN_6F2_CELL.id;
     });

@@ -1,11 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { setRepairSetting } from '../../src/commands/setRepairSetting';
 import { yieldFiguresOf } from '../../src/engine';
-import { expectRefused, runUndoRedo } from '../support/commandCheck';
+import { expectRefused, runAndCheckChange } from '../support/commandSteps';
 
 describe('yield-input commands', () => {
   it('set spare rows: run, undo, redo; the repair probability and the redundancy area follow', () => {
-    const store = runUndoRedo(
+    const store = runAndCheckChange(
       setRepairSetting,
       { field: 'spareRows', value: 0 },
       (d) => d.operating.repair?.spareRows === 0,
@@ -19,7 +19,7 @@ describe('yield-input commands', () => {
   });
 
   it('set the repair domain: run, undo, redo', () => {
-    runUndoRedo(
+    runAndCheckChange(
       setRepairSetting,
       { field: 'repairDomain', value: 'bank' },
       (d) => d.operating.repair?.repairDomain === 'bank',

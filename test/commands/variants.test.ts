@@ -13,7 +13,7 @@ import type { Design, VariantDesign } from '../../src/model/design';
 import { demoDesign } from '../../src/designs/demoDesign';
 import { activeVariantId, variantContent, variantEntries } from '../../src/model/variants';
 import { createAppStore } from '../../src/store/appStore';
-import { expectRefused, runUndoRedo } from '../support/commandCheck';
+import { expectRefused, runAndCheckChange } from '../support/commandSteps';
 
 function builtVariant(): VariantDesign {
   const built = buildPartition({
@@ -46,7 +46,7 @@ const names = (d: Design) => variantEntries(d).map((v) => `${v.active ? '*' : ''
 
 describe('variant commands', () => {
   it('create: the new variant is added after the active one and becomes the document; run, undo, redo', () => {
-    const store = runUndoRedo(
+    const store = runAndCheckChange(
       createVariant,
       { design: builtVariant() },
       (d) => variantEntries(d).length === 2,
@@ -70,7 +70,7 @@ describe('variant commands', () => {
     // Edit the active variant first, so switching must carry the edit onto the shelf.
     const edited = setMatCellCounts.run(start, { matIds: ['mat-r0c0'], cellsPerBitline: 128 });
     if (!edited.ok) throw new Error(edited.error);
-    const store = runUndoRedo(
+    const store = runAndCheckChange(
       switchVariant,
       { variantId: 'v1' },
       (d) => activeVariantId(d) === 'v1',
@@ -90,13 +90,13 @@ describe('variant commands', () => {
 
   it('rename: the active one (its design name) and a shelved one; run, undo, redo', () => {
     const start = twoVariants();
-    runUndoRedo(
+    runAndCheckChange(
       renameVariant,
       { variantId: 'v2', name: '  Open, 256 ' },
       (d) => d.name === 'Open, 256',
       start,
     );
-    runUndoRedo(
+    runAndCheckChange(
       renameVariant,
       { variantId: 'v1', name: 'Baseline' },
       (d) => variantEntries(d)[0]?.name === 'Baseline',
@@ -106,13 +106,13 @@ describe('variant commands', () => {
     expectRefused(renameVariant, { variantId: 'v1', name: 'x'.repeat(201) }, /at most 200/, start);
     expectRefused(renameVariant, { variantId: 'v7', name: 'x' }, /no variant/, start);
     // The only variant of a document without a shelf can be renamed too.
-    runUndoRedo(renameVariant, { variantId: 'v1', name: 'Wren A' }, (d) => d.name === 'Wren A');
+    runAndCheckChange(renameVariant, { variantId: 'v1', name: 'Wren A' }, (d) => d.name === 'Wren A');
   });
 
   it('delete: a shelved one, then the active one (its neighbour takes over); run, undo, redo', () => {
     const start = twoVariants();
-    runUndoRedo(deleteVariant, { variantId: 'v1' }, (d) => variantEntries(d).length === 1, start);
-    const store = runUndoRedo(
+    runAndCheckChange(deleteVariant, { variantId: 'v1' }, (d) => variantEntries(d).length === 1, start);
+    const store = runAndCheckChange(
       deleteVariant,
       { variantId: 'v2' },
       (d) => variantEntries(d).length === 1,
@@ -126,7 +126,7 @@ describe('variant commands', () => {
   });
 
   it('duplicate: a copy under a new name becomes active; run, undo, redo', () => {
-    runUndoRedo(
+    runAndCheckChange(
       duplicateVariant,
       { variantId: 'v1' },
       (d) =>

@@ -70,7 +70,7 @@ describe('partition builder', () => {
       }),
       { numRuns: 80, seed: 7 },
     );
-  });
+  }, 60_000);
 
   it('uses no more mats than needed: neither dimension could shrink (property, arithmetic)', () => {
     fc.assert(

@@ -29,7 +29,7 @@ describe('Pareto front', () => {
       }),
       { numRuns: 2000, seed: 42 },
     );
-  });
+  }, 60_000);
 
   it('lists the front from the best x to the worst, while y gets better (property)', () => {
     fc.assert(

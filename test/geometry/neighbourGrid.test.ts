@@ -61,7 +61,7 @@ describe('neighbourTable: every pair of touching boxes in one grid pass', () => 
       ),
       { numRuns: 300 },
     );
-  });
+  }, 60_000);
 
   it('finds the same neighbours for boxes of wildly different sizes', () => {
     fc.assert(

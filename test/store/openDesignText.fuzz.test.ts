@@ -35,7 +35,7 @@ describe('opening malformed files', () => {
       }),
       { numRuns: 3000 },
     );
-  });
+  }, 60_000);
 
   it('opens a good file as a new document with its own history, in a file', () => {
     const store = createAppStore(demoDesign());
