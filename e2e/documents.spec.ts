@@ -189,3 +189,30 @@ test('a share link carries the design and opens as a new document', async ({ pag
   await viewer.clickBlock(demo, 'mat-r0c1');
   await expect(other.getByTestId('cells-per-wordline')).toHaveValue('384');
 });
+
+test('a design with a formula-like name opens safely and its CSV keeps the name as text', async ({
+  page,
+}) => {
+  const app = new DocumentsPage(page);
+  await app.openAt('/');
+  const demo = loadDemoDesign();
+  const hostile = {
+    ...demo,
+    name: `=HYPERLINK("http://example.invalid","x") ${'long '.repeat(30)}`.slice(0, 200),
+    blocks: demo.blocks.map((b) => (b.id === 'mat-r0c0' ? { ...b, name: '@SUM(1+1)' } : b)),
+  };
+  await page.getByTestId('open-file-input').setInputFiles({
+    name: 'formula.json',
+    mimeType: 'application/json',
+    buffer: Buffer.from(JSON.stringify(hostile)),
+  });
+  await expect(page.getByTestId('design-name')).toHaveAttribute('title', hostile.name);
+  // The long name is cut in the toolbar, which stays within the window.
+  const toolbar = await page.locator('header.toolbar').boundingBox();
+  expect((toolbar?.width ?? 0) <= 1400).toBe(true);
+  const nameBox = await page.getByTestId('design-name').boundingBox();
+  expect(nameBox?.width ?? 0).toBeLessThan(400);
+  const [file] = await Promise.all([page.waitForEvent('download'), page.getByTestId('export-csv').click()]);
+  const csv = readFileSync(await file.path(), 'utf8');
+  expect(csv).toContain(",'@SUM(1+1),");
+});

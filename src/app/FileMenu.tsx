@@ -3,10 +3,7 @@ import type { ImageOptions } from '../canvas/floorplanImage';
 import { useAppStore } from '../store/useAppStore';
 import { ModalDialog } from './a11y/ModalDialog';
 import { downloadBlob, fileBaseName } from './download';
-
-function jsonBlob(value: unknown): Blob {
-  return new Blob([`${JSON.stringify(value, null, 2)}\n`], { type: 'application/json' });
-}
+import { exportFile } from './exportFiles';
 
 /** Size of the live canvas, for exporting the current view. */
 function liveView() {
@@ -33,15 +30,7 @@ export function FileMenu() {
         type="button"
         data-testid="export-summary"
         title="Design, figures and checks as JSON, units in every key"
-        onClick={async () => {
-          const s = current();
-          // Exports load on first use: they are not part of the first load.
-          const { reportSummary } = await import('../io/summary');
-          downloadBlob(
-            jsonBlob({ design: s.history.present, report: reportSummary(s.history.present, s.report) }),
-            `${base()}.summary.json`,
-          );
-        }}
+        onClick={() => void exportFile('summary')}
       >
         Summary JSON
       </button>
@@ -49,11 +38,7 @@ export function FileMenu() {
         type="button"
         data-testid="export-csv"
         title="Per-mat figures as CSV"
-        onClick={async () => {
-          const report = current().report;
-          const { matFiguresCsv } = await import('../io/matCsv');
-          downloadBlob(new Blob([matFiguresCsv(report)], { type: 'text/csv' }), `${base()}.mats.csv`);
-        }}
+        onClick={() => void exportFile('csv')}
       >
         CSV
       </button>

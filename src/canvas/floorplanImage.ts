@@ -1,3 +1,4 @@
+import { fitText } from './fitText';
 import type { Report } from '../engine';
 import { placeBlocks } from '../geometry/placedBlocks';
 import { boundingBox } from '../geometry/rect';
@@ -83,7 +84,7 @@ export function renderFloorplanImage(
     if (p.block.type === 'mat' && Math.min(w, h) > 60) {
       ctx.fillStyle = style.text;
       ctx.font = '12px sans-serif';
-      ctx.fillText(p.block.name || p.block.id, x + 6, y + 16);
+      ctx.fillText(fitText(ctx, p.block.name || p.block.id, w - 12), x + 6, y + 16);
       ctx.fillText(formatMatSize(p.block.cellsPerBitline, p.block.cellsPerWordline), x + 6, y + 31);
     } else if (p.block.type !== 'mat' && scale >= NAMED_STRIPS_FROM_SCALE) {
       drawStripName(ctx, p.block.name || p.block.id, x, y, w, h, style.text);
@@ -180,7 +181,8 @@ function drawTitleBlock(
   ctx.fillRect(0, top, width, TITLE_BLOCK_HEIGHT);
   ctx.fillStyle = '#f4f1ea';
   ctx.font = 'bold 15px sans-serif';
-  ctx.fillText(`${design.name} — ${design.process.name}`, 14, top + 22);
+  // A long name is cut to the picture's width rather than running off its edge.
+  ctx.fillText(fitText(ctx, `${design.name} — ${design.process.name}`, width - 28), 14, top + 22);
   ctx.font = '12px sans-serif';
   const errors = report.findings.filter((f) => f.severity === 'error').length;
   const figures = [

@@ -1,3 +1,4 @@
+import { csvField } from './csvField';
 import { matAt, MAT_FIGURE_CATALOGUE, type MatFigureEntry, type MatReport, type Report } from '../engine';
 
 /** One CSV column: header (with its unit) and how to read it from a mat (SI). */
@@ -38,21 +39,29 @@ const COLUMNS: readonly Column[] = [
   { header: 'undriven_wordlines', value: (m) => m.undrivenWordlines },
 ];
 
-/** Quotes a field when it holds a comma, quote or line break (RFC 4180). */
-function field(value: string | number): string {
-  if (typeof value === 'number') return Number.isFinite(value) ? String(value) : '';
-  return /[",\r\n]/.test(value) ? `"${value.replace(/"/g, '""')}"` : value;
-}
+/** Mats written per piece of CSV text. */
+const MATS_PER_PIECE = 2000;
 
 /**
  * Per-mat figures as CSV (RFC 4180, CRLF line ends), SI units named in each header; a non-finite figure
- * is left empty.
+ * is left empty. With `variant`, a first column names the variant (the CLI's --all). In pieces of a few
+ * thousand rows, so that a whole die never needs one huge string; join them or make a Blob of them.
  */
-export function matFiguresCsv(report: Report): string {
-  const lines = [COLUMNS.map((c) => c.header).join(',')];
-  for (let k = 0; k < report.mats.count; k++) {
-    const m = matAt(report.mats, k);
-    lines.push(COLUMNS.map((c) => field(c.value(m))).join(','));
+export function* matFiguresCsvPieces(report: Report, variant?: string): Generator<string> {
+  const lead = variant === undefined ? '' : `${csvField(variant)},`;
+  yield `${variant === undefined ? '' : 'variant,'}${COLUMNS.map((c) => c.header).join(',')}\r\n`;
+  for (let start = 0; start < report.mats.count; start += MATS_PER_PIECE) {
+    let piece = '';
+    const end = Math.min(report.mats.count, start + MATS_PER_PIECE);
+    for (let k = start; k < end; k++) {
+      const m = matAt(report.mats, k);
+      piece += `${lead}${COLUMNS.map((c) => csvField(c.value(m))).join(',')}\r\n`;
+    }
+    yield piece;
   }
-  return `${lines.join('\r\n')}\r\n`;
+}
+
+/** The whole CSV as one string (small designs, tests). */
+export function matFiguresCsv(report: Report, variant?: string): string {
+  return Array.from(matFiguresCsvPieces(report, variant)).join('');
 }

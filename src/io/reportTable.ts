@@ -7,6 +7,7 @@ import {
   type Report,
 } from '../engine';
 import type { Design } from '../model/design';
+import { escapeControlCharacters } from '../model/messageText';
 import { formatQuantity, formatScaled } from '../model/units';
 import { countFindings, REPORT_CAUTION } from './summary';
 
@@ -21,7 +22,11 @@ function columns(
   rows: readonly (readonly string[])[],
   leftAligned: number,
 ): string[] {
-  const widths = headers.map((h, i) => Math.max(h.length, ...rows.map((r) => (r[i] ?? '').length)));
+  // A loop, not Math.max(...rows): spreading 300,000 rows overflows the call stack.
+  const widths = headers.map((h) => h.length);
+  for (const row of rows) {
+    for (let i = 0; i < widths.length; i++) widths[i] = Math.max(widths[i] ?? 0, (row[i] ?? '').length);
+  }
   const line = (cells: readonly string[]) =>
     cells
       .map((cell, i) => (i < leftAligned ? cell.padEnd(widths[i] ?? 0) : cell.padStart(widths[i] ?? 0)))
@@ -103,14 +108,15 @@ export function reportTable(design: Design, report: Report): string {
   out.push('');
   out.push(`Mats (${formatQuantity(report.mats.count, 'count')})`);
   if (report.mats.count === 0) out.push('  none');
-  else
-    out.push(
-      ...columns(
-        MAT_COLUMNS.map((c) => c.header),
-        allMats(report.mats).map(matRow),
-        1,
-      ).map((l) => `  ${l}`),
+  else {
+    // A loop, not out.push(...lines): spreading 300,000 lines overflows the call stack.
+    const lines = columns(
+      MAT_COLUMNS.map((c) => c.header),
+      allMats(report.mats).map(matRow),
+      1,
     );
+    for (const line of lines) out.push(`  ${line}`);
+  }
   out.push('');
   out.push('Totals');
   out.push(...columns(['figure', 'value'], totalsRows(design, report), 2).map((l) => `  ${l}`));
@@ -124,5 +130,6 @@ export function reportTable(design: Design, report: Report): string {
   }
   out.push('');
   out.push(`Caution: ${REPORT_CAUTION}`);
-  return out.join('\n');
+  // Names and ids are the person's text: control characters in them are shown, never obeyed by the terminal.
+  return out.map(escapeControlCharacters).join('\n');
 }

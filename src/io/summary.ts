@@ -1,5 +1,6 @@
 import {
   allMats,
+  matAt,
   MAT_FIGURE_CATALOGUE,
   senseAmpStripIdsOf,
   TOTAL_FIGURE_CATALOGUE,
@@ -188,6 +189,18 @@ export function countFindings(findings: readonly Finding[]): { errors: number; w
  * and plain objects), SI values with the unit in each key.
  */
 export function reportSummary(design: Design, report: Report): ReportSummary {
+  return {
+    ...summaryHead(design, report),
+    mats: allMats(report.mats).map((m, k) => matSummary(m, report.mats, k)),
+    ...summaryTail(report),
+  };
+}
+
+/** The summary's fields before its mats, in their order. */
+export function summaryHead(
+  design: Design,
+  report: Report,
+): Pick<ReportSummary, 'format' | 'version' | 'design' | 'units' | 'totals'> {
   const o = design.operating;
   const nameOf = new Map(design.blocks.map((b) => [b.id, b.name]));
   return {
@@ -211,7 +224,20 @@ export function reportSummary(design: Design, report: Report): ReportSummary {
     },
     units: REPORT_UNITS,
     totals: totalsSummary(design, report),
-    mats: allMats(report.mats).map((m, k) => matSummary(m, report.mats, k)),
+  };
+}
+
+/** The per-mat part of the summary for mats `start` to `end` (exclusive), made only when asked for. */
+export function matSummaries(report: Report, start: number, end: number): MatSummary[] {
+  const out: MatSummary[] = [];
+  for (let k = start; k < Math.min(end, report.mats.count); k++)
+    out.push(matSummary(matAt(report.mats, k), report.mats, k));
+  return out;
+}
+
+/** The summary's fields after its mats. */
+export function summaryTail(report: Report): Pick<ReportSummary, 'findings' | 'caution'> {
+  return {
     findings: report.findings.map((f) => ({
       kind: f.kind,
       severity: f.severity,

@@ -150,6 +150,7 @@ describe('npm run evaluate', () => {
   it('--help prints the usage and exits 0', () => {
     const r = run(['--help']);
     expect(r.code).toBe(EXIT.ok);
-    expect(r.stdout).toMatch(/exit codes: 0 ok; 1 the design has error findings/);
+    expect(r.stdout).toMatch(/exit codes: 0 ok; 1 a reported design has error findings/);
+    expect(r.stdout).toMatch(/--variant NAME/);
   });
 });

@@ -149,3 +149,22 @@ describe('design text in pieces', () => {
     expect(Array.from(designTextPieces(empty)).join('')).toBe(JSON.stringify(empty));
   });
 });
+
+describe('exports in pieces', () => {
+  it('the summary JSON pieces join to exactly JSON.stringify(reportSummary(…), null, 2)', async () => {
+    const { summaryJsonPieces } = await import('../../src/io/summaryText');
+    const { reportSummary } = await import('../../src/io/summary');
+    const { evaluate } = await import('../../src/engine');
+    const design = designFromQuery('?generate=3x4');
+    if (!design) throw new Error('no generated design');
+    const report = evaluate(design);
+    const whole = JSON.stringify(reportSummary(design, report), null, 2);
+    for (const size of [1, 5, 1000])
+      expect(Array.from(summaryJsonPieces(design, report, size)).join('')).toBe(whole);
+    const empty = { ...design, blocks: [] };
+    const emptyReport = evaluate(empty);
+    expect(Array.from(summaryJsonPieces(empty, emptyReport)).join('')).toBe(
+      JSON.stringify(reportSummary(empty, emptyReport), null, 2),
+    );
+  });
+});
