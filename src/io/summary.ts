@@ -192,7 +192,7 @@ export function reportSummary(design: Design, report: Report): ReportSummary {
   return {
     ...summaryHead(design, report),
     mats: allMats(report.mats).map((m, k) => matSummary(m, report.mats, k)),
-    ...summaryTail(report),
+    ...summaryTail(design, report),
   };
 }
 
@@ -202,7 +202,6 @@ export function summaryHead(
   report: Report,
 ): Pick<ReportSummary, 'format' | 'version' | 'design' | 'units' | 'totals'> {
   const o = design.operating;
-  const nameOf = new Map(design.blocks.map((b) => [b.id, b.name]));
   return {
     format: REPORT_FORMAT,
     version: REPORT_VERSION,
@@ -236,7 +235,8 @@ export function matSummaries(report: Report, start: number, end: number): MatSum
 }
 
 /** The summary's fields after its mats. */
-export function summaryTail(report: Report): Pick<ReportSummary, 'findings' | 'caution'> {
+export function summaryTail(design: Design, report: Report): Pick<ReportSummary, 'findings' | 'caution'> {
+  const nameOf = new Map(design.blocks.map((b) => [b.id, b.name]));
   return {
     findings: report.findings.map((f) => ({
       kind: f.kind,

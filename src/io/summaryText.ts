@@ -17,7 +17,7 @@ export function* summaryJsonPieces(
 ): Generator<string> {
   const marker = `mats-${Math.random().toString(36).slice(2)}`;
   const head = JSON.stringify(
-    { ...summaryHead(design, report), mats: marker, ...summaryTail(report) },
+    { ...summaryHead(design, report), mats: marker, ...summaryTail(design, report) },
     null,
     2,
   );

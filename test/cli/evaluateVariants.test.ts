@@ -8,7 +8,7 @@ import { EXIT, runEvaluateCli } from '../../src/cli/runEvaluate';
 import { createVariant } from '../../src/commands/createVariant';
 import { switchVariant } from '../../src/commands/switchVariant';
 import { csvField } from '../../src/io/csvField';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 import type { Design } from '../../src/model/design';
 import { variantContent } from '../../src/model/variants';
 
@@ -77,7 +77,7 @@ describe('evaluate: variants', () => {
       ['Second', 15],
     ]);
     const csv = run(['x.json', '--all', '--csv'], text).stdout.trimEnd().split('\r\n');
-    expect(csv[0]).toMatch(/^variant,mat_id,/);
+    expect(csv[0]).toMatch(/^variant,name,mat_id,/);
     expect(csv).toHaveLength(1 + 16 + 15);
     expect(csv.filter((l) => l.startsWith('Second,'))).toHaveLength(15);
   });

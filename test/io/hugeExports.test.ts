@@ -3,7 +3,7 @@ import { evaluate } from '../../src/engine';
 import { matFiguresCsvPieces } from '../../src/io/matCsv';
 import { reportTable } from '../../src/io/reportTable';
 import { summaryJsonPieces } from '../../src/io/summaryText';
-import { demoDesign } from '../../src/model/demoDesign';
+import { demoDesign } from '../../src/designs/demoDesign';
 import { MAX_BLOCKS, type Design } from '../../src/model/design';
 
 // Source: common practice (no source): an export of the largest design the format allows completes, or
@@ -43,7 +43,7 @@ describe('exports of a 300,000-mat design', () => {
       const pieces = summaryJsonPieces(design, report);
       const head = [pieces.next(), pieces.next(), pieces.next()].map((r) => (r.done ? '' : r.value));
       expect(head[0]).toMatch(/^\{\n {2}"format": "matloom-report"/);
-      expect(head[2]).toMatch(/^\n {4}\{\n {6}"id": "m0"/);
+      expect(head[2]).toMatch(/^\n {4}\{\n {6}"name": "Mat 1.1",\n {6}"id": "m0"/);
       expect(head[2]?.length).toBeLessThan(5_000_000);
     },
   );
