@@ -38,6 +38,13 @@ function differs(a: number, b: number): boolean {
   return Math.abs(a - b) > 1e-9 * Math.max(Math.abs(a), Math.abs(b));
 }
 
+/** Better or worse in words and arrows, so the tint is never the only cue. */
+const VERDICT_WORDS: Record<'better' | 'worse' | 'changed', string> = {
+  better: '▲ better',
+  worse: '▼ worse',
+  changed: '',
+};
+
 function deltaText(value: number, reference: number): string {
   if (!Number.isFinite(value) || !Number.isFinite(reference) || reference === 0) return '';
   const change = (value - reference) / Math.abs(reference);
@@ -78,7 +85,7 @@ export function VariantsView() {
     <div className="variants-view" data-testid="variants-view">
       <p className="hint">
         Each variant is a whole design; the one being edited is marked. Values are compared with it: green is
-        better, red worse. Click a value for how it was computed.
+        better (▲), red worse (▼). Click a value for how it was computed.
       </p>
       <div className="table-scroll">
         <table className="variants-table" data-testid="variants-table">
@@ -207,7 +214,11 @@ export function VariantsView() {
                         >
                           {formatQuantity(value, info.quantity)}
                         </button>
-                        {changed && <span className="delta">{deltaText(value, ref)}</span>}
+                        {changed && (
+                          <span className="delta">
+                            {deltaText(value, ref)} {VERDICT_WORDS[verdict]}
+                          </span>
+                        )}
                       </td>
                     );
                   })}
