@@ -74,18 +74,17 @@ test('a large sweep keeps the page responsive and can be cancelled', async ({ pa
   await explorer.setRange('wl', 64, 2048, 64);
   const size = await explorer.sweepSize();
   expect(size).toBeGreaterThan(40_000);
-  // Record the longest gap between animation frames while the sweep runs.
+  // Record the longest task the main thread runs while the sweep goes on (the Long Tasks API reports
+  // every task over 50 ms). Sweeping on the main thread would be one task of many seconds; with the
+  // worker, the page only redraws the chart in short tasks. Frame gaps are not used: on a loaded machine
+  // several short redraws in a row can leave no frame for a second without anything being blocked.
   await page.evaluate(() => {
-    const w = window as unknown as { longestFrameGap: number; watching: boolean };
-    w.longestFrameGap = 0;
-    w.watching = true;
-    let last = performance.now();
-    const tick = (now: number) => {
-      w.longestFrameGap = Math.max(w.longestFrameGap, now - last);
-      last = now;
-      if (w.watching) requestAnimationFrame(tick);
-    };
-    requestAnimationFrame(tick);
+    const w = window as unknown as { longestTask: number; taskObserver: PerformanceObserver };
+    w.longestTask = 0;
+    w.taskObserver = new PerformanceObserver((list) => {
+      for (const entry of list.getEntries()) w.longestTask = Math.max(w.longestTask, entry.duration);
+    });
+    w.taskObserver.observe({ type: 'longtask' });
   });
   await page.getByTestId('run-sweep').click();
   await expect(explorer.status()).toHaveAttribute('data-status', 'running');
@@ -96,13 +95,14 @@ test('a large sweep keeps the page responsive and can be cancelled', async ({ pa
   await page.getByTestId('cancel-sweep').click();
   await expect(explorer.status()).toHaveAttribute('data-status', 'cancelled');
   await expect(explorer.status()).toContainText('Cancelled after');
-  const gap = await page.evaluate(() => {
-    const w = window as unknown as { longestFrameGap: number; watching: boolean };
-    w.watching = false;
-    return w.longestFrameGap;
+  const longest = await page.evaluate(() => {
+    const w = window as unknown as { longestTask: number; taskObserver: PerformanceObserver };
+    w.taskObserver.disconnect();
+    return w.longestTask;
   });
-  // Generous for a loaded 2-core machine; a sweep on the main thread would freeze it for seconds.
-  expect(gap).toBeLessThan(1000);
+  test.info().annotations.push({ type: 'longest main-thread task', description: `${longest.toFixed(0)} ms` });
+  // Generous for a loaded 2-core machine; the sweep's own speed is measured by the bench (npm run bench).
+  expect(longest).toBeLessThan(1000);
   await expect(page.getByTestId('run-sweep')).toBeEnabled();
 });
 
