@@ -6,6 +6,7 @@ import { FORMULAS } from './formulas';
 import { matFigure, MAT_FIGURE_GROUPS, type MatFigureEntry, type MatFigureGroup } from './matFigure';
 import { READ_FIGURES } from './matReadFigures';
 import { MAT_SIZE_FIGURES, MAT_PARASITIC_FIGURES } from './matSizeFigures';
+import { MAT_TIMING_FIGURES } from './matTimingFigures';
 
 /**
  * The catalogue of per-mat figures, in the order of the JSON summary; the panel shows the entries that
@@ -309,6 +310,7 @@ export const MAT_FIGURE_CATALOGUE = [
           };
     },
   }),
+  ...MAT_TIMING_FIGURES,
   matFigure({
     key: 'activationEnergy',
     label: 'Energy per activation',
