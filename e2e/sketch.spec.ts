@@ -1,5 +1,6 @@
 import { expect, test, type Page } from '@playwright/test';
 import { EditorPage } from './editorPage';
+import { ExplorerPage } from './explorerPage';
 
 /** Folded 8F² cell at F = 18 nm: one more cell per line adds two 36 nm lines, 72 nm (arithmetic). */
 const CELL_STEP = 72e-9;
@@ -161,6 +162,35 @@ test.describe('sketching a bank by hand', () => {
     await page.keyboard.press('Control+z');
     await expect(app.field('mat-cell')).toHaveValue('dram-folded-8f2');
     await app.expectChecksClear();
+    expect(errors).toEqual([]);
+  });
+});
+
+test.describe('comparing variants', () => {
+  test('variants of different capacities compare per bit, in plain percentages with arrows and words', async ({
+    page,
+  }) => {
+    const errors = await noPageErrors(page);
+    const explorer = new ExplorerPage(page);
+    await explorer.open();
+    // A 64 Mib bank beside the 8 Mib demo: the new one (v2) is the variant being edited.
+    await page.getByTestId('build-partition').click();
+    await expect(page.getByTestId('built-note')).toBeVisible();
+    await page.getByTestId('view-variants').click();
+    await expect(page.getByTestId('active-v2')).toBeVisible();
+    const areaDelta = page.getByTestId('variant-v1-totalArea-delta');
+    // The 8 Mib demo is far smaller in total: a plain percentage with an arrow, no exponent (total size
+    // is neither better nor worse).
+    await expect(areaDelta).toHaveText(/^↓ −\d{2}\.\d %$/);
+    // Per bit, the area compares fairly: the row says so and the change is a few per cent, not −87 %.
+    await page.getByTestId('variants-per-bit').check();
+    await expect(page.getByTestId('variants-table')).toContainText('Bank area per bit');
+    await expect(page.getByTestId('variants-table')).toContainText('Mats per Mib');
+    await expect(page.getByTestId('variants-table')).not.toContainText(/\de[+-]\d/);
+    const perBit = (await areaDelta.textContent()) ?? '';
+    expect(perBit).toMatch(/^[↑↓] [+−][\d,]+\.?\d* % · (better|worse)$/);
+    expect(perBit).not.toMatch(/e[+-]?\d/);
+    await page.screenshot({ path: test.info().outputPath('4-variants-per-bit.png') });
     expect(errors).toEqual([]);
   });
 });

@@ -10,14 +10,17 @@ import {
   figuresFromReport,
   TABLE_FIGURES,
   type FigureKey,
+  type PartitionFigures,
 } from '../../engine';
 import { isMat } from '../../model/block';
 import type { VariantDesign } from '../../model/design';
 import { hasRoomForVariant, variantEntries } from '../../model/variants';
+import { MAT_SIZE_UNIT } from '../../model/matSize';
 import { formatQuantity } from '../../model/units';
 import { useAppStore } from '../../store/useAppStore';
 import { ExplanationCard } from '../FigureRow';
 import { useRunCommand } from '../useRunCommand';
+import { deltaLine, MATS_PER, PER_BIT_FIGURES, verdictOf } from './comparison';
 import { variantReport } from './variantReports';
 
 /** What a variant is made of, in words: its cells and cell counts ("mixed" when mats differ). */
@@ -38,18 +41,12 @@ function differs(a: number, b: number): boolean {
   return Math.abs(a - b) > 1e-9 * Math.max(Math.abs(a), Math.abs(b));
 }
 
-/** Better or worse in words and arrows, so the tint is never the only cue. */
-const VERDICT_WORDS: Record<'better' | 'worse' | 'changed', string> = {
-  better: '▲ better',
-  worse: '▼ worse',
-  changed: '',
-};
-
-function deltaText(value: number, reference: number): string {
-  if (!Number.isFinite(value) || !Number.isFinite(reference) || reference === 0) return '';
-  const change = (value - reference) / Math.abs(reference);
-  const sign = change > 0 ? '+' : '−';
-  return `${sign}${Math.abs(change * 100).toPrecision(2)} %`;
+/** A figure as the table shows it: divided by usable bits when "per bit" is on and the figure grows with size. */
+function shown(key: FigureKey, figures: PartitionFigures, perBit: boolean): number {
+  const value = figures[key];
+  if (!perBit || !PER_BIT_FIGURES.has(key)) return value;
+  const per = key === 'matCount' ? MATS_PER : 1;
+  return figures.usableBits > 0 ? (value * per) / figures.usableBits : Number.NaN;
 }
 
 /**
@@ -65,6 +62,7 @@ export function VariantsView() {
   const [open, setOpen] = useState<{ id: string; key: FigureKey } | null>(null);
   const [error, setError] = useState<string | null>(null);
   const [renaming, setRenaming] = useState<string | null>(null);
+  const [perBit, setPerBit] = useState(false);
   const entries = variantEntries(design);
   const columns = entries.map((v) => {
     const report = v.active ? activeReport : variantReport(v.design);
@@ -84,9 +82,20 @@ export function VariantsView() {
   return (
     <div className="variants-view" data-testid="variants-view">
       <p className="hint">
-        Each variant is a whole design; the one being edited is marked. Values are compared with it: green is
-        better (▲), red worse (▼). Click a value for how it was computed.
+        Each variant is a whole design; the one being edited is marked. Values are compared with it: ↑ or ↓
+        and the change in per cent, green and “better” or red and “worse”. A variant without usable bits is
+        not compared. Click a value for how it was computed.
       </p>
+      <label className="check-field">
+        <input
+          type="checkbox"
+          data-testid="variants-per-bit"
+          checked={perBit}
+          onChange={(e) => setPerBit(e.target.checked)}
+        />{' '}
+        Per bit: divide the figures that grow with size (area, mats, refresh power, redundancy area) by usable
+        bits, so variants of different capacity compare fairly
+      </label>
       <div className="table-scroll">
         <table className="variants-table" data-testid="variants-table">
           <thead>
@@ -169,7 +178,7 @@ export function VariantsView() {
               return (
                 <tr key={key} className={anyDiff ? 'differs' : ''}>
                   <th scope="row" className="row-head">
-                    {key === 'cells' ? 'Cell' : key === 'counts' ? 'Cells per BL × WL' : 'Process'}
+                    {key === 'cells' ? 'Cell' : key === 'counts' ? `Size (${MAT_SIZE_UNIT})` : 'Process'}
                   </th>
                   {columns.map((c) => (
                     <td
@@ -185,24 +194,27 @@ export function VariantsView() {
             })}
             {TABLE_FIGURES.map((key) => {
               const info = bankFigureEntry(key);
-              const ref = reference?.figures[key] ?? Number.NaN;
-              const anyDiff = columns.some((c) => differs(c.figures[key], ref));
+              const normalised = perBit && PER_BIT_FIGURES.has(key);
+              const ref = reference ? shown(key, reference.figures, perBit) : Number.NaN;
+              const refComparable = (reference?.figures.usableBits ?? 0) > 0;
+              const anyDiff = columns.some((c) => differs(shown(key, c.figures, perBit), ref));
               return (
                 <tr key={key} className={anyDiff ? 'differs' : ''}>
                   <th scope="row" className="row-head">
-                    {info.label}
+                    {normalised ? `${info.label} per ${key === 'matCount' ? 'Mib' : 'bit'}` : info.label}
                   </th>
                   {columns.map((c) => {
-                    const value = c.figures[key];
+                    const value = shown(key, c.figures, perBit);
+                    const comparable = refComparable && c.figures.usableBits > 0;
                     const changed = !c.active && differs(value, ref);
-                    const verdict =
-                      info.better === 'neither'
-                        ? 'changed'
-                        : (info.better === 'lower' ? value < ref : value > ref)
-                          ? 'better'
-                          : 'worse';
+                    const better = normalised ? (PER_BIT_FIGURES.get(key) ?? info.better) : info.better;
+                    const verdict = changed ? verdictOf(better, value, ref, comparable) : 'none';
+                    const quantity = normalised && info.quantity === 'count' ? 'ratio' : info.quantity;
                     return (
-                      <td key={c.id} className={`num ${c.active ? 'active' : ''} ${changed ? verdict : ''}`}>
+                      <td
+                        key={c.id}
+                        className={`num ${c.active ? 'active' : ''} ${verdict === 'none' ? '' : verdict}`}
+                      >
                         <button
                           type="button"
                           className="value"
@@ -212,11 +224,11 @@ export function VariantsView() {
                             setOpen(open?.id === c.id && open.key === key ? null : { id: c.id, key })
                           }
                         >
-                          {formatQuantity(value, info.quantity)}
+                          {Number.isFinite(value) ? formatQuantity(value, quantity) : '—'}
                         </button>
-                        {changed && (
-                          <span className="delta">
-                            {deltaText(value, ref)} {VERDICT_WORDS[verdict]}
+                        {verdict !== 'none' && (
+                          <span className="delta" data-testid={`variant-${c.id}-${key}-delta`}>
+                            {deltaLine(value, ref, verdict)}
                           </span>
                         )}
                       </td>
