@@ -53,8 +53,8 @@ test('keyboard only: build a bank, edit a mat from the block list, sweep, build 
   await keys.showView('variants');
   await expect(page.getByTestId('variants-table').locator('thead th')).toHaveCount(4);
   // Better and worse are said in words and arrows, not by the tint alone.
-  await expect(page.getByTestId('variants-table')).toContainText('▲ better');
-  await expect(page.getByTestId('variants-table')).toContainText('▼ worse');
+  await expect(page.getByTestId('variants-table')).toContainText('· better');
+  await expect(page.getByTestId('variants-table')).toContainText('· worse');
   await keys.tabTo(page.getByTestId('switch-v1'));
   await page.keyboard.press('Enter');
   await expect(page.getByTestId('active-v1')).toBeVisible();
