@@ -56,6 +56,8 @@ describe('cell charging and latch regeneration (reference)', () => {
     // regeneration ΔV0·e^(t/τ), τ = C/gm (from memory); 6.9τ is ln 1000 (arithmetic).
     expect(latchTime(1e-12, 1e3, 1e-3, 1)).toBeCloseTo(6.9078e-9, 12);
     expect(latchTime(1e-12, 1e3, 0, 1)).toBeNaN();
+    // Arithmetic: ln(1/5e-311) = 714.49 (the quotient itself would overflow to Infinity).
+    expect(latchTime(1e-12, 1e3, 5e-311, 1) / 1e-9).toBeCloseTo(714.49, 1);
   });
 
   it('tRC = tRAS + tRP, as in the JEDEC DDR4-2400 speed bin (32 ns + 14.16 ns = 46.16 ns)', () => {

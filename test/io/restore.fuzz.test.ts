@@ -267,6 +267,21 @@ describe('restoreDesign under fuzzing', () => {
     },
   );
 
+  it('a subnormal precharge level (once found by the mutation fuzz) gives no infinite row timing', () => {
+    // Source: arithmetic. Vpre = 1e-310 V leaves a stored-0 signal near 5e-311 V; the latch time's
+    // ln(ΔV1/ΔV0) overflowed to Infinity and carried tRCD, tRC, tRFC and the busy fraction with it
+    // (5 non-finite totals). The latch now takes ln ΔV1 − ln ΔV0, which stays finite.
+    const demo = JSON.parse(DEMO_TEXT) as JsonTree;
+    mutate(demo, ['process', 'prechargeVoltage'], 1e-310);
+    const result = restoreDesign(demo);
+    expect(result.ok).toBe(true);
+    if (!result.ok) return;
+    const totals = evaluate(result.design).totals;
+    expect(nonFiniteTotals(totals)).toEqual([]);
+    expect(Number.isFinite(totals.worstRowCycleTime)).toBe(true);
+    expect(Number.isFinite(totals.refresh.busyFraction)).toBe(true);
+  });
+
   it('zero cell leakage still gives finite retention (the engine floors leakage at 1e-30 A)', () => {
     // Source: arithmetic (Cs·ΔV / 0 would be ∞).
     const design = demoDesign();

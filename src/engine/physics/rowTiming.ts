@@ -50,7 +50,9 @@ export function latchTime(
 ): number {
   if (!(inputDifference > 0)) return Number.NaN;
   if (inputDifference >= finalDifference) return 0;
-  return nodeCapacitance * latchResistance * Math.log(finalDifference / inputDifference);
+  // ln ΔV1 − ln ΔV0, not ln(ΔV1/ΔV0): a subnormal input (a precharge level of 1e-310 V leaves a signal
+  // that small) would overflow the quotient to Infinity, while each logarithm stays finite (≥ −745).
+  return nodeCapacitance * latchResistance * (Math.log(finalDifference) - Math.log(inputDifference));
 }
 
 /**
@@ -109,8 +111,16 @@ export function rowTiming(steps: {
   wordlineFall: number;
   equalise: number;
 }): RowTiming {
-  const rcd = steps.wordlineOn + steps.development + steps.latch;
-  const ras = Math.max(rcd, steps.wordlineNinety) + steps.restore;
-  const rp = steps.wordlineFall + steps.equalise;
-  return { ...steps, rcd, ras, rp, rc: ras + rp };
+  const rcd = existing(steps.wordlineOn + steps.development + steps.latch);
+  const ras = existing(Math.max(rcd, steps.wordlineNinety) + steps.restore);
+  const rp = existing(steps.wordlineFall + steps.equalise);
+  return { ...steps, rcd, ras, rp, rc: existing(ras + rp) };
+}
+
+/**
+ * A sum of steps that never ends (a step of ±Infinity) is a cycle that does not exist: NaN, shown as "—"
+ * with its reason, never an infinite time in the totals. NaN passes through unchanged.
+ */
+function existing(time: number): number {
+  return Number.isFinite(time) ? time : Number.NaN;
 }
