@@ -33,6 +33,15 @@ export interface PartitionFigures {
   readonly activationEnergyPerBit: number;
   readonly activationEnergy: number;
   readonly cellsPerWordline: number;
+  /** Longest tRCD of any mat (s), and the steps it adds up in that mat (s). */
+  readonly rowToColumnDelay: number;
+  readonly wordlineTurnOn: number;
+  readonly senseFireWait: number;
+  readonly latchTime: number;
+  /** Longest tRC of any mat (s), and its tRAS and tRP (s). */
+  readonly rowCycleTime: number;
+  readonly rowActiveTime: number;
+  readonly rowPrechargeTime: number;
   /** Shortest retention (s). */
   readonly retentionTime: number;
   /** tRFC (s), tREFI (s) and tRFC / tREFI. */

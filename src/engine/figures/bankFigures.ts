@@ -8,6 +8,7 @@ import {
   type FigureKey,
   type PartitionFigures,
 } from './bankFigure';
+import { BANK_TIMING_FIGURES } from './bankTimingFigures';
 import { BANK_YIELD_FIGURES } from './bankYieldFigures';
 
 /** An entry for a figure that is counted or measured from the floorplan. */
@@ -203,6 +204,7 @@ export const BANK_FIGURE_CATALOGUE = [
       source: SOURCES.common,
     }),
   }),
+  ...BANK_TIMING_FIGURES,
   ...BANK_YIELD_FIGURES,
 ] as const satisfies readonly BankFigureEntry[];
 
@@ -220,6 +222,8 @@ export const AXIS_FIGURES = [
   'areaPerBit',
   'senseMargin',
   'wordlineDelay',
+  'rowToColumnDelay',
+  'rowCycleTime',
   'activationEnergyPerBit',
   'arrayEfficiency',
   'refreshBusyFraction',
@@ -242,6 +246,8 @@ export const TABLE_FIGURES = [
   'matCount',
   'senseMargin',
   'wordlineDelay',
+  'rowToColumnDelay',
+  'rowCycleTime',
   'activationEnergyPerBit',
   'retentionTime',
   'refreshBusyFraction',

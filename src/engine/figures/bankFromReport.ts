@@ -15,12 +15,27 @@ function largest(mats: MatTable, pick: (f: MatFigures) => number): MatFigures | 
   return best;
 }
 
+/**
+ * The figures of the mat with the largest value of `pick` that exists (NaN ignored, as the totals do),
+ * the first mat when it exists for none, or undefined without mats.
+ */
+function largestExisting(mats: MatTable, pick: (f: MatFigures) => number): MatFigures | undefined {
+  let best: MatFigures | undefined;
+  for (let k = 0; k < mats.count; k++) {
+    const f = figuresAt(mats, k);
+    if (!best || pick(f) > pick(best) || (Number.isNaN(pick(best)) && !Number.isNaN(pick(f)))) best = f;
+  }
+  return best;
+}
+
 /** The comparison figures of an evaluated design (the design gives the yield settings). */
 export function figuresFromReport(report: Report, design: Design): PartitionFigures {
   const y = yieldFiguresOf(report, design);
   const t = report.totals;
   const worstMargin = findMatReport(report, t.worstSenseMarginMatId ?? '');
   const slowest = largest(report.mats, (f) => f.wordlineDelay);
+  const slowestRcd = largestExisting(report.mats, (f) => f.timing.rcd);
+  const slowestRc = largestExisting(report.mats, (f) => f.timing.rc);
   const hungriest = largest(report.mats, (f) => f.activationEnergy.perBit);
   const kinds = (severity: 'error' | 'warning') =>
     [...new Set(report.findings.filter((f) => f.severity === severity).map((f) => f.kind))].sort();
@@ -41,6 +56,13 @@ export function figuresFromReport(report: Report, design: Design): PartitionFigu
     activationEnergyPerBit: hungriest?.activationEnergy.perBit ?? Number.NaN,
     activationEnergy: hungriest?.activationEnergy.total ?? Number.NaN,
     cellsPerWordline: hungriest?.cellsPerWordline ?? Number.NaN,
+    rowToColumnDelay: t.worstRowToColumnDelay,
+    wordlineTurnOn: slowestRcd?.timing.wordlineOn ?? Number.NaN,
+    senseFireWait: slowestRcd?.timing.development ?? Number.NaN,
+    latchTime: slowestRcd?.timing.latch ?? Number.NaN,
+    rowCycleTime: t.worstRowCycleTime,
+    rowActiveTime: slowestRc?.timing.ras ?? Number.NaN,
+    rowPrechargeTime: slowestRc?.timing.rp ?? Number.NaN,
     retentionTime: t.shortestRetention,
     refreshCycleTime: t.refresh.cycleTime,
     refreshInterval: t.refresh.interval,
