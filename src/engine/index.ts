@@ -58,7 +58,13 @@ export {
 // evaluation: a design in, a report out
 export { evaluate, findMatReport } from './evaluation/evaluate';
 export { FULLY_SERVED, matPhysics, senseAmpsOfMat, type MatService } from './evaluation/matPhysics';
-export { cellLeakage, designContext, MINIMUM_LEAKAGE, type DesignContext } from './evaluation/designContext';
+export {
+  cellLeakage,
+  designContext,
+  MINIMUM_LEAKAGE,
+  retentionTailAt,
+  type DesignContext,
+} from './evaluation/designContext';
 export { refreshRowCycle } from './evaluation/totals';
 export {
   firingKinds,

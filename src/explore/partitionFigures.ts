@@ -14,6 +14,7 @@ import {
   senseAmpsOfMat,
   storedHighLevel,
   matDomainShare,
+  retentionTailAt,
   repeatedShare,
   yieldOfDomains,
   type DomainSum,
@@ -206,7 +207,8 @@ function bankYield(spec: PartitionPointSpec, plan: PartitionPlan, mat: MatFigure
     spareRows: options.spareRows ?? base.spareRows,
     spareColumns: options.spareColumns ?? base.spareColumns,
   };
-  const share = matDomainShare(mat, settings, spec.operating.refreshWindow);
+  const retentionTail = retentionTailAt(spec.process, spec.operating);
+  const share = matDomainShare(mat, settings, spec.operating.refreshWindow, retentionTail);
   let domains: DomainSum[];
   if (settings.repairDomain === 'mat') domains = Array.from({ length: plan.matCount }, () => share);
   else if (settings.repairDomain === 'matRow')
@@ -218,6 +220,8 @@ function bankYield(spec: PartitionPointSpec, plan: PartitionPlan, mat: MatFigure
     domains,
     mats: [mat],
     settings,
+    floorplanCopiesPerDie: spec.operating.floorplanCopiesPerDie,
+    retentionTail,
     refreshWindow: spec.operating.refreshWindow,
     floorplanArea: plan.width * plan.height,
     usableBits: plan.usableBits,

@@ -386,7 +386,6 @@ export const DEFAULT_REPAIR: RepairSettings = {
   repairDomain: 'matRow',
   fuseArea: 6e-12,
   compareBitArea: 1e-12,
-  floorplanCopiesPerDie: 512,
   dieArea: 30e-6,
   waferDiameter: 0.3,
 };

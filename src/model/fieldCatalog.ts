@@ -113,7 +113,6 @@ export const REPAIR_FIELDS: readonly FieldInfo<RepairNumericField>[] = [
   { key: 'spareColumns', label: 'Spare columns per domain', quantity: 'count' },
   { key: 'fuseArea', label: 'Fuse area', quantity: 'area' },
   { key: 'compareBitArea', label: 'Compare-bit area', quantity: 'area' },
-  { key: 'floorplanCopiesPerDie', label: 'Floorplan copies per die', quantity: 'count' },
   { key: 'dieArea', label: 'Die area', quantity: 'area' },
   { key: 'waferDiameter', label: 'Wafer diameter', quantity: 'length' },
 ];

@@ -38,8 +38,6 @@ export const repairSettingsSchema = z.object({
   fuseArea: nonNegative('fuse area', 1e-6),
   /** Area of one address-compare bit (XOR and its share of the match gate) (m²). */
   compareBitArea: nonNegative('compare-bit area', 1e-6),
-  /** How many copies of this floorplan the die holds. */
-  floorplanCopiesPerDie: wholeCount('floorplan copies per die', 1, 1_000_000),
   /** Die area (m²); must hold the floorplan copies. */
   dieArea: positive('die area', 1e-8, 1e-2),
   /** Usable wafer diameter (m). */

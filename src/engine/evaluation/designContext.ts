@@ -1,6 +1,7 @@
 import type { OperatingConditions } from '../../model/operating';
 import type { ProcessProfile } from '../../model/process';
 import { offsetSigmaMultiplier } from '../physics/offset';
+import type { RetentionTail } from '../physics/faultRates';
 import { leakageAtTemperature, weakestCellLeakage } from '../physics/retention';
 import { storedHighLevel, type StoredHighLevel } from '../physics/storedLevel';
 
@@ -48,6 +49,30 @@ export interface DesignContext {
  * @param senseAmpsInFloorplan sense amplifiers of the floorplan (or bank) being evaluated.
  * @param cellsInFloorplan its cells.
  */
+/** Median leakage of the weak-cell tail at temperature T (A): its own Arrhenius activation energy. */
+export function tailMedianLeakage(process: ProcessProfile, T: number): number {
+  return leakageAtTemperature(
+    process.cellLeakageCurrent * process.tailLeakageMultiplier,
+    process.leakageReferenceTemperature,
+    process.tailActivationEnergy,
+    T,
+  );
+}
+
+/**
+ * The weak-cell tail as the yield model reads it: its share of cells, its median leakage over the typical
+ * cell's at the operating temperature, and its log-normal spread (the same two-population model as the
+ * weakest-cell retention).
+ */
+export function retentionTailAt(process: ProcessProfile, operating: OperatingConditions): RetentionTail {
+  const typical = cellLeakage(process, operating);
+  return {
+    fraction: process.tailCellFraction,
+    medianLeakageMultiplier: typical > 0 ? tailMedianLeakage(process, operating.temperature) / typical : 1,
+    spread: process.tailLeakageSpread,
+  };
+}
+
 export function designContext(
   process: ProcessProfile,
   operating: OperatingConditions,
@@ -60,12 +85,7 @@ export function designContext(
   const cellsOnDie = cellsInFloorplan * copies;
   const T = operating.temperature;
   const leakage = cellLeakage(process, operating);
-  const tailMedian = leakageAtTemperature(
-    process.cellLeakageCurrent * process.tailLeakageMultiplier,
-    process.leakageReferenceTemperature,
-    process.tailActivationEnergy,
-    T,
-  );
+  const tailMedian = tailMedianLeakage(process, T);
   return {
     process,
     operating,

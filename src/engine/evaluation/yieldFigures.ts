@@ -8,18 +8,22 @@ import {
   parametricFaults,
   senseAmpFailureProbability,
   weakCellFraction,
+  type RetentionTail,
   type FaultCounts,
 } from '../physics/faultRates';
 import { sparseRepairProbability, type RepairDomain } from '../physics/redundancy';
 import { redundancyArea } from '../physics/redundancyArea';
 import type { MonteCarloDomainClass, RepairMonteCarloRequest } from '../physics/repairMonteCarlo';
 import { goodDiesPerWafer, grossDiesPerWafer } from '../physics/yield';
+import { retentionTailAt } from './designContext';
 import { figuresAt, type MatTable } from './matTable';
 import type { MatFigures, Report } from './report';
 
 /** The yield figures of a design on its die (SI; counts per die unless named otherwise). */
 export interface YieldFigures {
   readonly settings: RepairSettings;
+  /** Copies of the floorplan on the die (the operating conditions' one value). */
+  readonly floorplanCopiesPerDie: number;
   /** Repair domains in one floorplan copy, and on the die. */
   readonly domainsPerFloorplan: number;
   readonly domainsPerDie: number;
@@ -75,14 +79,19 @@ export interface DomainSum {
 const BAND_GRID = 1e-9;
 
 /** One mat's share of a repair domain: its lines, area and expected faults of each source. */
-export function matDomainShare(f: MatFigures, settings: RepairSettings, refreshWindow: number): DomainSum {
+export function matDomainShare(
+  f: MatFigures,
+  settings: RepairSettings,
+  refreshWindow: number,
+  tail?: RetentionTail,
+): DomainSum {
   const kill = {
     singleCell: settings.killRatioCell,
     wordLine: settings.killRatioWordline,
     bitLine: settings.killRatioBitline,
   };
   const saFailure = senseAmpFailureProbability(f.senseSignal, f.offsetSigma);
-  const weak = weakCellFraction(f.retentionTime, refreshWindow);
+  const weak = weakCellFraction(f.retentionTime, refreshWindow, tail);
   return {
     rows: f.wordlineCount,
     columns: f.architecture === 'folded' ? f.bitlineCount / 2 : f.bitlineCount,
@@ -107,7 +116,12 @@ export function repeatedShare(share: DomainSum, n: number): DomainSum {
  * The repair domains of one floorplan copy. A mat is one domain; a mat row groups the mats of one band
  * along the word lines (same start across them, as the refresh rows count them); the bank is every mat.
  */
-function domainsOf(mats: MatTable, design: Design, settings: RepairSettings): DomainSum[] {
+function domainsOf(
+  mats: MatTable,
+  design: Design,
+  settings: RepairSettings,
+  tail: RetentionTail,
+): DomainSum[] {
   const byKey = new Map<string, DomainSum>();
   for (let k = 0; k < mats.count; k++) {
     const f = figuresAt(mats, k);
@@ -119,7 +133,7 @@ function domainsOf(mats: MatTable, design: Design, settings: RepairSettings): Do
       const vertical = block.type === 'mat' && block.bitlineAxis === 'vertical';
       key = `${vertical ? 'v' : 'h'}${Math.round((vertical ? block.y : block.x) / BAND_GRID)}`;
     }
-    const share = matDomainShare(f, settings, design.operating.refreshWindow);
+    const share = matDomainShare(f, settings, design.operating.refreshWindow, tail);
     const sum = byKey.get(key);
     if (!sum) byKey.set(key, { ...share });
     else {
@@ -174,10 +188,13 @@ function domainClasses(domains: readonly DomainSum[]): { count: number; domain: 
 export function computeYieldFigures(report: Report, design: Design): YieldFigures {
   const settings = repairSettingsOf(design);
   const areaByType = report.totals.areaByType;
+  const retentionTail = retentionTailAt(design.process, design.operating);
   return yieldOfDomains({
-    domains: domainsOf(report.mats, design, settings),
+    domains: domainsOf(report.mats, design, settings, retentionTail),
     mats: report.mats.figures,
     settings,
+    floorplanCopiesPerDie: design.operating.floorplanCopiesPerDie,
+    retentionTail,
     refreshWindow: design.operating.refreshWindow,
     floorplanArea: report.totals.totalArea,
     usableBits: report.totals.usableBits,
@@ -191,6 +208,10 @@ export interface YieldInputs {
   /** The kinds of mat (for the worst sense-amp failure and weak-cell share). */
   readonly mats: readonly MatFigures[];
   readonly settings: RepairSettings;
+  /** Copies of the floorplan on the die. */
+  readonly floorplanCopiesPerDie: number;
+  /** The weak-cell tail at the operating temperature (two-population retention). */
+  readonly retentionTail: RetentionTail;
   readonly refreshWindow: number;
   readonly floorplanArea: number;
   readonly usableBits: number;
@@ -202,7 +223,7 @@ export interface YieldInputs {
 export function yieldOfDomains(inputs: YieldInputs): YieldFigures {
   const { settings, stripShare } = inputs;
   const problems: string[] = [];
-  const copies = settings.floorplanCopiesPerDie;
+  const copies = inputs.floorplanCopiesPerDie;
   const domains = inputs.domains;
   const classes = domainClasses(domains);
 
@@ -232,7 +253,10 @@ export function yieldOfDomains(inputs: YieldInputs): YieldFigures {
   }
   for (const f of inputs.mats) {
     senseAmpFailure = Math.max(senseAmpFailure, senseAmpFailureProbability(f.senseSignal, f.offsetSigma));
-    weakCells = Math.max(weakCells, weakCellFraction(f.retentionTime, inputs.refreshWindow));
+    weakCells = Math.max(
+      weakCells,
+      weakCellFraction(f.retentionTime, inputs.refreshWindow, inputs.retentionTail),
+    );
   }
   const redundancy = spareRowArea + spareColumnArea + fuseAndCompareArea;
   const floorplanArea = inputs.floorplanArea;
@@ -288,6 +312,7 @@ export function yieldOfDomains(inputs: YieldInputs): YieldFigures {
 
   return {
     settings,
+    floorplanCopiesPerDie: copies,
     domainsPerFloorplan: domains.length,
     domainsPerDie: domains.length * copies,
     defectFaults: defectTotal,

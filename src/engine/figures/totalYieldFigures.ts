@@ -20,7 +20,7 @@ function defectInputs(y: YieldFigures) {
     input('k_cell', 'single-cell kill ratio', s.killRatioCell, 'ratio'),
     input('k_WL', 'word-line kill ratio', s.killRatioWordline, 'ratio'),
     input('k_BL', 'bit-line kill ratio', s.killRatioBitline, 'ratio'),
-    input('N', 'floorplan copies per die', s.floorplanCopiesPerDie, 'count'),
+    input('N', 'floorplan copies per die', y.floorplanCopiesPerDie, 'count'),
   ];
 }
 
