@@ -24,6 +24,11 @@ export function FigureRow({ testId, explanation, open, onToggle }: FigureRowProp
         <span className="figure-value" data-testid={`${testId}-value`}>
           {formatQuantity(explanation.value, explanation.quantity)}
         </span>
+        {explanation.missingReason && (
+          <span className="figure-missing" data-testid={`${testId}-missing`}>
+            {explanation.missingReason}
+          </span>
+        )}
       </button>
       {open && <ExplanationCard explanation={explanation} />}
     </>
@@ -51,6 +56,7 @@ export function ExplanationCard({ explanation }: { readonly explanation: Explana
           </tr>
         </tbody>
       </table>
+      {explanation.missingReason && <p className="method">Does not exist: {explanation.missingReason}.</p>}
       <p className="method">{explanation.method}</p>
       <p className="source">Source: {explanation.source}</p>
     </div>

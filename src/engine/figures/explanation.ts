@@ -18,6 +18,8 @@ export interface Explanation {
   readonly quantity: Quantity;
   readonly method: string;
   readonly source: string;
+  /** Why the figure does not exist, when its value is NaN (shown "—" with this reason). */
+  readonly missingReason?: string;
 }
 
 export const input = (

@@ -31,9 +31,18 @@ export interface Working {
   readonly source: string;
 }
 
-/** The full explanation of one figure from its entry, its value and its working. */
-export function explanationOf(entry: FigureEntry, value: number, working: Working): Explanation {
+/**
+ * The full explanation of one figure from its entry, its value and its working; a NaN value (the figure
+ * does not exist) carries `missingReason`.
+ */
+export function explanationOf(
+  entry: FigureEntry,
+  value: number,
+  working: Working,
+  missingReason?: string,
+): Explanation {
   return {
+    ...(Number.isNaN(value) && missingReason !== undefined ? { missingReason } : {}),
     title: working.title ?? entry.label,
     symbol: working.symbol,
     formula: working.formula,

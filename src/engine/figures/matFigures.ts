@@ -1,3 +1,4 @@
+import { matMissingReason } from './missingReasons';
 import type { Design } from '../../model/design';
 import type { MatReport, Report } from '../evaluation/report';
 import { explanationOf } from './figure';
@@ -440,5 +441,11 @@ export function explainMatFigure(
 ): Explanation | undefined {
   const entry = matFigureEntry(key);
   if (!entry.explain || !matFigureApplies(key, mat)) return undefined;
-  return explanationOf(entry, entry.value(mat.figures), entry.explain(mat, design, report));
+  const value = entry.value(mat.figures);
+  return explanationOf(
+    entry,
+    value,
+    entry.explain(mat, design, report),
+    Number.isNaN(value) ? matMissingReason(key, mat.figures) : undefined,
+  );
 }

@@ -1,3 +1,4 @@
+import { totalMissingReason } from './missingReasons';
 import type { Design } from '../../model/design';
 import { formatQuantity } from '../../model/units';
 import type { Report } from '../evaluation/report';
@@ -204,5 +205,11 @@ export const TOTAL_FIGURES: readonly TotalFigureKey[] = TOTAL_FIGURE_PANEL.flatM
 export function explainTotal(key: TotalFigureKey, report: Report, design: Design): Explanation | undefined {
   const entry = totalFigureEntry(key);
   if (!entry.explain) return undefined;
-  return explanationOf(entry, entry.value(report, design), entry.explain(report, design));
+  const value = entry.value(report, design);
+  return explanationOf(
+    entry,
+    value,
+    entry.explain(report, design),
+    Number.isNaN(value) ? totalMissingReason(key, report.totals) : undefined,
+  );
 }

@@ -1,0 +1,30 @@
+import type { MatFigures, Totals } from '../evaluation/report';
+
+/**
+ * Why a figure does not exist (its value is NaN, shown "—"): one home for the reason texts the panels
+ * print beside the dash. A figure that does not exist is never shown as 0 s or 0 µm².
+ */
+
+/** The reason a figure of one mat does not exist. */
+export function matMissingReason(key: string, f: MatFigures): string {
+  if (f.usableBits <= 0)
+    return 'no usable bit: no bit line of this mat reaches a sense amplifier with a partner line, or no word line reaches a driver';
+  if (/retention/i.test(key) && !f.needsRefresh)
+    return 'a static cell keeps its data without refresh: no retention time';
+  if (key === 'wordlineTurnOn' || (key === 'rowToColumnDelay' && Number.isNaN(f.wordlineTiming.toTurnOn)))
+    return 'the word line never rises to the access turn-on level (Vpre + Vt)';
+  if (Number.isNaN(f.timing.latch) && !(f.senseSignal > 0))
+    return 'no signal to latch: the developed sense signal is not positive';
+  if (Number.isNaN(f.wordlineTiming.toFallOff))
+    return 'the access threshold Vt0 is not above 0 V: the access device never turns off';
+  return 'this figure does not exist for this mat';
+}
+
+/** The reason a whole-floorplan figure does not exist. */
+export function totalMissingReason(key: string, t: Totals): string {
+  if (t.matCount === 0) return 'no mat is placed';
+  if (key.startsWith('areaPerBit')) return 'no usable bit: there is nothing to spread the area over';
+  if (/retention/i.test(key)) return 'no mat with a usable bit needs refresh';
+  if (t.usableBits <= 0) return 'no usable bit: nothing is sensed';
+  return 'no mat has this figure';
+}
