@@ -27,6 +27,24 @@ describe('figures that do not exist carry a reason', () => {
     }
   });
 
+  it('retention with no margin to lose is NaN with the reason, not 0 s', () => {
+    // Cs of 1 aF leaves far too little signal: nothing may droop.
+    const starved = {
+      ...demo,
+      cells: demo.cells.map((c) => ({ ...c, storageCapacitance: 1e-18 })),
+    };
+    const r = evaluate(starved);
+    const firstMat = starved.blocks.find((b) => b.type === 'mat');
+    const mat = findMatReport(r, firstMat?.id ?? '');
+    expect(mat?.figures.allowedDroop).toBe(0);
+    if (!mat) return;
+    const e = explainMatFigure('retentionTime', mat, starved, r);
+    expect(e?.value).toBeNaN();
+    expect(e?.missingReason).toMatch(/no margin to lose/);
+    expect(r.totals.shortestRetention).toBeNaN();
+    expect(explainTotal('shortestRetention', r, starved)?.missingReason).toMatch(/no margin to lose/);
+  });
+
   it('a figure that exists carries no reason', () => {
     const full = evaluate(demo);
     expect(explainTotal('areaPerBit', full, demo)?.missingReason).toBeUndefined();

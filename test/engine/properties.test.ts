@@ -131,7 +131,9 @@ function nanFigures(report: MatReport): string[] {
     for (const k of ['latch', 'restore', 'equalise', 'rcd', 'ras', 'rp', 'rc'])
       absent.add(`figures.timing.${k}`);
   }
-  if (!f.needsRefresh) absent.add('figures.retentionTime').add('figures.weakestRetentionTime');
+  // No margin to lose (the fresh signal already falls short): no retention time exists.
+  if (!f.needsRefresh || !(f.allowedDroop > 0))
+    absent.add('figures.retentionTime').add('figures.weakestRetentionTime');
   if (!(f.senseSignal > 0)) for (const k of ['latch', 'rcd', 'ras', 'rc']) absent.add(`figures.timing.${k}`);
   if (!(f.wordlineTiming.turnOnShare < 1)) {
     absent.add('figures.wordlineTiming.toTurnOn').add('figures.timing.wordlineOn');

@@ -295,7 +295,9 @@ export function matPhysics(mat: MatKind, service: MatService, ctx: DesignContext
     gain,
     service.senseAmpEnds,
   );
-  const retentionExists = sensed && refreshed;
+  // With no droop allowed (the fresh signal already falls short) there is no margin to lose: the
+  // retention time does not exist (NaN, "—" with the reason), it is not 0 s.
+  const retentionExists = sensed && refreshed && outcome.allowedDroop > 0;
   return {
     cellId: mat.cell.id,
     cellKind: kind,

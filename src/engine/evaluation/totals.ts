@@ -160,6 +160,8 @@ function extremes(mats: MatTable): Extremes {
     worstRowCycleTime: nan,
     standbyPower: 0,
   };
+  // A sensed, refreshed mat with no margin to lose has no retention: then the shortest does not exist.
+  let noMarginToLose = false;
   let signalMat = -1;
   let marginMat = -1;
   let previous: MatFigures | null = null;
@@ -180,6 +182,7 @@ function extremes(mats: MatTable): Extremes {
         marginMat = k;
       }
     }
+    if (f.usableBits > 0 && f.needsRefresh && !(f.allowedDroop > 0)) noMarginToLose = true;
     e.shortestRetention = lower(e.shortestRetention, f.retentionTime);
     e.shortestWeakestRetention = lower(e.shortestWeakestRetention, f.weakestRetentionTime);
     e.worstWordlineDelay = higher(e.worstWordlineDelay, f.wordlineDelay);
@@ -187,6 +190,10 @@ function extremes(mats: MatTable): Extremes {
     e.worstWordlineNinety = higher(e.worstWordlineNinety, f.wordlineTiming.toNinetyPercent);
     e.worstRowToColumnDelay = higher(e.worstRowToColumnDelay, f.timing.rcd);
     e.worstRowCycleTime = higher(e.worstRowCycleTime, f.timing.rc);
+  }
+  if (noMarginToLose) {
+    e.shortestRetention = nan;
+    e.shortestWeakestRetention = nan;
   }
   if (signalMat >= 0) {
     e.worstSenseSignalMatId = matIdAt(mats, signalMat);

@@ -61,6 +61,14 @@ export interface YieldFigures {
   readonly problems: readonly string[];
 }
 
+/**
+ * Retention as the weak-cell count reads it: a sensed, refreshed mat with no margin to lose has no
+ * retention time (NaN in its figures), and for yield every one of its cells is weak, as with 0 s.
+ */
+function retentionForYield(f: MatFigures): number {
+  return f.usableBits > 0 && f.needsRefresh && !(f.allowedDroop > 0) ? 0 : f.retentionTime;
+}
+
 /** The repair settings of a design: its own, or the built-in defaults. */
 export function repairSettingsOf(design: Design): RepairSettings {
   return design.operating.repair ?? DEFAULT_REPAIR;
@@ -91,7 +99,7 @@ export function matDomainShare(
     bitLine: settings.killRatioBitline,
   };
   const saFailure = senseAmpFailureProbability(f.senseSignal, f.offsetSigma);
-  const weak = weakCellFraction(f.retentionTime, refreshWindow, tail);
+  const weak = weakCellFraction(retentionForYield(f), refreshWindow, tail);
   return {
     rows: f.wordlineCount,
     columns: f.architecture === 'folded' ? f.bitlineCount / 2 : f.bitlineCount,
@@ -255,7 +263,7 @@ export function yieldOfDomains(inputs: YieldInputs): YieldFigures {
     senseAmpFailure = Math.max(senseAmpFailure, senseAmpFailureProbability(f.senseSignal, f.offsetSigma));
     weakCells = Math.max(
       weakCells,
-      weakCellFraction(f.retentionTime, inputs.refreshWindow, inputs.retentionTail),
+      weakCellFraction(retentionForYield(f), inputs.refreshWindow, inputs.retentionTail),
     );
   }
   const redundancy = spareRowArea + spareColumnArea + fuseAndCompareArea;

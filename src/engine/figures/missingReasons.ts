@@ -11,6 +11,8 @@ export function matMissingReason(key: string, f: MatFigures): string {
     return 'no usable bit: no bit line of this mat reaches a sense amplifier with a partner line, or no word line reaches a driver';
   if (/retention/i.test(key) && !f.needsRefresh)
     return 'a static cell keeps its data without refresh: no retention time';
+  if (/retention/i.test(key) && !(f.allowedDroop > 0))
+    return 'no margin to lose: the fresh signal already falls short of what the sense amplifier needs';
   if (key === 'wordlineTurnOn' || (key === 'rowToColumnDelay' && Number.isNaN(f.wordlineTiming.toTurnOn)))
     return 'the word line never rises to the access turn-on level (Vpre + Vt)';
   if (Number.isNaN(f.timing.latch) && !(f.senseSignal > 0))
@@ -24,7 +26,10 @@ export function matMissingReason(key: string, f: MatFigures): string {
 export function totalMissingReason(key: string, t: Totals): string {
   if (t.matCount === 0) return 'no mat is placed';
   if (key.startsWith('areaPerBit')) return 'no usable bit: there is nothing to spread the area over';
-  if (/retention/i.test(key)) return 'no mat with a usable bit needs refresh';
+  if (/retention/i.test(key))
+    return t.worstSenseMargin <= 0
+      ? 'a mat has no margin to lose: its fresh signal already falls short'
+      : 'no mat with a usable bit needs refresh';
   if (t.usableBits <= 0) return 'no usable bit: nothing is sensed';
   return 'no mat has this figure';
 }
