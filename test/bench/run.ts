@@ -6,7 +6,13 @@ import { spawnSync } from 'node:child_process';
 import { existsSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 
-const BENCHES = ['evaluate.bench.ts', 'evaluateCold.bench.ts', 'sweep.bench.ts', 'repair.bench.ts'];
+const BENCHES = [
+  'evaluate.bench.ts',
+  'layoutChecks.bench.ts',
+  'evaluateCold.bench.ts',
+  'sweep.bench.ts',
+  'repair.bench.ts',
+];
 
 let failed = false;
 for (const name of BENCHES) {

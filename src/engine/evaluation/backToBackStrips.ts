@@ -20,7 +20,7 @@ const NAMED_PAIRS = 3;
  * cover one mat edge between them). Common practice (no source).
  *
  * Found by sorting: each strip's far long edge is looked up among the near long edges of the others, so a
- * die of tens of thousands of strips is one sort, not a comparison of every pair.
+ * die of tens of thousands of strips is one native sort of numbers, not a comparison of every pair.
  */
 export function backToBackStripFindings(table: BlockTable, mats: MatTable): Finding[] {
   const findings: Finding[] = [];
@@ -30,23 +30,22 @@ export function backToBackStripFindings(table: BlockTable, mats: MatTable): Find
     if (pairs.length === 0) continue;
     const blocks = table.blocks;
     const label = (i: number) => blocks[i]?.name || blocks[i]?.id || '';
-    const named = pairs
-      .slice(0, NAMED_PAIRS)
-      .map(([a, b]) => `${label(a)} and ${label(b)}`)
-      .join('; ');
+    const named: string[] = [];
+    for (let n = 0; n < Math.min(NAMED_PAIRS, pairs.length); n++)
+      named.push(`${label(pairs.first(n))} and ${label(pairs.second(n))}`);
     const ids = new Set<string>();
-    for (const [a, b] of pairs) {
-      ids.add(blocks[a]?.id ?? '');
-      ids.add(blocks[b]?.id ?? '');
+    for (let n = 0; n < pairs.length; n++) {
+      ids.add(blocks[pairs.first(n)]?.id ?? '');
+      ids.add(blocks[pairs.second(n)]?.id ?? '');
     }
-    const kind = blocks[pairs[0]?.[0] ?? 0]?.type ?? 'senseAmpStrip';
+    const kind = blocks[pairs.first(0)]?.type ?? 'senseAmpStrip';
     const count = pairs.length === 1 ? '' : `${pairs.length} pairs: `;
     findings.push({
       kind: 'backToBackStrips',
       severity: 'warning',
       blockIds: [...ids],
       message:
-        `${count}${named}${pairs.length > NAMED_PAIRS ? '; …' : ''} are ${BLOCK_TYPE_LABEL[kind]}s back to back; ` +
+        `${count}${named.join('; ')}${pairs.length > NAMED_PAIRS ? '; …' : ''} are ${BLOCK_TYPE_LABEL[kind]}s back to back; ` +
         'one strip shared by the mats on both sides serves the same lines in less area',
     });
   }
@@ -77,49 +76,119 @@ function servedEdgeOrientation(table: BlockTable, mats: MatTable): Uint8Array {
   return facing;
 }
 
-/** Every back-to-back pair of serving strips of type `code`, the upper or left strip first. */
-function pairsOfType(table: BlockTable, code: number, facing: Uint8Array): [number, number][] {
-  const lying: number[] = [];
-  const standing: number[] = [];
+/** Every back-to-back pair of serving strips of type `code`, the upper or left strip first, as [a, b] runs. */
+function pairsOfType(table: BlockTable, code: number, facing: Uint8Array): PairList {
+  let lyingCount = 0;
+  let standingCount = 0;
   for (let i = 0; i < table.count; i++) {
     if (table.type[i] !== code || facing[i] === UNSERVING) continue;
-    if (facing[i] === ALONG_HORIZONTAL_EDGE) lying.push(i);
-    else standing.push(i);
+    if (facing[i] === ALONG_HORIZONTAL_EDGE) lyingCount++;
+    else standingCount++;
   }
-  return [
-    ...facingPairs(lying, table.y, table.height, table.x, table.width),
-    ...facingPairs(standing, table.x, table.width, table.y, table.height),
-  ];
+  const lying = new Int32Array(lyingCount);
+  const standing = new Int32Array(standingCount);
+  for (let i = 0, l = 0, s = 0; i < table.count; i++) {
+    if (table.type[i] !== code || facing[i] === UNSERVING) continue;
+    if (facing[i] === ALONG_HORIZONTAL_EDGE) lying[l++] = i;
+    else standing[s++] = i;
+  }
+  const pairs = new PairList();
+  facingPairs(lying, table.y, table.height, table.x, table.width, pairs);
+  facingPairs(standing, table.x, table.width, table.y, table.height, pairs);
+  return pairs;
+}
+
+/** Pairs of table positions, two Int32 per pair, grown by doubling. */
+class PairList {
+  private data = new Int32Array(64);
+  length = 0;
+
+  push(a: number, b: number): void {
+    if (2 * this.length + 2 > this.data.length) {
+      const grown = new Int32Array(2 * this.data.length);
+      grown.set(this.data);
+      this.data = grown;
+    }
+    this.data[2 * this.length] = a;
+    this.data[2 * this.length + 1] = b;
+    this.length++;
+  }
+
+  first(n: number): number {
+    return this.data[2 * n] as number;
+  }
+
+  second(n: number): number {
+    return this.data[2 * n + 1] as number;
+  }
 }
 
 /**
- * Pairs among `strips` where one's far edge (start + size across) meets the other's near edge and they
- * overlap along the strip by more than the tolerance.
+ * Pairs among `strips` (ascending positions) where one's far edge (start + size across) meets the other's
+ * near edge and they overlap along the strip by more than the tolerance, in the order: each strip in turn,
+ * its partners by start across, then by position.
+ *
+ * The strips are bucketed by their distinct start values (a native numeric sort of the starts, then a
+ * counting sort of the strips), so there is no comparison callback and no object per strip. A strip whose
+ * start is not a number meets nothing and is left out.
  */
 function facingPairs(
-  strips: number[],
+  strips: Int32Array,
   across: Float64Array,
   thickness: Float64Array,
   along: Float64Array,
   length: Float64Array,
-): [number, number][] {
-  if (strips.length < 2) return [];
-  const byStart = strips.slice().sort((a, b) => (across[a] as number) - (across[b] as number));
-  const starts = Float64Array.from(byStart, (i) => across[i] as number);
-  const pairs: [number, number][] = [];
-  for (const i of strips) {
+  pairs: PairList,
+): void {
+  if (strips.length < 2) return;
+  const starts = new Float64Array(strips.length);
+  for (let s = 0; s < strips.length; s++) starts[s] = across[strips[s] as number] as number;
+  const distinct = distinctSorted(starts);
+  // Counting sort of the strips by the rank of their start; ranks ascend with position, so ties keep it.
+  const rank = new Int32Array(strips.length);
+  const bucket = new Int32Array(distinct.length + 1);
+  for (let s = 0; s < strips.length; s++) {
+    const start = starts[s] as number;
+    const r = start === start ? lowerBound(distinct, start) : -1;
+    rank[s] = r;
+    if (r >= 0) (bucket[r + 1] as number)++;
+  }
+  for (let r = 0; r < distinct.length; r++) bucket[r + 1] = (bucket[r + 1] as number) + (bucket[r] as number);
+  const fill = bucket.slice(0, distinct.length);
+  const byStart = new Int32Array(bucket[distinct.length] as number);
+  for (let s = 0; s < strips.length; s++) {
+    const r = rank[s] as number;
+    if (r >= 0) byStart[(fill[r] as number)++] = strips[s] as number;
+  }
+  for (let s = 0; s < strips.length; s++) {
+    const i = strips[s] as number;
     const edge = (across[i] as number) + (thickness[i] as number);
-    let lo = lowerBound(starts, edge - ABUTMENT_TOLERANCE);
-    for (; lo < starts.length && (starts[lo] as number) <= edge + ABUTMENT_TOLERANCE; lo++) {
-      const j = byStart[lo] as number;
-      if (j === i) continue;
-      const overlap =
-        Math.min((along[i] as number) + (length[i] as number), (along[j] as number) + (length[j] as number)) -
-        Math.max(along[i] as number, along[j] as number);
-      if (overlap > ABUTMENT_TOLERANCE) pairs.push([i, j]);
+    const alongStart = along[i] as number;
+    const alongEnd = alongStart + (length[i] as number);
+    for (let r = lowerBound(distinct, edge - ABUTMENT_TOLERANCE); r < distinct.length; r++) {
+      if (!((distinct[r] as number) <= edge + ABUTMENT_TOLERANCE)) break;
+      for (let q = bucket[r] as number; q < (bucket[r + 1] as number); q++) {
+        const j = byStart[q] as number;
+        if (j === i) continue;
+        const overlap =
+          Math.min(alongEnd, (along[j] as number) + (length[j] as number)) -
+          Math.max(alongStart, along[j] as number);
+        if (overlap > ABUTMENT_TOLERANCE) pairs.push(i, j);
+      }
     }
   }
-  return pairs;
+}
+
+/** The distinct numbers among `values` (NaN left out), ascending. */
+function distinctSorted(values: Float64Array): Float64Array {
+  const sorted = values.slice().sort();
+  let n = 0;
+  for (let s = 0; s < sorted.length; s++) {
+    const v = sorted[s] as number;
+    if (v !== v) break; // NaN sorts last
+    if (n === 0 || v !== sorted[n - 1]) sorted[n++] = v;
+  }
+  return sorted.subarray(0, n);
 }
 
 /** First index whose value is ≥ `value` in an ascending array. */

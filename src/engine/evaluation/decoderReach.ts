@@ -7,6 +7,7 @@ import {
   type BlockTable,
 } from '../../geometry/blockTable';
 import { bitlineEndSides } from '../../geometry/stripFit';
+import { DecoderEdges } from './decoderEdges';
 import { groupLabel } from './findingText';
 import type { MatTable } from './matTable';
 import type { Finding } from './report';
@@ -43,25 +44,33 @@ export function matsReachedBy(
 ): Uint8Array {
   const reachedMat = new Uint8Array(mats.count);
   const reachedBlock = new Uint8Array(table.count);
-  const decoders: number[] = [];
-  for (let i = 0; i < table.count; i++) if (table.type[i] === decoderCode) decoders.push(i);
-  if (decoders.length === 0) return reachedMat;
+  const edges = DecoderEdges.of(table, decoderCode);
+  if (edges === null) return reachedMat;
   const matOfPosition = new Int32Array(table.count).fill(-1);
   for (let k = 0; k < mats.count; k++) matOfPosition[mats.position[k] as number] = k;
   // Seeds: the decoders, the serving strips abutting them, and mats whose bit-line ends meet a column decoder.
   const stripQueue: number[] = [];
   const matQueue: number[] = [];
-  for (const d of decoders) {
+  for (const d of edges.decoders) {
     reachedBlock[d] = 1;
     stripQueue.push(d);
-    for (let i = 0; i < table.count; i++) {
-      const type = table.type[i];
-      if (type === stripCode && reachedBlock[i] === 0 && abutting(table, d, i)) {
-        reachedBlock[i] = 1;
-        stripQueue.push(i);
-      } else if (decoderCode === COLUMN_DECODER && (matOfPosition[i] as number) >= 0) {
-        const k = matOfPosition[i] as number;
-        if (reachedMat[k] !== 0) continue;
+  }
+  const seedMats = decoderCode === COLUMN_DECODER;
+  const candidates = edges.candidates;
+  for (let i = 0; i < table.count; i++) {
+    const type = table.type[i];
+    const k = matOfPosition[i] as number;
+    const isStrip = type === stripCode;
+    if (!isStrip && !(seedMats && k >= 0)) continue;
+    const found = edges.near(table, i);
+    for (let c = 0; c < found; c++) {
+      const d = candidates[c] as number;
+      if (isStrip) {
+        if (reachedBlock[i] === 0 && abutting(table, d, i)) {
+          reachedBlock[i] = 1;
+          stripQueue.push(i);
+        }
+      } else if (reachedMat[k] === 0) {
         for (const side of bitlineEndSides(kindAt(table, i).block.bitlineAxis)) {
           if (!abutmentSpan(table, i, d, side, scratch, 0)) continue;
           reachedMat[k] = 1;
