@@ -24,6 +24,14 @@ test('run a sweep, click a point, and the new variant has the point’s figures'
   await expect(page.getByTestId('scatter')).toBeVisible();
   await expect(page.getByTestId('front-point').first()).toBeVisible();
   await expect(page.getByTestId('infeasible-band').first()).toBeAttached();
+  // Where the point limit comes from, and why whole families are infeasible (also announced).
+  await expect(page.getByTestId('sweep-limit')).toContainText(
+    'At most 100,000 points a sweep: the page keeps',
+  );
+  await expect(page.getByTestId('sweep-why')).toContainText(
+    '1T1C vertical 4F²: every point fails the sense-amplifier pitch check.',
+  );
+  await expect(page.getByTestId('sweep-announcer')).toContainText('every point fails');
   await page.screenshot({ path: test.info().outputPath('explorer.png') });
 
   // Hover a point on the front: its figures show beside it.

@@ -68,6 +68,8 @@ export {
 export { refreshRowCycle } from './evaluation/totals';
 export {
   firingKinds,
+  checkLabel,
+  CHECK_LABELS,
   MAT_RULES,
   storedHighSeverity,
   type CheckedFigures,

@@ -1,4 +1,10 @@
-import { bankFigureEntry, type AxisFigure, type FindingKind, type PartitionFigures } from '../engine';
+import {
+  bankFigureEntry,
+  checkLabel,
+  type AxisFigure,
+  type FindingKind,
+  type PartitionFigures,
+} from '../engine';
 import { paretoFront } from './pareto';
 import type { SweepPoint } from './sweep';
 
@@ -10,33 +16,35 @@ export interface FeasibilityLimits {
   readonly maxDelay: number;
 }
 
-/** Why a point is infeasible; empty when it is feasible. */
-export function infeasibleBecause(figures: PartitionFigures, limits: FeasibilityLimits): string[] {
-  const reasons: string[] = [];
-  if (figures.errorKinds.length > 0)
-    reasons.push(`failing check: ${figures.errorKinds.map(checkName).join(', ')}`);
-  if (!(figures.senseMargin >= limits.minMargin)) reasons.push('margin below the minimum');
-  if (!(figures.wordlineDelay <= limits.maxDelay)) reasons.push('word line slower than the maximum');
+/** The chart limits a point can miss, in words (the limits live in the explorer's chart controls). */
+export const LIMIT_LABELS = {
+  minMargin: 'margin below the minimum',
+  maxDelay: 'word line slower than the maximum',
+} as const;
+
+/** One reason a planned point is infeasible: a failing check rule or a missed chart limit. */
+export type InfeasibleReason =
+  { readonly check: FindingKind } | { readonly limit: keyof typeof LIMIT_LABELS };
+
+/** Every reason a planned point is infeasible; empty when it is feasible. */
+export function infeasibleReasons(figures: PartitionFigures, limits: FeasibilityLimits): InfeasibleReason[] {
+  const reasons: InfeasibleReason[] = figures.errorKinds.map((check) => ({ check }));
+  if (!(figures.senseMargin >= limits.minMargin)) reasons.push({ limit: 'minMargin' });
+  if (!(figures.wordlineDelay <= limits.maxDelay)) reasons.push({ limit: 'maxDelay' });
   return reasons;
 }
 
-const CHECK_NAMES: Record<FindingKind, string> = {
-  unsensedBitlines: 'unsensed bit lines',
-  undrivenWordlines: 'undriven word lines',
-  overlap: 'overlap',
-  storedHighLimited: 'stored 1 limited',
-  senseMargin: 'sense margin',
-  senseAmpPitch: 'sense-amplifier pitch',
-  retention: 'retention',
-  openBitlineEdge: 'open-array edge',
-  noRowDecoder: 'no row decoder',
-  noColumnDecoder: 'no column decoder',
-  backToBackStrips: 'strips back to back',
-};
-
-export function checkName(kind: FindingKind): string {
-  return CHECK_NAMES[kind];
+/** Why a point is infeasible, in words; empty when it is feasible. */
+export function infeasibleBecause(figures: PartitionFigures, limits: FeasibilityLimits): string[] {
+  const reasons: string[] = [];
+  if (figures.errorKinds.length > 0)
+    reasons.push(`failing check: ${figures.errorKinds.map(checkLabel).join(', ')}`);
+  for (const r of infeasibleReasons(figures, limits)) if ('limit' in r) reasons.push(LIMIT_LABELS[r.limit]);
+  return reasons;
 }
+
+/** A check's name in words: the check rules' own label (engine/evaluation/checkRules.ts). */
+export const checkName = checkLabel;
 
 /** One plotted point: its place in the sweep and how it is drawn. */
 export interface PlottedPoint {

@@ -46,6 +46,14 @@ export interface SweepPoint {
 /** Most points one sweep may have; a sweep holds every point in memory. */
 export const MAX_SWEEP_POINTS = 100_000;
 
+/**
+ * Why MAX_SWEEP_POINTS exists, in words shown next to the point count (a design choice, common
+ * practice (no source), not a measured bound): the page keeps every point with all its figures and
+ * draws each one on the chart, and the background worker assesses them one after another.
+ */
+export const SWEEP_POINT_LIMIT_REASON =
+  'the page keeps every point with all its figures in memory and draws each on the chart, and the background worker assesses them one by one';
+
 /** Partitions of a sweep (every combination but the spares). */
 function partitionCount(request: SweepRequest): number {
   return (

@@ -23,6 +23,28 @@ export type CheckedFigures = Pick<
   | 'unpartneredBits'
 >;
 
+/**
+ * Each check's name in words, the one home every view reads (explorer point cards, the sweep's
+ * "why infeasible" summary): lower case, to sit inside a sentence.
+ */
+export const CHECK_LABELS: Readonly<Record<FindingKind, string>> = {
+  unsensedBitlines: 'unsensed bit lines',
+  undrivenWordlines: 'undriven word lines',
+  overlap: 'overlap',
+  storedHighLimited: 'stored 1 limited',
+  senseMargin: 'sense margin',
+  senseAmpPitch: 'sense-amplifier pitch',
+  retention: 'retention',
+  openBitlineEdge: 'open-array edge',
+  noRowDecoder: 'no row decoder',
+  noColumnDecoder: 'no column decoder',
+  backToBackStrips: 'strips back to back',
+};
+
+export function checkLabel(kind: FindingKind): string {
+  return CHECK_LABELS[kind];
+}
+
 /** Process and operating values the rules compare against. */
 export interface CheckLimits {
   readonly process: Pick<ProcessProfile, 'senseAmpWidth'>;

@@ -13,6 +13,7 @@ import { chartModel, type FeasibilityLimits } from '../../explore/chartData';
 import { bankFigureEntry, type AxisFigure } from '../../engine';
 import { pointBuildSpec, type SweepRequest } from '../../explore/sweep';
 import { sweepPointsCsv } from '../../explore/pointsCsv';
+import { infeasibleFamilySentences } from '../../explore/familyTally';
 import { formatQuantity } from '../../model/units';
 import { defaultSweepSettings } from '../../explore/sweepSettings';
 import { useAppStore } from '../../store/useAppStore';
@@ -86,6 +87,18 @@ export function ExplorerView() {
   );
   const frontSet = useMemo(() => new Set(model.front), [model]);
   const request = run.request;
+  // Tallied once the sweep has stopped, not at every progress step.
+  const whyInfeasible = useMemo(
+    () =>
+      run.status === 'running' || !run.request
+        ? []
+        : infeasibleFamilySentences(
+            run.points,
+            run.request.cells.map((c) => c.name),
+            limits,
+          ),
+    [run.status, run.points, run.request, limits],
+  );
   const hoveredPoint = hovered !== null ? run.points[model.plotted[hovered]?.point ?? -1] : undefined;
 
   const pick = (plottedIndex: number) => {
@@ -182,8 +195,15 @@ export function ExplorerView() {
           )}
         </div>
         <div className="sr-only" role="status" aria-live="polite" data-testid="sweep-announcer">
-          {sweepAnnouncement(run, model.counts.feasible, model.front.length)}
+          {sweepAnnouncement(run, model.counts.feasible, model.front.length, whyInfeasible)}
         </div>
+        {whyInfeasible.length > 0 && (
+          <ul className="sweep-why" data-testid="sweep-why" aria-label="Families with no feasible point">
+            {whyInfeasible.map((sentence) => (
+              <li key={sentence}>{sentence}</li>
+            ))}
+          </ul>
+        )}
         {run.points.length === 0 ? (
           <div className="chart-empty">
             <p>

@@ -1,6 +1,6 @@
 import type { StripSizes } from '../../designs/partitionPlan';
 import { formatBits } from '../../model/units';
-import { MAX_SWEEP_POINTS, sweepSize } from '../../explore/sweep';
+import { MAX_SWEEP_POINTS, SWEEP_POINT_LIMIT_REASON, sweepSize } from '../../explore/sweep';
 import {
   DEFAULT_SPARE_SWEEP,
   processChoices,
@@ -197,6 +197,9 @@ export function SweepControls({ design, settings, onChange }: Props) {
           </button>
         )}
       </div>
+      <p className="hint" data-testid="sweep-limit">
+        At most {MAX_SWEEP_POINTS.toLocaleString('en-US')} points a sweep: {SWEEP_POINT_LIMIT_REASON}.
+      </p>
     </section>
   );
 }

@@ -22,7 +22,12 @@ export function sweepStatusText(run: SweepRun): string {
  * The announcement for a screen reader: said when the sweep starts and when it ends, not at every
  * progress step (that would talk over everything else).
  */
-export function sweepAnnouncement(run: SweepRun, feasible: number, onFront: number): string {
+export function sweepAnnouncement(
+  run: SweepRun,
+  feasible: number,
+  onFront: number,
+  whyInfeasible: readonly string[] = [],
+): string {
   const n = (v: number) => v.toLocaleString('en-US');
   switch (run.status) {
     case 'idle':
@@ -30,7 +35,10 @@ export function sweepAnnouncement(run: SweepRun, feasible: number, onFront: numb
     case 'running':
       return 'Sweep started.';
     case 'done':
-      return `Sweep done: ${n(run.total)} points, ${n(feasible)} feasible, ${n(onFront)} on the Pareto front.`;
+      return [
+        `Sweep done: ${n(run.total)} points, ${n(feasible)} feasible, ${n(onFront)} on the Pareto front.`,
+        ...whyInfeasible,
+      ].join(' ');
     default:
       return sweepStatusText(run);
   }

@@ -1,0 +1,111 @@
+import { describe, expect, it } from 'vitest';
+import { CHECK_LABELS, type FindingKind } from '../../src/engine';
+import {
+  familyInfeasibleSentence,
+  familyTallies,
+  infeasibleFamilySentences,
+} from '../../src/explore/familyTally';
+import { runSweepRange, sweepSize, type SweepPoint } from '../../src/explore/sweep';
+import { defaultSweepSettings, sweepRequestFor } from '../../src/explore/sweepSettings';
+import { demoDesign } from '../../src/designs/demoDesign';
+
+const design = demoDesign();
+const request = sweepRequestFor(
+  {
+    ...defaultSweepSettings(design),
+    cellsPerBitline: { from: 64, to: 1024, step: 256 },
+    cellsPerWordline: { from: 128, to: 2048, step: 512 },
+  },
+  design,
+);
+const real = runSweepRange(request, 0, sweepSize(request));
+const limits = { minMargin: 0.02, maxDelay: 0.5e-9 };
+const found = real.find((p) => p.figures)?.figures;
+if (!found) throw new Error('expected a planned point');
+const template = found;
+
+/** A point of family `cellIndex` with the given failing checks and margin (V). */
+function point(cellIndex: number, errorKinds: FindingKind[], senseMargin = 0.1): SweepPoint {
+  return {
+    index: 0,
+    cellsPerBitline: 256,
+    cellsPerWordline: 512,
+    cellIndex,
+    processIndex: 0,
+    matRows: 1,
+    matColumns: 1,
+    spareRows: null,
+    spareColumns: null,
+    figures: { ...template, errorKinds, senseMargin, wordlineDelay: 1e-10 },
+    problem: null,
+  };
+}
+const unplanned = (cellIndex: number): SweepPoint => ({
+  ...point(cellIndex, []),
+  figures: null,
+  problem: 'too many mats',
+});
+
+function only<T>(value: T | undefined): T {
+  if (value === undefined) throw new Error('expected a tally');
+  return value;
+}
+
+describe('why whole families are infeasible', () => {
+  it('counts, per family, the points each failing check rule and chart limit rules out', () => {
+    const tallies = familyTallies(
+      [
+        point(0, ['senseAmpPitch']),
+        point(0, ['retention', 'senseAmpPitch']),
+        point(1, []),
+        point(1, [], 0.001),
+        unplanned(1),
+      ],
+      limits,
+    );
+    expect(tallies.map((t) => t.cellIndex)).toEqual([0, 1]);
+    const [a, b] = tallies;
+    expect(a?.points).toBe(2);
+    expect(a?.feasible).toBe(0);
+    expect(a?.checks.get('senseAmpPitch')).toBe(2);
+    expect(a?.checks.get('retention')).toBe(1);
+    expect(b?.points).toBe(3);
+    expect(b?.feasible).toBe(1);
+    expect(b?.unplanned).toBe(1);
+    expect(b?.limits.get('minMargin')).toBe(1);
+  });
+
+  it('names the family and the one rule every point fails, with the rule’s own label', () => {
+    const [t] = familyTallies([point(0, ['senseAmpPitch']), point(0, ['senseAmpPitch'])], limits);
+    expect(familyInfeasibleSentence('1T1C vertical 4F²', only(t))).toBe(
+      `1T1C vertical 4F²: every point fails the ${CHECK_LABELS.senseAmpPitch} check.`,
+    );
+  });
+
+  it('gives counts when the rules are mixed', () => {
+    const [t] = familyTallies(
+      [point(0, ['senseAmpPitch']), point(0, ['retention']), point(0, ['retention']), unplanned(0)],
+      limits,
+    );
+    expect(familyInfeasibleSentence('Gain cell', only(t))).toBe(
+      'Gain cell: no feasible point of 4 — 2 fail the retention check, 1 fails the sense-amplifier pitch check, 1 cannot be planned (too many mats).',
+    );
+  });
+
+  it('says nothing about a family with a feasible point', () => {
+    const [t] = familyTallies([point(0, ['senseAmpPitch']), point(0, [])], limits);
+    expect(familyInfeasibleSentence('Any', only(t))).toBeNull();
+  });
+
+  it('tallies a real sweep consistently with the points', () => {
+    const sentences = infeasibleFamilySentences(
+      real,
+      request.cells.map((c) => c.name),
+      limits,
+    );
+    const tallies = familyTallies(real, limits);
+    expect(tallies.reduce((s, t) => s + t.points, 0)).toBe(real.length);
+    expect(sentences.length).toBe(tallies.filter((t) => t.feasible === 0).length);
+    for (const s of sentences) expect(request.cells.some((c) => s.startsWith(`${c.name}:`))).toBe(true);
+  });
+});
