@@ -135,13 +135,20 @@ export {
   TOTAL_FIGURES,
   type TotalFigureKey,
 } from './figures/totalFigures';
-export type { BankFigureEntry, FigureContext, FigureKey, PartitionFigures } from './figures/bankFigure';
+export type {
+  BankFigureEntry,
+  FigureContext,
+  FigureKey,
+  FigureView,
+  PartitionFigures,
+} from './figures/bankFigure';
 export {
   AXIS_FIGURES,
   BANK_FIGURE_CATALOGUE,
   bankFigureEntry,
   explainFigure,
+  figuresOfferedIn,
+  pointCardFigures,
   TABLE_FIGURES,
-  type AxisFigure,
 } from './figures/bankFigures';
 export { figuresFromReport } from './figures/bankFromReport';

@@ -1,7 +1,7 @@
 import {
   bankFigureEntry,
   checkLabel,
-  type AxisFigure,
+  type FigureKey,
   type FindingKind,
   type PartitionFigures,
 } from '../engine';
@@ -75,8 +75,8 @@ export interface ChartModel {
  */
 export function chartModel(
   points: readonly SweepPoint[],
-  xAxis: AxisFigure,
-  yAxis: AxisFigure,
+  xAxis: FigureKey,
+  yAxis: FigureKey,
   limits: FeasibilityLimits,
 ): ChartModel {
   const plotted: PlottedPoint[] = [];
@@ -102,7 +102,7 @@ export function chartModel(
     });
   });
   const feasibleIndices = plotted.map((p, i) => (p.state === 'feasible' ? i : -1)).filter((i) => i >= 0);
-  const direction = (axis: AxisFigure) => (bankFigureEntry(axis).better === 'higher' ? 'max' : 'min');
+  const direction = (axis: FigureKey) => (bankFigureEntry(axis).better === 'higher' ? 'max' : 'min');
   const front = paretoFront(
     feasibleIndices.map((i) => plotted[i] ?? { x: Number.NaN, y: Number.NaN }),
     direction(xAxis),

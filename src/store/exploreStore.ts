@@ -1,5 +1,5 @@
 import { create } from 'zustand';
-import type { AxisFigure } from '../engine';
+import type { FigureKey } from '../engine';
 import type { SweepPoint, SweepRequest } from '../explore/sweep';
 import type { SweepCommand, SweepReport } from '../explore/sweepProtocol';
 import type { SweepSettings } from '../explore/sweepSettings';
@@ -51,8 +51,8 @@ export interface ExploreState {
   readonly view: MainView;
   /** Null until someone changes a setting: the defaults then follow the active design. */
   readonly settings: SweepSettings | null;
-  readonly xAxis: AxisFigure;
-  readonly yAxis: AxisFigure;
+  readonly xAxis: FigureKey;
+  readonly yAxis: FigureKey;
   readonly constraints: Constraints;
   readonly run: SweepRun;
   /** The variant last built from a point, to confirm what happened. */
@@ -60,7 +60,7 @@ export interface ExploreState {
 
   setView(view: MainView): void;
   setSettings(settings: SweepSettings): void;
-  setAxes(axes: { xAxis?: AxisFigure; yAxis?: AxisFigure }): void;
+  setAxes(axes: { xAxis?: FigureKey; yAxis?: FigureKey }): void;
   setConstraints(patch: Partial<Constraints>): void;
   startSweep(request: SweepRequest): void;
   cancelSweep(): void;

@@ -1,6 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import {
+  AXIS_FIGURES,
   BANK_FIGURE_CATALOGUE,
+  bankFigureEntry,
+  pointCardFigures,
+  TABLE_FIGURES,
   MAT_FIGURE_CATALOGUE,
   MAT_FIGURE_GROUPS,
   MAT_FIGURE_PANEL,
@@ -36,5 +40,28 @@ describe('the figure catalogue', () => {
       if (e.quantity === 'count') expect(e.exportKey, e.key).not.toMatch(suffix);
       else expect(e.exportKey, e.key).toMatch(suffix);
     }
+  });
+
+  it('offers a bank figure where its entry says, in catalogue order, and nowhere else', () => {
+    const order = BANK_FIGURE_CATALOGUE.map((e) => e.key);
+    const inOrder = (keys: readonly string[]) =>
+      [...keys].sort((a, b) => order.indexOf(a as never) - order.indexOf(b as never));
+    expect(AXIS_FIGURES).toEqual(inOrder(AXIS_FIGURES));
+    expect(TABLE_FIGURES).toEqual(inOrder(TABLE_FIGURES));
+    for (const e of BANK_FIGURE_CATALOGUE) {
+      expect(AXIS_FIGURES.includes(e.key), e.key).toBe(e.offeredIn.includes('chartAxis'));
+      expect(TABLE_FIGURES.includes(e.key), e.key).toBe(e.offeredIn.includes('variantsTable'));
+      expect(pointCardFigures(true).includes(e.key), e.key).toBe(e.offeredIn.includes('pointCard'));
+    }
+  });
+
+  it('charts only figures with a better direction (the Pareto front needs one)', () => {
+    for (const key of AXIS_FIGURES) expect(bankFigureEntry(key).better, key).not.toBe('neither');
+  });
+
+  it('lists the row timing on the point card, and the yield figures only when the sweep assessed yield', () => {
+    expect(pointCardFigures(false)).toEqual(expect.arrayContaining(['rowToColumnDelay', 'rowCycleTime']));
+    expect(pointCardFigures(false)).not.toContain('dieYield');
+    expect(pointCardFigures(true)).toEqual(expect.arrayContaining(['dieYield', 'spareRows', 'spareColumns']));
   });
 });

@@ -79,10 +79,26 @@ export interface FigureContext {
   readonly refreshWindow: number;
 }
 
-/** A comparison figure of a bank: how to show it, which way is better, and how it explains itself. */
+/**
+ * Where the app offers a comparison figure: an explorer chart axis, a row of the explorer's point card, a
+ * row of the variants table. The sweep's points CSV writes every figure of the catalogue.
+ */
+export type FigureView = 'chartAxis' | 'pointCard' | 'variantsTable';
+
+/** Offered on a chart axis, on the point card and in the variants table. */
+export const EVERY_VIEW: readonly FigureView[] = ['chartAxis', 'pointCard', 'variantsTable'];
+
+/** A comparison figure of a bank: how to show it, where, which way is better, and how it explains itself. */
 export interface BankFigureEntry<Key extends FigureKey = FigureKey> extends FigureEntry<Key> {
   /** Which way is better; 'neither' for sizes that only describe a partition (mats, bits, bank area). */
   readonly better: 'lower' | 'higher' | 'neither';
+  /** The views that list it, each in catalogue order; empty for figures only explanations and the CSV read. */
+  readonly offeredIn: readonly FigureView[];
+  /**
+   * A yield figure: a sweep has it only when it assessed yield (spares swept), so the point card lists it
+   * only then. The variants table always has it (the design's repair settings).
+   */
+  readonly needsYield?: true;
   readonly explain: (figures: PartitionFigures, context: FigureContext) => Working;
 }
 

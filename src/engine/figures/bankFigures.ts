@@ -3,9 +3,11 @@ import { input, SOURCES, type Explanation } from './explanation';
 import { FORMULAS } from './formulas';
 import {
   bankFigure,
+  EVERY_VIEW,
   type BankFigureEntry,
   type FigureContext,
   type FigureKey,
+  type FigureView,
   type PartitionFigures,
 } from './bankFigure';
 import { BANK_TIMING_FIGURES } from './bankTimingFigures';
@@ -17,6 +19,7 @@ function countedFigure<const Key extends FigureKey>(
   label: string,
   quantity: BankFigureEntry['quantity'],
   better: BankFigureEntry['better'],
+  offeredIn: readonly FigureView[],
   formula = `${label} (counted)`,
 ): BankFigureEntry<Key> {
   return bankFigure({
@@ -24,6 +27,7 @@ function countedFigure<const Key extends FigureKey>(
     label,
     quantity,
     better,
+    offeredIn,
     exportKey: null,
     explain: (f) => ({
       symbol: key,
@@ -40,15 +44,23 @@ function countedFigure<const Key extends FigureKey>(
  * reaches the same numbers in closed form as evaluate() does for a built bank, and a test keeps them equal.
  */
 export const BANK_FIGURE_CATALOGUE = [
-  countedFigure('matCount', 'Mats', 'count', 'neither'),
-  countedFigure('usableBits', 'Usable bits', 'count', 'neither'),
-  countedFigure('totalArea', 'Bank area', 'area', 'neither', 'A_total = width × height of the bank'),
-  countedFigure('cellArea', 'Cell area', 'area', 'neither'),
+  countedFigure('matCount', 'Mats', 'count', 'neither', ['variantsTable']),
+  countedFigure('usableBits', 'Usable bits', 'count', 'neither', ['pointCard', 'variantsTable']),
+  countedFigure(
+    'totalArea',
+    'Bank area',
+    'area',
+    'neither',
+    ['variantsTable'],
+    'A_total = width × height of the bank',
+  ),
+  countedFigure('cellArea', 'Cell area', 'area', 'neither', []),
   bankFigure({
     key: 'areaPerBit',
     label: 'Area per bit',
     quantity: 'area',
     better: 'lower',
+    offeredIn: EVERY_VIEW,
     exportKey: null,
     explain: (f) => ({
       symbol: 'A_bit',
@@ -66,6 +78,7 @@ export const BANK_FIGURE_CATALOGUE = [
     label: 'Area per bit in F²',
     quantity: 'ratio',
     better: 'lower',
+    offeredIn: EVERY_VIEW,
     exportKey: null,
     explain: (f, ctx) => ({
       symbol: 'A_bit/F²',
@@ -83,6 +96,7 @@ export const BANK_FIGURE_CATALOGUE = [
     label: 'Array efficiency',
     quantity: 'percent',
     better: 'higher',
+    offeredIn: EVERY_VIEW,
     exportKey: null,
     explain: (f) => ({
       symbol: 'η',
@@ -100,6 +114,7 @@ export const BANK_FIGURE_CATALOGUE = [
     label: 'Net sense margin',
     quantity: 'voltage',
     better: 'higher',
+    offeredIn: EVERY_VIEW,
     exportKey: null,
     explain: (f, ctx) => ({
       symbol: 'M',
@@ -113,13 +128,14 @@ export const BANK_FIGURE_CATALOGUE = [
       source: `${SOURCES.westeHarris}; ${SOURCES.pelgrom}`,
     }),
   }),
-  countedFigure('senseSignalAtRefresh', 'Signal at refresh', 'voltage', 'higher'),
-  countedFigure('requiredSignal', 'Offset and noise', 'voltage', 'lower'),
+  countedFigure('senseSignalAtRefresh', 'Signal at refresh', 'voltage', 'higher', []),
+  countedFigure('requiredSignal', 'Offset and noise', 'voltage', 'lower', []),
   bankFigure({
     key: 'wordlineDelay',
     label: 'Word-line delay',
     quantity: 'time',
     better: 'lower',
+    offeredIn: EVERY_VIEW,
     exportKey: null,
     explain: (f, ctx) => ({
       symbol: 't_wl',
@@ -133,13 +149,15 @@ export const BANK_FIGURE_CATALOGUE = [
       source: SOURCES.rabaey,
     }),
   }),
-  countedFigure('wordlineResistance', 'Word-line resistance', 'resistance', 'lower'),
-  countedFigure('wordlineCapacitance', 'Word-line capacitance', 'capacitance', 'lower'),
+  countedFigure('wordlineResistance', 'Word-line resistance', 'resistance', 'lower', []),
+  countedFigure('wordlineCapacitance', 'Word-line capacitance', 'capacitance', 'lower', []),
+  ...BANK_TIMING_FIGURES,
   bankFigure({
     key: 'activationEnergyPerBit',
     label: 'Activation energy per bit',
     quantity: 'energy',
     better: 'lower',
+    offeredIn: EVERY_VIEW,
     exportKey: null,
     explain: (f) => ({
       symbol: 'E_bit',
@@ -152,13 +170,14 @@ export const BANK_FIGURE_CATALOGUE = [
       source: `${SOURCES.common}; C·V² charging energy, ${SOURCES.rabaey}`,
     }),
   }),
-  countedFigure('activationEnergy', 'Energy per mat activation', 'energy', 'lower'),
-  countedFigure('cellsPerWordline', 'Cells per word line', 'count', 'neither'),
+  countedFigure('activationEnergy', 'Energy per mat activation', 'energy', 'lower', []),
+  countedFigure('cellsPerWordline', 'Cells per word line', 'count', 'neither', []),
   bankFigure({
     key: 'retentionTime',
     label: 'Shortest retention',
     quantity: 'time',
     better: 'higher',
+    offeredIn: EVERY_VIEW,
     exportKey: null,
     explain: (_f, ctx) => ({
       symbol: 't_ret',
@@ -168,13 +187,14 @@ export const BANK_FIGURE_CATALOGUE = [
       source: SOURCES.arrhenius,
     }),
   }),
-  countedFigure('refreshCycleTime', 'Refresh cycle tRFC', 'time', 'lower'),
-  countedFigure('refreshInterval', 'Refresh interval tREFI', 'time', 'higher'),
+  countedFigure('refreshCycleTime', 'Refresh cycle tRFC', 'time', 'lower', []),
+  countedFigure('refreshInterval', 'Refresh interval tREFI', 'time', 'higher', []),
   bankFigure({
     key: 'refreshBusyFraction',
     label: 'Refresh busy fraction',
     quantity: 'percent',
     better: 'lower',
+    offeredIn: EVERY_VIEW,
     exportKey: null,
     explain: (f) => ({
       symbol: 'tRFC/tREFI',
@@ -192,6 +212,7 @@ export const BANK_FIGURE_CATALOGUE = [
     label: 'Refresh power',
     quantity: 'power',
     better: 'lower',
+    offeredIn: ['chartAxis', 'variantsTable'],
     exportKey: null,
     explain: (f, ctx) => ({
       symbol: 'P_ref',
@@ -204,7 +225,6 @@ export const BANK_FIGURE_CATALOGUE = [
       source: SOURCES.common,
     }),
   }),
-  ...BANK_TIMING_FIGURES,
   ...BANK_YIELD_FIGURES,
 ] as const satisfies readonly BankFigureEntry[];
 
@@ -217,47 +237,23 @@ export function bankFigureEntry(key: FigureKey): BankFigureEntry {
   return entry;
 }
 
+/** The keys of the catalogue's figures that `view` lists, in catalogue order. */
+export function figuresOfferedIn(view: FigureView): readonly FigureKey[] {
+  return BANK_FIGURE_CATALOGUE.filter((e) => e.offeredIn.includes(view)).map((e) => e.key);
+}
+
 /** Figures the explorer can put on an axis, in menu order. */
-export const AXIS_FIGURES = [
-  'areaPerBit',
-  'senseMargin',
-  'wordlineDelay',
-  'rowToColumnDelay',
-  'rowCycleTime',
-  'activationEnergyPerBit',
-  'arrayEfficiency',
-  'refreshBusyFraction',
-  'areaPerBitInF2',
-  'retentionTime',
-  'refreshPower',
-  'dieYield',
-  'goodDiesPerWafer',
-  'areaPerBitWithRedundancy',
-] as const satisfies readonly FigureKey[];
-export type AxisFigure = (typeof AXIS_FIGURES)[number];
+export const AXIS_FIGURES = figuresOfferedIn('chartAxis');
 
 /** Figures the variants table compares, in row order. */
-export const TABLE_FIGURES = [
-  'areaPerBit',
-  'areaPerBitInF2',
-  'arrayEfficiency',
-  'totalArea',
-  'usableBits',
-  'matCount',
-  'senseMargin',
-  'wordlineDelay',
-  'rowToColumnDelay',
-  'rowCycleTime',
-  'activationEnergyPerBit',
-  'retentionTime',
-  'refreshBusyFraction',
-  'refreshPower',
-  'dieYield',
-  'repairProbability',
-  'goodDiesPerWafer',
-  'redundancyArea',
-  'areaPerBitWithRedundancy',
-] as const satisfies readonly FigureKey[];
+export const TABLE_FIGURES = figuresOfferedIn('variantsTable');
+
+/** Figures the explorer's point card lists, in order; those that need yield only when the sweep assessed it. */
+export function pointCardFigures(withYield: boolean): readonly FigureKey[] {
+  return BANK_FIGURE_CATALOGUE.filter(
+    (e) => e.offeredIn.includes('pointCard') && (withYield || !e.needsYield),
+  ).map((e) => e.key);
+}
 
 /** Formula, inputs and source of one comparison figure, for the variants table and the explorer's point card. */
 export function explainFigure(key: FigureKey, f: PartitionFigures, ctx: FigureContext): Explanation {

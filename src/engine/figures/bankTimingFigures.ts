@@ -1,5 +1,5 @@
 import { input, SOURCES } from './explanation';
-import { bankFigure } from './bankFigure';
+import { bankFigure, EVERY_VIEW } from './bankFigure';
 
 const CHAIN = `JEDEC JESD79-4 (tRCD, tRAS, tRP, tRC); the first-order chain: ${SOURCES.common}`;
 
@@ -16,6 +16,7 @@ const chainStep = <
     label,
     quantity: 'time',
     better: 'lower',
+    offeredIn: [],
     exportKey: null,
     explain: (f) => ({
       symbol,
@@ -39,6 +40,7 @@ export const BANK_TIMING_FIGURES = [
     label: 'Row to column delay tRCD',
     quantity: 'time',
     better: 'lower',
+    offeredIn: EVERY_VIEW,
     exportKey: null,
     explain: (f) => ({
       symbol: 'tRCD',
@@ -57,6 +59,7 @@ export const BANK_TIMING_FIGURES = [
     label: 'Row cycle tRC',
     quantity: 'time',
     better: 'lower',
+    offeredIn: EVERY_VIEW,
     exportKey: null,
     explain: (f) => ({
       symbol: 'tRC',

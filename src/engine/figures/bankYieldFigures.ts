@@ -1,5 +1,5 @@
 import { input, SOURCES } from './explanation';
-import { bankFigure } from './bankFigure';
+import { bankFigure, EVERY_VIEW } from './bankFigure';
 
 const SPARES = (f: { spareRows: number; spareColumns: number }) => [
   input('R', 'spare rows per domain', f.spareRows, 'count'),
@@ -15,6 +15,8 @@ const spareCount = <const Key extends 'spareRows' | 'spareColumns'>(key: Key, la
     label,
     quantity: 'count',
     better: 'neither',
+    offeredIn: ['pointCard'],
+    needsYield: true,
     exportKey: null,
     explain: (f) => ({
       symbol: key === 'spareRows' ? 'R' : 'C',
@@ -34,6 +36,8 @@ export const BANK_YIELD_FIGURES = [
     label: 'Die yield',
     quantity: 'percent',
     better: 'higher',
+    offeredIn: EVERY_VIEW,
+    needsYield: true,
     exportKey: null,
     explain: (f) => ({
       symbol: 'Y',
@@ -49,6 +53,8 @@ export const BANK_YIELD_FIGURES = [
     label: 'Repair probability',
     quantity: 'percent',
     better: 'higher',
+    offeredIn: ['pointCard', 'variantsTable'],
+    needsYield: true,
     exportKey: null,
     explain: (f) => ({
       symbol: 'P_repair',
@@ -64,6 +70,8 @@ export const BANK_YIELD_FIGURES = [
     label: 'Redundancy area',
     quantity: 'area',
     better: 'lower',
+    offeredIn: ['variantsTable'],
+    needsYield: true,
     exportKey: null,
     explain: (f) => ({
       symbol: 'A_red',
@@ -78,6 +86,8 @@ export const BANK_YIELD_FIGURES = [
     label: 'Area per bit with redundancy',
     quantity: 'area',
     better: 'lower',
+    offeredIn: EVERY_VIEW,
+    needsYield: true,
     exportKey: null,
     explain: (f) => ({
       symbol: 'A/bit',
@@ -96,6 +106,8 @@ export const BANK_YIELD_FIGURES = [
     label: 'Good dies per wafer',
     quantity: 'count',
     better: 'higher',
+    offeredIn: EVERY_VIEW,
+    needsYield: true,
     exportKey: null,
     explain: (f) => ({
       symbol: 'N_good',

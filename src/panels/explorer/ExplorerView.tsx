@@ -10,7 +10,7 @@ import {
 } from '../../charts/ScatterChart';
 import { createVariant } from '../../commands/createVariant';
 import { chartModel, type FeasibilityLimits } from '../../explore/chartData';
-import { bankFigureEntry, type AxisFigure } from '../../engine';
+import { bankFigureEntry, type FigureKey } from '../../engine';
 import { pointBuildSpec, type SweepRequest } from '../../explore/sweep';
 import { sweepPointsCsv } from '../../explore/pointsCsv';
 import { infeasibleFamilySentences } from '../../explore/familyTally';
@@ -27,7 +27,7 @@ import { BankControls, SweepControls } from './SweepControls';
 import { sweepAnnouncement, sweepStatusText } from './sweepStatusText';
 
 /** Infeasible stretches of the axes that carry a constrained figure. */
-function constraintBands(xAxis: AxisFigure, yAxis: AxisFigure, limits: FeasibilityLimits): ShadedBand[] {
+function constraintBands(xAxis: FigureKey, yAxis: FigureKey, limits: FeasibilityLimits): ShadedBand[] {
   const bands: ShadedBand[] = [];
   for (const [axis, figure] of [
     ['x', xAxis],

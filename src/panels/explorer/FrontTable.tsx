@@ -1,6 +1,6 @@
 import { shortProcessName } from '../../designs/buildPartition';
 import type { ChartModel } from '../../explore/chartData';
-import { bankFigureEntry, type AxisFigure } from '../../engine';
+import { bankFigureEntry, type FigureKey } from '../../engine';
 import type { SweepPoint, SweepRequest } from '../../explore/sweep';
 import { formatQuantity } from '../../model/units';
 import { markerPath } from '../../charts/ScatterChart';
@@ -10,8 +10,8 @@ interface FrontTableProps {
   readonly model: ChartModel;
   readonly points: readonly SweepPoint[];
   readonly request: SweepRequest;
-  readonly xAxis: AxisFigure;
-  readonly yAxis: AxisFigure;
+  readonly xAxis: FigureKey;
+  readonly yAxis: FigureKey;
   /** Index into the plotted points of the row in use, shown on the chart. */
   onFocusPoint(plottedIndex: number | null): void;
   onBuild(plottedIndex: number): void;

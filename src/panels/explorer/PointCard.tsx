@@ -1,34 +1,11 @@
 import { useState } from 'react';
 import { shortProcessName } from '../../designs/buildPartition';
 import { checkName, infeasibleBecause, type FeasibilityLimits } from '../../explore/chartData';
-import { bankFigureEntry, explainFigure, type FigureKey } from '../../engine';
+import { bankFigureEntry, explainFigure, pointCardFigures, type FigureKey } from '../../engine';
 import type { SweepPoint, SweepRequest } from '../../explore/sweep';
 import { CELL_KIND_LABEL } from '../../model/cell';
 import { formatQuantity } from '../../model/units';
 import { ExplanationCard } from '../FigureRow';
-
-/** Figures a point card lists, in order. */
-export const CARD_FIGURES: readonly FigureKey[] = [
-  'areaPerBit',
-  'areaPerBitInF2',
-  'senseMargin',
-  'wordlineDelay',
-  'activationEnergyPerBit',
-  'arrayEfficiency',
-  'refreshBusyFraction',
-  'retentionTime',
-  'usableBits',
-];
-
-/** Yield figures a card adds when the sweep assessed them (spares swept). */
-const YIELD_CARD_FIGURES: readonly FigureKey[] = [
-  'dieYield',
-  'repairProbability',
-  'goodDiesPerWafer',
-  'areaPerBitWithRedundancy',
-  'spareRows',
-  'spareColumns',
-];
 
 interface PointCardProps {
   readonly point: SweepPoint;
@@ -60,30 +37,28 @@ export function PointCard({ point, request, limits, onFront, explainable = false
       {f && (
         <table className="point-figures">
           <tbody>
-            {(Number.isFinite(f.dieYield) ? [...CARD_FIGURES, ...YIELD_CARD_FIGURES] : CARD_FIGURES).map(
-              (key) => (
-                <tr key={key}>
-                  <td>
-                    {explainable ? (
-                      <button
-                        type="button"
-                        className="link"
-                        title="Show formula, inputs and source"
-                        aria-expanded={open === key}
-                        onClick={() => setOpen(open === key ? null : key)}
-                      >
-                        {bankFigureEntry(key).label}
-                      </button>
-                    ) : (
-                      bankFigureEntry(key).label
-                    )}
-                  </td>
-                  <td className="num" data-testid={`${testId}-${key}`}>
-                    {formatQuantity(f[key], bankFigureEntry(key).quantity)}
-                  </td>
-                </tr>
-              ),
-            )}
+            {pointCardFigures(Number.isFinite(f.dieYield)).map((key) => (
+              <tr key={key}>
+                <td>
+                  {explainable ? (
+                    <button
+                      type="button"
+                      className="link"
+                      title="Show formula, inputs and source"
+                      aria-expanded={open === key}
+                      onClick={() => setOpen(open === key ? null : key)}
+                    >
+                      {bankFigureEntry(key).label}
+                    </button>
+                  ) : (
+                    bankFigureEntry(key).label
+                  )}
+                </td>
+                <td className="num" data-testid={`${testId}-${key}`}>
+                  {formatQuantity(f[key], bankFigureEntry(key).quantity)}
+                </td>
+              </tr>
+            ))}
           </tbody>
         </table>
       )}
