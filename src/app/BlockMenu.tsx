@@ -3,7 +3,13 @@ import { useEditorStore } from '../store/editorStore';
 import { useAppStore } from '../store/useAppStore';
 import { OWN_KEYS_ATTRIBUTE } from './a11y/keyOwnership';
 import { editorActions } from './actions';
-import { commandEnabled, editorCommand, keysText, type ActionId, type CommandState } from './editorCommands';
+import {
+  commandEnabled,
+  editorCommand,
+  keysText,
+  type ActionId,
+  type CommandState,
+} from '../commands/editorCommands';
 
 /** The commands the block menu offers, in order; each is the editor command of the same id. */
 const MENU_COMMANDS: readonly ActionId[] = [

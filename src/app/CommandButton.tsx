@@ -1,4 +1,4 @@
-import type { ActionId } from './editorCommands';
+import type { ActionId } from '../commands/editorCommands';
 import { useCommand } from './useCommand';
 
 interface CommandButtonProps {

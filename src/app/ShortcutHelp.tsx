@@ -1,6 +1,6 @@
 import { useEditorStore } from '../store/editorStore';
 import { ModalDialog } from './a11y/ModalDialog';
-import { SHORTCUTS } from './keymap';
+import { SHORTCUTS } from '../commands/keymap';
 
 const GROUPS = ['File', 'Tools', 'Edit', 'View'] as const;
 

@@ -1,5 +1,5 @@
 import { BLOCK_STYLE } from '../canvas/blockStyle';
-import type { Tool } from '../store/editorStore';
+import type { Tool } from '../commands/tools';
 
 /** Small drawings for the palette, in the block colours. */
 export function ToolIcon({ tool }: { readonly tool: Tool }) {

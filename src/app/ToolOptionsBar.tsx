@@ -3,7 +3,7 @@ import { useEditorStore, isPlacementTool } from '../store/editorStore';
 import { useAppStore } from '../store/useAppStore';
 import { QuantityField } from '../panels/QuantityField';
 import { CommandButton } from './CommandButton';
-import type { ActionId } from './editorCommands';
+import type { ActionId } from '../commands/editorCommands';
 
 /** Buttons for the editor commands on the selection, each with its key (editorCommands.ts). */
 const SELECTION_COMMANDS = [

@@ -1,5 +1,6 @@
-import { TOOLS, useEditorStore } from '../store/editorStore';
-import { commandTitle, editorCommand, keysText, toolKey } from './editorCommands';
+import { TOOLS, toolKey } from '../commands/tools';
+import { useEditorStore } from '../store/editorStore';
+import { commandTitle, editorCommand, keysText } from '../commands/editorCommands';
 import { ToolIcon } from './ToolIcon';
 
 /** The tool palette down the left of the canvas; each tool shows its number key. */

@@ -18,7 +18,8 @@ import { restoreDesign } from '../io/restore';
 import type { Design } from '../model/design';
 import type { AppStore } from '../store/appStore';
 import type { EditorStore } from '../store/editorStore';
-import { editorCommand, type ActionId } from './editorCommands';
+import type { ActionId } from '../commands/editorCommands';
+import { COMMAND_RUNS } from './commandRuns';
 
 /** Shift+arrow nudges this many pitches. */
 const BIG_NUDGE = 10;
@@ -141,9 +142,9 @@ export function createEditorActions(app: AppStore, editor: EditorStore, canvas: 
     escape,
   };
 
-  /** Runs an editor command (editorCommands.ts); `shift` makes nudges ten times larger. */
+  /** Runs an editor command (commands/editorCommands.ts, bound in commandRuns.ts); `shift` makes nudges ten times larger. */
   function perform(action: ActionId, shift = false): void {
-    editorCommand(action).run({ actions, app, editor }, shift);
+    COMMAND_RUNS[action]({ actions, app, editor }, shift);
   }
 
   return { ...actions, perform };

@@ -8,7 +8,7 @@ import {
   type ActionId,
   type CommandState,
   type EditorCommand,
-} from './editorCommands';
+} from '../commands/editorCommands';
 
 /** What the editor commands' enabled() rules read from the app state. */
 export function commandStateOf(s: AppState): CommandState {

@@ -4,9 +4,9 @@ import { useEditorStore } from '../store/editorStore';
 import { useAppStore } from '../store/useAppStore';
 import { keyOwnedByWidget } from './a11y/keyOwnership';
 import { editorActions } from './actions';
-import { commandEnabled, editorCommand } from './editorCommands';
+import { commandEnabled, editorCommand } from '../commands/editorCommands';
 import { commandStateOf } from './useCommand';
-import { actionForKey } from './keymap';
+import { actionForKey } from '../commands/keymap';
 
 /** True when focus is in a text field or list box, where keys (Ctrl+Z too) belong to the field. */
 function typingInField(target: EventTarget | null): boolean {

@@ -1,6 +1,6 @@
 import { blockAt } from '../geometry/placedIndex';
 import type { ResizeHandle } from '../geometry/resize';
-import type { Tool } from '../store/editorStore';
+import type { Tool } from '../commands/tools';
 import type { EditorContext } from './gestures/gesture';
 import { handleAt, HANDLE_REACH_PX, HIT_MARGIN_PX } from './gestures/selectPress';
 

@@ -5,7 +5,7 @@ export type CommandResult =
   { readonly ok: true; readonly design: Design } | { readonly ok: false; readonly error: string };
 
 /**
- * A document command: one file each, shared by the editor commands (keys, buttons: app/editorCommands.ts),
+ * A document command: one file each, shared by the editor commands (keys, buttons: editorCommands.ts),
  * gestures and panels. `run` is pure: it takes the document and arguments and returns a new document, so
  * undo and redo are just history steps. Its label names it in messages ("Rotate 90° was refused: …"); the
  * keys and buttons that run it are declared once, with the editor command that calls it.

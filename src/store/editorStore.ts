@@ -1,15 +1,13 @@
 import { create } from 'zustand';
 import { DEMO_MAT, DEMO_STRIPS } from '../designs/demoSizes';
-import { BLOCK_TYPES, type BitlineAxis } from '../model/block';
+import type { Tool } from '../commands/tools';
+import type { BitlineAxis } from '../model/block';
 
 /**
  * Session state of the floorplan editor: the active tool and its options, view toggles, open dialogs and
  * the clipboard. None of it is part of the document, so none of it is undone.
  */
 
-/** The tools of the palette, in palette order. */
-export const TOOLS = ['select', 'pan', ...BLOCK_TYPES] as const;
-export type Tool = (typeof TOOLS)[number];
 /** Tools that place a strip-like block. */
 export type PlacementTool = Exclude<Tool, 'select' | 'pan' | 'mat'>;
 

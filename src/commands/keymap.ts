@@ -1,7 +1,8 @@
 import { COMMANDS, keysText, type ActionId, type EditorCommand } from './editorCommands';
 import { chordMatches, type KeyInput } from './keyChord';
 
-export { toolKey, type ActionId } from './editorCommands';
+export type { ActionId } from './editorCommands';
+export { toolKey } from './tools';
 export type { KeyInput } from './keyChord';
 
 /** One row of the shortcut help. */

@@ -1,9 +1,10 @@
-import type { AppStore } from '../store/appStore';
-import { TOOLS, type EditorStore, type Tool } from '../store/editorStore';
-import { saveDesignFile } from './designFiles';
-import { openDesignFromDisk, startNewDocument } from './documentActions';
-import type { EditorActionsCore } from './editorActions';
+import { deleteBlocks } from './deleteBlocks';
+import { duplicateBlocks } from './duplicateBlocks';
 import { chordLabel, type KeyChord } from './keyChord';
+import { pasteBlocks } from './pasteBlocks';
+import { rotateBlocks } from './rotateBlocks';
+import { stepAndRepeat } from './stepAndRepeat';
+import { TOOL_DESCRIPTIONS, TOOLS, toolKey, type Tool } from './tools';
 
 /** What a command's enabled() reads. */
 export interface CommandState {
@@ -12,18 +13,12 @@ export interface CommandState {
   readonly canRedo: boolean;
 }
 
-/** What a command's run() works with. */
-export interface CommandRunContext {
-  readonly actions: EditorActionsCore;
-  readonly app: AppStore;
-  readonly editor: EditorStore;
-}
-
 /**
  * A command of the editor as people meet it: on a key, a button, in the shortcut help. Its label, keys
- * and when it is enabled are written here once; the key listener (useEditorShortcuts.ts), the keymap and
- * the shortcut help (keymap.ts), the toolbar and the selection buttons all read them. Changes to the
- * document go through a document command (src/commands/), so each run is one undo step.
+ * and when it is enabled are written here once; the keymap and the shortcut help (keymap.ts), the app's key
+ * listener, the toolbar, the tool palette and the block menu all read them. What it does is bound in the
+ * app (app/commandRuns.ts, one run per id), because running it needs the stores and the canvas; changes
+ * to the document go through a document command of this folder, so each run is one undo step.
  */
 export interface EditorCommand {
   readonly id: string;
@@ -42,30 +37,9 @@ export interface EditorCommand {
   readonly enabled?: (state: CommandState) => boolean;
   /** Also runs while a dialog (shortcut help, step and repeat) is open. */
   readonly inDialogs?: boolean;
-  /** Runs it; `shift` is whether Shift was held (a nudge goes ten pitches). */
-  readonly run: (ctx: CommandRunContext, shift: boolean) => void;
 }
-
-/** Zoom step of the + and − keys. */
-const KEY_ZOOM = 1.25;
 
 const hasSelection = (s: CommandState) => s.selectionCount > 0;
-
-const TOOL_DESCRIPTIONS: Record<Tool, string> = {
-  select: 'Select, move and resize',
-  pan: 'Pan the view',
-  mat: 'Draw a mat (drag: cell counts in 64s; Shift: powers of two; Alt: any count)',
-  senseAmpStrip: 'Place a sense-amplifier strip (fits a bit-line edge)',
-  wordlineDriverStrip: 'Place a sub-word-line driver strip (fits a word-line edge)',
-  rowDecoder: 'Place a row decoder (fits the left or right side of a stack of mats and strips)',
-  columnDecoder: 'Place a column decoder (fits the top or bottom of a stack of mats and strips)',
-  spacer: 'Place a spacer',
-};
-
-/** Number key of each tool: its place in the palette. */
-export function toolKey(tool: Tool): string {
-  return String(TOOLS.indexOf(tool) + 1);
-}
 
 const toolCommands = TOOLS.map((tool): EditorCommand & { readonly id: `tool.${Tool}` } => ({
   id: `tool.${tool}`,
@@ -73,14 +47,11 @@ const toolCommands = TOOLS.map((tool): EditorCommand & { readonly id: `tool.${To
   description: TOOL_DESCRIPTIONS[tool],
   group: 'Tools',
   keys: [{ key: toolKey(tool) }],
-  run: ({ editor }) => editor.getState().setTool(tool),
 }));
 
 const nudge = <const Id extends string>(
   id: Id,
   key: string,
-  dx: number,
-  dy: number,
   help: EditorCommand['help'],
 ): EditorCommand & { readonly id: Id } => ({
   id,
@@ -90,7 +61,6 @@ const nudge = <const Id extends string>(
   keys: [{ key }],
   help,
   enabled: hasSelection,
-  run: ({ actions }, shift) => actions.nudge(dx, dy, shift),
 });
 
 /** Every editor command, in the order of the shortcut help. */
@@ -103,7 +73,6 @@ export const EDITOR_COMMANDS = [
     // Browsers keep Ctrl+N for a new window, so New is a button only.
     keys: [],
     help: false,
-    run: () => startNewDocument(),
   },
   {
     id: 'file.open',
@@ -111,7 +80,6 @@ export const EDITOR_COMMANDS = [
     description: 'Open a design file (or drop one on the page)',
     group: 'File',
     keys: [{ key: 'o', mod: true, shift: false }],
-    run: () => void openDesignFromDisk(),
   },
   {
     id: 'file.save',
@@ -119,7 +87,6 @@ export const EDITOR_COMMANDS = [
     description: 'Save the design to a file (back to the file it came from where the browser allows)',
     group: 'File',
     keys: [{ key: 's', mod: true, shift: false }],
-    run: () => void saveDesignFile(),
   },
   ...toolCommands,
   {
@@ -130,7 +97,6 @@ export const EDITOR_COMMANDS = [
     // Space is held during a drag; the canvas reads it, so this command has no chord of its own.
     keys: [],
     help: { keys: 'Space + drag' },
-    run: () => undefined,
   },
   {
     id: 'escape',
@@ -139,7 +105,6 @@ export const EDITOR_COMMANDS = [
     group: 'Tools',
     keys: [{ key: 'Escape' }],
     inDialogs: true,
-    run: ({ actions }) => actions.escape(),
   },
   {
     id: 'edit.undo',
@@ -149,7 +114,6 @@ export const EDITOR_COMMANDS = [
     keys: [{ key: 'z', mod: true, shift: false }],
     enabled: (s) => s.canUndo,
     inDialogs: true,
-    run: ({ app }) => app.getState().undo(),
   },
   {
     id: 'edit.redo',
@@ -162,25 +126,22 @@ export const EDITOR_COMMANDS = [
     ],
     enabled: (s) => s.canRedo,
     inDialogs: true,
-    run: ({ app }) => app.getState().redo(),
   },
   {
     id: 'edit.delete',
-    label: 'Delete',
+    label: deleteBlocks.label,
     description: 'Delete the selection',
     group: 'Edit',
     keys: [{ key: 'Delete' }, { key: 'Backspace' }],
     enabled: hasSelection,
-    run: ({ actions }) => void actions.deleteSelection(),
   },
   {
     id: 'edit.duplicate',
-    label: 'Duplicate',
+    label: duplicateBlocks.label,
     description: 'Duplicate, abutting on the right',
     group: 'Edit',
     keys: [{ key: 'd', mod: true }],
     enabled: hasSelection,
-    run: ({ actions }) => actions.duplicate(),
   },
   {
     id: 'edit.copy',
@@ -189,7 +150,6 @@ export const EDITOR_COMMANDS = [
     group: 'Edit',
     keys: [{ key: 'c', mod: true }],
     enabled: hasSelection,
-    run: ({ actions }) => void actions.copy(),
   },
   {
     id: 'edit.cut',
@@ -198,17 +158,13 @@ export const EDITOR_COMMANDS = [
     group: 'Edit',
     keys: [{ key: 'x', mod: true }],
     enabled: hasSelection,
-    run: ({ actions }) => {
-      if (actions.copy()) actions.deleteSelection();
-    },
   },
   {
     id: 'edit.paste',
-    label: 'Paste',
+    label: pasteBlocks.label,
     description: 'Paste at the pointer',
     group: 'Edit',
     keys: [{ key: 'v', mod: true }],
-    run: ({ actions }) => void actions.paste(),
   },
   {
     id: 'edit.selectAll',
@@ -216,16 +172,14 @@ export const EDITOR_COMMANDS = [
     description: 'Select everything',
     group: 'Edit',
     keys: [{ key: 'a', mod: true }],
-    run: ({ actions }) => actions.selectAll(),
   },
   {
     id: 'edit.rotate',
-    label: 'Rotate 90°',
+    label: rotateBlocks.label,
     description: 'Rotate 90° clockwise',
     group: 'Edit',
     keys: [{ key: 'r' }],
     enabled: hasSelection,
-    run: ({ actions }) => void actions.rotate(),
   },
   {
     id: 'edit.mirrorLeftRight',
@@ -234,7 +188,6 @@ export const EDITOR_COMMANDS = [
     group: 'Edit',
     keys: [{ key: 'm', shift: false }],
     enabled: hasSelection,
-    run: ({ actions }) => void actions.mirror('leftRight'),
   },
   {
     id: 'edit.mirrorTopBottom',
@@ -243,23 +196,19 @@ export const EDITOR_COMMANDS = [
     group: 'Edit',
     keys: [{ key: 'm', shift: true }],
     enabled: hasSelection,
-    run: ({ actions }) => void actions.mirror('topBottom'),
   },
   {
     id: 'edit.stepAndRepeat',
-    label: 'Step and repeat…',
+    label: `${stepAndRepeat.label}…`,
     description: 'Step and repeat (n × m at a pitch)…',
     group: 'Edit',
     keys: [{ key: 't' }],
     enabled: hasSelection,
-    run: ({ app, editor }) => {
-      if (app.getState().selectedIds.length > 0) editor.getState().setStepRepeatOpen(true);
-    },
   },
-  nudge('edit.nudgeLeft', 'ArrowLeft', -1, 0, { keys: '← → ↑ ↓' }),
-  nudge('edit.nudgeRight', 'ArrowRight', 1, 0, false),
-  nudge('edit.nudgeUp', 'ArrowUp', 0, -1, false),
-  nudge('edit.nudgeDown', 'ArrowDown', 0, 1, false),
+  nudge('edit.nudgeLeft', 'ArrowLeft', { keys: '← → ↑ ↓' }),
+  nudge('edit.nudgeRight', 'ArrowRight', false),
+  nudge('edit.nudgeUp', 'ArrowUp', false),
+  nudge('edit.nudgeDown', 'ArrowDown', false),
   {
     id: 'edit.blockMenu',
     label: 'Block menu',
@@ -267,7 +216,6 @@ export const EDITOR_COMMANDS = [
     group: 'Edit',
     keys: [{ key: 'ContextMenu' }, { key: 'F10', shift: true }],
     enabled: hasSelection,
-    run: ({ editor }) => editor.getState().setContextMenu({ at: null }),
   },
   {
     id: 'view.fitAll',
@@ -276,7 +224,6 @@ export const EDITOR_COMMANDS = [
     group: 'View',
     keys: [{ key: 'f' }],
     inDialogs: true,
-    run: ({ app }) => app.getState().requestFit(),
   },
   {
     id: 'view.frameSelection',
@@ -284,7 +231,6 @@ export const EDITOR_COMMANDS = [
     description: 'Zoom to the selection',
     group: 'View',
     keys: [{ key: 'z' }],
-    run: ({ actions }) => actions.frameSelection(),
   },
   {
     id: 'view.zoomIn',
@@ -293,7 +239,6 @@ export const EDITOR_COMMANDS = [
     group: 'View',
     keys: [{ key: '+' }, { key: '=' }],
     help: { keys: '+ / −' },
-    run: ({ actions }) => actions.zoom(KEY_ZOOM),
   },
   {
     id: 'view.zoomOut',
@@ -302,7 +247,6 @@ export const EDITOR_COMMANDS = [
     group: 'View',
     keys: [{ key: '-' }, { key: '_' }],
     help: false,
-    run: ({ actions }) => actions.zoom(1 / KEY_ZOOM),
   },
   {
     id: 'view.grid',
@@ -310,7 +254,6 @@ export const EDITOR_COMMANDS = [
     description: 'Show or hide the grid',
     group: 'View',
     keys: [{ key: 'g' }],
-    run: ({ editor }) => editor.getState().toggleGrid(),
   },
   {
     id: 'help',
@@ -319,7 +262,6 @@ export const EDITOR_COMMANDS = [
     group: 'View',
     keys: [{ key: '?' }],
     inDialogs: true,
-    run: ({ editor }) => editor.getState().setHelpOpen(!editor.getState().helpOpen),
   },
 ] as const satisfies readonly EditorCommand[];
 

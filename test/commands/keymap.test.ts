@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { actionForKey, SHORTCUTS, toolKey, type ActionId } from '../../src/app/keymap';
-import { commandTitle, COMMANDS, editorCommand } from '../../src/app/editorCommands';
-import { chordLabel } from '../../src/app/keyChord';
-import { TOOLS } from '../../src/store/editorStore';
+import { actionForKey, SHORTCUTS, toolKey, type ActionId } from '../../src/commands/keymap';
+import { commandTitle, COMMANDS, editorCommand } from '../../src/commands/editorCommands';
+import { chordLabel } from '../../src/commands/keyChord';
+import { TOOLS } from '../../src/commands/tools';
 
 const key = (
   k: string,
