@@ -88,6 +88,14 @@ export interface TotalsSummary {
   readonly worstSenseSignalMatId: string | null;
   readonly worstSenseMarginMat: string | null;
   readonly worstSenseMarginMatId: string | null;
+  readonly worstWordlineDelayMat: string | null;
+  readonly worstWordlineDelayMatId: string | null;
+  readonly worstRowToColumnDelayMat: string | null;
+  readonly worstRowToColumnDelayMatId: string | null;
+  readonly worstRowCycleTimeMat: string | null;
+  readonly worstRowCycleTimeMatId: string | null;
+  readonly shortestWeakestRetentionMat: string | null;
+  readonly shortestWeakestRetentionMatId: string | null;
   readonly storedHighLimitedByWordline: boolean;
   readonly errors: number;
   readonly warnings: number;
@@ -172,6 +180,14 @@ function totalsSummary(design: Design, report: Report): TotalsSummary {
     worstSenseSignalMatId: t.worstSenseSignalMatId,
     worstSenseMarginMat: t.worstSenseMarginMatName,
     worstSenseMarginMatId: t.worstSenseMarginMatId,
+    worstWordlineDelayMat: t.worstWordlineDelayMatName,
+    worstWordlineDelayMatId: t.worstWordlineDelayMatId,
+    worstRowToColumnDelayMat: t.worstRowToColumnDelayMatName,
+    worstRowToColumnDelayMatId: t.worstRowToColumnDelayMatId,
+    worstRowCycleTimeMat: t.worstRowCycleTimeMatName,
+    worstRowCycleTimeMatId: t.worstRowCycleTimeMatId,
+    shortestWeakestRetentionMat: t.shortestWeakestRetentionMatName,
+    shortestWeakestRetentionMatId: t.shortestWeakestRetentionMatId,
     storedHighLimitedByWordline: report.storedHigh.limitedByWordline,
     ...countFindings(report.findings),
   };

@@ -217,18 +217,32 @@ export interface Totals {
   readonly shortestRetention: number;
   /** Shortest weakest-cell retention time of any refreshed mat (s), or NaN without one. */
   readonly shortestWeakestRetention: number;
+  /** The mat with the shortest weakest-cell retention (first of equals), or null without one. */
+  readonly shortestWeakestRetentionMatId: string | null;
+  readonly shortestWeakestRetentionMatName: string | null;
   /** Longest 50 % word-line delay (s), or NaN without mats. */
   readonly worstWordlineDelay: number;
+  /** The mat with the slowest word line (first of equals), or null without mats. */
+  readonly worstWordlineDelayMatId: string | null;
+  readonly worstWordlineDelayMatName: string | null;
   /** Longest word-line delay to the access turn-on (s), or NaN without mats. */
   readonly worstWordlineTurnOn: number;
   /** Longest word-line delay to 90 % (s), or NaN without mats. */
   readonly worstWordlineNinety: number;
   /** Slowest sensed mat's tRCD (s), or NaN without one. */
   readonly worstRowToColumnDelay: number;
+  /** The mat with that tRCD (first of equals), or null without a sensed mat. */
+  readonly worstRowToColumnDelayMatId: string | null;
+  readonly worstRowToColumnDelayMatName: string | null;
   /** Slowest sensed mat's tRC (s), or NaN without one: the row cycle refresh uses unless overridden. */
   readonly worstRowCycleTime: number;
-  /** Standby power of static (6T) cells (W). */
+  /** The mat with that tRC (first of equals), or null without a sensed mat. */
+  readonly worstRowCycleTimeMatId: string | null;
+  readonly worstRowCycleTimeMatName: string | null;
+  /** Standby power of static (6T) cells (W): Σ bits·I_hold·VDD. */
   readonly standbyPower: number;
+  /** Bits whose cells draw a hold current (static cells), the bits standbyPower is summed over. */
+  readonly heldBits: number;
   /** Overlap area between mats, counted once in the cell area (m²). */
   readonly matOverlapArea: number;
   readonly refresh: RefreshFigures;

@@ -121,21 +121,40 @@ interface Extremes {
   shortestRetention: number;
   shortestWeakestRetention: number;
   worstWordlineDelay: number;
+  worstWordlineDelayMatId: string | null;
+  worstWordlineDelayMatName: string | null;
   worstWordlineTurnOn: number;
   worstWordlineNinety: number;
   worstRowToColumnDelay: number;
+  worstRowToColumnDelayMatId: string | null;
+  worstRowToColumnDelayMatName: string | null;
   worstRowCycleTime: number;
+  worstRowCycleTimeMatId: string | null;
+  worstRowCycleTimeMatName: string | null;
+  shortestWeakestRetentionMatId: string | null;
+  shortestWeakestRetentionMatName: string | null;
   standbyPower: number;
+  heldBits: number;
 }
 
-/** min that ignores NaN (a figure that does not exist for that mat). */
+/** Whether `value` is a new minimum, NaN ignored (a figure that does not exist for that mat). */
+function isLower(current: number, value: number): boolean {
+  return value < current || (Number.isNaN(current) && !Number.isNaN(value));
+}
+
+/** Whether `value` is a new maximum, NaN ignored. */
+function isHigher(current: number, value: number): boolean {
+  return value > current || (Number.isNaN(current) && !Number.isNaN(value));
+}
+
+/** min that ignores NaN. */
 function lower(current: number, value: number): number {
-  return value < current || (Number.isNaN(current) && !Number.isNaN(value)) ? value : current;
+  return isLower(current, value) ? value : current;
 }
 
 /** max that ignores NaN. */
 function higher(current: number, value: number): number {
-  return value > current || (Number.isNaN(current) && !Number.isNaN(value)) ? value : current;
+  return isHigher(current, value) ? value : current;
 }
 
 /**
@@ -154,20 +173,34 @@ function extremes(mats: MatTable): Extremes {
     shortestRetention: nan,
     shortestWeakestRetention: nan,
     worstWordlineDelay: nan,
+    worstWordlineDelayMatId: null,
+    worstWordlineDelayMatName: null,
     worstWordlineTurnOn: nan,
     worstWordlineNinety: nan,
     worstRowToColumnDelay: nan,
+    worstRowToColumnDelayMatId: null,
+    worstRowToColumnDelayMatName: null,
     worstRowCycleTime: nan,
+    worstRowCycleTimeMatId: null,
+    worstRowCycleTimeMatName: null,
+    shortestWeakestRetentionMatId: null,
+    shortestWeakestRetentionMatName: null,
     standbyPower: 0,
+    heldBits: 0,
   };
   // A sensed, refreshed mat with no margin to lose has no retention: then the shortest does not exist.
   let noMarginToLose = false;
   let signalMat = -1;
   let marginMat = -1;
+  let rcdMat = -1;
+  let rcMat = -1;
+  let weakestMat = -1;
+  let wordlineMat = -1;
   let previous: MatFigures | null = null;
   for (let k = 0; k < mats.count; k++) {
     const f = figuresAt(mats, k);
     e.standbyPower += f.standbyPower;
+    if (f.standbyPower > 0) e.heldBits += f.bits;
     // Mats of one kind share their figures: the extremes of the others need no second look.
     if (f === previous) continue;
     previous = f;
@@ -184,16 +217,45 @@ function extremes(mats: MatTable): Extremes {
     }
     if (f.usableBits > 0 && f.needsRefresh && !(f.allowedDroop > 0)) noMarginToLose = true;
     e.shortestRetention = lower(e.shortestRetention, f.retentionTime);
-    e.shortestWeakestRetention = lower(e.shortestWeakestRetention, f.weakestRetentionTime);
-    e.worstWordlineDelay = higher(e.worstWordlineDelay, f.wordlineDelay);
+    if (isLower(e.shortestWeakestRetention, f.weakestRetentionTime)) {
+      e.shortestWeakestRetention = f.weakestRetentionTime;
+      weakestMat = k;
+    }
+    if (isHigher(e.worstWordlineDelay, f.wordlineDelay)) {
+      e.worstWordlineDelay = f.wordlineDelay;
+      wordlineMat = k;
+    }
     e.worstWordlineTurnOn = higher(e.worstWordlineTurnOn, f.wordlineTiming.toTurnOn);
     e.worstWordlineNinety = higher(e.worstWordlineNinety, f.wordlineTiming.toNinetyPercent);
-    e.worstRowToColumnDelay = higher(e.worstRowToColumnDelay, f.timing.rcd);
-    e.worstRowCycleTime = higher(e.worstRowCycleTime, f.timing.rc);
+    if (isHigher(e.worstRowToColumnDelay, f.timing.rcd)) {
+      e.worstRowToColumnDelay = f.timing.rcd;
+      rcdMat = k;
+    }
+    if (isHigher(e.worstRowCycleTime, f.timing.rc)) {
+      e.worstRowCycleTime = f.timing.rc;
+      rcMat = k;
+    }
   }
   if (noMarginToLose) {
     e.shortestRetention = nan;
     e.shortestWeakestRetention = nan;
+    weakestMat = -1;
+  }
+  if (wordlineMat >= 0) {
+    e.worstWordlineDelayMatId = matIdAt(mats, wordlineMat);
+    e.worstWordlineDelayMatName = matLabelAt(mats, wordlineMat);
+  }
+  if (rcdMat >= 0) {
+    e.worstRowToColumnDelayMatId = matIdAt(mats, rcdMat);
+    e.worstRowToColumnDelayMatName = matLabelAt(mats, rcdMat);
+  }
+  if (rcMat >= 0) {
+    e.worstRowCycleTimeMatId = matIdAt(mats, rcMat);
+    e.worstRowCycleTimeMatName = matLabelAt(mats, rcMat);
+  }
+  if (weakestMat >= 0) {
+    e.shortestWeakestRetentionMatId = matIdAt(mats, weakestMat);
+    e.shortestWeakestRetentionMatName = matLabelAt(mats, weakestMat);
   }
   if (signalMat >= 0) {
     e.worstSenseSignalMatId = matIdAt(mats, signalMat);

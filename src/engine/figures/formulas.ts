@@ -3,7 +3,8 @@
  * figure), written once so that the three explanations cannot drift apart.
  */
 export const FORMULAS = {
-  wordlineDelay: 't_wl = 0.69·R_drv·C_wl + 0.38·R_wl·C_wl',
+  wordlineDelay:
+    'v_far(t_wl) = V_high/2: exact step response of a distributed line (R_wl, C_wl) driven through R_drv (0.38·R_wl·C_wl alone, 0.69·R_drv·C_wl lumped)',
   retention: 't_ret = Cs · ΔV_allowed / I(T)',
   leakageAtTemperature: 'I(T) = I_ref·exp(−Ea/k·(1/T − 1/T_ref))',
   energyPerBit: 'E_bit = E_act / M',

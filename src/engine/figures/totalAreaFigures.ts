@@ -175,20 +175,4 @@ export const TOTAL_AREA_FIGURES = [
       source: SOURCES.common,
     }),
   }),
-  totalFigure({
-    key: 'senseAmpCount',
-    label: 'Sense amplifiers',
-    quantity: 'count',
-    group: null,
-    exportKey: 'senseAmps',
-    value: (r) => r.totals.senseAmpCount,
-  }),
-  totalFigure({
-    key: 'offsetSigmaMultiplier',
-    label: 'Offset σ multiplier k',
-    quantity: 'ratio',
-    group: null,
-    exportKey: 'offsetSigmaMultiplier_ratio',
-    value: (r) => r.totals.offsetSigmaMultiplier,
-  }),
 ] as const;

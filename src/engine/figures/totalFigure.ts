@@ -3,7 +3,7 @@ import type { Report } from '../evaluation/report';
 import type { FigureEntry, Working } from './figure';
 
 /** Panel groups of the whole-design figures, in display order. */
-export const TOTAL_FIGURE_GROUPS = ['Area', 'Worst case', 'Refresh', 'Yield'] as const;
+export const TOTAL_FIGURE_GROUPS = ['Area', 'Worst case', 'Die scale', 'Refresh', 'Yield'] as const;
 export type TotalFigureGroup = (typeof TOTAL_FIGURE_GROUPS)[number];
 
 interface TotalFigureBase<Key extends string> extends FigureEntry<Key> {

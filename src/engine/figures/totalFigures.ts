@@ -1,11 +1,13 @@
 import { totalMissingReason } from './missingReasons';
 import type { Design } from '../../model/design';
 import { formatQuantity } from '../../model/units';
+import { findMatReport } from '../evaluation/evaluate';
 import type { Report } from '../evaluation/report';
 import { explanationOf } from './figure';
 import { input, SOURCES, type Explanation } from './explanation';
 import { FORMULAS } from './formulas';
 import { TOTAL_AREA_FIGURES } from './totalAreaFigures';
+import { TOTAL_DIE_SCALE_FIGURES } from './totalDieScaleFigures';
 import {
   totalFigure,
   TOTAL_FIGURE_GROUPS,
@@ -13,9 +15,14 @@ import {
   type TotalFigureGroup,
 } from './totalFigure';
 import { TOTAL_REFRESH_FIGURES } from './totalRefreshFigures';
+import { TOTAL_TIMING_FIGURES } from './totalTimingFigures';
 import { TOTAL_YIELD_FIGURES } from './totalYieldFigures';
 
-const worstOf = (name: string | null) => `Smallest over all mats (${name ?? '—'}).`;
+const worstOf = (name: string | null, extreme = 'Smallest') => `${extreme} over all mats (${name ?? '—'}).`;
+
+/** The figures of the mat a worst case comes from, or undefined when there is none. */
+const worstMat = (r: Report, matId: string | null) =>
+  matId === null ? undefined : findMatReport(r, matId)?.figures;
 
 /** A worst-case figure with the mat it comes from, or a dash when there are no mats (CLI text). */
 const worstText = (value: string, matName: string | null) =>
@@ -28,6 +35,7 @@ const worstText = (value: string, matName: string | null) =>
  */
 export const TOTAL_FIGURE_CATALOGUE = [
   ...TOTAL_AREA_FIGURES,
+  ...TOTAL_DIE_SCALE_FIGURES,
   totalFigure({
     key: 'storedHigh',
     label: 'Stored-1 level',
@@ -79,8 +87,16 @@ export const TOTAL_FIGURE_CATALOGUE = [
     value: (r) => r.totals.worstSenseSignal,
     explain: (r) => ({
       symbol: 'ΔV_min',
-      formula: 'ΔV_min = min over mats of the sense signal',
-      inputs: [input('mats', 'mats', r.totals.matCount, 'count')],
+      formula: 'ΔV_min = min over sensed mats of the developed sense signal',
+      inputs: [
+        input(
+          'ΔV',
+          'developed signal (that mat)',
+          worstMat(r, r.totals.worstSenseSignalMatId)?.senseSignal ?? Number.NaN,
+          'voltage',
+        ),
+        input('mats', 'mats compared', r.totals.matCount, 'count'),
+      ],
       method: worstOf(r.totals.worstSenseSignalMatName),
       source: SOURCES.westeHarris,
     }),
@@ -97,36 +113,57 @@ export const TOTAL_FIGURE_CATALOGUE = [
         worstText(formatQuantity(r.totals.worstSenseMargin, 'voltage'), r.totals.worstSenseMarginMatName),
     },
     value: (r) => r.totals.worstSenseMargin,
-    explain: (r, design) => ({
-      symbol: 'M_min',
-      formula: 'M_min = min over mats of (ΔV after a refresh window − V_req)',
-      inputs: [input('target', 'minimum margin target', design.operating.minimumSenseMargin, 'voltage')],
-      method: worstOf(r.totals.worstSenseMarginMatName),
-      source: SOURCES.common,
-    }),
+    explain: (r, design) => {
+      const f = worstMat(r, r.totals.worstSenseMarginMatId);
+      return {
+        symbol: 'M_min',
+        formula: 'M_min = min over sensed mats of (ΔV′ − V_req),  ΔV′ = signal after a refresh window',
+        inputs: [
+          input(
+            'ΔV′',
+            'signal after the window (that mat)',
+            f?.senseSignalAfterRefresh ?? Number.NaN,
+            'voltage',
+          ),
+          input('V_req', 'offset and noise stacked (that mat)', f?.requiredSignal ?? Number.NaN, 'voltage'),
+          input('target', 'minimum margin target', design.operating.minimumSenseMargin, 'voltage'),
+        ],
+        method: worstOf(r.totals.worstSenseMarginMatName),
+        source: SOURCES.common,
+      };
+    },
   }),
   totalFigure({
     key: 'shortestRetention',
-    label: 'Shortest retention',
+    label: 'Shortest retention, typical cell',
     quantity: 'time',
     group: 'Worst case',
     exportKey: 'shortestRetention_s',
     cli: {
-      label: 'shortest retention',
+      label: 'shortest retention, typical cell',
       text: (r) =>
         r.totals.matCount === 0 ? '— (no mats)' : formatQuantity(r.totals.shortestRetention, 'time'),
     },
     value: (r) => r.totals.shortestRetention,
-    explain: (_r, design) => ({
-      symbol: 't_ret,min',
-      formula: `t_ret,min = min over mats of ${FORMULAS.retention.replace('t_ret = ', '')}`,
-      inputs: [
-        input('tREFW', 'refresh window', design.operating.refreshWindow, 'time'),
-        input('T', 'temperature', design.operating.temperature, 'temperature'),
-      ],
-      method: 'Must exceed the refresh window.',
-      source: SOURCES.arrhenius,
-    }),
+    explain: (r, design) => {
+      // Every mat leaks the same typical current, so the mat with the shortest weakest-cell retention
+      // (smallest Cs·ΔV_allowed) also has the shortest typical one.
+      const f = worstMat(r, r.totals.shortestWeakestRetentionMatId);
+      const nan = Number.NaN;
+      return {
+        symbol: 't_ret,min',
+        formula: `t_ret,min = min over refreshed mats of ${FORMULAS.retention.replace('t_ret = ', '')}`,
+        inputs: [
+          input('Cs', 'storage capacitance (that mat)', f?.storageCapacitance ?? nan, 'capacitance'),
+          input('ΔV_allowed', 'droop until its margin is zero', f?.allowedDroop ?? nan, 'voltage'),
+          input('I(T)', 'typical leakage at temperature', f?.leakage ?? nan, 'current'),
+          input('T', 'temperature', design.operating.temperature, 'temperature'),
+          input('tREFW', 'refresh window', design.operating.refreshWindow, 'time'),
+        ],
+        method: `${worstOf(r.totals.shortestWeakestRetentionMatName)} The retention check uses the weakest cell (below).`,
+        source: SOURCES.arrhenius,
+      };
+    },
   }),
   totalFigure({
     key: 'worstWordlineDelay',
@@ -140,14 +177,23 @@ export const TOTAL_FIGURE_CATALOGUE = [
         r.totals.matCount === 0 ? '— (no mats)' : formatQuantity(r.totals.worstWordlineDelay, 'time'),
     },
     value: (r) => r.totals.worstWordlineDelay,
-    explain: (_r, design) => ({
-      symbol: 't_wl,max',
-      formula: `t_wl,max = max over mats of ${FORMULAS.wordlineDelay.replace('t_wl = ', '')}`,
-      inputs: [input('R_drv', 'driver resistance', design.process.wordlineDriverResistance, 'resistance')],
-      method: 'Longest sub-word line.',
-      source: SOURCES.rabaey,
-    }),
+    explain: (r, design) => {
+      const f = worstMat(r, r.totals.worstWordlineDelayMatId);
+      const nan = Number.NaN;
+      return {
+        symbol: 't_wl,max',
+        formula: `max over mats of t_wl,  ${FORMULAS.wordlineDelay}`,
+        inputs: [
+          input('R_drv', 'driver resistance', design.process.wordlineDriverResistance, 'resistance'),
+          input('R_wl', 'sub-word-line resistance (that mat)', f?.wordlineResistance ?? nan, 'resistance'),
+          input('C_wl', 'sub-word-line capacitance (that mat)', f?.wordlineCapacitance ?? nan, 'capacitance'),
+        ],
+        method: `Longest sub-word line, 50 % point. ${worstOf(r.totals.worstWordlineDelayMatName, 'Largest')}`,
+        source: SOURCES.rabaey,
+      };
+    },
   }),
+  ...TOTAL_TIMING_FIGURES,
   totalFigure({
     key: 'operatingTemperature',
     label: 'Operating temperature',
