@@ -26,6 +26,7 @@ import { stepAndRepeat } from '../../src/commands/stepAndRepeat';
 import { switchVariant } from '../../src/commands/switchVariant';
 import { editProblems } from '../../src/io/editCheck';
 import { restoreDesign } from '../../src/io/restore';
+import { figureProblems } from '../support/figureInvariants';
 import { BUILTIN_PROCESSES } from '../../src/model/builtins';
 import { demoDesign } from '../../src/designs/demoDesign';
 import type { Design } from '../../src/model/design';
@@ -177,6 +178,8 @@ describe('every accepted edit restores', () => {
               accepted += after === before ? 0 : 1;
               const reloaded = restoreDesign(JSON.stringify(after));
               expect(reloaded.ok, reloaded.ok ? '' : reloaded.errors.join('; ')).toBe(true);
+              // The report the store keeps (often made incrementally) has sound figures.
+              expect(figureProblems(store.getState().report, after)).toEqual([]);
             } else {
               refused++;
               expect(after).toBe(before);

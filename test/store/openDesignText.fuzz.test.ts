@@ -3,6 +3,9 @@ import { describe, expect, it } from 'vitest';
 import { demoDesign } from '../../src/designs/demoDesign';
 import { createAppStore } from '../../src/store/appStore';
 import { openDesignText } from '../../src/store/openDesignText';
+import { restoreDesign } from '../../src/io/restore';
+import { DEMO_CELL_IDS, mutatedDemo, mutation } from '../support/demoMutations';
+import { figureProblems } from '../support/figureInvariants';
 
 // Source: common practice (no source): a refused file never changes what the person is working on.
 
@@ -36,6 +39,47 @@ describe('opening malformed files', () => {
       { numRuns: 3000 },
     );
   }, 60_000);
+
+  it(
+    'a valid design with one field broken: refused with nothing changed, or opened with sound figures',
+    { timeout: 180_000 },
+    () => {
+      // Source: common practice (no source). Each case is the demo (or the demo with every mat on one of
+      // its cells) with exactly one field replaced, deleted or scaled: a file that parses and nearly
+      // validates, the hardest kind for a loader. ~3 s of CPU; the limit is for a busy 2-core machine.
+      const store = createAppStore(demoDesign());
+      const before = store.getState().history;
+      const documentId = store.getState().documentId;
+      let opened = 0;
+      let refused = 0;
+      fc.assert(
+        fc.property(fc.option(fc.constantFrom(...DEMO_CELL_IDS)), mutation, (cellId, broken) => {
+          const text = JSON.stringify(mutatedDemo([broken], cellId ?? undefined));
+          if (openDesignText(store, text, 'one-field.json')) {
+            opened++;
+            const state = store.getState();
+            const design = state.history.present;
+            expect(state.documentId).not.toBe(documentId);
+            // What was opened restores again, and its figures are finite or missing with a reason.
+            expect(restoreDesign(JSON.stringify(design)).ok).toBe(true);
+            expect(figureProblems(state.report, design)).toEqual([]);
+            store.setState({ history: before, documentId });
+          } else {
+            refused++;
+            const state = store.getState();
+            expect(state.history).toBe(before);
+            expect(state.documentId).toBe(documentId);
+            expect(state.notice?.kind).toBe('error');
+            expect((state.notice?.text ?? '').length).toBeLessThan(2000);
+          }
+        }),
+        { numRuns: 1500 },
+      );
+      // Both outcomes must occur, or the property proves little.
+      expect(opened).toBeGreaterThan(100);
+      expect(refused).toBeGreaterThan(100);
+    },
+  );
 
   it('opens a good file as a new document with its own history, in a file', () => {
     const store = createAppStore(demoDesign());

@@ -96,13 +96,16 @@ export function weakCellFraction(
   if (!(refreshWindow > 0)) return 0;
   if (!(typicalRetention >= 0)) return 0;
   const ratio = typicalRetention / refreshWindow;
-  const mainFails = ratio < 1 ? 1 : 0;
-  if (!tail || !(tail.fraction > 0)) return mainFails;
+  // r < 1: every typical cell fails, and a tail cell (whose cause adds to the typical one) fails as well.
+  // Deciding this before the tail also keeps ln 0 − ln 0 out of the tail's z when the typical retention
+  // and the tail's leakage are both 0 (a mat with no margin to lose on a process of zero leakage).
+  if (ratio < 1) return 1;
+  if (!tail || !(tail.fraction > 0)) return 0;
   const tailFails =
     tail.spread > 0
       ? normalUpperTail((Math.log(ratio) - Math.log(tail.medianLeakageMultiplier)) / tail.spread)
       : tail.medianLeakageMultiplier > ratio
         ? 1
         : 0;
-  return (1 - tail.fraction) * mainFails + tail.fraction * Math.max(mainFails, tailFails);
+  return tail.fraction * tailFails;
 }
