@@ -34,7 +34,6 @@ export { poissonYield, negativeBinomialYield, grossDiesPerWafer, goodDiesPerWafe
 export {
   RepairSimulation,
   estimateRepairProbability,
-  type MonteCarloDomainClass,
   type RepairMonteCarloRequest,
   type RepairMonteCarloResult,
 } from './physics/repairMonteCarlo';
@@ -82,12 +81,18 @@ export {
   computeYieldFigures,
   matDomainShare,
   repairSettingsOf,
-  repeatedShare,
   yieldFiguresOf,
   yieldOfDomains,
-  type DomainSum,
   type YieldFigures,
 } from './evaluation/yieldFigures';
+export {
+  gridRepairPlan,
+  reportRepairPlan,
+  type MatShare,
+  type RepairDomainClass,
+  type RepairPlan,
+} from './evaluation/repairDomains';
+export { sharedDomainLayout, type RepairLayout, type RepairTile } from './physics/repairLayout';
 export {
   FINDING_KINDS,
   type ActivationEnergy,

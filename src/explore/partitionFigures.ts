@@ -13,11 +13,10 @@ import {
   rowsPerRefreshCommand,
   senseAmpsOfMat,
   storedHighLevel,
+  gridRepairPlan,
   matDomainShare,
   retentionTailAt,
-  repeatedShare,
   yieldOfDomains,
-  type DomainSum,
   type PartitionFigures,
   type MatFigures,
   type StoredHighLevel,
@@ -195,9 +194,10 @@ export interface YieldOptions {
 }
 
 /**
- * The bank's yield figures from its representative mat: the repair domains are the mats, the mat rows
- * (matColumns mats each) or the whole bank, and the sense-amplifier strips are matRows + 1 rows of
- * strips the width of the mats (as gridFloorplan lays them).
+ * The bank's yield figures from its representative mat: the row-repair domains are the mats, the mat
+ * rows (matColumns mats each) or the whole bank; the column-repair domains are the sense-amplifier strips,
+ * matRows + 1 rows of strips the width of the mats (as gridFloorplan lays them), the inner ones shared by
+ * the mats above and below.
  */
 function bankYield(spec: PartitionPointSpec, plan: PartitionPlan, mat: MatFigures, options: YieldOptions) {
   if (options.withYield === false) return null;
@@ -209,15 +209,17 @@ function bankYield(spec: PartitionPointSpec, plan: PartitionPlan, mat: MatFigure
   };
   const retentionTail = retentionTailAt(spec.process, spec.operating);
   const share = matDomainShare(mat, settings, spec.operating.refreshWindow, retentionTail);
-  let domains: DomainSum[];
-  if (settings.repairDomain === 'mat') domains = Array.from({ length: plan.matCount }, () => share);
-  else if (settings.repairDomain === 'matRow')
-    domains = Array.from({ length: plan.matRows }, () => repeatedShare(share, plan.matColumns));
-  else domains = [repeatedShare(share, plan.matCount)];
-  const stripArea = (plan.matRows + 1) * plan.matColumns * plan.matWidth * spec.strips.senseAmpStripHeight;
-  const matArea = plan.matCount * plan.matWidth * plan.matHeight;
+  const repairPlan = gridRepairPlan(
+    {
+      matRows: plan.matRows,
+      matColumns: plan.matColumns,
+      stripArea: plan.matWidth * spec.strips.senseAmpStripHeight,
+    },
+    settings,
+    share,
+  );
   return yieldOfDomains({
-    domains,
+    plan: repairPlan,
     mats: [mat],
     settings,
     floorplanCopiesPerDie: spec.operating.floorplanCopiesPerDie,
@@ -225,6 +227,5 @@ function bankYield(spec: PartitionPointSpec, plan: PartitionPlan, mat: MatFigure
     refreshWindow: spec.operating.refreshWindow,
     floorplanArea: plan.width * plan.height,
     usableBits: plan.usableBits,
-    stripShare: matArea > 0 ? stripArea / matArea : 0,
   });
 }

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { nonNegative, positive, wholeCount } from './schemaParts';
 
-/** Which mats share one pool of spare rows and columns. */
+/** Which mats share one pool of spare rows (spare columns are per sense-amplifier strip segment). */
 export const REPAIR_DOMAINS = ['mat', 'matRow', 'bank'] as const;
 export type RepairDomainKind = (typeof REPAIR_DOMAINS)[number];
 
@@ -29,10 +29,10 @@ export const repairSettingsSchema = z.object({
   killRatioBitline: nonNegative('bit-line kill ratio', 1),
   /** Share of the defects outside the mats (periphery) that kill the die (ratio). */
   killRatioPeriphery: nonNegative('periphery kill ratio', 1),
-  /** Spare word lines per repair domain. */
-  spareRows: wholeCount('spare rows per domain', 0, 256),
-  /** Spare bit-line pairs (columns) per repair domain. */
-  spareColumns: wholeCount('spare columns per domain', 0, 256),
+  /** Spare word lines per row-repair domain. */
+  spareRows: wholeCount('spare rows per row domain', 0, 256),
+  /** Spare bit-line pairs (columns, each with its sense amplifier) per sense-amplifier strip segment. */
+  spareColumns: wholeCount('spare columns per sense-amp strip segment', 0, 256),
   repairDomain: z.enum(REPAIR_DOMAINS),
   /** Area of one fuse with its programming device and sense latch (m²). */
   fuseArea: nonNegative('fuse area', 1e-6),

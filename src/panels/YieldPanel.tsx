@@ -53,7 +53,7 @@ export function YieldPanel() {
         ))}
         <SelectField
           id="repair-domain"
-          label="Repair domain (spares shared by)"
+          label="Row-repair domain (spare rows shared by)"
           options={DOMAIN_OPTIONS}
           value={settings.repairDomain}
           onChange={(value) => run(setRepairSetting, { field: 'repairDomain', value })}
@@ -89,7 +89,7 @@ export function YieldPanel() {
           type="button"
           data-testid="repair-mc-run"
           disabled={mc.status === 'running'}
-          onClick={() => startMc(figures.monteCarlo, TRIALS)}
+          onClick={() => figures.monteCarlo && startMc(figures.monteCarlo, TRIALS)}
         >
           {mc.status === 'running' ? 'Running…' : 'Estimate die yield by Monte Carlo'}
         </button>

@@ -17,7 +17,8 @@ describe('yield inputs shared with the physics', () => {
     const many = yieldOf({ ...demo, operating: { ...demo.operating, floorplanCopiesPerDie: 64 } });
     expect(one.floorplanCopiesPerDie).toBe(1);
     expect(many.floorplanCopiesPerDie).toBe(64);
-    expect(many.domainsPerDie).toBe(64 * one.domainsPerDie);
+    expect(many.rowDomainsPerDie).toBe(64 * one.rowDomainsPerDie);
+    expect(many.columnDomainsPerDie).toBe(64 * one.columnDomainsPerDie);
     // Defects scale with the die; the parametric share also moves, since k grows with the die.
     expect(many.defectFaults.cells / one.defectFaults.cells).toBeCloseTo(64, 9);
   });

@@ -120,7 +120,7 @@ function paintCellKey(ctx: CanvasRenderingContext2D, scene: Scene): void {
   if (repair.spareRows + repair.spareColumns > 0)
     rows.push([
       SPARE_FILL,
-      `spares: ${repair.spareRows} rows + ${repair.spareColumns} columns per ${REPAIR_DOMAIN_LABEL[repair.repairDomain].replace(/^each /, '')} (Yield tab)`,
+      `spares: ${repair.spareRows} rows per ${REPAIR_DOMAIN_LABEL[repair.repairDomain].replace(/^each /, '')}, ${repair.spareColumns} columns per sense-amp strip (Yield tab)`,
       -1,
     ]);
   ctx.font = '12px system-ui, sans-serif';

@@ -13,9 +13,9 @@ const BAND_GRID = 1e-9;
 const HOSTS = new WeakMap<Design, ReadonlySet<string>>();
 
 /**
- * The mats that hold the spares of their repair domain: every mat when each mat is a domain; in a mat
- * row, its first mat along the word lines; for the whole floorplan, its first mat. The yield figures
- * count a domain's R spare rows and C spare columns once, so they are drawn once.
+ * The mats that hold the spare rows of their row-repair domain: every mat when each mat is a domain; in a
+ * mat row, its first mat along the word lines; for the whole floorplan, its first mat. The yield figures
+ * count a domain's R spare rows once, so they are drawn once.
  */
 export function spareHostsOf(design: Design): ReadonlySet<string> {
   const cached = HOSTS.get(design);
@@ -42,12 +42,17 @@ export function spareHostsOf(design: Design): ReadonlySet<string> {
 }
 
 /**
- * Marks the spare lines of a host mat at line-level zoom: the last R word-line pitches and the last C
- * bit-line pitches of the mat, washed and outlined, with a short tag when there is room.
+ * Marks the spare lines of a mat at line-level zoom, washed and outlined, with a short tag when there is
+ * room: the last R word-line pitches in the mat that hosts its row domain's spare rows, and in every mat
+ * the spare columns of the strips at its two bit-line ends (each strip's C spare sense amplifiers reach
+ * into the mats on both its sides, so a tiled mat holds 2·C spare columns; the yield figures count them
+ * once per strip).
  */
 export function paintSpareLines(ctx: CanvasRenderingContext2D, mat: PlacedMat, scene: Scene): void {
-  if (!spareHostsOf(scene.design).has(mat.block.id)) return;
-  const { spareRows, spareColumns } = repairSettingsOf(scene.design);
+  const { spareColumns } = repairSettingsOf(scene.design);
+  const spareRows = spareHostsOf(scene.design).has(mat.block.id)
+    ? repairSettingsOf(scene.design).spareRows
+    : 0;
   if (spareRows === 0 && spareColumns === 0) return;
   const k = pxPerMetre(scene.viewport);
   const ox = scene.viewport.offsetX;
@@ -58,7 +63,7 @@ export function paintSpareLines(ctx: CanvasRenderingContext2D, mat: PlacedMat, s
   const rowBand = Math.min(spareRows, g.wordlineCount) * g.wordlinePitch;
   // A spare column is a bit-line pair: two bit lines in a folded mat, one (plus its partner mat's) when open.
   const linesPerColumn = mat.cell.bitlineArchitecture === 'folded' ? 2 : 1;
-  const columnBand = Math.min(spareColumns * linesPerColumn, g.bitlineCount) * g.bitlinePitch;
+  const columnBand = Math.min(2 * spareColumns * linesPerColumn, g.bitlineCount) * g.bitlinePitch;
   // Word lines run across the bit lines: with vertical bit lines the spare rows are a band at the bottom.
   const bands = vertical
     ? [
@@ -68,7 +73,7 @@ export function paintSpareLines(ctx: CanvasRenderingContext2D, mat: PlacedMat, s
           y: r.y,
           w: columnBand,
           h: r.height,
-          tag: `${spareColumns} spare cols`,
+          tag: `2 × ${spareColumns} spare cols (per strip)`,
         },
       ]
     : [
@@ -78,7 +83,7 @@ export function paintSpareLines(ctx: CanvasRenderingContext2D, mat: PlacedMat, s
           y: r.y + r.height - columnBand,
           w: r.width,
           h: columnBand,
-          tag: `${spareColumns} spare cols`,
+          tag: `2 × ${spareColumns} spare cols (per strip)`,
         },
       ];
   ctx.save();

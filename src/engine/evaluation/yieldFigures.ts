@@ -4,19 +4,19 @@ import type { RepairSettings } from '../../model/repair';
 import { clusteredExpectation } from '../physics/defectClustering';
 import {
   defectFaults,
-  NO_FAULTS,
   parametricFaults,
   senseAmpFailureProbability,
   weakCellFraction,
   type RetentionTail,
   type FaultCounts,
 } from '../physics/faultRates';
-import { sparseRepairProbability, type RepairDomain } from '../physics/redundancy';
-import { redundancyArea } from '../physics/redundancyArea';
-import type { MonteCarloDomainClass, RepairMonteCarloRequest } from '../physics/repairMonteCarlo';
+import { crossedRepairLowerBound, type LineDomainClass } from '../physics/redundancy';
+import { spareSetArea } from '../physics/redundancyArea';
+import type { RepairMonteCarloRequest } from '../physics/repairMonteCarlo';
 import { goodDiesPerWafer, grossDiesPerWafer } from '../physics/yield';
 import { retentionTailAt } from './designContext';
-import { figuresAt, type MatTable } from './matTable';
+import { figuresAt } from './matTable';
+import { reportRepairPlan, type MatShare, type RepairDomainClass, type RepairPlan } from './repairDomains';
 import type { MatFigures, Report } from './report';
 
 /** The yield figures of a design on its die (SI; counts per die unless named otherwise). */
@@ -24,9 +24,12 @@ export interface YieldFigures {
   readonly settings: RepairSettings;
   /** Copies of the floorplan on the die (the operating conditions' one value). */
   readonly floorplanCopiesPerDie: number;
-  /** Repair domains in one floorplan copy, and on the die. */
-  readonly domainsPerFloorplan: number;
-  readonly domainsPerDie: number;
+  /** Row-repair domains (mats, mat rows or floorplans) in one floorplan copy, and on the die. */
+  readonly rowDomainsPerFloorplan: number;
+  readonly rowDomainsPerDie: number;
+  /** Column-repair domains (sense-amplifier strip segments) in one floorplan copy, and on the die. */
+  readonly columnDomainsPerFloorplan: number;
+  readonly columnDomainsPerDie: number;
   /** Expected faults per die from defects and from the parametric sources, and their sum. */
   readonly defectFaults: FaultCounts;
   readonly parametricFaults: FaultCounts;
@@ -38,9 +41,14 @@ export interface YieldFigures {
   /** Die area outside the floorplan copies (m²) and the killing defects expected there. */
   readonly peripheryArea: number;
   readonly fatalDefects: number;
-  /** Probability that every repair domain on the die is repaired (clustered defects). */
+  /**
+   * Probability that every repair domain on the die is repaired (clustered defects). Exact when there are
+   * no single-cell faults; otherwise a lower bound (see {@link repairProbabilityIsExact}).
+   */
   readonly repairProbability: number;
-  /** The same with no spares: the yield redundancy starts from. */
+  /** True when the closed form is exact (no single-cell faults expected), false when it is a lower bound. */
+  readonly repairProbabilityIsExact: boolean;
+  /** The same with no spares: the yield redundancy starts from (exact). */
   readonly repairProbabilityWithoutSpares: number;
   /** Repair probability times the periphery's survival, mixed over the clustered defect density. */
   readonly dieYield: number;
@@ -55,8 +63,8 @@ export interface YieldFigures {
   readonly areaPerBitWithRedundancy: number;
   readonly grossDiesPerWafer: number;
   readonly goodDiesPerWafer: number;
-  /** Monte-Carlo request for the same die (for the worker). */
-  readonly monteCarlo: RepairMonteCarloRequest;
+  /** Monte-Carlo request for the same die and the same domains (for the worker); null without a layout. */
+  readonly monteCarlo: RepairMonteCarloRequest | null;
   /** Why a figure cannot be trusted (die too small for its floorplans…); empty when none. */
   readonly problems: readonly string[];
 }
@@ -74,25 +82,13 @@ export function repairSettingsOf(design: Design): RepairSettings {
   return design.operating.repair ?? DEFAULT_REPAIR;
 }
 
-/** One repair domain of a floorplan copy, before identical domains are counted together. */
-export interface DomainSum {
-  rows: number;
-  columns: number;
-  area: number;
-  defects: FaultCounts;
-  parametric: FaultCounts;
-}
-
-/** Positions closer than this share a mat-row band (m). */
-const BAND_GRID = 1e-9;
-
-/** One mat's share of a repair domain: its lines, area and expected faults of each source. */
+/** One mat's lines, area and expected faults of each source. */
 export function matDomainShare(
   f: MatFigures,
   settings: RepairSettings,
   refreshWindow: number,
   tail?: RetentionTail,
-): DomainSum {
+): MatShare {
   const kill = {
     singleCell: settings.killRatioCell,
     wordLine: settings.killRatioWordline,
@@ -109,110 +105,47 @@ export function matDomainShare(
   };
 }
 
-/** A domain made of `n` copies of one mat's share. */
-export function repeatedShare(share: DomainSum, n: number): DomainSum {
-  return {
-    rows: share.rows * n,
-    columns: share.columns * n,
-    area: share.area * n,
-    defects: scale(share.defects, n),
-    parametric: scale(share.parametric, n),
-  };
-}
-
-/**
- * The repair domains of one floorplan copy. A mat is one domain; a mat row groups the mats of one band
- * along the word lines (same start across them, as the refresh rows count them); the bank is every mat.
- */
-function domainsOf(
-  mats: MatTable,
-  design: Design,
-  settings: RepairSettings,
-  tail: RetentionTail,
-): DomainSum[] {
-  const byKey = new Map<string, DomainSum>();
-  for (let k = 0; k < mats.count; k++) {
-    const f = figuresAt(mats, k);
-    const block = mats.blocks[mats.position[k] ?? -1];
-    let key: string;
-    if (settings.repairDomain === 'bank') key = 'bank';
-    else if (settings.repairDomain === 'mat' || !block) key = `mat${k}`;
-    else {
-      const vertical = block.type === 'mat' && block.bitlineAxis === 'vertical';
-      key = `${vertical ? 'v' : 'h'}${Math.round((vertical ? block.y : block.x) / BAND_GRID)}`;
-    }
-    const share = matDomainShare(f, settings, design.operating.refreshWindow, tail);
-    const sum = byKey.get(key);
-    if (!sum) byKey.set(key, { ...share });
-    else {
-      sum.rows += share.rows;
-      sum.columns += share.columns;
-      sum.area += share.area;
-      sum.defects = add(sum.defects, share.defects);
-      sum.parametric = add(sum.parametric, share.parametric);
-    }
-  }
-  return [...byKey.values()];
-}
-
 const add = (a: FaultCounts, b: FaultCounts): FaultCounts => ({
   cells: a.cells + b.cells,
   rows: a.rows + b.rows,
   columns: a.columns + b.columns,
 });
-const scale = (a: FaultCounts, s: number): FaultCounts => ({
-  cells: a.cells * s,
-  rows: a.rows * s,
-  columns: a.columns * s,
-});
-
-/** Identical domains counted together (most floorplans have one or two kinds). */
-function domainClasses(domains: readonly DomainSum[]): { count: number; domain: DomainSum }[] {
-  const classes = new Map<string, { count: number; domain: DomainSum }>();
-  for (const d of domains) {
-    const key = [
-      d.rows,
-      d.columns,
-      d.area,
-      d.defects.cells,
-      d.defects.rows,
-      d.defects.columns,
-      d.parametric.cells,
-      d.parametric.columns,
-    ].join(',');
-    const found = classes.get(key);
-    if (found) found.count++;
-    else classes.set(key, { count: 1, domain: d });
-  }
-  return [...classes.values()];
-}
 
 /**
- * The yield figures: expected faults from the three sources per mat, grouped into repair domains, each
- * domain's repair probability in the sparse limit (a lower bound; exact for row and column faults), the
- * die's product over domains and the periphery's survival, averaged over the gamma-distributed defect
- * density (negative-binomial clustering); then redundancy area, gross and good dies per wafer.
+ * The yield figures: expected faults from the three sources per mat, spare rows per row domain and spare
+ * columns per sense-amplifier strip segment, the die's repair probability (exact for line faults, a lower
+ * bound with single-cell faults), times the periphery's survival, averaged over the gamma-distributed
+ * defect density (negative-binomial clustering); then redundancy area, gross and good dies per wafer.
  */
 export function computeYieldFigures(report: Report, design: Design): YieldFigures {
   const settings = repairSettingsOf(design);
-  const areaByType = report.totals.areaByType;
   const retentionTail = retentionTailAt(design.process, design.operating);
+  const mats = report.mats;
+  const shares = new Map<number, MatShare>();
+  const plan = reportRepairPlan(mats, settings, (k) => {
+    const index = mats.figureIndex[k] ?? -1;
+    let share = shares.get(index);
+    if (!share) {
+      share = matDomainShare(figuresAt(mats, k), settings, design.operating.refreshWindow, retentionTail);
+      shares.set(index, share);
+    }
+    return share;
+  });
   return yieldOfDomains({
-    domains: domainsOf(report.mats, design, settings, retentionTail),
-    mats: report.mats.figures,
+    plan,
+    mats: mats.figures,
     settings,
     floorplanCopiesPerDie: design.operating.floorplanCopiesPerDie,
     retentionTail,
     refreshWindow: design.operating.refreshWindow,
     floorplanArea: report.totals.totalArea,
     usableBits: report.totals.usableBits,
-    stripShare: areaByType.mat > 0 ? areaByType.senseAmpStrip / areaByType.mat : 0,
   });
 }
 
 /** What the yield figures need of a floorplan, from a report or from the explorer's closed form. */
 export interface YieldInputs {
-  readonly domains: readonly DomainSum[];
+  readonly plan: RepairPlan;
   /** The kinds of mat (for the worst sense-amp failure and weak-cell share). */
   readonly mats: readonly MatFigures[];
   readonly settings: RepairSettings;
@@ -223,42 +156,70 @@ export interface YieldInputs {
   readonly refreshWindow: number;
   readonly floorplanArea: number;
   readonly usableBits: number;
-  /** Sense-amplifier strip area over mat area. */
-  readonly stripShare: number;
+}
+
+const countOf = (classes: readonly RepairDomainClass[]) => classes.reduce((n, c) => n + c.count, 0);
+
+/** The classes at a defect density x times the mean: line and cell faults as the closed form reads them. */
+function atDensity(classes: readonly RepairDomainClass[], copies: number, x: number): LineDomainClass[] {
+  return classes.map(({ count, domain }) => ({
+    count: count * copies,
+    lines: domain.lines,
+    lineFaults: domain.defectLines * x + domain.parametricLines,
+    cellFaults: domain.defectCells * x + domain.parametricCells,
+  }));
 }
 
 /** The yield figures of one floorplan's repair domains on its die. */
 export function yieldOfDomains(inputs: YieldInputs): YieldFigures {
-  const { settings, stripShare } = inputs;
+  const { settings, plan } = inputs;
   const problems: string[] = [];
   const copies = inputs.floorplanCopiesPerDie;
-  const domains = inputs.domains;
-  const classes = domainClasses(domains);
+  const { rowClasses, columnClasses } = plan;
 
-  let defectTotal = NO_FAULTS;
-  let parametricTotal = NO_FAULTS;
+  let defectTotal: FaultCounts = { cells: 0, rows: 0, columns: 0 };
+  let parametricTotal: FaultCounts = { cells: 0, rows: 0, columns: 0 };
   let spareRowArea = 0;
   let spareColumnArea = 0;
   let fuseAndCompareArea = 0;
-  let senseAmpFailure = 0;
-  let weakCells = 0;
-  for (const { count, domain } of classes) {
-    defectTotal = add(defectTotal, scale(domain.defects, count * copies));
-    parametricTotal = add(parametricTotal, scale(domain.parametric, count * copies));
-    const cost = redundancyArea(
-      domain.area,
-      domain.rows,
-      domain.columns,
+  for (const { count, domain, spareArea } of rowClasses) {
+    const n = count * copies;
+    defectTotal = add(defectTotal, {
+      cells: domain.defectCells * n,
+      rows: domain.defectLines * n,
+      columns: 0,
+    });
+    parametricTotal = add(parametricTotal, {
+      cells: domain.parametricCells * n,
+      rows: domain.parametricLines * n,
+      columns: 0,
+    });
+    const cost = spareSetArea(
       settings.spareRows,
-      settings.spareColumns,
-      stripShare,
+      domain.lines,
+      spareArea,
       settings.fuseArea,
       settings.compareBitArea,
     );
-    spareRowArea += cost.spareRows * count;
-    spareColumnArea += cost.spareColumns * count;
+    spareRowArea += cost.lines * count;
     fuseAndCompareArea += cost.fuseAndCompare * count;
   }
+  for (const { count, domain, spareArea } of columnClasses) {
+    const n = count * copies;
+    defectTotal = add(defectTotal, { cells: 0, rows: 0, columns: domain.defectLines * n });
+    parametricTotal = add(parametricTotal, { cells: 0, rows: 0, columns: domain.parametricLines * n });
+    const cost = spareSetArea(
+      settings.spareColumns,
+      domain.lines,
+      spareArea,
+      settings.fuseArea,
+      settings.compareBitArea,
+    );
+    spareColumnArea += cost.lines * count;
+    fuseAndCompareArea += cost.fuseAndCompare * count;
+  }
+  let senseAmpFailure = 0;
+  let weakCells = 0;
   for (const f of inputs.mats) {
     senseAmpFailure = Math.max(senseAmpFailure, senseAmpFailureProbability(f.senseSignal, f.offsetSigma));
     weakCells = Math.max(
@@ -277,22 +238,13 @@ export function yieldOfDomains(inputs: YieldInputs): YieldFigures {
   }
   const fatalDefects = Math.max(0, peripheryArea) * settings.defectDensity * settings.killRatioPeriphery;
 
-  const arrays = (x: number, spareRows: number, spareColumns: number): number => {
-    let logP = 0;
-    for (const { count, domain } of classes) {
-      const d: RepairDomain = {
-        rows: domain.rows,
-        columns: domain.columns,
-        spareRows,
-        spareColumns,
-        faults: add(scale(domain.defects, x), domain.parametric),
-      };
-      const p = sparseRepairProbability(d);
-      if (!(p > 0)) return 0;
-      logP += count * copies * Math.log(p);
-    }
-    return Math.exp(logP);
-  };
+  const arrays = (x: number, spareRows: number, spareColumns: number): number =>
+    crossedRepairLowerBound(
+      atDensity(rowClasses, copies, x),
+      atDensity(columnClasses, copies, x),
+      spareRows,
+      spareColumns,
+    );
   const alpha = settings.defectClustering;
   const clamp = (p: number) => Math.min(1, Math.max(0, p));
   const repairProbability = clusteredExpectation(
@@ -307,30 +259,26 @@ export function yieldOfDomains(inputs: YieldInputs): YieldFigures {
   const dieAreaWithRedundancy = settings.dieArea + copies * redundancy;
   const gross = grossDiesPerWafer(settings.waferDiameter, dieAreaWithRedundancy);
   const usableBits = inputs.usableBits;
-
-  const monteCarloClasses: MonteCarloDomainClass[] = classes.map(({ count, domain }) => ({
-    count: count * copies,
-    rows: domain.rows,
-    columns: domain.columns,
-    spareRows: settings.spareRows,
-    spareColumns: settings.spareColumns,
-    defectFaults: domain.defects,
-    parametricFaults: domain.parametric,
-  }));
+  const faults = add(defectTotal, parametricTotal);
+  const rowDomains = countOf(rowClasses);
+  const columnDomains = countOf(columnClasses);
 
   return {
     settings,
     floorplanCopiesPerDie: copies,
-    domainsPerFloorplan: domains.length,
-    domainsPerDie: domains.length * copies,
+    rowDomainsPerFloorplan: rowDomains,
+    rowDomainsPerDie: rowDomains * copies,
+    columnDomainsPerFloorplan: columnDomains,
+    columnDomainsPerDie: columnDomains * copies,
     defectFaults: defectTotal,
     parametricFaults: parametricTotal,
-    faults: add(defectTotal, parametricTotal),
+    faults,
     senseAmpFailure,
     weakCellFraction: weakCells,
     peripheryArea,
     fatalDefects,
     repairProbability: clamp(repairProbability),
+    repairProbabilityIsExact: !(faults.cells > 0) || settings.spareRows + settings.spareColumns === 0,
     repairProbabilityWithoutSpares: clamp(repairProbabilityWithoutSpares),
     dieYield: clamp(dieYield),
     redundancyArea: redundancy,
@@ -341,7 +289,17 @@ export function yieldOfDomains(inputs: YieldInputs): YieldFigures {
     areaPerBitWithRedundancy: usableBits > 0 ? (floorplanArea + redundancy) / usableBits : Number.NaN,
     grossDiesPerWafer: gross,
     goodDiesPerWafer: goodDiesPerWafer(gross, clamp(dieYield)),
-    monteCarlo: { classes: monteCarloClasses, fatalDefects, clustering: alpha, seed: 1 },
+    monteCarlo: plan.layout
+      ? {
+          layout: plan.layout,
+          copies,
+          spareRows: settings.spareRows,
+          spareColumns: settings.spareColumns,
+          fatalDefects,
+          clustering: alpha,
+          seed: 1,
+        }
+      : null,
     problems,
   };
 }

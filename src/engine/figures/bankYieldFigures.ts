@@ -2,8 +2,8 @@ import { input, SOURCES } from './explanation';
 import { bankFigure, EVERY_VIEW } from './bankFigure';
 
 const SPARES = (f: { spareRows: number; spareColumns: number }) => [
-  input('R', 'spare rows per domain', f.spareRows, 'count'),
-  input('C', 'spare columns per domain', f.spareColumns, 'count'),
+  input('R', 'spare rows per row domain', f.spareRows, 'count'),
+  input('C', 'spare columns per sense-amp strip segment', f.spareColumns, 'count'),
 ];
 const STAPPER =
   'C. H. Stapper, negative-binomial yield model, IBM J. Res. Dev., 1980s (from memory); Hennessy & Patterson, Computer Architecture: A Quantitative Approach, 5th ed., 2012, ch. 1';
@@ -29,8 +29,8 @@ const spareCount = <const Key extends 'spareRows' | 'spareColumns'>(key: Key, la
 
 /** Comparison figures of a bank's yield and redundancy (explorer axes, point card, variants table). */
 export const BANK_YIELD_FIGURES = [
-  spareCount('spareRows', 'Spare rows per domain'),
-  spareCount('spareColumns', 'Spare columns per domain'),
+  spareCount('spareRows', 'Spare rows per row domain'),
+  spareCount('spareColumns', 'Spare columns per strip segment'),
   bankFigure({
     key: 'dieYield',
     label: 'Die yield',
@@ -44,7 +44,7 @@ export const BANK_YIELD_FIGURES = [
       formula: 'Y = E_x[ P_repair(x) · e^(−λ_periphery·x) ],  x ~ Gamma(α, mean 1)',
       inputs: [...SPARES(f), input('P_repair', 'repair probability', f.repairProbability, 'percent')],
       method:
-        'Every repair domain repaired (sparse-limit lower bound for single-cell faults) and no killing periphery defect, over a clustered defect density. First-order estimate.',
+        'Every repair domain repaired (exact for line faults; a lower bound with single-cell faults) and no killing periphery defect, over a clustered defect density. First-order estimate.',
       source: STAPPER,
     }),
   }),
@@ -58,10 +58,11 @@ export const BANK_YIELD_FIGURES = [
     exportKey: null,
     explain: (f) => ({
       symbol: 'P_repair',
-      formula: 'P = E_x[ Π_domains Σ_{i≤R} Σ_{j≤C} P(i)·P(j)·P(cells ≤ R−i+C−j) ]',
+      formula:
+        'P = E_x[ max( Π_rowdom P(rows + cells ≤ R)·Π_strips P(cols ≤ C),  Π_rowdom P(rows ≤ R)·Π_strips P(cols + cells ≤ C) ) ]',
       inputs: SPARES(f),
       method:
-        'Faulty lines Binomial(lines, 1 − e^(−λ/lines)); each single-cell fault takes one spare of either kind.',
+        'Spare rows per row domain, spare columns per sense-amp strip segment (inner strips shared by the mats above and below). Faulty lines Binomial(lines, 1 − e^(−λ/lines)), exact for line faults; with single-cell faults a lower bound (every cell by a spare row, or every cell by a spare column, whichever is likelier).',
       source: `${STAPPER}; ${SOURCES.common} for the repair rule`,
     }),
   }),
@@ -75,9 +76,11 @@ export const BANK_YIELD_FIGURES = [
     exportKey: null,
     explain: (f) => ({
       symbol: 'A_red',
-      formula: 'A_red = Σ_domains [R·A/rows + C·(A/cols)·(1 + A_strip/A_mat) + fuses and comparators]',
+      formula:
+        'A_red = Σ_rowdom R·(A/rows + fuse set) + Σ_strips C·(cells of one column on each side + A_strip/cols + fuse set)',
       inputs: SPARES(f),
-      method: 'Spare lines of cells (columns with their sense amplifiers) and a fuse set per spare.',
+      method:
+        'Spare rows of cells per row domain, spare columns (a sense amplifier and its bit lines on both sides) per strip, and a fuse set per spare.',
       source: `${SOURCES.common}; K. Itoh, VLSI Memory Chip Design, Springer, 2001 (from memory)`,
     }),
   }),

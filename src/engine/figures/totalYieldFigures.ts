@@ -108,16 +108,17 @@ export const TOTAL_YIELD_FIGURES = [
       return {
         symbol: 'P_repair',
         formula:
-          'P = E_x[ Π_domains Σ_{i≤R} Σ_{j≤C} P(i rows)·P(j cols)·P(cells ≤ R−i+C−j) ],  x ~ Gamma(α, mean 1)',
+          'P = E_x[ max( Π_rowdom P(rows + cells ≤ R)·Π_strips P(cols ≤ C),  Π_rowdom P(rows ≤ R)·Π_strips P(cols + cells ≤ C) ) ],  x ~ Gamma(α, mean 1)',
         inputs: [
-          input('R', 'spare rows per domain', s.spareRows, 'count'),
-          input('C', 'spare columns per domain', s.spareColumns, 'count'),
-          input('domains', 'repair domains per die', y.domainsPerDie, 'count'),
+          input('R', 'spare rows per row domain', s.spareRows, 'count'),
+          input('C', 'spare columns per sense-amp strip segment', s.spareColumns, 'count'),
+          input('row domains', 'row-repair domains per die', y.rowDomainsPerDie, 'count'),
+          input('strips', 'column-repair domains (strip segments) per die', y.columnDomainsPerDie, 'count'),
           input('α', 'defect clustering', s.defectClustering, 'ratio'),
           input('P0', 'without spares', y.repairProbabilityWithoutSpares, 'percent'),
         ],
         method:
-          'Faulty rows and columns are Binomial(lines, 1 − e^(−λ/lines)) (exact for line faults); each single-cell fault then takes one spare of either kind (sparse limit: a lower bound, tight when faults rarely share a line; the Monte-Carlo estimate in the yield panel solves each domain exactly). Defect rates are scaled by a gamma-distributed density (clustering).' +
+          'Spare rows serve a row domain (mat, mat row or floorplan), spare columns a sense-amplifier strip segment (its sense amplifiers and the bit-line pairs they serve on both sides). Faulty rows and columns are Binomial(lines, 1 − e^(−λ/lines)): exact when there are only line faults, since rows and columns are then independent. Single-cell faults couple a row domain and a strip, so the closed form takes the better of two plans that always work when they succeed (every cell by a spare row, or every cell by a spare column): a LOWER BOUND. The Monte-Carlo estimate in the yield panel solves the same domains exactly. Defect rates are scaled by a gamma-distributed density (clustering).' +
           CAUTION,
         source: `${STAPPER}; ${SOURCES.common} for the repair rule`,
       };
@@ -163,7 +164,7 @@ export const TOTAL_YIELD_FIGURES = [
       return {
         symbol: 'A_red',
         formula:
-          'A_red = Σ_domains [R·A/rows + C·(A/cols)·(1 + A_strip/A_mat) + (R+C)·((b+1)·A_fuse + b·A_cmp)]',
+          'A_red = Σ_rowdom R·(A/rows + (b+1)·A_fuse + b·A_cmp) + Σ_strips C·(Σ_sides A_side/cols_side + A_strip/cols + (b+1)·A_fuse + b·A_cmp)',
         inputs: [
           input('A_rows', 'spare word lines', y.spareRowArea, 'area'),
           input('A_cols', 'spare bit-line pairs with sense amps', y.spareColumnArea, 'area'),
@@ -172,7 +173,7 @@ export const TOTAL_YIELD_FIGURES = [
           input('A_cmp', 'one compare bit', y.settings.compareBitArea, 'area'),
         ],
         method:
-          'Each spare adds one line of cells (a column also its sense amplifier) and a fuse set of b = ⌈log2(lines)⌉ address fuses plus an enable fuse, compared on every access.',
+          "A spare row adds one word line of its row domain's cells; a spare column adds one sense amplifier to its strip and one column of cells in the mat on each side it senses. Each spare has a fuse set of b = ⌈log2(lines of its domain)⌉ address fuses plus an enable fuse, compared on every access.",
         source: `${SOURCES.common}; fuse-set redundancy as in K. Itoh, VLSI Memory Chip Design, Springer, 2001 (from memory)`,
       };
     },

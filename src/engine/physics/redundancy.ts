@@ -144,6 +144,65 @@ function binomialTerms(k: number, n: number, p: number): number[] {
 }
 
 /**
+ * Probability that S spares of one kind repair a domain's faulty lines of that kind and then, one spare
+ * each, its single-cell faults: Σ_{i≤S} P(i faulty lines)·P(cells ≤ S − i), faulty lines
+ * Binomial(lines, 1 − e^(−λ/lines)), cells Poisson. A lower bound of the domain's share of the repair when
+ * cells may also take spares of the other kind (a cell on a faulty line, or two cells on one line, need
+ * fewer spares than counted); exact with no cell faults.
+ */
+export function linesAndCellsRepairProbability(
+  lines: number,
+  lineFaults: number,
+  cellFaults: number,
+  spares: number,
+): number {
+  if (!(cellFaults > 0)) return lineRepairProbability(lines, lineFaults, spares);
+  const terms = binomialTerms(spares, lines, faultyLineProbability(lineFaults, lines));
+  let sum = 0;
+  for (let i = 0; i <= spares; i++) sum += (terms[i] as number) * poissonCdf(spares - i, cellFaults);
+  return Math.min(1, sum);
+}
+
+/** Identical repair domains of one kind: how many, their lines and their expected faults. */
+export interface LineDomainClass {
+  readonly count: number;
+  readonly lines: number;
+  readonly lineFaults: number;
+  readonly cellFaults: number;
+}
+
+/**
+ * Die repair probability when rows are repaired per row domain and columns per column domain (a strip
+ * segment), the two crossing: P(every row domain ≤ R faulty rows)·P(every column domain ≤ C faulty
+ * columns), exact with no single-cell faults (rows and columns independent). With cell faults the exact
+ * answer couples domains that share cells, so this takes the better of two repair plans that are always
+ * feasible when they succeed, a lower bound of the exact value: every cell by a spare row of its row
+ * domain, or every cell by a spare column of its strip. Products in log space.
+ */
+export function crossedRepairLowerBound(
+  rowClasses: readonly LineDomainClass[],
+  columnClasses: readonly LineDomainClass[],
+  spareRows: number,
+  spareColumns: number,
+): number {
+  const logOf = (classes: readonly LineDomainClass[], spares: number, withCells: boolean): number => {
+    let sum = 0;
+    for (const c of classes) {
+      if (c.count === 0) continue;
+      const p = withCells
+        ? linesAndCellsRepairProbability(c.lines, c.lineFaults, c.cellFaults, spares)
+        : lineRepairProbability(c.lines, c.lineFaults, spares);
+      if (!(p > 0)) return -Infinity;
+      sum += c.count * Math.log(p);
+    }
+    return sum;
+  };
+  const cellsByRows = logOf(rowClasses, spareRows, true) + logOf(columnClasses, spareColumns, false);
+  const cellsByColumns = logOf(rowClasses, spareRows, false) + logOf(columnClasses, spareColumns, true);
+  return Math.exp(Math.max(cellsByRows, cellsByColumns));
+}
+
+/**
  * Die repair probability: every domain must be repaired, and domains are independent, so
  * P = Π_classes p_class^count, summed in log space.
  */

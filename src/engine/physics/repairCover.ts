@@ -172,3 +172,105 @@ function removeLine(
   }
   return [outRows, outColumns, m];
 }
+
+/**
+ * Exact spare allocation when row and column domains cross (spare rows per row domain, spare columns per
+ * strip segment): can every distinct cell (rowKeys[i], columnKeys[i]) be covered by a spare row of its
+ * row domain rowDomains[i] or a spare column of its column domain columnDomains[i], given rowSpares[d]
+ * and columnSpares[d] left in each (local) domain? Must-repair per domain pair (a row holding more cells
+ * of one strip than that strip has spare columns left must be replaced by a row, and the other way round),
+ * then branch-and-bound on the first uncovered cell within the node budget. Keys are unique per line.
+ * The spare arrays are not changed.
+ */
+export function coverCrossedDomains(
+  rowKeys: Float64Array,
+  columnKeys: Float64Array,
+  rowDomains: Int32Array,
+  columnDomains: Int32Array,
+  rowSpares: Int32Array,
+  columnSpares: Int32Array,
+  budget: { nodes: number },
+): CoverOutcome {
+  let n = rowKeys.length;
+  let rk = rowKeys;
+  let ck = columnKeys;
+  let rd = rowDomains;
+  let cd = columnDomains;
+  const rs = rowSpares.slice();
+  const cs = columnSpares.slice();
+  for (;;) {
+    if (n === 0) return REPAIRED;
+    let forced = false;
+    for (let i = 0; i < n && !forced; i++) {
+      const rowDomain = rd[i] as number;
+      const columnDomain = cd[i] as number;
+      if (countOnLine(rk, cd, n, rk[i] as number, columnDomain) > (cs[columnDomain] as number)) {
+        if ((rs[rowDomain] as number) === 0) return NOT_REPAIRED;
+        rs[rowDomain] = (rs[rowDomain] as number) - 1;
+        [rk, ck, rd, cd, n] = dropLine(rk, ck, rd, cd, n, rk, rk[i] as number);
+        forced = true;
+      } else if (countOnLine(ck, rd, n, ck[i] as number, rowDomain) > (rs[rowDomain] as number)) {
+        if ((cs[columnDomain] as number) === 0) return NOT_REPAIRED;
+        cs[columnDomain] = (cs[columnDomain] as number) - 1;
+        [rk, ck, rd, cd, n] = dropLine(rk, ck, rd, cd, n, ck, ck[i] as number);
+        forced = true;
+      }
+    }
+    if (!forced) break;
+  }
+  if (--budget.nodes < 0) return UNDECIDED;
+  let undecided = false;
+  const rowDomain = rd[0] as number;
+  const columnDomain = cd[0] as number;
+  if ((rs[rowDomain] as number) > 0) {
+    const [r2, c2, d2, e2] = dropLine(rk, ck, rd, cd, n, rk, rk[0] as number);
+    rs[rowDomain] = (rs[rowDomain] as number) - 1;
+    const outcome = coverCrossedDomains(r2, c2, d2, e2, rs, cs, budget);
+    rs[rowDomain] = (rs[rowDomain] as number) + 1;
+    if (outcome === REPAIRED) return REPAIRED;
+    if (outcome === UNDECIDED) undecided = true;
+  }
+  if ((cs[columnDomain] as number) > 0) {
+    const [r2, c2, d2, e2] = dropLine(rk, ck, rd, cd, n, ck, ck[0] as number);
+    cs[columnDomain] = (cs[columnDomain] as number) - 1;
+    const outcome = coverCrossedDomains(r2, c2, d2, e2, rs, cs, budget);
+    if (outcome === REPAIRED) return REPAIRED;
+    if (outcome === UNDECIDED) undecided = true;
+  }
+  return undecided ? UNDECIDED : NOT_REPAIRED;
+}
+
+/** Cells on the line `keys[i] === key` whose other domain is `domain`. */
+function countOnLine(keys: Float64Array, otherDomains: Int32Array, n: number, key: number, domain: number) {
+  let count = 0;
+  for (let i = 0; i < n; i++) if (keys[i] === key && otherDomains[i] === domain) count++;
+  return count;
+}
+
+/** New arrays without the cells on the line `lineKeys[i] === key` (exactly sized). */
+function dropLine(
+  rowKeys: Float64Array,
+  columnKeys: Float64Array,
+  rowDomains: Int32Array,
+  columnDomains: Int32Array,
+  n: number,
+  lineKeys: Float64Array,
+  key: number,
+): [Float64Array, Float64Array, Int32Array, Int32Array, number] {
+  let m = 0;
+  for (let i = 0; i < n; i++) if (lineKeys[i] !== key) m++;
+  const r = new Float64Array(m);
+  const c = new Float64Array(m);
+  const d = new Int32Array(m);
+  const e = new Int32Array(m);
+  let j = 0;
+  for (let i = 0; i < n; i++) {
+    if (lineKeys[i] === key) continue;
+    r[j] = rowKeys[i] as number;
+    c[j] = columnKeys[i] as number;
+    d[j] = rowDomains[i] as number;
+    e[j] = columnDomains[i] as number;
+    j++;
+  }
+  return [r, c, d, e, m];
+}

@@ -1,38 +1,41 @@
 /**
  * Seeded Monte-Carlo estimate of the die repair probability for mixed faults (single cells that a spare
- * row or a spare column can repair, whole word lines, whole bit-line pairs). Each trial throws the die's
- * faults, groups them by repair domain and solves each faulty domain's spare allocation exactly
- * (repairCover.ts). The estimate comes with its trial count and a Wilson score interval.
+ * row or a spare column can repair, whole word lines, whole bit-line pairs), with spare rows per row-repair
+ * domain and spare columns per column-repair domain (a sense-amplifier strip segment), the two crossing as
+ * the layout says (repairLayout.ts). Each trial throws the die's faults, checks the line faults of every
+ * domain, joins the remaining cells into groups of domains they couple and solves each group's spare
+ * allocation exactly (repairCover.ts). The estimate comes with its trial count and a Wilson score interval.
  *
  * How the faults of one trial are drawn (exact for the model, not an approximation):
  * - Defect faults cluster: their total count on the die is negative binomial with mean Λ and shape α
- *   (gamma-mixed Poisson; Poisson when α = ∞). Given the total, each defect picks its kind and domain with
- *   probability proportional to the expected counts, which is the same joint law as independent
- *   gamma-mixed Poisson counts per kind and domain.
+ *   (gamma-mixed Poisson; Poisson when α = ∞). Given the total, each defect picks its kind and tile with
+ *   probability proportional to the expected counts, and its floorplan copy uniformly, which is the same
+ *   joint law as independent gamma-mixed Poisson counts per kind and tile.
  * - Parametric faults (offset, weak cells) are independent: a Poisson total split the same way.
- * - Positions are uniform over the domain's rows and columns.
+ * - Positions are uniform over the tile's rows and columns; a word line spans every tile of its mat.
  */
 import { xoroshiro128plus } from 'pure-rand/generator/xoroshiro128plus';
 import type { RandomGenerator } from 'pure-rand/types/RandomGenerator';
 import { wilsonInterval, type ProportionInterval } from './binomialInterval';
 import type { FaultCounts } from './faultRates';
-import { CoverScratch, coverDomain, NOT_REPAIRED, REPAIRED, UNDECIDED } from './repairCover';
-
-/** Identical repair domains with their geometry, spares and expected faults per domain. */
-export interface MonteCarloDomainClass {
-  readonly count: number;
-  readonly rows: number;
-  readonly columns: number;
-  readonly spareRows: number;
-  readonly spareColumns: number;
-  /** Expected defect faults per domain; they share the die's clustered defect density. */
-  readonly defectFaults: FaultCounts;
-  /** Expected parametric faults per domain (failing sense amplifiers, weak cells); independent. */
-  readonly parametricFaults: FaultCounts;
-}
+import {
+  coverCells,
+  coverCrossedDomains,
+  NOT_REPAIRED,
+  REPAIRED,
+  SEARCH_NODE_BUDGET,
+  UNDECIDED,
+} from './repairCover';
+import type { RepairLayout } from './repairLayout';
 
 export interface RepairMonteCarloRequest {
-  readonly classes: readonly MonteCarloDomainClass[];
+  /** One floorplan copy's row domains, column domains and tiles. */
+  readonly layout: RepairLayout;
+  /** Identical floorplan copies on the die, each with its own domains. */
+  readonly copies: number;
+  /** Spare rows per row-repair domain and spare columns per column-repair domain. */
+  readonly spareRows: number;
+  readonly spareColumns: number;
   /** Expected killing defects outside the repairable arrays (periphery): any one fails the die. */
   readonly fatalDefects: number;
   /** Negative-binomial cluster parameter α of the defects; Infinity for Poisson. */
@@ -52,12 +55,6 @@ const FAULT_ROW = 1;
 const FAULT_COLUMN = 2;
 const FAULT_FATAL = 3;
 
-/** One (domain class, fault kind) with its cumulative probability among the faults of one source. */
-interface Category {
-  readonly classIndex: number;
-  readonly kind: number;
-}
-
 /** Cumulative table of a discrete count distribution, sampled by inversion (binary search). */
 class CountSampler {
   private readonly cumulative: Float64Array;
@@ -72,15 +69,20 @@ class CountSampler {
     this.cumulative[this.cumulative.length - 1] = Infinity;
   }
   sample(u: number): number {
-    let lo = 0;
-    let hi = this.cumulative.length - 1;
-    while (lo < hi) {
-      const mid = (lo + hi) >> 1;
-      if (u < (this.cumulative[mid] as number)) hi = mid;
-      else lo = mid + 1;
-    }
-    return lo;
+    return firstAbove(this.cumulative, u);
   }
+}
+
+/** Index of the first entry of an ascending table above u (binary search; the last entry is Infinity). */
+function firstAbove(cumulative: Float64Array, u: number): number {
+  let lo = 0;
+  let hi = cumulative.length - 1;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if (u < (cumulative[mid] as number)) hi = mid;
+    else lo = mid + 1;
+  }
+  return lo;
 }
 
 /** P(N = k) for k = 0, 1, … until the remaining tail is below 1e-15: Poisson(λ) or NB(mean λ, shape α). */
@@ -103,6 +105,71 @@ export function countProbabilities(mean: number, clustering: number): number[] {
   return out;
 }
 
+/** The (tile, kind) categories of one fault source, as a cumulative table. */
+interface CategoryTable {
+  readonly cumulative: Float64Array;
+  readonly tile: Int32Array;
+  readonly kind: Uint8Array;
+  readonly total: number;
+}
+
+function categoryTable(
+  request: RepairMonteCarloRequest,
+  faultsOf: (tile: RepairLayout['tiles'][number]) => FaultCounts,
+  fatal: number,
+): CategoryTable {
+  const weights: number[] = [];
+  const tiles: number[] = [];
+  const kinds: number[] = [];
+  request.layout.tiles.forEach((t, index) => {
+    const f = faultsOf(t);
+    const entries: [number, number][] = [
+      [FAULT_CELL, f.cells],
+      [FAULT_ROW, f.rows],
+      [FAULT_COLUMN, f.columns],
+    ];
+    for (const [kind, perTile] of entries) {
+      if (perTile > 0 && request.copies > 0) {
+        weights.push(perTile * request.copies);
+        tiles.push(index);
+        kinds.push(kind);
+      }
+    }
+  });
+  if (fatal > 0) {
+    weights.push(fatal);
+    tiles.push(-1);
+    kinds.push(FAULT_FATAL);
+  }
+  const total = weights.reduce((a, b) => a + b, 0);
+  const cumulative = new Float64Array(weights.length);
+  let sum = 0;
+  weights.forEach((w, i) => {
+    sum += w / total;
+    cumulative[i] = sum;
+  });
+  if (cumulative.length > 0) cumulative[cumulative.length - 1] = Infinity;
+  return { cumulative, tile: Int32Array.from(tiles), kind: Uint8Array.from(kinds), total };
+}
+
+/** Growable per-trial fault arrays. */
+class FaultBuffer {
+  kind = new Uint8Array(64);
+  rowDomain = new Float64Array(64);
+  rowKey = new Float64Array(64);
+  columnDomain = new Float64Array(64);
+  columnKey = new Float64Array(64);
+  ensure(size: number): void {
+    if (this.kind.length >= size) return;
+    const capacity = Math.max(size, this.kind.length * 2);
+    this.kind = new Uint8Array(capacity);
+    this.rowDomain = new Float64Array(capacity);
+    this.rowKey = new Float64Array(capacity);
+    this.columnDomain = new Float64Array(capacity);
+    this.columnKey = new Float64Array(capacity);
+  }
+}
+
 /**
  * A running estimate: call run(n) as many times as wanted (the worker calls it chunk by chunk); the
  * sequence of trials depends only on the seed, not on the chunking.
@@ -111,83 +178,40 @@ export class RepairSimulation {
   private readonly rng: RandomGenerator;
   private readonly defectCount: CountSampler;
   private readonly parametricCount: CountSampler;
-  private readonly defectCategories: Category[] = [];
-  private readonly defectCumulative: number[] = [];
-  private readonly parametricCategories: Category[] = [];
-  private readonly parametricCumulative: number[] = [];
-  private readonly classes: readonly MonteCarloDomainClass[];
-  private readonly classOffset: number[] = [];
-  private readonly scratch = new CoverScratch();
-  private keys = new Float64Array(256);
-  private faultKind = new Uint8Array(256);
-  private faultRow = new Float64Array(256);
-  private faultColumn = new Float64Array(256);
-  private readonly rowsOfDomain: number[] = [];
-  private readonly columnsOfDomain: number[] = [];
-  private readonly cellRows: number[] = [];
-  private readonly cellColumns: number[] = [];
+  private readonly defects: CategoryTable;
+  private readonly parametric: CategoryTable;
+  private readonly request: RepairMonteCarloRequest;
+  /** Line keys: domain (over the whole die) × lines per domain stride + line index. */
+  private readonly rowStride: number;
+  private readonly columnStride: number;
+  private readonly buffer = new FaultBuffer();
+  private readonly rowsUsed = new Map<number, number>();
+  private readonly columnsUsed = new Map<number, number>();
+  private readonly faultyRows = new Set<number>();
+  private readonly faultyColumns = new Set<number>();
+  private readonly firstOfRowDomain = new Map<number, number>();
+  private readonly firstOfColumnDomain = new Map<number, number>();
+  private parent = new Int32Array(64);
+  private cells: number[] = [];
   trials = 0;
   repaired = 0;
   undecided = 0;
 
   constructor(request: RepairMonteCarloRequest) {
+    this.request = request;
     this.rng = xoroshiro128plus(request.seed | 0);
-    this.classes = request.classes;
-    let offset = 0;
-    for (const c of request.classes) {
-      this.classOffset.push(offset);
-      offset += c.count;
+    const { layout, copies } = request;
+    this.rowStride = Math.ceil(largest(layout.rowDomainRows));
+    this.columnStride = Math.ceil(largest(layout.columnDomainColumns));
+    const rowKeys = copies * layout.rowDomainRows.length * this.rowStride;
+    const columnKeys = copies * layout.columnDomainColumns.length * this.columnStride;
+    if (Math.max(rowKeys, columnKeys) > Number.MAX_SAFE_INTEGER) {
+      throw new Error('too many lines on the die for the Monte-Carlo line keys');
     }
-    if (offset * 1e7 > Number.MAX_SAFE_INTEGER) throw new Error('too many repair domains for the sort keys');
-    const defectTotal = this.buildCategories(
-      (c) => c.defectFaults,
-      this.defectCategories,
-      this.defectCumulative,
-      request.fatalDefects,
-    );
-    const parametricTotal = this.buildCategories(
-      (c) => c.parametricFaults,
-      this.parametricCategories,
-      this.parametricCumulative,
-      0,
-    );
-    this.defectCount = new CountSampler(countProbabilities(defectTotal, request.clustering));
-    this.parametricCount = new CountSampler(countProbabilities(parametricTotal, Infinity));
-  }
-
-  private buildCategories(
-    faultsOf: (c: MonteCarloDomainClass) => FaultCounts,
-    categories: Category[],
-    cumulative: number[],
-    fatal: number,
-  ): number {
-    const weights: number[] = [];
-    this.classes.forEach((c, classIndex) => {
-      const f = faultsOf(c);
-      const kinds: [number, number][] = [
-        [FAULT_CELL, f.cells],
-        [FAULT_ROW, f.rows],
-        [FAULT_COLUMN, f.columns],
-      ];
-      for (const [kind, perDomain] of kinds) {
-        if (perDomain > 0 && c.count > 0) {
-          categories.push({ classIndex, kind });
-          weights.push(perDomain * c.count);
-        }
-      }
-    });
-    if (fatal > 0) {
-      categories.push({ classIndex: -1, kind: FAULT_FATAL });
-      weights.push(fatal);
-    }
-    const total = weights.reduce((a, b) => a + b, 0);
-    let sum = 0;
-    for (const w of weights) {
-      sum += w / total;
-      cumulative.push(sum);
-    }
-    if (cumulative.length > 0) cumulative[cumulative.length - 1] = Infinity;
-    return total;
+    this.defects = categoryTable(request, (t) => t.defects, request.fatalDefects);
+    this.parametric = categoryTable(request, (t) => t.parametric, 0);
+    this.defectCount = new CountSampler(countProbabilities(this.defects.total, request.clustering));
+    this.parametricCount = new CountSampler(countProbabilities(this.parametric.total, Infinity));
   }
 
   /** A uniform number in (0, 1) from 32 random bits. */
@@ -215,13 +239,33 @@ export class RepairSimulation {
     };
   }
 
-  private ensure(size: number): void {
-    if (this.keys.length >= size) return;
-    const capacity = Math.max(size, this.keys.length * 2);
-    this.keys = new Float64Array(capacity);
-    this.faultKind = new Uint8Array(capacity);
-    this.faultRow = new Float64Array(capacity);
-    this.faultColumn = new Float64Array(capacity);
+  /** Draws the trial's faults into the buffer; false when one of them kills the die outright. */
+  private throwFaults(defects: number, total: number): boolean {
+    const { layout, copies } = this.request;
+    const rowDomainsPerCopy = layout.rowDomainRows.length;
+    const columnDomainsPerCopy = layout.columnDomainColumns.length;
+    const b = this.buffer;
+    for (let i = 0; i < total; i++) {
+      const table = i < defects ? this.defects : this.parametric;
+      const category = firstAbove(table.cumulative, this.uniform());
+      const kind = table.kind[category] as number;
+      if (kind === FAULT_FATAL) return false;
+      const tile = layout.tiles[table.tile[category] as number] as RepairLayout['tiles'][number];
+      const copy = Math.floor(this.uniform() * copies);
+      b.kind[i] = kind;
+      if (kind !== FAULT_COLUMN) {
+        const rowDomain = copy * rowDomainsPerCopy + tile.rowDomain;
+        b.rowDomain[i] = rowDomain;
+        b.rowKey[i] = rowDomain * this.rowStride + tile.rowOffset + Math.floor(this.uniform() * tile.rows);
+      }
+      if (kind !== FAULT_ROW) {
+        const columnDomain = copy * columnDomainsPerCopy + tile.columnDomain;
+        b.columnDomain[i] = columnDomain;
+        b.columnKey[i] =
+          columnDomain * this.columnStride + tile.columnOffset + Math.floor(this.uniform() * tile.columns);
+      }
+    }
+    return true;
   }
 
   private trial(): number {
@@ -229,79 +273,161 @@ export class RepairSimulation {
     const parametric = this.parametricCount.sample(this.uniform());
     const total = defects + parametric;
     if (total === 0) return REPAIRED;
-    this.ensure(total);
-    // Keys: domain × 1e7 + fault index, so a numeric sort groups the faults by domain (total < 1e7).
+    this.buffer.ensure(total);
+    if (!this.throwFaults(defects, total)) return NOT_REPAIRED;
+    const b = this.buffer;
+    const { spareRows, spareColumns } = this.request;
+    // Line faults: distinct faulty lines per domain must fit the domain's spares.
+    this.rowsUsed.clear();
+    this.columnsUsed.clear();
+    this.faultyRows.clear();
+    this.faultyColumns.clear();
     for (let i = 0; i < total; i++) {
-      const isDefect = i < defects;
-      const categories = isDefect ? this.defectCategories : this.parametricCategories;
-      const cumulative = isDefect ? this.defectCumulative : this.parametricCumulative;
-      const category = categories[pick(cumulative, this.uniform())] as Category;
-      if (category.kind === FAULT_FATAL) return NOT_REPAIRED;
-      const c = this.classes[category.classIndex] as MonteCarloDomainClass;
-      const domain = (this.classOffset[category.classIndex] as number) + Math.floor(this.uniform() * c.count);
-      this.keys[i] = domain * 1e7 + i;
-      this.faultKind[i] = category.kind;
-      this.faultRow[i] = category.kind === FAULT_COLUMN ? -1 : Math.floor(this.uniform() * c.rows);
-      this.faultColumn[i] = category.kind === FAULT_ROW ? -1 : Math.floor(this.uniform() * c.columns);
+      const kind = b.kind[i] as number;
+      if (kind === FAULT_ROW && !this.faultyRows.has(b.rowKey[i] as number)) {
+        this.faultyRows.add(b.rowKey[i] as number);
+        const used = (this.rowsUsed.get(b.rowDomain[i] as number) ?? 0) + 1;
+        if (used > spareRows) return NOT_REPAIRED;
+        this.rowsUsed.set(b.rowDomain[i] as number, used);
+      } else if (kind === FAULT_COLUMN && !this.faultyColumns.has(b.columnKey[i] as number)) {
+        this.faultyColumns.add(b.columnKey[i] as number);
+        const used = (this.columnsUsed.get(b.columnDomain[i] as number) ?? 0) + 1;
+        if (used > spareColumns) return NOT_REPAIRED;
+        this.columnsUsed.set(b.columnDomain[i] as number, used);
+      }
     }
-    const keys = this.keys.subarray(0, total);
-    keys.sort();
+    // Cells not on a replaced line, joined into groups of domains they couple (union-find).
+    const cells = this.cells;
+    cells.length = 0;
+    for (let i = 0; i < total; i++) {
+      if (b.kind[i] !== FAULT_CELL) continue;
+      if (this.faultyRows.has(b.rowKey[i] as number) || this.faultyColumns.has(b.columnKey[i] as number))
+        continue;
+      cells.push(i);
+    }
+    if (cells.length === 0) return REPAIRED;
+    if (cells.length === 1) return this.sparesLeftFor(cells[0] as number) ? REPAIRED : NOT_REPAIRED;
+    return this.solveGroups(cells);
+  }
+
+  private rowSparesLeft(rowDomain: number): number {
+    return this.request.spareRows - (this.rowsUsed.get(rowDomain) ?? 0);
+  }
+
+  private columnSparesLeft(columnDomain: number): number {
+    return this.request.spareColumns - (this.columnsUsed.get(columnDomain) ?? 0);
+  }
+
+  private sparesLeftFor(i: number): boolean {
+    const b = this.buffer;
+    return (
+      this.rowSparesLeft(b.rowDomain[i] as number) > 0 ||
+      this.columnSparesLeft(b.columnDomain[i] as number) > 0
+    );
+  }
+
+  private find(x: number): number {
+    const parent = this.parent;
+    while (parent[x] !== x) {
+      parent[x] = parent[parent[x] as number] as number;
+      x = parent[x] as number;
+    }
+    return x;
+  }
+
+  private solveGroups(cells: readonly number[]): number {
+    const n = cells.length;
+    if (this.parent.length < n) this.parent = new Int32Array(Math.max(n, 2 * this.parent.length));
+    for (let k = 0; k < n; k++) this.parent[k] = k;
+    const b = this.buffer;
+    this.firstOfRowDomain.clear();
+    this.firstOfColumnDomain.clear();
+    const join = (map: Map<number, number>, domain: number, k: number) => {
+      const first = map.get(domain);
+      if (first === undefined) map.set(domain, k);
+      else this.parent[this.find(k)] = this.find(first);
+    };
+    for (let k = 0; k < n; k++) {
+      const i = cells[k] as number;
+      join(this.firstOfRowDomain, b.rowDomain[i] as number, k);
+      join(this.firstOfColumnDomain, b.columnDomain[i] as number, k);
+    }
+    const groups = new Map<number, number[]>();
+    for (let k = 0; k < n; k++) {
+      const root = this.find(k);
+      const group = groups.get(root);
+      if (group) group.push(cells[k] as number);
+      else groups.set(root, [cells[k] as number]);
+    }
     let undecided = false;
-    let start = 0;
-    while (start < total) {
-      const domain = Math.floor((keys[start] as number) / 1e7);
-      let end = start + 1;
-      while (end < total && Math.floor((keys[end] as number) / 1e7) === domain) end++;
-      const outcome = this.solveDomain(keys, start, end, domain);
+    for (const group of groups.values()) {
+      const outcome =
+        group.length === 1
+          ? this.sparesLeftFor(group[0] as number)
+            ? REPAIRED
+            : NOT_REPAIRED
+          : this.solveGroup(group);
       if (outcome === NOT_REPAIRED) return NOT_REPAIRED;
       if (outcome === UNDECIDED) undecided = true;
-      start = end;
     }
     return undecided ? UNDECIDED : REPAIRED;
   }
 
-  private solveDomain(keys: Float64Array, start: number, end: number, domain: number): number {
-    const c = this.classes[classOfDomain(this.classOffset, domain)] as MonteCarloDomainClass;
-    if (end - start === 1) {
-      // One fault: one spare of a fitting kind repairs it.
-      const kind = this.faultKind[(keys[start] as number) - domain * 1e7] as number;
-      if (kind === FAULT_ROW) return c.spareRows > 0 ? REPAIRED : NOT_REPAIRED;
-      if (kind === FAULT_COLUMN) return c.spareColumns > 0 ? REPAIRED : NOT_REPAIRED;
-      return c.spareRows + c.spareColumns > 0 ? REPAIRED : NOT_REPAIRED;
+  /** One group of coupled domains: distinct cells, local domain numbers, then the exact cover. */
+  private solveGroup(group: readonly number[]): number {
+    const b = this.buffer;
+    const rowLocal = new Map<number, number>();
+    const columnLocal = new Map<number, number>();
+    const rowKeys: number[] = [];
+    const columnKeys: number[] = [];
+    const rowDomains: number[] = [];
+    const columnDomains: number[] = [];
+    const seen = new Set<string>();
+    for (const i of group) {
+      const rowKey = b.rowKey[i] as number;
+      const columnKey = b.columnKey[i] as number;
+      const id = `${rowKey},${columnKey}`;
+      if (seen.has(id)) continue;
+      seen.add(id);
+      const rowDomain = b.rowDomain[i] as number;
+      const columnDomain = b.columnDomain[i] as number;
+      if (!rowLocal.has(rowDomain)) rowLocal.set(rowDomain, rowLocal.size);
+      if (!columnLocal.has(columnDomain)) columnLocal.set(columnDomain, columnLocal.size);
+      rowKeys.push(rowKey);
+      columnKeys.push(columnKey);
+      rowDomains.push(rowLocal.get(rowDomain) as number);
+      columnDomains.push(columnLocal.get(columnDomain) as number);
     }
-    const rows = this.rowsOfDomain;
-    const columns = this.columnsOfDomain;
-    const cellRows = this.cellRows;
-    const cellColumns = this.cellColumns;
-    rows.length = 0;
-    columns.length = 0;
-    cellRows.length = 0;
-    cellColumns.length = 0;
-    for (let k = start; k < end; k++) {
-      const i = (keys[k] as number) - domain * 1e7;
-      const kind = this.faultKind[i] as number;
-      if (kind === FAULT_ROW) rows.push(this.faultRow[i] as number);
-      else if (kind === FAULT_COLUMN) columns.push(this.faultColumn[i] as number);
-      else {
-        cellRows.push(this.faultRow[i] as number);
-        cellColumns.push(this.faultColumn[i] as number);
-      }
+    const rowSpares = Int32Array.from(rowLocal.keys(), (d) => this.rowSparesLeft(d));
+    const columnSpares = Int32Array.from(columnLocal.keys(), (d) => this.columnSparesLeft(d));
+    const budget = { nodes: SEARCH_NODE_BUDGET };
+    if (rowLocal.size === 1 && columnLocal.size === 1) {
+      // One row domain and one strip: the classic problem, with its early abort.
+      return coverCells(
+        Float64Array.from(rowKeys),
+        Float64Array.from(columnKeys),
+        rowSpares[0] as number,
+        columnSpares[0] as number,
+        budget,
+      );
     }
-    return coverDomain(rows, columns, cellRows, cellColumns, c.spareRows, c.spareColumns, this.scratch);
+    return coverCrossedDomains(
+      Float64Array.from(rowKeys),
+      Float64Array.from(columnKeys),
+      Int32Array.from(rowDomains),
+      Int32Array.from(columnDomains),
+      rowSpares,
+      columnSpares,
+      budget,
+    );
   }
 }
 
-/** Index of the first cumulative entry above u. */
-function pick(cumulative: readonly number[], u: number): number {
-  let i = 0;
-  while (u >= (cumulative[i] as number)) i++;
-  return i;
-}
-
-function classOfDomain(offsets: readonly number[], domain: number): number {
-  let i = offsets.length - 1;
-  while (i > 0 && (offsets[i] as number) > domain) i--;
-  return i;
+/** The largest entry, at least 1 (a loop: the lists can be too long to spread into Math.max). */
+function largest(values: readonly number[]): number {
+  let most = 1;
+  for (const v of values) if (v > most) most = v;
+  return most;
 }
 
 /** Runs a whole estimate at once (tests, CLI); the worker runs it in chunks instead. */

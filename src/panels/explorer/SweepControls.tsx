@@ -142,7 +142,7 @@ export function SweepControls({ design, settings, onChange }: Props) {
           <>
             <RangeField
               id="sweep-spare-rows"
-              label="Spare rows per domain"
+              label="Spare rows per row domain"
               min={0}
               max={256}
               value={settings.spares.rows}
@@ -152,7 +152,7 @@ export function SweepControls({ design, settings, onChange }: Props) {
             />
             <RangeField
               id="sweep-spare-columns"
-              label="Spare columns per domain"
+              label="Spare columns per strip segment"
               min={0}
               max={256}
               value={settings.spares.columns}

@@ -4,8 +4,9 @@ import {
   countProbabilities,
   estimateRepairProbability,
   RepairSimulation,
-  type MonteCarloDomainClass,
+  type RepairMonteCarloRequest,
 } from '../../../src/engine/physics/repairMonteCarlo';
+import { sharedDomainLayout } from '../../../src/engine/physics/repairLayout';
 import {
   dieRepairProbability,
   rowColumnRepairProbability,
@@ -17,15 +18,25 @@ import { negativeBinomialYield } from '../../../src/engine/physics/yield';
 
 const NONE = { cells: 0, rows: 0, columns: 0 };
 
-function mcClass(domain: RepairDomain, count: number, clustered = true): MonteCarloDomainClass {
+/** `count` domains that each repair their own rows and columns (the classic organisation). */
+function mcRequest(
+  domain: RepairDomain,
+  count: number,
+  clustered: boolean,
+  rest: { fatalDefects: number; clustering: number; seed: number },
+): RepairMonteCarloRequest {
   return {
-    count,
-    rows: domain.rows,
-    columns: domain.columns,
+    layout: sharedDomainLayout(
+      count,
+      domain.rows,
+      domain.columns,
+      clustered ? domain.faults : NONE,
+      clustered ? NONE : domain.faults,
+    ),
+    copies: 1,
     spareRows: domain.spareRows,
     spareColumns: domain.spareColumns,
-    defectFaults: clustered ? domain.faults : NONE,
-    parametricFaults: clustered ? NONE : domain.faults,
+    ...rest,
   };
 }
 
@@ -40,7 +51,7 @@ describe('Monte-Carlo repair estimate against the closed forms', () => {
     };
     const exact = dieRepairProbability([{ count: 32, domain }], rowColumnRepairProbability);
     const mc = estimateRepairProbability(
-      { classes: [mcClass(domain, 32)], fatalDefects: 0, clustering: Infinity, seed: 11 },
+      mcRequest(domain, 32, true, { fatalDefects: 0, clustering: Infinity, seed: 11 }),
       20_000,
     );
     expect(mc.trials).toBe(20_000);
@@ -58,7 +69,7 @@ describe('Monte-Carlo repair estimate against the closed forms', () => {
     };
     const exact = rowColumnRepairProbability(domain);
     const mc = estimateRepairProbability(
-      { classes: [mcClass(domain, 1, false)], fatalDefects: 0, clustering: Infinity, seed: 5 },
+      mcRequest(domain, 1, false, { fatalDefects: 0, clustering: Infinity, seed: 5 }),
       20_000,
     );
     expect(exact).toBeGreaterThanOrEqual(mc.low);
@@ -75,7 +86,7 @@ describe('Monte-Carlo repair estimate against the closed forms', () => {
     };
     const sparse = dieRepairProbability([{ count: 8, domain }], sparseRepairProbability);
     const mc = estimateRepairProbability(
-      { classes: [mcClass(domain, 8, false)], fatalDefects: 0, clustering: Infinity, seed: 7 },
+      mcRequest(domain, 8, false, { fatalDefects: 0, clustering: Infinity, seed: 7 }),
       20_000,
     );
     expect(sparse).toBeGreaterThanOrEqual(mc.low);
@@ -93,7 +104,7 @@ describe('Monte-Carlo repair estimate against the closed forms', () => {
     const perDie = 64 * (0.01 + 0.002 + 0.003) + 0.2;
     const expected = negativeBinomialYield(perDie, 1, 1.5);
     const mc = estimateRepairProbability(
-      { classes: [mcClass(domain, 64)], fatalDefects: 0.2, clustering: 1.5, seed: 3 },
+      mcRequest(domain, 64, true, { fatalDefects: 0.2, clustering: 1.5, seed: 3 }),
       20_000,
     );
     expect(expected).toBeGreaterThanOrEqual(mc.low);
@@ -118,7 +129,7 @@ describe('Monte-Carlo repair estimate against the closed forms', () => {
       alpha,
     );
     const mc = estimateRepairProbability(
-      { classes: [mcClass(domain, 50)], fatalDefects: 0, clustering: alpha, seed: 9 },
+      mcRequest(domain, 50, true, { fatalDefects: 0, clustering: alpha, seed: 10 }),
       20_000,
     );
     expect(exact).toBeGreaterThanOrEqual(mc.low);
@@ -127,23 +138,18 @@ describe('Monte-Carlo repair estimate against the closed forms', () => {
 });
 
 describe('Monte-Carlo mechanics', () => {
-  const request = {
-    classes: [
-      mcClass(
-        {
-          rows: 512,
-          columns: 512,
-          spareRows: 1,
-          spareColumns: 1,
-          faults: { cells: 0.02, rows: 0.005, columns: 0.005 },
-        },
-        256,
-      ),
-    ],
-    fatalDefects: 0.05,
-    clustering: 2,
-    seed: 42,
-  };
+  const request = mcRequest(
+    {
+      rows: 512,
+      columns: 512,
+      spareRows: 1,
+      spareColumns: 1,
+      faults: { cells: 0.02, rows: 0.005, columns: 0.005 },
+    },
+    256,
+    true,
+    { fatalDefects: 0.05, clustering: 2, seed: 42 },
+  );
 
   it('the result depends on the seed only, not on how the trials are chunked', () => {
     const whole = new RepairSimulation(request).run(5000);
@@ -180,7 +186,8 @@ describe('Monte-Carlo mechanics', () => {
             const make = (spareRows: number, spareColumns: number) => ({
               ...request,
               seed,
-              classes: [{ ...(request.classes[0] as MonteCarloDomainClass), spareRows, spareColumns }],
+              spareRows,
+              spareColumns,
             });
             const base = estimateRepairProbability(make(r, c), 400).repaired;
             expect(estimateRepairProbability(make(r + 1, c), 400).repaired).toBeGreaterThanOrEqual(base);

@@ -1,0 +1,241 @@
+import type { RepairSettings } from '../../model/repair';
+import type { FaultCounts } from '../physics/faultRates';
+import { domainFaults, type DomainFaults, type RepairLayout, type RepairTile } from '../physics/repairLayout';
+import type { MatTable } from './matTable';
+
+/**
+ * The repair domains of one floorplan copy with what a spare costs in each. Rows are repaired per mat, per
+ * mat row or per floorplan (the setting); columns per sense-amplifier strip segment: a spare column is a
+ * spare sense amplifier in the strip with its bit-line pair (or open bit line) in every mat the strip
+ * senses, so it replaces any column of the strip, on either side.
+ */
+export interface RepairPlan {
+  /** Row domains, identical ones counted together; a spare row costs domain mat area / word lines (m²). */
+  readonly rowClasses: readonly RepairDomainClass[];
+  /**
+   * Column domains (strip segments), identical ones counted together; a spare column costs one column of
+   * cells in the mats of each side of the strip (their area / columns) and one sense amplifier's share of
+   * the strip (strip area / columns) (m²).
+   */
+  readonly columnClasses: readonly RepairDomainClass[];
+  /** Every domain and tile of one floorplan copy, for the Monte Carlo; null where only the closed form is wanted. */
+  readonly layout: RepairLayout | null;
+}
+
+/** Identical repair domains of one kind: how many per floorplan copy, their faults and a spare's area. */
+export interface RepairDomainClass {
+  readonly count: number;
+  readonly domain: DomainFaults;
+  /** Area of one spare line of the domain (m²). */
+  readonly spareArea: number;
+}
+
+/** Domains with their spare areas, identical ones counted together. */
+function classesOf(domains: readonly DomainFaults[], spareArea: readonly number[]): RepairDomainClass[] {
+  const classes = new Map<string, { count: number; domain: DomainFaults; spareArea: number }>();
+  domains.forEach((d, i) => {
+    const area = spareArea[i] ?? 0;
+    const key = `${d.lines},${d.defectLines},${d.parametricLines},${d.defectCells},${d.parametricCells},${area}`;
+    const found = classes.get(key);
+    if (found) found.count++;
+    else classes.set(key, { count: 1, domain: d, spareArea: area });
+  });
+  return [...classes.values()];
+}
+
+/** One mat's lines, outline area and expected faults (from its figures and the repair settings). */
+export interface MatShare {
+  readonly rows: number;
+  readonly columns: number;
+  readonly area: number;
+  readonly defects: FaultCounts;
+  readonly parametric: FaultCounts;
+}
+
+/** Positions closer than this share a mat-row band (m). */
+const BAND_GRID = 1e-9;
+
+const scaled = (f: FaultCounts, s: number): FaultCounts => ({
+  cells: f.cells * s,
+  rows: f.rows * s,
+  columns: f.columns * s,
+});
+
+/** A column domain while it is gathered: columns and area on each side of its strip, and the strip. */
+interface StripSides {
+  index: number;
+  columns: [number, number];
+  cellArea: [number, number];
+  stripArea: number;
+}
+
+/**
+ * The repair plan of an evaluated floorplan. Row domains: each mat, the mats of one band along the word
+ * lines (same start across them, as the refresh rows count them), or every mat. Column domains: each
+ * sense-amplifier strip that senses a mat (from the report's serving table); a mat's columns are shared
+ * evenly between the strips at its bit-line ends (interleaved sense amplifiers), and the mats on the two
+ * sides of a strip share its sense amplifiers, so the strip has as many columns as its fuller side. A mat
+ * no strip senses keeps its own column domain.
+ */
+export function reportRepairPlan(
+  mats: MatTable,
+  settings: RepairSettings,
+  shareOf: (k: number) => MatShare,
+): RepairPlan {
+  const rowIndex = new Map<string, number>();
+  const rowDomainRows: number[] = [];
+  const rowArea: number[] = [];
+  const strips = new Map<number, StripSides>();
+  const lonely: { index: number; columns: number; area: number }[] = [];
+  let columnDomains = 0;
+  const tiles: RepairTile[] = [];
+  for (let k = 0; k < mats.count; k++) {
+    const share = shareOf(k);
+    const block = mats.blocks[mats.position[k] ?? -1];
+    const vertical = block?.type === 'mat' && block.bitlineAxis === 'vertical';
+    let key: string;
+    if (settings.repairDomain === 'bank') key = 'bank';
+    else if (settings.repairDomain === 'mat' || !block) key = `mat${k}`;
+    else key = `${vertical ? 'v' : 'h'}${Math.round((vertical ? block.y : block.x) / BAND_GRID)}`;
+    let rowDomain = rowIndex.get(key);
+    if (rowDomain === undefined) {
+      rowDomain = rowDomainRows.length;
+      rowIndex.set(key, rowDomain);
+      rowDomainRows.push(0);
+      rowArea.push(0);
+    }
+    const rowOffset = rowDomainRows[rowDomain] as number;
+    rowDomainRows[rowDomain] = rowOffset + share.rows;
+    rowArea[rowDomain] = (rowArea[rowDomain] as number) + share.area;
+
+    const from = mats.servingOffsets[3 * k] ?? 0;
+    const to = mats.servingOffsets[3 * k + 1] ?? 0;
+    const stripCount = to - from;
+    const tile = (columnDomain: number, columnOffset: number, columns: number, part: number): RepairTile => ({
+      rowDomain,
+      rowOffset,
+      rows: share.rows,
+      columnDomain,
+      columnOffset,
+      columns,
+      defects: scaled(share.defects, part),
+      parametric: scaled(share.parametric, part),
+    });
+    if (stripCount === 0) {
+      lonely.push({ index: columnDomains, columns: share.columns, area: share.area });
+      tiles.push(tile(columnDomains++, 0, share.columns, 1));
+      continue;
+    }
+    const columns = share.columns / stripCount;
+    for (let p = from; p < to; p++) {
+      const position = mats.servingPositions[p] as number;
+      const strip = mats.blocks[position];
+      let sides = strips.get(position);
+      if (!sides) {
+        const stripArea = strip && strip.type !== 'mat' ? strip.width * strip.height : 0;
+        sides = { index: columnDomains++, columns: [0, 0], cellArea: [0, 0], stripArea };
+        strips.set(position, sides);
+      }
+      // The mat lies after the strip (side 1) when its start is beyond the strip's middle on the bit-line axis.
+      let side: 0 | 1 = 0;
+      if (strip && block && strip.type !== 'mat') {
+        const middle = vertical ? strip.y + strip.height / 2 : strip.x + strip.width / 2;
+        if ((vertical ? block.y : block.x) > middle) side = 1;
+      }
+      tiles.push(tile(sides.index, sides.columns[side], columns, 1 / stripCount));
+      sides.columns[side] += columns;
+      sides.cellArea[side] += share.area / stripCount;
+    }
+  }
+  const columnDomainColumns = new Array<number>(columnDomains).fill(0);
+  const spareColumnArea = new Array<number>(columnDomains).fill(0);
+  for (const s of strips.values()) {
+    const n = Math.max(s.columns[0], s.columns[1]);
+    columnDomainColumns[s.index] = n;
+    let area = n > 0 ? s.stripArea / n : 0;
+    for (const side of [0, 1] as const) {
+      if (s.columns[side] > 0) area += s.cellArea[side] / s.columns[side];
+    }
+    spareColumnArea[s.index] = area;
+  }
+  for (const m of lonely) {
+    columnDomainColumns[m.index] = m.columns;
+    spareColumnArea[m.index] = m.columns > 0 ? m.area / m.columns : 0;
+  }
+  const layout: RepairLayout = { rowDomainRows, columnDomainColumns, tiles };
+  const faults = domainFaults(layout);
+  const spareRowArea = rowArea.map((a, d) => {
+    const rows = rowDomainRows[d] as number;
+    return rows > 0 ? a / rows : 0;
+  });
+  return {
+    rowClasses: classesOf(faults.rows, spareRowArea),
+    columnClasses: classesOf(faults.columns, spareColumnArea),
+    layout,
+  };
+}
+
+/** A grid of identical mats as gridFloorplan lays it out: its shape and strips. */
+export interface GridRepairShape {
+  readonly matRows: number;
+  readonly matColumns: number;
+  /** Area of one sense-amplifier strip (one mat wide) (m²). */
+  readonly stripArea: number;
+}
+
+/**
+ * The repair plan of a grid of identical mats with a sense-amplifier strip above and below every mat (the
+ * inner strips shared by the mats on both sides), as reportRepairPlan finds it in such a floorplan, in
+ * classes only (the explorer's closed form needs no tiles).
+ */
+export function gridRepairPlan(
+  shape: GridRepairShape,
+  settings: RepairSettings,
+  share: MatShare,
+): RepairPlan {
+  const { matRows, matColumns } = shape;
+  const mats = matRows * matColumns;
+  const rowDomains =
+    settings.repairDomain === 'mat' ? mats : settings.repairDomain === 'matRow' ? matRows : Math.min(1, mats);
+  const perRowDomain = rowDomains > 0 ? mats / rowDomains : 0;
+  const rowDomain: DomainFaults = {
+    lines: perRowDomain * share.rows,
+    defectLines: perRowDomain * share.defects.rows,
+    parametricLines: perRowDomain * share.parametric.rows,
+    defectCells: perRowDomain * share.defects.cells,
+    parametricCells: perRowDomain * share.parametric.cells,
+  };
+  const half = share.columns / 2;
+  // A strip senses half the columns of each mat beside it: one mat at the edges, two inside.
+  const strip = (sides: number): DomainFaults => ({
+    lines: half,
+    defectLines: sides * 0.5 * share.defects.columns,
+    parametricLines: sides * 0.5 * share.parametric.columns,
+    defectCells: sides * 0.5 * share.defects.cells,
+    parametricCells: sides * 0.5 * share.parametric.cells,
+  });
+  const spareColumnArea = (sides: number) =>
+    half > 0 ? shape.stripArea / half + sides * (share.area / 2 / half) : 0;
+  const columnClasses: RepairDomainClass[] = [];
+  if (mats > 0) {
+    columnClasses.push({ count: 2 * matColumns, domain: strip(1), spareArea: spareColumnArea(1) });
+    if (matRows > 1) {
+      columnClasses.push({
+        count: (matRows - 1) * matColumns,
+        domain: strip(2),
+        spareArea: spareColumnArea(2),
+      });
+    }
+  }
+  const rowClasses: RepairDomainClass[] =
+    rowDomains > 0
+      ? [
+          {
+            count: rowDomains,
+            domain: rowDomain,
+            spareArea: rowDomain.lines > 0 ? (perRowDomain * share.area) / rowDomain.lines : 0,
+          },
+        ]
+      : [];
+  return { rowClasses, columnClasses, layout: null };
+}
