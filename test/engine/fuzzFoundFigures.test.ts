@@ -50,6 +50,10 @@ describe('figures of designs the fuzzer found', () => {
     const cycle = explainTotal('refreshCycleTime', report, design);
     expect(cycle?.missingReason).toMatch(/no row cycle time/);
     expect(explainTotal('refreshBusyFraction', report, design)?.missingReason).toMatch(/no row cycle time/);
+    // The slowest tRCD and tRC rows (added after the fuzz first ran) say why as well.
+    expect(Number.isNaN(report.totals.worstRowCycleTime)).toBe(true);
+    expect(explainTotal('worstRowCycleTime', report, design)?.missingReason).toMatch(/turn-on level/);
+    expect(explainTotal('worstRowToColumnDelay', report, design)?.missingReason).toMatch(/turn-on level/);
     expect(figureProblems(report, design)).toEqual([]);
   });
 });

@@ -31,6 +31,8 @@ export function totalMissingReason(key: string, t: Totals): string {
       ? 'a mat has no margin to lose: its fresh signal already falls short'
       : 'no mat with a usable bit needs refresh';
   if (t.usableBits <= 0) return 'no usable bit: nothing is sensed';
+  if (/^worst(WordlineTurnOn|RowToColumnDelay|RowCycleTime)$/.test(key))
+    return 'no sensed mat completes this step: its word line never rises to the turn-on level (Vpre + Vt), or there is no signal to latch';
   if (key.startsWith('refresh') && Number.isNaN(t.refresh.rowCycleTime))
     return 'no row cycle time: no sensed mat completes a row cycle (its word line never rises to the turn-on level, or there is no signal to latch), so a refresh command has no length';
   return 'no mat has this figure';
