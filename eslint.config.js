@@ -100,6 +100,22 @@ const ENGINE_PART_RULES = [
   };
 });
 
+/**
+ * Inside the canvas: the gestures (pure state machines, tested in Node) and the painters (which also draw
+ * the PNG on a plain 2D canvas) use no UI package; they keep the canvas's own patterns too.
+ */
+const CANVAS_PART_RULES = ['gestures', 'paint'].map((part) => {
+  const canvas = layerRule('canvas').rules['no-restricted-imports'][1].patterns;
+  const own = {
+    group: uiPackages,
+    message: `canvas/${part} stays free of React, Konva, zustand and d3 (see its README.md).`,
+  };
+  return {
+    files: [`src/canvas/${part}/**`],
+    rules: { 'no-restricted-imports': ['error', { patterns: [...canvas, own] }] },
+  };
+});
+
 export default tseslint.config(
   { ignores: ['dist', 'node_modules', 'reports', 'test-results', 'playwright-report'] },
   js.configs.recommended,
@@ -121,4 +137,5 @@ export default tseslint.config(
   },
   ...FOLDERS.map(layerRule),
   ...ENGINE_PART_RULES,
+  ...CANVAS_PART_RULES,
 );
