@@ -1,3 +1,4 @@
+import { FoldButton } from './FoldButton';
 import { lazy, Suspense, useState } from 'react';
 import { ChecksPanel } from '../panels/ChecksPanel';
 import { MetricsPanel } from '../panels/MetricsPanel';
@@ -31,17 +32,7 @@ export function Sidebar() {
   if (collapsed) {
     return (
       <aside className="sidebar collapsed" aria-label="Panels (folded)">
-        <button
-          type="button"
-          className="fold-button"
-          data-testid="expand-sidebar"
-          title="Show the panels"
-          aria-label="Show the panels"
-          aria-expanded={false}
-          onClick={() => setCollapsed(false)}
-        >
-          «
-        </button>
+        <FoldButton name="sidebar" what="the panels" folded symbol="«" onToggle={setCollapsed} />
       </aside>
     );
   }
@@ -56,17 +47,7 @@ export function Sidebar() {
           className="tabs"
           onSelect={setTab}
         />
-        <button
-          type="button"
-          className="fold-button"
-          data-testid="collapse-sidebar"
-          title="Fold the panels away"
-          aria-label="Fold the panels away"
-          aria-expanded={true}
-          onClick={() => setCollapsed(true)}
-        >
-          »
-        </button>
+        <FoldButton name="sidebar" what="the panels" folded={false} symbol="»" onToggle={setCollapsed} />
       </div>
       <TabPanels tabs={TABS} selected={tab} idPrefix="sidebar">
         {tab === 'floorplan' && (

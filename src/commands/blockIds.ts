@@ -1,4 +1,4 @@
-import type { Block } from '../model/block';
+import type { Block, BlockType } from '../model/block';
 import type { Design } from '../model/design';
 
 /**
@@ -37,12 +37,26 @@ export function nameAllocator(design: Design): (name: string) => string {
   };
 }
 
-/** The next free "prefix-N" id and its number (N from 1), for newly drawn blocks. */
-export function nextNumberedId(design: Design, prefix: string): { id: string; number: number } {
+/** How a new block of each type is called: its id prefix and its name, numbered alike ("sa-3", "SA 3"). */
+const NEW_BLOCK_NAMING: Readonly<Record<BlockType, { readonly prefix: string; readonly name: string }>> = {
+  mat: { prefix: 'mat', name: 'Mat' },
+  senseAmpStrip: { prefix: 'sa', name: 'SA' },
+  wordlineDriverStrip: { prefix: 'swd', name: 'SWD' },
+  rowDecoder: { prefix: 'rowdec', name: 'Row decoder' },
+  columnDecoder: { prefix: 'coldec', name: 'Column decoder' },
+  spacer: { prefix: 'spacer', name: 'Spacer' },
+};
+
+/**
+ * The id and name of a block of `type` drawn, placed or typed in now: the first free number N from 1 for
+ * the type's id prefix ("sa-N"), the name with the same number ("SA N").
+ */
+export function newBlockIdentity(design: Design, type: BlockType): { id: string; name: string } {
+  const naming = NEW_BLOCK_NAMING[type];
   const taken = new Set(design.blocks.map((b) => b.id));
   let n = 1;
-  while (taken.has(`${prefix}-${n}`)) n++;
-  return { id: `${prefix}-${n}`, number: n };
+  while (taken.has(`${naming.prefix}-${n}`)) n++;
+  return { id: `${naming.prefix}-${n}`, name: `${naming.name} ${n}` };
 }
 
 /** Ids of blocks in `after` that `before` did not have, in document order: what a command added. */

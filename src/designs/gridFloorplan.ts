@@ -1,6 +1,6 @@
 import type { Block, BitlineAxis, Strip } from '../model/block';
 import type { CellDefinition } from '../model/cell';
-import { matGeometry } from '../geometry/matGeometry';
+import { unplacedMatGeometry } from '../geometry/matGeometry';
 
 /** What to tile: a grid of identical mats with their strips and decoders. Sizes in metres. */
 export interface GridFloorplanSpec {
@@ -27,21 +27,7 @@ export interface GridFloorplanSpec {
  * each block sits ("mat-r2c3"), so generated floorplans stay readable.
  */
 export function gridFloorplan(spec: GridFloorplanSpec): Block[] {
-  const probe = matGeometry(
-    {
-      id: 'probe',
-      name: '',
-      type: 'mat',
-      x: 0,
-      y: 0,
-      cellId: spec.cell.id,
-      cellsPerBitline: spec.cellsPerBitline,
-      cellsPerWordline: spec.cellsPerWordline,
-      bitlineAxis: 'vertical',
-    },
-    spec.cell,
-    spec.featureSize,
-  );
+  const probe = unplacedMatGeometry(spec.cell, spec.cellsPerBitline, spec.cellsPerWordline, spec.featureSize);
   const matW = probe.width;
   const matH = probe.height;
   const sa = spec.senseAmpStripHeight;

@@ -1,5 +1,4 @@
-import { matGeometry } from '../geometry/matGeometry';
-import type { Mat } from '../model/block';
+import { unplacedMatGeometry } from '../geometry/matGeometry';
 import { MAX_CELLS_PER_LINE } from '../model/blockBasics';
 import type { CellDefinition } from '../model/cell';
 import { isGainCell } from '../model/cellBasics';
@@ -138,18 +137,7 @@ function betterGrid(a: GridChoice, b: GridChoice): boolean {
 export function planPartition(spec: PartitionSpec): PlanResult {
   const problem = checkSpec(spec);
   if (problem) return { ok: false, error: problem };
-  const probe: Mat = {
-    id: 'probe',
-    name: '',
-    type: 'mat',
-    x: 0,
-    y: 0,
-    cellId: spec.cell.id,
-    cellsPerBitline: spec.cellsPerBitline,
-    cellsPerWordline: spec.cellsPerWordline,
-    bitlineAxis: 'vertical',
-  };
-  const g = matGeometry(probe, spec.cell, spec.featureSize);
+  const g = unplacedMatGeometry(spec.cell, spec.cellsPerBitline, spec.cellsPerWordline, spec.featureSize);
   const bitsPerMat = g.bits;
   const lossRows = losesEdgeBits(spec.cell) ? 1 : 0;
   // Mats that must be readable; with an open array the edge rows add one row's worth of lost halves.

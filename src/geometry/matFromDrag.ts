@@ -1,8 +1,8 @@
-import type { BitlineAxis, Mat } from '../model/block';
+import type { BitlineAxis } from '../model/block';
 import { MAX_CELLS_PER_LINE } from '../model/blockBasics';
 import type { CellDefinition } from '../model/cell';
 import { matCellStep } from './cellPitch';
-import { matGeometry } from './matGeometry';
+import { unplacedMatGeometry } from './matGeometry';
 import type { Rect } from './rect';
 
 /** A mat sized from a drag: its cell counts and the rectangle they give (m). */
@@ -53,18 +53,7 @@ export function matFromDrag(
   // With vertical bit lines x runs along the word lines (cells per word line); horizontal swaps.
   const cellsPerWordline = axis === 'vertical' ? cellsAlongX : cellsAlongY;
   const cellsPerBitline = axis === 'vertical' ? cellsAlongY : cellsAlongX;
-  const probe: Mat = {
-    id: 'drag',
-    name: '',
-    type: 'mat',
-    x: 0,
-    y: 0,
-    cellId: cell.id,
-    cellsPerBitline,
-    cellsPerWordline,
-    bitlineAxis: axis,
-  };
-  const g = matGeometry(probe, cell, featureSize);
+  const g = unplacedMatGeometry(cell, cellsPerBitline, cellsPerWordline, featureSize, axis);
   const x = pointer.x >= anchor.x ? anchor.x : anchor.x - g.width;
   const y = pointer.y >= anchor.y ? anchor.y : anchor.y - g.height;
   return {

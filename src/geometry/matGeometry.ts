@@ -1,6 +1,6 @@
 import type { CellDefinition } from '../model/cell';
 import { cellPitches, crossingOccupancy } from '../model/cellBasics';
-import type { Mat } from '../model/block';
+import type { BitlineAxis, Mat } from '../model/block';
 import type { Rect } from './rect';
 
 /** Everything about a mat's shape that follows from its cell, its cell counts and F. Lengths in metres. */
@@ -45,6 +45,31 @@ export function matGeometry(mat: Mat, cell: CellDefinition, featureSize: number)
     width: vertical ? wordlineLength : bitlineLength,
     height: vertical ? bitlineLength : wordlineLength,
   };
+}
+
+/**
+ * The shape of a mat of `cell` with these counts before any such mat exists: what a drag shows and the
+ * grid tiler and the partition planner size their grids by (their bit lines run vertically).
+ */
+export function unplacedMatGeometry(
+  cell: CellDefinition,
+  cellsPerBitline: number,
+  cellsPerWordline: number,
+  featureSize: number,
+  bitlineAxis: BitlineAxis = 'vertical',
+): MatGeometry {
+  const mat: Mat = {
+    id: 'probe',
+    name: '',
+    type: 'mat',
+    x: 0,
+    y: 0,
+    cellId: cell.id,
+    cellsPerBitline,
+    cellsPerWordline,
+    bitlineAxis,
+  };
+  return matGeometry(mat, cell, featureSize);
 }
 
 export function matRect(mat: Mat, geometry: MatGeometry): Rect {

@@ -1,5 +1,5 @@
 import { addBlocks } from '../../commands/addBlocks';
-import { nextNumberedId } from '../../commands/blockIds';
+import { newBlockIdentity } from '../../commands/blockIds';
 import { matLinePitch } from '../../geometry/cellPitch';
 import { matFromDrag, type CellRounding, type DraggedMat } from '../../geometry/matFromDrag';
 import { matGeometry } from '../../geometry/matGeometry';
@@ -78,10 +78,8 @@ export class DrawMatGesture implements Gesture {
   mat(): Mat | null {
     const cell = this.cell;
     if (!cell) return null;
-    const { id, number } = nextNumberedId(this.ctx.design, 'mat');
     const base = {
-      id,
-      name: `Mat ${number}`,
+      ...newBlockIdentity(this.ctx.design, 'mat'),
       type: 'mat' as const,
       cellId: cell.id,
       bitlineAxis: this.ctx.options.bitlineAxis,

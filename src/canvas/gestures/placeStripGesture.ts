@@ -1,5 +1,5 @@
 import { addBlocks } from '../../commands/addBlocks';
-import { nextNumberedId } from '../../commands/blockIds';
+import { newBlockIdentity } from '../../commands/blockIds';
 import type { Rect } from '../../geometry/rect';
 import { snapPoint, type SnapTargets } from '../../geometry/snapping';
 import { decoderSides, fitDecoderAtPoint, stackOutlines, type StackFit } from '../../geometry/stackFit';
@@ -22,15 +22,6 @@ import {
   type Modifiers,
   type WorldPoint,
 } from './gesture';
-
-/** Id stems and display names of placed blocks. */
-export const NAMING: Record<PlacementTool, { prefix: string; name: string }> = {
-  senseAmpStrip: { prefix: 'sa', name: 'SA' },
-  wordlineDriverStrip: { prefix: 'swd', name: 'SWD' },
-  rowDecoder: { prefix: 'rowdec', name: 'Row decoder' },
-  columnDecoder: { prefix: 'coldec', name: 'Column decoder' },
-  spacer: { prefix: 'spacer', name: 'Spacer' },
-};
 
 /** Strips drawn across (wider than tall) when placed away from any mat; the others stand upright. */
 const LIES_ACROSS: Record<PlacementTool, boolean> = {
@@ -108,9 +99,7 @@ export function placementAt(
 
 /** The block a placement tool adds for a rectangle. */
 export function placedStrip(ctx: EditorContext, tool: PlacementTool, rect: Rect): Strip {
-  const naming = NAMING[tool];
-  const { id, number } = nextNumberedId(ctx.design, naming.prefix);
-  return { id, name: `${naming.name} ${number}`, type: tool, ...rect };
+  return { ...newBlockIdentity(ctx.design, tool), type: tool, ...rect };
 }
 
 /**

@@ -1,3 +1,4 @@
+import { FoldButton } from '../../app/FoldButton';
 import { useEffect, useRef, useState, type KeyboardEvent } from 'react';
 import { OWN_KEYS_ATTRIBUTE } from '../../app/a11y/keyOwnership';
 import { deleteBlocks } from '../../commands/deleteBlocks';
@@ -113,17 +114,7 @@ export function BlockOutline() {
   if (collapsed) {
     return (
       <section className="outline collapsed" aria-label="Block list (folded)">
-        <button
-          type="button"
-          className="fold-button"
-          data-testid="expand-outline"
-          title="Show the block list"
-          aria-label="Show the block list"
-          aria-expanded={false}
-          onClick={() => setCollapsed(false)}
-        >
-          ☰
-        </button>
+        <FoldButton name="outline" what="the block list" folded symbol="☰" onToggle={setCollapsed} />
       </section>
     );
   }
@@ -167,17 +158,7 @@ export function BlockOutline() {
         <h2 id="outline-heading">
           Blocks <span className="count">{blocks.length.toLocaleString('en-US')}</span>
         </h2>
-        <button
-          type="button"
-          className="fold-button"
-          data-testid="collapse-outline"
-          title="Fold the block list away"
-          aria-label="Fold the block list away"
-          aria-expanded={true}
-          onClick={() => setCollapsed(true)}
-        >
-          «
-        </button>
+        <FoldButton name="outline" what="the block list" folded={false} symbol="«" onToggle={setCollapsed} />
       </div>
       <p className="hint outline-hint" id="outline-keys">
         ↑ ↓ move · Enter select and frame · Space add to selection · Delete delete

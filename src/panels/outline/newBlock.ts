@@ -1,5 +1,4 @@
-import { NAMING } from '../../canvas/gestures/placeStripGesture';
-import { nextNumberedId } from '../../commands/blockIds';
+import { newBlockIdentity } from '../../commands/blockIds';
 import type { BitlineAxis, Block, BlockType } from '../../model/block';
 import type { Design } from '../../model/design';
 import { parseQuantity, type Quantity } from '../../model/units';
@@ -59,12 +58,10 @@ export function newBlockFromForm(design: Design, form: NewBlockForm): NewBlockRe
     const cellsPerBitline = read('cellsPerBitline', count(form.cellsPerBitline));
     const cellsPerWordline = read('cellsPerWordline', count(form.cellsPerWordline));
     if (Object.keys(errors).length > 0) return { ok: false, errors };
-    const { id, number } = nextNumberedId(design, 'mat');
     return {
       ok: true,
       block: {
-        id,
-        name: `Mat ${number}`,
+        ...newBlockIdentity(design, 'mat'),
         type: 'mat',
         x,
         y,
@@ -80,10 +77,8 @@ export function newBlockFromForm(design: Design, form: NewBlockForm): NewBlockRe
   if (!(width > 0)) errors.width ??= 'width must be above zero';
   if (!(height > 0)) errors.height ??= 'height must be above zero';
   if (Object.keys(errors).length > 0) return { ok: false, errors };
-  const naming = NAMING[form.type];
-  const { id, number } = nextNumberedId(design, naming.prefix);
   return {
     ok: true,
-    block: { id, name: `${naming.name} ${number}`, type: form.type, x, y, width, height },
+    block: { ...newBlockIdentity(design, form.type), type: form.type, x, y, width, height },
   };
 }
