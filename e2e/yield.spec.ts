@@ -19,6 +19,8 @@ test('yield tab: figures explain themselves, fewer spares lower the repair proba
   await page.getByTestId('total-dieYield').click();
   await expect(page.getByTestId('explanation')).toContainText('(1 + λ/α)^(−α)');
   await expect(page.getByTestId('explanation')).toContainText('Source:');
+  // With spares and single-cell faults the closed form is a lower bound, and the panel says so.
+  await expect(page.getByTestId('repair-closed-form-kind')).toContainText('LOWER BOUND');
 
   const spares = page.getByTestId('repair-spareRows');
   await spares.fill('-1');
@@ -37,8 +39,11 @@ test('yield tab: figures explain themselves, fewer spares lower the repair proba
     formatQuantity(withoutSpares.repairProbability, 'percent'),
   );
 
-  await page.getByTestId('repair-mc-run').click();
-  await expect(page.getByTestId('repair-mc-result')).toContainText('10,000 trials', { timeout: 30_000 });
+  // The estimate reruns by itself after the edits; until then the last one is marked stale.
+  await expect(page.getByTestId('repair-closed-form-kind')).toContainText('exact');
+  await expect(page.getByTestId('repair-mc-result')).toContainText(/^Estimate: .*10,000 trials/, {
+    timeout: 30_000,
+  });
   const text = (await page.getByTestId('repair-mc-result').textContent()) ?? '';
   // The numbers: estimate, "95 %" of the label, then the interval ends.
   const [low, high] = [...text.matchAll(/([\d.]+) %/g)].slice(2, 4).map((m) => Number(m[1]) / 100);
@@ -49,6 +54,7 @@ test('yield tab: figures explain themselves, fewer spares lower the repair proba
   const half = (hi - lo) / 2;
   expect(withoutSpares.dieYield).toBeGreaterThanOrEqual(lo - half - 1e-4);
   expect(withoutSpares.dieYield).toBeLessThanOrEqual(hi + half + 1e-4);
+  await page.getByTestId('repair-monte-carlo').scrollIntoViewIfNeeded();
   await page.screenshot({ path: 'test-results/yield-panel.png', fullPage: true });
 });
 

@@ -1,4 +1,4 @@
-import { useMemo, useState } from 'react';
+import { useEffect, useMemo, useState } from 'react';
 import { setRepairSetting } from '../commands/setRepairSetting';
 import { explainTotal, repairSettingsOf, TOTAL_FIGURE_PANEL, yieldFiguresOf } from '../engine';
 import { REPAIR_FIELDS } from '../model/fieldCatalog';
@@ -18,12 +18,14 @@ const DOMAIN_OPTIONS: readonly SelectOption<RepairDomainKind>[] = REPAIR_DOMAINS
 
 const YIELD_KEYS = TOTAL_FIGURE_PANEL.find((g) => g.title === 'Yield')?.keys ?? [];
 
-/** Trials of one Monte-Carlo run. */
-const TRIALS = 10_000;
+/** Trials of the automatic Monte-Carlo run after each edit, and of a refining run on request. */
+const AUTO_TRIALS = 10_000;
+const MORE_TRIALS = 100_000;
 
 /**
- * Defects, redundancy and wafer: the yield inputs, the yield figures with their explanations, and a
- * Monte-Carlo repair estimate that solves each faulty domain's spare allocation exactly.
+ * Defects, redundancy and wafer: the yield inputs, the yield figures with their explanations, and the
+ * Monte-Carlo die-yield estimate that solves each die's spare allocation exactly; it reruns in a worker
+ * after every edit (debounced; the last estimate is marked stale until the new one arrives).
  */
 export function YieldPanel() {
   const design = useAppStore((s) => s.history.present);
@@ -34,7 +36,14 @@ export function YieldPanel() {
   const [openKey, setOpenKey] = useState<string | null>(null);
   const mc = useRepairStore((s) => s.run);
   const startMc = useRepairStore((s) => s.start);
-  const stale = mc.request !== null && mc.request !== figures.monteCarlo;
+  const scheduleMc = useRepairStore((s) => s.schedule);
+  const cancelMc = useRepairStore((s) => s.cancel);
+  const request = figures.monteCarlo;
+  useEffect(() => {
+    if (request) scheduleMc(request, AUTO_TRIALS);
+  }, [request, scheduleMc]);
+  const stale = mc.result !== null && mc.resultRequest !== request;
+  const busy = mc.status === 'running' || mc.status === 'waiting';
   const result = mc.result;
 
   return (
@@ -78,31 +87,55 @@ export function YieldPanel() {
           ) : null;
         })}
       </div>
+      <p className="hint" data-testid="repair-closed-form-kind">
+        {figures.repairProbabilityIsExact
+          ? 'The repair probability and die yield above are exact for this model: only whole word lines and bit-line pairs fail (or there are no spares), and rows and columns are repaired independently.'
+          : 'The repair probability and die yield above are a LOWER BOUND: single faulty cells may take a spare row or a spare column, which couples row domains and strips, so the closed form counts only the better of "every cell by a row" and "every cell by a column". The Monte-Carlo estimate below solves every die exactly and is the figure to read.'}
+      </p>
       <div className="figure-group" data-testid="repair-monte-carlo">
-        <h4>Monte-Carlo repair check</h4>
+        <h4>Die yield by Monte Carlo</h4>
         <p className="hint">
-          Throws each die&apos;s faults {TRIALS.toLocaleString('en-US')} times and solves every faulty
-          domain&apos;s spare allocation exactly (must-repair, then a bounded search); periphery defects
+          Reruns in the background after each edit: throws each die&apos;s faults{' '}
+          {AUTO_TRIALS.toLocaleString('en-US')} times on the same row domains and strips, solves every
+          die&apos;s spare allocation exactly (must-repair, then a bounded search), periphery defects
           included.
         </p>
-        <button
-          type="button"
-          data-testid="repair-mc-run"
-          disabled={mc.status === 'running'}
-          onClick={() => figures.monteCarlo && startMc(figures.monteCarlo, TRIALS)}
-        >
-          {mc.status === 'running' ? 'Running…' : 'Estimate die yield by Monte Carlo'}
-        </button>
+        <p data-testid="repair-mc-status" aria-live="polite">
+          {mc.status === 'waiting' && 'Waiting for the edits to settle…'}
+          {mc.status === 'running' &&
+            `Running: ${(result && !stale ? result.trials : 0).toLocaleString('en-US')} of ${mc.trials.toLocaleString('en-US')} trials…`}
+          {mc.status === 'idle' && result && 'Stopped.'}
+        </p>
         {result && (
-          <p data-testid="repair-mc-result">
+          <p data-testid="repair-mc-result" className={stale ? 'stale' : undefined}>
+            {stale ? 'Stale (for the design before the last edit): ' : 'Estimate: '}
             {formatQuantity(result.estimate, 'percent')} (95 % interval{' '}
             {formatQuantity(result.low, 'percent')} – {formatQuantity(result.high, 'percent')}) over{' '}
             {result.trials.toLocaleString('en-US')} trials
-            {result.undecided > 0 ? `, ${result.undecided} undecided` : ''}
-            {mc.elapsed !== null ? ` in ${formatQuantity(mc.elapsed, 'time')}` : ''}
-            {stale ? ' — for the design before the last edit' : ''}
+            {result.undecided > 0 ? `, ${result.undecided} undecided (counted as not repaired)` : ''}
+            {mc.elapsed !== null && !busy ? ` in ${formatQuantity(mc.elapsed, 'time')}` : ''}
           </p>
         )}
+        <div className="button-row">
+          <button
+            type="button"
+            data-testid="repair-mc-run"
+            title={`Estimate again with ${MORE_TRIALS.toLocaleString('en-US')} trials for a narrower interval`}
+            disabled={!request || busy}
+            onClick={() => request && startMc(request, MORE_TRIALS)}
+          >
+            {`Refine: ${MORE_TRIALS.toLocaleString('en-US')} trials`}
+          </button>
+          <button
+            type="button"
+            data-testid="repair-mc-stop"
+            title="Stop the running estimate (the last result stays)"
+            disabled={!busy}
+            onClick={cancelMc}
+          >
+            Stop
+          </button>
+        </div>
         {mc.error && <p role="alert">{mc.error}</p>}
       </div>
       <p className="hint">

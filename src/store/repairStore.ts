@@ -3,16 +3,22 @@ import type { RepairMonteCarloRequest, RepairMonteCarloResult } from '../engine'
 import type { RepairCommand, RepairReport } from '../explore/repairProtocol';
 
 /**
- * Session state of the yield panel's Monte-Carlo repair estimate: not part of the document; a new run
- * replaces the last one and a changed design makes the shown estimate stale (the panel says so).
+ * Session state of the yield panel's Monte-Carlo repair estimate: not part of the document. The panel
+ * schedules a run after every edit (debounced); a new run replaces the last one, and until its first
+ * chunk arrives the last result stays shown, marked stale (it belongs to another request).
  */
-export type RepairRunStatus = 'idle' | 'running' | 'done' | 'failed';
+export type RepairRunStatus = 'idle' | 'waiting' | 'running' | 'done' | 'failed';
+
+/** Quiet time after an edit before the automatic estimate starts (ms). */
+export const REPAIR_DEBOUNCE_MS = 500;
 
 export interface RepairRun {
   readonly id: number;
   readonly status: RepairRunStatus;
-  /** The request the result belongs to (compared by identity to say whether it is stale). */
+  /** The request being estimated (waiting, running) or last estimated. */
   readonly request: RepairMonteCarloRequest | null;
+  /** The request the shown result belongs to (compared by identity to say whether it is stale). */
+  readonly resultRequest: RepairMonteCarloRequest | null;
   readonly trials: number;
   readonly result: RepairMonteCarloResult | null;
   readonly elapsed: number | null;
@@ -35,7 +41,14 @@ export const browserRepairWorker: RepairWorkerFactory = () =>
 
 export interface RepairState {
   readonly run: RepairRun;
+  /** Starts an estimate now, replacing any waiting or running one. */
   start(request: RepairMonteCarloRequest, trials: number): void;
+  /**
+   * Starts an estimate of `request` after `delay` ms unless another schedule or start comes first; does
+   * nothing when this request already has (or is getting) at least `trials` trials.
+   */
+  schedule(request: RepairMonteCarloRequest, trials: number, delay?: number): void;
+  /** Stops a waiting or running estimate; the last result stays. */
   cancel(): void;
 }
 
@@ -43,6 +56,7 @@ const IDLE: RepairRun = {
   id: 0,
   status: 'idle',
   request: null,
+  resultRequest: null,
   trials: 0,
   result: null,
   elapsed: null,
@@ -51,7 +65,10 @@ const IDLE: RepairRun = {
 
 export function createRepairStore(workerFactory: RepairWorkerFactory = browserRepairWorker) {
   let worker: RepairWorker | null = null;
+  let timer: ReturnType<typeof setTimeout> | null = null;
   const stop = () => {
+    if (timer !== null) clearTimeout(timer);
+    timer = null;
     worker?.terminate();
     worker = null;
   };
@@ -59,16 +76,37 @@ export function createRepairStore(workerFactory: RepairWorkerFactory = browserRe
     run: IDLE,
     start(request, trials) {
       stop();
-      const id = get().run.id + 1;
-      set({ run: { ...IDLE, id, status: 'running', request, trials } });
+      const last = get().run;
+      const id = last.id + 1;
+      // The last result stays, stale, until this run's first chunk replaces it.
+      set({
+        run: {
+          ...IDLE,
+          id,
+          status: 'running',
+          request,
+          trials,
+          result: last.result,
+          resultRequest: last.resultRequest,
+        },
+      });
       const w = workerFactory();
       worker = w;
       w.onmessage = (event) => {
         const message = event.data;
         if (message.runId !== id || get().run.id !== id) return;
-        if (message.type === 'progress') set({ run: { ...get().run, result: message.result } });
-        else if (message.type === 'done') {
-          set({ run: { ...get().run, status: 'done', result: message.result, elapsed: message.elapsed } });
+        if (message.type === 'progress') {
+          set({ run: { ...get().run, result: message.result, resultRequest: request } });
+        } else if (message.type === 'done') {
+          set({
+            run: {
+              ...get().run,
+              status: 'done',
+              result: message.result,
+              resultRequest: request,
+              elapsed: message.elapsed,
+            },
+          });
           stop();
         } else {
           set({ run: { ...get().run, status: 'failed', error: message.error } });
@@ -81,9 +119,21 @@ export function createRepairStore(workerFactory: RepairWorkerFactory = browserRe
       };
       w.postMessage({ type: 'start', runId: id, request, trials });
     },
+    schedule(request, trials, delay = REPAIR_DEBOUNCE_MS) {
+      const run = get().run;
+      const busy = run.status === 'waiting' || run.status === 'running' || run.status === 'done';
+      if (run.request === request && busy && run.trials >= trials) return;
+      stop();
+      set({ run: { ...run, id: run.id + 1, status: 'waiting', request, trials, error: null } });
+      timer = setTimeout(() => {
+        timer = null;
+        get().start(request, trials);
+      }, delay);
+    },
     cancel() {
       stop();
-      if (get().run.status === 'running') set({ run: { ...get().run, status: 'idle' } });
+      const status = get().run.status;
+      if (status === 'running' || status === 'waiting') set({ run: { ...get().run, status: 'idle' } });
     },
   }));
 }
