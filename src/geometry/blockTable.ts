@@ -70,9 +70,14 @@ export function blockTable(design: Design): BlockTable {
  * A copy of the table with some blocks replaced by new versions of themselves (same position in design
  * order, new place or size): what the design looks like during a gesture, without laying out the rest again.
  */
-export function withBlocksReplaced(base: BlockTable, replacements: ReadonlyMap<number, Block>): BlockTable {
-  const blocks = base.blocks.slice();
-  for (const [i, block] of replacements) blocks[i] = block;
+export function withBlocksReplaced(
+  base: BlockTable,
+  replacements: ReadonlyMap<number, Block>,
+  /** The new block list, when the caller has it already (it must hold the replacements). */
+  replaced?: readonly Block[],
+): BlockTable {
+  const blocks = replaced ?? base.blocks.slice();
+  if (!replaced) for (const [i, block] of replacements) (blocks as Block[])[i] = block;
   const table: TableInProgress = {
     ...base,
     blocks,

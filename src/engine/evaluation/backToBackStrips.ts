@@ -7,6 +7,7 @@ import {
 import { ABUTMENT_TOLERANCE } from '../../geometry/rect';
 import { BLOCK_TYPE_LABEL } from '../../model/blockBasics';
 import type { MatTable } from './matTable';
+import type { ServedMats } from './reachComponents';
 import type { Finding } from './report';
 
 /** Pairs named in a finding's message; its block ids name them all. */
@@ -22,34 +23,155 @@ const NAMED_PAIRS = 3;
  * Found by sorting: each strip's far long edge is looked up among the near long edges of the others, so a
  * die of tens of thousands of strips is one native sort of numbers, not a comparison of every pair.
  */
-export function backToBackStripFindings(table: BlockTable, mats: MatTable): Finding[] {
-  const findings: Finding[] = [];
+export function backToBackStrips(table: BlockTable, mats: MatTable): BackToBackState {
   const facing = servedEdgeOrientation(table, mats);
-  for (const code of [SENSE_AMP_STRIP_CODE, WORDLINE_DRIVER_STRIP_CODE]) {
-    const pairs = pairsOfType(table, code, facing);
-    if (pairs.length === 0) continue;
+  const pairs = STRIP_CODES.map((code) => pairsOfType(table, code, facing).toArray());
+  return { facing, pairs, findings: pairFindings(table, pairs) };
+}
+
+/** Strip types checked, in the order of their findings. */
+const STRIP_CODES = [SENSE_AMP_STRIP_CODE, WORDLINE_DRIVER_STRIP_CODE] as const;
+
+/** What the check leaves for the next edit: each strip's orientation and the pairs per strip type. */
+export interface BackToBackState {
+  readonly facing: Uint8Array;
+  /** Per entry of {@link STRIP_CODES}: pairs as [first, second, …] table positions, in finding order. */
+  readonly pairs: readonly Int32Array[];
+  readonly findings: readonly Finding[];
+}
+
+function pairFindings(table: BlockTable, pairsByType: readonly Int32Array[]): Finding[] {
+  const findings: Finding[] = [];
+  for (const pairs of pairsByType) {
+    const count = pairs.length / 2;
+    if (count === 0) continue;
     const blocks = table.blocks;
     const label = (i: number) => blocks[i]?.name || blocks[i]?.id || '';
     const named: string[] = [];
-    for (let n = 0; n < Math.min(NAMED_PAIRS, pairs.length); n++)
-      named.push(`${label(pairs.first(n))} and ${label(pairs.second(n))}`);
+    for (let n = 0; n < Math.min(NAMED_PAIRS, count); n++)
+      named.push(`${label(pairs[2 * n] as number)} and ${label(pairs[2 * n + 1] as number)}`);
     const ids = new Set<string>();
-    for (let n = 0; n < pairs.length; n++) {
-      ids.add(blocks[pairs.first(n)]?.id ?? '');
-      ids.add(blocks[pairs.second(n)]?.id ?? '');
-    }
-    const kind = blocks[pairs.first(0)]?.type ?? 'senseAmpStrip';
-    const count = pairs.length === 1 ? '' : `${pairs.length} pairs: `;
+    for (let n = 0; n < pairs.length; n++) ids.add(blocks[pairs[n] as number]?.id ?? '');
+    const kind = blocks[pairs[0] as number]?.type ?? 'senseAmpStrip';
+    const counted = count === 1 ? '' : `${count} pairs: `;
     findings.push({
       kind: 'backToBackStrips',
       severity: 'warning',
       blockIds: [...ids],
       message:
-        `${count}${named.join('; ')}${pairs.length > NAMED_PAIRS ? '; …' : ''} are ${BLOCK_TYPE_LABEL[kind]}s back to back; ` +
+        `${counted}${named.join('; ')}${count > NAMED_PAIRS ? '; …' : ''} are ${BLOCK_TYPE_LABEL[kind]}s back to back; ` +
         'one strip shared by the mats on both sides serves the same lines in less area',
     });
   }
   return findings;
+}
+
+/**
+ * The check after an edit in place: only strips the edit moved, or whose served mats it changed (listed
+ * before or now by a mat it evaluated again), can gain or lose a partner. Their orientation is read again
+ * from the mats serving them, their pairs are dropped and searched again among the strips `near` them
+ * (table positions within the abutment tolerance), and every other pair is kept.
+ */
+export function backToBackAfterEdit(
+  previous: BackToBackState,
+  table: BlockTable,
+  mats: MatTable,
+  dirty: ReadonlySet<number>,
+  served: readonly [ServedMats, ServedMats],
+  near: (i: number) => readonly number[],
+): BackToBackState {
+  const facing = previous.facing.slice();
+  for (const s of dirty) facing[s] = orientationOf(table, mats, served, s);
+  const pairs = STRIP_CODES.map((code, c) => {
+    const kept: number[] = [];
+    const old = previous.pairs[c] as Int32Array;
+    for (let n = 0; n < old.length; n += 2) {
+      const a = old[n] as number;
+      const b = old[n + 1] as number;
+      if (!dirty.has(a) && !dirty.has(b)) kept.push(a, b);
+    }
+    for (const s of dirty) {
+      if (table.type[s] !== code || facing[s] === UNSERVING) continue;
+      for (const j of near(s)) {
+        if (j === s || table.type[j] !== code || facing[j] !== facing[s]) continue;
+        if (meets(table, facing[s] as number, s, j)) kept.push(s, j);
+        // A pair of two dirty strips is found from its first strip.
+        if (!dirty.has(j) && meets(table, facing[s] as number, j, s)) kept.push(j, s);
+      }
+    }
+    return inFindingOrder(table, facing, kept);
+  });
+  const same = pairs.every((p, c) => samePairs(p, previous.pairs[c] as Int32Array));
+  // A changed strip the finding names may have a new name.
+  const named = pairs.some((p) => p.some((i) => dirty.has(i)));
+  return { facing, pairs, findings: same && !named ? previous.findings : pairFindings(table, pairs) };
+}
+
+function samePairs(a: Int32Array, b: Int32Array): boolean {
+  if (a.length !== b.length) return false;
+  for (let n = 0; n < a.length; n++) if (a[n] !== b[n]) return false;
+  return true;
+}
+
+/**
+ * The order the whole-table search gives: strips lying across before strips standing, then by the first
+ * strip's position, the second's start across, the second's position.
+ */
+function inFindingOrder(table: BlockTable, facing: Uint8Array, flat: readonly number[]): Int32Array {
+  const order: number[] = [];
+  for (let n = 0; n < flat.length; n += 2) order.push(n);
+  const across = (j: number) =>
+    facing[j] === ALONG_HORIZONTAL_EDGE ? (table.y[j] as number) : (table.x[j] as number);
+  order.sort((p, q) => {
+    const a = flat[p] as number;
+    const b = flat[q] as number;
+    const c = flat[p + 1] as number;
+    const d = flat[q + 1] as number;
+    return (facing[a] as number) - (facing[b] as number) || a - b || across(c) - across(d) || c - d;
+  });
+  const out = new Int32Array(flat.length);
+  order.forEach((p, n) => {
+    out[2 * n] = flat[p] as number;
+    out[2 * n + 1] = flat[p + 1] as number;
+  });
+  return out;
+}
+
+/** True when strip `i`'s far long edge meets strip `j`'s near one and they overlap along the strip. */
+function meets(table: BlockTable, orientation: number, i: number, j: number): boolean {
+  const lying = orientation === ALONG_HORIZONTAL_EDGE;
+  const across = lying ? table.y : table.x;
+  const thickness = lying ? table.height : table.width;
+  const along = lying ? table.x : table.y;
+  const length = lying ? table.width : table.height;
+  const edge = (across[i] as number) + (thickness[i] as number);
+  const start = across[j] as number;
+  if (!(start >= edge - ABUTMENT_TOLERANCE && start <= edge + ABUTMENT_TOLERANCE)) return false;
+  const alongStart = along[i] as number;
+  const overlap =
+    Math.min(alongStart + (length[i] as number), (along[j] as number) + (length[j] as number)) -
+    Math.max(alongStart, along[j] as number);
+  return overlap > ABUTMENT_TOLERANCE;
+}
+
+/**
+ * The orientation {@link servedEdgeOrientation} gives strip `s`: that of the last mat in report order
+ * serving it, its driver part after its sense-amplifier part.
+ */
+function orientationOf(
+  table: BlockTable,
+  mats: MatTable,
+  served: readonly [ServedMats, ServedMats],
+  s: number,
+): number {
+  const last = (list: Int32Array) => (list.length === 0 ? -1 : (list[list.length - 1] as number));
+  const k0 = last(served[0].mats(s));
+  const k1 = last(served[1].mats(s));
+  if (k0 < 0 && k1 < 0) return UNSERVING;
+  const k = k1 >= k0 ? k1 : k0;
+  const vertical = kindAt(table, mats.position[k] as number).block.bitlineAxis === 'vertical';
+  if (k1 >= k0) return vertical ? ALONG_VERTICAL_EDGE : ALONG_HORIZONTAL_EDGE;
+  return vertical ? ALONG_HORIZONTAL_EDGE : ALONG_VERTICAL_EDGE;
 }
 
 const UNSERVING = 0;
@@ -114,12 +236,9 @@ class PairList {
     this.length++;
   }
 
-  first(n: number): number {
-    return this.data[2 * n] as number;
-  }
-
-  second(n: number): number {
-    return this.data[2 * n + 1] as number;
+  /** The pairs as [first, second, …]. */
+  toArray(): Int32Array {
+    return this.data.slice(0, 2 * this.length);
   }
 }
 

@@ -2,7 +2,8 @@ import type { Design } from '../../model/design';
 import { formatQuantity } from '../../model/units';
 import { MAT_RULES, storedHighSeverity } from './checkRules';
 import { groupLabel } from './findingText';
-import type { Overlap } from './overlaps';
+import type { Block } from '../../model/block';
+import type { PositionedOverlap } from './overlaps';
 import { figuresAt, matIdAt, matLabelAt, type MatTable } from './matTable';
 import type { Finding, FindingKind, MatFigures, Severity } from './report';
 import type { StoredHighLevel } from '../physics/storedLevel';
@@ -47,14 +48,10 @@ function connectionIssues(unsensed: number, undriven: number, figures: MatFigure
 /** Mats named in a grouped finding's message; the finding's block ids name them all. */
 const NAMED_IN_MESSAGE = 3;
 
-/** User-visible names of the blocks in `overlaps` (their id when unnamed); looked up only when some overlap. */
-function blockNamer(design: Design, overlaps: readonly Overlap[]): (id: string) => string {
-  if (overlaps.length === 0) return (id) => id;
-  const wanted = new Set<string>();
-  for (const o of overlaps) wanted.add(o.firstId).add(o.secondId);
-  const names = new Map<string, string>();
-  for (const b of design.blocks) if (wanted.has(b.id)) names.set(b.id, b.name || b.id);
-  return (id) => names.get(id) ?? id;
+/** User-visible name of the block at a design position (its id when unnamed). */
+function nameAt(blocks: readonly Block[], i: number): string {
+  const b = blocks[i];
+  return b?.name || b?.id || '';
 }
 
 interface IssueGroup {
@@ -73,9 +70,11 @@ interface IssueGroup {
  */
 export function collectFindings(
   mats: MatTable,
-  overlaps: readonly Overlap[],
+  overlaps: readonly PositionedOverlap[],
   storedHigh: StoredHighLevel,
   design: Design,
+  /** The blocks as they stand (a live preview's, when they differ from the design's), for names. */
+  blocks: readonly Block[] = design.blocks,
 ): Finding[] {
   const groups = new Map<string, IssueGroup>();
   // Mats of one kind share their issue objects, so most lookups go by identity, not by building a key.
@@ -133,13 +132,12 @@ export function collectFindings(
       message: `${groupLabel(ids.length, labels)}: ${issue.detail}`,
     });
   }
-  const nameOf = blockNamer(design, overlaps);
-  for (const o of overlaps) {
+  for (const { overlap: o, first, second } of overlaps) {
     findings.push({
       kind: 'overlap',
       severity: 'error',
       blockIds: [o.firstId, o.secondId],
-      message: `${nameOf(o.firstId)} and ${nameOf(o.secondId)} overlap by ${formatQuantity(o.area, 'area')}`,
+      message: `${nameAt(blocks, first)} and ${nameAt(blocks, second)} overlap by ${formatQuantity(o.area, 'area')}`,
     });
   }
   const storedHighLimited = storedHighSeverity(storedHigh);

@@ -10,6 +10,15 @@ import { bitlineEndSides } from '../../geometry/stripFit';
 import { DecoderEdges } from './decoderEdges';
 import { groupLabel } from './findingText';
 import type { MatTable } from './matTable';
+import {
+  isReached,
+  reachComponents,
+  reachComponentsAfterEdit,
+  reachedMats,
+  type LayoutEdit,
+  type ReachComponents,
+  type ServingPart,
+} from './reachComponents';
 import type { Finding } from './report';
 
 const ROW_DECODER = BLOCK_TYPE_CODES.indexOf('rowDecoder');
@@ -23,8 +32,63 @@ function abutting(table: BlockTable, i: number, j: number): boolean {
   return false;
 }
 
-/** Which mat rows of the serving list a path follows: the sense-amplifier part (0) or the driver part (1). */
-type ServingPart = 0 | 1;
+/**
+ * Where the lines of decoders of type `decoderCode` enter the stack of mats and strips, per table position:
+ * the decoders themselves, the strips of type `stripCode` abutting one, and (for column decoders) mats
+ * with a bit-line end against one. Found by binary search on the decoders' sorted edges, one pass in all.
+ */
+export function reachSeeds(
+  table: BlockTable,
+  matIndexAt: Int32Array,
+  edges: DecoderEdges | null,
+  decoderCode: number,
+  stripCode: number,
+): Uint8Array {
+  const seed = new Uint8Array(table.count);
+  if (edges === null) return seed;
+  for (let i = 0; i < table.count; i++) {
+    const type = table.type[i];
+    if (type === decoderCode) seed[i] = 1;
+    else if (type === stripCode || (decoderCode === COLUMN_DECODER && (matIndexAt[i] as number) >= 0))
+      seed[i] = seedAt(table, matIndexAt, edges, i, decoderCode, stripCode) ? 1 : 0;
+  }
+  return seed;
+}
+
+/** True when the block at table position `i` is a seed of {@link reachSeeds}. */
+export function seedAt(
+  table: BlockTable,
+  matIndexAt: Int32Array,
+  edges: DecoderEdges | null,
+  i: number,
+  decoderCode: number,
+  stripCode: number,
+): boolean {
+  if (edges === null) return false;
+  const type = table.type[i];
+  if (type === decoderCode) return true;
+  const isStrip = type === stripCode;
+  if (!isStrip && !(decoderCode === COLUMN_DECODER && (matIndexAt[i] as number) >= 0)) return false;
+  const found = edges.near(table, i);
+  const candidates = edges.candidates;
+  for (let c = 0; c < found; c++) {
+    const d = candidates[c] as number;
+    if (isStrip) {
+      if (abutting(table, d, i)) return true;
+      continue;
+    }
+    for (const side of bitlineEndSides(kindAt(table, i).block.bitlineAxis))
+      if (abutmentSpan(table, i, d, side, scratch, 0)) return true;
+  }
+  return false;
+}
+
+/** For each table position, the index of its mat in the report, or −1. */
+export function matIndexByPosition(mats: MatTable, count: number): Int32Array {
+  const index = new Int32Array(count).fill(-1);
+  for (let k = 0; k < mats.count; k++) index[mats.position[k] as number] = k;
+  return index;
+}
 
 /**
  * Mats (by report index) that a decoder of type `decoderCode` reaches through the strips that serve them:
@@ -42,140 +106,140 @@ export function matsReachedBy(
   stripCode: number,
   part: ServingPart,
 ): Uint8Array {
-  const reachedMat = new Uint8Array(mats.count);
-  const reachedBlock = new Uint8Array(table.count);
-  const edges = DecoderEdges.of(table, decoderCode);
-  if (edges === null) return reachedMat;
-  const matOfPosition = new Int32Array(table.count).fill(-1);
-  for (let k = 0; k < mats.count; k++) matOfPosition[mats.position[k] as number] = k;
-  // Seeds: the decoders, the serving strips abutting them, and mats whose bit-line ends meet a column decoder.
-  const stripQueue: number[] = [];
-  const matQueue: number[] = [];
-  for (const d of edges.decoders) {
-    reachedBlock[d] = 1;
-    stripQueue.push(d);
-  }
-  const seedMats = decoderCode === COLUMN_DECODER;
-  const candidates = edges.candidates;
-  for (let i = 0; i < table.count; i++) {
-    const type = table.type[i];
-    const k = matOfPosition[i] as number;
-    const isStrip = type === stripCode;
-    if (!isStrip && !(seedMats && k >= 0)) continue;
-    const found = edges.near(table, i);
-    for (let c = 0; c < found; c++) {
-      const d = candidates[c] as number;
-      if (isStrip) {
-        if (reachedBlock[i] === 0 && abutting(table, d, i)) {
-          reachedBlock[i] = 1;
-          stripQueue.push(i);
-        }
-      } else if (reachedMat[k] === 0) {
-        for (const side of bitlineEndSides(kindAt(table, i).block.bitlineAxis)) {
-          if (!abutmentSpan(table, i, d, side, scratch, 0)) continue;
-          reachedMat[k] = 1;
-          matQueue.push(k);
-          break;
-        }
-      }
-    }
-  }
-  // Which mats each strip serves: the report lists strips per mat, so count, then fill, per strip.
-  const { servingOffsets, servingPositions } = mats;
-  const served = new Int32Array(table.count + 1);
-  for (let k = 0; k < mats.count; k++) {
-    const from = servingOffsets[3 * k + part] as number;
-    const to = servingOffsets[3 * k + part + 1] as number;
-    for (let p = from; p < to; p++) (served[(servingPositions[p] as number) + 1] as number)++;
-  }
-  for (let i = 0; i < table.count; i++) served[i + 1] = (served[i + 1] as number) + (served[i] as number);
-  const fill = served.slice(0, table.count);
-  const servedMats = new Int32Array(served[table.count] as number);
-  for (let k = 0; k < mats.count; k++) {
-    const from = servingOffsets[3 * k + part] as number;
-    const to = servingOffsets[3 * k + part + 1] as number;
-    for (let p = from; p < to; p++) {
-      const strip = servingPositions[p] as number;
-      servedMats[(fill[strip] as number)++] = k;
-    }
-  }
-  // Breadth-first over mats and strips.
-  while (stripQueue.length > 0 || matQueue.length > 0) {
-    const strip = stripQueue.pop();
-    if (strip !== undefined) {
-      for (let q = served[strip] as number; q < (served[strip + 1] as number); q++) {
-        const k = servedMats[q] as number;
-        if (reachedMat[k] === 0) {
-          reachedMat[k] = 1;
-          matQueue.push(k);
-        }
-      }
-      continue;
-    }
-    const k = matQueue.pop() as number;
-    const from = servingOffsets[3 * k + part] as number;
-    const to = servingOffsets[3 * k + part + 1] as number;
-    for (let p = from; p < to; p++) {
-      const s = servingPositions[p] as number;
-      if (reachedBlock[s] === 0) {
-        reachedBlock[s] = 1;
-        stripQueue.push(s);
-      }
-    }
-  }
-  return reachedMat;
+  const matIndexAt = matIndexByPosition(mats, table.count);
+  const seed = reachSeeds(table, matIndexAt, DecoderEdges.of(table, decoderCode), decoderCode, stripCode);
+  return reachedMats(reachComponents(mats, matIndexAt, part, seed), mats);
 }
 
-/** Mats with at least one serving strip in `part` that no decoder reaches, as one grouped finding. */
-function unreachedFinding(
-  mats: MatTable,
-  reached: Uint8Array,
-  part: ServingPart,
-  kind: Finding['kind'],
-  detail: string,
-): Finding | null {
+/** One of the two reach checks: which decoders, along which strips and part of the serving lists. */
+interface ReachCheck {
+  readonly decoderCode: number;
+  readonly stripCode: number;
+  readonly part: ServingPart;
+  readonly kind: Finding['kind'];
+  readonly detail: string;
+}
+
+const REACH_CHECKS: readonly ReachCheck[] = [
+  {
+    decoderCode: ROW_DECODER,
+    stripCode: WORDLINE_DRIVER_STRIP_CODE,
+    part: 1,
+    kind: 'noRowDecoder',
+    detail: 'word lines reach no row decoder through their driver strips',
+  },
+  {
+    decoderCode: COLUMN_DECODER,
+    stripCode: SENSE_AMP_STRIP_CODE,
+    part: 0,
+    kind: 'noColumnDecoder',
+    detail: 'bit lines reach no column decoder through their sense-amplifier strips',
+  },
+];
+
+/** A mat with no serving strip in `part` already has an error for its unserved lines. */
+function hasServing(mats: MatTable, k: number, part: ServingPart): boolean {
+  return mats.servingOffsets[3 * k + part] !== mats.servingOffsets[3 * k + part + 1];
+}
+
+/** Mats with at least one serving strip in the check's part that no decoder reaches, as one grouped finding. */
+function unreachedFinding(mats: MatTable, reach: ReachComponents, check: ReachCheck): Finding | null {
   const ids: string[] = [];
   const labels: string[] = [];
   for (let k = 0; k < mats.count; k++) {
-    if (reached[k] !== 0) continue;
-    // A mat with no serving strip at all already has an error for its unserved lines.
-    if (mats.servingOffsets[3 * k + part] === mats.servingOffsets[3 * k + part + 1]) continue;
-    const block = mats.blocks[mats.position[k] as number];
+    const at = mats.position[k] as number;
+    if (isReached(reach, at) || !hasServing(mats, k, check.part)) continue;
+    const block = mats.blocks[at];
     ids.push(block?.id ?? '');
     if (labels.length < 3) labels.push(block?.name || block?.id || '');
   }
   if (ids.length === 0) return null;
   return {
-    kind,
+    kind: check.kind,
     severity: 'warning',
     blockIds: ids,
-    message: `${groupLabel(ids.length, labels)}: ${detail}`,
+    message: `${groupLabel(ids.length, labels)}: ${check.detail}`,
   };
+}
+
+/** One reach check's components, the decoders' edges they were seeded from, and its finding. */
+interface ReachResult {
+  readonly check: ReachCheck;
+  readonly edges: DecoderEdges | null;
+  readonly reach: ReachComponents;
+  readonly finding: Finding | null;
+}
+
+/** What the decoder-reach checks leave for the next edit. */
+export interface DecoderReachState {
+  readonly results: readonly ReachResult[];
+}
+
+function reachResult(
+  table: BlockTable,
+  mats: MatTable,
+  matIndexAt: Int32Array,
+  check: ReachCheck,
+): ReachResult {
+  const edges = DecoderEdges.of(table, check.decoderCode);
+  const seed = reachSeeds(table, matIndexAt, edges, check.decoderCode, check.stripCode);
+  const reach = reachComponents(mats, matIndexAt, check.part, seed);
+  return { check, edges, reach, finding: unreachedFinding(mats, reach, check) };
 }
 
 /**
  * Warnings for mats cut off from the decoders: word lines whose driver strips lead to no row decoder,
  * and bit lines whose sense-amplifier strips (the column path) lead to no column decoder.
  */
-export function decoderReachFindings(table: BlockTable, mats: MatTable): Finding[] {
+export function decoderReach(table: BlockTable, mats: MatTable, matIndexAt: Int32Array): DecoderReachState {
+  return { results: REACH_CHECKS.map((check) => reachResult(table, mats, matIndexAt, check)) };
+}
+
+export function decoderReachFindings(state: DecoderReachState): Finding[] {
   const findings: Finding[] = [];
-  const rows = matsReachedBy(table, mats, ROW_DECODER, WORDLINE_DRIVER_STRIP_CODE, 1);
-  const rowFinding = unreachedFinding(
-    mats,
-    rows,
-    1,
-    'noRowDecoder',
-    'word lines reach no row decoder through their driver strips',
-  );
-  if (rowFinding) findings.push(rowFinding);
-  const columns = matsReachedBy(table, mats, COLUMN_DECODER, SENSE_AMP_STRIP_CODE, 0);
-  const columnFinding = unreachedFinding(
-    mats,
-    columns,
-    0,
-    'noColumnDecoder',
-    'bit lines reach no column decoder through their sense-amplifier strips',
-  );
-  if (columnFinding) findings.push(columnFinding);
+  for (const r of state.results) if (r.finding) findings.push(r.finding);
   return findings;
+}
+
+/**
+ * The checks after an edit in place (see {@link LayoutEdit}): components are labelled again only where
+ * the edit touched them, and a finding is listed again only when a mat's standing changed or it names a
+ * changed block; otherwise the previous finding is kept as it was. A moved decoder changes the seeds of
+ * whatever it leaves or meets, so the check of its type is done again whole.
+ */
+export function decoderReachAfterEdit(
+  previous: DecoderReachState,
+  before: MatTable,
+  table: BlockTable,
+  mats: MatTable,
+  edit: LayoutEdit,
+): DecoderReachState {
+  const results = previous.results.map((r) => {
+    const { check, edges } = r;
+    const full = () => reachResult(table, mats, edit.matIndexAt, check);
+    if (edit.changed.some((i) => table.type[i] === check.decoderCode)) return full();
+    const next = reachComponentsAfterEdit(r.reach, before, mats, edit, (i) =>
+      seedAt(table, edit.matIndexAt, edges, i, check.decoderCode, check.stripCode),
+    );
+    if (!next) return full();
+    const { reach, relabelled } = next;
+    const unreachedBefore = (i: number, k: number) =>
+      !isReached(r.reach, i) && hasServing(before, k, check.part);
+    const unreachedNow = (i: number, k: number) => !isReached(reach, i) && hasServing(mats, k, check.part);
+    let same = true;
+    for (const i of relabelled) {
+      const k = edit.matIndexAt[i] as number;
+      if (k >= 0 && unreachedBefore(i, k) !== unreachedNow(i, k)) {
+        same = false;
+        break;
+      }
+    }
+    // A changed mat the finding names may have a new name.
+    for (const i of edit.changed) {
+      const k = edit.matIndexAt[i] as number;
+      if (k >= 0 && unreachedNow(i, k)) same = false;
+    }
+    return { check, edges, reach, finding: same ? r.finding : unreachedFinding(mats, reach, check) };
+  });
+  return { results };
 }

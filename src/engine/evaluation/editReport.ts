@@ -26,5 +26,5 @@ export function editReport(
   }
   // The canvas and the next edit read the new design's placement: update it from the previous one now.
   placedDesignAfterEdit(previous, next, changed);
-  return previewReport(preparePreview(previous, previousReport, ids), blocks);
+  return previewReport(preparePreview(previous, previousReport, ids), blocks, next.blocks);
 }

@@ -4,7 +4,8 @@ import type { NeighbourTable } from '../../geometry/neighbourRows';
 import { ABUTMENT_TOLERANCE } from '../../geometry/rect';
 import type { Design } from '../../model/design';
 import { collectFindings } from './checks';
-import { layoutFindings } from './layoutFindings';
+import { matIndexByPosition } from './decoderReach';
+import { layoutState } from './layoutFindings';
 import { emptyConnections, matConnections } from './connectivity';
 import { designContext as contextOf, type DesignContext } from './designContext';
 import { matPhysics, senseAmpsOfMat } from './matPhysics';
@@ -115,15 +116,16 @@ export function evaluate(design: Design): Report {
   }
   const mats = builder.finish();
   const overlaps = findPositionedOverlaps(table, neighbours);
-  const overlapList = overlaps.map((o) => o.overlap);
-  const totals = computeTotals(table, mats, design, ctx, senseAmpCount, overlapList);
+  const totals = computeTotals(table, mats, design, ctx, senseAmpCount, overlaps);
+  const matIndexAt = matIndexByPosition(mats, table.count);
+  const layout = layoutState(table, mats, matIndexAt);
   const report: Report = {
     mats,
     totals,
     storedHigh: ctx.storedHigh,
-    findings: [...collectFindings(mats, overlapList, ctx.storedHigh, design), ...layoutFindings(table, mats)],
+    findings: [...collectFindings(mats, overlaps, ctx.storedHigh, design), ...layout.findings],
   };
-  rememberReportState(report, { table, overlaps });
+  rememberReportState(report, { table, overlaps, matIndexAt, layout });
   return report;
 }
 

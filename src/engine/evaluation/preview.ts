@@ -1,4 +1,12 @@
-import { blockTable, MAT_CODE, rectAt, withBlocksReplaced, type BlockTable } from '../../geometry/blockTable';
+import {
+  blockTable,
+  MAT_CODE,
+  rectAt,
+  withBlocksReplaced,
+  type BlockTable,
+  type MatKind,
+} from '../../geometry/blockTable';
+import { senseAmpsOfMat } from './matPhysics';
 import { neighbourTableOf, type NeighbourTable } from '../../geometry/neighbourRows';
 import { placedDesign } from '../../geometry/placedIndex';
 import { ABUTMENT_TOLERANCE, bottom, right, type Rect } from '../../geometry/rect';
@@ -6,19 +14,13 @@ import type { SpatialIndex } from '../../geometry/spatialIndex';
 import type { Block } from '../../model/block';
 import type { Design } from '../../model/design';
 import { collectFindings } from './checks';
-import { layoutFindings } from './layoutFindings';
-import {
-  countCells,
-  countSenseAmps,
-  designContext,
-  evaluate,
-  evaluateMatAt,
-  evaluationNeighbours,
-} from './evaluate';
+import { layoutState, layoutStateAfterEdit, type LayoutState } from './layoutFindings';
+import { matIndexByPosition } from './decoderReach';
+import { designContext, evaluate, evaluateMatAt, evaluationNeighbours } from './evaluate';
 import { findPositionedOverlaps, overlapAreaAt, type PositionedOverlap } from './overlaps';
 import { rememberReportState, reportState } from './reportState';
 import type { Report } from './report';
-import { MatTableBuilder, type MatTable } from './matTable';
+import { MatTableBuilder } from './matTable';
 import { computeTotals } from './totals';
 
 /**
@@ -44,6 +46,8 @@ export interface PreviewBase {
   readonly matIndexAt: Int32Array;
   /** Overlapping pairs among the blocks that do not change, found once per gesture. */
   readonly staticOverlaps: readonly PositionedOverlap[];
+  /** The layout checks of the design before the gesture. */
+  readonly layout: LayoutState;
 }
 
 export function preparePreview(design: Design, report: Report, changingIds: Iterable<string>): PreviewBase {
@@ -53,6 +57,8 @@ export function preparePreview(design: Design, report: Report, changingIds: Iter
   const state = known && known.table.count === design.blocks.length ? known : undefined;
   const table = state?.table ?? blockTable(design);
   const overlaps = state?.overlaps ?? findPositionedOverlaps(table, evaluationNeighbours(table));
+  const matIndexAt = state?.matIndexAt ?? matIndexByPosition(report.mats, table.count);
+  const layout = state?.layout ?? layoutState(table, report.mats, matIndexAt);
   const changing = new Set(changingIds);
   const changingPositions = new Set<number>();
   for (const id of changing) {
@@ -67,17 +73,12 @@ export function preparePreview(design: Design, report: Report, changingIds: Iter
     index,
     positionOf,
     changingPositions,
-    matIndexAt: matIndexByPosition(report.mats, table.count),
+    matIndexAt,
+    layout,
     staticOverlaps: overlaps.filter(
       (o) => !changingPositions.has(o.first) && !changingPositions.has(o.second),
     ),
   };
-}
-
-function matIndexByPosition(mats: MatTable, count: number): Int32Array {
-  const index = new Int32Array(count).fill(-1);
-  for (let k = 0; k < mats.count; k++) index[mats.position[k] as number] = k;
-  return index;
 }
 
 function intersects(a: Rect, b: Rect, margin: number): boolean {
@@ -122,7 +123,12 @@ function previewNeighbours(
  * alters the number of sense amplifiers or cells (a resize), every margin moves with k and every
  * retention with the weakest cell, so the whole design is evaluated instead.
  */
-export function previewReport(base: PreviewBase, changed: readonly Block[]): Report {
+export function previewReport(
+  base: PreviewBase,
+  changed: readonly Block[],
+  /** The edited design's block list when there is one (a commit), so that it is not copied again. */
+  blocks?: readonly Block[],
+): Report {
   const { design, report, index, changingPositions } = base;
   const replacements = new Map<number, Block>();
   for (const block of changed) {
@@ -130,9 +136,21 @@ export function previewReport(base: PreviewBase, changed: readonly Block[]): Rep
     if (at !== undefined) replacements.set(at, block);
   }
   // The design as it stands during the gesture, in design order.
-  const current = withBlocksReplaced(base.table, replacements);
-  const senseAmpCount = countSenseAmps(current);
-  const cellCount = countCells(current);
+  const current = withBlocksReplaced(base.table, replacements, blocks);
+  // The counts change only by what the replaced mats had and have.
+  let senseAmpCount = report.totals.senseAmpCount;
+  let cellCount = report.totals.bits;
+  for (const i of replacements.keys()) {
+    for (const [table, sign] of [
+      [base.table, -1],
+      [current, 1],
+    ] as const) {
+      const kind = table.kindOf[i] as number;
+      if (kind < 0) continue;
+      senseAmpCount += sign * senseAmpsOfMat(table.kinds[kind] as MatKind);
+      cellCount += sign * (table.kinds[kind] as MatKind).geometry.bits;
+    }
+  }
   // k of the offset budget follows the sense-amplifier count, the weakest cell the cell count.
   if (senseAmpCount !== report.totals.senseAmpCount || cellCount !== report.totals.bits) {
     return evaluate({ ...design, blocks: current.blocks.slice() });
@@ -192,13 +210,20 @@ export function previewReport(base: PreviewBase, changed: readonly Block[]): Rep
   }
   overlaps.sort((a, b) => a.first - b.first || a.second - b.second);
 
-  const overlapList = overlaps.map((o) => o.overlap);
-  const totals = computeTotals(current, mats, design, ctx, senseAmpCount, overlapList);
+  const totals = computeTotals(current, mats, design, ctx, senseAmpCount, overlaps);
+  const layout = layoutStateAfterEdit(
+    base.layout,
+    report.mats,
+    current,
+    mats,
+    { changed: [...replacements.keys()], redone, matIndexAt: base.matIndexAt },
+    (i) => composite.near(rectAt(current, i), 2 * ABUTMENT_TOLERANCE),
+  );
   const findings = [
-    ...collectFindings(mats, overlapList, report.storedHigh, design),
-    ...layoutFindings(current, mats),
+    ...collectFindings(mats, overlaps, report.storedHigh, design, current.blocks),
+    ...layout.findings,
   ];
   const result: Report = { mats, totals, storedHigh: report.storedHigh, findings };
-  rememberReportState(result, { table: current, overlaps });
+  rememberReportState(result, { table: current, overlaps, matIndexAt: base.matIndexAt, layout });
   return result;
 }

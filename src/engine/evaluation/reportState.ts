@@ -1,15 +1,20 @@
 import type { BlockTable } from '../../geometry/blockTable';
+import type { LayoutState } from './layoutFindings';
 import type { PositionedOverlap } from './overlaps';
 import type { Report } from './report';
 
 /**
  * What evaluating a design left behind besides its report: the laid-out block table and the overlapping
  * pairs with their positions. An edit of a few blocks starts from these (see editReport.ts) instead of
- * laying out and pairing the whole design again. Kept beside the report, for as long as it lives.
+ * laying out, pairing and checking the whole design again. Kept beside the report, for as long as it lives.
  */
 export interface ReportState {
   readonly table: BlockTable;
   readonly overlaps: readonly PositionedOverlap[];
+  /** For each table position, the index of its mat in the report, or −1. */
+  readonly matIndexAt: Int32Array;
+  /** What the layout checks found, to check again only around the next edit. */
+  readonly layout: LayoutState;
 }
 
 const states = new WeakMap<Report, ReportState>();

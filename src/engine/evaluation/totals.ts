@@ -3,7 +3,7 @@ import type { BlockType } from '../../model/block';
 import { needsRefresh } from '../../model/cellBasics';
 import type { Design } from '../../model/design';
 import type { DesignContext } from './designContext';
-import type { Overlap } from './overlaps';
+import type { PositionedOverlap } from './overlaps';
 import {
   refreshBusyFraction,
   refreshCycleTime,
@@ -269,12 +269,10 @@ function extremes(mats: MatTable): Extremes {
 }
 
 /** Area where two mats overlap (m²), summed over pairs: those cells exist once, not twice. */
-function matOverlapArea(table: BlockTable, overlaps: readonly Overlap[]): number {
-  if (overlaps.length === 0) return 0;
-  const matIds = new Set<string>();
-  for (let i = 0; i < table.count; i++) if (table.type[i] === MAT_CODE) matIds.add(table.blocks[i]?.id ?? '');
+function matOverlapArea(table: BlockTable, overlaps: readonly PositionedOverlap[]): number {
   let area = 0;
-  for (const o of overlaps) if (matIds.has(o.firstId) && matIds.has(o.secondId)) area += o.area;
+  for (const o of overlaps)
+    if (table.type[o.first] === MAT_CODE && table.type[o.second] === MAT_CODE) area += o.overlap.area;
   return area;
 }
 
@@ -291,7 +289,7 @@ export function computeTotals(
   design: Design,
   ctx: DesignContext,
   senseAmpCount: number,
-  overlaps: readonly Overlap[],
+  overlaps: readonly PositionedOverlap[],
 ): Totals {
   let bits = 0;
   let usableBits = 0;

@@ -8,7 +8,13 @@ import {
 } from '../../../src/geometry/blockTable';
 import { bitlineEndSides } from '../../../src/geometry/stripFit';
 import { groupLabel } from '../../../src/engine/evaluation/findingText';
+import { matIndexByPosition } from '../../../src/engine/evaluation/decoderReach';
 import type { MatTable } from '../../../src/engine/evaluation/matTable';
+import {
+  reachComponents,
+  reachedMats,
+  type ServingPart,
+} from '../../../src/engine/evaluation/reachComponents';
 import type { Finding } from '../../../src/engine/evaluation/report';
 
 const ROW_DECODER = BLOCK_TYPE_CODES.indexOf('rowDecoder');
@@ -22,18 +28,34 @@ function abutting(table: BlockTable, i: number, j: number): boolean {
   return false;
 }
 
-/** Which mat rows of the serving list a path follows: the sense-amplifier part (0) or the driver part (1). */
-type ServingPart = 0 | 1;
-
 /**
- * Mats (by report index) that a decoder of type `decoderCode` reaches through the strips that serve them:
- * a decoder abutting a serving strip reaches every mat that strip serves, each of those mats reaches the
- * other strips serving it, and so on (a global word line crosses every mat and driver strip of its row; a
- * column-select line every mat and sense-amplifier strip of its column). A mat whose serving list holds the
- * decoder itself (a row decoder driving a small mat directly) is reached too, and so is a mat with a bit-line
- * end against a column decoder. Common practice (no source): the decoder's lines run along the stack of
- * mats and strips it sits beside.
+ * The seeds the way the first implementation found them: for each decoder, a scan of the whole table for
+ * the strips of type `stripCode` abutting it (and, for column decoders, mats with a bit-line end against
+ * it), O(n · decoders). The spread from the seeds is the engine's own (reachComponents), so only the
+ * seeding is checked against an independent version here.
  */
+function oracleSeeds(
+  table: BlockTable,
+  matIndexAt: Int32Array,
+  decoderCode: number,
+  stripCode: number,
+): Uint8Array {
+  const seed = new Uint8Array(table.count);
+  for (let d = 0; d < table.count; d++) {
+    if (table.type[d] !== decoderCode) continue;
+    seed[d] = 1;
+    for (let i = 0; i < table.count; i++) {
+      if (table.type[i] === stripCode && abutting(table, d, i)) seed[i] = 1;
+      else if (decoderCode === COLUMN_DECODER && (matIndexAt[i] as number) >= 0) {
+        for (const side of bitlineEndSides(kindAt(table, i).block.bitlineAxis))
+          if (abutmentSpan(table, i, d, side, scratch, 0)) seed[i] = 1;
+      }
+    }
+  }
+  return seed;
+}
+
+/** Mats (by report index) a decoder of type `decoderCode` reaches: the oracle's seeds, the engine's spread. */
 export function matsReachedBy(
   table: BlockTable,
   mats: MatTable,
@@ -41,80 +63,9 @@ export function matsReachedBy(
   stripCode: number,
   part: ServingPart,
 ): Uint8Array {
-  const reachedMat = new Uint8Array(mats.count);
-  const reachedBlock = new Uint8Array(table.count);
-  const decoders: number[] = [];
-  for (let i = 0; i < table.count; i++) if (table.type[i] === decoderCode) decoders.push(i);
-  if (decoders.length === 0) return reachedMat;
-  const matOfPosition = new Int32Array(table.count).fill(-1);
-  for (let k = 0; k < mats.count; k++) matOfPosition[mats.position[k] as number] = k;
-  // Seeds: the decoders, the serving strips abutting them, and mats whose bit-line ends meet a column decoder.
-  const stripQueue: number[] = [];
-  const matQueue: number[] = [];
-  for (const d of decoders) {
-    reachedBlock[d] = 1;
-    stripQueue.push(d);
-    for (let i = 0; i < table.count; i++) {
-      const type = table.type[i];
-      if (type === stripCode && reachedBlock[i] === 0 && abutting(table, d, i)) {
-        reachedBlock[i] = 1;
-        stripQueue.push(i);
-      } else if (decoderCode === COLUMN_DECODER && (matOfPosition[i] as number) >= 0) {
-        const k = matOfPosition[i] as number;
-        if (reachedMat[k] !== 0) continue;
-        for (const side of bitlineEndSides(kindAt(table, i).block.bitlineAxis)) {
-          if (!abutmentSpan(table, i, d, side, scratch, 0)) continue;
-          reachedMat[k] = 1;
-          matQueue.push(k);
-          break;
-        }
-      }
-    }
-  }
-  // Which mats each strip serves: the report lists strips per mat, so count, then fill, per strip.
-  const { servingOffsets, servingPositions } = mats;
-  const served = new Int32Array(table.count + 1);
-  for (let k = 0; k < mats.count; k++) {
-    const from = servingOffsets[3 * k + part] as number;
-    const to = servingOffsets[3 * k + part + 1] as number;
-    for (let p = from; p < to; p++) (served[(servingPositions[p] as number) + 1] as number)++;
-  }
-  for (let i = 0; i < table.count; i++) served[i + 1] = (served[i + 1] as number) + (served[i] as number);
-  const fill = served.slice(0, table.count);
-  const servedMats = new Int32Array(served[table.count] as number);
-  for (let k = 0; k < mats.count; k++) {
-    const from = servingOffsets[3 * k + part] as number;
-    const to = servingOffsets[3 * k + part + 1] as number;
-    for (let p = from; p < to; p++) {
-      const strip = servingPositions[p] as number;
-      servedMats[(fill[strip] as number)++] = k;
-    }
-  }
-  // Breadth-first over mats and strips.
-  while (stripQueue.length > 0 || matQueue.length > 0) {
-    const strip = stripQueue.pop();
-    if (strip !== undefined) {
-      for (let q = served[strip] as number; q < (served[strip + 1] as number); q++) {
-        const k = servedMats[q] as number;
-        if (reachedMat[k] === 0) {
-          reachedMat[k] = 1;
-          matQueue.push(k);
-        }
-      }
-      continue;
-    }
-    const k = matQueue.pop() as number;
-    const from = servingOffsets[3 * k + part] as number;
-    const to = servingOffsets[3 * k + part + 1] as number;
-    for (let p = from; p < to; p++) {
-      const s = servingPositions[p] as number;
-      if (reachedBlock[s] === 0) {
-        reachedBlock[s] = 1;
-        stripQueue.push(s);
-      }
-    }
-  }
-  return reachedMat;
+  const matIndexAt = matIndexByPosition(mats, table.count);
+  const seed = oracleSeeds(table, matIndexAt, decoderCode, stripCode);
+  return reachedMats(reachComponents(mats, matIndexAt, part, seed), mats);
 }
 
 /** Mats with at least one serving strip in `part` that no decoder reaches, as one grouped finding. */

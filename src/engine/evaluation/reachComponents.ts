@@ -1,0 +1,246 @@
+import type { MatTable } from './matTable';
+
+/** Which rows of a mat's serving list a path follows: the sense-amplifier part (0) or the driver part (1). */
+export type ServingPart = 0 | 1;
+
+/** Past this many strips listed again beside the table-wide list, the list is built again. */
+const MOST_PATCHED = 4096;
+
+/**
+ * Which mats (report indices, ascending) each block serves in one part of the mats' serving lists. The
+ * report lists strips per mat; this turns it around once for the whole table, and after an edit lists
+ * only the strips the edit touched again, beside the table-wide list.
+ */
+export class ServedMats {
+  private constructor(
+    private readonly start: Int32Array,
+    private readonly list: Int32Array,
+    private readonly patched: ReadonlyMap<number, Int32Array>,
+  ) {}
+
+  /** Counts, then fills, per block: two passes over the serving lists. */
+  static of(tableCount: number, mats: MatTable, part: ServingPart): ServedMats {
+    const { servingOffsets, servingPositions } = mats;
+    const start = new Int32Array(tableCount + 1);
+    for (let k = 0; k < mats.count; k++) {
+      const to = servingOffsets[3 * k + part + 1] as number;
+      for (let p = servingOffsets[3 * k + part] as number; p < to; p++)
+        (start[(servingPositions[p] as number) + 1] as number)++;
+    }
+    for (let i = 0; i < tableCount; i++) start[i + 1] = (start[i + 1] as number) + (start[i] as number);
+    const fill = start.slice(0, tableCount);
+    const list = new Int32Array(start[tableCount] as number);
+    for (let k = 0; k < mats.count; k++) {
+      const to = servingOffsets[3 * k + part + 1] as number;
+      for (let p = servingOffsets[3 * k + part] as number; p < to; p++)
+        list[(fill[servingPositions[p] as number] as number)++] = k;
+    }
+    return new ServedMats(start, list, new Map());
+  }
+
+  /** The mats block `i` serves, ascending. */
+  mats(i: number): Int32Array {
+    return this.patched.get(i) ?? this.list.subarray(this.start[i] as number, this.start[i + 1] as number);
+  }
+
+  /**
+   * The lists after the mats `redone` (report indices) were evaluated again: each block one of them listed
+   * before or lists now serves the mats it served that were not redone, plus the redone ones that list it
+   * now. Returns the blocks whose list was written (`touched`), or null when so many strips are listed
+   * again that the caller should build the whole list instead.
+   */
+  afterEdit(
+    before: MatTable,
+    after: MatTable,
+    part: ServingPart,
+    redone: ReadonlySet<number>,
+    touched: Set<number>,
+  ): ServedMats | null {
+    const added = new Map<number, number[]>();
+    for (const k of redone) {
+      const from = before.servingOffsets[3 * k + part] as number;
+      const to = before.servingOffsets[3 * k + part + 1] as number;
+      for (let p = from; p < to; p++) touched.add(before.servingPositions[p] as number);
+      const a = after.servingOffsets[3 * k + part] as number;
+      const b = after.servingOffsets[3 * k + part + 1] as number;
+      for (let p = a; p < b; p++) {
+        const s = after.servingPositions[p] as number;
+        touched.add(s);
+        const list = added.get(s);
+        if (list) list.push(k);
+        else added.set(s, [k]);
+      }
+    }
+    if (this.patched.size + touched.size > MOST_PATCHED) return null;
+    const patched = new Map(this.patched);
+    for (const s of touched) {
+      const kept = Array.from(this.mats(s)).filter((k) => !redone.has(k));
+      const list = kept.concat(added.get(s) ?? []).sort((a, b) => a - b);
+      patched.set(s, Int32Array.from(list));
+    }
+    return new ServedMats(this.start, this.list, patched);
+  }
+}
+
+/** The positions of one component, and whether a decoder's lines enter it there. */
+interface Component {
+  readonly members: Int32Array;
+  readonly seeded: boolean;
+}
+
+/**
+ * Mats and the blocks serving them (one part of the serving lists) split into connected components: a
+ * decoder reaches every mat of a component that holds one of its seeds, and none outside. Kept with the
+ * report, so that an edit labels again only the components it touched.
+ */
+export interface ReachComponents {
+  readonly part: ServingPart;
+  readonly served: ServedMats;
+  /** Per table position: 1 where a decoder's lines enter (the decoder, a strip against it, a mat end). */
+  readonly seed: Uint8Array;
+  /** Per table position: its component, or −1 for a block no mat lists. */
+  readonly label: Int32Array;
+  readonly components: readonly (Component | undefined)[];
+  /** How many components the last full labelling made; past that plus {@link MOST_PATCHED}, label again. */
+  readonly built: number;
+}
+
+/** Mats (report indices) in components with a seed, as 1, others 0. */
+export function reachedMats(reach: ReachComponents, mats: MatTable): Uint8Array {
+  const reached = new Uint8Array(mats.count);
+  for (let k = 0; k < mats.count; k++) reached[k] = isReached(reach, mats.position[k] as number) ? 1 : 0;
+  return reached;
+}
+
+/** True when the block at table position `i` lies in a component a decoder reaches. */
+export function isReached(reach: ReachComponents, i: number): boolean {
+  const l = reach.label[i] as number;
+  return l >= 0 && reach.components[l]?.seeded === true;
+}
+
+/** Scratch for the breadth-first walks, grown as needed. */
+let queue = new Int32Array(1024);
+
+/**
+ * Labels the component of table position `from` (a mat) with `labelNo`: breadth-first from a mat to the
+ * blocks its serving list names, from a block to the mats it serves.
+ */
+function walk(
+  from: number,
+  labelNo: number,
+  label: Int32Array,
+  seed: Uint8Array,
+  mats: MatTable,
+  matIndexAt: Int32Array,
+  served: ServedMats,
+  part: ServingPart,
+): Component {
+  let head = 0;
+  let tail = 0;
+  let seeded = false;
+  const push = (i: number) => {
+    if (tail === queue.length) {
+      const bigger = new Int32Array(2 * queue.length);
+      bigger.set(queue);
+      queue = bigger;
+    }
+    label[i] = labelNo;
+    queue[tail++] = i;
+  };
+  push(from);
+  const { servingOffsets, servingPositions, position } = mats;
+  while (head < tail) {
+    const i = queue[head++] as number;
+    if (seed[i] !== 0) seeded = true;
+    const k = matIndexAt[i] as number;
+    if (k >= 0) {
+      const to = servingOffsets[3 * k + part + 1] as number;
+      for (let p = servingOffsets[3 * k + part] as number; p < to; p++) {
+        const s = servingPositions[p] as number;
+        if (label[s] !== labelNo) push(s);
+      }
+    } else {
+      const list = served.mats(i);
+      for (let q = 0; q < list.length; q++) {
+        const m = position[list[q] as number] as number;
+        if (label[m] !== labelNo) push(m);
+      }
+    }
+  }
+  return { members: queue.slice(0, tail), seeded };
+}
+
+/** Labels every mat's component from scratch. `seed` is per table position. */
+export function reachComponents(
+  mats: MatTable,
+  matIndexAt: Int32Array,
+  part: ServingPart,
+  seed: Uint8Array,
+): ReachComponents {
+  const served = ServedMats.of(matIndexAt.length, mats, part);
+  const label = new Int32Array(matIndexAt.length).fill(-1);
+  const components: Component[] = [];
+  for (let k = 0; k < mats.count; k++) {
+    const at = mats.position[k] as number;
+    if ((label[at] as number) < 0)
+      components.push(walk(at, components.length, label, seed, mats, matIndexAt, served, part));
+  }
+  return { part, served, seed, label, components, built: components.length };
+}
+
+/** What an edit in place changed, as the layout checks need it. */
+export interface LayoutEdit {
+  /** Table positions of the blocks the edit replaced. */
+  readonly changed: readonly number[];
+  /** Mats (report indices) evaluated again: every mat whose serving lists may differ. */
+  readonly redone: ReadonlySet<number>;
+  /** For each table position, the index of its mat in the report, or −1 (the same before and after). */
+  readonly matIndexAt: Int32Array;
+}
+
+/**
+ * The components after an edit: only those holding a block the edit changed, a mat it evaluated again or
+ * a block such a mat listed before or lists now are labelled again (any edge the edit added or removed
+ * has both ends among those blocks, so every other component keeps its blocks and seeds). `seedAt` gives
+ * the seed of a changed block. Returns the blocks labelled again beside the new components, or null when
+ * the caller should label everything again.
+ */
+export function reachComponentsAfterEdit(
+  previous: ReachComponents,
+  before: MatTable,
+  after: MatTable,
+  edit: LayoutEdit,
+  seedAt: (i: number) => boolean,
+): { readonly reach: ReachComponents; readonly relabelled: ReadonlySet<number> } | null {
+  const { part } = previous;
+  const touched = new Set<number>(edit.changed);
+  for (const k of edit.redone) touched.add(after.position[k] as number);
+  const served = previous.served.afterEdit(before, after, part, edit.redone, touched);
+  if (!served) return null;
+  let seed = previous.seed;
+  for (const i of edit.changed) {
+    const s = seedAt(i) ? 1 : 0;
+    if (seed[i] === s) continue;
+    if (seed === previous.seed) seed = seed.slice();
+    seed[i] = s;
+  }
+  // Every block of a touched component is labelled again.
+  const relabel = new Set<number>(touched);
+  const components = previous.components.slice();
+  for (const i of touched) {
+    const l = previous.label[i] as number;
+    const component = l >= 0 ? components[l] : undefined;
+    if (!component) continue;
+    for (const m of component.members) relabel.add(m);
+    components[l] = undefined;
+  }
+  const label = previous.label.slice();
+  for (const i of relabel) label[i] = -1;
+  const { matIndexAt } = edit;
+  for (const i of relabel) {
+    if ((matIndexAt[i] as number) < 0 || (label[i] as number) >= 0) continue;
+    components.push(walk(i, components.length, label, seed, after, matIndexAt, served, part));
+  }
+  if (components.length > previous.built + MOST_PATCHED) return null;
+  return { reach: { part, served, seed, label, components, built: previous.built }, relabelled: relabel };
+}
