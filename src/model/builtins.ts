@@ -368,11 +368,14 @@ export const DEFAULT_OPERATING: OperatingConditions = {
 
 /**
  * Invented yield scenario, inside published ranges: D0 = 1 /cm² (textbook die-yield examples use
- * 0.016–1.25 /cm²), clustering α = 2 (textbook examples use α = 2–4), kill ratios of a few tens of
- * per cent for single cells and a few per cent for whole lines (invented), 2 spare rows and 2 spare columns
- * per mat row (common practice: a few spares per sub-array), a 6 µm² fuse with its program device and latch
- * and a 1 µm² compare bit (invented), 512 copies of the demo's 8 Mib floorplan (a 4 Gib die) on
- * 30 mm², about 59 % of it arrays (commodity DRAM dies are about half array), 300 mm wafer.
+ * 0.016–1.25 /cm²), clustering α = 2 (textbook examples use α = 2–4), 2 spare rows per mat row and 2 spare
+ * columns per sense-amplifier strip segment (common practice: a few spares per sub-array, no source),
+ * 30 mm² die (the floorplan copies on it come from the operating conditions), 300 mm wafer.
+ * Demo inputs with NO published value behind them: the kill ratios (a few tens of per cent for single
+ * cells, a few per cent for whole lines, half for the periphery), the 6 µm² fuse with its program device
+ * and latch and the 1 µm² compare bit. A search of public pages and documentation (eFuse bit-cell
+ * area at a node, laser-fuse pitch, critical-area kill ratios) found descriptions of fuses and of how
+ * kill ratios are set from defect classification, but no number to cite; set them from your process.
  */
 export const DEFAULT_REPAIR: RepairSettings = {
   defectDensity: 10_000,
