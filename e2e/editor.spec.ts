@@ -20,7 +20,8 @@ test.describe('floorplan editor journeys', () => {
     }
     await app.clickBlock(demo, 'mat-r0c0');
     await expect(app.summary()).toContainText('Mat 1.1');
-    await expect(app.field('block-x')).toHaveValue('21 µm');
+    // Positions show in µm at the grid's precision: the 36 nm pitch needs whole nanometres.
+    await expect(app.field('block-x')).toHaveValue('21.000 µm');
 
     await page.keyboard.press('r');
     await expect(app.field('mat-axis')).toHaveValue('horizontal');
@@ -41,7 +42,7 @@ test.describe('floorplan editor journeys', () => {
     await page.keyboard.press('ArrowRight');
     await expect(app.field('block-x')).toHaveValue('21.036 µm');
     await page.keyboard.press('Shift+ArrowDown');
-    await expect(app.field('block-y')).toHaveValue('6.36 µm');
+    await expect(app.field('block-y')).toHaveValue('6.360 µm');
 
     await page.keyboard.press('Control+d');
     await expect(app.blockCount()).toHaveText('59 blocks');
@@ -54,10 +55,11 @@ test.describe('floorplan editor journeys', () => {
     await page.keyboard.press('Control+c');
     const target = await app.worldPoint(195e-6, 10e-6);
     await page.mouse.move(target.x, target.y);
+    await expect(page.getByTestId('cursor-coordinates')).toHaveText(/^x 19\d\.\d{3} µm {3}y \d+\.\d{3} µm$/);
     await page.keyboard.press('Control+v');
     await expect(app.blockCount()).toHaveText('59 blocks');
     await expect(app.summary()).toContainText('Mat 4.4');
-    await expect(app.field('block-x')).toHaveValue(/^19[45](\.\d+)? µm$/);
+    await expect(app.field('block-x')).toHaveValue(/^19[45]\.\d{3} µm$/);
 
     await page.keyboard.press('?');
     await expect(page.getByTestId('shortcut-help')).toBeVisible();
@@ -88,7 +90,7 @@ test.describe('floorplan editor journeys', () => {
     await app.drag(start, { x: start.x + 60, y: start.y + 300 }, false);
     await page.keyboard.press('Escape');
     await page.mouse.up();
-    await expect(app.field('block-x')).toHaveValue('21 µm');
+    await expect(app.field('block-x')).toHaveValue('21.000 µm');
     await expect(page.getByTestId('undo')).toBeDisabled();
     await app.expectChecksClear();
 
@@ -104,7 +106,7 @@ test.describe('floorplan editor journeys', () => {
     const dxNm = (Number.parseFloat(movedX) - 21) * 1000;
     expect(Math.abs(dxNm / 36 - Math.round(dxNm / 36))).toBeLessThan(1e-3);
     await page.keyboard.press('Control+z');
-    await expect(app.field('block-x')).toHaveValue('21 µm');
+    await expect(app.field('block-x')).toHaveValue('21.000 µm');
     await app.expectChecksClear();
     await expect(page.getByTestId('undo')).toBeDisabled();
   });
@@ -143,7 +145,7 @@ test.describe('floorplan editor journeys', () => {
     // Lengths take engineering notation: "0.25 mm" puts both mats' top edges at 250 µm.
     await app.field('block-y').fill('0.25 mm');
     await app.field('block-y').press('Enter');
-    await expect(app.field('block-y')).toHaveValue('250 µm');
+    await expect(app.field('block-y')).toHaveValue('250.000 µm');
     await app.field('block-x').fill('far');
     await app.field('block-x').press('Enter');
     await expect(page.getByRole('alert')).toContainText('far');
@@ -203,7 +205,7 @@ test.describe('floorplan editor journeys', () => {
     expect(cells).toBeLessThan(512);
     expect(Number.isInteger(cells)).toBe(true);
     await expect(app.field('cells-per-bitline')).toHaveValue('512');
-    await expect(app.field('block-x')).toHaveValue('21 µm');
+    await expect(app.field('block-x')).toHaveValue('21.000 µm');
     await page.keyboard.press('Control+z');
     await expect(app.field('cells-per-wordline')).toHaveValue('512');
     await expect(page.getByTestId('undo')).toBeDisabled();

@@ -1,13 +1,15 @@
 import { useEffect, useRef } from 'react';
 import { Legend } from '../canvas/Legend';
-import { formatQuantity, formatScaled } from '../model/units';
+import { pitchFor } from '../canvas/gestures/gesture';
+import { formatPosition, formatQuantity } from '../model/units';
 import { useEditorStore, type EditorState } from '../store/editorStore';
 import { useAppStore } from '../store/useAppStore';
 
+/** The pointer at the precision of the grid the active tool places on (the chosen cell's line pitches). */
 function coordinates(pointer: EditorState['pointer']): string {
-  return pointer
-    ? `x ${formatScaled(pointer.x, 'µ', 3)} µm   y ${formatScaled(pointer.y, 'µ', 3)} µm`
-    : 'x —   y —';
+  if (!pointer) return 'x —   y —';
+  const grid = pitchFor(useAppStore.getState().history.present, useEditorStore.getState().options, []);
+  return `x ${formatPosition(pointer.x, grid.x)}   y ${formatPosition(pointer.y, grid.y)}`;
 }
 
 /**

@@ -123,6 +123,34 @@ export function formatScaled(value: number, prefix: string, decimals: number): s
   return (value / 10 ** exponent).toFixed(decimals);
 }
 
+/** Finest position decimals in µm: 0.1 nm, below any drawn grid. */
+const MAX_POSITION_DECIMALS = 4;
+
+/**
+ * How many decimals of a micrometre show every whole multiple of a grid step `step` (m) exactly: 3 for
+ * a 36 nm pitch, 4 for 7.5 nm, 0 for 2 µm; at most 4 (0.1 nm).
+ */
+export function positionDecimals(step: number): number {
+  const micrometres = Math.abs(step) * 1e6;
+  if (!(micrometres > 0) || !Number.isFinite(micrometres)) return 3;
+  for (let d = 0; d < MAX_POSITION_DECIMALS; d++) {
+    const scaled = micrometres * 10 ** d;
+    if (Math.abs(scaled - Math.round(scaled)) < 1e-6 * Math.max(1, scaled)) return d;
+  }
+  return MAX_POSITION_DECIMALS;
+}
+
+/**
+ * A position or shift on the floorplan at the precision of its grid step (m): always in µm, with the
+ * decimals positionDecimals(step) gives, however far from the origin ("12345.678 µm", never "12.35 mm").
+ */
+export function formatPosition(value: number, step: number): string {
+  if (!Number.isFinite(value)) return Number.isNaN(value) ? '—' : value > 0 ? '∞' : '−∞';
+  const text = (value * 1e6).toFixed(positionDecimals(step));
+  // "-0.000" is zero.
+  return `${Number(text) === 0 ? text.replace('-', '') : text} µm`;
+}
+
 /** Areas read best in µm² for cells and mats and mm² for dies. */
 function formatArea(value: number, digits: number): string {
   const squareMicrometres = value * 1e12;

@@ -1,5 +1,6 @@
 import { setBlockProperties, type BlockPropertiesPatch } from '../commands/setBlockProperties';
 import { useState } from 'react';
+import { pitchFor } from '../canvas/gestures/gesture';
 import { setMatCell } from '../commands/setMatCell';
 import { setMatCellCounts } from '../commands/setMatCellCounts';
 import { ANCHOR_CORNERS, type AnchorCorner } from '../geometry/stretchMap';
@@ -8,6 +9,7 @@ import { blockRect } from '../geometry/placedBlocks';
 import { BITLINE_AXES, BLOCK_TYPE_LABEL, isMat, type Block, type Mat, type Strip } from '../model/block';
 import { formatMatSizeAndBits } from '../model/matSize';
 import { formatQuantity } from '../model/units';
+import { useEditorStore } from '../store/editorStore';
 import { useAppStore } from '../store/useAppStore';
 import { NameField } from './NameField';
 import { QuantityField } from './QuantityField';
@@ -44,6 +46,7 @@ function typeSummary(blocks: readonly Block[]): string {
 export function PropertiesPanel() {
   const design = useAppStore((s) => s.history.present);
   const selectedIds = useAppStore((s) => s.selectedIds);
+  const toolOptions = useEditorStore((s) => s.options);
   const run = useRunCommand();
   const selectedSet = new Set(selectedIds);
   const blocks = design.blocks.filter((b) => selectedSet.has(b.id));
@@ -64,6 +67,8 @@ export function PropertiesPanel() {
   const cell = singleMat ? design.cells.find((c) => c.id === singleMat.cellId) : undefined;
   const geometry = singleMat && cell ? matGeometry(singleMat, cell, design.process.featureSize) : null;
   const mirrored = shared(mats, (m: Mat) => m.mirrored ?? false);
+  // Positions show at the step moves and nudges of this selection go in.
+  const grid = pitchFor(design, toolOptions, blocks);
 
   return (
     <section className="panel" aria-labelledby="properties-heading">
@@ -102,6 +107,7 @@ export function PropertiesPanel() {
             id="block-x"
             label="x (left)"
             quantity="length"
+            step={grid.x}
             value={shared(blocks, (b) => b.x)}
             onCommit={(x) => patch({ x })}
           />
@@ -109,6 +115,7 @@ export function PropertiesPanel() {
             id="block-y"
             label="y (top)"
             quantity="length"
+            step={grid.y}
             value={shared(blocks, (b) => b.y)}
             onCommit={(y) => patch({ y })}
           />

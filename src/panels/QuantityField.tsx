@@ -1,5 +1,5 @@
 import { useEffect, useState } from 'react';
-import { formatQuantity, parseQuantity, type Quantity } from '../model/units';
+import { formatPosition, formatQuantity, parseQuantity, type Quantity } from '../model/units';
 
 interface QuantityFieldProps {
   readonly id: string;
@@ -9,13 +9,16 @@ interface QuantityFieldProps {
   readonly value: number | null;
   /** Significant digits shown; positions need more than figures do. */
   readonly digits?: number;
+  /** For a position: its grid step (m); shown in µm at that step's precision (formatPosition). */
+  readonly step?: number;
   /** Applies a parsed value (SI units); returns an error message when it was refused. */
   onCommit(value: number): string | null;
 }
 
-/** Counts are shown plainly ("512"), everything else in engineering notation ("11 fF"). */
-function display(value: number | null, quantity: Quantity, digits: number): string {
+/** Counts are shown plainly ("512"), positions at their grid, everything else in engineering notation ("11 fF"). */
+function display(value: number | null, quantity: Quantity, digits: number, step: number | undefined): string {
   if (value === null) return '';
+  if (step !== undefined) return formatPosition(value, step);
   return quantity === 'count' ? String(value) : formatQuantity(value, quantity, digits);
 }
 
@@ -24,8 +27,16 @@ function display(value: number | null, quantity: Quantity, digits: number): stri
  * ("40u", "40 µm", "0.04 mm", "85 °C", or a bare number in SI units). Commits on Enter or blur, reverts on
  * Escape, and keeps a refused text with the reason beside it.
  */
-export function QuantityField({ id, label, quantity, value, digits = 7, onCommit }: QuantityFieldProps) {
-  const shown = display(value, quantity, digits);
+export function QuantityField({
+  id,
+  label,
+  quantity,
+  value,
+  digits = 7,
+  step,
+  onCommit,
+}: QuantityFieldProps) {
+  const shown = display(value, quantity, digits, step);
   const [text, setText] = useState(shown);
   const [error, setError] = useState<string | null>(null);
   useEffect(() => {

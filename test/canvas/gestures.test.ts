@@ -62,6 +62,18 @@ describe('select tool gestures', () => {
     expect(press.gesture.changedBlocks()?.[0]?.x).toBeCloseTo(matRect.x + args.dx, 15);
   });
 
+  it('a long drag says its shift in µm at the pitch’s precision, not rounded to a few digits', () => {
+    const press = pressWithSelectTool(context(design), centre, false);
+    const far = { x: centre.x + 12345.67e-6, y: centre.y + 0.5e-6 };
+    press.gesture.move(far, NO_KEYS);
+    const args = press.gesture.finish(far, true, NO_KEYS).call?.args as { dx: number; dy: number };
+    // 36 nm steps across, word-line pitch steps down: whole nm, so three decimals of a µm.
+    expect(press.gesture.preview().label).toBe(
+      `Δx ${(args.dx * 1e6).toFixed(3)} µm, Δy ${(args.dy * 1e6).toFixed(3)} µm`,
+    );
+    expect(press.gesture.preview().label).toMatch(/^Δx 12345\.6\d\d µm/);
+  });
+
   it('a dragged mat snaps to abut a neighbour and shows a guide', () => {
     // Move mat-r0c0 so that its right edge nears mat-r0c1's left edge (they are one driver strip apart).
     const neighbour = rectOf(design, 'mat-r0c1');

@@ -1,5 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { formatQuantity, formatScaled, parseQuantity, type Quantity } from '../../src/model/units';
+import {
+  formatPosition,
+  formatQuantity,
+  formatScaled,
+  parseQuantity,
+  positionDecimals,
+  type Quantity,
+} from '../../src/model/units';
 
 /** The SI value of a parse that must succeed; fails the test with the parser's message otherwise. */
 function parsed(text: string, quantity: Quantity): number {
@@ -118,6 +125,34 @@ describe('formatQuantity: SI in, engineering notation out', () => {
       [0.65, 'percent'],
     ] as const) {
       expect(parsed(formatQuantity(value, quantity), quantity) / value).toBeCloseTo(1, 3);
+    }
+  });
+});
+
+describe('positions at the grid’s precision', () => {
+  it('takes as many decimals of a micrometre as the grid step needs (arithmetic)', () => {
+    expect(positionDecimals(36e-9)).toBe(3);
+    expect(positionDecimals(54e-9)).toBe(3);
+    expect(positionDecimals(0.1e-6)).toBe(1);
+    expect(positionDecimals(2e-6)).toBe(0);
+    expect(positionDecimals(7.5e-9)).toBe(4);
+    // A step finer than 0.1 nm (or none) still stops at 0.1 nm, or nm when there is no step.
+    expect(positionDecimals(1e-12)).toBe(4);
+    expect(positionDecimals(0)).toBe(3);
+  });
+
+  it('shows a position in µm at that precision however far from the origin', () => {
+    expect(formatPosition(21e-6, 36e-9)).toBe('21.000 µm');
+    expect(formatPosition(12345.678e-6, 36e-9)).toBe('12345.678 µm');
+    expect(formatPosition(0.036e-6 * 3e5, 36e-9)).toBe('10800.000 µm');
+    expect(formatPosition(-1e-13, 36e-9)).toBe('0.000 µm');
+    expect(formatPosition(-21.036e-6, 36e-9)).toBe('-21.036 µm');
+    expect(formatPosition(Number.NaN, 36e-9)).toBe('—');
+  });
+
+  it('reads back what it shows', () => {
+    for (const v of [21.036e-6, 12345.678e-6, -3.6e-8]) {
+      expect(Math.abs(parsed(formatPosition(v, 36e-9), 'length') - v)).toBeLessThan(1e-15);
     }
   });
 });

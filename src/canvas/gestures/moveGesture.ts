@@ -5,7 +5,7 @@ import { snapMove, type SnapTargets } from '../../geometry/snapping';
 import { decoderSides, fitDroppedDecoder, stackOutlines } from '../../geometry/stackFit';
 import { fitDroppedStrip } from '../../geometry/stripFit';
 import type { Block } from '../../model/block';
-import { formatQuantity } from '../../model/units';
+import { formatPosition, formatQuantity } from '../../model/units';
 import {
   commandCall,
   labelOf,
@@ -123,7 +123,8 @@ export class MoveGesture implements Gesture {
       const r = this.rects[i] ?? { x: b.x, y: b.y, width: 0, height: 0 };
       return { type: b.type, rect: fit ? fit.rect : { ...r, x: r.x + this.dx, y: r.y + this.dy } };
     });
-    const shift = `Δx ${formatQuantity(this.dx, 'length')}, Δy ${formatQuantity(this.dy, 'length')}`;
+    const grid = movePitch(this.ctx, this.originals);
+    const shift = `Δx ${formatPosition(this.dx, grid.x)}, Δy ${formatPosition(this.dy, grid.y)}`;
     const label = fit
       ? `${shift} · fits ${fit.describe}, ${formatQuantity(
           Math.max(fit.rect.width, fit.rect.height),
