@@ -19,11 +19,16 @@ export interface FamilyTally {
   readonly limits: ReadonlyMap<keyof typeof LIMIT_LABELS, number>;
 }
 
-/** Tallies every family of the points, in cell order; families without points are left out. */
-export function familyTallies(points: readonly SweepPoint[], limits: FeasibilityLimits): FamilyTally[] {
-  const byCell = new Map<
+/** Tallies the points by `familyOf` (a whole number per family), in family order; empty families are left out. */
+function talliesBy(
+  points: readonly SweepPoint[],
+  limits: FeasibilityLimits,
+  familyOf: (p: SweepPoint) => number,
+): (FamilyTally & { readonly family: number })[] {
+  const byFamily = new Map<
     number,
     {
+      cellIndex: number;
       points: number;
       feasible: number;
       unplanned: number;
@@ -32,10 +37,18 @@ export function familyTallies(points: readonly SweepPoint[], limits: Feasibility
     }
   >();
   for (const p of points) {
-    let t = byCell.get(p.cellIndex);
+    const family = familyOf(p);
+    let t = byFamily.get(family);
     if (!t) {
-      t = { points: 0, feasible: 0, unplanned: 0, checks: new Map(), limits: new Map() };
-      byCell.set(p.cellIndex, t);
+      t = {
+        cellIndex: p.cellIndex,
+        points: 0,
+        feasible: 0,
+        unplanned: 0,
+        checks: new Map(),
+        limits: new Map(),
+      };
+      byFamily.set(family, t);
     }
     t.points++;
     if (!p.figures) {
@@ -49,7 +62,29 @@ export function familyTallies(points: readonly SweepPoint[], limits: Feasibility
       else t.limits.set(r.limit, (t.limits.get(r.limit) ?? 0) + 1);
     }
   }
-  return [...byCell.entries()].sort(([a], [b]) => a - b).map(([cellIndex, t]) => ({ cellIndex, ...t }));
+  return [...byFamily.entries()].sort(([a], [b]) => a - b).map(([family, t]) => ({ family, ...t }));
+}
+
+/** Tallies every family of the points, in cell order; families without points are left out. */
+export function familyTallies(points: readonly SweepPoint[], limits: FeasibilityLimits): FamilyTally[] {
+  return talliesBy(points, limits, (p) => p.cellIndex);
+}
+
+/** One cell on one process: a family's tally split by process. */
+export interface CellProcessTally extends FamilyTally {
+  /** Index into the request's processes. */
+  readonly processIndex: number;
+}
+
+/** Tallies every cell × process pair of the points, in cell then process order. */
+export function cellProcessTallies(
+  points: readonly SweepPoint[],
+  limits: FeasibilityLimits,
+  processCount: number,
+): CellProcessTally[] {
+  return talliesBy(points, limits, (p) => p.cellIndex * processCount + p.processIndex).map(
+    ({ family, ...t }) => ({ ...t, processIndex: family % processCount }),
+  );
 }
 
 /**
@@ -70,22 +105,50 @@ export function familyInfeasibleSentence(name: string, t: FamilyTally): string |
   const everyPoint = causes.filter((c) => c.count === t.points);
   if (t.unplanned === t.points) return `${name}: no point can be planned (too many mats for the capacity).`;
   if (everyPoint.length > 0 && t.unplanned === 0) {
-    const words = everyPoint.map((c) => c.words);
-    const list = words.length === 1 ? words[0] : `${words.slice(0, -1).join(', ')} and ${words.at(-1)}`;
-    return `${name}: every point fails ${list}.`;
+    return `${name}: every point fails ${listWords(everyPoint.map((c) => c.words))}.`;
   }
   const parts = causes.map((c) => `${n(c.count)} ${c.count === 1 ? 'fails' : 'fail'} ${c.words}`);
   if (t.unplanned > 0) parts.push(`${n(t.unplanned)} cannot be planned (too many mats)`);
   return `${name}: no feasible point of ${n(t.points)} — ${parts.join(', ')}.`;
 }
 
-/** The sentences for every family of a sweep that has no feasible point, in cell order. */
+/**
+ * The sentences for every family of a sweep that has no feasible point, in cell order. With more than one
+ * process, a cell that is feasible on some process but on none of the points of another gets a sentence
+ * for that cell on that process, saying where it is feasible ("3T gain cell on 28 nm: every point fails
+ * the retention check; feasible on 40 nm.").
+ */
 export function infeasibleFamilySentences(
   points: readonly SweepPoint[],
   cellNames: readonly string[],
   limits: FeasibilityLimits,
+  processNames: readonly string[] = [],
 ): string[] {
-  return familyTallies(points, limits)
-    .map((t) => familyInfeasibleSentence(cellNames[t.cellIndex] ?? `cell ${t.cellIndex + 1}`, t))
-    .filter((s): s is string => s !== null);
+  const cellName = (i: number) => cellNames[i] ?? `cell ${i + 1}`;
+  const processName = (i: number) => processNames[i] ?? `process ${i + 1}`;
+  const byProcess = processNames.length > 1 ? cellProcessTallies(points, limits, processNames.length) : [];
+  const sentences: string[] = [];
+  for (const t of familyTallies(points, limits)) {
+    const whole = familyInfeasibleSentence(cellName(t.cellIndex), t);
+    if (whole !== null) {
+      sentences.push(whole);
+      continue;
+    }
+    const pairs = byProcess.filter((p) => p.cellIndex === t.cellIndex);
+    const feasibleOn = pairs.filter((p) => p.feasible > 0).map((p) => processName(p.processIndex));
+    for (const pair of pairs) {
+      const sentence = familyInfeasibleSentence(
+        `${cellName(t.cellIndex)} on ${processName(pair.processIndex)}`,
+        pair,
+      );
+      if (sentence !== null)
+        sentences.push(`${sentence.slice(0, -1)}; feasible on ${listWords(feasibleOn)}.`);
+    }
+  }
+  return sentences;
+}
+
+/** "A", "A and B", "A, B and C". */
+function listWords(words: readonly string[]): string {
+  return words.length <= 1 ? (words[0] ?? '') : `${words.slice(0, -1).join(', ')} and ${words.at(-1)}`;
 }

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { CHECK_LABELS, type FindingKind } from '../../src/engine';
 import {
+  cellProcessTallies,
   familyInfeasibleSentence,
   familyTallies,
   infeasibleFamilySentences,
@@ -107,5 +108,37 @@ describe('why whole families are infeasible', () => {
     expect(tallies.reduce((s, t) => s + t.points, 0)).toBe(real.length);
     expect(sentences.length).toBe(tallies.filter((t) => t.feasible === 0).length);
     for (const s of sentences) expect(request.cells.some((c) => s.startsWith(`${c.name}:`))).toBe(true);
+  });
+});
+
+describe('a cell feasible on one process and not on another', () => {
+  const onProcess = (p: SweepPoint, processIndex: number): SweepPoint => ({ ...p, processIndex });
+
+  it('is called out per process, saying where it is feasible', () => {
+    const points = [
+      onProcess(point(0, []), 0),
+      onProcess(point(0, ['retention']), 1),
+      onProcess(point(0, ['retention']), 1),
+      onProcess(point(1, ['senseAmpPitch']), 0),
+      onProcess(point(1, ['senseAmpPitch']), 1),
+    ];
+    const tallies = cellProcessTallies(points, limits, 2);
+    expect(tallies.map((t) => [t.cellIndex, t.processIndex, t.points, t.feasible])).toEqual([
+      [0, 0, 1, 1],
+      [0, 1, 2, 0],
+      [1, 0, 1, 0],
+      [1, 1, 1, 0],
+    ]);
+    expect(
+      infeasibleFamilySentences(points, ['Gain cell', 'Vertical 4F²'], limits, ['A 20 nm', 'B 16 nm']),
+    ).toEqual([
+      `Gain cell on B 16 nm: every point fails the ${CHECK_LABELS.retention} check; feasible on A 20 nm.`,
+      // Infeasible on every process: one sentence for the cell, as before.
+      `Vertical 4F²: every point fails the ${CHECK_LABELS.senseAmpPitch} check.`,
+    ]);
+    // With one process there is nothing to split.
+    expect(
+      infeasibleFamilySentences(points, ['Gain cell', 'Vertical 4F²'], limits, ['A 20 nm']),
+    ).toHaveLength(1);
   });
 });

@@ -96,6 +96,7 @@ export function ExplorerView() {
             run.points,
             run.request.cells.map((c) => c.name),
             limits,
+            run.request.processes.map(shortProcessName),
           ),
     [run.status, run.points, run.request, limits],
   );
