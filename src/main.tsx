@@ -1,6 +1,7 @@
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { App } from './app/App';
+import { loadChecks } from './io/checksOnDemand';
 import { documentSession } from './app/session';
 import { useEditorStore } from './store/editorStore';
 import { useAppStore } from './store/useAppStore';
@@ -25,4 +26,7 @@ void documentSession
         <App />
       </StrictMode>,
     );
+    // Restore and the edit check (with the schema library) load after the first paint: edits made
+    // before they arrive are checked when they do (store/appStore.ts).
+    requestAnimationFrame(() => setTimeout(() => void loadChecks(), 0));
   });

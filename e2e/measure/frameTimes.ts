@@ -9,7 +9,9 @@
  * first idle moment after the floorplan is shown.
  */
 import { cpus } from 'node:os';
+import { fileURLToPath } from 'node:url';
 import type { Browser } from '@playwright/test';
+import { initialJsLine } from './initialJs';
 import {
   gesture,
   launchChromium,
@@ -125,6 +127,7 @@ async function main() {
     `${cpus().length} CPUs, load average at the end ${loadAverage()}; ${MOVES} mouse moves every ` +
       `${MOVE_INTERVAL_MS} ms per gesture; times in ms, each taken at the next paint.`,
   );
+  console.log(initialJsLine(fileURLToPath(new URL('../../dist', import.meta.url))));
   console.log(HEADER);
   for (const line of lines) console.log(line);
 }

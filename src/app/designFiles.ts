@@ -1,6 +1,5 @@
-import { MAX_DESIGN_TEXT_LENGTH } from '../io/restore';
+import { MAX_DESIGN_TEXT_LENGTH } from '../io/designText';
 import { clipForMessage } from '../model/messageText';
-import { openDesignBytes } from '../store/openDesignText';
 import { useAppStore } from '../store/useAppStore';
 import { downloadBlob, fileBaseName } from './download';
 
@@ -86,6 +85,8 @@ export async function openDesignFile(file: File, handle?: DesignFileHandle): Pro
     });
     return false;
   }
+  // Restore (with the schema library) loads on the first file opened.
+  const { openDesignBytes } = await import('../store/openDesignText');
   const opened = openDesignBytes(useAppStore, bytes, file.name);
   if (opened && handle) handles.set(useAppStore.getState().documentId, handle);
   return opened;

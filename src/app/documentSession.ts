@@ -6,7 +6,7 @@ import {
   type DocumentAbout,
   type KeyValueArea,
 } from '../io/documentShelf';
-import { restoreDesign } from '../io/restore';
+import { restoreDesignWhenLoaded } from '../io/checksOnDemand';
 import { restoreShared, sharedPayload } from '../io/shareLink';
 import type { Design } from '../model/design';
 import { demoDesign } from '../designs/demoDesign';
@@ -181,7 +181,7 @@ export class DocumentSession {
     try {
       const text = localStorage.getItem(OLD_AUTOSAVE_KEY);
       if (text === null) return;
-      const restored = restoreDesign(text);
+      const restored = await restoreDesignWhenLoaded(text);
       // A text that no longer restores stays where it is: nothing is dropped.
       if (!restored.ok) return;
       await saveDocument(this.area, newDocumentId(), restored.design, text);

@@ -14,7 +14,7 @@ import { blockRect } from '../geometry/placedBlocks';
 import { boundingBox, type Rect } from '../geometry/rect';
 import { repeatPitches, type RepeatPitches } from '../geometry/repeatPitch';
 import { snapToPitch } from '../geometry/snapping';
-import { restoreDesign } from '../io/restore';
+import { loadChecks } from '../io/checksOnDemand';
 import type { Design } from '../model/design';
 import type { AppStore } from '../store/appStore';
 import type { EditorStore } from '../store/editorStore';
@@ -87,9 +87,13 @@ export function createEditorActions(app: AppStore, editor: EditorStore, canvas: 
     return text;
   }
 
-  /** Pastes a copied design's blocks with their top-left corner at the pointer (or beside the originals). */
-  function paste(text: string | null = editor.getState().clipboard): boolean {
+  /**
+   * Pastes a copied design's blocks with their top-left corner at the pointer (or beside the originals).
+   * Resolves true when it pasted; the clipboard text is read through restore, loaded on first use.
+   */
+  async function paste(text: string | null = editor.getState().clipboard): Promise<boolean> {
     if (!text) return false;
+    const { restoreDesign } = await loadChecks();
     const restored = restoreDesign(text);
     if (!restored.ok) return false;
     const clip = restored.design;

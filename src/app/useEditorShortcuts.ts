@@ -48,7 +48,7 @@ export function useEditorShortcuts(): void {
         // The browser's paste event brings the clipboard text; without one, paste what was copied here.
         pasteHandled = false;
         setTimeout(() => {
-          if (!pasteHandled) editorActions.paste();
+          if (!pasteHandled) void editorActions.paste();
         }, 0);
         return;
       }
@@ -69,7 +69,7 @@ export function useEditorShortcuts(): void {
       pasteHandled = true;
       e.preventDefault();
       const text = e.clipboardData?.getData('text/plain') ?? '';
-      if (!editorActions.paste(text)) editorActions.paste();
+      void editorActions.paste(text).then((pasted) => pasted || editorActions.paste());
     };
     window.addEventListener('keydown', onKeyDown, true);
     document.addEventListener('copy', onCopy);

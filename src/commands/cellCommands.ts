@@ -1,4 +1,5 @@
-import { cellDefinitionSchema, type CellDefinition } from '../model/cell';
+import type { CellDefinition } from '../model/cell';
+import { cellDefinitionSchema } from '../model/cellSchema';
 import type { Design } from '../model/design';
 import type { GainReadField } from '../model/fieldCatalog';
 import type { Command, CommandResult } from './command';

@@ -1,4 +1,5 @@
-import { variantDesignSchema, type VariantDesign } from '../model/design';
+import type { VariantDesign } from '../model/design';
+import { variantDesignSchema } from '../model/designSchema';
 import {
   activateVariant,
   activeVariantId,

@@ -1,7 +1,8 @@
 import { DEFAULT_REPAIR } from '../model/builtins';
 import type { Design } from '../model/design';
 import type { RepairNumericField } from '../model/fieldCatalog';
-import { repairSettingsSchema, type RepairDomainKind } from '../model/repair';
+import type { RepairDomainKind } from '../model/repair';
+import { repairSettingsSchema } from '../model/repairSchema';
 import type { Command, CommandResult } from './command';
 import { firstIssue } from './zodMessage';
 

@@ -1,5 +1,8 @@
 import type { Design } from '../model/design';
 
+/** Largest design text we will read (bytes of UTF-16 text ≈ characters); a whole die fits easily. */
+export const MAX_DESIGN_TEXT_LENGTH = 64 * 1024 * 1024;
+
 /** Blocks serialised per piece: about 1 ms of JSON.stringify on a 2-core laptop (about 200 bytes each). */
 export const BLOCKS_PER_PIECE = 2000;
 

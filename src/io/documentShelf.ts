@@ -1,6 +1,6 @@
 import type { Design } from '../model/design';
 import { clipForMessage } from '../model/messageText';
-import { restoreDesign } from './restore';
+import { restoreDesignWhenLoaded } from './checksOnDemand';
 
 /**
  * Designs kept in the browser, one record per document, so that starting another design never
@@ -87,7 +87,7 @@ export async function loadDocument(area: KeyValueArea, id: string, now = Date.no
     return { kind: 'unreadable', message: `The stored design could not be read (${describe(error)}).` };
   }
   if (text === null) return { kind: 'none' };
-  const restored = restoreDesign(text);
+  const restored = await restoreDesignWhenLoaded(text);
   if (restored.ok) return { kind: 'restored', design: restored.design };
   const why = restored.errors[0] ?? 'unknown problem';
   const asideKey = `${UNREADABLE_PREFIX}${id}:${now}`;

@@ -1,14 +1,9 @@
 import { z } from 'zod';
-import { blockSchema, type Block } from '../model/block';
+import type { Block } from '../model/block';
+import { blockSchema } from '../model/blockSchema';
 import type { CellDefinition } from '../model/cell';
-import {
-  designSchema,
-  MAX_BLOCKS,
-  matLengthProblem,
-  shelfSchemaWith,
-  type Design,
-  type VariantDesign,
-} from '../model/design';
+import { MAX_BLOCKS, matLengthProblem, type Design, type VariantDesign } from '../model/design';
+import { designSchema, shelfSchemaWith } from '../model/designSchema';
 import { clipForMessage } from '../model/messageText';
 import { formatPath } from './restore';
 

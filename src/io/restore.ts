@@ -1,8 +1,9 @@
-import { DESIGN_FORMAT, DESIGN_VERSION, designSchema, type Design } from '../model/design';
+import { DESIGN_FORMAT, DESIGN_VERSION, type Design } from '../model/design';
+import { designSchema } from '../model/designSchema';
+import { MAX_DESIGN_TEXT_LENGTH } from './designText';
 import { MIGRATIONS } from './migrations';
 
-/** Largest design text we will read (bytes of UTF-16 text ≈ characters); a whole die fits easily. */
-export const MAX_DESIGN_TEXT_LENGTH = 64 * 1024 * 1024;
+export { MAX_DESIGN_TEXT_LENGTH } from './designText';
 
 /** What a restore gives back: the design, or every problem found with where it is. */
 export type RestoreResult =

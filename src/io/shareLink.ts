@@ -1,6 +1,7 @@
 import type { Design } from '../model/design';
 import { clipForMessage } from '../model/messageText';
-import { restoreDesign, type RestoreResult } from './restore';
+import { restoreDesignWhenLoaded } from './checksOnDemand';
+import type { RestoreResult } from './restore';
 
 /**
  * A design carried in a page address: its file text, deflate-compressed (the browser's own
@@ -111,5 +112,5 @@ export async function restoreShared(payload: string): Promise<RestoreResult> {
       ],
     };
   }
-  return restoreDesign(text);
+  return restoreDesignWhenLoaded(text);
 }

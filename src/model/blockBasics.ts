@@ -3,6 +3,9 @@ import type { BlockType } from './block';
 // The plain facts about blocks, apart from their schema (block.ts), so that code which only computes
 // (the engine and the sweep worker) does not load the validation library.
 
+/** A position or size on the floorplan (m); a die is at most a few centimetres across. */
+export const MAX_COORDINATE = 0.1;
+
 /** Cells on one bit line or one word line; large enough for any real mat, small enough to stay sane. */
 export const MAX_CELLS_PER_LINE = 16384;
 

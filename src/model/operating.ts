@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { repairSettingsSchema } from './repair';
+import { repairSettingsSchema } from './repairSchema';
 import { nonNegative, positive, wholeCount } from './schemaParts';
 
 /**

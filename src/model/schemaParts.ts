@@ -34,6 +34,3 @@ export function wholeCount(label: string, min: number, max: number) {
     .refine(Number.isInteger, { message: `${label} must be a whole number` })
     .refine((v) => v >= min && v <= max, { message: `${label} must lie between ${min} and ${max}` });
 }
-
-/** A position or size on the floorplan (m); a die is at most a few centimetres across. */
-export const MAX_COORDINATE = 0.1;

@@ -1,7 +1,7 @@
 import { create } from 'zustand';
 import type { Command } from '../commands/command';
 import { editReport, evaluate, type Report } from '../engine';
-import { editProblems } from '../io/editCheck';
+import { loadChecks, loadedChecks } from '../io/checksOnDemand';
 import type { Design } from '../model/design';
 import { demoDesign } from '../designs/demoDesign';
 import { blocksEditedInPlace } from '../model/designEdit';
@@ -121,11 +121,73 @@ function moveTo(history: History<Design>, before: AppState) {
   return { ...state, selectedIds };
 }
 
+/** What restore would say about `next`, an edit of `base` (empty: it restores); see io/editCheck.ts. */
+export type EditCheck = (next: Design, base: Design) => readonly string[];
+
+/** Where the store finds the edit check: at once when loaded, else once it has loaded. */
+export interface EditCheckSource {
+  now(): EditCheck | null;
+  load(): Promise<EditCheck>;
+}
+
+/** The app's edit check, loaded with the schema library after the first paint (io/checksOnDemand.ts). */
+export const EDIT_CHECK_ON_DEMAND: EditCheckSource = {
+  now: () => loadedChecks()?.editProblems ?? null,
+  load: () => loadChecks().then((checks) => checks.editProblems),
+};
+
+/** An edit accepted before the edit check had loaded, to be checked when it has. */
+interface UncheckedEdit {
+  readonly base: Design;
+  readonly next: Design;
+  readonly label: string;
+}
+
+/**
+ * The history with `base` as its present and every entry from `base`'s successor on dropped (the
+ * successor failed the edit check), or null when `base` is no longer in it (another document started).
+ */
+function historyBackTo(history: History<Design>, base: Design): History<Design> | null {
+  const entries = [...history.past, history.present, ...history.future];
+  const at = entries.indexOf(base);
+  return at < 0 ? null : { past: entries.slice(0, at), present: base, future: [] };
+}
+
 /** Id of a store's first document until the app starts one (tests never store it). */
 export const UNSTORED_DOCUMENT_ID = 'unstored';
 
-export function createAppStore(initial: Design = demoDesign()) {
-  return create<AppState>()((set, get) => ({
+export function createAppStore(
+  initial: Design = demoDesign(),
+  editChecks: EditCheckSource = EDIT_CHECK_ON_DEMAND,
+) {
+  /**
+   * Edits accepted before the edit check loaded (only in the moments after the first paint). They are
+   * checked in order when it arrives; the first that would not restore is undone with everything after
+   * it, and refused with restore's words, so that every edit that stays restores.
+   */
+  let unchecked: UncheckedEdit[] = [];
+  const checkLater = (edit: UncheckedEdit): void => {
+    unchecked.push(edit);
+    if (unchecked.length > 1) return;
+    void editChecks.load().then((check) => {
+      const edits = unchecked;
+      unchecked = [];
+      for (const { base, next, label } of edits) {
+        const problems = check(next, base);
+        if (problems.length === 0) continue;
+        const history = historyBackTo(store.getState().history, base);
+        if (history) {
+          store.setState({
+            ...moveTo(history, store.getState()),
+            lastError: `${label} was refused: ${problems.slice(0, 3).join('; ')}`,
+          });
+        }
+        return;
+      }
+    });
+  };
+
+  const store = create<AppState>()((set, get) => ({
     ...withoutFlag(documentState(startHistory(initial))),
     selectedIds: [],
     viewport: { scale: 3, offsetX: 20, offsetY: 20 },
@@ -148,10 +210,15 @@ export function createAppStore(initial: Design = demoDesign()) {
         return true;
       }
       // Every accepted edit must still restore (reload, file, CLI): refuse it with restore's words.
-      const problems = editProblems(result.design, history.present);
-      if (problems.length > 0) {
-        set({ lastError: `${command.label} was refused: ${problems.slice(0, 3).join('; ')}` });
-        return false;
+      const check = editChecks.now();
+      if (check) {
+        const problems = check(result.design, history.present);
+        if (problems.length > 0) {
+          set({ lastError: `${command.label} was refused: ${problems.slice(0, 3).join('; ')}` });
+          return false;
+        }
+      } else {
+        checkLater({ base: history.present, next: result.design, label: command.label });
       }
       set({ ...moveTo(pushHistory(history, result.design), get()), lastError: null });
       return true;
@@ -195,6 +262,7 @@ export function createAppStore(initial: Design = demoDesign()) {
       set({ notice });
     },
   }));
+  return store;
 }
 
 export type AppStore = ReturnType<typeof createAppStore>;

@@ -40,7 +40,7 @@ describe('editor actions', () => {
     expect(copy.x).toBeCloseTo(original.x + blockRect(d, original).width, 15);
   });
 
-  it('copies as a design file that restores, and pastes at the pointer on the cell grid', () => {
+  it('copies as a design file that restores, and pastes at the pointer on the cell grid', async () => {
     const { app, editor, actions } = setup();
     app.getState().select(['mat-r1c1', 'sa-r1c1']);
     const text = actions.copy();
@@ -48,12 +48,12 @@ describe('editor actions', () => {
     const restored = restoreDesign(text ?? '');
     expect(restored.ok && restored.design.blocks.map((b) => b.id)).toEqual(['mat-r1c1', 'sa-r1c1']);
     editor.getState().setPointer({ x: 300e-6, y: 10e-6 });
-    expect(actions.paste()).toBe(true);
+    expect(await actions.paste()).toBe(true);
     expect(app.getState().selectedIds).toEqual(['mat-r1c1-2', 'sa-r1c1-2']);
     // The clip's top-left (the strip above the mat) lands on the pointer, rounded to the 36 nm pitch.
     const strip = app.getState().history.present.blocks.find((b) => b.id === 'sa-r1c1-2');
     expect(Math.abs((strip?.x ?? 0) - 300e-6)).toBeLessThan(36e-9);
-    expect(actions.paste('not a design')).toBe(false);
+    expect(await actions.paste('not a design')).toBe(false);
     expect(clipboardText(app.getState().history.present, [])).toBeNull();
   });
 

@@ -20,7 +20,7 @@ import {
   GAIN_3T_CELL,
   OPEN_6F2_CELL,
 } from '../../src/model/builtins';
-import { variantDesignSchema } from '../../src/model/design';
+import { variantDesignSchema } from '../../src/model/designSchema';
 import type { CellDefinition } from '../../src/model/cell';
 
 const STRIPS: StripSizes = {

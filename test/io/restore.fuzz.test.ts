@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { evaluate } from '../../src/engine/evaluation/evaluate';
 import { MAX_DESIGN_TEXT_LENGTH, restoreDesign } from '../../src/io/restore';
 import { demoDesign } from '../../src/designs/demoDesign';
-import { designSchema } from '../../src/model/design';
+import { designSchema } from '../../src/model/designSchema';
 import {
   DEMO_CELL_IDS,
   DEMO_TEXT,

@@ -1,0 +1,5 @@
+import { loadChecks } from '../../src/io/checksOnDemand';
+
+// The app loads restore and the edit check after its first paint (src/main.tsx); every test starts with
+// them loaded, so a store refuses a bad edit at once, as the app does once they have arrived.
+await loadChecks();
