@@ -64,3 +64,44 @@ test('edit the process with unit-aware inputs, refuse nonsense, reset to the bui
   await expect(page.getByTestId('process-featureSize')).toHaveValue('16 nm');
   await page.screenshot({ path: test.info().outputPath('process.png') });
 });
+
+test('a figure that does not exist shows "—" with its reason: figures panel and variants table', async ({
+  page,
+}) => {
+  const app = new FloorplanPage(page);
+  const demo = loadDemoDesign();
+  await app.open();
+  // Every sense-amplifier strip removed: no bit line is sensed, so no bit is usable.
+  const unsensed = {
+    ...demo,
+    name: 'No sense amplifiers',
+    blocks: demo.blocks.filter((b) => b.type !== 'senseAmpStrip'),
+  };
+  await page.getByTestId('open-file-input').setInputFiles({
+    name: 'unsensed.json',
+    mimeType: 'application/json',
+    buffer: Buffer.from(JSON.stringify(unsensed)),
+  });
+  await expect(page.getByTestId('design-name')).toHaveText('No sense amplifiers');
+
+  await expect(app.totalValue('areaPerBit')).toHaveText('—');
+  await expect(page.getByTestId('total-areaPerBit-missing')).toHaveText(
+    'no usable bit: there is nothing to spread the area over',
+  );
+  await expect(app.totalValue('worstRowCycleTime')).toHaveText('—');
+  await expect(page.getByTestId('total-worstRowCycleTime-missing')).toContainText('no usable bit');
+
+  await app.clickBlock(unsensed, 'mat-r0c0');
+  await expect(app.metricValue('senseMargin')).toHaveText('—');
+  await expect(page.getByTestId('metric-senseMargin-missing')).toContainText('no usable bit');
+  await page.getByTestId('metric-senseMargin').click();
+  await expect(page.getByTestId('explanation')).toContainText('Does not exist: no usable bit');
+
+  await page.getByTestId('view-variants').click();
+  await expect(page.getByTestId('variant-v1-areaPerBit')).toHaveText('—');
+  await expect(page.getByTestId('variant-v1-areaPerBit-missing')).toHaveText(
+    'no usable bit: there is nothing to spread the area over',
+  );
+  await expect(page.getByTestId('variant-v1-rowCycleTime-missing')).toContainText('no usable bit');
+  await page.screenshot({ path: test.info().outputPath('missing-reasons-variants.png') });
+});

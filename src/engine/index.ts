@@ -157,3 +157,4 @@ export {
   TABLE_FIGURES,
 } from './figures/bankFigures';
 export { figuresFromReport } from './figures/bankFromReport';
+export { bankMissingReason, MISSING_REASONS } from './figures/missingReasons';

@@ -1,4 +1,5 @@
 import { explanationOf } from './figure';
+import { bankMissingReason } from './missingReasons';
 import { input, SOURCES, type Explanation } from './explanation';
 import { FORMULAS } from './formulas';
 import {
@@ -258,5 +259,11 @@ export function pointCardFigures(withYield: boolean): readonly FigureKey[] {
 /** Formula, inputs and source of one comparison figure, for the variants table and the explorer's point card. */
 export function explainFigure(key: FigureKey, f: PartitionFigures, ctx: FigureContext): Explanation {
   const entry = bankFigureEntry(key);
-  return explanationOf(entry, f[key], entry.explain(f, ctx));
+  const value = f[key];
+  return explanationOf(
+    entry,
+    value,
+    entry.explain(f, ctx),
+    Number.isNaN(value) ? bankMissingReason(key, f) : undefined,
+  );
 }

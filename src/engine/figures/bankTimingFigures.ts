@@ -18,16 +18,24 @@ const chainStep = <
     better: 'lower',
     offeredIn: [],
     exportKey: null,
-    explain: (f) => ({
-      symbol,
-      formula: `${symbol} of the mat with the longest ${key === 'rowActiveTime' || key === 'rowPrechargeTime' ? 'tRC' : 'tRCD'}`,
-      inputs: [
-        input('tRCD', 'row to column delay', f.rowToColumnDelay, 'time'),
-        input('tRC', 'row cycle time', f.rowCycleTime, 'time'),
-      ],
-      method: 'A step of the row timing chain (engine/physics/rowTiming.ts); the mat figures explain it.',
-      source: CHAIN,
-    }),
+    explain: (f) => {
+      const ofCycle = key === 'rowActiveTime' || key === 'rowPrechargeTime';
+      const total = ofCycle ? f.rowCycleTime : f.rowToColumnDelay;
+      const name = ofCycle ? 'tRC' : 'tRCD';
+      const exists = !Number.isNaN(total);
+      return {
+        symbol,
+        formula: exists
+          ? `${symbol}: a step of ${name} in the mat with the longest ${name}`
+          : `${symbol} of the first mat (no mat is sensed, so ${name} does not exist)`,
+        inputs: [
+          input(symbol, `this step (${label.toLowerCase()})`, f[key], 'time'),
+          ...(exists ? [input(name, `the ${name} it is a part of`, total, 'time')] : []),
+        ],
+        method: 'A step of the row timing chain (engine/physics/rowTiming.ts); the mat figures explain it.',
+        source: CHAIN,
+      };
+    },
   });
 
 /**

@@ -1,3 +1,5 @@
+import type { GainRead } from '../../model/cell';
+import { isGainCell } from '../../model/cellBasics';
 import type { Design } from '../../model/design';
 import type { ChargeSharingRead, GainCellRead, MatFigures, MatReport, Report } from '../evaluation/report';
 import type { FigureEntry, ScaledColumn, Working } from './figure';
@@ -56,3 +58,26 @@ export const gainCellValue =
   (pick: (r: GainCellRead) => number) =>
   (f: MatFigures): number =>
     f.read.kind === 'gainRead' ? pick(f.read) : Number.NaN;
+
+/**
+ * How long a cell read by current drives its line before sensing (s): a gain cell's own sense time, or
+ * the array's sense-fire time for 4T and 6T cells (as matPhysics reads it).
+ */
+export function currentReadTime(f: MatFigures, design: Design): number {
+  return isGainCell(f.cellKind) ? design.process.gainCellSenseTime : design.operating.senseFireTime;
+}
+
+/** The read-path values of a mat's cell (cells read by current), or undefined. */
+export function readPathOf(f: MatFigures, design: Design): GainRead | undefined {
+  return design.cells.find((c) => c.id === f.cellId)?.gainRead ?? undefined;
+}
+
+/**
+ * The level a cell read by current holds for a 1 (V): the full supply for a static 6T cell, else the
+ * stored-1 level less the write word line's coupling (gain cells).
+ */
+export function currentReadLevel(f: MatFigures, design: Design, storedHigh: number): number {
+  if (f.cellKind === 'sram-6t') return design.process.arrayVoltage;
+  const coupling = f.read.kind === 'gainRead' ? f.read.writeCouplingLoss : 0;
+  return Math.max(0, storedHigh - coupling);
+}

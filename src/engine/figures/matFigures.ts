@@ -4,7 +4,14 @@ import type { MatReport, Report } from '../evaluation/report';
 import { explanationOf } from './figure';
 import { input, SOURCES, type Explanation } from './explanation';
 import { FORMULAS } from './formulas';
-import { matFigure, MAT_FIGURE_GROUPS, type MatFigureEntry, type MatFigureGroup } from './matFigure';
+import { isGainCell } from '../../model/cellBasics';
+import {
+  currentReadTime,
+  matFigure,
+  MAT_FIGURE_GROUPS,
+  type MatFigureEntry,
+  type MatFigureGroup,
+} from './matFigure';
 import { READ_FIGURES } from './matReadFigures';
 import { MAT_SIZE_FIGURES, MAT_PARASITIC_FIGURES } from './matSizeFigures';
 import { MAT_TIMING_FIGURES } from './matTimingFigures';
@@ -82,6 +89,12 @@ export const MAT_FIGURE_CATALOGUE = [
           input('L', 'transistor length', p.senseAmpTransistorLength, 'length'),
           input('σ', 'offset standard deviation', mat.figures.offsetSigma, 'voltage'),
           input('k', 'σ multiplier', report.totals.offsetSigmaMultiplier, 'ratio'),
+          input(
+            'f',
+            'sense amplifiers allowed to fail per die',
+            design.operating.allowedSenseFailures,
+            'count',
+          ),
           input('n_sa', 'sense amplifiers in this floorplan', report.totals.senseAmpCount, 'count'),
           input('copies', 'floorplan copies per die', design.operating.floorplanCopiesPerDie, 'count'),
           input('N', 'sense amplifiers on the die', report.totals.senseAmpsOnDie, 'count'),
@@ -102,14 +115,15 @@ export const MAT_FIGURE_CATALOGUE = [
     explain: (mat, design) => {
       const f = mat.figures;
       const p = design.process;
-      const folded = f.architecture === 'folded' && f.read.kind === 'chargeSharing';
+      // As matPhysics: open bit lines and gain cells' single read lines reject less coupling as common mode.
+      const folded = f.architecture !== 'open' && !isGainCell(f.cellKind);
       return {
         symbol: 'V_noise',
         formula: 'V_noise = κ · (Cbb / Cbl) · VDD / 2',
         inputs: [
           input(
             'κ',
-            `unrejected share (${folded ? 'folded' : 'open'})`,
+            `unrejected share (${folded ? 'folded or paired' : 'open or single read line'})`,
             folded ? p.foldedNoiseFactor : p.openNoiseFactor,
             'ratio',
           ),
@@ -291,21 +305,32 @@ export const MAT_FIGURE_CATALOGUE = [
       return f.read.kind === 'chargeSharing'
         ? {
             symbol: 't_bl',
-            formula: 't_bl = 0.69·R_acc·(Cs·Cbl/(Cs+Cbl)) + 0.38·R_bl·Cbl',
+            formula: 't_bl = τ·ln 2,  τ = R_acc·Cs·Cbl/(Cs+Cbl) + R_bl·Cbl/2',
             inputs: [
               input('R_acc', 'access transistor', design.process.accessTransistorResistance, 'resistance'),
+              input('Cs', 'storage capacitance', f.storageCapacitance, 'capacitance'),
               input('R_bl', 'bit-line resistance', f.bitlineResistance, 'resistance'),
               input('Cbl', 'bit-line capacitance', f.bitlineCapacitance.total, 'capacitance'),
+              input('τ', 'development time constant', f.read.developmentTimeConstant, 'time'),
             ],
             method:
-              'Cell discharge through the access device plus distributed bit-line RC; 50 % point convention.',
-            source: SOURCES.rabaey,
+              'Single-pole development of the charge-sharing signal: half of it after τ·ln 2 (Elmore time constant of the access device into Cs in series with Cbl, plus the distributed bit line).',
+            source: 'W. C. Elmore, J. Appl. Phys. 19, 1948 (first-moment delay)',
           }
         : {
             title: 'Read-bit-line sense time',
             symbol: 't_sense',
-            formula: 't_sense (process input)',
-            inputs: [],
+            formula: 't_sense: the read develops for as long as it is sensed',
+            inputs: [
+              input(
+                't_sense',
+                isGainCell(f.cellKind)
+                  ? 'gain-cell sense time (process)'
+                  : 'sense fires after turn-on (operating)',
+                currentReadTime(f, design),
+                'time',
+              ),
+            ],
             method: 'The read bit line develops for a fixed time before sensing.',
             source: SOURCES.gainCells,
           };

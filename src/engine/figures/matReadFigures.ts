@@ -1,5 +1,14 @@
 import { input, SOURCES } from './explanation';
-import { chargeSharingRead, chargeSharingValue, gainCellRead, gainCellValue, matFigure } from './matFigure';
+import {
+  chargeSharingRead,
+  chargeSharingValue,
+  currentReadLevel,
+  currentReadTime,
+  gainCellRead,
+  gainCellValue,
+  matFigure,
+  readPathOf,
+} from './matFigure';
 
 /**
  * Catalogue entries of the read figures, whose meaning depends on the read style: charge sharing (1T1C)
@@ -88,13 +97,33 @@ export const READ_FIGURES = [
     read: 'gainRead',
     exportKey: 'readCurrent_A',
     value: gainCellValue((r) => r.readCurrent),
-    explain: (_mat, _design, report) => ({
-      symbol: 'I_read',
-      formula: 'I_read = (β/2)·(V1 − Vt_read)²',
-      inputs: [input('V1', 'stored-1 level', report.storedHigh.level, 'voltage')],
-      method: 'Square-law saturation current of the storage transistor gated by the stored level.',
-      source: 'Shichman–Hodges square law (from memory)',
-    }),
+    explain: (mat, design, report) => {
+      const f = mat.figures;
+      const path = readPathOf(f, design);
+      const nan = Number.NaN;
+      return {
+        symbol: 'I_read',
+        formula: 'I_read = (β / (2·n))·(V1 − Vt_read)²  (n devices in series act as one n times as long)',
+        inputs: [
+          input(
+            'β',
+            'read transistor transconductance',
+            path?.readTransconductance ?? nan,
+            'transconductance',
+          ),
+          input('n', 'devices in series on the read path', gainCellRead(f).seriesDevices, 'count'),
+          input('Vt_read', 'read transistor threshold', path?.readThresholdVoltage ?? nan, 'voltage'),
+          input(
+            'V1',
+            f.cellKind === 'sram-6t' ? 'stored 1 (full supply)' : 'stored 1 less write word-line coupling',
+            currentReadLevel(f, design, report.storedHigh.level),
+            'voltage',
+          ),
+        ],
+        method: 'Square-law saturation current of the storage transistor gated by the stored level.',
+        source: 'Shichman–Hodges square law (from memory)',
+      };
+    },
   }),
   matFigure({
     key: 'dropHigh',
@@ -111,8 +140,9 @@ export const READ_FIGURES = [
       formula: 'ΔV1 = min(VDD, I_read · t_sense / C_RBL)',
       inputs: [
         input('I_read', 'read current', gainCellRead(mat.figures).readCurrent, 'current'),
-        input('t_sense', 'sense time', design.process.gainCellSenseTime, 'time'),
+        input('t_sense', 'sense time', currentReadTime(mat.figures, design), 'time'),
         input('C_RBL', 'read-bit-line capacitance', mat.figures.bitlineCapacitance.total, 'capacitance'),
+        input('VDD', 'precharge level, the largest drop', design.process.arrayVoltage, 'voltage'),
       ],
       method: 'Non-destructive, inverting read: a stored 1 discharges the read bit line precharged to VDD.',
       source: SOURCES.gainCells,
@@ -132,9 +162,22 @@ export const READ_FIGURES = [
       symbol: 'ΔV0',
       formula: 'ΔV0 = min(VDD, (I_off + (N − 1)·I_unsel) · t_sense / C_RBL)',
       inputs: [
+        input(
+          'I_off',
+          'read current of a stored 0',
+          readPathOf(mat.figures, design)?.readOffCurrent ?? Number.NaN,
+          'current',
+        ),
+        input(
+          'I_unsel',
+          'leakage of each unselected cell',
+          readPathOf(mat.figures, design)?.unselectedLeakageCurrent ?? Number.NaN,
+          'current',
+        ),
         input('N', 'cells per bit line', mat.figures.cellsPerBitline, 'count'),
-        input('t_sense', 'sense time', design.process.gainCellSenseTime, 'time'),
+        input('t_sense', 'sense time', currentReadTime(mat.figures, design), 'time'),
         input('C_RBL', 'read-bit-line capacitance', mat.figures.bitlineCapacitance.total, 'capacitance'),
+        input('VDD', 'precharge level, the largest drop', design.process.arrayVoltage, 'voltage'),
       ],
       method: 'Worst case: every unselected cell on the line holds a 1 and leaks onto it.',
       source: SOURCES.gainCells,
@@ -158,27 +201,41 @@ export const READ_FIGURES = [
     csvHeader: 'sense_signal_V',
     cli: { header: 'signal (mV)', scale: { prefix: 'm', decimals: 1 } },
     value: (f) => f.senseSignal,
-    explain: (mat) => {
+    explain: (mat, design) => {
       const read = mat.figures.read;
       return read.kind === 'chargeSharing'
         ? {
-            symbol: 'ΔV',
-            formula: 'ΔV = min(ΔV1, ΔV0)',
+            symbol: 'ΔV_dev',
+            formula: 'ΔV = min(ΔV1, ΔV0) · (1 − e^(−t_fire/τ))  (developed when the sense amplifier fires)',
             inputs: [
               input('ΔV1', 'signal for a stored 1', read.signalHigh, 'voltage'),
               input('ΔV0', 'signal for a stored 0', read.signalLow, 'voltage'),
+              input('t_fire', 'sense fires after word-line turn-on', design.operating.senseFireTime, 'time'),
+              input('τ', 'development time constant', read.developmentTimeConstant, 'time'),
+              input('share', 'developed share 1 − e^(−t_fire/τ)', read.developedShare, 'ratio'),
             ],
-            method: 'The sense amplifier must resolve the weaker of the two data states.',
+            method:
+              'The sense amplifier must resolve the weaker of the two data states, as far as it has developed when it fires.',
             source: SOURCES.keethBaker,
           }
         : {
             symbol: 'ΔV',
-            formula: 'ΔV = (ΔV1 − ΔV0) / 2',
+            formula: read.differential
+              ? 'ΔV = (ΔV1 − ΔV0) / n_ref,  n_ref = 1: the pair’s own lines are compared'
+              : 'ΔV = (ΔV1 − ΔV0) / n_ref,  n_ref = 2: a reference midway between the drops',
             inputs: [
               input('ΔV1', 'drop for a stored 1', read.dropHigh, 'voltage'),
               input('ΔV0', 'drop for a stored 0', read.dropLow, 'voltage'),
+              input(
+                'n_ref',
+                read.differential ? 'differential pair' : 'single-ended',
+                read.differential ? 1 : 2,
+                'count',
+              ),
             ],
-            method: 'Single-ended read against a reference set midway between the two drops.',
+            method: read.differential
+              ? 'Differential read: one line of the pair is pulled, the other sees only leakage.'
+              : 'Single-ended read against a reference set midway between the two drops.',
             source: SOURCES.gainCells,
           };
     },

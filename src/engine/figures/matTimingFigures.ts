@@ -129,10 +129,19 @@ export const MAT_TIMING_FIGURES = [
     value: (f) => f.timing.restore,
     explain: (mat, design) => ({
       symbol: 't_restore',
-      formula: 't_restore = (R_acc + R_bl)·Cs·ln(1/(1 − f))  (0 for a read that keeps the data)',
+      formula:
+        't_restore = R_path·Cs·ln(1/(1 − f)),  R_path = R_acc + R_bl (1T1C); 0 for a read that keeps the data',
       inputs: [
         input('R_acc', 'access transistor', design.process.accessTransistorResistance, 'resistance'),
         input('R_bl', 'bit-line resistance', mat.figures.bitlineResistance, 'resistance'),
+        input(
+          'R_path',
+          mat.figures.read.kind === 'chargeSharing' ? 'write-back path' : 'none: the read keeps the data',
+          mat.figures.read.kind === 'chargeSharing'
+            ? design.process.accessTransistorResistance + mat.figures.bitlineResistance
+            : 0,
+          'resistance',
+        ),
         input('Cs', 'storage capacitance', mat.figures.storageCapacitance, 'capacitance'),
         input('f', 'share of the stored 1 to reach', design.operating.restoreFraction, 'ratio'),
       ],
@@ -154,6 +163,7 @@ export const MAT_TIMING_FIGURES = [
         input('R_eq', 'equaliser', design.process.equaliserResistance, 'resistance'),
         input('R_bl', 'bit-line resistance', mat.figures.bitlineResistance, 'resistance'),
         input('Cbl', 'bit-line capacitance', mat.figures.bitlineCapacitance.total, 'capacitance'),
+        input('VDD', 'pair difference the latch left', design.process.arrayVoltage, 'voltage'),
         input('V_res', 'residual tolerated', design.operating.equaliseResidual, 'voltage'),
       ],
       method: 'Differential-mode RC decay of the pair, Elmore first moment for the line.',

@@ -1,7 +1,13 @@
-import { useState } from 'react';
+import { Fragment, useState } from 'react';
 import { shortProcessName } from '../../designs/buildPartition';
 import { checkName, infeasibleBecause, type FeasibilityLimits } from '../../explore/chartData';
-import { bankFigureEntry, explainFigure, pointCardFigures, type FigureKey } from '../../engine';
+import {
+  bankFigureEntry,
+  bankMissingReason,
+  explainFigure,
+  pointCardFigures,
+  type FigureKey,
+} from '../../engine';
 import type { SweepPoint, SweepRequest } from '../../explore/sweep';
 import { CELL_KIND_LABEL } from '../../model/cell';
 import { formatQuantity } from '../../model/units';
@@ -38,26 +44,35 @@ export function PointCard({ point, request, limits, onFront, explainable = false
         <table className="point-figures">
           <tbody>
             {pointCardFigures(Number.isFinite(f.dieYield)).map((key) => (
-              <tr key={key}>
-                <td>
-                  {explainable ? (
-                    <button
-                      type="button"
-                      className="link"
-                      title="Show formula, inputs and source"
-                      aria-expanded={open === key}
-                      onClick={() => setOpen(open === key ? null : key)}
-                    >
-                      {bankFigureEntry(key).label}
-                    </button>
-                  ) : (
-                    bankFigureEntry(key).label
-                  )}
-                </td>
-                <td className="num" data-testid={`${testId}-${key}`}>
-                  {formatQuantity(f[key], bankFigureEntry(key).quantity)}
-                </td>
-              </tr>
+              <Fragment key={key}>
+                <tr>
+                  <td>
+                    {explainable ? (
+                      <button
+                        type="button"
+                        className="link"
+                        title="Show formula, inputs and source"
+                        aria-expanded={open === key}
+                        onClick={() => setOpen(open === key ? null : key)}
+                      >
+                        {bankFigureEntry(key).label}
+                      </button>
+                    ) : (
+                      bankFigureEntry(key).label
+                    )}
+                  </td>
+                  <td className="num" data-testid={`${testId}-${key}`}>
+                    {formatQuantity(f[key], bankFigureEntry(key).quantity)}
+                  </td>
+                </tr>
+                {Number.isNaN(f[key]) && (
+                  <tr>
+                    <td colSpan={2} className="figure-missing" data-testid={`${testId}-${key}-missing`}>
+                      {bankMissingReason(key, f)}
+                    </td>
+                  </tr>
+                )}
+              </Fragment>
             ))}
           </tbody>
         </table>

@@ -6,6 +6,7 @@ import { renameVariant } from '../../commands/renameVariant';
 import { switchVariant } from '../../commands/switchVariant';
 import {
   bankFigureEntry,
+  bankMissingReason,
   explainFigure,
   figuresFromReport,
   TABLE_FIGURES,
@@ -226,6 +227,11 @@ export function VariantsView() {
                         >
                           {Number.isFinite(value) ? formatQuantity(value, quantity) : '—'}
                         </button>
+                        {!Number.isFinite(value) && (
+                          <span className="figure-missing" data-testid={`variant-${c.id}-${key}-missing`}>
+                            {bankMissingReason(key, c.figures)}
+                          </span>
+                        )}
                         {verdict !== 'none' && (
                           <span className="delta" data-testid={`variant-${c.id}-${key}-delta`}>
                             {deltaLine(value, ref, verdict)}
