@@ -20,11 +20,11 @@ const TARGET_MS_AT_4096 = 5;
 const TARGET_RATIO = 1.5;
 /**
  * evaluate() on 4,096 mats before the row timing chain, crossing-based parasitics and die-scale statistics
- * were added (main at e86d5f1, 5 Dec 2026, load average 6.0): median 5.31 ms wall, 4.42 ms CPU. The new
- * physics may cost at most 20 % more; compare CPU times at a similar load.
+ * were added, as recorded once (main at e86d5f1, load average 6.0): median 5.31 ms wall, 4.42 ms CPU.
+ * Printed for orientation only: a number recorded under another load is no verdict. The verdict on the
+ * "at most 20 % slower" goal comes from evaluateBaseline.bench.ts, which runs both versions interleaved.
  */
-const BEFORE_TIMING_CHAIN_CPU_MS_AT_4096 = 4.42;
-const ALLOWED_SLOWDOWN = 1.2;
+const RECORDED_BEFORE_CPU_MS_AT_4096 = 4.42;
 
 function gridDesign(side: number): Design {
   return designWith(
@@ -129,9 +129,8 @@ if (at4096 && at65536) {
   console.log(
     `per-mat time 65,536 vs 4,096: ${fmt(ratio, 2)} (target ≤ ${TARGET_RATIO}): ${met(ratio <= TARGET_RATIO)}`,
   );
-  const slowdown = at4096.cpuMs / BEFORE_TIMING_CHAIN_CPU_MS_AT_4096;
   console.log(
-    `4,096 mats CPU vs before the timing chain (${BEFORE_TIMING_CHAIN_CPU_MS_AT_4096} ms): ×${fmt(slowdown, 2)} (target ≤ ×${ALLOWED_SLOWDOWN}): ${met(slowdown <= ALLOWED_SLOWDOWN)}`,
+    `4,096 mats CPU ${fmt(at4096.cpuMs, 2)} ms; recorded before the timing chain: ${RECORDED_BEFORE_CPU_MS_AT_4096} ms at load 6.0 (orientation only; the verdict is the interleaved line of evaluateBaseline.bench.ts)`,
   );
 }
 const load = loadavg()

@@ -8,6 +8,7 @@ import { fileURLToPath } from 'node:url';
 
 const BENCHES = [
   'evaluate.bench.ts',
+  'evaluateBaseline.bench.ts',
   'layoutChecks.bench.ts',
   'evaluateCold.bench.ts',
   'sweep.bench.ts',

@@ -61,7 +61,9 @@ describe('cell charging and latch regeneration (reference)', () => {
   });
 
   it('tRC = tRAS + tRP, as in the JEDEC DDR4-2400 speed bin (32 ns + 14.16 ns = 46.16 ns)', () => {
-    // Source: JEDEC JESD79-4, DDR4-2400R speed bin: tRAS 32 ns, tRP 14.16 ns, tRC 46.16 ns (from memory).
+    // Source: JEDEC JESD79-4, DDR4-2400R speed bin: tRAS 32 ns, tRP 14.16 ns, tRC 46.16 ns (from memory);
+    // the same bin as published in the gem5 simulator's source, src/mem/DRAMInterface.py, class
+    // DDR4_2400_8x8 ("DDR4-2400 17-17-17": tRCD = tRP = 14.16 ns, tRAS = 32 ns; read for this check).
     const chain = rowTiming({
       wordlineOn: 0,
       development: 0,
