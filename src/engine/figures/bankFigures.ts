@@ -175,7 +175,7 @@ export const BANK_FIGURE_CATALOGUE = [
   countedFigure('cellsPerWordline', 'Cells per word line', 'count', 'neither', []),
   bankFigure({
     key: 'retentionTime',
-    label: 'Shortest retention',
+    label: 'Shortest retention, typical cell',
     quantity: 'time',
     better: 'higher',
     offeredIn: EVERY_VIEW,
