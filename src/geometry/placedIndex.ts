@@ -22,10 +22,13 @@ export function placedDesign(design: Design): PlacedDesign {
   const cached = cache.get(design);
   if (cached) return cached;
   const placed = placeBlocks(design);
+  // Filled in a loop: a [id, i] pair per block would be 200,000 short-lived arrays on a whole die.
+  const positionOf = new Map<string, number>();
+  for (let i = 0; i < placed.length; i++) positionOf.set((placed[i] as PlacedBlock).block.id, i);
   const result: PlacedDesign = {
     placed,
     index: buildSpatialIndex(placed.map((p) => p.rect)),
-    positionOf: new Map(placed.map((p, i) => [p.block.id, i])),
+    positionOf,
   };
   cache.set(design, result);
   return result;

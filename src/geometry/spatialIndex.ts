@@ -13,13 +13,54 @@ export interface SpatialIndex {
 
 export function buildSpatialIndex(rects: readonly Rect[]): SpatialIndex {
   if (rects.length === 0) return { near: () => [] };
-  const index = new Flatbush(rects.length);
-  for (const r of rects) index.add(r.x, r.y, right(r), bottom(r));
-  index.finish();
-  return {
-    near: (rect, margin) =>
-      index.search(rect.x - margin, rect.y - margin, right(rect) + margin, bottom(rect) + margin),
-  };
+  return new TreeOnDemand(rects);
+}
+
+/**
+ * The R-tree, built on the first query that does not take in every rectangle. A whole-floorplan view
+ * (the first paint of a design, a fit) asks for every block: that answer needs no tree, and a whole die
+ * (about 200,000 blocks) then opens without sorting them along the Hilbert curve first.
+ */
+class TreeOnDemand implements SpatialIndex {
+  private tree: Flatbush | null = null;
+  private readonly minX: number;
+  private readonly minY: number;
+  private readonly maxX: number;
+  private readonly maxY: number;
+
+  constructor(private readonly rects: readonly Rect[]) {
+    let minX = Infinity;
+    let minY = Infinity;
+    let maxX = -Infinity;
+    let maxY = -Infinity;
+    for (const r of rects) {
+      minX = Math.min(minX, r.x);
+      minY = Math.min(minY, r.y);
+      maxX = Math.max(maxX, right(r));
+      maxY = Math.max(maxY, bottom(r));
+    }
+    this.minX = minX;
+    this.minY = minY;
+    this.maxX = maxX;
+    this.maxY = maxY;
+  }
+
+  near(rect: Rect, margin: number): number[] {
+    const x0 = rect.x - margin;
+    const y0 = rect.y - margin;
+    const x1 = right(rect) + margin;
+    const y1 = bottom(rect) + margin;
+    // A box that holds the bounds of them all meets every rectangle (closed, as the tree compares).
+    if (x0 <= this.minX && y0 <= this.minY && x1 >= this.maxX && y1 >= this.maxY) {
+      return Array.from({ length: this.rects.length }, (_, i) => i);
+    }
+    if (!this.tree) {
+      this.tree = new Flatbush(this.rects.length);
+      for (const r of this.rects) this.tree.add(r.x, r.y, right(r), bottom(r));
+      this.tree.finish();
+    }
+    return this.tree.search(x0, y0, x1, y1);
+  }
 }
 
 /** Most moved rectangles an index carries over its R-tree before it is built again. */

@@ -49,7 +49,8 @@ export function PropertiesPanel() {
   const toolOptions = useEditorStore((s) => s.options);
   const run = useRunCommand();
   const selectedSet = new Set(selectedIds);
-  const blocks = design.blocks.filter((b) => selectedSet.has(b.id));
+  // Nothing selected (as after opening a whole die): no pass over every block.
+  const blocks = selectedIds.length === 0 ? [] : design.blocks.filter((b) => selectedSet.has(b.id));
   const mats = blocks.filter(isMat);
   const strips = blocks.filter((b): b is Strip => b.type !== 'mat');
   const ids = blocks.map((b) => b.id);

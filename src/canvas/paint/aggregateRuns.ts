@@ -21,11 +21,16 @@ function mergeAlong(rects: readonly Rect[], gap: number, axis: 'x' | 'y'): Rect[
   const acrossSize = axis === 'x' ? 'height' : 'width';
   const size = axis === 'x' ? 'width' : 'height';
   const order = rects.map((_, i) => i);
-  order.sort((a, b) => {
+  const compare = (a: number, b: number) => {
     const ra = rects[a] as Rect;
     const rb = rects[b] as Rect;
     return ra[across] - rb[across] || ra[acrossSize] - rb[acrossSize] || ra[axis] - rb[axis];
-  });
+  };
+  // A tiled floorplan lists its blocks row by row, so the rows pass usually finds them in order already:
+  // one look along the list then saves a comparison sort of every block.
+  let sorted = true;
+  for (let i = 1; i < order.length && sorted; i++) sorted = compare(i - 1, i) <= 0;
+  if (!sorted) order.sort(compare);
   const out: Rect[] = [];
   let run: { x: number; y: number; width: number; height: number } | null = null;
   for (const i of order) {
