@@ -3,8 +3,13 @@ import { expect, test } from '@playwright/test';
 import { restoreDesign } from '../src/io/restore';
 import { DocumentsPage, installStoreAccess } from './documentsPage';
 import { loadDemoDesign } from './floorplanPage';
+import { withoutSavePicker } from './savePicker';
 
-test.beforeEach(async ({ page }) => installStoreAccess(page));
+test.beforeEach(async ({ page }) => {
+  await installStoreAccess(page);
+  // Saving without a file handle downloads here (the save picker has its own journeys: saveFiles.spec.ts).
+  await withoutSavePicker(page);
+});
 
 test('an edited design survives opening a generated one; both are kept, and the first reopens intact', async ({
   page,
@@ -106,7 +111,9 @@ test('Ctrl+S downloads a file that restores; Ctrl+O writes back to the picked fi
         createWritable: async () => {
           let data = '';
           return {
-            write: async (blob: Blob) => void (data = await blob.text()),
+            // Like the real stream, it takes text or Blobs, appended in order.
+            write: async (chunk: string | Blob) =>
+              void (data += typeof chunk === 'string' ? chunk : await chunk.text()),
             close: async () => void written.push(data),
           };
         },

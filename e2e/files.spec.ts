@@ -2,6 +2,10 @@ import { readFileSync, writeFileSync } from 'node:fs';
 import { expect, test, type Page } from '@playwright/test';
 import { restoreDesign } from '../src/io/restore';
 import { FloorplanPage, loadDemoDesign } from './floorplanPage';
+import { withoutSavePicker } from './savePicker';
+
+// These journeys check the download each button offers where the browser has no save picker.
+test.beforeEach(async ({ page }) => withoutSavePicker(page));
 
 /** Clicks a button that downloads, and returns the file's text or bytes. */
 async function download(page: Page, testId: string): Promise<Buffer> {

@@ -12,6 +12,21 @@ export function NoticeBar() {
       data-testid="notice"
     >
       <span>{notice.text}</span>
+      {notice.action && (
+        <button
+          type="button"
+          className="notice-action"
+          data-testid="notice-action"
+          title={notice.action.title}
+          onClick={() => {
+            const { run } = notice.action ?? {};
+            setNotice(null);
+            run?.();
+          }}
+        >
+          {notice.action.label}
+        </button>
+      )}
       <button type="button" onClick={() => setNotice(null)} aria-label="Dismiss" title="Dismiss this message">
         ×
       </button>

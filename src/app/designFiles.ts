@@ -1,68 +1,91 @@
 import { MAX_DESIGN_TEXT_LENGTH } from '../io/designText';
 import { clipForMessage } from '../model/messageText';
 import { useAppStore } from '../store/useAppStore';
+import type { Design } from '../model/design';
 import { downloadBlob, fileBaseName } from './download';
+import {
+  chooseSaveTarget,
+  writePieces,
+  type FileKind,
+  type SaveTarget,
+  type WritableFileHandle,
+} from './saveToFile';
 
 /**
  * Design files as people expect them: Save writes back to the file the design was opened from when the
- * browser allows it (File System Access), else offers a download; Open uses the browser's file picker
+ * browser allows it (File System Access), else into a file picked with the browser's save picker, else
+ * offers a download; Open uses the browser's file picker
  * (which gives that write-back) or a file input; a dropped file opens the same way.
  */
 
 /** Largest file read (bytes); restore's text limit, since UTF-8 bytes ≥ UTF-16 characters. */
 export const MAX_FILE_BYTES = MAX_DESIGN_TEXT_LENGTH;
 
-/** The parts of the File System Access API used here (not yet in TypeScript's DOM library). */
-interface WritableFile {
-  write(data: Blob): Promise<void>;
-  close(): Promise<void>;
-}
-export interface DesignFileHandle {
-  readonly kind: 'file';
-  readonly name: string;
+export interface DesignFileHandle extends WritableFileHandle {
   getFile(): Promise<File>;
-  createWritable?: () => Promise<WritableFile>;
 }
 interface PickerWindow {
   showOpenFilePicker?: (options: unknown) => Promise<DesignFileHandle[]>;
 }
 
-/** The file each document was opened from (by document id), for saving back to it. */
-const handles = new Map<string, DesignFileHandle>();
+/** What a design file is, for the save picker's type filter and the download. */
+const DESIGN_FILE: FileKind = {
+  description: 'Matloom design',
+  mime: 'application/json',
+  extension: '.json',
+};
 
-function designFileText(): { blob: Blob; design: ReturnType<typeof current> } {
-  const design = current();
-  return { blob: new Blob([`${JSON.stringify(design, null, 2)}\n`], { type: 'application/json' }), design };
-}
+/** The file each document was opened from or saved to (by document id), for saving back to it. */
+const handles = new Map<string, WritableFileHandle>();
 
 const current = () => useAppStore.getState().history.present;
 
-/** Saves the open design (Ctrl+S): back to its file where possible, else as a download. */
+/** The design file's text: the design as JSON, indented, as people and version control read it. */
+const designFileText = (design: Design) => `${JSON.stringify(design, null, 2)}\n`;
+
+/**
+ * Saves the open design (Ctrl+S): back to its file where the browser allows it; else into a file the
+ * person picks with the browser's save picker (remembered for the next save), or as a download where
+ * there is no picker. Cancelling the picker saves nothing and changes nothing.
+ */
 export async function saveDesignFile(): Promise<void> {
-  const { blob, design } = designFileText();
+  const design = current();
   const state = useAppStore.getState();
-  const handle = handles.get(state.documentId);
-  if (handle?.createWritable) {
-    try {
-      const writable = await handle.createWritable();
-      await writable.write(blob);
-      await writable.close();
-      state.markInFile(design);
-      state.setNotice({ kind: 'info', text: `Saved to ${clipForMessage(handle.name)}.` });
-      return;
-    } catch (error) {
-      if (error instanceof DOMException && error.name === 'AbortError') return;
-      // Permission refused or the file went away: fall back to a download, and say so.
-      handles.delete(state.documentId);
-      state.setNotice({
-        kind: 'error',
-        text: `Could not write to ${clipForMessage(handle.name)} (${clipForMessage(String(error), 80)}); the design was offered as a download instead.`,
-      });
-    }
-  }
   const fileName = `${fileBaseName(design.name)}.matloom.json`;
-  downloadBlob(blob, fileName);
-  state.markInFile(design);
+  const known = handles.get(state.documentId);
+  const target: SaveTarget = known?.createWritable
+    ? { kind: 'file', handle: known }
+    : await chooseSaveTarget(fileName, DESIGN_FILE);
+  if (target.kind === 'cancelled') return;
+  const options = { fileName, kind: DESIGN_FILE, download: downloadBlob };
+  const outcome = await writePieces(target, [designFileText(design)], options);
+  if (outcome.kind === 'written' && target.kind === 'file') {
+    handles.set(state.documentId, target.handle);
+    state.markInFile(design);
+    state.setNotice({ kind: 'info', text: `Saved to ${clipForMessage(outcome.name)}.` });
+    return;
+  }
+  if (outcome.kind === 'downloaded') {
+    state.markInFile(design);
+    return;
+  }
+  if (outcome.kind === 'failed' && target.kind === 'file') {
+    const error = outcome.error;
+    if (error instanceof DOMException && error.name === 'AbortError') return;
+    // Permission refused or the file went away: offer a download instead, and say so.
+    handles.delete(state.documentId);
+    const fallback = await writePieces({ kind: 'download' }, [designFileText(design)], options);
+    if (fallback.kind === 'downloaded') state.markInFile(design);
+    state.setNotice({
+      kind: 'error',
+      text: `Could not write to ${clipForMessage(target.handle.name)} (${clipForMessage(String(error), 80)}); ${fallback.kind === 'downloaded' ? 'the design was offered as a download instead' : 'nothing was saved'}.`,
+    });
+    return;
+  }
+  state.setNotice({
+    kind: 'error',
+    text: `The design could not be saved (${outcome.kind === 'failed' ? clipForMessage(String(outcome.error), 80) : 'too large for a download'}). The design is unchanged.`,
+  });
 }
 
 /** Opens a File (input, drop or picker) as a new document; remembers its handle for saving back. */

@@ -27,3 +27,14 @@ export function* designTextPieces(design: Design, blocksPerPiece = BLOCKS_PER_PI
   yield ']';
   yield head.slice(at + marker.length + 2);
 }
+
+/**
+ * About how many characters designTextPieces() writes, from the first pieceful of blocks scaled to all
+ * blocks (the header and variant shelf not counted): a cheap look before a long export.
+ */
+export function designTextLengthEstimate(design: Design, sample = BLOCKS_PER_PIECE): number {
+  const { blocks } = design;
+  if (blocks.length === 0) return 0;
+  const n = Math.min(blocks.length, sample);
+  return Math.round((JSON.stringify(blocks.slice(0, n)).length / n) * blocks.length);
+}

@@ -66,6 +66,8 @@ export interface DocumentStart {
 export interface Notice {
   readonly kind: 'info' | 'error';
   readonly text: string;
+  /** One thing the person can do about it, shown as a button beside the text (its title says what it does). */
+  readonly action?: { readonly label: string; readonly title: string; readonly run: () => void };
 }
 
 /** Most blocks an edit may change and still be evaluated incrementally (more: evaluate it whole). */
