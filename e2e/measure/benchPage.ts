@@ -30,7 +30,17 @@ export async function startServer(): Promise<ChildProcess | null> {
   if (await serverUp()) return null;
   const server = spawn(
     process.execPath,
-    [VITE, 'preview', '--host', '127.0.0.1', '--port', String(port), '--strictPort'],
+    [
+      VITE,
+      'preview',
+      '--host',
+      '127.0.0.1',
+      '--port',
+      String(port),
+      '--strictPort',
+      // BENCH_DIST serves another build (say, main's) for a before/after comparison.
+      ...(process.env.BENCH_DIST ? ['--outDir', process.env.BENCH_DIST] : []),
+    ],
     { stdio: 'ignore' },
   );
   for (let i = 0; i < 100; i++) {

@@ -44,7 +44,7 @@ interface Pan {
 const NOTHING_HIDDEN: ReadonlySet<string> = new Set();
 
 /**
- * The canvas behind the Konva stage. React mounts the stage and its four layers once; everything that
+ * The canvas behind the Konva stage. React mounts the stage and its three layers once; everything that
  * changes per pointer move happens here, imperatively: gestures run in the overlay layer, the blocks
  * layer is repainted only when the document, the camera or the finding markers change, and the live
  * report of a drag is computed once per animation frame. So a drag on a 4,096-mat floorplan re-renders
@@ -56,6 +56,8 @@ export class CanvasController {
   private pan: Pan | null = null;
   private spaceHeld = false;
   private pointer: { x: number; y: number } | null = null;
+  /** The canvas's box on screen, measured when a gesture or a pan begins. */
+  private gestureBox: DOMRect | null = null;
   private fitSeen = -1;
   private frameSeen = 0;
   private readonly hover = new HoverPreview();
@@ -194,7 +196,9 @@ export class CanvasController {
   // ---- pointer input ---------------------------------------------------------------------------
 
   private local(e: MouseEvent): { x: number; y: number } {
-    const box = this.view.element?.getBoundingClientRect();
+    // During a gesture the canvas stays where it was when it began; asking again on every move would
+    // force a layout after each status-bar update.
+    const box = this.gestureBox ?? this.view.element?.getBoundingClientRect();
     return { x: e.clientX - (box?.left ?? 0), y: e.clientY - (box?.top ?? 0) };
   }
 
@@ -234,6 +238,7 @@ export class CanvasController {
     const focused = document.activeElement;
     if (focused instanceof HTMLElement && focused !== document.body) focused.blur();
     this.view.element?.setPointerCapture(e.pointerId);
+    this.gestureBox = this.view.element?.getBoundingClientRect() ?? null;
     const p = this.local(e);
     const tool = this.editor.getState().tool;
     if (e.button === 1 || tool === 'pan' || this.spaceHeld) {
@@ -307,10 +312,14 @@ export class CanvasController {
     if (this.pan) {
       this.pan = null;
       this.updateCursor(this.world(this.local(e)));
+      this.gestureBox = null;
       return;
     }
     const press = this.press;
-    if (!press) return;
+    if (!press) {
+      this.gestureBox = null;
+      return;
+    }
     const result = press.gesture.finish(this.world(this.local(e)), press.dragged, this.modifiers(e));
     this.endGesture();
     const store = this.app.getState();
@@ -389,6 +398,7 @@ export class CanvasController {
     if (this.pan) {
       this.app.getState().setViewport(this.pan.viewport);
       this.pan = null;
+      this.gestureBox = null;
       return true;
     }
     if (!this.press) return false;
@@ -399,6 +409,7 @@ export class CanvasController {
 
   private endGesture(): void {
     this.press = null;
+    this.gestureBox = null;
     this.live.stop();
     this.view.showFindings(this.app.getState().report.findings);
   }

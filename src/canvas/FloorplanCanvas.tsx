@@ -22,7 +22,7 @@ function useElementSize(ref: React.RefObject<HTMLDivElement | null>) {
 }
 
 /**
- * The floorplan canvas: a Konva stage with four painted layers (grid, blocks, overlay, rulers), mounted
+ * The floorplan canvas: a Konva stage with three painted layers (grid, blocks, overlay with the rulers), mounted
  * once through Konva itself; the {@link CanvasController} handles input and repaints, so pointer moves
  * never re-render React components here.
  */
@@ -41,7 +41,6 @@ export function FloorplanCanvas() {
       grid: view.paintGrid,
       blocks: view.paintBlocks,
       overlay: view.paintOverlay,
-      rulers: view.paintRulers,
     });
     stageRef.current = stage;
     controller.attach(element, stage.layers);

@@ -1,5 +1,4 @@
 import type { Layer } from 'konva/lib/Layer';
-import type { Severity } from '../engine';
 import { placedDesign } from '../geometry/placedIndex';
 import type { AppStore } from '../store/appStore';
 import type { EditorStore } from '../store/editorStore';
@@ -8,14 +7,15 @@ import { BlocksCache } from './paint/blocksCache';
 import { paintGrid } from './paint/paintGrid';
 import { paintOverlay } from './paint/paintOverlay';
 import { paintRulers } from './paint/paintRulers';
-import { markersOf, sameMarkers, type Scene } from './paint/scene';
+import { FindingMarkers, type MarkedFinding } from './paint/findingMarkers';
+import type { Scene } from './paint/scene';
 import { timed } from './perfProbe';
 
 export interface CanvasLayers {
   readonly grid: Layer;
   readonly blocks: Layer;
+  /** Overlay and rulers: both change with every pointer move, so they share one bitmap to upload per frame. */
   readonly overlay: Layer;
-  readonly rulers: Layer;
 }
 
 /** What the view asks of the controller when it paints. */
@@ -33,16 +33,17 @@ export interface ViewInput {
 export type LayerName = 'all' | 'blocks' | 'overlay' | 'rulers';
 
 /**
- * The four Konva layers and what each paints: grid (background), blocks (the document, repainted only
- * when the document, camera or finding markers change), overlay (selection and gesture previews,
- * repainted per pointer move) and rulers (with the pointer mark).
+ * The three Konva layers and what each paints: grid (background), blocks (the document, repainted only
+ * when the document, camera or finding markers change), and overlay (selection and gesture previews,
+ * then the rulers with the pointer mark; repainted per pointer move, one bitmap to upload per frame).
  */
 export class CanvasView {
   layers: CanvasLayers | null = null;
   element: HTMLDivElement | null = null;
   width = 0;
   height = 0;
-  private markers: ReadonlyMap<string, Severity> = new Map();
+  private readonly findingMarkers = new FindingMarkers();
+  private readonly markerChanges = (since: number) => this.findingMarkers.changedSince(since);
 
   constructor(
     private readonly app: AppStore,
@@ -59,7 +60,9 @@ export class CanvasView {
       viewport: s.viewport,
       width: this.width,
       height: this.height,
-      markers: this.markers,
+      markers: this.findingMarkers.markers,
+      markerVersion: this.findingMarkers.version,
+      markerChanges: this.markerChanges,
       hidden: this.input.hidden(),
       gridVisible: this.editor.getState().gridVisible,
     };
@@ -69,17 +72,19 @@ export class CanvasView {
   private readonly blocksCache = new BlocksCache();
   readonly paintBlocks = (ctx: CanvasRenderingContext2D) =>
     timed('paintBlocks', () => this.blocksCache.paint(ctx, this.scene()));
-  readonly paintRulers = (ctx: CanvasRenderingContext2D) =>
-    paintRulers(ctx, this.scene(), this.input.pointer());
+  /** The overlay, then the rulers on top of it. */
   readonly paintOverlay = (ctx: CanvasRenderingContext2D) =>
-    timed('paintOverlay', () =>
-      paintOverlay(ctx, this.scene(), {
+    timed('paintOverlay', () => {
+      const scene = this.scene();
+      const pointer = this.input.pointer();
+      paintOverlay(ctx, scene, {
         selection: this.app.getState().selectedIds,
         handles: this.input.handles(),
         preview: this.input.preview(),
-        pointer: this.input.pointer(),
-      }),
-    );
+        pointer,
+      });
+      paintRulers(ctx, scene, pointer);
+    });
 
   /** Asks Konva to repaint layers on the next animation frame (several asks make one paint). */
   redraw(what: LayerName): void {
@@ -87,16 +92,13 @@ export class CanvasView {
     if (!layers || this.width === 0) return;
     if (what === 'all') layers.grid.batchDraw();
     if (what === 'all' || what === 'blocks') layers.blocks.batchDraw();
-    if (what !== 'rulers') layers.overlay.batchDraw();
-    if (what === 'all' || what === 'rulers') layers.rulers.batchDraw();
+    // The rulers share the overlay's layer: every change repaints it.
+    layers.overlay.batchDraw();
   }
 
   /** Marks the blocks the findings name; repaints the blocks only when the marks change. */
-  showFindings(findings: readonly { severity: Severity; blockIds: readonly string[] }[]): void {
-    const next = markersOf(findings);
-    if (sameMarkers(next, this.markers)) return;
-    this.markers = next;
-    this.redraw('blocks');
+  showFindings(findings: readonly MarkedFinding[]): void {
+    if (this.findingMarkers.update(findings)) this.redraw('blocks');
   }
 
   /** The camera as data attributes, so that browser tests can turn world positions into clicks. */

@@ -9,8 +9,8 @@ type Paint = (ctx: CanvasRenderingContext2D) => void;
 export interface LayerPainters {
   readonly grid: Paint;
   readonly blocks: Paint;
+  /** Selection, gesture previews and the rulers on top: what changes with every pointer move, on one bitmap. */
   readonly overlay: Paint;
-  readonly rulers: Paint;
 }
 
 /** The stage and its layers, made once per mounted canvas. */
@@ -34,7 +34,7 @@ function paintedLayer(paint: Paint): Layer {
 }
 
 /**
- * Mounts a Konva stage of four painted layers in `container`, straight through Konva's core (no React
+ * Mounts a Konva stage of three painted layers in `container`, straight through Konva's core (no React
  * reconciler: the canvas controller paints and hit-tests itself, so the stage never changes shape).
  */
 export function mountPaintedStage(
@@ -50,9 +50,8 @@ export function mountPaintedStage(
     grid: paintedLayer(paint.grid),
     blocks: paintedLayer(paint.blocks),
     overlay: paintedLayer(paint.overlay),
-    rulers: paintedLayer(paint.rulers),
   };
-  stage.add(layers.grid, layers.blocks, layers.overlay, layers.rulers);
+  stage.add(layers.grid, layers.blocks, layers.overlay);
   return {
     layers,
     resize(w, h) {

@@ -2,13 +2,15 @@ import { placedDesign } from '../../geometry/placedIndex';
 import type { Rect } from '../../geometry/rect';
 import type { Design } from '../../model/design';
 import { blocksEditedInPlace } from '../../model/designEdit';
-import { paintBlockShapes, paintMarkers } from './paintBlocks';
+import { MARKER_MIN_PX, paintBlockShapes, paintMarkers } from './paintBlocks';
 import { pxPerMetre, type Scene } from './scene';
 
 /** Most blocks an edit may change for the bitmaps to be repainted around them only. */
 const MOST_REPAINTED_BLOCKS = 64;
 /** Margin around a changed block that is repainted (px): markers and outlines reach this far out. */
 const REPAINT_MARGIN_PX = 6;
+/** How far a marker may reach beyond a small block's own edges (px): half the smallest marker size. */
+const MARKER_REACH_PX = MARKER_MIN_PX / 2;
 /** Past this share of the bitmap, a repaint in place costs as much as painting all of it. */
 const MOST_REPAINTED_SHARE = 0.5;
 
@@ -45,7 +47,8 @@ export class BlocksCache {
   private canvas: HTMLCanvasElement | null = null;
   private markerCanvas: HTMLCanvasElement | null = null;
   private key: CacheKey | null = null;
-  private markersPainted: Scene['markers'] | null = null;
+  /** The marker version the marker bitmap shows, or null when it must be painted whole. */
+  private markersPainted: number | null = null;
   private originX = 0;
   private originY = 0;
   private marginX = 0;
@@ -77,7 +80,8 @@ export class BlocksCache {
 
   private show(ctx: CanvasRenderingContext2D, scene: Scene, key: CacheKey, dx: number, dy: number): void {
     const ratio = key.ratio;
-    if (this.markersPainted !== scene.markers) this.renderMarkers(scene, key);
+    if (this.markersPainted !== scene.markerVersion && !this.repaintMarkers(scene, key))
+      this.renderMarkers(scene, key);
     for (const canvas of [this.canvas, this.markerCanvas]) {
       if (canvas && canvas.width > 0 && canvas.height > 0) {
         ctx.drawImage(
@@ -152,8 +156,47 @@ export class BlocksCache {
       height: region.height,
     };
     repaintRegion(canvas, key.ratio, region, (ctx) => paintBlockShapes(ctx, inRegion));
-    if (this.markerCanvas && this.markersPainted === scene.markers)
-      repaintRegion(this.markerCanvas, key.ratio, region, (ctx) => paintMarkers(ctx, inRegion));
+    // With today's markers: those that changed elsewhere are repainted by repaintMarkers.
+    if (this.markerCanvas && this.markersPainted !== null)
+      repaintRegion(this.markerCanvas, key.ratio, region, (ctx) => paintMarkers(ctx, inRegion, true));
+    return true;
+  }
+
+  /**
+   * Repaints the marker bitmap only around the blocks whose marker changed since it was painted. False
+   * when that does not apply (no bitmap yet, or too many changes): then it is painted whole.
+   */
+  private repaintMarkers(scene: Scene, key: CacheKey): boolean {
+    const canvas = this.markerCanvas;
+    if (!canvas || !this.canvas || this.markersPainted === null) return false;
+    const changed = scene.markerChanges(this.markersPainted);
+    if (!changed || changed.size > MOST_REPAINTED_BLOCKS) return false;
+    const k = pxPerMetre(scene.viewport);
+    const left = this.originX + this.marginX;
+    const top = this.originY + this.marginY;
+    const width = scene.width + 2 * this.marginX;
+    const height = scene.height + 2 * this.marginY;
+    // A small flagged block's marker is drawn at least MARKER_MIN_PX wide around its centre.
+    const reach = REPAINT_MARGIN_PX + MARKER_REACH_PX;
+    for (const id of changed) {
+      const i = scene.placed.positionOf.get(id);
+      const r = i === undefined ? undefined : scene.placed.placed[i]?.rect;
+      if (!r) continue;
+      const x0 = Math.max(0, Math.floor(r.x * k + left) - reach);
+      const y0 = Math.max(0, Math.floor(r.y * k + top) - reach);
+      const x1 = Math.min(width, Math.ceil((r.x + r.width) * k + left) + reach);
+      const y1 = Math.min(height, Math.ceil((r.y + r.height) * k + top) + reach);
+      if (x1 <= x0 || y1 <= y0) continue;
+      const region = { x: x0, y: y0, width: x1 - x0, height: y1 - y0 };
+      const inRegion: Scene = {
+        ...scene,
+        viewport: { scale: scene.viewport.scale, offsetX: left - region.x, offsetY: top - region.y },
+        width: region.width,
+        height: region.height,
+      };
+      repaintRegion(canvas, key.ratio, region, (ctx) => paintMarkers(ctx, inRegion, true));
+    }
+    this.markersPainted = scene.markerVersion;
     return true;
   }
 
@@ -180,7 +223,7 @@ export class BlocksCache {
       width,
       height,
     });
-    this.markersPainted = scene.markers;
+    this.markersPainted = scene.markerVersion;
   }
 
   private render(scene: Scene, key: CacheKey): void {

@@ -1,6 +1,7 @@
 import { isPlacedMat, type PlacedBlock } from '../../geometry/placedBlocks';
 import type { Rect } from '../../geometry/rect';
 import type { BlockType } from '../../model/block';
+import type { Severity } from '../../engine';
 import { aggregateRuns } from './aggregateRuns';
 import { BLOCK_STYLE, BLOCK_TAG, ERROR_STROKE, WARNING_STROKE } from '../blockStyle';
 import { paintMatDetail } from './paintMatDetail';
@@ -9,7 +10,7 @@ import { pxPerMetre, visibleWorld, type Scene } from './scene';
 /** Outlines are drawn on blocks at least this many pixels across; smaller ones are plain fills. */
 const OUTLINE_MIN_PX = 3;
 /** A flagged block smaller than this on screen still gets a marker this size (px). */
-const MARKER_MIN_PX = 8;
+export const MARKER_MIN_PX = 8;
 
 const TYPE_ORDER: readonly BlockType[] = [
   'mat',
@@ -159,15 +160,28 @@ function paintStripTag(
  * smaller than the marker size is shown at that size; markers that touch merge into runs (a whole die
  * whose every mat has the same warning gets one marked area, not one outline per mat).
  */
-export function paintMarkers(ctx: CanvasRenderingContext2D, scene: Scene): void {
+export function paintMarkers(ctx: CanvasRenderingContext2D, scene: Scene, aroundVisibleOnly = false): void {
   const { viewport, placed } = scene;
   const k = pxPerMetre(viewport);
   const ox = viewport.offsetX;
   const oy = viewport.offsetY;
+  // A small region asks the index for its blocks instead of going through every marker of the design.
+  let flagged: Iterable<[string, Severity]> = scene.markers;
+  if (aroundVisibleOnly) {
+    const reach = MARKER_MIN_PX / k;
+    const view = visibleWorld(viewport, scene.width, scene.height);
+    const near: [string, Severity][] = [];
+    for (const i of placed.index.near(view, reach)) {
+      const id = placed.placed[i]?.block.id;
+      const s = id === undefined ? undefined : scene.markers.get(id);
+      if (id !== undefined && s) near.push([id, s]);
+    }
+    flagged = near;
+  }
   for (const severity of ['warning', 'error'] as const) {
     const colour = severity === 'error' ? ERROR_STROKE : WARNING_STROKE;
     const marks: Rect[] = [];
-    for (const [id, s] of scene.markers) {
+    for (const [id, s] of flagged) {
       if (s !== severity || scene.hidden.has(id)) continue;
       const i = placed.positionOf.get(id);
       const p = i === undefined ? undefined : placed.placed[i];

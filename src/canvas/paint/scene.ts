@@ -15,6 +15,10 @@ export interface Scene {
   readonly height: number;
   /** Worst finding severity per block id, from the report shown (live during a gesture). */
   readonly markers: ReadonlyMap<string, Severity>;
+  /** Bumped whenever a marker changes. */
+  readonly markerVersion: number;
+  /** Ids whose marker changed after a version, or null when too many did to say. */
+  readonly markerChanges: (since: number) => ReadonlySet<string> | null;
   /** Blocks drawn faintly because a gesture is moving them. */
   readonly hidden: ReadonlySet<string>;
   readonly gridVisible: boolean;
@@ -43,22 +47,4 @@ export function toScreen(viewport: Viewport, r: Rect): Rect {
 export function visibleWorld(viewport: Viewport, width: number, height: number): Rect {
   const k = pxPerMetre(viewport);
   return { x: -viewport.offsetX / k, y: -viewport.offsetY / k, width: width / k, height: height / k };
-}
-
-/** Worst severity per block id. */
-export function markersOf(findings: readonly { severity: Severity; blockIds: readonly string[] }[]) {
-  const markers = new Map<string, Severity>();
-  for (const f of findings) {
-    for (const id of f.blockIds) {
-      if (markers.get(id) !== 'error') markers.set(id, f.severity);
-    }
-  }
-  return markers;
-}
-
-/** True when two marker maps flag the same blocks the same way. */
-export function sameMarkers(a: ReadonlyMap<string, Severity>, b: ReadonlyMap<string, Severity>): boolean {
-  if (a.size !== b.size) return false;
-  for (const [id, s] of a) if (b.get(id) !== s) return false;
-  return true;
 }

@@ -64,6 +64,17 @@ export function allMats(mats: MatTable): MatReport[] {
 
 const indexById = new WeakMap<MatTable, ReadonlyMap<string, number>>();
 
+/**
+ * Lets `next` answer {@link matIndexOf} with the map `previous` built (or builds it first): for a table of
+ * the same mats under the same ids in the same order, as an edit in place leaves it.
+ */
+export function shareIdIndex(previous: MatTable, next: MatTable): void {
+  if (previous.count !== next.count) return;
+  matIndexOf(previous, '');
+  const index = indexById.get(previous);
+  if (index) indexById.set(next, index);
+}
+
 /** Index of the mat with this id, or −1; the lookup map is built once per table. */
 export function matIndexOf(mats: MatTable, id: string): number {
   let index = indexById.get(mats);

@@ -19,8 +19,8 @@ import { matIndexByPosition } from './decoderReach';
 import { designContext, evaluate, evaluateMatAt, evaluationNeighbours } from './evaluate';
 import { findPositionedOverlaps, overlapAreaAt, type PositionedOverlap } from './overlaps';
 import { rememberReportState, reportState } from './reportState';
-import type { Report } from './report';
-import { MatTableBuilder } from './matTable';
+import type { MatFigures, Report } from './report';
+import { MatTableBuilder, shareIdIndex } from './matTable';
 import { computeTotals } from './totals';
 
 /**
@@ -48,6 +48,12 @@ export interface PreviewBase {
   readonly staticOverlaps: readonly PositionedOverlap[];
   /** The layout checks of the design before the gesture. */
   readonly layout: LayoutState;
+  /**
+   * Mat figures computed during the gesture, per kind of mat and connection key (see evaluateMatAt):
+   * frames of one gesture share the design-wide values (the counts are the same, or the whole design is
+   * evaluated), so a mat dragged across the floorplan is computed once per arrangement, not per frame.
+   */
+  readonly figures: Map<MatKind, Map<number | string, MatFigures>>;
 }
 
 export function preparePreview(design: Design, report: Report, changingIds: Iterable<string>): PreviewBase {
@@ -75,6 +81,7 @@ export function preparePreview(design: Design, report: Report, changingIds: Iter
     changingPositions,
     matIndexAt,
     layout,
+    figures: new Map(),
     staticOverlaps: overlaps.filter(
       (o) => !changingPositions.has(o.first) && !changingPositions.has(o.second),
     ),
@@ -181,11 +188,16 @@ export function previewReport(
   for (const i of affected) {
     const k = base.matIndexAt[i] ?? -1;
     if (k < 0) continue;
-    evaluateMatAt(current, i, neighbours, ctx, builder, k);
+    const kind = current.kinds[current.kindOf[i] as number] as MatKind;
+    let figures = base.figures.get(kind);
+    if (!figures) base.figures.set(kind, (figures = new Map()));
+    evaluateMatAt(current, i, neighbours, ctx, builder, k, figures);
     redone.add(k);
   }
   for (let k = 0; k < report.mats.count; k++) if (!redone.has(k)) builder.copy(k, report.mats);
   const mats = builder.finish();
+  // Same mats under the same ids in the same order: the id lookup carries over.
+  shareIdIndex(report.mats, mats);
 
   // Overlaps: the static pairs found once per gesture, plus those of the changed blocks, in design order.
   const overlaps: PositionedOverlap[] = base.staticOverlaps.slice();
