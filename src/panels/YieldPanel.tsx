@@ -90,7 +90,7 @@ export function YieldPanel() {
       <p className="hint" data-testid="repair-closed-form-kind">
         {figures.repairProbabilityIsExact
           ? 'The repair probability and die yield above are exact for this model: only whole word lines and bit-line pairs fail (or there are no spares), and rows and columns are repaired independently.'
-          : 'The repair probability and die yield above are a LOWER BOUND: single faulty cells may take a spare row or a spare column, which couples row domains and strips, so the closed form counts only the better of "every cell by a row" and "every cell by a column". The Monte-Carlo estimate below solves every die exactly and is the figure to read.'}
+          : 'The repair probability and die yield above are a LOWER BOUND: single faulty cells may take a spare row or a spare column, which couples row domains and strips, so the closed form counts only the best of three repair plans fixed in advance. The Monte-Carlo estimate below solves every die exactly and is the figure to read.'}
       </p>
       <div className="figure-group" data-testid="repair-monte-carlo">
         <h4>Die yield by Monte Carlo</h4>

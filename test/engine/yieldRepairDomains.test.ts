@@ -1,6 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { generatedDemoGrid } from '../../src/designs/demoDesign';
-import { estimateRepairProbability, evaluate, yieldFiguresOf } from '../../src/engine';
+import {
+  estimateRepairProbability,
+  evaluate,
+  gridRepairPlan,
+  matDomainShare,
+  yieldFiguresOf,
+  yieldOfDomains,
+} from '../../src/engine';
 import { DEFAULT_REPAIR } from '../../src/model/builtins';
 import type { Design } from '../../src/model/design';
 import type { RepairSettings } from '../../src/model/repair';
@@ -68,6 +75,54 @@ describe('column-repair domains are the sense-amplifier strip segments', () => {
     const expected = 4 * (stripPerColumn + cellsPerColumn) + 4 * (stripPerColumn + 2 * cellsPerColumn);
     expect(one.spareColumnArea).toBeCloseTo(expected, 18);
     expect(one.spareColumnArea / expected).toBeCloseTo(1, 9);
+  });
+});
+
+describe('the explorer’s grid plan is the plan the report finds', () => {
+  it('same repair probability, die yield and redundancy area for every row domain and spare count', () => {
+    for (const repairDomain of ['mat', 'matRow', 'bank'] as const) {
+      for (const spareColumns of [0, 1, 3]) {
+        const base = withRepair(
+          generatedDemoGrid(3, 2),
+          { repairDomain, spareRows: 1, spareColumns, defectDensity: 1e7, killRatioCell: 1 },
+          64,
+        );
+        // No weak-cell tail, so the mat's share needs no tail here.
+        const design = { ...base, process: { ...base.process, tailCellFraction: 0 } };
+        const report = evaluate(design);
+        const fromReport = yieldFiguresOf(report, design);
+        const mat = report.mats.figures[0];
+        const strip = design.blocks.find((b) => b.type === 'senseAmpStrip');
+        if (!mat || !strip || strip.type === 'mat') throw new Error('no mat or strip');
+        const settings = fromReport.settings;
+        const plan = gridRepairPlan(
+          { matRows: 3, matColumns: 2, stripArea: strip.width * strip.height },
+          settings,
+          matDomainShare(mat, settings, design.operating.refreshWindow),
+        );
+        const fromGrid = yieldOfDomains({
+          plan,
+          mats: report.mats.figures,
+          settings,
+          floorplanCopiesPerDie: 64,
+          retentionTail: { fraction: 0, medianLeakageMultiplier: 1, spread: 0 },
+          refreshWindow: design.operating.refreshWindow,
+          floorplanArea: report.totals.totalArea,
+          usableBits: report.totals.usableBits,
+        });
+        expect(fromReport.repairProbabilityIsExact).toBe(false);
+        const label = `${repairDomain}, C = ${spareColumns}`;
+        // Compare what the spares fail to repair, so that a repair probability near 1 still tells them apart.
+        expect(1 - fromReport.repairProbability, label).toBeGreaterThan(1e-4);
+        expect((1 - fromGrid.repairProbability) / (1 - fromReport.repairProbability), label).toBeCloseTo(
+          1,
+          7,
+        );
+        expect(fromGrid.redundancyArea / fromReport.redundancyArea, label).toBeCloseTo(1, 9);
+        expect(fromGrid.rowDomainsPerDie, label).toBe(fromReport.rowDomainsPerDie);
+        expect(fromGrid.columnDomainsPerDie, label).toBe(fromReport.columnDomainsPerDie);
+      }
+    }
   });
 });
 

@@ -28,19 +28,69 @@ export interface RepairDomainClass {
   readonly domain: DomainFaults;
   /** Area of one spare line of the domain (m²). */
   readonly spareArea: number;
+  /**
+   * Row domains only: the domain's tiles, identical ones counted together, each with the spare columns
+   * the split plan sets aside for it from its strip (the closed form's third repair plan).
+   */
+  readonly tiles?: readonly TileShare[];
 }
 
-/** Domains with their spare areas, identical ones counted together. */
-function classesOf(domains: readonly DomainFaults[], spareArea: readonly number[]): RepairDomainClass[] {
-  const classes = new Map<string, { count: number; domain: DomainFaults; spareArea: number }>();
+/** Identical tiles of a row domain: their expected cell and column faults and their share of spare columns. */
+export interface TileShare {
+  readonly count: number;
+  readonly defectCells: number;
+  readonly parametricCells: number;
+  readonly defectColumns: number;
+  readonly parametricColumns: number;
+  readonly columnSpares: number;
+}
+
+/** Domains with their spare areas (and tile shares), identical ones counted together. */
+function classesOf(
+  domains: readonly DomainFaults[],
+  spareArea: readonly number[],
+  tiles?: readonly (readonly TileShare[])[],
+): RepairDomainClass[] {
+  const classes = new Map<string, RepairDomainClass & { count: number }>();
   domains.forEach((d, i) => {
     const area = spareArea[i] ?? 0;
-    const key = `${d.lines},${d.defectLines},${d.parametricLines},${d.defectCells},${d.parametricCells},${area}`;
+    const mix = tiles?.[i];
+    const key =
+      `${d.lines},${d.defectLines},${d.parametricLines},${d.defectCells},${d.parametricCells},${area}` +
+      (mix ? `|${mix.map(tileKey).join(';')}` : '');
     const found = classes.get(key);
     if (found) found.count++;
-    else classes.set(key, { count: 1, domain: d, spareArea: area });
+    else classes.set(key, { count: 1, domain: d, spareArea: area, ...(mix ? { tiles: mix } : {}) });
   });
   return [...classes.values()];
+}
+
+const tileKey = (t: Omit<TileShare, 'count'> & { count?: number }) =>
+  `${t.defectCells},${t.parametricCells},${t.defectColumns},${t.parametricColumns},${t.columnSpares}`;
+
+/** A row domain's tiles grouped into identical kinds, in a stable order. */
+function tileMix(tiles: readonly { tile: RepairTile; share: number }[]): TileShare[] {
+  const kinds = new Map<string, { count: number } & Omit<TileShare, 'count'>>();
+  for (const { tile, share } of tiles) {
+    const kind = {
+      defectCells: tile.defects.cells,
+      parametricCells: tile.parametric.cells,
+      defectColumns: tile.defects.columns,
+      parametricColumns: tile.parametric.columns,
+      columnSpares: share,
+    };
+    const key = tileKey(kind);
+    const found = kinds.get(key);
+    if (found) found.count++;
+    else kinds.set(key, { count: 1, ...kind });
+  }
+  return [...kinds.entries()].sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0)).map(([, k]) => k);
+}
+
+/** Spare columns of a strip divided among its k tiles in order: ⌊C/k⌋ each, one more for the first C mod k. */
+export function splitShare(spareColumns: number, tiles: number, index: number): number {
+  if (tiles <= 0) return 0;
+  return Math.floor(spareColumns / tiles) + (index < spareColumns % tiles ? 1 : 0);
 }
 
 /** One mat's lines, outline area and expected faults (from its figures and the repair settings). */
@@ -86,6 +136,8 @@ export function reportRepairPlan(
   const rowDomainRows: number[] = [];
   const rowArea: number[] = [];
   const strips = new Map<number, StripSides>();
+  /** Per tile: its column domain and its side of the strip (for the split plan's shares). */
+  const tileSide: number[] = [];
   const lonely: { index: number; columns: number; area: number }[] = [];
   let columnDomains = 0;
   const tiles: RepairTile[] = [];
@@ -123,6 +175,7 @@ export function reportRepairPlan(
     });
     if (stripCount === 0) {
       lonely.push({ index: columnDomains, columns: share.columns, area: share.area });
+      tileSide.push(0);
       tiles.push(tile(columnDomains++, 0, share.columns, 1));
       continue;
     }
@@ -142,6 +195,7 @@ export function reportRepairPlan(
         const middle = vertical ? strip.y + strip.height / 2 : strip.x + strip.width / 2;
         if ((vertical ? block.y : block.x) > middle) side = 1;
       }
+      tileSide.push(side);
       tiles.push(tile(sides.index, sides.columns[side], columns, 1 / stripCount));
       sides.columns[side] += columns;
       sides.cellArea[side] += share.area / stripCount;
@@ -164,12 +218,26 @@ export function reportRepairPlan(
   }
   const layout: RepairLayout = { rowDomainRows, columnDomainColumns, tiles };
   const faults = domainFaults(layout);
+  // The split plan: each strip's spare columns divided among its tiles, the side before the strip first.
+  const tilesOfStrip: number[][] = Array.from({ length: columnDomains }, () => []);
+  tiles.forEach((t, i) => tilesOfStrip[t.columnDomain]?.push(i));
+  const columnShareOf = new Array<number>(tiles.length).fill(0);
+  for (const list of tilesOfStrip) {
+    const ordered = [...list].sort((a, b) => (tileSide[a] as number) - (tileSide[b] as number) || a - b);
+    ordered.forEach((t, index) => {
+      columnShareOf[t] = splitShare(settings.spareColumns, ordered.length, index);
+    });
+  }
+  const tilesOfRowDomain: { tile: RepairTile; share: number }[][] = rowDomainRows.map(() => []);
+  tiles.forEach((t, i) =>
+    tilesOfRowDomain[t.rowDomain]?.push({ tile: t, share: columnShareOf[i] as number }),
+  );
   const spareRowArea = rowArea.map((a, d) => {
     const rows = rowDomainRows[d] as number;
     return rows > 0 ? a / rows : 0;
   });
   return {
-    rowClasses: classesOf(faults.rows, spareRowArea),
+    rowClasses: classesOf(faults.rows, spareRowArea, tilesOfRowDomain.map(tileMix)),
     columnClasses: classesOf(faults.columns, spareColumnArea),
     layout,
   };
@@ -227,15 +295,57 @@ export function gridRepairPlan(
       });
     }
   }
-  const rowClasses: RepairDomainClass[] =
-    rowDomains > 0
-      ? [
-          {
-            count: rowDomains,
-            domain: rowDomain,
-            spareArea: rowDomain.lines > 0 ? (perRowDomain * share.area) / rowDomain.lines : 0,
-          },
-        ]
-      : [];
+  const C = settings.spareColumns;
+  // Split plan shares: an edge strip gives all C to its one mat; an inner strip ⌈C/2⌉ to the mat above
+  // it (before it) and ⌊C/2⌋ to the mat below. Mat r meets strip r above it and strip r + 1 below it.
+  const tileOf = (columnSpares: number): Omit<TileShare, 'count'> => ({
+    defectCells: share.defects.cells * 0.5,
+    parametricCells: share.parametric.cells * 0.5,
+    defectColumns: share.defects.columns * 0.5,
+    parametricColumns: share.parametric.columns * 0.5,
+    columnSpares,
+  });
+  const matTiles = (r: number) => [
+    tileOf(r === 0 ? C : splitShare(C, 2, 1)),
+    tileOf(r === matRows - 1 ? C : splitShare(C, 2, 0)),
+  ];
+  const mixOf = (rs: readonly number[], matsPerRow: number): TileShare[] => {
+    const kinds = new Map<string, { count: number } & Omit<TileShare, 'count'>>();
+    for (const r of rs) {
+      for (const t of matTiles(r)) {
+        const key = tileKey(t);
+        const found = kinds.get(key);
+        if (found) found.count += matsPerRow;
+        else kinds.set(key, { count: matsPerRow, ...t });
+      }
+    }
+    return [...kinds.entries()].sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0)).map(([, k]) => k);
+  };
+  const rowSpareArea = rowDomain.lines > 0 ? (perRowDomain * share.area) / rowDomain.lines : 0;
+  const rowClasses: RepairDomainClass[] = [];
+  if (rowDomains > 0 && settings.repairDomain === 'bank') {
+    rowClasses.push({
+      count: 1,
+      domain: rowDomain,
+      spareArea: rowSpareArea,
+      tiles: mixOf(
+        Array.from({ length: matRows }, (_, r) => r),
+        matColumns,
+      ),
+    });
+  } else if (rowDomains > 0) {
+    // Mat rows of one kind (first, inner, last) have the same tiles.
+    const perMat = settings.repairDomain === 'mat' ? matColumns : 1;
+    const matsPerRow = settings.repairDomain === 'mat' ? 1 : matColumns;
+    const byMix = new Map<string, RepairDomainClass & { count: number }>();
+    for (let r = 0; r < matRows; r++) {
+      const tiles = mixOf([r], matsPerRow);
+      const key = tiles.map(tileKey).join(';');
+      const found = byMix.get(key);
+      if (found) found.count += perMat;
+      else byMix.set(key, { count: perMat, domain: rowDomain, spareArea: rowSpareArea, tiles });
+    }
+    rowClasses.push(...byMix.values());
+  }
   return { rowClasses, columnClasses, layout: null };
 }

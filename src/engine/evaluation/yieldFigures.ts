@@ -13,7 +13,7 @@ import {
 import { crossedRepairLowerBound, type LineDomainClass } from '../physics/redundancy';
 import { spareSetArea } from '../physics/redundancyArea';
 import type { RepairMonteCarloRequest } from '../physics/repairMonteCarlo';
-import { goodDiesPerWafer, grossDiesPerWafer } from '../physics/yield';
+import { goodDiesPerWafer, grossDiesPerWafer, negativeBinomialYield } from '../physics/yield';
 import { retentionTailAt } from './designContext';
 import { figuresAt } from './matTable';
 import { reportRepairPlan, type MatShare, type RepairDomainClass, type RepairPlan } from './repairDomains';
@@ -162,11 +162,21 @@ const countOf = (classes: readonly RepairDomainClass[]) => classes.reduce((n, c)
 
 /** The classes at a defect density x times the mean: line and cell faults as the closed form reads them. */
 function atDensity(classes: readonly RepairDomainClass[], copies: number, x: number): LineDomainClass[] {
-  return classes.map(({ count, domain }) => ({
+  return classes.map(({ count, domain, tiles }) => ({
     count: count * copies,
     lines: domain.lines,
     lineFaults: domain.defectLines * x + domain.parametricLines,
     cellFaults: domain.defectCells * x + domain.parametricCells,
+    ...(tiles
+      ? {
+          tiles: tiles.map((t) => ({
+            count: t.count,
+            cellFaults: t.defectCells * x + t.parametricCells,
+            columnFaults: t.defectColumns * x + t.parametricColumns,
+            columnSpares: t.columnSpares,
+          })),
+        }
+      : {}),
   }));
 }
 
@@ -247,15 +257,23 @@ export function yieldOfDomains(inputs: YieldInputs): YieldFigures {
     );
   const alpha = settings.defectClustering;
   const clamp = (p: number) => Math.min(1, Math.max(0, p));
-  const repairProbability = clusteredExpectation(
-    (x) => arrays(x, settings.spareRows, settings.spareColumns),
-    alpha,
-  );
-  const repairProbabilityWithoutSpares = clusteredExpectation((x) => arrays(x, 0, 0), alpha);
-  const dieYield = clusteredExpectation(
-    (x) => arrays(x, settings.spareRows, settings.spareColumns) * Math.exp(-fatalDefects * x),
-    alpha,
-  );
+  // The repair probability and the die yield integrate over the same density points: compute each once.
+  const withSpares = new Map<number, number>();
+  const arraysWithSpares = (x: number): number => {
+    let p = withSpares.get(x);
+    if (p === undefined) {
+      p = arrays(x, settings.spareRows, settings.spareColumns);
+      withSpares.set(x, p);
+    }
+    return p;
+  };
+  const repairProbability = clusteredExpectation(arraysWithSpares, alpha);
+  // With no spares every fault kills: E_x[e^(−(a·x + b))] = (1 + a/α)^(−α)·e^(−b) (negative binomial).
+  const defectsPerDie = defectTotal.cells + defectTotal.rows + defectTotal.columns;
+  const parametricPerDie = parametricTotal.cells + parametricTotal.rows + parametricTotal.columns;
+  const repairProbabilityWithoutSpares =
+    negativeBinomialYield(defectsPerDie, 1, alpha) * Math.exp(-parametricPerDie);
+  const dieYield = clusteredExpectation((x) => arraysWithSpares(x) * Math.exp(-fatalDefects * x), alpha);
   const dieAreaWithRedundancy = settings.dieArea + copies * redundancy;
   const gross = grossDiesPerWafer(settings.waferDiameter, dieAreaWithRedundancy);
   const usableBits = inputs.usableBits;

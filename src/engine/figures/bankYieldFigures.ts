@@ -59,10 +59,10 @@ export const BANK_YIELD_FIGURES = [
     explain: (f) => ({
       symbol: 'P_repair',
       formula:
-        'P = E_x[ max( Π_rowdom P(rows + cells ≤ R)·Π_strips P(cols ≤ C),  Π_rowdom P(rows ≤ R)·Π_strips P(cols + cells ≤ C) ) ]',
+        'P = E_x[ max over three fixed plans of Π_rowdom · Π_strips ]: cells by rows; cells by columns; strip spares split among its mats',
       inputs: SPARES(f),
       method:
-        'Spare rows per row domain, spare columns per sense-amp strip segment (inner strips shared by the mats above and below). Faulty lines Binomial(lines, 1 − e^(−λ/lines)), exact for line faults; with single-cell faults a lower bound (every cell by a spare row, or every cell by a spare column, whichever is likelier).',
+        "Spare rows per row domain, spare columns per sense-amp strip segment (inner strips shared by the mats above and below). Faulty lines Binomial(lines, 1 − e^(−λ/lines)), exact for line faults; with single-cell faults a lower bound (the best of: every cell by a spare row; every cell by a spare column; each strip's spares split among its mats, cells by their share, then by rows).",
       source: `${STAPPER}; ${SOURCES.common} for the repair rule`,
     }),
   }),

@@ -108,7 +108,7 @@ export const TOTAL_YIELD_FIGURES = [
       return {
         symbol: 'P_repair',
         formula:
-          'P = E_x[ max( Π_rowdom P(rows + cells ≤ R)·Π_strips P(cols ≤ C),  Π_rowdom P(rows ≤ R)·Π_strips P(cols + cells ≤ C) ) ],  x ~ Gamma(α, mean 1)',
+          "P = E_x[ max over three fixed plans of Π_rowdom · Π_strips ],  x ~ Gamma(α, mean 1);  plans: cells by rows; cells by columns; each strip's C split among its mats, a cell takes its share's columns, then the row domain's rows",
         inputs: [
           input('R', 'spare rows per row domain', s.spareRows, 'count'),
           input('C', 'spare columns per sense-amp strip segment', s.spareColumns, 'count'),
@@ -118,7 +118,7 @@ export const TOTAL_YIELD_FIGURES = [
           input('P0', 'without spares', y.repairProbabilityWithoutSpares, 'percent'),
         ],
         method:
-          'Spare rows serve a row domain (mat, mat row or floorplan), spare columns a sense-amplifier strip segment (its sense amplifiers and the bit-line pairs they serve on both sides). Faulty rows and columns are Binomial(lines, 1 − e^(−λ/lines)): exact when there are only line faults, since rows and columns are then independent. Single-cell faults couple a row domain and a strip, so the closed form takes the better of two plans that always work when they succeed (every cell by a spare row, or every cell by a spare column): a LOWER BOUND. The Monte-Carlo estimate in the yield panel solves the same domains exactly. Defect rates are scaled by a gamma-distributed density (clustering).' +
+          "Spare rows serve a row domain (mat, mat row or floorplan), spare columns a sense-amplifier strip segment (its sense amplifiers and the bit-line pairs they serve on both sides). Faulty rows and columns are Binomial(lines, 1 − e^(−λ/lines)): exact when there are only line faults, since rows and columns are then independent. Single-cell faults couple a row domain and a strip, so the closed form takes the best of three repair plans fixed in advance (every cell by a spare row; every cell by a spare column; each strip's spare columns split among the mats it senses, cells taking their share's columns and then the row domain's rows): a LOWER BOUND. The Monte-Carlo estimate in the yield panel solves the same domains exactly. Defect rates are scaled by a gamma-distributed density (clustering)." +
           CAUTION,
         source: `${STAPPER}; ${SOURCES.common} for the repair rule`,
       };

@@ -9,7 +9,9 @@ import {
 import {
   crossedRepairLowerBound,
   lineRepairProbability,
+  splitPlanDomainProbability,
   type LineDomainClass,
+  type TileShareClass,
 } from '../../../src/engine/physics/redundancy';
 import { estimateRepairProbability } from '../../../src/engine/physics/repairMonteCarlo';
 import type { RepairLayout, RepairTile } from '../../../src/engine/physics/repairLayout';
@@ -137,20 +139,86 @@ function stackLayout(
   };
 }
 
-/** The closed form's classes for the same stack. */
+/**
+ * The closed form's classes for the same stack; with `spareColumns` the row classes carry their tiles'
+ * split-plan shares (an edge strip gives all C to its mat, an inner one ⌈C/2⌉ above, ⌊C/2⌋ below).
+ */
 function stackClasses(
   mats: number,
   rows: number,
   columns: number,
   f: { cells: number; rows: number; columns: number },
+  spareColumns?: number,
 ) {
-  const rowClasses: LineDomainClass[] = [
-    { count: mats, lines: rows, lineFaults: f.rows, cellFaults: f.cells },
-  ];
+  const tile = (columnSpares: number): TileShareClass => ({
+    count: 1,
+    cellFaults: f.cells / 2,
+    columnFaults: f.columns / 2,
+    columnSpares,
+  });
+  const rowClasses: LineDomainClass[] = Array.from({ length: mats }, (_, m) => ({
+    count: 1,
+    lines: rows,
+    lineFaults: f.rows,
+    cellFaults: f.cells,
+    ...(spareColumns === undefined
+      ? {}
+      : {
+          tiles: [
+            tile(m === 0 ? spareColumns : Math.floor(spareColumns / 2)),
+            tile(m === mats - 1 ? spareColumns : Math.ceil(spareColumns / 2)),
+          ],
+        }),
+  }));
   const edge = { count: 2, lines: columns / 2, lineFaults: f.columns / 2, cellFaults: f.cells / 2 };
   const inner = { count: mats - 1, lines: columns / 2, lineFaults: f.columns, cellFaults: f.cells };
   return { rowClasses, columnClasses: [edge, inner] };
 }
+
+describe("the split plan (each strip's spare columns divided among the mats it senses)", () => {
+  it('with no cell faults one tile is P(rows ≤ R)·P(column faults ≤ its share) (arithmetic)', () => {
+    const p = splitPlanDomainProbability(512, 0.2, 2, [
+      { count: 1, cellFaults: 0, columnFaults: 0.3, columnSpares: 1 },
+    ]);
+    const poissonAtMostOne = Math.exp(-0.3) * (1 + 0.3);
+    expect(p).toBeCloseTo(lineRepairProbability(512, 0.2, 2) * poissonAtMostOne, 14);
+  });
+
+  it('n identical tiles equal n tiles listed one by one (the power by squaring; arithmetic)', () => {
+    const one = { count: 1, cellFaults: 0.4, columnFaults: 0.1, columnSpares: 1 };
+    const together = splitPlanDomainProbability(256, 0.1, 3, [{ ...one, count: 7 }]);
+    const apart = splitPlanDomainProbability(
+      256,
+      0.1,
+      3,
+      Array.from({ length: 7 }, () => one),
+    );
+    expect(together).toBeCloseTo(apart, 14);
+  });
+
+  it('beats the two one-kind plans where cells are many and both kinds of spare exist', () => {
+    const faults = { cells: 0.8, rows: 0.05, columns: 0.05 };
+    const plain = stackClasses(8, 512, 512, faults);
+    const withTiles = stackClasses(8, 512, 512, faults, 2);
+    const twoPlans = crossedRepairLowerBound(plain.rowClasses, plain.columnClasses, 1, 2);
+    const threePlans = crossedRepairLowerBound(withTiles.rowClasses, withTiles.columnClasses, 1, 2);
+    expect(threePlans).toBeGreaterThan(twoPlans * 1.1);
+    const mc = estimateRepairProbability(
+      {
+        layout: stackLayout(8, 512, 512, faults),
+        copies: 1,
+        spareRows: 1,
+        spareColumns: 2,
+        fatalDefects: 0,
+        clustering: Infinity,
+        seed: 12,
+      },
+      20_000,
+    );
+    // Still a lower bound of the exact repair probability.
+    expect(threePlans).toBeLessThanOrEqual(mc.high);
+  });
+});
 
 describe('closed form against the Monte Carlo on the same crossing domains', () => {
   it('line faults only: the exact product lies in the 95 % interval (shared strips collide columns)', () => {
@@ -211,16 +279,20 @@ describe('closed form against the Monte Carlo on the same crossing domains', () 
         fc.integer({ min: 0, max: 3 }),
         fc.integer({ min: 0, max: 3 }),
         (cells, rows, columns, r, c) => {
-          const { rowClasses, columnClasses } = stackClasses(6, 256, 128, { cells, rows, columns });
-          const p = crossedRepairLowerBound(rowClasses, columnClasses, r, c);
+          const bound = (spareRows: number, spareColumns: number) => {
+            const classes = stackClasses(6, 256, 128, { cells, rows, columns }, spareColumns);
+            return crossedRepairLowerBound(
+              classes.rowClasses,
+              classes.columnClasses,
+              spareRows,
+              spareColumns,
+            );
+          };
+          const p = bound(r, c);
           expect(p).toBeGreaterThanOrEqual(0);
           expect(p).toBeLessThanOrEqual(1);
-          expect(crossedRepairLowerBound(rowClasses, columnClasses, r + 1, c)).toBeGreaterThanOrEqual(
-            p * (1 - 1e-12),
-          );
-          expect(crossedRepairLowerBound(rowClasses, columnClasses, r, c + 1)).toBeGreaterThanOrEqual(
-            p * (1 - 1e-12),
-          );
+          expect(bound(r + 1, c)).toBeGreaterThanOrEqual(p * (1 - 1e-12));
+          expect(bound(r, c + 1)).toBeGreaterThanOrEqual(p * (1 - 1e-12));
         },
       ),
       { numRuns: 200 },
