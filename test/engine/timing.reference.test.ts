@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { offsetSigmaMultiplier } from '../../src/engine/physics/offset';
 import { drivenLineTime } from '../../src/engine/physics/rcLine';
-import { weakestCellLeakage } from '../../src/engine/physics/retention';
+import { retentionTime, weakestCellLeakage } from '../../src/engine/physics/retention';
 import {
   developedShare,
   developmentTimeConstant,
@@ -119,5 +119,20 @@ describe('reference cell footprints', () => {
     // technology", IEDM 1998 (from memory): 1.9e-12 / (0.18e-6)² = 58.64 F².
     const published = 1.9e-12 / 0.18e-6 ** 2;
     expect(Math.abs(footprintInF2(DYNAMIC_4T_CELL, 18e-9) / published - 1)).toBeLessThan(0.03);
+  });
+});
+
+describe('a textbook-style 1T1C cell problem (published inputs, our arithmetic)', () => {
+  // Source: a course problem found in the search corpus (askfilo.com / doubtrix.com copies; its book is not
+  // named there): a 20 fF cell charged to 3.3 V, written through a 6 kΩ access transistor from a bit-line
+  // driver of 1 kΩ; read onto a 500 fF bit line precharged to 3.3 V; at most 2 pA of leakage and 0.5 V of
+  // tolerated loss. The pages give no answers: the expected values below are arithmetic on those inputs.
+  it('writing a 1 to 95 % takes (6 kΩ + 1 kΩ)·20 fF·ln 20 = 0.419 ns (arithmetic)', () => {
+    expect(restoreTime(7e3, 20e-15, 0.95)).toBeCloseTo(7e3 * 20e-15 * Math.log(20), 18);
+    expect(restoreTime(7e3, 20e-15, 0.95) * 1e9).toBeCloseTo(0.4194, 4);
+  });
+
+  it('a 2 pA leak costs 0.5 V of a 20 fF cell in 5 ms (arithmetic)', () => {
+    expect(retentionTime(20e-15, 0.5, 2e-12)).toBeCloseTo(5e-3, 12);
   });
 });
