@@ -15,7 +15,12 @@ export function StorageStatus() {
     () => documentSession.status,
   );
   return (
-    <span className={`storage-status ${status}`} data-testid="storage-status" data-status={status}>
+    <span
+      className={`storage-status ${status}`}
+      data-testid="storage-status"
+      data-status={status}
+      title={LABEL[status] || undefined}
+    >
       {LABEL[status]}
     </span>
   );

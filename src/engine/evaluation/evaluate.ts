@@ -6,7 +6,7 @@ import type { Design } from '../../model/design';
 import { collectFindings } from './checks';
 import { matIndexByPosition } from './decoderReach';
 import { layoutState } from './layoutFindings';
-import { emptyConnections, matConnections } from './connectivity';
+import { emptyConnections, matConnections, type MatConnections } from './connectivity';
 import { designContext as contextOf, type DesignContext } from './designContext';
 import { matPhysics, senseAmpsOfMat } from './matPhysics';
 import { findPositionedOverlaps, overlapAreaAt } from './overlaps';
@@ -45,6 +45,24 @@ export function countCells(table: BlockTable): number {
 /** Filled for one mat at a time and read at once, so one record serves every mat. */
 const connections = emptyConnections();
 
+/** What a mat's figures were computed from besides the design-wide values: its kind and connections. */
+interface FiguresRecipe {
+  readonly kind: MatKind;
+  readonly connections: MatConnections;
+}
+
+const recipes = new WeakMap<MatFigures, FiguresRecipe>();
+
+/**
+ * The figures `figures` would have under other design-wide values (a floorplan with other sense-amplifier
+ * or cell counts moves k and the weakest cell): the same kind and connections, computed with `ctx`.
+ * Undefined for figures this module did not compute.
+ */
+export function refigured(figures: MatFigures, ctx: DesignContext): MatFigures | undefined {
+  const recipe = recipes.get(figures);
+  return recipe ? matPhysics(recipe.kind, recipe.connections, ctx) : undefined;
+}
+
 /**
  * Evaluates mat `at` of the table and records it as mat `k` of the report being built: its connections
  * from its neighbours, then its physics. Mats with the same kind and sense-amplifier arrangement have the
@@ -73,7 +91,9 @@ export function evaluateMatAt(
       : `${kindIndex}|${c.senseAmpEnds}|${lost}|${unsensed}|${undriven}`;
   let figures = figuresByKind?.get(key);
   if (!figures) {
-    figures = matPhysics(kindAt(table, at), c, ctx);
+    const kind = kindAt(table, at);
+    figures = matPhysics(kind, c, ctx);
+    recipes.set(figures, { kind, connections: { ...c } });
     figuresByKind?.set(key, figures);
   }
   mats.set(k, at, figures, c.unsensedBitlines, c.undrivenWordlines);

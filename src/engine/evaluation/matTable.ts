@@ -161,12 +161,25 @@ export class MatTableBuilder {
     this.servingOffsets[3 * k + 2] = this.servingUsed;
   }
 
-  /** Records mat k as mat k of `earlier`, a table over the same blocks built with `earlierFigures`. */
-  copy(k: number, earlier: MatTable): void {
-    this.position[k] = earlier.position[k] ?? 0;
-    this.figureIndex[k] = earlier.figureIndex[k] ?? 0;
-    this.unsensed[k] = earlier.unsensedBitlines[k] ?? 0;
-    this.undriven[k] = earlier.undrivenWordlines[k] ?? 0;
+  /**
+   * Records mat k as mat k of `earlier`, a table over the same blocks built with `earlierFigures`, or with
+   * other figures (computed for other design-wide values) and the same position, lines and strips.
+   */
+  copy(k: number, earlier: MatTable, figures?: MatFigures): void {
+    if (figures) {
+      this.set(
+        k,
+        earlier.position[k] ?? 0,
+        figures,
+        earlier.unsensedBitlines[k] ?? 0,
+        earlier.undrivenWordlines[k] ?? 0,
+      );
+    } else {
+      this.position[k] = earlier.position[k] ?? 0;
+      this.figureIndex[k] = earlier.figureIndex[k] ?? 0;
+      this.unsensed[k] = earlier.unsensedBitlines[k] ?? 0;
+      this.undriven[k] = earlier.undrivenWordlines[k] ?? 0;
+    }
     const a = earlier.servingOffsets[3 * k] ?? 0;
     const b = earlier.servingOffsets[3 * k + 1] ?? 0;
     const c = earlier.servingOffsets[3 * k + 2] ?? 0;

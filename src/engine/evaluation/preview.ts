@@ -16,11 +16,11 @@ import type { Design } from '../../model/design';
 import { collectFindings } from './checks';
 import { layoutState, layoutStateAfterEdit, type LayoutState } from './layoutFindings';
 import { matIndexByPosition } from './decoderReach';
-import { designContext, evaluate, evaluateMatAt, evaluationNeighbours } from './evaluate';
+import { designContext, evaluate, evaluateMatAt, evaluationNeighbours, refigured } from './evaluate';
 import { findPositionedOverlaps, overlapAreaAt, type PositionedOverlap } from './overlaps';
 import { rememberReportState, reportState } from './reportState';
 import type { MatFigures, Report } from './report';
-import { MatTableBuilder, shareIdIndex } from './matTable';
+import { figuresAt, MatTableBuilder, shareIdIndex } from './matTable';
 import { computeTotals } from './totals';
 
 /**
@@ -128,7 +128,8 @@ function previewNeighbours(
  * static index without the changing blocks, plus their new places); every other mat keeps its report.
  * Totals and findings are then recomputed from the mat reports in one linear pass. When the change
  * alters the number of sense amplifiers or cells (a resize), every margin moves with k and every
- * retention with the weakest cell, so the whole design is evaluated instead.
+ * retention with the weakest cell: every other mat's figures are then computed again from its kind and
+ * connections (once per distinct figures), without finding its neighbours again.
  */
 export function previewReport(
   base: PreviewBase,
@@ -158,10 +159,10 @@ export function previewReport(
       cellCount += sign * (table.kinds[kind] as MatKind).geometry.bits;
     }
   }
-  // k of the offset budget follows the sense-amplifier count, the weakest cell the cell count.
-  if (senseAmpCount !== report.totals.senseAmpCount || cellCount !== report.totals.bits) {
-    return evaluate({ ...design, blocks: current.blocks.slice() });
-  }
+  // k of the offset budget follows the sense-amplifier count, the weakest cell the cell count: when they
+  // change, every mat's figures are computed again from its kind and connections, which stay as they were
+  // for the mats away from the change.
+  const countsChanged = senseAmpCount !== report.totals.senseAmpCount || cellCount !== report.totals.bits;
 
   const composite: SpatialIndex = {
     near(rect, margin) {
@@ -182,19 +183,40 @@ export function previewReport(
   }
   const ctx = designContext(design, senseAmpCount, cellCount);
   const neighbours = previewNeighbours(current, composite, affected);
-  // Every other mat keeps its row of the report's table; the figures list is extended, never reordered.
-  const builder = new MatTableBuilder(current.blocks, report.mats.count, report.mats.figures);
+  // Every other mat keeps its row of the report's table; the figures list is extended, never reordered
+  // (or started again when every mat's figures change).
+  const builder = countsChanged
+    ? new MatTableBuilder(current.blocks, report.mats.count)
+    : new MatTableBuilder(current.blocks, report.mats.count, report.mats.figures);
+  // Figures computed with this gesture's design-wide values, per kind of mat and connection key.
+  const cache = countsChanged ? new Map<MatKind, Map<number | string, MatFigures>>() : base.figures;
   const redone = new Set<number>();
   for (const i of affected) {
     const k = base.matIndexAt[i] ?? -1;
     if (k < 0) continue;
     const kind = current.kinds[current.kindOf[i] as number] as MatKind;
-    let figures = base.figures.get(kind);
-    if (!figures) base.figures.set(kind, (figures = new Map()));
+    let figures = cache.get(kind);
+    if (!figures) cache.set(kind, (figures = new Map()));
     evaluateMatAt(current, i, neighbours, ctx, builder, k, figures);
     redone.add(k);
   }
-  for (let k = 0; k < report.mats.count; k++) if (!redone.has(k)) builder.copy(k, report.mats);
+  if (countsChanged) {
+    const again = new Map<MatFigures, MatFigures>();
+    for (let k = 0; k < report.mats.count; k++) {
+      if (redone.has(k)) continue;
+      const before = figuresAt(report.mats, k);
+      let after = again.get(before);
+      if (!after) {
+        after = refigured(before, ctx);
+        // Figures from elsewhere (none are, today): evaluate the design whole.
+        if (!after) return evaluate({ ...design, blocks: current.blocks.slice() });
+        again.set(before, after);
+      }
+      builder.copy(k, report.mats, after);
+    }
+  } else {
+    for (let k = 0; k < report.mats.count; k++) if (!redone.has(k)) builder.copy(k, report.mats);
+  }
   const mats = builder.finish();
   // Same mats under the same ids in the same order: the id lookup carries over.
   shareIdIndex(report.mats, mats);
@@ -232,10 +254,10 @@ export function previewReport(
     (i) => composite.near(rectAt(current, i), 2 * ABUTMENT_TOLERANCE),
   );
   const findings = [
-    ...collectFindings(mats, overlaps, report.storedHigh, design, current.blocks),
+    ...collectFindings(mats, overlaps, ctx.storedHigh, design, current.blocks),
     ...layout.findings,
   ];
-  const result: Report = { mats, totals, storedHigh: report.storedHigh, findings };
+  const result: Report = { mats, totals, storedHigh: ctx.storedHigh, findings };
   rememberReportState(result, { table: current, overlaps, matIndexAt: base.matIndexAt, layout });
   return result;
 }
