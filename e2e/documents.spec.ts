@@ -225,3 +225,43 @@ test('a design with a formula-like name opens safely and its CSV keeps the name 
   expect(csv).toMatch(/^'@SUM\(1\+1\),mat-r0c0,/m);
   expect(csv).not.toMatch(/(^|,)@SUM/m);
 });
+
+test('Recent forgets a stored design (never the open one), and Undo puts it back', async ({ page }) => {
+  const app = new DocumentsPage(page);
+  const demo = loadDemoDesign();
+  await app.openAt('/');
+  await app.clickBlock(demo, 'mat-r0c1');
+  await app.setCellsPerWordline('384');
+  await app.waitUntilKept();
+  await app.openAt('/?generate=8x8');
+  await page.keyboard.press('Control+a');
+  await page.keyboard.press('ArrowRight');
+  await app.waitUntilKept();
+  const storedDesigns = async () => (await app.storedKeys()).filter((k) => k.startsWith('design:')).sort();
+  const both = await storedDesigns();
+  expect(both).toHaveLength(2);
+
+  await page.getByTestId('recent-menu').click();
+  await expect(page.getByTestId('recent-entry')).toHaveCount(2);
+  // The open design has no Forget button; the edited demo has one.
+  const forget = page.getByTestId('recent-forget');
+  await expect(forget).toHaveCount(1);
+  await page.getByTestId('recent-list').screenshot({ path: 'test-results/recent-forget.png' });
+  await forget.click();
+  await expect(page.getByTestId('notice')).toContainText(`Forgot “${demo.name}”`);
+  await expect(page.getByTestId('recent-entry')).toHaveCount(1);
+  expect(await storedDesigns()).toHaveLength(1);
+
+  await page.getByTestId('notice-action').click();
+  await expect(page.getByTestId('notice')).toContainText('kept again');
+  expect(await storedDesigns()).toEqual(both);
+  // The open list shows it again; reopening it gives the edited design.
+  await expect(page.getByTestId('recent-entry')).toHaveCount(2);
+  await page.getByTestId('recent-entry').filter({ hasText: demo.name }).click();
+  await expect(page.getByTestId('design-name')).toHaveText(demo.name);
+  const texts = await Promise.all(both.map((k) => app.storedText(k)));
+  const edited = texts.map((t) => restoreDesign(t ?? '')).find((r) => r.ok && r.design.name === demo.name);
+  expect(edited?.ok && edited.design.blocks.find((b) => b.id === 'mat-r0c1')).toMatchObject({
+    cellsPerWordline: 384,
+  });
+});

@@ -11,13 +11,24 @@ function savedWhen(ms: number): string {
   return new Date(ms).toLocaleString(undefined, { dateStyle: 'short', timeStyle: 'short' });
 }
 
-/** New, Open, Save, the recent designs and a share link. */
+/** New, Open, Save, the recent designs (each can be reopened or forgotten) and a share link. */
 export function DocumentMenu() {
   const fileInput = useRef<HTMLInputElement>(null);
   const [recent, setRecent] = useState<DocumentAbout[] | null>(null);
   const documentId = useAppStore((s) => s.documentId);
   const [link, setLink] = useState<string | null>(null);
   useEffect(() => registerFileInput(() => fileInput.current?.click()), []);
+  // An open list follows what the notices report (a design forgotten, or put back by Undo).
+  const notice = useAppStore((s) => s.notice);
+  const listOpen = recent !== null;
+  useEffect(() => {
+    if (!listOpen) return;
+    let current = true;
+    void documentSession.recent().then((list) => current && setRecent(list));
+    return () => {
+      current = false;
+    };
+  }, [notice, listOpen]);
 
   const toggleRecent = async () => {
     if (recent) setRecent(null);
@@ -67,6 +78,7 @@ export function DocumentMenu() {
               <li key={entry.id}>
                 <button
                   type="button"
+                  className="recent-open"
                   data-testid="recent-entry"
                   data-document-id={entry.id}
                   disabled={entry.id === documentId}
@@ -82,6 +94,22 @@ export function DocumentMenu() {
                     {entry.id === documentId ? ' · open' : ''}
                   </span>
                 </button>
+                {entry.id !== documentId && (
+                  <button
+                    type="button"
+                    className="recent-forget"
+                    data-testid="recent-forget"
+                    data-document-id={entry.id}
+                    title={`Forget “${entry.name}”: remove it from this browser's storage (Undo is offered)`}
+                    aria-label={`Forget ${entry.name}`}
+                    onClick={async () => {
+                      await documentSession.forget(entry.id);
+                      setRecent(await documentSession.recent());
+                    }}
+                  >
+                    Forget
+                  </button>
+                )}
               </li>
             ))}
           </ul>

@@ -1,6 +1,9 @@
 import {
+  forgetDocument,
   listDocuments,
   loadDocument,
+  rememberDocument,
+  type ForgottenDocument,
   newDocumentId,
   saveDocument,
   type DocumentAbout,
@@ -9,6 +12,7 @@ import {
 import { restoreDesignWhenLoaded } from '../io/checksOnDemand';
 import { restoreShared, sharedPayload } from '../io/shareLink';
 import type { Design } from '../model/design';
+import { clipForMessage } from '../model/messageText';
 import { demoDesign } from '../designs/demoDesign';
 import type { AppStore } from '../store/appStore';
 import { browserArea, claimDocument } from './browserArea';
@@ -122,6 +126,57 @@ export class DocumentSession {
       // Only the reload shortcut is lost.
     }
     return true;
+  }
+
+  /**
+   * Forgets a stored document (the recent list's Forget): never the open one, and not one another tab
+   * has open. The notice offers Undo, which puts it back exactly as it was while the notice is shown.
+   */
+  async forget(id: string): Promise<void> {
+    const { setNotice } = this.store.getState();
+    if (!this.area) return;
+    if (id === this.store.getState().documentId) {
+      setNotice({ kind: 'error', text: 'The open design cannot be forgotten; open another one first.' });
+      return;
+    }
+    const release = await claimDocument(id, 0);
+    if (!release) {
+      setNotice({ kind: 'error', text: 'That design is open in another tab; close it there first.' });
+      return;
+    }
+    let forgotten: ForgottenDocument | null;
+    try {
+      forgotten = await forgetDocument(this.area, id);
+    } catch (error) {
+      setNotice({
+        kind: 'error',
+        text: `The design could not be forgotten (${clipForMessage(String(error), 80)}); it stays stored.`,
+      });
+      return;
+    } finally {
+      release();
+    }
+    if (!forgotten) return;
+    const name = clipForMessage(forgotten.about?.name ?? 'design');
+    const area = this.area;
+    setNotice({
+      kind: 'info',
+      text: `Forgot “${name}” from this browser's storage.`,
+      action: {
+        label: 'Undo',
+        title: `Keep “${name}” in this browser after all`,
+        run: () => {
+          void rememberDocument(area, forgotten)
+            .then(() => setNotice({ kind: 'info', text: `“${name}” is kept again (Recent).` }))
+            .catch((error: unknown) =>
+              setNotice({
+                kind: 'error',
+                text: `“${name}” could not be put back (${clipForMessage(String(error), 80)}).`,
+              }),
+            );
+        },
+      },
+    });
   }
 
   /** Writes a pending change at once (page hide). */

@@ -9,7 +9,8 @@ import { restoreDesignWhenLoaded } from './checksOnDemand';
  *   `design:<id>`  the design file's text (a string or a Blob of text pieces)
  *   `about:<id>`   what the list of recent designs shows ({@link DocumentAbout})
  *   `unreadable:<id>:<time>`  a stored design that no longer restored, kept aside unchanged
- * Each document writes only its own keys, so two tabs never overwrite each other's work.
+ * Each document writes only its own keys, so two tabs never overwrite each other's work. A document
+ * is removed only when the person forgets it from the recent list ({@link forgetDocument}).
  */
 
 /** The part of an async key-value store the shelf needs. */
@@ -111,6 +112,35 @@ export async function loadDocument(area: KeyValueArea, id: string, now = Date.no
     kind: 'keptAside',
     message: `A stored design could not be restored (${why}). It was kept aside unchanged under "${asideKey}" in this browser's storage.`,
   };
+}
+
+/** A document taken off the shelf, held so that it can be put back (undo). */
+export interface ForgottenDocument {
+  readonly id: string;
+  /** The stored text, as it was stored (a string or a Blob). */
+  readonly text: unknown;
+  /** Its recent-list entry, when it had one. */
+  readonly about: DocumentAbout | null;
+}
+
+/**
+ * Removes a document's design and recent-list entry, returning both so that {@link rememberDocument}
+ * can put them back; null when there was no such document. Both are read before anything is removed.
+ * Kept-aside copies (`unreadable:`) are left alone.
+ */
+export async function forgetDocument(area: KeyValueArea, id: string): Promise<ForgottenDocument | null> {
+  const text = await area.get(designKey(id));
+  const about = await area.get(aboutKey(id));
+  if (text === undefined && about === undefined) return null;
+  await area.del(aboutKey(id));
+  await area.del(designKey(id));
+  return { id, text, about: isAbout(about) ? about : null };
+}
+
+/** Puts a forgotten document back, design first, exactly as it was stored. */
+export async function rememberDocument(area: KeyValueArea, forgotten: ForgottenDocument): Promise<void> {
+  if (forgotten.text !== undefined) await area.set(designKey(forgotten.id), forgotten.text);
+  if (forgotten.about) await area.set(aboutKey(forgotten.id), forgotten.about);
 }
 
 /** The recent-designs list, newest first. Entries that cannot be read are skipped. */

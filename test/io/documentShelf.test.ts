@@ -3,10 +3,12 @@ import { describe, expect, it } from 'vitest';
 import { designTextPieces } from '../../src/io/designText';
 import {
   designKey,
+  forgetDocument,
   listDocuments,
   listKeptAside,
   loadDocument,
   newDocumentId,
+  rememberDocument,
   saveDocument,
   type KeyValueArea,
 } from '../../src/io/documentShelf';
@@ -135,6 +137,36 @@ describe('document shelf', () => {
   it('makes distinct ids', () => {
     const ids = new Set(Array.from({ length: 1000 }, () => newDocumentId(42)));
     expect(ids.size).toBe(1000);
+  });
+});
+
+describe('forgetting a document', () => {
+  it('removes only its design and entry, and puts both back exactly as they were', async () => {
+    const area = memoryArea();
+    const kept = { ...demoDesign(), name: 'Kept' };
+    const gone = { ...demoDesign(), name: 'Gone' };
+    await saveDocument(area, 'a', kept, textOf(kept), 1);
+    const blob = new Blob([textOf(gone)]);
+    await saveDocument(area, 'b', gone, blob, 2);
+    area.data.set('unreadable:b:5', 'old text');
+    const forgotten = await forgetDocument(area, 'b');
+    expect(forgotten?.about?.name).toBe('Gone');
+    expect((await listDocuments(area)).map((d) => d.name)).toEqual(['Kept']);
+    expect([...area.data.keys()].sort()).toEqual(['about:a', 'design:a', 'unreadable:b:5']);
+    if (!forgotten) throw new Error('forgotten');
+    await rememberDocument(area, forgotten);
+    expect((await listDocuments(area)).map((d) => d.name)).toEqual(['Gone', 'Kept']);
+    // The very Blob that was stored comes back, and it still restores.
+    expect(area.data.get(designKey('b'))).toBe(blob);
+    const load = await loadDocument(area, 'b');
+    expect(load.kind === 'restored' && load.design.name).toBe('Gone');
+  });
+
+  it('forgetting what is not there changes nothing', async () => {
+    const area = memoryArea();
+    await saveDocument(area, 'a', demoDesign(), textOf(demoDesign()), 1);
+    expect(await forgetDocument(area, 'missing')).toBeNull();
+    expect(area.data.size).toBe(2);
   });
 });
 
