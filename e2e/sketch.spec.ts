@@ -1,6 +1,7 @@
 import { expect, test, type Page } from '@playwright/test';
 import { EditorPage } from './editorPage';
 import { ExplorerPage } from './explorerPage';
+import { loadDemoDesign } from './floorplanPage';
 
 /** Folded 8F² cell at F = 18 nm: one more cell per line adds two 36 nm lines, 72 nm (arithmetic). */
 const CELL_STEP = 72e-9;
@@ -161,6 +162,32 @@ test.describe('sketching a bank by hand', () => {
     await page.screenshot({ path: test.info().outputPath('3-cell-changed.png') });
     await page.keyboard.press('Control+z');
     await expect(app.field('mat-cell')).toHaveValue('dram-folded-8f2');
+    await app.expectChecksClear();
+    expect(errors).toEqual([]);
+  });
+  test('changing the cell of one mat inside the demo grid keeps its slot: nothing else moves, no new finding, one undo', async ({
+    page,
+  }) => {
+    const errors = await noPageErrors(page);
+    const app = new EditorPage(page);
+    const demo = loadDemoDesign();
+    await app.open();
+    await app.expectChecksClear();
+    await app.clickBlock(demo, 'mat-r1c1');
+    const x = await app.field('block-x').inputValue();
+    const y = await app.field('block-y').inputValue();
+    await app.field('mat-cell').selectOption({ label: '1T1C eDRAM folded 50F²' });
+    await expect(page.getByTestId('cell-change-note')).toContainText('Mat 2.2 keeps its slot in the grid');
+    await expect(page.getByTestId('cell-change-note')).toContainText(
+      'was 512 × 512 cells/BL × cells/WL · 512 Kib',
+    );
+    await expect(app.field('block-x')).toHaveValue(x);
+    await expect(app.field('block-y')).toHaveValue(y);
+    await app.expectChecksClear();
+    await page.screenshot({ path: test.info().outputPath('4-cell-changed-in-grid.png') });
+    await page.keyboard.press('Control+z');
+    await expect(app.field('mat-cell')).toHaveValue('dram-folded-8f2');
+    await expect(page.getByTestId('cell-change-note')).toHaveCount(0);
     await app.expectChecksClear();
     expect(errors).toEqual([]);
   });

@@ -18,7 +18,7 @@ export const ROW_DECODER_CODE = BLOCK_TYPE_CODES.indexOf('rowDecoder');
  * geometry they give. Mats with the same cell, counts and bit-line axis share one kind.
  */
 export interface MatKind {
-  readonly block: Pick<Mat, 'cellsPerBitline' | 'cellsPerWordline' | 'bitlineAxis'>;
+  readonly block: Pick<Mat, 'cellsPerBitline' | 'cellsPerWordline' | 'bitlineAxis' | 'footprint'>;
   readonly cell: CellDefinition;
   readonly geometry: MatGeometry;
 }
@@ -146,7 +146,9 @@ function writeRows(table: TableInProgress, blocks: readonly Block[]): void {
       block.cellId === last.cellId &&
       block.cellsPerBitline === last.cellsPerBitline &&
       block.cellsPerWordline === last.cellsPerWordline &&
-      block.bitlineAxis === last.bitlineAxis
+      block.bitlineAxis === last.bitlineAxis &&
+      block.footprint === undefined &&
+      last.footprint === undefined
     ) {
       const kind = table.kinds[lastKind] as MatKind;
       table.x[i] = block.x;
@@ -182,7 +184,8 @@ function writeRow(table: TableInProgress, i: number, block: Block): void {
 }
 
 function matKindOf(table: TableInProgress, block: Mat): number {
-  const key = `${block.cellId}|${block.cellsPerBitline}|${block.cellsPerWordline}|${block.bitlineAxis}`;
+  const slot = block.footprint ? `|${block.footprint.width}|${block.footprint.height}` : '';
+  const key = `${block.cellId}|${block.cellsPerBitline}|${block.cellsPerWordline}|${block.bitlineAxis}${slot}`;
   const known = table.kindIndex.get(key);
   if (known !== undefined) return known;
   const cell = table.cells.get(block.cellId);

@@ -1,7 +1,8 @@
 import type { CellDefinition } from '../model/cell';
 import { cellPitches, crossingOccupancy } from '../model/cellBasics';
+import { matCellStep } from './cellPitch';
+import { ABUTMENT_TOLERANCE, type Rect } from './rect';
 import type { BitlineAxis, Mat } from '../model/block';
-import type { Rect } from './rect';
 
 /** Everything about a mat's shape that follows from its cell, its cell counts and F. Lengths in metres. */
 export interface MatGeometry {
@@ -21,8 +22,18 @@ export interface MatGeometry {
   readonly bits: number;
   /** Footprint of one cell = bit-line pitch × word-line pitch ÷ occupancy (m²). */
   readonly cellArea: number;
+  /** Outline along the canvas axes (m): the cell array's, or the mat's slot in a grid (Mat.footprint). */
   readonly width: number;
   readonly height: number;
+}
+
+/**
+ * A mat's length along one axis: its slot's when the slot holds the array with less than one cell to
+ * spare (see Mat.footprint), else the array's own.
+ */
+function slotLength(array: number, slot: number | undefined, cellStep: number): number {
+  if (slot === undefined) return array;
+  return slot >= array - ABUTMENT_TOLERANCE && slot < array + cellStep - ABUTMENT_TOLERANCE ? slot : array;
 }
 
 export function matGeometry(mat: Mat, cell: CellDefinition, featureSize: number): MatGeometry {
@@ -33,6 +44,9 @@ export function matGeometry(mat: Mat, cell: CellDefinition, featureSize: number)
   const bitlineLength = wordlineCount * wordlinePitch;
   const wordlineLength = bitlineCount * bitlinePitch;
   const vertical = mat.bitlineAxis === 'vertical';
+  const arrayWidth = vertical ? wordlineLength : bitlineLength;
+  const arrayHeight = vertical ? bitlineLength : wordlineLength;
+  const step = mat.footprint ? matCellStep(cell, featureSize, mat.bitlineAxis) : null;
   return {
     bitlinePitch,
     wordlinePitch,
@@ -42,8 +56,8 @@ export function matGeometry(mat: Mat, cell: CellDefinition, featureSize: number)
     wordlineLength,
     bits: mat.cellsPerBitline * bitlineCount,
     cellArea: (bitlinePitch * wordlinePitch) / occupancy,
-    width: vertical ? wordlineLength : bitlineLength,
-    height: vertical ? bitlineLength : wordlineLength,
+    width: step ? slotLength(arrayWidth, mat.footprint?.width, step.x) : arrayWidth,
+    height: step ? slotLength(arrayHeight, mat.footprint?.height, step.y) : arrayHeight,
   };
 }
 

@@ -34,6 +34,15 @@ export const matSchema = z.object({
    * so files written before the field existed load unchanged.
    */
   mirrored: z.boolean().optional(),
+  /**
+   * The slot the mat keeps in a grid when its cell array is a little smaller than the slot (its cell was
+   * changed while the mats beside it kept theirs): width and height along the canvas axes (m). The array
+   * sits in the slot's top-left corner and the rest, less than one cell along each axis, is an edge band
+   * with no usable cells (common practice: dummy cells, no source). A value outside [array, array + one
+   * cell) along an axis is ignored there (geometry/matGeometry.ts), so changing the counts later never
+   * leaves a stale slot behind. Absent means the array's own size.
+   */
+  footprint: z.object({ width: extent('footprint width'), height: extent('footprint height') }).optional(),
 });
 
 export const stripSchema = z.object({

@@ -123,17 +123,19 @@ export function formatScaled(value: number, prefix: string, decimals: number): s
   return (value / 10 ** exponent).toFixed(decimals);
 }
 
-/** Finest position decimals in µm: 0.1 nm, below any drawn grid. */
+/** Position decimals in µm: at least whole nanometres (every length of a floorplan is), at most 0.1 nm. */
+const MIN_POSITION_DECIMALS = 3;
 const MAX_POSITION_DECIMALS = 4;
 
 /**
- * How many decimals of a micrometre show every whole multiple of a grid step `step` (m) exactly: 3 for
- * a 36 nm pitch, 4 for 7.5 nm, 0 for 2 µm; at most 4 (0.1 nm).
+ * How many decimals of a micrometre show every whole multiple of a grid step `step` (m) exactly, and never
+ * fewer than whole nanometres (a block placed on another cell's grid keeps its nanometres): 3 for a 36 nm
+ * or a 2 µm pitch, 4 for 7.5 nm; at most 4 (0.1 nm).
  */
 export function positionDecimals(step: number): number {
   const micrometres = Math.abs(step) * 1e6;
-  if (!(micrometres > 0) || !Number.isFinite(micrometres)) return 3;
-  for (let d = 0; d < MAX_POSITION_DECIMALS; d++) {
+  if (!(micrometres > 0) || !Number.isFinite(micrometres)) return MIN_POSITION_DECIMALS;
+  for (let d = MIN_POSITION_DECIMALS; d < MAX_POSITION_DECIMALS; d++) {
     const scaled = micrometres * 10 ** d;
     if (Math.abs(scaled - Math.round(scaled)) < 1e-6 * Math.max(1, scaled)) return d;
   }

@@ -1,12 +1,13 @@
 import { setBlockProperties, type BlockPropertiesPatch } from '../commands/setBlockProperties';
 import { useState } from 'react';
 import { pitchFor } from '../canvas/gestures/gesture';
-import { setMatCell } from '../commands/setMatCell';
+import { cellChangeNotes, setMatCell } from '../commands/setMatCell';
 import { setMatCellCounts } from '../commands/setMatCellCounts';
 import { ANCHOR_CORNERS, type AnchorCorner } from '../geometry/stretchMap';
 import { matGeometry } from '../geometry/matGeometry';
 import { blockRect } from '../geometry/placedBlocks';
 import { BITLINE_AXES, BLOCK_TYPE_LABEL, isMat, type Block, type Mat, type Strip } from '../model/block';
+import type { Design } from '../model/design';
 import { formatMatSizeAndBits } from '../model/matSize';
 import { formatQuantity } from '../model/units';
 import { useEditorStore } from '../store/editorStore';
@@ -22,6 +23,9 @@ const ANCHOR_LABEL: Record<AnchorCorner, string> = {
   bottomLeft: 'bottom-left',
   bottomRight: 'bottom-right',
 };
+
+/** Sentences of a cell change shown at most; a whole bank says the rest in one line. */
+const NOTES_SHOWN = 3;
 
 /** The one value all blocks share, or null when they differ. */
 function shared<B, V>(blocks: readonly B[], pick: (b: B) => V): V | null {
@@ -59,6 +63,8 @@ export function PropertiesPanel() {
   // How a cell change resizes the mats: session choices, not part of the document.
   const [anchor, setAnchor] = useState<AnchorCorner>('topLeft');
   const [keepCounts, setKeepCounts] = useState(false);
+  // What the last cell change did, shown while the document is the one it made (undo hides it).
+  const [cellNote, setCellNote] = useState<{ design: Design; lines: readonly string[] } | null>(null);
   const counts = (args: { cellsPerBitline?: number; cellsPerWordline?: number }) =>
     run(setMatCellCounts, { matIds: mats.map((m) => m.id), ...args });
 
@@ -162,10 +168,23 @@ export function PropertiesPanel() {
             value={shared(mats, (m) => m.cellId)}
             noValueLabel="mixed"
             options={design.cells.map((c) => ({ value: c.id, label: c.name }))}
-            onChange={(cellId) =>
-              run(setMatCell, { matIds: mats.map((m) => m.id), cellId, keepCounts, anchor })
-            }
+            onChange={(cellId) => {
+              const matIds = mats.map((m) => m.id);
+              if (run(setMatCell, { matIds, cellId, keepCounts, anchor }) !== null) return;
+              const after = useAppStore.getState().history.present;
+              setCellNote({ design: after, lines: cellChangeNotes(design, after, matIds) });
+            }}
           />
+          {cellNote && cellNote.design === design && cellNote.lines.length > 0 && (
+            <div className="hint" role="status" data-testid="cell-change-note">
+              {cellNote.lines.slice(0, NOTES_SHOWN).map((line) => (
+                <p key={line}>{line}</p>
+              ))}
+              {cellNote.lines.length > NOTES_SHOWN && (
+                <p>…and {cellNote.lines.length - NOTES_SHOWN} more mats alike.</p>
+              )}
+            </div>
+          )}
           <SelectField
             id="cell-change-anchor"
             label="On a cell change, keep"

@@ -1,10 +1,13 @@
 import { describe, expect, it } from 'vitest';
-import { setMatCell } from '../../src/commands/setMatCell';
+import { cellChangeNotes, setMatCell } from '../../src/commands/setMatCell';
+import { matCellStep } from '../../src/geometry/cellPitch';
+import { restoreDesign } from '../../src/io/restore';
+import { formatMatSizeAndBits } from '../../src/model/matSize';
 import { evaluate } from '../../src/engine';
 import { matGeometry } from '../../src/geometry/matGeometry';
 import { blockRect } from '../../src/geometry/placedBlocks';
 import type { Block, Mat } from '../../src/model/block';
-import { EDRAM_CELL, FOLDED_8F2_CELL, OPEN_6F2_CELL } from '../../src/model/builtins';
+import { EDRAM_CELL, FOLDED_8F2_CELL, GAIN_3T_CELL, OPEN_6F2_CELL } from '../../src/model/builtins';
 import { demoDesign } from '../../src/designs/demoDesign';
 import type { Design } from '../../src/model/design';
 import { blockById, expectRefused, runUndoRedo } from '../support/commandSteps';
@@ -115,6 +118,95 @@ describe('command: change a mat’s cell', () => {
     ];
     expect(kinds(after.design).filter((k) => geometryKinds.includes(k))).toEqual([]);
     expect(evaluate(after.design).totals.bits).toBe(evaluate(design).totals.bits);
+  });
+
+  describe('one mat inside a grid (mats that keep their cell beside it on several sides)', () => {
+    const geometryKinds = [
+      'overlap',
+      'unsensedBitlines',
+      'undrivenWordlines',
+      'noRowDecoder',
+      'noColumnDecoder',
+    ];
+    const rects = (d: Design) => new Map(d.blocks.map((b) => [b.id, blockRect(d, b)]));
+
+    it.each([
+      ['mat-r1c1', EDRAM_CELL.id],
+      ['mat-r0c0', GAIN_3T_CELL.id],
+      ['mat-r2c3', OPEN_6F2_CELL.id],
+    ])(
+      '%s → %s keeps its slot, fills it with whole cells, and nothing else moves; run, undo, redo',
+      (id, cellId) => {
+        const design = demoDesign();
+        const before = rects(design);
+        const findingsBefore = kinds(design).filter((k) => geometryKinds.includes(k));
+        runUndoRedo(design, setMatCell, { matIds: [id], cellId }, (d) => {
+          const m = matOf(d, id);
+          expect(m.cellId).toBe(cellId);
+          const after = rects(d);
+          for (const [blockId, r] of before) {
+            const a = after.get(blockId);
+            expect(a?.x, blockId).toBeCloseTo(r.x, 12);
+            expect(a?.y, blockId).toBeCloseTo(r.y, 12);
+            expect(a?.width, blockId).toBeCloseTo(r.width, 12);
+            expect(a?.height, blockId).toBeCloseTo(r.height, 12);
+          }
+          // The cell array fits in the slot with less than one cell to spare along each axis.
+          const cell = d.cells.find((c) => c.id === cellId);
+          if (!cell) throw new Error('no cell');
+          const array = matGeometry({ ...m, footprint: undefined }, cell, d.process.featureSize);
+          const slot = before.get(id);
+          const step = matCellStep(cell, d.process.featureSize, m.bitlineAxis);
+          expect(array.width).toBeLessThanOrEqual((slot?.width ?? 0) + 1e-12);
+          expect(array.width).toBeGreaterThan((slot?.width ?? 0) - step.x);
+          expect(array.height).toBeLessThanOrEqual((slot?.height ?? 0) + 1e-12);
+          expect(array.height).toBeGreaterThan((slot?.height ?? 0) - step.y);
+          // No overlap, no unserved edge, no decoder lost.
+          expect(kinds(d).filter((k) => geometryKinds.includes(k))).toEqual(findingsBefore);
+          // It still restores from its file.
+          const restored = restoreDesign(JSON.parse(JSON.stringify(d)));
+          expect(restored.ok).toBe(true);
+          if (restored.ok)
+            expect(blockRect(restored.design, matOf(restored.design, id))).toEqual(blockRect(d, m));
+        });
+      },
+    );
+
+    it('says what happened: the slot kept and the capacity it now has', () => {
+      const design = demoDesign();
+      const after = setMatCell.run(design, { matIds: ['mat-r1c1'], cellId: EDRAM_CELL.id });
+      if (!after.ok) throw new Error(after.error);
+      const [note] = cellChangeNotes(design, after.design, ['mat-r1c1']);
+      expect(note).toMatch(/^Mat 2\.2 keeps its slot in the grid/);
+      expect(note).toContain(`was ${formatMatSizeAndBits(512, 512, bitsOf(design, 'mat-r1c1'))}`);
+      // Changing the whole bank instead keeps every mat's capacity, and says so.
+      const ids = design.blocks.filter((b) => b.type === 'mat').map((b) => b.id);
+      const whole = setMatCell.run(design, { matIds: ids, cellId: EDRAM_CELL.id });
+      if (!whole.ok) throw new Error(whole.error);
+      expect(cellChangeNotes(design, whole.design, ids)[0]).toMatch(/keeps its .* cells/);
+    });
+
+    it('refuses to keep the counts of a mat its column pins, saying why', () => {
+      expectRefused(
+        demoDesign(),
+        setMatCell,
+        { matIds: ['mat-r1c1'], cellId: EDRAM_CELL.id, keepCounts: true },
+        /column with mats that keep their cell/,
+      );
+    });
+
+    it('a changed mat changed again fills its slot anew, and back to its first cell it has no band', () => {
+      const design = demoDesign();
+      const once = setMatCell.run(design, { matIds: ['mat-r1c1'], cellId: EDRAM_CELL.id });
+      if (!once.ok) throw new Error(once.error);
+      const back = setMatCell.run(once.design, { matIds: ['mat-r1c1'], cellId: FOLDED_8F2_CELL.id });
+      if (!back.ok) throw new Error(back.error);
+      expect(matOf(back.design, 'mat-r1c1')).toMatchObject({ cellsPerBitline: 512, cellsPerWordline: 512 });
+      expect(blockRect(back.design, matOf(back.design, 'mat-r1c1'))).toEqual(
+        blockRect(design, matOf(design, 'mat-r1c1')),
+      );
+      expect(bitsOf(back.design, 'mat-r1c1')).toBe(bitsOf(design, 'mat-r1c1'));
+    });
   });
 
   it('refuses an unknown cell and a selection without mats', () => {

@@ -130,12 +130,13 @@ describe('formatQuantity: SI in, engineering notation out', () => {
 });
 
 describe('positions at the grid’s precision', () => {
-  it('takes as many decimals of a micrometre as the grid step needs (arithmetic)', () => {
+  it('takes as many decimals of a micrometre as the grid step needs, never fewer than whole nm (arithmetic)', () => {
     expect(positionDecimals(36e-9)).toBe(3);
     expect(positionDecimals(54e-9)).toBe(3);
-    expect(positionDecimals(0.1e-6)).toBe(1);
-    expect(positionDecimals(2e-6)).toBe(0);
+    expect(positionDecimals(0.1e-6)).toBe(3);
+    expect(positionDecimals(2e-6)).toBe(3);
     expect(positionDecimals(7.5e-9)).toBe(4);
+    expect(positionDecimals(0.5e-9)).toBe(4);
     // A step finer than 0.1 nm (or none) still stops at 0.1 nm, or nm when there is no step.
     expect(positionDecimals(1e-12)).toBe(4);
     expect(positionDecimals(0)).toBe(3);
