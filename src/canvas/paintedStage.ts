@@ -1,6 +1,8 @@
-import Konva from 'konva/lib/Core';
-import type { Layer } from 'konva/lib/Layer';
+// Konva's stage, layer and shape modules alone, not its core bundle: tweens, animations, groups and the
+// fast layer are never used here and would only add to the first load.
+import { Layer } from 'konva/lib/Layer';
 import { Shape } from 'konva/lib/Shape';
+import { Stage } from 'konva/lib/Stage';
 import type { CanvasLayers } from './canvasView';
 
 type Paint = (ctx: CanvasRenderingContext2D) => void;
@@ -22,7 +24,7 @@ export interface PaintedStage {
 
 /** One layer holding one shape that paints itself; nothing in it takes pointer events. */
 function paintedLayer(paint: Paint): Layer {
-  const layer = new Konva.Layer({ listening: false, imageSmoothingEnabled: false });
+  const layer = new Layer({ listening: false, imageSmoothingEnabled: false });
   layer.add(
     new Shape({
       sceneFunc: (context) => paint(context._context),
@@ -44,7 +46,7 @@ export function mountPaintedStage(
   background: string,
   paint: LayerPainters,
 ): PaintedStage {
-  const stage = new Konva.Stage({ container, width, height, listening: false });
+  const stage = new Stage({ container, width, height, listening: false });
   stage.content.style.background = background;
   const layers: CanvasLayers = {
     grid: paintedLayer(paint.grid),
