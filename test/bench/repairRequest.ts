@@ -6,7 +6,7 @@
  * 2e-4 defect rows and columns, 2e-3 weak cells and 1e-3 failing sense amplifiers; 0.05 killing periphery
  * defects per die; α = 2.
  */
-import type { RepairLayout, RepairTile } from '../../src/engine/physics/repairLayout';
+import { repairTiles, type RepairLayout, type RepairTile } from '../../src/engine/physics/repairLayout';
 import type { RepairMonteCarloRequest } from '../../src/engine/physics/repairMonteCarlo';
 
 export const BENCH_MATS = 4096;
@@ -39,7 +39,7 @@ function benchLayout(): RepairLayout {
   return {
     rowDomainRows: new Array<number>(SIDE * SIDE).fill(ROWS),
     columnDomainColumns: new Array<number>((SIDE + 1) * SIDE).fill(COLUMNS / 2),
-    tiles,
+    tiles: repairTiles(tiles),
   };
 }
 

@@ -39,15 +39,15 @@ describe('column-repair domains are the sense-amplifier strip segments', () => {
     const layout = y.monteCarlo?.layout;
     if (!layout) throw new Error('no layout');
     // Every mat meets two strips; each strip has half a mat's columns.
-    expect(layout.tiles).toHaveLength(12);
+    expect(layout.tiles.count).toBe(12);
     const report = evaluate(design);
     const mat = report.mats.figures[0];
     if (!mat) throw new Error('no mat');
     const matColumns = mat.architecture === 'folded' ? mat.bitlineCount / 2 : mat.bitlineCount;
     for (const columns of layout.columnDomainColumns) expect(columns).toBe(matColumns / 2);
     const matsPerStrip = new Map<number, number>();
-    for (const t of layout.tiles)
-      matsPerStrip.set(t.columnDomain, (matsPerStrip.get(t.columnDomain) ?? 0) + 1);
+    for (const strip of layout.tiles.columnDomain)
+      matsPerStrip.set(strip, (matsPerStrip.get(strip) ?? 0) + 1);
     expect([...matsPerStrip.values()].sort()).toEqual([1, 1, 1, 1, 2, 2, 2, 2]);
   });
 

@@ -1,6 +1,12 @@
 import type { RepairSettings } from '../../model/repair';
 import type { FaultCounts } from '../physics/faultRates';
-import { domainFaults, type DomainFaults, type RepairLayout, type RepairTile } from '../physics/repairLayout';
+import {
+  domainFaults,
+  RepairTilesBuilder,
+  type DomainFaults,
+  type RepairLayout,
+  type RepairTiles,
+} from '../physics/repairLayout';
 import type { MatTable } from './matTable';
 
 /**
@@ -68,25 +74,6 @@ function classesOf(
 const tileKey = (t: Omit<TileShare, 'count'> & { count?: number }) =>
   `${t.defectCells},${t.parametricCells},${t.defectColumns},${t.parametricColumns},${t.columnSpares}`;
 
-/** A row domain's tiles grouped into identical kinds, in a stable order. */
-function tileMix(tiles: readonly { tile: RepairTile; share: number }[]): TileShare[] {
-  const kinds = new Map<string, { count: number } & Omit<TileShare, 'count'>>();
-  for (const { tile, share } of tiles) {
-    const kind = {
-      defectCells: tile.defects.cells,
-      parametricCells: tile.parametric.cells,
-      defectColumns: tile.defects.columns,
-      parametricColumns: tile.parametric.columns,
-      columnSpares: share,
-    };
-    const key = tileKey(kind);
-    const found = kinds.get(key);
-    if (found) found.count++;
-    else kinds.set(key, { count: 1, ...kind });
-  }
-  return [...kinds.entries()].sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0)).map(([, k]) => k);
-}
-
 /** Spare columns of a strip divided among its k tiles in order: ⌊C/k⌋ each, one more for the first C mod k. */
 export function splitShare(spareColumns: number, tiles: number, index: number): number {
   if (tiles <= 0) return 0;
@@ -104,12 +91,6 @@ export interface MatShare {
 
 /** Positions closer than this share a mat-row band (m). */
 const BAND_GRID = 1e-9;
-
-const scaled = (f: FaultCounts, s: number): FaultCounts => ({
-  cells: f.cells * s,
-  rows: f.rows * s,
-  columns: f.columns * s,
-});
 
 /** A column domain while it is gathered: columns and area on each side of its strip, and the strip. */
 interface StripSides {
@@ -132,23 +113,38 @@ export function reportRepairPlan(
   settings: RepairSettings,
   shareOf: (k: number) => MatShare,
 ): RepairPlan {
-  const rowIndex = new Map<string, number>();
+  const rowIndex = new Map<number, number>();
   const rowDomainRows: number[] = [];
   const rowArea: number[] = [];
   const strips = new Map<number, StripSides>();
-  /** Per tile: its column domain and its side of the strip (for the split plan's shares). */
-  const tileSide: number[] = [];
   const lonely: { index: number; columns: number; area: number }[] = [];
   let columnDomains = 0;
-  const tiles: RepairTile[] = [];
+  let tileCount = 0;
+  for (let k = 0; k < mats.count; k++) {
+    tileCount += Math.max(1, (mats.servingOffsets[3 * k + 1] ?? 0) - (mats.servingOffsets[3 * k] ?? 0));
+  }
+  const tiles = new RepairTilesBuilder(tileCount);
+  /** Per tile: its side of the strip, and its kind (mat share, strips of its mat) for the split plan. */
+  const tileSide = new Uint8Array(tileCount);
+  const tileShare = new Int32Array(tileCount);
+  const tileStrips = new Int32Array(tileCount);
+  const shareIds = new Map<MatShare, number>();
+  const shareList: MatShare[] = [];
   for (let k = 0; k < mats.count; k++) {
     const share = shareOf(k);
+    let shareId = shareIds.get(share);
+    if (shareId === undefined) {
+      shareId = shareList.length;
+      shareIds.set(share, shareId);
+      shareList.push(share);
+    }
     const block = mats.blocks[mats.position[k] ?? -1];
     const vertical = block?.type === 'mat' && block.bitlineAxis === 'vertical';
-    let key: string;
-    if (settings.repairDomain === 'bank') key = 'bank';
-    else if (settings.repairDomain === 'mat' || !block) key = `mat${k}`;
-    else key = `${vertical ? 'v' : 'h'}${Math.round((vertical ? block.y : block.x) / BAND_GRID)}`;
+    // Numeric keys: the bank, mat k, or a band (its start in BAND_GRID steps, with the bit-line axis).
+    let key: number;
+    if (settings.repairDomain === 'bank') key = 0;
+    else if (settings.repairDomain === 'mat' || !block) key = k;
+    else key = 2 * Math.round((vertical ? block.y : block.x) / BAND_GRID) + (vertical ? 1 : 0);
     let rowDomain = rowIndex.get(key);
     if (rowDomain === undefined) {
       rowDomain = rowDomainRows.length;
@@ -163,20 +159,21 @@ export function reportRepairPlan(
     const from = mats.servingOffsets[3 * k] ?? 0;
     const to = mats.servingOffsets[3 * k + 1] ?? 0;
     const stripCount = to - from;
-    const tile = (columnDomain: number, columnOffset: number, columns: number, part: number): RepairTile => ({
-      rowDomain,
-      rowOffset,
-      rows: share.rows,
-      columnDomain,
-      columnOffset,
-      columns,
-      defects: scaled(share.defects, part),
-      parametric: scaled(share.parametric, part),
-    });
+    const push = (columnDomain: number, columnOffset: number, columns: number, side: number) => {
+      const part = stripCount === 0 ? 1 : 1 / stripCount;
+      const i = tiles.push(
+        { rowDomain, rowOffset, rows: share.rows, columnDomain, columnOffset, columns },
+        share.defects,
+        share.parametric,
+        part,
+      );
+      tileSide[i] = side;
+      tileShare[i] = shareId;
+      tileStrips[i] = stripCount;
+    };
     if (stripCount === 0) {
       lonely.push({ index: columnDomains, columns: share.columns, area: share.area });
-      tileSide.push(0);
-      tiles.push(tile(columnDomains++, 0, share.columns, 1));
+      push(columnDomains++, 0, share.columns, 0);
       continue;
     }
     const columns = share.columns / stripCount;
@@ -195,8 +192,7 @@ export function reportRepairPlan(
         const middle = vertical ? strip.y + strip.height / 2 : strip.x + strip.width / 2;
         if ((vertical ? block.y : block.x) > middle) side = 1;
       }
-      tileSide.push(side);
-      tiles.push(tile(sides.index, sides.columns[side], columns, 1 / stripCount));
+      push(sides.index, sides.columns[side], columns, side);
       sides.columns[side] += columns;
       sides.cellArea[side] += share.area / stripCount;
     }
@@ -216,31 +212,70 @@ export function reportRepairPlan(
     columnDomainColumns[m.index] = m.columns;
     spareColumnArea[m.index] = m.columns > 0 ? m.area / m.columns : 0;
   }
-  const layout: RepairLayout = { rowDomainRows, columnDomainColumns, tiles };
+  const layout: RepairLayout = { rowDomainRows, columnDomainColumns, tiles: tiles.finish() };
   const faults = domainFaults(layout);
-  // The split plan: each strip's spare columns divided among its tiles, the side before the strip first.
-  const tilesOfStrip: number[][] = Array.from({ length: columnDomains }, () => []);
-  tiles.forEach((t, i) => tilesOfStrip[t.columnDomain]?.push(i));
-  const columnShareOf = new Array<number>(tiles.length).fill(0);
-  for (const list of tilesOfStrip) {
-    const ordered = [...list].sort((a, b) => (tileSide[a] as number) - (tileSide[b] as number) || a - b);
-    ordered.forEach((t, index) => {
-      columnShareOf[t] = splitShare(settings.spareColumns, ordered.length, index);
-    });
+  const columnShare = splitPlanShares(layout.tiles, tileSide, settings.spareColumns);
+  // Each row domain's tiles as kinds: (mat share, strips of its mat, spare columns set aside) → count.
+  // A kind as one number: (share id · 1024 + strips of the mat) · 1024 + spare columns set aside (≤ 256).
+  const kindsOfRowDomain: Map<number, number>[] = rowDomainRows.map(() => new Map());
+  for (let i = 0; i < tileCount; i++) {
+    const kinds = kindsOfRowDomain[layout.tiles.rowDomain[i] as number];
+    const kind =
+      ((tileShare[i] as number) * 1024 + Math.min(1023, tileStrips[i] as number)) * 1024 +
+      (columnShare[i] as number);
+    kinds?.set(kind, (kinds.get(kind) ?? 0) + 1);
   }
-  const tilesOfRowDomain: { tile: RepairTile; share: number }[][] = rowDomainRows.map(() => []);
-  tiles.forEach((t, i) =>
-    tilesOfRowDomain[t.rowDomain]?.push({ tile: t, share: columnShareOf[i] as number }),
+  const mixes = kindsOfRowDomain.map((kinds) =>
+    [...kinds.entries()]
+      .sort(([a], [b]) => a - b)
+      .map(([kind, count]): TileShare => {
+        const columnSpares = kind % 1024;
+        const stripCount = Math.floor(kind / 1024) % 1024;
+        const shareId = Math.floor(kind / (1024 * 1024));
+        const share = shareList[shareId] as MatShare;
+        const part = stripCount === 0 ? 1 : 1 / stripCount;
+        return {
+          count,
+          defectCells: share.defects.cells * part,
+          parametricCells: share.parametric.cells * part,
+          defectColumns: share.defects.columns * part,
+          parametricColumns: share.parametric.columns * part,
+          columnSpares,
+        };
+      }),
   );
   const spareRowArea = rowArea.map((a, d) => {
     const rows = rowDomainRows[d] as number;
     return rows > 0 ? a / rows : 0;
   });
   return {
-    rowClasses: classesOf(faults.rows, spareRowArea, tilesOfRowDomain.map(tileMix)),
+    rowClasses: classesOf(faults.rows, spareRowArea, mixes),
     columnClasses: classesOf(faults.columns, spareColumnArea),
     layout,
   };
+}
+
+/**
+ * The split plan's shares: each strip's C spare columns divided among its tiles, the side before the strip
+ * first, then in tile order (splitShare). Sorted once by (strip, side, tile) as numeric keys.
+ */
+function splitPlanShares(tiles: RepairTiles, side: Uint8Array, spareColumns: number): Int32Array {
+  const n = tiles.count;
+  const keys = new Float64Array(n);
+  for (let i = 0; i < n; i++) keys[i] = ((tiles.columnDomain[i] as number) * 2 + (side[i] as number)) * n + i;
+  keys.sort();
+  const shares = new Int32Array(n);
+  let start = 0;
+  while (start < n) {
+    const strip = Math.floor(Math.floor((keys[start] as number) / n) / 2);
+    let end = start + 1;
+    while (end < n && Math.floor(Math.floor((keys[end] as number) / n) / 2) === strip) end++;
+    for (let k = start; k < end; k++) {
+      shares[(keys[k] as number) % n] = splitShare(spareColumns, end - start, k - start);
+    }
+    start = end;
+  }
+  return shares;
 }
 
 /** A grid of identical mats as gridFloorplan lays it out: its shape and strips. */

@@ -26,12 +26,105 @@ export interface RepairTile {
   readonly parametric: FaultCounts;
 }
 
+/**
+ * The tiles of a layout, column-wise (typed arrays: a 65,536-mat floorplan has 131,072 tiles, which a
+ * worker message then copies in milliseconds instead of cloning as many objects). Tile i's expected faults
+ * are faults[6i … 6i + 5]: defect cells, rows, columns, then parametric cells, rows, columns.
+ */
+export interface RepairTiles {
+  readonly count: number;
+  readonly rowDomain: Int32Array;
+  readonly rowOffset: Float64Array;
+  readonly rows: Float64Array;
+  readonly columnDomain: Int32Array;
+  readonly columnOffset: Float64Array;
+  readonly columns: Float64Array;
+  readonly faults: Float64Array;
+}
+
 export interface RepairLayout {
   /** Word lines of each row-repair domain (a spare row replaces any one of them). */
   readonly rowDomainRows: readonly number[];
   /** Columns of each column-repair domain (a spare column replaces any one of them). */
   readonly columnDomainColumns: readonly number[];
-  readonly tiles: readonly RepairTile[];
+  readonly tiles: RepairTiles;
+}
+
+/** Offsets of the fault kinds within a tile's six entries of RepairTiles.faults. */
+export const TILE_DEFECT = 0;
+export const TILE_PARAMETRIC = 3;
+
+/** Fills RepairTiles tile by tile. */
+export class RepairTilesBuilder {
+  private readonly tiles: RepairTiles;
+  private used = 0;
+  constructor(capacity: number) {
+    this.tiles = {
+      count: capacity,
+      rowDomain: new Int32Array(capacity),
+      rowOffset: new Float64Array(capacity),
+      rows: new Float64Array(capacity),
+      columnDomain: new Int32Array(capacity),
+      columnOffset: new Float64Array(capacity),
+      columns: new Float64Array(capacity),
+      faults: new Float64Array(6 * capacity),
+    };
+  }
+  /** Appends a tile whose faults are `part` of the given counts; returns its index. */
+  push(
+    tile: Omit<RepairTile, 'defects' | 'parametric'>,
+    defects: FaultCounts,
+    parametric: FaultCounts,
+    part = 1,
+  ): number {
+    const i = this.used++;
+    const t = this.tiles;
+    t.rowDomain[i] = tile.rowDomain;
+    t.rowOffset[i] = tile.rowOffset;
+    t.rows[i] = tile.rows;
+    t.columnDomain[i] = tile.columnDomain;
+    t.columnOffset[i] = tile.columnOffset;
+    t.columns[i] = tile.columns;
+    const f = t.faults;
+    f[6 * i] = defects.cells * part;
+    f[6 * i + 1] = defects.rows * part;
+    f[6 * i + 2] = defects.columns * part;
+    f[6 * i + 3] = parametric.cells * part;
+    f[6 * i + 4] = parametric.rows * part;
+    f[6 * i + 5] = parametric.columns * part;
+    return i;
+  }
+  finish(): RepairTiles {
+    if (this.used !== this.tiles.count)
+      throw new Error(`${this.used} of ${this.tiles.count} repair tiles filled`);
+    return this.tiles;
+  }
+}
+
+/** Tiles from a list (tests, small layouts). */
+export function repairTiles(list: readonly RepairTile[]): RepairTiles {
+  const builder = new RepairTilesBuilder(list.length);
+  for (const t of list) builder.push(t, t.defects, t.parametric);
+  return builder.finish();
+}
+
+/** Tile i as one object (tests, explanations). */
+export function tileAt(tiles: RepairTiles, i: number): RepairTile {
+  const f = tiles.faults;
+  return {
+    rowDomain: tiles.rowDomain[i] as number,
+    rowOffset: tiles.rowOffset[i] as number,
+    rows: tiles.rows[i] as number,
+    columnDomain: tiles.columnDomain[i] as number,
+    columnOffset: tiles.columnOffset[i] as number,
+    columns: tiles.columns[i] as number,
+    defects: { cells: f[6 * i] as number, rows: f[6 * i + 1] as number, columns: f[6 * i + 2] as number },
+    parametric: {
+      cells: f[6 * i + 3] as number,
+      rows: f[6 * i + 4] as number,
+      columns: f[6 * i + 5] as number,
+    },
+  };
 }
 
 /**
@@ -50,18 +143,22 @@ export interface DomainFaults {
 export function domainFaults(layout: RepairLayout): { rows: DomainFaults[]; columns: DomainFaults[] } {
   const rows = layout.rowDomainRows.map((lines) => emptyDomain(lines));
   const columns = layout.columnDomainColumns.map((lines) => emptyDomain(lines));
-  for (const t of layout.tiles) {
-    const r = rows[t.rowDomain];
-    const c = columns[t.columnDomain];
+  const t = layout.tiles;
+  const f = t.faults;
+  for (let i = 0; i < t.count; i++) {
+    const r = rows[t.rowDomain[i] as number];
+    const c = columns[t.columnDomain[i] as number];
     if (!r || !c) throw new Error('a repair tile names a domain the layout does not have');
-    r.defectLines += t.defects.rows;
-    r.parametricLines += t.parametric.rows;
-    r.defectCells += t.defects.cells;
-    r.parametricCells += t.parametric.cells;
-    c.defectLines += t.defects.columns;
-    c.parametricLines += t.parametric.columns;
-    c.defectCells += t.defects.cells;
-    c.parametricCells += t.parametric.cells;
+    const cells = f[6 * i] as number;
+    const parametricCells = f[6 * i + 3] as number;
+    r.defectLines += f[6 * i + 1] as number;
+    r.parametricLines += f[6 * i + 4] as number;
+    r.defectCells += cells;
+    r.parametricCells += parametricCells;
+    c.defectLines += f[6 * i + 2] as number;
+    c.parametricLines += f[6 * i + 5] as number;
+    c.defectCells += cells;
+    c.parametricCells += parametricCells;
   }
   return { rows, columns };
 }
@@ -81,22 +178,17 @@ export function sharedDomainLayout(
   defects: FaultCounts,
   parametric: FaultCounts,
 ): RepairLayout {
-  const tiles: RepairTile[] = [];
+  const tiles = new RepairTilesBuilder(count);
   for (let i = 0; i < count; i++) {
-    tiles.push({
-      rowDomain: i,
-      rowOffset: 0,
-      rows,
-      columnDomain: i,
-      columnOffset: 0,
-      columns,
+    tiles.push(
+      { rowDomain: i, rowOffset: 0, rows, columnDomain: i, columnOffset: 0, columns },
       defects,
       parametric,
-    });
+    );
   }
   return {
     rowDomainRows: new Array<number>(count).fill(rows),
     columnDomainColumns: new Array<number>(count).fill(columns),
-    tiles,
+    tiles: tiles.finish(),
   };
 }

@@ -17,7 +17,6 @@
 import { xoroshiro128plus } from 'pure-rand/generator/xoroshiro128plus';
 import type { RandomGenerator } from 'pure-rand/types/RandomGenerator';
 import { wilsonInterval, type ProportionInterval } from './binomialInterval';
-import type { FaultCounts } from './faultRates';
 import {
   coverCells,
   coverCrossedDomains,
@@ -26,7 +25,7 @@ import {
   SEARCH_NODE_BUDGET,
   UNDECIDED,
 } from './repairCover';
-import type { RepairLayout } from './repairLayout';
+import { TILE_DEFECT, TILE_PARAMETRIC, type RepairLayout } from './repairLayout';
 
 export interface RepairMonteCarloRequest {
   /** One floorplan copy's row domains, column domains and tiles. */
@@ -113,29 +112,23 @@ interface CategoryTable {
   readonly total: number;
 }
 
-function categoryTable(
-  request: RepairMonteCarloRequest,
-  faultsOf: (tile: RepairLayout['tiles'][number]) => FaultCounts,
-  fatal: number,
-): CategoryTable {
+/** The categories of one source: `source` is TILE_DEFECT or TILE_PARAMETRIC (offset in a tile's faults). */
+function categoryTable(request: RepairMonteCarloRequest, source: number, fatal: number): CategoryTable {
   const weights: number[] = [];
   const tiles: number[] = [];
   const kinds: number[] = [];
-  request.layout.tiles.forEach((t, index) => {
-    const f = faultsOf(t);
-    const entries: [number, number][] = [
-      [FAULT_CELL, f.cells],
-      [FAULT_ROW, f.rows],
-      [FAULT_COLUMN, f.columns],
-    ];
-    for (const [kind, perTile] of entries) {
+  const t = request.layout.tiles;
+  for (let index = 0; index < t.count; index++) {
+    // The tile's cells, rows and columns, in the order of FAULT_CELL, FAULT_ROW, FAULT_COLUMN.
+    for (let kind = FAULT_CELL; kind <= FAULT_COLUMN; kind++) {
+      const perTile = t.faults[6 * index + source + kind] as number;
       if (perTile > 0 && request.copies > 0) {
         weights.push(perTile * request.copies);
         tiles.push(index);
         kinds.push(kind);
       }
     }
-  });
+  }
   if (fatal > 0) {
     weights.push(fatal);
     tiles.push(-1);
@@ -208,8 +201,8 @@ export class RepairSimulation {
     if (Math.max(rowKeys, columnKeys) > Number.MAX_SAFE_INTEGER) {
       throw new Error('too many lines on the die for the Monte-Carlo line keys');
     }
-    this.defects = categoryTable(request, (t) => t.defects, request.fatalDefects);
-    this.parametric = categoryTable(request, (t) => t.parametric, 0);
+    this.defects = categoryTable(request, TILE_DEFECT, request.fatalDefects);
+    this.parametric = categoryTable(request, TILE_PARAMETRIC, 0);
     this.defectCount = new CountSampler(countProbabilities(this.defects.total, request.clustering));
     this.parametricCount = new CountSampler(countProbabilities(this.parametric.total, Infinity));
   }
@@ -250,19 +243,25 @@ export class RepairSimulation {
       const category = firstAbove(table.cumulative, this.uniform());
       const kind = table.kind[category] as number;
       if (kind === FAULT_FATAL) return false;
-      const tile = layout.tiles[table.tile[category] as number] as RepairLayout['tiles'][number];
+      const tile = table.tile[category] as number;
+      const tiles = layout.tiles;
       const copy = Math.floor(this.uniform() * copies);
       b.kind[i] = kind;
       if (kind !== FAULT_COLUMN) {
-        const rowDomain = copy * rowDomainsPerCopy + tile.rowDomain;
+        const rowDomain = copy * rowDomainsPerCopy + (tiles.rowDomain[tile] as number);
         b.rowDomain[i] = rowDomain;
-        b.rowKey[i] = rowDomain * this.rowStride + tile.rowOffset + Math.floor(this.uniform() * tile.rows);
+        b.rowKey[i] =
+          rowDomain * this.rowStride +
+          (tiles.rowOffset[tile] as number) +
+          Math.floor(this.uniform() * (tiles.rows[tile] as number));
       }
       if (kind !== FAULT_ROW) {
-        const columnDomain = copy * columnDomainsPerCopy + tile.columnDomain;
+        const columnDomain = copy * columnDomainsPerCopy + (tiles.columnDomain[tile] as number);
         b.columnDomain[i] = columnDomain;
         b.columnKey[i] =
-          columnDomain * this.columnStride + tile.columnOffset + Math.floor(this.uniform() * tile.columns);
+          columnDomain * this.columnStride +
+          (tiles.columnOffset[tile] as number) +
+          Math.floor(this.uniform() * (tiles.columns[tile] as number));
       }
     }
     return true;

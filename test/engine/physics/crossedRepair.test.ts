@@ -14,7 +14,7 @@ import {
   type TileShareClass,
 } from '../../../src/engine/physics/redundancy';
 import { estimateRepairProbability } from '../../../src/engine/physics/repairMonteCarlo';
-import type { RepairLayout, RepairTile } from '../../../src/engine/physics/repairLayout';
+import { repairTiles, type RepairLayout, type RepairTile } from '../../../src/engine/physics/repairLayout';
 
 // Spare rows per row domain and spare columns per strip segment, crossing: checks of the exact cover
 // against brute force, of the closed form against the Monte Carlo (arithmetic: both implement the same
@@ -135,7 +135,7 @@ function stackLayout(
   return {
     rowDomainRows: new Array<number>(mats).fill(rows),
     columnDomainColumns: new Array<number>(mats + 1).fill(columns / 2),
-    tiles,
+    tiles: repairTiles(tiles),
   };
 }
 
