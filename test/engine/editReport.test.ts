@@ -6,6 +6,7 @@ import type { Block } from '../../src/model/block';
 import { DEMO_PROCESS, FOLDED_8F2_CELL } from '../../src/model/builtins';
 import type { Design } from '../../src/model/design';
 import { blocksEditedInPlace } from '../../src/model/designEdit';
+import { reportState } from '../../src/engine/evaluation/reportState';
 import { designWith } from '../support/designs';
 import { expectSameReport } from '../support/sameReport';
 
@@ -99,5 +100,25 @@ describe('an edit of a few blocks is evaluated incrementally and equals evaluate
     expect(blocksEditedInPlace(design, { ...design, process: { ...design.process } }, 64)).toBeNull();
     const all = { ...design, blocks: design.blocks.map((b) => ({ ...b, x: b.x + 1e-6 })) };
     expect(blocksEditedInPlace(design, all, 3)).toBeNull();
+  });
+});
+
+describe('edits that change the cell count, one after another', () => {
+  it('compute every mat again from its kind and connections, never falling back to a whole evaluation', () => {
+    let design = grid(4);
+    let report: Report = evaluate(design);
+    const mat = design.blocks.find((b) => b.type === 'mat');
+    if (!mat) throw new Error('grid has no mat');
+    for (const cells of [256, 128, 512, 256]) {
+      const next = edited(design, mat.id, (b) => (b.type === 'mat' ? { ...b, cellsPerBitline: cells } : b));
+      const changed = blocksEditedInPlace(design, next, 64) ?? [];
+      placedDesign(design);
+      const before = reportState(report)?.matIndexAt;
+      report = editReport(design, report, next, changed);
+      // A whole evaluation would have laid the mats out again; the incremental path keeps their index.
+      expect(reportState(report)?.matIndexAt).toBe(before);
+      expectSameReport(report, evaluate(next));
+      design = next;
+    }
   });
 });

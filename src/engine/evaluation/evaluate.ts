@@ -60,7 +60,11 @@ const recipes = new WeakMap<MatFigures, FiguresRecipe>();
  */
 export function refigured(figures: MatFigures, ctx: DesignContext): MatFigures | undefined {
   const recipe = recipes.get(figures);
-  return recipe ? matPhysics(recipe.kind, recipe.connections, ctx) : undefined;
+  if (!recipe) return undefined;
+  const again = matPhysics(recipe.kind, recipe.connections, ctx);
+  // The next count-changing edit starts from these.
+  recipes.set(again, recipe);
+  return again;
 }
 
 /**
