@@ -163,6 +163,7 @@ export function partitionFigures(
       rowActiveTime: mat.timing.ras,
       rowPrechargeTime: mat.timing.rp,
       retentionTime: mat.retentionTime,
+      weakestRetentionTime: mat.weakestRetentionTime,
       refreshCycleTime: cycle,
       refreshInterval: interval,
       refreshBusyFraction: refreshBusyFraction(cycle, interval),

@@ -39,6 +39,7 @@ const NUMERIC: readonly FigureKey[] = [
   'rowActiveTime',
   'rowPrechargeTime',
   'retentionTime',
+  'weakestRetentionTime',
   'refreshCycleTime',
   'refreshInterval',
   'refreshBusyFraction',

@@ -44,6 +44,8 @@ export interface PartitionFigures {
   readonly rowPrechargeTime: number;
   /** Shortest retention (s). */
   readonly retentionTime: number;
+  /** Shortest weakest-cell retention of the die (s): what the retention check compares with tREFW. */
+  readonly weakestRetentionTime: number;
   /** tRFC (s), tREFI (s) and tRFC / tREFI. */
   readonly refreshCycleTime: number;
   readonly refreshInterval: number;

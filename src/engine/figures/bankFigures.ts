@@ -188,6 +188,23 @@ export const BANK_FIGURE_CATALOGUE = [
       source: SOURCES.arrhenius,
     }),
   }),
+  bankFigure({
+    key: 'weakestRetentionTime',
+    label: 'Shortest retention, weakest cell in the die',
+    quantity: 'time',
+    better: 'higher',
+    offeredIn: EVERY_VIEW,
+    exportKey: null,
+    explain: (_f, ctx) => ({
+      symbol: 't_ret,weak',
+      formula: 't_ret,weak = Cs·ΔV_allowed / I_weak,  I_weak of the weakest tail cell among the die’s cells',
+      inputs: [input('tREFW', 'refresh window (must be shorter)', ctx.refreshWindow, 'time')],
+      method:
+        'Shortest over the mats; the retention check compares it with the refresh window (two-population retention).',
+      source:
+        'T. Hamamoto, S. Sugiura, S. Sawada, IEEE Trans. Electron Devices 45(6), 1998 (from memory); G. Blom, 1958 (from memory)',
+    }),
+  }),
   countedFigure('refreshCycleTime', 'Refresh cycle tRFC', 'time', 'lower', []),
   countedFigure('refreshInterval', 'Refresh interval tREFI', 'time', 'higher', []),
   bankFigure({

@@ -64,6 +64,7 @@ export function figuresFromReport(report: Report, design: Design): PartitionFigu
     rowActiveTime: slowestRc?.timing.ras ?? Number.NaN,
     rowPrechargeTime: slowestRc?.timing.rp ?? Number.NaN,
     retentionTime: t.shortestRetention,
+    weakestRetentionTime: t.shortestWeakestRetention,
     refreshCycleTime: t.refresh.cycleTime,
     refreshInterval: t.refresh.interval,
     refreshBusyFraction: t.refresh.busyFraction,

@@ -72,7 +72,7 @@ export function bankMissingReason(key: FigureKey, f: PartitionFigures): string {
   if (YIELD_KEYS.has(key)) return MISSING_REASONS.noYield;
   if (f.usableBits <= 0)
     return key.startsWith('areaPerBit') ? MISSING_REASONS.noBitForArea : MISSING_REASONS.noUsableBit;
-  if (key === 'retentionTime')
+  if (key === 'retentionTime' || key === 'weakestRetentionTime')
     return f.refreshCycleTime === 0 && f.refreshPower === 0
       ? MISSING_REASONS.staticCell
       : MISSING_REASONS.noMarginToLose;
