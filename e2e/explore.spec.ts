@@ -28,6 +28,10 @@ test('run a sweep, click a point, and the new variant has the point’s figures'
   await expect(page.getByTestId('sweep-limit')).toContainText(
     'At most 100,000 points a sweep: the page keeps',
   );
+  // The reasons sit folded under their summary so that the chart stays in view.
+  await expect(page.getByTestId('sweep-why')).toBeHidden();
+  await page.getByTestId('sweep-why-summary').click();
+  await expect(page.getByTestId('sweep-why')).toBeVisible();
   await expect(page.getByTestId('sweep-why')).toContainText(
     '1T1C vertical 4F²: every point fails the sense-amplifier pitch check.',
   );

@@ -166,7 +166,9 @@ export function ScatterChart(props: ScatterChartProps) {
                 }}
                 onPointerLeave={() => onHover(null)}
                 onClick={(e) => {
-                  const i = nearest(e);
+                  // The point whose card is showing is the one the click builds, even when the card's
+                  // appearance has nudged the layout since the pointer last moved.
+                  const i = hovered ?? nearest(e);
                   if (i !== null) onPick(i);
                 }}
                 style={{ cursor: hovered !== null ? 'pointer' : 'crosshair' }}

@@ -16,6 +16,14 @@ export interface FeasibilityLimits {
   readonly maxDelay: number;
 }
 
+/**
+ * The word-line limit the chart starts with (s), on the 50 % delay of the slowest sub-word line. Buried-gate
+ * sub-word lines of commodity DRAM take about 1–3 ns to their far end, so 3 ns keeps the dense cells' usual
+ * partitions and greys out the very long word lines (common practice, no source). The user changes it in the
+ * chart controls.
+ */
+export const DEFAULT_MAX_WORDLINE_DELAY = 3e-9;
+
 /** The chart limits a point can miss, in words (the limits live in the explorer's chart controls). */
 export const LIMIT_LABELS = {
   minMargin: 'margin below the minimum',

@@ -1,5 +1,6 @@
 import { create } from 'zustand';
 import type { FigureKey } from '../engine';
+import { DEFAULT_MAX_WORDLINE_DELAY } from '../explore/chartData';
 import type { SweepPoint, SweepRequest } from '../explore/sweep';
 import type { SweepCommand, SweepReport } from '../explore/sweepProtocol';
 import type { SweepSettings } from '../explore/sweepSettings';
@@ -116,7 +117,7 @@ export function createExploreStore(
       settings: null,
       xAxis: 'areaPerBit',
       yAxis: 'senseMargin',
-      constraints: { minMargin: null, maxDelay: 1e-9 },
+      constraints: { minMargin: null, maxDelay: DEFAULT_MAX_WORDLINE_DELAY },
       run: IDLE,
       lastBuilt: null,
 

@@ -199,11 +199,18 @@ export function ExplorerView() {
           {sweepAnnouncement(run, model.counts.feasible, model.front.length, whyInfeasible)}
         </div>
         {whyInfeasible.length > 0 && (
-          <ul className="sweep-why" data-testid="sweep-why" aria-label="Families with no feasible point">
-            {whyInfeasible.map((sentence) => (
-              <li key={sentence}>{sentence}</li>
-            ))}
-          </ul>
+          <details className="sweep-why-box">
+            <summary data-testid="sweep-why-summary">
+              {whyInfeasible.length === 1
+                ? 'Why one family has no feasible point'
+                : `Why ${whyInfeasible.length} families have no feasible point`}
+            </summary>
+            <ul className="sweep-why" data-testid="sweep-why" aria-label="Families with no feasible point">
+              {whyInfeasible.map((sentence) => (
+                <li key={sentence}>{sentence}</li>
+              ))}
+            </ul>
+          </details>
         )}
         {run.points.length === 0 ? (
           <div className="chart-empty">
