@@ -1,4 +1,4 @@
-import type { Design } from '../model/design';
+import type { Design, VariantDesign, VariantShelf } from '../model/design';
 
 /** Largest design text we will read (bytes of UTF-16 text ≈ characters); a whole die fits easily. */
 export const MAX_DESIGN_TEXT_LENGTH = 64 * 1024 * 1024;
@@ -8,33 +8,84 @@ export const BLOCKS_PER_PIECE = 2000;
 
 /**
  * The design file's text in pieces whose concatenation is exactly `JSON.stringify(design)`: the header
- * and shelf first and last, the block list a few thousand blocks at a time. The saver pulls pieces in
- * idle time, so that writing a whole die (30 MB of text, about 150 ms in one call) never holds up an
- * edit; the pieces become one Blob without being joined into one string.
+ * fields whole, every block list a few thousand blocks at a time — the active design's and each
+ * inactive variant's on the shelf alike. The saver pulls pieces in idle time, so that writing a whole die
+ * (30 MB of text, about 150 ms in one call) or a shelf of big variants never holds up an edit; the
+ * pieces become one Blob without being joined into one string.
  */
-export function* designTextPieces(design: Design, blocksPerPiece = BLOCKS_PER_PIECE): Generator<string> {
-  // A marker no design can contain: a fresh random token in place of the block list.
-  const marker = `blocks-${Math.random().toString(36).slice(2)}-${Date.now().toString(36)}`;
-  const head = JSON.stringify({ ...design, blocks: marker });
-  const at = head.indexOf(`"${marker}"`);
-  yield head.slice(0, at);
+export function* designTextPieces(
+  design: Design | VariantDesign,
+  blocksPerPiece = BLOCKS_PER_PIECE,
+): Generator<string> {
+  yield* spliced(design, {
+    blocks: () => blockListPieces(design.blocks, blocksPerPiece),
+    variants: () => shelfPieces((design as Design).variants as VariantShelf, blocksPerPiece),
+  });
+}
+
+/** A block list as `[…]`, a few thousand blocks per piece. */
+function* blockListPieces(blocks: Design['blocks'], blocksPerPiece: number): Generator<string> {
   yield '[';
-  const { blocks } = design;
   for (let start = 0; start < blocks.length; start += blocksPerPiece) {
     const list = JSON.stringify(blocks.slice(start, start + blocksPerPiece));
     yield (start === 0 ? '' : ',') + list.slice(1, -1);
   }
   yield ']';
-  yield head.slice(at + marker.length + 2);
+}
+
+/** The variant shelf, each stored design in pieces of its own. */
+function* shelfPieces(shelf: VariantShelf, blocksPerPiece: number): Generator<string> {
+  yield* spliced(shelf, {
+    entries: function* () {
+      yield '[';
+      for (const [i, entry] of shelf.entries.entries()) {
+        if (i > 0) yield ',';
+        const stored = entry.design;
+        yield* spliced(entry, {
+          design: () => (stored === null ? ['null'] : designTextPieces(stored, blocksPerPiece)),
+        });
+      }
+      yield ']';
+    },
+  });
+}
+
+/**
+ * `JSON.stringify(value)` in pieces: the fields named in `parts` are written by their own piece makers,
+ * in the place (and key order) JSON.stringify gives them; a field that is undefined is left out, as
+ * JSON.stringify leaves it out. The other fields are written whole.
+ */
+function* spliced(value: object, parts: Record<string, () => Iterable<string>>): Generator<string> {
+  // A marker no design can contain: a fresh random token in place of each field written in pieces.
+  const marker = `piece-${Math.random().toString(36).slice(2)}-${Date.now().toString(36)}`;
+  const replaced: Record<string, unknown> = { ...value };
+  const fields = Object.entries(parts)
+    .filter(([key]) => replaced[key] !== undefined)
+    .map(([key, make]) => ({ key, make, token: `"${marker}-${key}"` }));
+  for (const { key } of fields) replaced[key] = `${marker}-${key}`;
+  const text = JSON.stringify(replaced);
+  // Each field where JSON.stringify wrote it, in that order.
+  const placed = fields.map((f) => ({ ...f, at: text.indexOf(f.token) })).sort((a, b) => a.at - b.at);
+  let from = 0;
+  for (const { at, token, make } of placed) {
+    yield text.slice(from, at);
+    yield* make();
+    from = at + token.length;
+  }
+  yield text.slice(from);
 }
 
 /**
  * About how many characters designTextPieces() writes, from the first pieceful of blocks scaled to all
- * blocks (the header and variant shelf not counted): a cheap look before a long export.
+ * blocks, the inactive variants' included (the headers not counted): a cheap look before a long export.
  */
 export function designTextLengthEstimate(design: Design, sample = BLOCKS_PER_PIECE): number {
-  const { blocks } = design;
-  if (blocks.length === 0) return 0;
-  const n = Math.min(blocks.length, sample);
-  return Math.round((JSON.stringify(blocks.slice(0, n)).length / n) * blocks.length);
+  const lists = [design.blocks, ...(design.variants?.entries ?? []).map((e) => e.design?.blocks ?? [])];
+  let total = 0;
+  for (const blocks of lists) {
+    if (blocks.length === 0) continue;
+    const n = Math.min(blocks.length, sample);
+    total += Math.round((JSON.stringify(blocks.slice(0, n)).length / n) * blocks.length);
+  }
+  return total;
 }

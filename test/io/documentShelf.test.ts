@@ -12,7 +12,10 @@ import {
   saveDocument,
   type KeyValueArea,
 } from '../../src/io/documentShelf';
-import { demoDesign } from '../../src/designs/demoDesign';
+import { demoDesign, generatedDemoGrid } from '../../src/designs/demoDesign';
+import type { Design } from '../../src/model/design';
+import { variantContent } from '../../src/model/variants';
+import { restoreDesign } from '../../src/io/restore';
 import { designFromQuery } from '../../src/app/startupDesign';
 
 // Source: common practice (no source): stored work is never dropped, and a message says only what is true.
@@ -179,6 +182,32 @@ describe('design text in pieces', () => {
     }
     const empty = { ...design, blocks: [] };
     expect(Array.from(designTextPieces(empty)).join('')).toBe(JSON.stringify(empty));
+  });
+
+  it('slices every inactive variant’s block list as well, and still joins to exactly JSON.stringify', () => {
+    const big = variantContent(generatedDemoGrid(40, 40));
+    const design: Design = {
+      ...demoDesign(),
+      variants: {
+        activeId: 'v2',
+        entries: [
+          { id: 'v1', design: variantContent({ ...demoDesign(), name: 'Small' }) },
+          { id: 'v2', design: null },
+          { id: 'v3', design: big },
+          { id: 'v4', design: { ...variantContent(demoDesign()), name: 'Empty', blocks: [] } },
+        ],
+      },
+    };
+    const whole = JSON.stringify(design);
+    expect(restoreDesign(whole).ok).toBe(true);
+    for (const size of [1, 7, 500, 100_000]) {
+      expect(Array.from(designTextPieces(design, size)).join('')).toBe(whole);
+    }
+    // No piece holds the big variant whole: its 4,800 blocks come a few hundred at a time.
+    const pieces = Array.from(designTextPieces(design, 500));
+    const largest = Math.max(...pieces.map((p) => p.length));
+    expect(largest).toBeLessThan(JSON.stringify(big.blocks.slice(0, 600)).length);
+    expect(big.blocks.length).toBeGreaterThan(4000);
   });
 });
 
