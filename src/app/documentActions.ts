@@ -1,4 +1,3 @@
-import { shareFragment } from '../io/shareLink';
 import { useEditorStore } from '../store/editorStore';
 import { useAppStore } from '../store/useAppStore';
 import { pickDesignFile } from './designFiles';
@@ -34,6 +33,8 @@ export function startNewDocument(): void {
  */
 export async function makeShareLink(): Promise<string | null> {
   const { history, setNotice } = useAppStore.getState();
+  // The link writer (compression, base64) loads on the first link made.
+  const { shareFragment } = await import('../io/shareLink');
   const made = await shareFragment(history.present);
   if (!made.ok) {
     setNotice({ kind: 'error', text: `No share link: ${made.error}.` });

@@ -10,7 +10,6 @@ import {
   type KeyValueArea,
 } from '../io/documentShelf';
 import { restoreDesignWhenLoaded } from '../io/checksOnDemand';
-import { restoreShared, sharedPayload } from '../io/shareLink';
 import type { Design } from '../model/design';
 import { clipForMessage } from '../model/messageText';
 import { demoDesign } from '../designs/demoDesign';
@@ -48,9 +47,11 @@ export class DocumentSession {
   async start(location: { search: string; hash: string }): Promise<void> {
     const notices: string[] = [];
     await this.moveOldAutosave();
-    const payload = sharedPayload(location.hash);
-    if (payload !== null) {
-      const shared = await restoreShared(payload);
+    // The share-link reader loads only for an address with a fragment: most starts have none.
+    const link = location.hash.length > 1 ? await import('../io/shareLink') : null;
+    const payload = link ? link.sharedPayload(location.hash) : null;
+    if (link && payload !== null) {
+      const shared = await link.restoreShared(payload);
       if (shared.ok) {
         this.startNew(shared.design, true);
         this.store.getState().setNotice({ kind: 'info', text: 'Opened a shared design as a new document.' });
