@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { offsetSigmaMultiplier } from '../../src/engine/physics/offset';
 import { normalUpperTail } from '../../src/engine/physics/normalTail';
-import { retentionTime } from '../../src/engine/physics/retention';
+import { leakageAtTemperature, retentionTime } from '../../src/engine/physics/retention';
+import { ELECTRON_CHARGE } from '../../src/model/builtins';
 import { developedShare, restoreTime } from '../../src/engine/physics/rowTiming';
 import { chargeSharingSignal, chargeTransferRatio } from '../../src/engine/physics/sensing';
 import { storedHighLevel, thresholdWithBodyEffect } from '../../src/engine/physics/storedLevel';
@@ -159,5 +160,42 @@ describe('restore: first-order RC charging (published table)', () => {
     // -ln(0.05) ≈ 2.996 … about 3 time constants" (published; read). Our restore time with R·Cs = 1 s.
     expect(restoreTime(1, 1, 0.95)).toBeCloseTo(2.996, 3);
     expect(restoreTime(6e3, 20e-15, 0.95) / (6e3 * 20e-15)).toBeCloseTo(2.996, 3);
+  });
+});
+
+describe('retention scaling with temperature: Arrhenius acceleration (published tables)', () => {
+  // These check our Arrhenius scaling of leakage (and so of retention) against published acceleration factors
+  // of IC reliability work; they do not check a DRAM activation energy, which stays a process input.
+  const kelvin = (celsius: number) => celsius + 273.15;
+
+  it.each([
+    [150, 258],
+    [135, 128],
+    [125, 77],
+    [85, 8],
+  ])(
+    'Ea 0.7 eV: leakage at %i °C is %i times that at 55 °C, and retention that many times shorter',
+    (hot, factor) => {
+      // Source: Analog Devices, "Details of reliability calculations" (analog.com/jp/support/quality-and-
+      // reliability/reliability/wafer-fabrication-data/details-of-reliability-calculations.html, read in Japanese):
+      // Arrhenius acceleration from the test temperature to 55 °C use with Ea = 0.7 eV: 150 °C → 258,
+      // 135 °C → 128, 125 °C → 77, 85 °C → 8 (published; read). The table prints whole numbers (77 for 77.6,
+      // 258 for 259.2 with k = 8.617e-5 eV/K and 273.15 K): allow 1.5 % or 0.5.
+      const ratio = leakageAtTemperature(1, kelvin(55), 0.7 * ELECTRON_CHARGE, kelvin(hot));
+      expect(Math.abs(ratio - factor)).toBeLessThan(Math.max(0.5, 0.015 * factor));
+      // Constant-current retention of one cell at both temperatures (25 fF, 0.3 V, 1 fA at 55 °C).
+      const cool = retentionTime(25e-15, 0.3, 1e-15);
+      const warm = retentionTime(25e-15, 0.3, 1e-15 * ratio);
+      expect(cool / warm).toBeCloseTo(ratio, 9);
+    },
+  );
+
+  it('Ea 1.2 eV from 60 °C to 100 °C accelerates by 88.2957', () => {
+    // Source: the "reliability" Python library's documented example of acceleration_factor (Physics of
+    // Failure; its docs at reliability.readthedocs.io, copied in github.com/Shakeman/reliability,
+    // reliability/example.py): "acceleration_factor(T_use=60, T_acc=100, Ea=1.2) … Acceleration Factor:
+    // 88.29574588463338" (published; read). Both use k/q = 8.617333262e-5 eV/K, so the match is to 1e-9.
+    const ratio = leakageAtTemperature(1, kelvin(60), 1.2 * ELECTRON_CHARGE, kelvin(100));
+    expect(Math.abs(ratio / 88.29574588463338 - 1)).toBeLessThan(1e-9);
   });
 });
