@@ -1,7 +1,7 @@
-import { MAX_DESIGN_TEXT_LENGTH } from '../io/designText';
+import { designFilePieces, MAX_DESIGN_TEXT_LENGTH } from '../io/designText';
 import { clipForMessage } from '../model/messageText';
 import { useAppStore } from '../store/useAppStore';
-import type { Design } from '../model/design';
+import type { Notice } from '../store/appStore';
 import { downloadBlob, fileBaseName } from './download';
 import {
   chooseSaveTarget,
@@ -40,8 +40,14 @@ const handles = new Map<string, WritableFileHandle>();
 
 const current = () => useAppStore.getState().history.present;
 
-/** The design file's text: the design as JSON, indented, as people and version control read it. */
-const designFileText = (design: Design) => `${JSON.stringify(design, null, 2)}\n`;
+/** The warning for a saved file longer than Open reads (the work is saved; it is said so that it is no surprise). */
+function tooLongToOpen(characters: number): Notice | null {
+  if (characters <= MAX_DESIGN_TEXT_LENGTH) return null;
+  return {
+    kind: 'error',
+    text: `Saved, but the file is ${characters.toLocaleString('en-US')} characters, more than Open reads (${MAX_DESIGN_TEXT_LENGTH.toLocaleString('en-US')}): remove variants or blocks and save again to have a file that opens.`,
+  };
+}
 
 /**
  * Saves the open design (Ctrl+S): back to its file where the browser allows it; else into a file the
@@ -58,15 +64,22 @@ export async function saveDesignFile(): Promise<void> {
     : await chooseSaveTarget(fileName, DESIGN_FILE);
   if (target.kind === 'cancelled') return;
   const options = { fileName, kind: DESIGN_FILE, download: downloadBlob };
-  const outcome = await writePieces(target, [designFileText(design)], options);
+  const outcome = await writePieces(target, designFilePieces(design), options);
   if (outcome.kind === 'written' && target.kind === 'file') {
     handles.set(state.documentId, target.handle);
     state.markInFile(design);
-    state.setNotice({ kind: 'info', text: `Saved to ${clipForMessage(outcome.name)}.` });
+    state.setNotice(
+      tooLongToOpen(outcome.characters) ?? {
+        kind: 'info',
+        text: `Saved to ${clipForMessage(outcome.name)}.`,
+      },
+    );
     return;
   }
   if (outcome.kind === 'downloaded') {
     state.markInFile(design);
+    const warning = tooLongToOpen(outcome.characters);
+    if (warning) state.setNotice(warning);
     return;
   }
   if (outcome.kind === 'failed' && target.kind === 'file') {
@@ -74,7 +87,7 @@ export async function saveDesignFile(): Promise<void> {
     if (error instanceof DOMException && error.name === 'AbortError') return;
     // Permission refused or the file went away: offer a download instead, and say so.
     handles.delete(state.documentId);
-    const fallback = await writePieces({ kind: 'download' }, [designFileText(design)], options);
+    const fallback = await writePieces({ kind: 'download' }, designFilePieces(design), options);
     if (fallback.kind === 'downloaded') state.markInFile(design);
     state.setNotice({
       kind: 'error',

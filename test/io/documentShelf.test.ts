@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { designTextPieces } from '../../src/io/designText';
+import { designFilePieces, designTextPieces, INDENTED_FILE_BLOCKS } from '../../src/io/designText';
 import {
   designKey,
   forgetDocument,
@@ -182,6 +182,16 @@ describe('design text in pieces', () => {
     }
     const empty = { ...design, blocks: [] };
     expect(Array.from(designTextPieces(empty)).join('')).toBe(JSON.stringify(empty));
+  });
+
+  it('a small design file is indented for people; a big one is compact, both restore to the same design', () => {
+    const small = designFromQuery('?generate=5x7');
+    if (!small) throw new Error('no generated design');
+    expect(Array.from(designFilePieces(small))).toEqual([`${JSON.stringify(small, null, 2)}\n`]);
+    const big = generatedDemoGrid(130, 130);
+    expect(big.blocks.length).toBeGreaterThan(INDENTED_FILE_BLOCKS);
+    const text = Array.from(designFilePieces(big)).join('');
+    expect(text).toBe(`${JSON.stringify(big)}\n`);
   });
 
   it('slices every inactive variant’s block list as well, and still joins to exactly JSON.stringify', () => {

@@ -4,6 +4,8 @@ import { matFiguresCsvPieces } from '../../src/io/matCsv';
 import { reportTable } from '../../src/io/reportTable';
 import { summaryFileLengthEstimate, summaryFilePieces, summaryJsonPieces } from '../../src/io/summaryText';
 import { demoDesign, generatedDemoGrid } from '../../src/designs/demoDesign';
+import { designFilePieces, MAX_DESIGN_TEXT_LENGTH } from '../../src/io/designText';
+import { restoreDesign } from '../../src/io/restore';
 import { DOWNLOAD_TEXT_LIMIT, writePieces, type WritableFileHandle } from '../../src/app/saveToFile';
 import { MAX_BLOCKS, type Design } from '../../src/model/design';
 
@@ -48,6 +50,20 @@ describe('exports of a 300,000-mat design', () => {
       expect(head[2]?.length).toBeLessThan(5_000_000);
     },
   );
+});
+
+describe('the design file of the largest design', () => {
+  it('is written compact in pieces, within what Open reads, and restores', { timeout: 240_000 }, () => {
+    // Indented, the 300,000-mat die is ~81 MB: past restore's 64 MiB, so Save once wrote files Open refused.
+    const design = wholeDie();
+    const pieces = Array.from(designFilePieces(design));
+    expect(pieces.length).toBeGreaterThan(100);
+    const text = pieces.join('');
+    expect(text.length).toBeLessThan(MAX_DESIGN_TEXT_LENGTH);
+    const restored = restoreDesign(text);
+    expect(restored.ok).toBe(true);
+    expect(restored.ok && restored.design.blocks.length).toBe(MAX_BLOCKS);
+  });
 });
 
 const JSON_KIND = { description: 'JSON', mime: 'application/json', extension: '.json' };
