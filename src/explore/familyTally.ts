@@ -116,7 +116,7 @@ export function familyInfeasibleSentence(name: string, t: FamilyTally): string |
  * The sentences for every family of a sweep that has no feasible point, in cell order. With more than one
  * process, a cell that is feasible on some process but on none of the points of another gets a sentence
  * for that cell on that process, saying where it is feasible ("3T gain cell on 28 nm: every point fails
- * the retention check; feasible on 40 nm.").
+ * the retention check; feasible on 40 nm."); processes on which it fails alike share one sentence.
  */
 export function infeasibleFamilySentences(
   points: readonly SweepPoint[],
@@ -136,14 +136,19 @@ export function infeasibleFamilySentences(
     }
     const pairs = byProcess.filter((p) => p.cellIndex === t.cellIndex);
     const feasibleOn = pairs.filter((p) => p.feasible > 0).map((p) => processName(p.processIndex));
+    // Processes on which the cell fails for the same reasons share one sentence.
+    const processesByReason = new Map<string, string[]>();
     for (const pair of pairs) {
-      const sentence = familyInfeasibleSentence(
-        `${cellName(t.cellIndex)} on ${processName(pair.processIndex)}`,
-        pair,
-      );
-      if (sentence !== null)
-        sentences.push(`${sentence.slice(0, -1)}; feasible on ${listWords(feasibleOn)}.`);
+      const reason = familyInfeasibleSentence('', pair);
+      if (reason === null) continue;
+      const names = processesByReason.get(reason) ?? [];
+      names.push(processName(pair.processIndex));
+      processesByReason.set(reason, names);
     }
+    for (const [reason, names] of processesByReason)
+      sentences.push(
+        `${cellName(t.cellIndex)} on ${listWords(names)}${reason.slice(0, -1)}; feasible on ${listWords(feasibleOn)}.`,
+      );
   }
   return sentences;
 }

@@ -136,6 +136,17 @@ describe('a cell feasible on one process and not on another', () => {
       // Infeasible on every process: one sentence for the cell, as before.
       `Vertical 4F²: every point fails the ${CHECK_LABELS.senseAmpPitch} check.`,
     ]);
+    // Processes on which a cell fails alike share one sentence.
+    const three = [...points, onProcess(point(0, ['retention']), 2)];
+    expect(
+      infeasibleFamilySentences(three, ['Gain cell', 'Vertical 4F²'], limits, [
+        'A 20 nm',
+        'B 16 nm',
+        'C 12 nm',
+      ]),
+    ).toContain(
+      `Gain cell on B 16 nm and C 12 nm: every point fails the ${CHECK_LABELS.retention} check; feasible on A 20 nm.`,
+    );
     // With one process there is nothing to split.
     expect(
       infeasibleFamilySentences(points, ['Gain cell', 'Vertical 4F²'], limits, ['A 20 nm']),
