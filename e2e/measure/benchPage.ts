@@ -3,6 +3,7 @@
  * the timing probe, mouse input through the DevTools protocol, and the camera read from the canvas.
  */
 import { spawn, type ChildProcess } from 'node:child_process';
+import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { chromium, type Browser, type CDPSession, type Page } from '@playwright/test';
 import { armEditTimer, armedResult, installPaintMarks, startRecording, stopRecording } from './paintTiming';
@@ -26,8 +27,26 @@ export async function serverUp(): Promise<boolean> {
 /** Vite's own entry script, run with this Node so that stopping the child stops the server. */
 export const VITE = fileURLToPath(new URL('../../node_modules/vite/bin/vite.js', import.meta.url));
 
+/** The build to measure: BENCH_DIST, or the project's dist/. */
+const DIST = process.env.BENCH_DIST ?? fileURLToPath(new URL('../../dist', import.meta.url));
+
+/**
+ * Throws unless the server on the port serves the build to measure: a server left running on the port
+ * (a Playwright run, another bench) would otherwise be measured in its place.
+ */
+async function expectServedBuild(): Promise<void> {
+  const served = await (await fetch(base)).text();
+  const built = readFileSync(`${DIST}/index.html`, 'utf8');
+  const entry = (html: string) => /assets\/index-[\w-]+\.js/.exec(html)?.[0] ?? html;
+  if (entry(served) !== entry(built))
+    throw new Error(`port ${port} serves another build than ${DIST}: stop that server first`);
+}
+
 export async function startServer(): Promise<ChildProcess | null> {
-  if (await serverUp()) return null;
+  if (await serverUp()) {
+    await expectServedBuild();
+    return null;
+  }
   const server = spawn(
     process.execPath,
     [
