@@ -5,7 +5,7 @@ import { useImperativeHandle, useMemo, useRef, type ReactNode, type Ref } from '
 import { scatterSvgText, svgToPng } from './chartExport';
 import { axisScale, axisTicks, type AxisScale } from './chartScale';
 import { MARGIN, MARKER_SHAPES, type ScatterDatum } from './chartStyle';
-import { nearestIndex } from './nearestPoint';
+import { nearestIndex, type NearestIndex } from './nearestPoint';
 import { PointsCanvas } from './PointsCanvas';
 import { useElementSize } from './useElementSize';
 
@@ -37,6 +37,8 @@ interface ScatterChartProps {
   renderTooltip(index: number): ReactNode;
   /** Receives the chart's picture exports. */
   readonly exportRef?: Ref<ScatterExport>;
+  /** True while the data only grows at its end (a running sweep): the canvas then draws only new points. */
+  readonly growing?: boolean;
 }
 
 /** The chart as a picture file. */
@@ -55,7 +57,19 @@ const FRONT_SHAPE_PATHS = MARKER_SHAPES.map((t) => symbol(t, 90)() ?? '');
  * layer (bands, grid) and a front layer (ticks, front, hover), so a sweep of 100,000 points stays fluid.
  */
 export function ScatterChart(props: ScatterChartProps) {
-  const { data, front, x, y, bands, hovered, onHover, onPick, renderTooltip, exportRef } = props;
+  const {
+    data,
+    front,
+    x,
+    y,
+    bands,
+    hovered,
+    onHover,
+    onPick,
+    renderTooltip,
+    exportRef,
+    growing = false,
+  } = props;
   const boxRef = useRef<HTMLDivElement>(null);
   const backRef = useRef<SVGSVGElement>(null);
   const frontRef = useRef<SVGSVGElement>(null);
@@ -85,11 +99,15 @@ export function ScatterChart(props: ScatterChartProps) {
     () => data.map((d): [number, number] => [xs.scale(d.x), ys.scale(d.y)]),
     [data, xs, ys],
   );
-  const picker = useMemo(() => nearestIndex(screen, PICK_RADIUS), [screen]);
+  // The pick grid is built on the first pointer move after the points change, not on every update.
+  const picker = useRef<{ screen: readonly [number, number][]; index: NearestIndex } | null>(null);
+  const placement = `${String(xs.scale.domain())}|${String(ys.scale.domain())}|${xs.log}|${ys.log}|${plotW}x${plotH}`;
 
   const nearest = (event: React.PointerEvent | React.MouseEvent): number | null => {
     const rect = event.currentTarget.getBoundingClientRect();
-    return picker.find(event.clientX - rect.left, event.clientY - rect.top);
+    if (picker.current?.screen !== screen)
+      picker.current = { screen, index: nearestIndex(screen, PICK_RADIUS) };
+    return picker.current.index.find(event.clientX - rect.left, event.clientY - rect.top);
   };
 
   const frontPath = useMemo(() => {
@@ -124,7 +142,14 @@ export function ScatterChart(props: ScatterChartProps) {
               <Grid xs={xs} ys={ys} width={plotW} height={plotH} />
             </g>
           </svg>
-          <PointsCanvas data={data} screen={screen} width={width} height={height} />
+          <PointsCanvas
+            data={data}
+            screen={screen}
+            width={width}
+            height={height}
+            placement={placement}
+            growing={growing}
+          />
           <svg
             ref={frontRef}
             className="layer"

@@ -42,6 +42,15 @@ export function infeasibleReasons(figures: PartitionFigures, limits: Feasibility
   return reasons;
 }
 
+/** Whether a point meets every check rule and chart limit: infeasibleReasons() is empty, without building it. */
+export function isFeasible(figures: PartitionFigures, limits: FeasibilityLimits): boolean {
+  return (
+    figures.errorKinds.length === 0 &&
+    figures.senseMargin >= limits.minMargin &&
+    figures.wordlineDelay <= limits.maxDelay
+  );
+}
+
 /** Why a point is infeasible, in words; empty when it is feasible. */
 export function infeasibleBecause(figures: PartitionFigures, limits: FeasibilityLimits): string[] {
   const reasons: string[] = [];
@@ -98,7 +107,7 @@ export function chartModel(
     const x = p.figures[xAxis];
     const y = p.figures[yAxis];
     if (!Number.isFinite(x) || !Number.isFinite(y)) return;
-    const ok = infeasibleBecause(p.figures, limits).length === 0;
+    const ok = isFeasible(p.figures, limits);
     if (ok) feasible++;
     plotted.push({
       point: i,

@@ -81,11 +81,13 @@ const IDLE: SweepRun = {
 
 /**
  * Points arriving while a sweep runs are gathered and shown at most every this many ms, plus 1 ms per
- * 200 points already shown (redrawing the chart costs about that much), so a running sweep re-renders
- * the chart a few times a second rather than once per chunk and leaves the page most of its time.
+ * 50 points already shown (the chart's model and its new points cost about 10 µs a point on a loaded
+ * machine, so this keeps the chart's share of the main thread near a third), so a running sweep
+ * re-renders the chart a few times a second rather than once per chunk and leaves the page most of its
+ * time. The last points are shown at once when the sweep ends.
  */
-export const SWEEP_FLUSH_INTERVAL = 150;
-const FLUSH_MS_PER_POINT = 1 / 200;
+export const SWEEP_FLUSH_INTERVAL = 250;
+const FLUSH_MS_PER_POINT = 1 / 50;
 
 export function createExploreStore(
   workerFactory: SweepWorkerFactory = browserSweepWorker,

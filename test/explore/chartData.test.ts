@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { chartModel, infeasibleBecause } from '../../src/explore/chartData';
+import { chartModel, infeasibleBecause, infeasibleReasons, isFeasible } from '../../src/explore/chartData';
 import { AXIS_FIGURES, bankFigureEntry, explainFigure, TABLE_FIGURES } from '../../src/engine';
 import { dominates } from '../../src/explore/pareto';
 import { runSweepRange, sweepSize } from '../../src/explore/sweep';
@@ -27,6 +27,8 @@ describe('chart model', () => {
       const ok = f.errorKinds.length === 0 && f.senseMargin >= 0.02 && f.wordlineDelay <= 0.5e-9;
       expect(p.state !== 'infeasible').toBe(ok);
       expect(infeasibleBecause(f, limits).length === 0).toBe(ok);
+      expect(infeasibleReasons(f, limits).length === 0).toBe(ok);
+      expect(isFeasible(f, limits)).toBe(ok);
     }
     expect(model.counts.feasible).toBeGreaterThan(0);
     expect(model.counts.feasible).toBeLessThan(model.counts.plotted);

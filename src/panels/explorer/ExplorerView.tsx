@@ -1,4 +1,4 @@
-import { useMemo, useRef, useState } from 'react';
+import { memo, useMemo, useRef, useState } from 'react';
 import { buildPartition, shortProcessName } from '../../designs/buildPartition';
 import { downloadBlob, fileBaseName } from '../../app/download';
 import {
@@ -14,8 +14,9 @@ import { bankFigureEntry, type FigureKey } from '../../engine';
 import { pointBuildSpec, type SweepRequest } from '../../explore/sweep';
 import { sweepPointsCsv } from '../../explore/pointsCsv';
 import { infeasibleFamilySentences } from '../../explore/familyTally';
+import type { Design } from '../../model/design';
 import { formatQuantity } from '../../model/units';
-import { defaultSweepSettings } from '../../explore/sweepSettings';
+import { defaultSweepSettings, type SweepSettings } from '../../explore/sweepSettings';
 import { useAppStore } from '../../store/useAppStore';
 import { useExploreStore } from '../../store/useExploreStore';
 import { BuilderForm } from './BuilderForm';
@@ -129,12 +130,13 @@ export function ExplorerView() {
 
   return (
     <div className="explorer" data-testid="explorer">
-      <div className="explorer-controls">
-        <BankControls settings={settings} onChange={setSettings} />
-        <SweepControls design={design} settings={settings} onChange={setSettings} />
-        <ChartControls minMargin={minMargin} />
-        <BuilderForm design={design} settings={settings} onBuilt={(name) => setBuiltByForm(name)} />
-      </div>
+      <ExplorerControls
+        design={design}
+        settings={settings}
+        onChange={setSettings}
+        minMargin={minMargin}
+        onBuilt={setBuiltByForm}
+      />
       <div className="explorer-main">
         <div className="sweep-status" data-testid="sweep-status" data-status={run.status}>
           <div
@@ -239,6 +241,7 @@ export function ExplorerView() {
             onHover={setHovered}
             onPick={pick}
             exportRef={chart}
+            growing={run.status === 'running'}
             renderTooltip={() =>
               hoveredPoint && request ? (
                 <>
@@ -297,6 +300,28 @@ export function ExplorerView() {
     </div>
   );
 }
+
+/**
+ * The settings column. Memoised: a running sweep re-renders the view at every progress update, and
+ * none of these fields depends on the sweep's progress.
+ */
+const ExplorerControls = memo(function ExplorerControls(props: {
+  readonly design: Design;
+  readonly settings: SweepSettings;
+  onChange(settings: SweepSettings): void;
+  readonly minMargin: number;
+  onBuilt(name: string): void;
+}) {
+  const { design, settings, onChange, minMargin, onBuilt } = props;
+  return (
+    <div className="explorer-controls">
+      <BankControls settings={settings} onChange={onChange} />
+      <SweepControls design={design} settings={settings} onChange={onChange} />
+      <ChartControls minMargin={minMargin} />
+      <BuilderForm design={design} settings={settings} onBuilt={onBuilt} />
+    </div>
+  );
+});
 
 function SeriesLegend({ request }: { readonly request: SweepRequest }) {
   return (
