@@ -1,4 +1,4 @@
-import { designFilePieces, MAX_DESIGN_TEXT_LENGTH } from '../io/designText';
+import { designFilePieces, MAX_DESIGN_FILE_BYTES, MAX_DESIGN_TEXT_LENGTH } from '../io/designText';
 import { clipForMessage } from '../model/messageText';
 import { useAppStore } from '../store/useAppStore';
 import type { Notice } from '../store/appStore';
@@ -18,8 +18,8 @@ import {
  * (which gives that write-back) or a file input; a dropped file opens the same way.
  */
 
-/** Largest file read (bytes); restore's text limit, since UTF-8 bytes ≥ UTF-16 characters. */
-export const MAX_FILE_BYTES = MAX_DESIGN_TEXT_LENGTH;
+/** Largest file read (bytes): every text restore accepts fits (see MAX_DESIGN_FILE_BYTES). */
+export const MAX_FILE_BYTES = MAX_DESIGN_FILE_BYTES;
 
 export interface DesignFileHandle extends WritableFileHandle {
   getFile(): Promise<File>;

@@ -1,7 +1,8 @@
 import { evaluate } from '../engine';
 import { decodeDesignBytes } from '../io/decodeText';
 import { matFiguresCsvPieces } from '../io/matCsv';
-import { MAX_DESIGN_TEXT_LENGTH, restoreDesign } from '../io/restore';
+import { MAX_DESIGN_FILE_BYTES } from '../io/designText';
+import { restoreDesign } from '../io/restore';
 import { reportTable } from '../io/reportTable';
 import { summaryJsonPieces } from '../io/summaryText';
 import type { Design } from '../model/design';
@@ -97,14 +98,14 @@ function readText(path: string, io: EvaluateCliIo): string | number {
   const shown = clipForMessage(path, 120);
   try {
     const size = io.fileSize?.(path);
-    if (size !== undefined && size > MAX_DESIGN_TEXT_LENGTH) {
+    if (size !== undefined && size > MAX_DESIGN_FILE_BYTES) {
       io.stderr(
         `evaluate: ${shown} is ${size.toLocaleString('en-US')} bytes; the limit for a design file is ` +
-          `${MAX_DESIGN_TEXT_LENGTH.toLocaleString('en-US')}\n`,
+          `${MAX_DESIGN_FILE_BYTES.toLocaleString('en-US')}\n`,
       );
       return EXIT.unreadable;
     }
-    const read = io.readFile(path, MAX_DESIGN_TEXT_LENGTH);
+    const read = io.readFile(path, MAX_DESIGN_FILE_BYTES);
     if (typeof read === 'string') return read;
     const decoded = decodeDesignBytes(read);
     if (!decoded.ok) {

@@ -3,6 +3,12 @@ import type { Design, VariantDesign, VariantShelf } from '../model/design';
 /** Largest design text we will read (bytes of UTF-16 text ≈ characters); a whole die fits easily. */
 export const MAX_DESIGN_TEXT_LENGTH = 64 * 1024 * 1024;
 
+/**
+ * Largest design file read (bytes). A UTF-16 code unit takes at most 3 bytes of UTF-8, so every text of at
+ * most MAX_DESIGN_TEXT_LENGTH characters fits; restore then holds the text to its character limit.
+ */
+export const MAX_DESIGN_FILE_BYTES = 3 * MAX_DESIGN_TEXT_LENGTH;
+
 /** Blocks serialised per piece: about 1 ms of JSON.stringify on a 2-core laptop (about 200 bytes each). */
 export const BLOCKS_PER_PIECE = 2000;
 
@@ -92,7 +98,11 @@ export function blockCountWithVariants(design: Design): number {
 
 /** The text of a design file as Save writes it: indented when small, compact in pieces when large. */
 export function designFilePieces(design: Design): Iterable<string> {
-  if (blockCountWithVariants(design) <= INDENTED_FILE_BLOCKS) return [`${JSON.stringify(design, null, 2)}\n`];
+  if (blockCountWithVariants(design) <= INDENTED_FILE_BLOCKS) {
+    const indented = `${JSON.stringify(design, null, 2)}\n`;
+    // Very long names can make even a small design's indented text longer than restore reads.
+    if (indented.length <= MAX_DESIGN_TEXT_LENGTH) return [indented];
+  }
   return (function* () {
     yield* designTextPieces(design);
     yield '\n';

@@ -5,6 +5,8 @@ import type { CellDefinition } from '../model/cell';
 import { MAX_BLOCKS, matLengthProblem, type Design, type VariantDesign } from '../model/design';
 import { designSchema, shelfSchemaWith } from '../model/designSchema';
 import { clipForMessage } from '../model/messageText';
+import { MAX_DESIGN_TEXT_LENGTH } from './designText';
+import { designTextLength } from './designTextLength';
 import { formatPath } from './restore';
 
 /**
@@ -153,16 +155,25 @@ export function editProblems(next: Design, base: Design | null): string[] {
   if (next === base) return [];
   const problems = designProblems(next, base, []);
   if (problems.length > 0) return problems;
-  if (next.variants === undefined || next.variants === base?.variants) {
-    return [];
+  if (next.variants !== undefined && next.variants !== base?.variants) {
+    const shelf = shelfStructureSchema.safeParse(next.variants);
+    if (!shelf.success) return issuesOf(shelf.error, ['variants']);
+    for (const [index, entry] of next.variants.entries.entries()) {
+      if (entry.design === null) continue;
+      const earlier = base ? baseForVariant(entry.id, base) : null;
+      const entryProblems = designProblems(entry.design, earlier, ['variants', 'entries', index, 'design']);
+      if (entryProblems.length > 0) return entryProblems;
+    }
   }
-  const shelf = shelfStructureSchema.safeParse(next.variants);
-  if (!shelf.success) return issuesOf(shelf.error, ['variants']);
-  for (const [index, entry] of next.variants.entries.entries()) {
-    if (entry.design === null) continue;
-    const earlier = base ? baseForVariant(entry.id, base) : null;
-    const entryProblems = designProblems(entry.design, earlier, ['variants', 'entries', index, 'design']);
-    if (entryProblems.length > 0) return entryProblems;
-  }
-  return [];
+  return textLengthProblems(next, base);
+}
+
+/** Restore reads at most MAX_DESIGN_TEXT_LENGTH characters, so a design whose text is longer would not restore. */
+function textLengthProblems(next: Design, base: Design | null): string[] {
+  // + 1: Save ends the file with a newline, and restore counts it.
+  const length = designTextLength(next, base, (id) => (base ? baseForVariant(id, base) : null)) + 1;
+  if (length <= MAX_DESIGN_TEXT_LENGTH) return [];
+  return [
+    `the design would be ${length.toLocaleString('en-US')} characters as text; the limit is ${MAX_DESIGN_TEXT_LENGTH.toLocaleString('en-US')} (remove variants or blocks, or shorten names)`,
+  ];
 }

@@ -2,7 +2,7 @@ import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { EXIT, runEvaluateCli } from '../../src/cli/runEvaluate';
-import { MAX_DESIGN_TEXT_LENGTH } from '../../src/io/restore';
+import { MAX_DESIGN_FILE_BYTES } from '../../src/io/designText';
 import { DEMO_FILE_NAME, demoDesign } from '../../src/designs/demoDesign';
 import { designWith, mat } from '../support/designs';
 
@@ -88,9 +88,9 @@ describe('npm run evaluate', () => {
   });
 
   it('a file over the size limit: exit 3 before it is read', () => {
-    const r = run(['big.json'], { 'big.json': '{}' }, { 'big.json': MAX_DESIGN_TEXT_LENGTH + 1 });
+    const r = run(['big.json'], { 'big.json': '{}' }, { 'big.json': MAX_DESIGN_FILE_BYTES + 1 });
     expect(r.code).toBe(EXIT.unreadable);
-    expect(r.stderr).toMatch(/big\.json is 67,108,865 bytes; the limit for a design file is 67,108,864/);
+    expect(r.stderr).toMatch(/big\.json is 201,326,593 bytes; the limit for a design file is 201,326,592/);
   });
 
   it('an invalid design: exit 4, every message on stderr with the field path', () => {

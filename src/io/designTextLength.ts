@@ -1,0 +1,87 @@
+import type { Block } from '../model/block';
+import type { Design, VariantDesign } from '../model/design';
+
+/**
+ * The exact length of `JSON.stringify(design)` (the compact text the browser stores and large files are
+ * saved as), kept up to date edit by edit. Restore refuses text longer than MAX_DESIGN_TEXT_LENGTH, so the
+ * edit check needs this length to refuse an edit (duplicating a huge variant, very long names on a whole
+ * die) whose result could not be read back. Stringifying a whole die on every edit would cost about
+ * 150 ms, so each block list's length is cached by identity and a new list is measured from the list it
+ * came from: only the blocks that differ are stringified.
+ */
+
+/** Σ (JSON length of a block + 1) over a block list, by list identity. */
+const listSums = new WeakMap<readonly Block[], number>();
+
+function blockLength(block: Block): number {
+  return JSON.stringify(block).length + 1;
+}
+
+function fullSum(blocks: readonly Block[]): number {
+  // One stringify of the whole list is faster than one per block: [a,b,c] is Σ|b| + (n − 1) + 2.
+  return blocks.length === 0 ? 0 : JSON.stringify(blocks).length - 1;
+}
+
+/** Σ (|block| + 1) of `blocks`, measured from `base` (the list it came from) where there is one. */
+function blockSum(blocks: readonly Block[], base: readonly Block[] | null): number {
+  const cached = listSums.get(blocks);
+  if (cached !== undefined) return cached;
+  const baseSum = base ? listSums.get(base) : undefined;
+  let sum: number;
+  if (base && baseSum !== undefined) {
+    sum = baseSum;
+    if (blocks.length === base.length) {
+      for (let i = 0; i < blocks.length; i++) {
+        const now = blocks[i] as Block;
+        const was = base[i] as Block;
+        if (now !== was) sum += blockLength(now) - blockLength(was);
+      }
+    } else {
+      const inBase = new Set<Block>(base);
+      const inNext = new Set<Block>(blocks);
+      for (const block of base) if (!inNext.has(block)) sum -= blockLength(block);
+      for (const block of blocks) if (!inBase.has(block)) sum += blockLength(block);
+    }
+  } else {
+    sum = fullSum(blocks);
+  }
+  listSums.set(blocks, sum);
+  return sum;
+}
+
+/** JSON length of a block list: `[]`, or `[` + blocks joined by commas + `]`. */
+function listLength(blocks: readonly Block[], base: readonly Block[] | null): number {
+  return blocks.length === 0 ? 2 : blockSum(blocks, base) + 1;
+}
+
+/** The design with every block list emptied: its JSON length is the rest of the text. */
+function withoutBlocks(design: Design): Design {
+  const shelf = design.variants;
+  return {
+    ...design,
+    blocks: [],
+    variants: shelf && {
+      ...shelf,
+      entries: shelf.entries.map((e) => ({ ...e, design: e.design && { ...e.design, blocks: [] } })),
+    },
+  };
+}
+
+/**
+ * `JSON.stringify(design).length`, exactly. `earlier` (the design the edit started from) and
+ * `earlierVariant` (its copy of a stored variant, by variant id) let unchanged blocks be skipped.
+ */
+export function designTextLength(
+  design: Design,
+  earlier: Design | null = null,
+  earlierVariant: (id: string) => VariantDesign | null = () => null,
+): number {
+  let length =
+    JSON.stringify(withoutBlocks(design)).length - 2 + listLength(design.blocks, earlier?.blocks ?? null);
+  for (const entry of design.variants?.entries ?? []) {
+    if (!entry.design) continue;
+    const base = earlierVariant(entry.id);
+    length += listLength(entry.design.blocks, base?.blocks ?? null) - 2;
+  }
+  return length;
+}
