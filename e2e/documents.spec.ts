@@ -67,6 +67,23 @@ test('a reload reopens the tab’s design; a stored design that no longer restor
     await app.setCellsPerWordline(String(300 + round));
     await app.waitUntilKept();
   }
+
+  // Recent lists the two kept-aside designs: one saves to a file exactly as stored, one is discarded.
+  await page.getByTestId('recent-menu').click();
+  await expect(page.getByTestId('kept-aside-entry')).toHaveCount(2);
+  await page.screenshot({ path: test.info().outputPath('kept-aside.png') });
+  const downloaded = page.waitForEvent('download');
+  await page.getByTestId('kept-aside-save').first().click();
+  const file = await downloaded;
+  expect(file.suggestedFilename()).toMatch(/^kept-aside-.*\.json$/);
+  const path = await file.path();
+  const { readFile } = await import('node:fs/promises');
+  expect(await readFile(path, 'utf8')).toMatch(/^\{"format":"matloom-design","version":1,"round":[12]$/);
+  page.once('dialog', (dialog) => void dialog.accept());
+  await page.getByTestId('kept-aside-discard').first().click();
+  await expect(page.getByTestId('kept-aside-entry')).toHaveCount(1);
+  await expect(page.getByTestId('notice')).toContainText('Discarded the kept-aside design');
+  expect((await app.storedKeys()).filter((k) => k.startsWith('unreadable:'))).toHaveLength(1);
 });
 
 test('a 65,536-mat design is kept and survives a reload', async ({ page }) => {

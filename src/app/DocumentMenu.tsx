@@ -1,9 +1,10 @@
 import { useEffect, useRef, useState } from 'react';
-import type { DocumentAbout } from '../io/documentShelf';
+import type { DocumentAbout, KeptAside } from '../io/documentShelf';
 import { useAppStore } from '../store/useAppStore';
 import { CommandButton } from './CommandButton';
 import { openDesignFile } from './designFiles';
 import { makeShareLink, registerFileInput } from './documentActions';
+import { downloadBlob } from './download';
 import { documentSession } from './session';
 import './documents.css';
 
@@ -15,6 +16,7 @@ function savedWhen(ms: number): string {
 export function DocumentMenu() {
   const fileInput = useRef<HTMLInputElement>(null);
   const [recent, setRecent] = useState<DocumentAbout[] | null>(null);
+  const [aside, setAside] = useState<KeptAside[]>([]);
   const documentId = useAppStore((s) => s.documentId);
   const [link, setLink] = useState<string | null>(null);
   useEffect(() => registerFileInput(() => fileInput.current?.click()), []);
@@ -25,6 +27,7 @@ export function DocumentMenu() {
     if (!listOpen) return;
     let current = true;
     void documentSession.recent().then((list) => current && setRecent(list));
+    void documentSession.keptAside().then((list) => current && setAside(list));
     return () => {
       current = false;
     };
@@ -32,7 +35,10 @@ export function DocumentMenu() {
 
   const toggleRecent = async () => {
     if (recent) setRecent(null);
-    else setRecent(await documentSession.recent());
+    else {
+      setAside(await documentSession.keptAside());
+      setRecent(await documentSession.recent());
+    }
   };
 
   return (
@@ -72,7 +78,7 @@ export function DocumentMenu() {
       </button>
       {recent && (
         <div className="recent-list" role="dialog" aria-label="Recent designs" data-testid="recent-list">
-          {recent.length === 0 && <p>No designs kept in this browser yet.</p>}
+          {recent.length === 0 && aside.length === 0 && <p>No designs kept in this browser yet.</p>}
           <ul>
             {recent.map((entry) => (
               <li key={entry.id}>
@@ -113,6 +119,50 @@ export function DocumentMenu() {
               </li>
             ))}
           </ul>
+          {aside.length > 0 && (
+            <section className="kept-aside" data-testid="kept-aside" aria-label="Designs kept aside">
+              <h3>Kept aside: could not be restored</h3>
+              <p>Save one to a file to mend it by hand and open it again, or discard it.</p>
+              <ul>
+                {aside.map((entry) => (
+                  <li key={entry.key} data-testid="kept-aside-entry" data-key={entry.key}>
+                    <span className="recent-about">
+                      {entry.keptAt > 0 ? savedWhen(entry.keptAt) : entry.key}
+                    </span>
+                    <button
+                      type="button"
+                      data-testid="kept-aside-save"
+                      title="Save this kept-aside design, exactly as it was stored, to a file"
+                      onClick={async () => {
+                        const text = await documentSession.keptAsideText(entry.key);
+                        if (text === null) return;
+                        const stamp = new Date(entry.keptAt).toISOString().slice(0, 19).replace(/[:T]/g, '-');
+                        downloadBlob(
+                          new Blob([text], { type: 'application/json' }),
+                          `kept-aside-${stamp}.json`,
+                        );
+                      }}
+                    >
+                      Save to a file
+                    </button>
+                    <button
+                      type="button"
+                      data-testid="kept-aside-discard"
+                      title="Remove this kept-aside design from this browser for good (asks first)"
+                      onClick={async () => {
+                        if (!window.confirm('Discard this kept-aside design for good? It cannot be undone.'))
+                          return;
+                        await documentSession.discardKeptAside(entry.key);
+                        setAside(await documentSession.keptAside());
+                      }}
+                    >
+                      Discard
+                    </button>
+                  </li>
+                ))}
+              </ul>
+            </section>
+          )}
         </div>
       )}
     </div>

@@ -1,5 +1,8 @@
 import {
+  discardKeptAside,
   forgetDocument,
+  keptAsideList,
+  keptAsideText,
   listDocuments,
   loadDocument,
   rememberDocument,
@@ -7,6 +10,7 @@ import {
   newDocumentId,
   saveDocument,
   type DocumentAbout,
+  type KeptAside,
   type KeyValueArea,
 } from '../io/documentShelf';
 import { restoreDesignWhenLoaded } from '../io/checksOnDemand';
@@ -74,6 +78,41 @@ export class DocumentSession {
     }
     this.startNew(demoDesign(), true);
     return this.watch(notices);
+  }
+
+  /** Designs kept aside because they no longer restored, newest first; empty without storage. */
+  async keptAside(): Promise<KeptAside[]> {
+    if (!this.area) return [];
+    try {
+      return await keptAsideList(this.area);
+    } catch {
+      return [];
+    }
+  }
+
+  /** The stored text of a kept-aside design, exactly as kept (to save to a file and mend by hand). */
+  async keptAsideText(key: string): Promise<string | null> {
+    if (!this.area) return null;
+    try {
+      return await keptAsideText(this.area, key);
+    } catch {
+      return null;
+    }
+  }
+
+  /** Removes a kept-aside design for good, after the person confirmed; the notice says what happened. */
+  async discardKeptAside(key: string): Promise<void> {
+    const { setNotice } = this.store.getState();
+    if (!this.area) return;
+    try {
+      await discardKeptAside(this.area, key);
+      setNotice({ kind: 'info', text: `Discarded the kept-aside design "${clipForMessage(key)}".` });
+    } catch (error) {
+      setNotice({
+        kind: 'error',
+        text: `The kept-aside design could not be discarded (${clipForMessage(String(error), 80)}); it stays stored.`,
+      });
+    }
   }
 
   /** Newest first; empty without storage. */

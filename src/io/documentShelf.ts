@@ -155,6 +155,34 @@ export async function listKeptAside(area: KeyValueArea): Promise<string[]> {
   return (await area.keys()).filter((k) => typeof k === 'string' && k.startsWith(UNREADABLE_PREFIX));
 }
 
+/** One design kept aside, as the recent list shows it. */
+export interface KeptAside {
+  readonly key: string;
+  /** When it was set aside (ms since 1970), from its key. */
+  readonly keptAt: number;
+}
+
+/** The kept-aside designs, newest first. */
+export async function keptAsideList(area: KeyValueArea): Promise<KeptAside[]> {
+  return (await listKeptAside(area))
+    .map((key) => ({ key, keptAt: Number(key.slice(key.lastIndexOf(':') + 1)) }))
+    .map((k) => ({ ...k, keptAt: Number.isFinite(k.keptAt) ? k.keptAt : 0 }))
+    .sort((a, b) => b.keptAt - a.keptAt);
+}
+
+/** The text of a kept-aside design, exactly as it was stored; null when there is none. */
+export async function keptAsideText(area: KeyValueArea, key: string): Promise<string | null> {
+  if (!key.startsWith(UNREADABLE_PREFIX)) return null;
+  return storedText(await area.get(key));
+}
+
+/** Removes a kept-aside design for good (only `unreadable:` keys: never a document). */
+export async function discardKeptAside(area: KeyValueArea, key: string): Promise<void> {
+  if (!key.startsWith(UNREADABLE_PREFIX))
+    throw new Error(`"${clipForMessage(key)}" is not a kept-aside design`);
+  await area.del(key);
+}
+
 function isAbout(value: unknown): value is DocumentAbout {
   if (typeof value !== 'object' || value === null) return false;
   const v = value as Record<string, unknown>;

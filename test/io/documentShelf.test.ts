@@ -3,7 +3,10 @@ import { describe, expect, it } from 'vitest';
 import { designFilePieces, designTextPieces, INDENTED_FILE_BLOCKS } from '../../src/io/designText';
 import {
   designKey,
+  discardKeptAside,
   forgetDocument,
+  keptAsideList,
+  keptAsideText,
   listDocuments,
   listKeptAside,
   loadDocument,
@@ -69,6 +72,21 @@ describe('document shelf', () => {
     const aside = await listKeptAside(area);
     expect(aside).toHaveLength(2);
     expect(aside.map((k) => area.data.get(k))).toEqual(['{"broken":1', '{"broken":2']);
+    // The recent list shows them newest first, gives their text back as stored, and discards one.
+    const listed = await keptAsideList(area);
+    expect(listed.map((k) => k.keptAt)).toEqual([20, 10]);
+    expect(await keptAsideText(area, 'unreadable:a:10')).toBe('{"broken":1');
+    expect(await keptAsideText(area, designKey('b'))).toBeNull();
+    await discardKeptAside(area, 'unreadable:a:20');
+    expect(await listKeptAside(area)).toEqual(['unreadable:a:10']);
+  });
+
+  it('discards only kept-aside designs, never a document', async () => {
+    const area = memoryArea();
+    const design = demoDesign();
+    await saveDocument(area, 'a', design, textOf(design), 1000);
+    await expect(discardKeptAside(area, designKey('a'))).rejects.toThrow('is not a kept-aside design');
+    expect((await loadDocument(area, 'a')).kind).toBe('restored');
   });
 
   it('does not claim a copy was kept when writing it failed, and leaves the design where it was', async () => {
