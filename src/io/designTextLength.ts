@@ -26,7 +26,9 @@ function fullSum(blocks: readonly Block[]): number {
 function blockSum(blocks: readonly Block[], base: readonly Block[] | null): number {
   const cached = listSums.get(blocks);
   if (cached !== undefined) return cached;
-  const baseSum = base ? listSums.get(base) : undefined;
+  // The list an edit started from is measured once too: undo brings it back, and the edit after the
+  // undo then starts from a known length instead of measuring the whole list again.
+  const baseSum = base ? (listSums.get(base) ?? blockSum(base, null)) : undefined;
   let sum: number;
   if (base && baseSum !== undefined) {
     sum = baseSum;
