@@ -7,6 +7,7 @@ import { makeShareLink, registerFileInput } from './documentActions';
 import { downloadBlob } from './download';
 import { documentSession } from './session';
 import './documents.css';
+import { formatWholeNumber } from '../model/units';
 
 function savedWhen(ms: number): string {
   return new Date(ms).toLocaleString(undefined, { dateStyle: 'short', timeStyle: 'short' });
@@ -96,7 +97,7 @@ export function DocumentMenu() {
                 >
                   <span className="recent-name">{entry.name}</span>
                   <span className="recent-about">
-                    {entry.blockCount.toLocaleString('en-US')} blocks · {savedWhen(entry.savedAt)}
+                    {formatWholeNumber(entry.blockCount)} blocks · {savedWhen(entry.savedAt)}
                     {entry.id === documentId ? ' · open' : ''}
                   </span>
                 </button>

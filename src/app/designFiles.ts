@@ -10,6 +10,7 @@ import {
   type SaveTarget,
   type WritableFileHandle,
 } from './saveToFile';
+import { formatWholeNumber } from '../model/units';
 
 /**
  * Design files as people expect them: Save writes back to the file the design was opened from when the
@@ -45,7 +46,7 @@ function tooLongToOpen(characters: number): Notice | null {
   if (characters <= MAX_DESIGN_TEXT_LENGTH) return null;
   return {
     kind: 'error',
-    text: `Saved, but the file is ${characters.toLocaleString('en-US')} characters, more than Open reads (${MAX_DESIGN_TEXT_LENGTH.toLocaleString('en-US')}): remove variants or blocks and save again to have a file that opens.`,
+    text: `Saved, but the file is ${formatWholeNumber(characters)} characters, more than Open reads (${formatWholeNumber(MAX_DESIGN_TEXT_LENGTH)}): remove variants or blocks and save again to have a file that opens.`,
   };
 }
 
@@ -107,7 +108,7 @@ export async function openDesignFile(file: File, handle?: DesignFileHandle): Pro
   if (file.size > MAX_FILE_BYTES) {
     setNotice({
       kind: 'error',
-      text: `${clipForMessage(file.name)} is ${file.size.toLocaleString('en-US')} bytes; the limit is ${MAX_FILE_BYTES.toLocaleString('en-US')}. Nothing was changed.`,
+      text: `${clipForMessage(file.name)} is ${formatWholeNumber(file.size)} bytes; the limit is ${formatWholeNumber(MAX_FILE_BYTES)}. Nothing was changed.`,
     });
     return false;
   }

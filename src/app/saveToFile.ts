@@ -1,3 +1,4 @@
+import { formatWholeNumber } from '../model/units';
 /**
  * Writing a file the person asked for (a design, a summary JSON, a CSV), made of text pieces so that a
  * whole die never becomes one giant string. Two ways, chosen by what the browser has:
@@ -190,5 +191,5 @@ async function downloadInBlobs(pieces: Iterable<string>, options: WriteOptions):
 /** Characters as people read a file size: "714 MB" (10⁶, as file managers show it). */
 export function sizeText(characters: number): string {
   const mb = characters / 1e6;
-  return mb >= 10 ? `${Math.round(mb).toLocaleString('en-US')} MB` : `${mb.toPrecision(2)} MB`;
+  return mb >= 10 ? `${formatWholeNumber(mb)} MB` : `${mb.toPrecision(2)} MB`;
 }

@@ -1,4 +1,5 @@
 import { closeSync, constants, fstatSync, openSync, readSync } from 'node:fs';
+import { formatWholeNumber } from '../model/units';
 
 /**
  * Reads a design file for the CLI: only a regular file (a device, FIFO or socket could block or never
@@ -48,7 +49,7 @@ export function readDesignFileBytes(path: string, limit: number): Uint8Array {
 export class TooLargeError extends Error {
   constructor(size: number, limit: number) {
     super(
-      `it is at least ${size.toLocaleString('en-US')} bytes; the limit for a design file is ${limit.toLocaleString('en-US')}`,
+      `it is at least ${formatWholeNumber(size)} bytes; the limit for a design file is ${formatWholeNumber(limit)}`,
     );
   }
 }

@@ -8,6 +8,7 @@ import { summaryJsonPieces } from '../io/summaryText';
 import type { Design } from '../model/design';
 import { clipForMessage, escapeControlCharacters } from '../model/messageText';
 import { variantEntries, type VariantEntry } from '../model/variants';
+import { formatWholeNumber } from '../model/units';
 
 /** What the CLI needs from the outside world, so that tests can run it without files or a process. */
 export interface EvaluateCliIo {
@@ -100,8 +101,8 @@ function readText(path: string, io: EvaluateCliIo): string | number {
     const size = io.fileSize?.(path);
     if (size !== undefined && size > MAX_DESIGN_FILE_BYTES) {
       io.stderr(
-        `evaluate: ${shown} is ${size.toLocaleString('en-US')} bytes; the limit for a design file is ` +
-          `${MAX_DESIGN_FILE_BYTES.toLocaleString('en-US')}\n`,
+        `evaluate: ${shown} is ${formatWholeNumber(size)} bytes; the limit for a design file is ` +
+          `${formatWholeNumber(MAX_DESIGN_FILE_BYTES)}\n`,
       );
       return EXIT.unreadable;
     }

@@ -2,6 +2,7 @@ import { MAX_BLOCKS, type Design } from '../model/design';
 import type { Block } from '../model/block';
 import type { Command, CommandResult } from './command';
 import { checkBlocks } from './validateBlocks';
+import { formatWholeNumber } from '../model/units';
 
 export interface AddBlocksArgs {
   /** Complete blocks with ids the design does not use yet. */
@@ -15,7 +16,7 @@ export const addBlocks: Command<AddBlocksArgs> = {
   run(design: Design, args: AddBlocksArgs): CommandResult {
     if (args.blocks.length === 0) return { ok: false, error: 'nothing to add' };
     if (design.blocks.length + args.blocks.length > MAX_BLOCKS) {
-      return { ok: false, error: `a design holds at most ${MAX_BLOCKS.toLocaleString('en-US')} blocks` };
+      return { ok: false, error: `a design holds at most ${formatWholeNumber(MAX_BLOCKS)} blocks` };
     }
     const taken = new Set(design.blocks.map((b) => b.id));
     for (const block of args.blocks) {

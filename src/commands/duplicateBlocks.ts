@@ -3,6 +3,7 @@ import type { Block } from '../model/block';
 import { idAllocator, nameAllocator } from './blockIds';
 import type { Command, CommandResult } from './command';
 import { checkBlocks } from './validateBlocks';
+import { formatWholeNumber } from '../model/units';
 
 export interface DuplicateBlocksArgs {
   readonly ids: readonly string[];
@@ -47,7 +48,7 @@ export const duplicateBlocks: Command<DuplicateBlocksArgs> = {
     const originals = design.blocks.filter((b) => targets.has(b.id));
     if (originals.length === 0) return { ok: false, error: 'nothing selected to duplicate' };
     if (design.blocks.length + originals.length > MAX_BLOCKS) {
-      return { ok: false, error: `a design holds at most ${MAX_BLOCKS.toLocaleString('en-US')} blocks` };
+      return { ok: false, error: `a design holds at most ${formatWholeNumber(MAX_BLOCKS)} blocks` };
     }
     const copies = shiftedCopies(originals, idAllocator(design), nameAllocator(design), args.dx, args.dy);
     const error = checkBlocks(design, copies);

@@ -5,6 +5,7 @@ import { idAllocator, nameAllocator } from './blockIds';
 import type { Command, CommandResult } from './command';
 import { shiftedCopies } from './duplicateBlocks';
 import { checkBlocks } from './validateBlocks';
+import { formatWholeNumber } from '../model/units';
 
 export interface PasteBlocksArgs {
   /** Blocks from the clipboard, already read through io/restore. */
@@ -29,7 +30,7 @@ export const pasteBlocks: Command<PasteBlocksArgs> = {
       return { ok: false, error: 'paste needs a finite offset' };
     }
     if (design.blocks.length + args.blocks.length > MAX_BLOCKS) {
-      return { ok: false, error: `a design holds at most ${MAX_BLOCKS.toLocaleString('en-US')} blocks` };
+      return { ok: false, error: `a design holds at most ${formatWholeNumber(MAX_BLOCKS)} blocks` };
     }
     const known = new Set(design.cells.map((c) => c.id));
     const newCells: CellDefinition[] = [];

@@ -1,6 +1,7 @@
 import { MAX_CELLS_PER_LINE, type Block } from '../model/block';
 import type { Design } from '../model/design';
 import type { Command, CommandResult } from './command';
+import { formatWholeNumber } from '../model/units';
 
 export interface SetMatCellCountsArgs {
   readonly matIds: readonly string[];
@@ -11,7 +12,7 @@ export interface SetMatCellCountsArgs {
 function checkCount(label: string, value: number | undefined): string | null {
   if (value === undefined) return null;
   if (!Number.isInteger(value) || value < 1 || value > MAX_CELLS_PER_LINE) {
-    return `${label} must be a whole number from 1 to ${MAX_CELLS_PER_LINE.toLocaleString('en-US')}`;
+    return `${label} must be a whole number from 1 to ${formatWholeNumber(MAX_CELLS_PER_LINE)}`;
   }
   return null;
 }

@@ -5,6 +5,7 @@ import { idAllocator, nameAllocator } from './blockIds';
 import type { Command, CommandResult } from './command';
 import { shiftedCopies } from './duplicateBlocks';
 import { checkBlocks } from './validateBlocks';
+import { formatWholeNumber } from '../model/units';
 
 /** Most copies along one direction; a 256 × 256 array of mats is already a large die. */
 export const MAX_REPEAT = 256;
@@ -70,7 +71,7 @@ export const stepAndRepeat: Command<StepAndRepeatArgs> = {
     if (design.blocks.length + copiesWanted > MAX_BLOCKS) {
       return {
         ok: false,
-        error: `${copiesWanted.toLocaleString('en-US')} copies would pass the limit of ${MAX_BLOCKS.toLocaleString('en-US')} blocks`,
+        error: `${formatWholeNumber(copiesWanted)} copies would pass the limit of ${formatWholeNumber(MAX_BLOCKS)} blocks`,
       };
     }
     const allocate = idAllocator(design);

@@ -2,6 +2,7 @@ import { unplacedMatGeometry } from '../geometry/matGeometry';
 import { MAX_CELLS_PER_LINE } from '../model/blockBasics';
 import type { CellDefinition } from '../model/cell';
 import { isGainCell } from '../model/cellBasics';
+import { formatWholeNumber } from '../model/units';
 
 /** Sizes of the periphery around the mats (m). Strips must be wider than zero; decoders may be absent (0). */
 export interface StripSizes {
@@ -142,7 +143,7 @@ export function planPartition(spec: PartitionSpec): PlanResult {
   const lossRows = losesEdgeBits(spec.cell) ? 1 : 0;
   // Mats that must be readable; with an open array the edge rows add one row's worth of lost halves.
   const needed = Math.ceil(spec.targetBits / bitsPerMat);
-  const tooMany = `the target needs more than ${MAX_PARTITION_MATS.toLocaleString('en-US')} mats of this size`;
+  const tooMany = `the target needs more than ${formatWholeNumber(MAX_PARTITION_MATS)} mats of this size`;
   if (needed > MAX_PARTITION_MATS) return { ok: false, error: tooMany };
   const candidates: GridChoice[] = [];
   const side = Math.ceil(Math.sqrt(needed));

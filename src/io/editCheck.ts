@@ -8,6 +8,7 @@ import { clipForMessage } from '../model/messageText';
 import { MAX_DESIGN_TEXT_LENGTH } from './designText';
 import { designTextLength } from './designTextLength';
 import { formatPath } from './restore';
+import { formatWholeNumber } from '../model/units';
 
 /**
  * The invariant "every accepted edit restores": a command's result must pass the same schema and limits
@@ -174,6 +175,6 @@ function textLengthProblems(next: Design, base: Design | null): string[] {
   const length = designTextLength(next, base, (id) => (base ? baseForVariant(id, base) : null)) + 1;
   if (length <= MAX_DESIGN_TEXT_LENGTH) return [];
   return [
-    `the design would be ${length.toLocaleString('en-US')} characters as text; the limit is ${MAX_DESIGN_TEXT_LENGTH.toLocaleString('en-US')} (remove variants or blocks, or shorten names)`,
+    `the design would be ${formatWholeNumber(length)} characters as text; the limit is ${formatWholeNumber(MAX_DESIGN_TEXT_LENGTH)} (remove variants or blocks, or shorten names)`,
   ];
 }

@@ -2,6 +2,7 @@ import { DESIGN_FORMAT, DESIGN_VERSION, type Design } from '../model/design';
 import { designSchema } from '../model/designSchema';
 import { MAX_DESIGN_TEXT_LENGTH } from './designText';
 import { MIGRATIONS } from './migrations';
+import { formatWholeNumber } from '../model/units';
 
 export { MAX_DESIGN_TEXT_LENGTH } from './designText';
 
@@ -47,7 +48,7 @@ export function restoreDesign(input: unknown): RestoreResult {
   if (typeof input === 'string') {
     if (input.length > MAX_DESIGN_TEXT_LENGTH) {
       return fail(
-        `file is ${input.length.toLocaleString('en-US')} characters; the limit is ${MAX_DESIGN_TEXT_LENGTH.toLocaleString('en-US')}`,
+        `file is ${formatWholeNumber(input.length)} characters; the limit is ${formatWholeNumber(MAX_DESIGN_TEXT_LENGTH)}`,
       );
     }
     try {

@@ -2,6 +2,7 @@ import type { Design } from '../model/design';
 import { clipForMessage } from '../model/messageText';
 import { restoreDesignWhenLoaded } from './checksOnDemand';
 import type { RestoreResult } from './restore';
+import { formatWholeNumber } from '../model/units';
 
 /**
  * A design carried in a page address: its file text, deflate-compressed (the browser's own
@@ -34,7 +35,7 @@ async function pipeBytes(
     total += value.length;
     if (total > limit) {
       await reader.cancel();
-      throw new Error(`it unpacks to more than ${limit.toLocaleString('en-US')} bytes`);
+      throw new Error(`it unpacks to more than ${formatWholeNumber(limit)} bytes`);
     }
     chunks.push(value);
   }
@@ -74,7 +75,7 @@ export async function shareFragment(
   if (fragment.length > MAX_SHARE_FRAGMENT_LENGTH) {
     return {
       ok: false,
-      error: `this design needs a ${fragment.length.toLocaleString('en-US')}-character link; links are kept under ${MAX_SHARE_FRAGMENT_LENGTH.toLocaleString('en-US')}. Save it to a file and send the file instead`,
+      error: `this design needs a ${formatWholeNumber(fragment.length)}-character link; links are kept under ${formatWholeNumber(MAX_SHARE_FRAGMENT_LENGTH)}. Save it to a file and send the file instead`,
     };
   }
   return { ok: true, fragment };
@@ -92,7 +93,7 @@ export async function restoreShared(payload: string): Promise<RestoreResult> {
     return {
       ok: false,
       errors: [
-        `the link is ${payload.length.toLocaleString('en-US')} characters long; the limit is ${MAX_SHARE_FRAGMENT_LENGTH.toLocaleString('en-US')}`,
+        `the link is ${formatWholeNumber(payload.length)} characters long; the limit is ${formatWholeNumber(MAX_SHARE_FRAGMENT_LENGTH)}`,
       ],
     };
   }

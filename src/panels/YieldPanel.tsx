@@ -3,7 +3,7 @@ import { setRepairSetting } from '../commands/setRepairSetting';
 import { explainTotal, repairSettingsOf, TOTAL_FIGURE_PANEL, yieldFiguresOf } from '../engine';
 import { REPAIR_FIELDS } from '../model/fieldCatalog';
 import { REPAIR_DOMAIN_LABEL, REPAIR_DOMAINS, type RepairDomainKind } from '../model/repair';
-import { formatQuantity } from '../model/units';
+import { formatQuantity, formatWholeNumber } from '../model/units';
 import { useRepairStore } from '../store/repairStore';
 import { useAppStore } from '../store/useAppStore';
 import { FigureRow } from './FigureRow';
@@ -96,14 +96,13 @@ export function YieldPanel() {
         <h4>Die yield by Monte Carlo</h4>
         <p className="hint">
           Reruns in the background after each edit: throws each die&apos;s faults{' '}
-          {AUTO_TRIALS.toLocaleString('en-US')} times on the same row domains and strips, solves every
-          die&apos;s spare allocation exactly (must-repair, then a bounded search), periphery defects
-          included.
+          {formatWholeNumber(AUTO_TRIALS)} times on the same row domains and strips, solves every die&apos;s
+          spare allocation exactly (must-repair, then a bounded search), periphery defects included.
         </p>
         <p data-testid="repair-mc-status" aria-live="polite">
           {mc.status === 'waiting' && 'Waiting for the edits to settle…'}
           {mc.status === 'running' &&
-            `Running: ${(result && !stale ? result.trials : 0).toLocaleString('en-US')} of ${mc.trials.toLocaleString('en-US')} trials…`}
+            `Running: ${formatWholeNumber(result && !stale ? result.trials : 0)} of ${formatWholeNumber(mc.trials)} trials…`}
           {mc.status === 'idle' && result && 'Stopped.'}
         </p>
         {result && (
@@ -111,7 +110,7 @@ export function YieldPanel() {
             {stale ? 'Stale (for the design before the last edit): ' : 'Estimate: '}
             {formatQuantity(result.estimate, 'percent')} (95 % interval{' '}
             {formatQuantity(result.low, 'percent')} – {formatQuantity(result.high, 'percent')}) over{' '}
-            {result.trials.toLocaleString('en-US')} trials
+            {formatWholeNumber(result.trials)} trials
             {result.undecided > 0 ? `, ${result.undecided} undecided (counted as not repaired)` : ''}
             {mc.elapsed !== null && !busy ? ` in ${formatQuantity(mc.elapsed, 'time')}` : ''}
           </p>
@@ -120,11 +119,11 @@ export function YieldPanel() {
           <button
             type="button"
             data-testid="repair-mc-run"
-            title={`Estimate again with ${MORE_TRIALS.toLocaleString('en-US')} trials for a narrower interval`}
+            title={`Estimate again with ${formatWholeNumber(MORE_TRIALS)} trials for a narrower interval`}
             disabled={!request || busy}
             onClick={() => request && startMc(request, MORE_TRIALS)}
           >
-            {`Refine: ${MORE_TRIALS.toLocaleString('en-US')} trials`}
+            {`Refine: ${formatWholeNumber(MORE_TRIALS)} trials`}
           </button>
           <button
             type="button"

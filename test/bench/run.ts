@@ -13,6 +13,7 @@ const BENCHES = [
   'evaluateCold.bench.ts',
   'sweep.bench.ts',
   'repair.bench.ts',
+  'cliStart.bench.ts',
 ];
 
 let failed = false;

@@ -1,5 +1,6 @@
 import { BLOCK_TYPE_LABEL, type Block } from '../../model/block';
 import type { Design } from '../../model/design';
+import { formatWholeNumber } from '../../model/units';
 
 /** A block as a person names it: its type and its name (or id when it has none). */
 export function blockTitle(block: Block): string {
@@ -16,7 +17,7 @@ export function selectionText(design: Design, ids: readonly string[]): string {
   const blocks = ids.map((id) => byId.get(id)).filter((b): b is Block => b !== undefined);
   const named = blocks.slice(0, NAMED).map(blockTitle);
   const rest = blocks.length - named.length;
-  const list = rest > 0 ? `${named.join(', ')} and ${rest.toLocaleString('en-US')} more` : named.join(', ');
+  const list = rest > 0 ? `${named.join(', ')} and ${formatWholeNumber(rest)} more` : named.join(', ');
   if (blocks.length === 1) {
     const b = blocks[0];
     const counts =
@@ -25,5 +26,5 @@ export function selectionText(design: Design, ids: readonly string[]): string {
         : '';
     return `Selected ${list}${counts}.`;
   }
-  return `${blocks.length.toLocaleString('en-US')} blocks selected: ${list}.`;
+  return `${formatWholeNumber(blocks.length)} blocks selected: ${list}.`;
 }

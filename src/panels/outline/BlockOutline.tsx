@@ -7,6 +7,7 @@ import { useEditorStore } from '../../store/editorStore';
 import { useAppStore } from '../../store/useAppStore';
 import { useUiStore } from '../../store/uiStore';
 import { AddBlockForm } from './AddBlockForm';
+import { formatWholeNumber } from '../../model/units';
 
 /** Height of one row of the list (px); the list draws only the rows in view, so it must be fixed. */
 const ROW_HEIGHT = 24;
@@ -156,7 +157,7 @@ export function BlockOutline() {
     <section className="outline" aria-labelledby="outline-heading" data-testid="outline">
       <div className="outline-head">
         <h2 id="outline-heading">
-          Blocks <span className="count">{blocks.length.toLocaleString('en-US')}</span>
+          Blocks <span className="count">{formatWholeNumber(blocks.length)}</span>
         </h2>
         <FoldButton name="outline" what="the block list" folded={false} symbol="«" onToggle={setCollapsed} />
       </div>
