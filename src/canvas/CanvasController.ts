@@ -1,13 +1,13 @@
-import { addedBlockIds } from '../commands/blockIds';
 import { blockAt, placedDesign } from '../geometry/placedIndex';
 import type { AppState, AppStore, Viewport } from '../store/appStore';
 import { isPlacementTool, type EditorState, type EditorStore } from '../store/editorStore';
 import { useLiveReport } from '../store/liveReport';
 import { setActiveCanvas } from './canvasBridge';
+import { listenToCanvas } from './canvasListeners';
 import { CanvasCursor } from './canvasCursor';
+import { commitGesture } from './commitGesture';
 import { CanvasView, type CanvasLayers } from './canvasView';
 import { frameBlocks, frameEverything } from './framing';
-import { DrawMatGesture } from './gestures/drawMatGesture';
 import {
   chosenCell,
   type EditorContext,
@@ -15,10 +15,9 @@ import {
   type GesturePreview,
   type Modifiers,
 } from './gestures/gesture';
-import { PlaceStripGesture } from './gestures/placeStripGesture';
-import { pressWithSelectTool } from './gestures/selectPress';
 import { HoverPreview } from './hoverPreview';
 import { LiveReportLoop } from './liveReportLoop';
+import { gestureForPress } from './pressGesture';
 import { pxPerMetre } from './paint/scene';
 import { TouchPinch } from './touchPinch';
 import { screenToWorld } from './viewportMath';
@@ -94,33 +93,22 @@ export class CanvasController {
     this.view.layers = layers;
     this.view.showFindings(this.app.getState().report.findings);
     this.frameSeen = this.editor.getState().frameRequest?.serial ?? 0;
-    const listen = <K extends keyof HTMLElementEventMap>(
-      type: K,
-      handler: (e: HTMLElementEventMap[K]) => void,
-      options?: AddEventListenerOptions,
-    ) => {
-      element.addEventListener(type, handler, options);
-      this.cleanups.push(() => element.removeEventListener(type, handler, options));
-    };
-    listen('pointerdown', (e) => this.onPointerDown(e));
-    listen('pointermove', (e) => this.onPointerMove(e));
-    listen('pointerup', (e) => this.onPointerUp(e));
-    listen('pointercancel', (e) => {
-      if (!this.touch.up(e.pointerId)) this.cancelGesture();
-    });
-    // Capture ends by itself after pointerup (the gesture is over by then); losing it earlier, say when
-    // the window loses focus mid-drag, cancels the gesture.
-    listen('lostpointercapture', () => this.cancelGesture());
-    listen('pointerleave', () => this.onPointerLeave());
-    listen('wheel', (e) => this.onWheel(e), { passive: false });
-    listen('contextmenu', (e) => this.onContextMenu(e));
-    const onKey = (e: KeyboardEvent) => this.onSpace(e);
-    window.addEventListener('keydown', onKey);
-    window.addEventListener('keyup', onKey);
-    this.cleanups.push(() => {
-      window.removeEventListener('keydown', onKey);
-      window.removeEventListener('keyup', onKey);
-    });
+    this.cleanups.push(
+      listenToCanvas(element, {
+        pointerDown: (e) => this.onPointerDown(e),
+        pointerMove: (e) => this.onPointerMove(e),
+        pointerUp: (e) => this.onPointerUp(e),
+        pointerCancel: (e) => {
+          if (!this.touch.up(e.pointerId)) this.cancelGesture();
+        },
+        // Capture ends by itself after pointerup (the gesture is over by then); losing it earlier cancels.
+        captureLost: () => this.cancelGesture(),
+        pointerLeave: () => this.onPointerLeave(),
+        wheel: (e) => this.onWheel(e),
+        contextMenu: (e) => this.onContextMenu(e),
+        key: (e) => this.onSpace(e),
+      }),
+    );
     this.cleanups.push(this.app.subscribe((s, prev) => this.onAppChange(s, prev)));
     this.cleanups.push(this.editor.subscribe((s, prev) => this.onEditorChange(s, prev)));
     this.cleanups.push(
@@ -246,22 +234,10 @@ export class CanvasController {
       this.cursor.set(this.view.element, 'grabbing');
       return;
     }
-    const ctx = this.context();
-    const at = this.world(p);
-    let gesture: Gesture;
-    let selectOnClick: readonly string[] | undefined;
-    if (tool === 'select') {
-      const press = pressWithSelectTool(ctx, at, e.shiftKey);
-      gesture = press.gesture;
-      selectOnClick = press.selectOnClick;
-      if (press.selectNow) this.app.getState().select(press.selectNow);
-    } else if (tool === 'mat') {
-      gesture = new DrawMatGesture(ctx, at);
-    } else if (isPlacementTool(tool)) {
-      gesture = new PlaceStripGesture(ctx, tool, at);
-    } else {
-      return;
-    }
+    const started = gestureForPress(this.context(), tool, this.world(p), e.shiftKey);
+    if (!started) return;
+    if (started.selectNow) this.app.getState().select(started.selectNow);
+    const { gesture, selectOnClick } = started;
     this.hover.clear();
     this.press = { gesture, startX: p.x, startY: p.y, dragged: false, selectOnClick };
     this.view.redraw('overlay');
@@ -322,18 +298,7 @@ export class CanvasController {
     }
     const result = press.gesture.finish(this.world(this.local(e)), press.dragged, this.modifiers(e));
     this.endGesture();
-    const store = this.app.getState();
-    if (!press.dragged && press.selectOnClick) store.select(press.selectOnClick);
-    const wanted = result.select;
-    if (result.call) {
-      const before = store.history.present;
-      if (store.execute(result.call.command, result.call.args)) {
-        if (wanted === 'added') store.select(addedBlockIds(before, this.app.getState().history.present));
-        else if (wanted) store.select(wanted);
-      }
-    } else if (wanted && wanted !== 'added') {
-      store.select(wanted);
-    }
+    commitGesture(this.app, result, press.dragged ? undefined : press.selectOnClick);
     this.view.redraw('blocks');
   }
 
