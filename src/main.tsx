@@ -3,6 +3,7 @@ import { createRoot } from 'react-dom/client';
 import { App } from './app/App';
 import { loadChecks } from './io/checksOnDemand';
 import { documentSession } from './app/session';
+import { primeTextLengths } from './app/textLengthPrimer';
 import { useEditorStore } from './store/editorStore';
 import { useAppStore } from './store/useAppStore';
 import './app/app.css';
@@ -29,4 +30,6 @@ void documentSession
     // Restore and the edit check (with the schema library) load after the first paint: edits made
     // before they arrive are checked when they do (store/appStore.ts).
     requestAnimationFrame(() => setTimeout(() => void loadChecks(), 0));
+    // The first edit after opening a whole die finds the design's text length measured (io/designTextLength.ts).
+    primeTextLengths(useAppStore);
   });

@@ -3,20 +3,13 @@ import { saveDocument, type KeyValueArea } from '../io/documentShelf';
 import type { Design } from '../model/design';
 import { clipForMessage } from '../model/messageText';
 import { UNSTORED_DOCUMENT_ID, type AppStore } from '../store/appStore';
+import { requestIdle, type IdleDeadline } from './idleTime';
 
-/** Longest wait for idle time before a save runs anyway (ms). */
-const IDLE_TIMEOUT = 2000;
 /** Where this tab remembers its document across reloads. */
 export const SESSION_DOCUMENT_KEY = 'matloom.document';
 
 /** What the keeper reports to the status line. */
 export type KeeperStatus = 'idle' | 'kept' | 'pending' | 'failed';
-
-type IdleDeadline = { timeRemaining(): number; didTimeout: boolean };
-const requestIdle: (callback: (deadline: IdleDeadline) => void) => void =
-  typeof window !== 'undefined' && 'requestIdleCallback' in window
-    ? (callback) => window.requestIdleCallback(callback, { timeout: IDLE_TIMEOUT })
-    : (callback) => setTimeout(() => callback({ timeRemaining: () => 8, didTimeout: true }), 50);
 
 /**
  * Keeps the open document in browser storage, off the edit's path: a change only marks the document
