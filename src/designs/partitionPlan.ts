@@ -50,6 +50,8 @@ export type PlanResult =
 
 /** Most mats a generated bank may have (about three blocks per mat); keeps a built design editable. */
 export const MAX_PARTITION_MATS = 16_384;
+/** Why a bank that needs more than MAX_PARTITION_MATS mats is refused. */
+const TOO_MANY_MATS = `the target needs more than ${formatWholeNumber(MAX_PARTITION_MATS)} mats of this size`;
 /** Largest target capacity the builder accepts (bits): 64 Gib. */
 export const MAX_TARGET_BITS = 2 ** 36;
 
@@ -63,8 +65,12 @@ export function losesEdgeBits(cell: CellDefinition): boolean {
   return cell.bitlineArchitecture === 'open' && !isGainCell(cell.kind);
 }
 
+const whole = (v: number, max: number) => Number.isInteger(v) && v >= 1 && v <= max;
+/** Strip sizes (m): above zero (strips) or at least zero (decoders), at most 1 mm. */
+const positive = (v: number) => Number.isFinite(v) && v > 0 && v <= 1e-3;
+const optional = (v: number) => Number.isFinite(v) && v >= 0 && v <= 1e-3;
+
 function checkSpec(spec: PartitionSpec): string | null {
-  const whole = (v: number, max: number) => Number.isInteger(v) && v >= 1 && v <= max;
   if (!whole(spec.cellsPerBitline, MAX_CELLS_PER_LINE) || !whole(spec.cellsPerWordline, MAX_CELLS_PER_LINE)) {
     return `cells per line must be whole numbers from 1 to ${MAX_CELLS_PER_LINE}`;
   }
@@ -72,8 +78,6 @@ function checkSpec(spec: PartitionSpec): string | null {
     return 'the target capacity must be a whole number of bits from 1 to 64 Gib';
   }
   const s = spec.strips;
-  const positive = (v: number) => Number.isFinite(v) && v > 0 && v <= 1e-3;
-  const optional = (v: number) => Number.isFinite(v) && v >= 0 && v <= 1e-3;
   if (!positive(s.senseAmpStripHeight) || !positive(s.wordlineDriverStripWidth)) {
     return 'sense-amplifier and driver strips need a size above zero and at most 1 mm';
   }
@@ -91,41 +95,38 @@ export function gridExtent(
   matHeight: number,
   strips: StripSizes,
 ): { width: number; height: number } {
-  // The same sums gridFloorplan uses to place the blocks, so the box agrees to the last bit.
-  const sa = strips.senseAmpStripHeight;
+  return { width: gridWidth(columns, matWidth, strips), height: gridHeight(rows, matHeight, strips) };
+}
+
+// The same sums gridFloorplan uses to place the blocks, so the box agrees to the last bit.
+function gridWidth(columns: number, matWidth: number, strips: StripSizes): number {
   const swd = strips.wordlineDriverStripWidth;
-  return {
-    width: strips.rowDecoderWidth + (columns * (matWidth + swd) + swd),
-    height: rows * (matHeight + sa) + sa + strips.columnDecoderHeight,
-  };
+  return strips.rowDecoderWidth + (columns * (matWidth + swd) + swd);
 }
 
-interface GridChoice {
-  readonly rows: number;
-  readonly columns: number;
-  readonly width: number;
-  readonly height: number;
+function gridHeight(rows: number, matHeight: number, strips: StripSizes): number {
+  const sa = strips.senseAmpStripHeight;
+  return rows * (matHeight + sa) + sa + strips.columnDecoderHeight;
 }
 
-function gridChoice(
-  rows: number,
-  columns: number,
-  matWidth: number,
-  matHeight: number,
-  strips: StripSizes,
-): GridChoice {
-  return { rows, columns, ...gridExtent(rows, columns, matWidth, matHeight, strips) };
-}
-
-/** Smaller box first; then fewer mats; then the squarer box. */
-function betterGrid(a: GridChoice, b: GridChoice): boolean {
-  const areaA = a.width * a.height;
-  const areaB = b.width * b.height;
+/** Smaller box first; then fewer mats; then the squarer box (a before b). */
+function betterGrid(
+  rowsA: number,
+  columnsA: number,
+  widthA: number,
+  heightA: number,
+  rowsB: number,
+  columnsB: number,
+  widthB: number,
+  heightB: number,
+): boolean {
+  const areaA = widthA * heightA;
+  const areaB = widthB * heightB;
   if (areaA !== areaB) return areaA < areaB;
-  const matsA = a.rows * a.columns;
-  const matsB = b.rows * b.columns;
+  const matsA = rowsA * columnsA;
+  const matsB = rowsB * columnsB;
   if (matsA !== matsB) return matsA < matsB;
-  return Math.abs(a.width - a.height) < Math.abs(b.width - b.height);
+  return Math.abs(widthA - heightA) < Math.abs(widthB - heightB);
 }
 
 /**
@@ -143,27 +144,36 @@ export function planPartition(spec: PartitionSpec): PlanResult {
   const lossRows = losesEdgeBits(spec.cell) ? 1 : 0;
   // Mats that must be readable; with an open array the edge rows add one row's worth of lost halves.
   const needed = Math.ceil(spec.targetBits / bitsPerMat);
-  const tooMany = `the target needs more than ${formatWholeNumber(MAX_PARTITION_MATS)} mats of this size`;
-  if (needed > MAX_PARTITION_MATS) return { ok: false, error: tooMany };
-  const candidates: GridChoice[] = [];
+  if (needed > MAX_PARTITION_MATS) return { ok: false, error: TOO_MANY_MATS };
+  // The best candidate so far, kept as plain numbers: the explorer plans thousands of banks per sweep.
+  let rows = 0;
+  let columns = 0;
+  let width = 0;
+  let height = 0;
+  const consider = (r: number, c: number) => {
+    if (r * c > MAX_PARTITION_MATS) return;
+    const w = gridWidth(c, g.width, spec.strips);
+    const h = gridHeight(r, g.height, spec.strips);
+    if (rows > 0 && !betterGrid(r, c, w, h, rows, columns, width, height)) return;
+    rows = r;
+    columns = c;
+    width = w;
+    height = h;
+  };
   const side = Math.ceil(Math.sqrt(needed));
   for (let k = 1; k <= side; k++) {
-    candidates.push(gridChoice(Math.ceil(needed / k) + lossRows, k, g.width, g.height, spec.strips));
-    candidates.push(gridChoice(k + lossRows, Math.ceil(needed / k), g.width, g.height, spec.strips));
+    consider(Math.ceil(needed / k) + lossRows, k);
+    consider(k + lossRows, Math.ceil(needed / k));
   }
-  let chosen: GridChoice | null = null;
-  for (const c of candidates) {
-    if (c.rows * c.columns <= MAX_PARTITION_MATS && (!chosen || betterGrid(c, chosen))) chosen = c;
-  }
-  if (!chosen) return { ok: false, error: tooMany };
-  const matCount = chosen.rows * chosen.columns;
+  if (rows === 0) return { ok: false, error: TOO_MANY_MATS };
+  const matCount = rows * columns;
   const bits = matCount * bitsPerMat;
-  const lostBits = lossRows * chosen.columns * bitsPerMat;
+  const lostBits = lossRows * columns * bitsPerMat;
   return {
     ok: true,
     plan: {
-      matRows: chosen.rows,
-      matColumns: chosen.columns,
+      matRows: rows,
+      matColumns: columns,
       matCount,
       matWidth: g.width,
       matHeight: g.height,
@@ -171,8 +181,8 @@ export function planPartition(spec: PartitionSpec): PlanResult {
       bits,
       lostBits,
       usableBits: bits - lostBits,
-      width: chosen.width,
-      height: chosen.height,
+      width,
+      height,
     },
   };
 }

@@ -38,6 +38,7 @@ export {
   type RepairMonteCarloResult,
 } from './physics/repairMonteCarlo';
 export { drivenLineTime } from './physics/rcLine';
+export { LineTimeMemo } from './physics/lineTimeMemo';
 export {
   wordlineCapacitance,
   wordlineTiming,

@@ -13,10 +13,12 @@ import {
   rowsPerRefreshCommand,
   senseAmpsOfMat,
   storedHighLevel,
+  LineTimeMemo,
   gridRepairPlan,
   matDomainShare,
   retentionTailAt,
   yieldOfDomains,
+  type CheckedFigures,
   type PartitionFigures,
   type MatFigures,
   type StoredHighLevel,
@@ -36,10 +38,12 @@ export type PartitionFiguresResult =
   | { readonly ok: false; readonly error: string };
 
 /**
- * Per-process values every point on that process shares (the stored-1 level needs a bisection), kept
- * by process and operating conditions so a sweep computes them once.
+ * Values points of a sweep share, computed once: per process and operating conditions the stored-1 level
+ * (a bisection); across the whole sweep the word lines' step responses by driver-to-line resistance ratio
+ * (a root find per ratio and level instead of one per point; the same numbers).
  */
 export class ProcessCache {
+  readonly lineTimes = new LineTimeMemo();
   private readonly entries = new Map<
     ProcessProfile,
     { operating: OperatingConditions; storedHigh: StoredHighLevel }
@@ -102,6 +106,7 @@ export function partitionFigures(
     senseAmpCount,
     geometry.bits * plan.matCount,
     shared.storedHigh,
+    cache.lineTimes,
   );
   // Every mat has strips at both bit-line ends and drivers at both word-line ends; the open-array edge
   // loss changes only the usable bits, which the plan counts.
@@ -123,11 +128,17 @@ export function partitionFigures(
     : 0;
 
   // The engine's own check rules; the representative mat loses no bits, the bank's edge rows do.
-  const { errorKinds, warningKinds } = firingKinds(
-    { ...mat, unpartneredBits: plan.lostBits },
-    { process, operating },
-    shared.storedHigh,
-  );
+  const checked: CheckedFigures = {
+    senseMarginAtRefresh: mat.senseMarginAtRefresh,
+    senseSignalAfterRefresh: mat.senseSignalAfterRefresh,
+    requiredSignal: mat.requiredSignal,
+    senseAmpFits: mat.senseAmpFits,
+    senseAmpPitchBudget: mat.senseAmpPitchBudget,
+    retentionTime: mat.retentionTime,
+    weakestRetentionTime: mat.weakestRetentionTime,
+    unpartneredBits: plan.lostBits,
+  };
+  const { errorKinds, warningKinds } = firingKinds(checked, { process, operating }, shared.storedHigh);
   // A built bank's strips chain every mat to the decoders along its edges, when it has them.
   if (!(spec.strips.rowDecoderWidth > 0)) warningKinds.push('noRowDecoder');
   if (!(spec.strips.columnDecoderHeight > 0)) warningKinds.push('noColumnDecoder');

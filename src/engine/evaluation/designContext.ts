@@ -2,6 +2,7 @@ import type { OperatingConditions } from '../../model/operating';
 import type { ProcessProfile } from '../../model/process';
 import { offsetSigmaMultiplier } from '../physics/offset';
 import type { RetentionTail } from '../physics/faultRates';
+import type { LineTimeMemo } from '../physics/lineTimeMemo';
 import { leakageAtTemperature, weakestCellLeakage } from '../physics/retention';
 import { storedHighLevel, type StoredHighLevel } from '../physics/storedLevel';
 
@@ -40,6 +41,11 @@ export interface DesignContext {
   readonly leakage: number;
   /** Leakage of the weakest cell on the die at the operating temperature (A). */
   readonly weakestLeakage: number;
+  /**
+   * Word-line step responses already found, kept across evaluations that share them (the explorer's
+   * sweep); absent, each mat finds its own. The figures are the same numbers either way.
+   */
+  readonly lineTimes?: LineTimeMemo;
 }
 
 /**
@@ -79,6 +85,7 @@ export function designContext(
   senseAmpsInFloorplan: number,
   cellsInFloorplan: number,
   storedHigh: StoredHighLevel = storedHighLevel(process),
+  lineTimes?: LineTimeMemo,
 ): DesignContext {
   const copies = operating.floorplanCopiesPerDie;
   const senseAmpsOnDie = senseAmpsInFloorplan * copies;
@@ -101,5 +108,6 @@ export function designContext(
       process.tailLeakageSpread,
       cellsOnDie,
     ),
+    lineTimes,
   };
 }

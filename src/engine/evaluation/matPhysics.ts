@@ -248,6 +248,7 @@ export function matPhysics(mat: MatKind, service: MatService, ctx: DesignContext
     outcome.wordlineVoltage,
     turnOnLevel,
     p.accessThresholdVoltage,
+    ctx.lineTimes,
   );
 
   const usableBits = usableCells(mat, service);

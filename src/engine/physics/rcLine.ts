@@ -80,15 +80,29 @@ export function drivenLineTime(
   lineResistance: number,
   lineCapacitance: number,
   fraction: number,
-  /** The line's modes when the caller asks several fractions of one line (lineModes(Rd/Rw)). */
-  knownModes?: LineModes,
+  /**
+   * s = t/(R·C) for a fraction, when the caller already knows the line's response (several fractions of
+   * one line, or a LineTimeMemo); by default from lineModes(Rd/R).
+   */
+  timeShare?: (fraction: number) => number,
 ): number {
   if (!(fraction >= 0)) return Number.NaN;
   if (fraction >= 1) return Infinity;
   if (fraction === 0 || lineCapacitance <= 0) return 0;
   if (lineResistance <= 0) return -driverResistance * lineCapacitance * Math.log1p(-fraction);
   const tau = lineResistance * lineCapacitance;
-  const modes = knownModes ?? lineModes(driverResistance / lineResistance);
+  const share = timeShare
+    ? timeShare(fraction)
+    : farEndTimeShare(lineModes(driverResistance / lineResistance), fraction);
+  return share * tau;
+}
+
+/**
+ * The dimensionless time s = t/(R·C) at which the far end of a line with these modes reaches `fraction`
+ * of its step, for 0 < fraction < 1. It depends on the line only through its modes (the ratio Rd/R), so
+ * lines of one ratio share it (LineTimeMemo).
+ */
+export function farEndTimeShare(modes: LineModes, fraction: number): number {
   // The response rises monotonically; bracket s, then bisect. The slowest mode bounds the upper end.
   const slowest = modes.rates[0] as number;
   let high = Math.max(1, (-Math.log1p(-fraction) + 5) / slowest);
@@ -99,5 +113,5 @@ export function drivenLineTime(
     if (farEndFraction(modes, mid) < fraction) low = mid;
     else high = mid;
   }
-  return ((low + high) / 2) * tau;
+  return (low + high) / 2;
 }

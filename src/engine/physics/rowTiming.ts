@@ -114,7 +114,20 @@ export function rowTiming(steps: {
   const rcd = existing(steps.wordlineOn + steps.development + steps.latch);
   const ras = existing(Math.max(rcd, steps.wordlineNinety) + steps.restore);
   const rp = existing(steps.wordlineFall + steps.equalise);
-  return { ...steps, rcd, ras, rp, rc: existing(ras + rp) };
+  // Written out field by field rather than spread: the explorer builds one per sweep point.
+  return {
+    wordlineOn: steps.wordlineOn,
+    development: steps.development,
+    latch: steps.latch,
+    wordlineNinety: steps.wordlineNinety,
+    restore: steps.restore,
+    wordlineFall: steps.wordlineFall,
+    equalise: steps.equalise,
+    rcd,
+    ras,
+    rp,
+    rc: existing(ras + rp),
+  };
 }
 
 /**

@@ -1,5 +1,6 @@
 import type { ProcessProfile } from '../../model/process';
-import { drivenLineTime, lineModes } from './rcLine';
+import type { LineTimeMemo } from './lineTimeMemo';
+import { drivenLineTime, farEndTimeShare, lineModes } from './rcLine';
 
 /** Parts of one (sub-)word line's capacitance (F). */
 export interface WordlineCapacitance {
@@ -63,6 +64,7 @@ export interface WordlineTiming {
  * @param highLevel the level the word line rises to (VPP for 1T1C, VDD for gain-cell read lines) (V).
  * @param turnOnLevel the far-end level at which the farthest cell starts to conduct (V).
  * @param offLevel the level below which a cell is isolated again (V).
+ * @param memo keeps the line's dimensionless times by Rd/Rw across calls (a sweep); the same numbers.
  */
 export function wordlineTiming(
   driverResistance: number,
@@ -71,11 +73,18 @@ export function wordlineTiming(
   highLevel: number,
   turnOnLevel: number,
   offLevel: number,
+  memo?: LineTimeMemo,
 ): WordlineTiming {
   // One set of modes serves every level of the same line.
-  const modes = lineResistance > 0 ? lineModes(driverResistance / lineResistance) : undefined;
+  const ratio = driverResistance / lineResistance;
+  let timeShare: ((fraction: number) => number) | undefined;
+  if (memo) timeShare = (fraction) => memo.timeShare(ratio, fraction);
+  else if (lineResistance > 0) {
+    const modes = lineModes(ratio);
+    timeShare = (fraction) => farEndTimeShare(modes, fraction);
+  }
   const t = (share: number) =>
-    drivenLineTime(driverResistance, lineResistance, lineCapacitance, share, modes);
+    drivenLineTime(driverResistance, lineResistance, lineCapacitance, share, timeShare);
   const turnOnShare = highLevel > 0 ? turnOnLevel / highLevel : Infinity;
   // Falling from V_high to V_off is the same curve as rising through 1 − V_off/V_high; a threshold at
   // (or rounding to) 0 V is never reached, so the fall time does not exist.
