@@ -170,7 +170,7 @@ function writeRows(table: TableInProgress, blocks: readonly Block[]): void {
 function writeRow(table: TableInProgress, i: number, block: Block): void {
   table.x[i] = block.x;
   table.y[i] = block.y;
-  table.type[i] = CODE_OF.get(block.type) ?? -1;
+  table.type[i] = typeCode(block.type);
   if (block.type !== 'mat') {
     table.width[i] = block.width;
     table.height[i] = block.height;
@@ -181,6 +181,18 @@ function writeRow(table: TableInProgress, i: number, block: Block): void {
   table.width[i] = (table.kinds[kind] as MatKind).geometry.width;
   table.height[i] = (table.kinds[kind] as MatKind).geometry.height;
   table.kindOf[i] = kind;
+}
+
+/** The last type looked up and its code: blocks come in runs of one type, so most lookups are this. */
+let lastType: BlockType | null = null;
+let lastCode = -1;
+
+function typeCode(type: BlockType): number {
+  if (type !== lastType) {
+    lastCode = CODE_OF.get(type) ?? -1;
+    lastType = type;
+  }
+  return lastCode;
 }
 
 function matKindOf(table: TableInProgress, block: Mat): number {

@@ -266,9 +266,11 @@ function facingPairs(
   // Counting sort of the strips by the rank of their start; ranks ascend with position, so ties keep it.
   const rank = new Int32Array(strips.length);
   const bucket = new Int32Array(distinct.length + 1);
+  let r = 0;
   for (let s = 0; s < strips.length; s++) {
     const start = starts[s] as number;
-    const r = start === start ? lowerBound(distinct, start) : -1;
+    // Strips of a tiled array come in rows whose starts repeat or step to the next value: try there first.
+    r = start === start ? lowerBoundFrom(distinct, start, r) : -1;
     rank[s] = r;
     if (r >= 0) (bucket[r + 1] as number)++;
   }
@@ -279,12 +281,14 @@ function facingPairs(
     const r = rank[s] as number;
     if (r >= 0) byStart[(fill[r] as number)++] = strips[s] as number;
   }
+  let first = 0;
   for (let s = 0; s < strips.length; s++) {
     const i = strips[s] as number;
     const edge = (across[i] as number) + (thickness[i] as number);
     const alongStart = along[i] as number;
     const alongEnd = alongStart + (length[i] as number);
-    for (let r = lowerBound(distinct, edge - ABUTMENT_TOLERANCE); r < distinct.length; r++) {
+    first = lowerBoundFrom(distinct, edge - ABUTMENT_TOLERANCE, first);
+    for (let r = first; r < distinct.length; r++) {
       if (!((distinct[r] as number) <= edge + ABUTMENT_TOLERANCE)) break;
       for (let q = bucket[r] as number; q < (bucket[r + 1] as number); q++) {
         const j = byStart[q] as number;
@@ -308,6 +312,19 @@ function distinctSorted(values: Float64Array): Float64Array {
     if (n === 0 || v !== sorted[n - 1]) sorted[n++] = v;
   }
   return sorted.subarray(0, n);
+}
+
+/**
+ * {@link lowerBound}, checking `guess` and `guess + 1` before searching: the same answer, found without a
+ * search when consecutive lookups land on the same or the next value.
+ */
+function lowerBoundFrom(values: Float64Array, value: number, guess: number): number {
+  const n = values.length;
+  for (let g = guess < 0 ? 0 : guess; g <= guess + 1 && g <= n; g++) {
+    if ((g === 0 || (values[g - 1] as number) < value) && (g === n || !((values[g] as number) < value)))
+      return g;
+  }
+  return lowerBound(values, value);
 }
 
 /** First index whose value is ≥ `value` in an ascending array. */

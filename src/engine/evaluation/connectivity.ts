@@ -117,7 +117,8 @@ export function matConnections(
         senseAmpStrips[senseAmpCount++] = i;
       }
     } else if (type === WORDLINE_DRIVER_STRIP_CODE || type === ROW_DECODER_CODE) {
-      for (const side of wordlineEnds) {
+      for (let e = 0; e < 2; e++) {
+        const side = wordlineEnds[e] as Side;
         if (2 * drivenCount === driven.length) {
           const bigger = new Float64Array(2 * driven.length);
           bigger.set(driven);

@@ -20,6 +20,12 @@ interface SortedEdges {
 export class DecoderEdges {
   /** Where {@link near} writes the candidates; may hold one decoder several times. */
   readonly candidates: Int32Array;
+  /**
+   * The decoders' common bounding box grown by {@link WINDOW} (m: left, top, right, bottom), or null when
+   * some decoder's edges are not finite. A block that abuts a decoder lies within the abutment tolerance
+   * of it, so a block wholly outside this box abuts none: see {@link mayAbut}.
+   */
+  private readonly reach: Float64Array | null;
 
   private constructor(
     readonly decoders: Int32Array,
@@ -30,6 +36,25 @@ export class DecoderEdges {
     private readonly unsorted: Int32Array,
   ) {
     this.candidates = new Int32Array(4 * decoders.length + unsorted.length);
+    this.reach = unsorted.length > 0 ? null : grownBounds(top, bottom, left, right);
+  }
+
+  /**
+   * False when block `i` certainly abuts no decoder: it lies wholly outside {@link reach}. True otherwise
+   * (also for a block whose edges are not numbers), and the caller's exact test decides. Two comparisons
+   * per side, so that a pass over the table asks {@link near} only about the few blocks beside a decoder.
+   */
+  mayAbut(table: BlockTable, i: number): boolean {
+    const reach = this.reach;
+    if (reach === null) return true;
+    const left = table.x[i] as number;
+    const top = table.y[i] as number;
+    return !(
+      left + (table.width[i] as number) < (reach[0] as number) ||
+      top + (table.height[i] as number) < (reach[1] as number) ||
+      left > (reach[2] as number) ||
+      top > (reach[3] as number)
+    );
   }
 
   /** The edges of the decoders of type `decoderCode`, or null when there are none. */
@@ -85,6 +110,23 @@ export class DecoderEdges {
     out.set(this.unsorted, n);
     return n + this.unsorted.length;
   }
+}
+
+/** The box from the first top and left edges to the last bottom and right edges, grown by WINDOW. */
+function grownBounds(
+  top: SortedEdges,
+  bottom: SortedEdges,
+  left: SortedEdges,
+  right: SortedEdges,
+): Float64Array | null {
+  const last = (edges: SortedEdges) => edges.at[edges.at.length - 1] as number;
+  if (top.at.length === 0) return null;
+  return Float64Array.of(
+    (left.at[0] as number) - WINDOW,
+    (top.at[0] as number) - WINDOW,
+    last(right) + WINDOW,
+    last(bottom) + WINDOW,
+  );
 }
 
 function sortedEdges(decoders: readonly number[], edge: (d: number) => number): SortedEdges {

@@ -49,7 +49,10 @@ export function reachSeeds(
   for (let i = 0; i < table.count; i++) {
     const type = table.type[i];
     if (type === decoderCode) seed[i] = 1;
-    else if (type === stripCode || (decoderCode === COLUMN_DECODER && (matIndexAt[i] as number) >= 0))
+    else if (
+      (type === stripCode || (decoderCode === COLUMN_DECODER && (matIndexAt[i] as number) >= 0)) &&
+      edges.mayAbut(table, i)
+    )
       seed[i] = seedAt(table, matIndexAt, edges, i, decoderCode, stripCode) ? 1 : 0;
   }
   return seed;

@@ -114,6 +114,8 @@ export class MatTableBuilder {
   private servingPositions: Int32Array;
   private servingUsed = 0;
   private readonly servingOffsets: Int32Array;
+  private lastFigures: MatFigures | null = null;
+  private lastIndex = -1;
 
   constructor(
     private readonly blocks: readonly Block[],
@@ -135,12 +137,15 @@ export class MatTableBuilder {
   /** Records mat k: design position, figures, unserved lines. */
   set(k: number, position: number, figures: MatFigures, unsensed: number, undriven: number): void {
     this.position[k] = position;
-    let index = this.figureIndexOf.get(figures);
+    // Mats in a row nearly always share their figures: the last answer saves a map lookup per mat.
+    let index = figures === this.lastFigures ? this.lastIndex : this.figureIndexOf.get(figures);
     if (index === undefined) {
       index = this.figures.length;
       this.figures.push(figures);
       this.figureIndexOf.set(figures, index);
     }
+    this.lastFigures = figures;
+    this.lastIndex = index;
     this.figureIndex[k] = index;
     this.unsensed[k] = unsensed;
     this.undriven[k] = undriven;

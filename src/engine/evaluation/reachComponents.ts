@@ -13,10 +13,19 @@ const MOST_PATCHED = 4096;
  */
 export class ServedMats {
   private constructor(
-    private readonly start: Int32Array,
-    private readonly list: Int32Array,
+    /** Block i's mats are `list[start[i]]` … `list[start[i + 1] − 1]`, unless it has a patched list. */
+    readonly start: Int32Array,
+    readonly list: Int32Array,
     private readonly patched: ReadonlyMap<number, Int32Array>,
   ) {}
+
+  /**
+   * The list an edit wrote for block `i`, or undefined when its mats are still those of {@link start} and
+   * {@link list}. Hot loops read those two directly: a view per block would allocate.
+   */
+  patchedMats(i: number): Int32Array | undefined {
+    return this.patched.size === 0 ? undefined : this.patched.get(i);
+  }
 
   /** Counts, then fills, per block: two passes over the serving lists. */
   static of(tableCount: number, mats: MatTable, part: ServingPart): ServedMats {
@@ -118,7 +127,7 @@ export function isReached(reach: ReachComponents, i: number): boolean {
   return l >= 0 && reach.components[l]?.seeded === true;
 }
 
-/** Scratch for the breadth-first walks, grown as needed. */
+/** Scratch for the breadth-first walks, as long as the largest table walked so far. */
 let queue = new Int32Array(1024);
 
 /**
@@ -135,39 +144,42 @@ function walk(
   served: ServedMats,
   part: ServingPart,
 ): Component {
+  // A walk labels each block once, so the queue never holds more than the table: no growth checks below,
+  // and no helper called per block (the first evaluations run before V8 has compiled anything).
+  if (queue.length < label.length) queue = new Int32Array(label.length);
+  const q = queue;
   let head = 0;
   let tail = 0;
   let seeded = false;
-  const push = (i: number) => {
-    if (tail === queue.length) {
-      const bigger = new Int32Array(2 * queue.length);
-      bigger.set(queue);
-      queue = bigger;
-    }
-    label[i] = labelNo;
-    queue[tail++] = i;
-  };
-  push(from);
+  label[from] = labelNo;
+  q[tail++] = from;
   const { servingOffsets, servingPositions, position } = mats;
   while (head < tail) {
-    const i = queue[head++] as number;
+    const i = q[head++] as number;
     if (seed[i] !== 0) seeded = true;
     const k = matIndexAt[i] as number;
     if (k >= 0) {
       const to = servingOffsets[3 * k + part + 1] as number;
       for (let p = servingOffsets[3 * k + part] as number; p < to; p++) {
         const s = servingPositions[p] as number;
-        if (label[s] !== labelNo) push(s);
+        if (label[s] === labelNo) continue;
+        label[s] = labelNo;
+        q[tail++] = s;
       }
     } else {
-      const list = served.mats(i);
-      for (let q = 0; q < list.length; q++) {
-        const m = position[list[q] as number] as number;
-        if (label[m] !== labelNo) push(m);
+      // The block's mats: its patched list after an edit, else its stretch of the table-wide list.
+      const patched = served.patchedMats(i);
+      const list = patched ?? served.list;
+      const to = patched ? patched.length : (served.start[i + 1] as number);
+      for (let n = patched ? 0 : (served.start[i] as number); n < to; n++) {
+        const m = position[list[n] as number] as number;
+        if (label[m] === labelNo) continue;
+        label[m] = labelNo;
+        q[tail++] = m;
       }
     }
   }
-  return { members: queue.slice(0, tail), seeded };
+  return { members: q.slice(0, tail), seeded };
 }
 
 /** Labels every mat's component from scratch. `seed` is per table position. */
