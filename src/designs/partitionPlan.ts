@@ -3,6 +3,7 @@ import { MAX_CELLS_PER_LINE } from '../model/blockBasics';
 import type { CellDefinition } from '../model/cell';
 import { isGainCell } from '../model/cellBasics';
 import { formatWholeNumber } from '../model/units';
+import { chooseGrid, gridHeight, gridWidth } from './gridChoice';
 
 /** Sizes of the periphery around the mats (m). Strips must be wider than zero; decoders may be absent (0). */
 export interface StripSizes {
@@ -98,43 +99,13 @@ export function gridExtent(
   return { width: gridWidth(columns, matWidth, strips), height: gridHeight(rows, matHeight, strips) };
 }
 
-// The same sums gridFloorplan uses to place the blocks, so the box agrees to the last bit.
-function gridWidth(columns: number, matWidth: number, strips: StripSizes): number {
-  const swd = strips.wordlineDriverStripWidth;
-  return strips.rowDecoderWidth + (columns * (matWidth + swd) + swd);
-}
-
-function gridHeight(rows: number, matHeight: number, strips: StripSizes): number {
-  const sa = strips.senseAmpStripHeight;
-  return rows * (matHeight + sa) + sa + strips.columnDecoderHeight;
-}
-
-/** Smaller box first; then fewer mats; then the squarer box (a before b). */
-function betterGrid(
-  rowsA: number,
-  columnsA: number,
-  widthA: number,
-  heightA: number,
-  rowsB: number,
-  columnsB: number,
-  widthB: number,
-  heightB: number,
-): boolean {
-  const areaA = widthA * heightA;
-  const areaB = widthB * heightB;
-  if (areaA !== areaB) return areaA < areaB;
-  const matsA = rowsA * columnsA;
-  const matsB = rowsB * columnsB;
-  if (matsA !== matsB) return matsA < matsB;
-  return Math.abs(widthA - heightA) < Math.abs(widthB - heightB);
-}
-
 /**
  * Chooses the grid of a bank: the fewest mats that reach the target, arranged as rows × columns to give
  * the smallest bounding box (ties: fewer mats, then the squarer box). Open 1T1C arrays need one mat row
  * more than their bits alone suggest, since the two edge rows each lose half their bits. Only grids where
  * neither dimension could shrink are tried: for each column count c the fewest rows ⌈m/c⌉ and for each
- * row count r the fewest columns ⌈m/r⌉, with c, r up to ⌈√m⌉, which covers all of them.
+ * row count r the fewest columns ⌈m/r⌉, with c, r up to ⌈√m⌉, which covers all of them (gridChoice.ts
+ * skips those a lower bound rules out).
  */
 export function planPartition(spec: PartitionSpec): PlanResult {
   const problem = checkSpec(spec);
@@ -145,27 +116,9 @@ export function planPartition(spec: PartitionSpec): PlanResult {
   // Mats that must be readable; with an open array the edge rows add one row's worth of lost halves.
   const needed = Math.ceil(spec.targetBits / bitsPerMat);
   if (needed > MAX_PARTITION_MATS) return { ok: false, error: TOO_MANY_MATS };
-  // The best candidate so far, kept as plain numbers: the explorer plans thousands of banks per sweep.
-  let rows = 0;
-  let columns = 0;
-  let width = 0;
-  let height = 0;
-  const consider = (r: number, c: number) => {
-    if (r * c > MAX_PARTITION_MATS) return;
-    const w = gridWidth(c, g.width, spec.strips);
-    const h = gridHeight(r, g.height, spec.strips);
-    if (rows > 0 && !betterGrid(r, c, w, h, rows, columns, width, height)) return;
-    rows = r;
-    columns = c;
-    width = w;
-    height = h;
-  };
-  const side = Math.ceil(Math.sqrt(needed));
-  for (let k = 1; k <= side; k++) {
-    consider(Math.ceil(needed / k) + lossRows, k);
-    consider(k + lossRows, Math.ceil(needed / k));
-  }
-  if (rows === 0) return { ok: false, error: TOO_MANY_MATS };
+  const chosen = chooseGrid(needed, lossRows, g.width, g.height, spec.strips, MAX_PARTITION_MATS);
+  if (!chosen) return { ok: false, error: TOO_MANY_MATS };
+  const { rows, columns, width, height } = chosen;
   const matCount = rows * columns;
   const bits = matCount * bitsPerMat;
   const lostBits = lossRows * columns * bitsPerMat;
