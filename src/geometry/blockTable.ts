@@ -78,18 +78,20 @@ export function withBlocksReplaced(
 ): BlockTable {
   const blocks = replaced ?? base.blocks.slice();
   if (!replaced) for (const [i, block] of replacements) (blocks as Block[])[i] = block;
-  const table: TableInProgress = {
-    ...base,
+  const table = new TableRows(
+    base.count,
     blocks,
-    x: base.x.slice(),
-    y: base.y.slice(),
-    width: base.width.slice(),
-    height: base.height.slice(),
-    type: base.type.slice(),
-    kindOf: base.kindOf.slice(),
-    kinds: base.kinds.slice(),
-    kindIndex: new Map(base.kindIndex),
-  };
+    base.x.slice(),
+    base.y.slice(),
+    base.width.slice(),
+    base.height.slice(),
+    base.type.slice(),
+    base.kindOf.slice(),
+    base.kinds.slice(),
+    base.featureSize,
+    base.cells,
+    new Map(base.kindIndex),
+  );
   for (const [i, block] of replacements) writeRow(table, i, block);
   return table;
 }
@@ -117,20 +119,52 @@ function emptyTable(
   cells: ReadonlyMap<string, CellDefinition>,
 ): TableInProgress {
   const n = blocks.length;
-  return {
-    count: n,
+  return new TableRows(
+    n,
     blocks,
-    x: new Float64Array(n),
-    y: new Float64Array(n),
-    width: new Float64Array(n),
-    height: new Float64Array(n),
-    type: new Uint8Array(n),
-    kindOf: new Int32Array(n),
-    kinds: [],
+    new Float64Array(n),
+    new Float64Array(n),
+    new Float64Array(n),
+    new Float64Array(n),
+    new Uint8Array(n),
+    new Int32Array(n),
+    [],
     featureSize,
     cells,
-    kindIndex: new Map(),
-  };
+    new Map(),
+  );
+}
+
+/**
+ * A table's storage as a class, not an object literal: the second time a literal runs, V8 gives its
+ * objects a more general shape (it keeps a template from then on), and every compiled function that had
+ * read the first shape is thrown away. That was most of the engine in a session's second evaluation.
+ * Instances of a class keep one shape. (The same holds for the mat kinds and the mat and neighbour tables.)
+ */
+class TableRows implements TableInProgress {
+  constructor(
+    readonly count: number,
+    readonly blocks: readonly Block[],
+    readonly x: Float64Array,
+    readonly y: Float64Array,
+    readonly width: Float64Array,
+    readonly height: Float64Array,
+    readonly type: Uint8Array,
+    readonly kindOf: Int32Array,
+    readonly kinds: MatKind[],
+    readonly featureSize: number,
+    readonly cells: ReadonlyMap<string, CellDefinition>,
+    readonly kindIndex: Map<string, number>,
+  ) {}
+}
+
+/** A mat kind (a class for the reason given at {@link TableRows}). */
+class KindOfMat implements MatKind {
+  constructor(
+    readonly block: Mat,
+    readonly cell: CellDefinition,
+    readonly geometry: MatGeometry,
+  ) {}
 }
 
 function writeRows(table: TableInProgress, blocks: readonly Block[]): void {
@@ -202,7 +236,7 @@ function matKindOf(table: TableInProgress, block: Mat): number {
   if (known !== undefined) return known;
   const cell = table.cells.get(block.cellId);
   if (!cell) throw new Error(`mat "${block.id}" uses unknown cell "${block.cellId}"`);
-  table.kinds.push({ block, cell, geometry: matGeometry(block, cell, table.featureSize) });
+  table.kinds.push(new KindOfMat(block, cell, matGeometry(block, cell, table.featureSize)));
   table.kindIndex.set(key, table.kinds.length - 1);
   return table.kinds.length - 1;
 }

@@ -1,5 +1,6 @@
 import type { Boxes } from './blockTable';
 import { PairBuffer, runningTotals, type NeighbourTable } from './neighbourRows';
+import { groupedGridPairs, sharesBeyond } from './groupedPairs';
 import { ScratchBuffer } from './scratchBuffer';
 
 /** Whether a meeting pair of boxes belongs in the table. */
@@ -37,6 +38,27 @@ export function neighbourTable(
   const grid = gridShape(boxes, bounds);
   const cells = binBoxes(boxes, margin, grid);
   gridPairs(boxes, margin, keep, grid, cells, pairs);
+  return pairs.table(n);
+}
+
+/**
+ * {@link neighbourTable} with the rule evaluation needs, decided inside the pair pass instead of by a
+ * call per pair: boxes of different groups that meet (as there), and boxes of one group only when they
+ * share more than `margin` in both directions (an overlap, not a touch; such boxes always meet). Equals
+ * `neighbourTable(boxes, margin, (i, j) => group[i] !== group[j] || sharedBeyond(i, j))` (tested).
+ */
+export function groupedNeighbourTable(boxes: Boxes, margin: number, group: Uint8Array): NeighbourTable {
+  const n = boxes.count;
+  const pairs = new PairBuffer();
+  if (n < 2) return pairs.table(n);
+  const bounds = extent(boxes, margin);
+  if (!bounds) {
+    allPairs(boxes, margin, (i, j) => group[i] !== group[j] || sharesBeyond(boxes, i, j, margin), pairs);
+    return pairs.table(n);
+  }
+  const grid = gridShape(boxes, bounds);
+  const cells = binBoxes(boxes, margin, grid);
+  groupedGridPairs(boxes, margin, group, grid, cells, pairs);
   return pairs.table(n);
 }
 
@@ -80,14 +102,14 @@ function allPairs(boxes: Boxes, margin: number, keep: PairFilter, pairs: PairBuf
   }
 }
 
-interface Grid extends Extent {
+export interface Grid extends Extent {
   readonly columns: number;
   readonly rows: number;
   readonly cellSize: number;
 }
 
 /** Which cells each grown box covers (a column and row range), and the boxes of each cell. */
-interface Binned {
+export interface Binned {
   readonly firstColumn: Int32Array;
   readonly lastColumn: Int32Array;
   readonly firstRow: Int32Array;

@@ -10,6 +10,15 @@ export interface NeighbourTable {
   readonly list: Int32Array;
 }
 
+/** A table as a class, so that it keeps one shape from call to call (see blockTable.ts, TableRows). */
+class NeighbourRows implements NeighbourTable {
+  constructor(
+    readonly start: Int32Array,
+    readonly end: Int32Array,
+    readonly list: Int32Array,
+  ) {}
+}
+
 /** Block i's neighbours as a plain array (for tests and small callers; hot loops read the table). */
 export function neighboursOf(table: NeighbourTable, i: number): number[] {
   return Array.from(table.list.subarray(table.start[i] ?? 0, table.end[i] ?? 0));
@@ -36,7 +45,7 @@ export function neighbourTableOf(
     end[i] = at;
     sortRange(list, start[i] as number, at);
   }
-  return { start, end, list };
+  return new NeighbourRows(start, end, list);
 }
 
 /** Reused between calls (see ScratchBuffer); none of these leave this module. */
@@ -79,7 +88,7 @@ function rowsOfPairs(first: Int32Array, second: Int32Array, count: number, n: nu
   starts.set(ends.subarray(0, n));
   scatterPairs(first, second, count, starts, list);
   sortRows(list, starts, ends, n);
-  return { start: starts.slice(0, n), end: ends, list };
+  return new NeighbourRows(starts.slice(0, n), ends, list);
 }
 
 /** Degree of every box, counted into `ends[i]`. */

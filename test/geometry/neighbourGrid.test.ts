@@ -1,7 +1,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { boxesOf } from '../../src/geometry/blockTable';
-import { neighbourTable } from '../../src/geometry/neighbourGrid';
+import { groupedNeighbourTable, neighbourTable } from '../../src/geometry/neighbourGrid';
+import { sharesBeyond } from '../../src/geometry/groupedPairs';
 import { neighbourTableOf, neighboursOf } from '../../src/geometry/neighbourRows';
 import { ABUTMENT_TOLERANCE, type Rect } from '../../src/geometry/rect';
 import { buildSpatialIndex } from '../../src/geometry/spatialIndex';
@@ -82,6 +83,39 @@ describe('neighbourTable: every pair of touching boxes in one grid pass', () => 
       }),
       { numRuns: 200 },
     );
+  });
+
+  it('grouped: meeting pairs across groups and overlapping pairs within one, as the filter gives them', () => {
+    const groupedRects = fc.array(
+      fc.record({ rect: fc.oneof(latticeRect, wildRect), group: fc.integer({ min: 0, max: 1 }) }),
+      { maxLength: 100 },
+    );
+    fc.assert(
+      fc.property(groupedRects, fc.constantFrom(0, ABUTMENT_TOLERANCE, 1e-6), (items, margin) => {
+        const boxes = boxesOf(items.map((item) => item.rect));
+        const group = Uint8Array.from(items.map((item) => item.group));
+        const keep = (i: number, j: number) => group[i] !== group[j] || sharesBeyond(boxes, i, j, margin);
+        const grouped = groupedNeighbourTable(boxes, margin, group);
+        const filtered = neighbourTable(boxes, margin, keep);
+        expect(items.map((_, i) => neighboursOf(grouped, i))).toEqual(
+          items.map((_, i) => neighboursOf(filtered, i)),
+        );
+      }),
+      { numRuns: 400 },
+    );
+  }, 60_000);
+
+  it('grouped: a tiled array keeps mat–strip touches and drops strip corners that only touch', () => {
+    // Mat 0 with a strip above (1) and one to its left (2); the strips meet at a corner only, and strip 3
+    // overlaps strip 1 by half its width.
+    const rects: Rect[] = [
+      { x: 2e-6, y: 1e-6, width: 10e-6, height: 10e-6 },
+      { x: 2e-6, y: 0, width: 10e-6, height: 1e-6 },
+      { x: 0, y: 1e-6, width: 2e-6, height: 10e-6 },
+      { x: 7e-6, y: 0, width: 10e-6, height: 1e-6 },
+    ];
+    const table = groupedNeighbourTable(boxesOf(rects), ABUTMENT_TOLERANCE, Uint8Array.of(1, 0, 0, 0));
+    expect(rects.map((_, i) => neighboursOf(table, i))).toEqual([[1, 2, 3], [0, 3], [0], [0, 1]]);
   });
 
   it('reports abutting blocks and not blocks a gap apart', () => {

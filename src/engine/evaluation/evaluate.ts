@@ -1,5 +1,5 @@
 import { blockTable, kindAt, MAT_CODE, type BlockTable, type MatKind } from '../../geometry/blockTable';
-import { neighbourTable } from '../../geometry/neighbourGrid';
+import { groupedNeighbourTable } from '../../geometry/neighbourGrid';
 import type { NeighbourTable } from '../../geometry/neighbourRows';
 import { ABUTMENT_TOLERANCE } from '../../geometry/rect';
 import type { Design } from '../../model/design';
@@ -9,7 +9,7 @@ import { layoutState } from './layoutFindings';
 import { emptyConnections, matConnections, type MatConnections } from './connectivity';
 import { designContext as contextOf, type DesignContext } from './designContext';
 import { matPhysics, senseAmpsOfMat } from './matPhysics';
-import { findPositionedOverlaps, overlapAreaAt } from './overlaps';
+import { findPositionedOverlaps } from './overlaps';
 import { rememberReportState } from './reportState';
 import type { MatFigures, MatReport, Report } from './report';
 import { matAt, matIndexOf, MatTableBuilder } from './matTable';
@@ -109,11 +109,11 @@ export function evaluateMatAt(
  * check). Two strips touching at a corner, or mats side by side, serve nothing and are left out.
  */
 export function evaluationNeighbours(table: BlockTable): NeighbourTable {
-  return neighbourTable(
-    table,
-    ABUTMENT_TOLERANCE,
-    (i, j) => (table.type[i] === MAT_CODE) !== (table.type[j] === MAT_CODE) || overlapAreaAt(table, i, j) > 0,
-  );
+  // Mats in one group, every other block in the other: pairs across the groups that meet are kept, pairs
+  // within one only when they overlap (overlapAreaAt > 0: more than the tolerance both ways).
+  const isMat = new Uint8Array(table.count);
+  for (let i = 0; i < table.count; i++) if (table.type[i] === MAT_CODE) isMat[i] = 1;
+  return groupedNeighbourTable(table, ABUTMENT_TOLERANCE, isMat);
 }
 
 /**

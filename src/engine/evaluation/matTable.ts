@@ -103,6 +103,24 @@ export function wordlineDriverIdsOf(mats: MatTable, k: number): string[] {
   return idsBetween(mats, mats.servingOffsets[3 * k + 1] ?? 0, mats.servingOffsets[3 * k + 2] ?? 0);
 }
 
+/**
+ * A finished table as a class, so that it keeps one shape from call to call (see geometry/blockTable.ts,
+ * TableRows): the layout checks and totals read it in their hot loops.
+ */
+class FilledMatTable implements MatTable {
+  constructor(
+    readonly count: number,
+    readonly blocks: readonly Block[],
+    readonly position: Int32Array,
+    readonly figureIndex: Int32Array,
+    readonly figures: readonly MatFigures[],
+    readonly unsensedBitlines: Float64Array,
+    readonly undrivenWordlines: Int32Array,
+    readonly servingPositions: Int32Array,
+    readonly servingOffsets: Int32Array,
+  ) {}
+}
+
 /** Fills a mat table, mat by mat in any order, or by copying mats of an earlier table over the same blocks. */
 export class MatTableBuilder {
   private readonly position: Int32Array;
@@ -196,17 +214,17 @@ export class MatTableBuilder {
   }
 
   finish(): MatTable {
-    return {
-      count: this.count,
-      blocks: this.blocks,
-      position: this.position,
-      figureIndex: this.figureIndex,
-      figures: this.figures,
-      unsensedBitlines: this.unsensed,
-      undrivenWordlines: this.undriven,
-      servingPositions: this.servingPositions.subarray(0, this.servingUsed),
-      servingOffsets: this.servingOffsets,
-    };
+    return new FilledMatTable(
+      this.count,
+      this.blocks,
+      this.position,
+      this.figureIndex,
+      this.figures,
+      this.unsensed,
+      this.undriven,
+      this.servingPositions.subarray(0, this.servingUsed),
+      this.servingOffsets,
+    );
   }
 
   private appendServing(position: number): void {
