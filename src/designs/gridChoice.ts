@@ -54,76 +54,98 @@ export function chooseGrid(
   strips: StripSizes,
   maxMats: number,
 ): GridChoice | null {
-  let rows = 0;
-  let columns = 0;
-  let width = 0;
-  let height = 0;
-  let area = Infinity;
-  /** Where the best stands in the candidate list (2k for family A, 2k + 1 for B): first wins a tie. */
-  let position = 0;
-  const consider = (r: number, c: number, at: number) => {
-    if (r * c > maxMats) return;
-    const w = gridWidth(c, matWidth, strips);
-    const h = gridHeight(r, matHeight, strips);
-    const a = w * h;
-    if (rows > 0) {
-      if (a !== area) {
-        if (a > area) return;
-      } else if (r * c !== rows * columns) {
-        if (r * c > rows * columns) return;
-      } else {
-        const squareness = Math.abs(w - h);
-        const best = Math.abs(width - height);
-        if (squareness > best || (squareness === best && at > position)) return;
-      }
-    }
-    rows = r;
-    columns = c;
-    width = w;
-    height = h;
-    area = a;
-    position = at;
-  };
   const side = Math.ceil(Math.sqrt(needed));
-  const alpha = strips.rowDecoderWidth + strips.wordlineDriverStripWidth;
-  const beta = matWidth + strips.wordlineDriverStripWidth;
-  const delta = matHeight + strips.senseAmpStripHeight;
-  const gamma = lossRows * delta + strips.senseAmpStripHeight + strips.columnDecoderHeight;
-  const beyond = (bound: number) => bound * (1 - BOUND_ALLOWANCE) > area;
+  const swd = strips.wordlineDriverStripWidth;
+  const sa = strips.senseAmpStripHeight;
+  const alpha = strips.rowDecoderWidth + swd;
+  const beta = matWidth + swd;
+  const delta = matHeight + sa;
+  const gamma = lossRows * delta + sa + strips.columnDecoderHeight;
+  const best: Best = { rows: 0, columns: 0, width: 0, height: 0, area: Infinity, position: 0 };
+  const search = { needed, lossRows, side, strips, beta, delta, maxMats, best };
+  walkFamily(search, false, Math.sqrt((alpha * delta * needed) / (beta * gamma)));
+  walkFamily(search, true, Math.sqrt((beta * gamma * needed) / (alpha * delta)));
+  return best.rows > 0
+    ? { rows: best.rows, columns: best.columns, width: best.width, height: best.height }
+    : null;
+}
 
-  // Family A: k columns, ⌈m/k⌉ + L rows.
-  const starA = Math.sqrt((alpha * delta * needed) / (beta * gamma));
-  const boundA = (k: number) =>
-    gridWidth(k, matWidth, strips) * gridHeight(needed / k + lossRows, matHeight, strips);
-  walk(side, starA, boundA, beyond, (k) => consider(Math.ceil(needed / k) + lossRows, k, 2 * k));
-  // Family B: k + L rows, ⌈m/k⌉ columns.
-  const starB = Math.sqrt((beta * gamma * needed) / (alpha * delta));
-  const boundB = (k: number) =>
-    gridWidth(needed / k, matWidth, strips) * gridHeight(k + lossRows, matHeight, strips);
-  walk(side, starB, boundB, beyond, (k) => consider(k + lossRows, Math.ceil(needed / k), 2 * k + 1));
+/** The best grid so far, and where it stands in the candidate list (2k for family A, 2k + 1 for B). */
+interface Best {
+  rows: number;
+  columns: number;
+  width: number;
+  height: number;
+  area: number;
+  position: number;
+}
 
-  return rows > 0 ? { rows, columns, width, height } : null;
+interface GridSearch {
+  readonly needed: number;
+  readonly lossRows: number;
+  readonly side: number;
+  readonly strips: StripSizes;
+  /** mat width + driver strip, mat height + sense-amplifier strip (m) */
+  readonly beta: number;
+  readonly delta: number;
+  readonly maxMats: number;
+  readonly best: Best;
 }
 
 /**
- * Visits k in 1 … side outward from the whole number nearest `star` (the bound's minimum), stopping in
- * each direction once k is at least one step past `star` and the bound at k is beyond the best.
+ * Visits one family's k in 1 … side outward from the whole number nearest `star` (its bound's minimum).
+ * A k whose bound is already beyond the best is skipped, and once k is also at least one step past
+ * `star`, so is every k further out in that direction. No closures, one call per candidate built:
+ * the explorer plans thousands of banks per sweep, mostly before the engine has optimised this code.
  */
-function walk(
-  side: number,
-  star: number,
-  bound: (k: number) => number,
-  beyond: (bound: number) => boolean,
-  visit: (k: number) => void,
-): void {
+function walkFamily(s: GridSearch, familyB: boolean, star: number): void {
+  const { needed, lossRows, side, strips, beta, delta } = s;
   // A star that is not a finite number (a zero strip sum) gives no shortcut: every k is visited.
   const start = Number.isFinite(star) ? Math.min(side, Math.max(1, Math.round(star))) : 1;
-  for (let k = start; k <= side; k++) {
-    visit(k);
-    if (k >= star + 1 && beyond(bound(k))) break;
+  for (let step = 1; step >= -1; step -= 2) {
+    for (let k = step === 1 ? start : start - 1; k >= 1 && k <= side; k += step) {
+      // The bound: family A (k columns) with m/k + L rows, family B (k + L rows) with m/k columns. The
+      // same sums as gridWidth and gridHeight, in the same order.
+      const boundColumns = familyB ? needed / k : k;
+      const boundRows = familyB ? k + lossRows : needed / k + lossRows;
+      const bound =
+        (strips.rowDecoderWidth + (boundColumns * beta + strips.wordlineDriverStripWidth)) *
+        (boundRows * delta + strips.senseAmpStripHeight + strips.columnDecoderHeight);
+      if (bound * (1 - BOUND_ALLOWANCE) > s.best.area) {
+        if (step === 1 ? k >= star + 1 : k <= star - 1) break;
+        continue;
+      }
+      const r = familyB ? k + lossRows : Math.ceil(needed / k) + lossRows;
+      const c = familyB ? Math.ceil(needed / k) : k;
+      consider(s, r, c, familyB ? 2 * k + 1 : 2 * k);
+    }
   }
-  for (let k = start - 1; k >= 1; k--) {
-    visit(k);
-    if (k <= star - 1 && beyond(bound(k))) break;
+}
+
+/** Keeps r × c when it has few enough mats and beats the best: smaller box, fewer mats, squarer, listed first. */
+function consider(s: GridSearch, r: number, c: number, position: number): void {
+  if (r * c > s.maxMats) return;
+  // gridWidth and gridHeight, with the mat-plus-strip sums they would form (beta, delta) formed once.
+  const strips = s.strips;
+  const w = strips.rowDecoderWidth + (c * s.beta + strips.wordlineDriverStripWidth);
+  const h = r * s.delta + strips.senseAmpStripHeight + strips.columnDecoderHeight;
+  const a = w * h;
+  const best = s.best;
+  if (best.rows > 0) {
+    if (a !== best.area) {
+      if (a > best.area) return;
+    } else if (r * c !== best.rows * best.columns) {
+      if (r * c > best.rows * best.columns) return;
+    } else {
+      const squareness = Math.abs(w - h);
+      const bestSquareness = Math.abs(best.width - best.height);
+      if (squareness > bestSquareness || (squareness === bestSquareness && position > best.position)) return;
+    }
   }
+  best.rows = r;
+  best.columns = c;
+  best.width = w;
+  best.height = h;
+  best.area = a;
+  best.position = position;
 }

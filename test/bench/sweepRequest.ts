@@ -1,7 +1,9 @@
+import { demoDesign } from '../../src/designs/demoDesign';
 import { steppedValues, sweepSize, type SweepRequest } from '../../src/explore/sweep';
+import { defaultSweepSettings, sweepRequestFor } from '../../src/explore/sweepSettings';
 import { BUILTIN_CELLS, BUILTIN_PROCESSES, DEFAULT_OPERATING } from '../../src/model/builtins';
 
-/** The benchmark sweep: 32 × 18 cell counts × 6 cells × 3 processes = 10,368 points for a 256 Mib bank. */
+/** The benchmark sweep: 32 × 18 cell counts × every built-in cell × 3 processes for a 256 Mib bank. */
 export const BENCH_REQUEST: SweepRequest = {
   targetBits: 256 * 2 ** 20,
   strips: {
@@ -21,3 +23,20 @@ export const BENCH_POINTS = sweepSize(BENCH_REQUEST);
 
 /** Points per chunk, as the app's worker posts them. */
 export const BENCH_CHUNK = 512;
+
+/**
+ * The sweep `npm run bench:sweep` runs in Chromium (e2e/measure/sweepInBrowser.ts), built the same way:
+ * the explorer's defaults on the demo design, cells per bit line 8 … 1024 by 8, and word-line counts
+ * 64, 128, … until the sweep has at least 10,000 points (12,288 with the built-in cells and processes).
+ */
+function explorerRequest(): SweepRequest {
+  const design = demoDesign();
+  const settings = { ...defaultSweepSettings(design), cellsPerBitline: { from: 8, to: 1024, step: 8 } };
+  const withCounts = (counts: number) =>
+    sweepRequestFor({ ...settings, cellsPerWordline: { from: 64, to: 64 * counts, step: 64 } }, design);
+  const perWordlineCount = sweepSize(withCounts(2)) / 2;
+  return withCounts(Math.max(1, Math.ceil(10_000 / perWordlineCount)));
+}
+
+export const EXPLORER_REQUEST: SweepRequest = explorerRequest();
+export const EXPLORER_POINTS = sweepSize(EXPLORER_REQUEST);
