@@ -8,78 +8,23 @@
  * thread's work over the same span (the DevTools protocol's TaskDuration: every task the page's main
  * thread ran, script, style, layout and paint). A measurement, not a test: it prints figures beside
  * their goals and asserts nothing.
+ *
+ * PROFILE=1 also takes a CPU profile of the page's main thread over each run (the profiler slows the
+ * page, so the times printed then are not the bench's), writes the last one to
+ * /tmp/matloom-sweep.cpuprofile and prints where the time went (build with `npx vite build --minify
+ * false` to keep the names).
  */
-import type { CDPSession, Page } from '@playwright/test';
+import { writeFileSync } from 'node:fs';
+import type { CDPSession } from '@playwright/test';
 import { base, launchChromium, startServer } from './benchPage';
+import { profiled, summarise, type Profile } from './cpuProfile';
+import { prepareSweepPage, SWEEP_TIMES_SCRIPT, TARGET_POINTS } from './sweepPage';
 import { benchLine, HEADER, loadAverage, stats } from './paintTiming';
 
 const RUNS = Number(process.env.SWEEP_RUNS ?? 5);
-/** The goal's sweep size. */
-const TARGET_POINTS = 10_000;
+const PROFILE = process.env.PROFILE === '1';
 const GOAL_TOTAL_MS = 500;
 const GOAL_MAIN_THREAD_MS = 100;
-
-/**
- * Records the click on Run, the paint after the status turns to done, and the worker's own sweep time
- * (the elapsed seconds its done message reports; a wrapped Worker listens in) in window.__sweepTimes.
- */
-const SWEEP_TIMES_SCRIPT = `(() => {
-  const times = { start: NaN, painted: NaN, workerSweep: NaN };
-  window.__sweepTimes = times;
-  const NativeWorker = window.Worker;
-  window.Worker = class extends NativeWorker {
-    constructor(...args) {
-      super(...args);
-      this.addEventListener('message', (event) => {
-        if (event.data?.type === 'done') times.workerSweep = event.data.elapsed * 1000;
-      });
-    }
-  };
-  document.querySelector('[data-testid="run-sweep"]').addEventListener('click', () => {
-    times.start = performance.now();
-  }, { capture: true, once: true });
-  const root = document.querySelector('[data-testid="explorer"]');
-  const observer = new MutationObserver(() => {
-    const status = root.querySelector('[data-testid="sweep-status"]');
-    if (status?.getAttribute('data-status') !== 'done') return;
-    observer.disconnect();
-    // The frame after the done state paints; a task posted from its animation frame runs after the paint.
-    requestAnimationFrame(() => {
-      const channel = new MessageChannel();
-      channel.port1.onmessage = () => { times.painted = performance.now(); };
-      channel.port2.postMessage(0);
-    });
-  });
-  observer.observe(root, { attributes: true, subtree: true, childList: true, attributeFilter: ['data-status'] });
-})()`;
-
-async function setRange(page: Page, which: 'bl' | 'wl', from: number, to: number, step: number) {
-  for (const [key, value] of [
-    ['from', from],
-    ['to', to],
-    ['step', step],
-  ] as const) {
-    const input = page.getByTestId(`sweep-${which}-${key}`);
-    await input.fill(String(value));
-    await input.press('Enter');
-  }
-}
-
-async function sweepSize(page: Page): Promise<number> {
-  const text = (await page.getByTestId('sweep-size').textContent()) ?? '';
-  return Number(text.replace(/[^\d]/g, ''));
-}
-
-/** Cells per bit line 8…1024 by 8 (128 values), then as many word-line counts as bring the size to at least 10,000. */
-async function aboutTenThousand(page: Page): Promise<number> {
-  await setRange(page, 'bl', 8, 1024, 8);
-  // Two word-line counts (a range of one value is not a range the field takes).
-  await setRange(page, 'wl', 64, 128, 64);
-  const perWordlineCount = (await sweepSize(page)) / 2;
-  const counts = Math.max(1, Math.ceil(TARGET_POINTS / perWordlineCount));
-  await setRange(page, 'wl', 64, 64 * counts, 64);
-  return sweepSize(page);
-}
 
 async function mainThreadMs(cdp: CDPSession): Promise<number> {
   const { metrics } = (await cdp.send('Performance.getMetrics')) as {
@@ -95,22 +40,25 @@ async function main() {
   const mainThread: number[] = [];
   const workerSweep: number[] = [];
   let points = 0;
+  let profile: Profile | null = null;
   try {
     for (let r = 0; r < RUNS; r++) {
       const context = await browser.newContext({ viewport: { width: 1400, height: 860 } });
       const page = await context.newPage();
       await page.goto(`${base}/`);
-      await page.getByTestId('view-explorer').click();
-      await page.getByTestId('explorer').waitFor();
-      points = await aboutTenThousand(page);
+      points = await prepareSweepPage(page);
       await page.evaluate(SWEEP_TIMES_SCRIPT);
       const cdp = await context.newCDPSession(page);
       await cdp.send('Performance.enable');
       const before = await mainThreadMs(cdp);
-      await page.getByTestId('run-sweep').click();
-      await page.waitForFunction('!Number.isNaN(window.__sweepTimes.painted)', undefined, {
-        timeout: 120_000,
-      });
+      const sweep = async () => {
+        await page.getByTestId('run-sweep').click();
+        await page.waitForFunction('!Number.isNaN(window.__sweepTimes.painted)', undefined, {
+          timeout: 120_000,
+        });
+      };
+      if (PROFILE) profile = await profiled(cdp, sweep);
+      else await sweep();
       const after = await mainThreadMs(cdp);
       const t = (await page.evaluate('window.__sweepTimes')) as {
         start: number;
@@ -145,6 +93,11 @@ async function main() {
   // Part of the total, no goal of its own: from the worker's start message to its done message.
   console.log(benchLine(`sweep, ${n} points: the worker's own sweep`, stats(workerSweep), {}));
   console.log(`load average at the end ${loadAverage()}`);
+  if (profile) {
+    writeFileSync('/tmp/matloom-sweep.cpuprofile', JSON.stringify(profile));
+    console.log('CPU profile of the last run (main thread) in /tmp/matloom-sweep.cpuprofile');
+    summarise(profile);
+  }
 }
 
 main().catch((error: unknown) => {

@@ -6,8 +6,9 @@ import {
   MARKER_OUTLINE,
   MARKER_SHAPES,
   MARKER_SIZE,
-  type ScatterDatum,
+  type ScatterPoints,
 } from './chartStyle';
+import type { ScreenPositions } from './screenPositions';
 import { stampSprite, type Sprite } from './spriteRaster';
 
 /** Side of the square sprite holding one marker (px). */
@@ -51,8 +52,8 @@ interface Drawn {
   readonly ratio: number;
   /** The scales' domains and the size the points were placed with; another key means a full redraw. */
   readonly placement: string;
-  /** Whether each drawn point was drawn infeasible (1) or not (0). */
-  readonly infeasible: Uint8Array;
+  /** The points' source and how many of them are drawn. */
+  readonly source: object;
   readonly count: number;
 }
 
@@ -61,21 +62,19 @@ interface Drawn {
  * would make every update of a running sweep slow; here each marker is a sprite stamped into one pixel
  * buffer (see spriteRaster.ts), infeasible points first so the feasible ones lie on top.
  *
- * While the data only grows at its end (`growing`, a running sweep) and the placement (scales and size)
- * stays the same, only the new points are stamped onto the kept pixels; any other change, and the final
- * update, redraw every point in the order above, so the finished chart does not depend on how the points
- * arrived.
+ * While the data only grows at its end (`growing`, a running sweep: same source, more points) and the
+ * placement (scales and size) stays the same, only the new points are stamped onto the kept pixels; any
+ * other change, and the final update, redraw every point in the order above, so the finished chart does
+ * not depend on how the points arrived.
  */
 export function PointsCanvas(props: {
-  readonly data: readonly ScatterDatum[];
-  readonly screen: readonly [number, number][];
+  readonly data: ScatterPoints;
+  readonly screen: ScreenPositions;
   readonly width: number;
   readonly height: number;
-  /** Identifies the scales the screen positions come from. */
-  readonly placement: string;
   readonly growing: boolean;
 }) {
-  const { data, screen, width, height, placement, growing } = props;
+  const { data, screen, width, height, growing } = props;
   const ref = useRef<HTMLCanvasElement>(null);
   const drawn = useRef<Drawn | null>(null);
   useEffect(() => {
@@ -85,13 +84,21 @@ export function PointsCanvas(props: {
     const ratio = window.devicePixelRatio || 1;
     const w = Math.round(width * ratio);
     const h = Math.round(height * ratio);
-    const key = `${placement}|${w}x${h}`;
+    const key = `${screen.placement}|${w}x${h}`;
     const kept = drawn.current;
     const from =
-      growing && kept && kept.ratio === ratio && kept.placement === key && keptStillHolds(kept, data)
+      growing &&
+      kept &&
+      kept.ratio === ratio &&
+      kept.placement === key &&
+      kept.source === data.source &&
+      kept.count <= data.count
         ? kept.count
         : 0;
-    const image = from > 0 && kept ? kept.image : context.createImageData(w, h);
+    // A full redraw clears the kept buffer rather than allocating another of the same size.
+    let image = kept?.image;
+    if (!image || image.width !== w || image.height !== h) image = context.createImageData(w, h);
+    else if (from === 0) image.data.fill(0);
     if (canvas.width !== w) canvas.width = w;
     if (canvas.height !== h) canvas.height = h;
     const clip = {
@@ -100,8 +107,6 @@ export function PointsCanvas(props: {
       x1: Math.round((width - MARGIN.right) * ratio),
       y1: Math.round((height - MARGIN.bottom) * ratio),
     };
-    const infeasibleFlags = new Uint8Array(data.length);
-    if (from > 0 && kept) infeasibleFlags.set(kept.infeasible.subarray(0, from));
     // Sprites by colour and shape for this draw, so the shared cache's text key is not built per point.
     const local = new Map<string, Sprite[]>();
     const spriteFor = (fill: string, shape: number, infeasible: boolean): Sprite => {
@@ -109,37 +114,28 @@ export function PointsCanvas(props: {
       if (!byShape) local.set(fill, (byShape = []));
       return (byShape[shape] ??= markerSprite(fill, shape, infeasible, ratio));
     };
-    for (const infeasible of [true, false]) {
-      for (let i = from; i < data.length; i++) {
-        const d = data[i];
-        if (!d || (d.state === 'infeasible') !== infeasible) continue;
-        infeasibleFlags[i] = infeasible ? 1 : 0;
-        const p = screen[i];
-        if (!p || !Number.isFinite(p[0]) || !Number.isFinite(p[1])) continue;
+    const count = Math.min(data.count, screen.count);
+    for (const infeasible of [1, 0]) {
+      for (let i = from; i < count; i++) {
+        if ((data.infeasible[i] ?? 0) !== infeasible) continue;
+        const px = screen.x[i] ?? Number.NaN;
+        const py = screen.y[i] ?? Number.NaN;
+        if (!Number.isFinite(px) || !Number.isFinite(py)) continue;
         // Infeasible points share one grey sprite set; INFEASIBLE_FILL is no series colour.
         const sprite = spriteFor(
-          infeasible ? INFEASIBLE_FILL : d.colour,
-          d.shape % MARKER_SHAPES.length,
-          infeasible,
+          infeasible ? INFEASIBLE_FILL : data.colourOf(data.series[i] ?? 0),
+          (data.shape[i] ?? 0) % MARKER_SHAPES.length,
+          infeasible === 1,
         );
-        const left = Math.round((MARGIN.left + p[0]) * ratio - sprite.width / 2);
-        const top = Math.round((MARGIN.top + p[1]) * ratio - sprite.height / 2);
+        const left = Math.round((MARGIN.left + px) * ratio - sprite.width / 2);
+        const top = Math.round((MARGIN.top + py) * ratio - sprite.height / 2);
         stampSprite(image.data, w, clip, sprite, left, top);
       }
     }
     context.putImageData(image, 0, 0);
-    drawn.current = { image, ratio, placement: key, infeasible: infeasibleFlags, count: data.length };
-  }, [data, screen, width, height, placement, growing]);
+    drawn.current = { image, ratio, placement: key, source: data.source, count };
+  }, [data, screen, width, height, growing]);
   return (
     <canvas ref={ref} className="layer points-canvas" style={{ width, height }} data-testid="points-canvas" />
   );
-}
-
-/** Whether the kept pixels still show the first points of `data`: as many or more, each as feasible as before. */
-function keptStillHolds(kept: Drawn, data: readonly ScatterDatum[]): boolean {
-  if (data.length < kept.count) return false;
-  for (let i = 0; i < kept.count; i++) {
-    if ((data[i]?.state === 'infeasible' ? 1 : 0) !== kept.infeasible[i]) return false;
-  }
-  return true;
 }

@@ -1,12 +1,13 @@
-export type { PointState, ScatterDatum } from './chartStyle';
+export type { ScatterPoints } from './chartStyle';
 export { markerPath } from './chartStyle';
 import { curveStepAfter, line, symbol } from 'd3';
 import { useImperativeHandle, useMemo, useRef, type ReactNode, type Ref } from 'react';
 import { scatterSvgText, svgToPng } from './chartExport';
-import { axisScale, axisTicks, type AxisScale } from './chartScale';
-import { MARGIN, MARKER_SHAPES, type ScatterDatum } from './chartStyle';
+import { axisTicks, extentScale, grownExtent, type AxisScale, type ShownExtent } from './chartScale';
+import { MARGIN, MARKER_SHAPES, type ScatterPoints } from './chartStyle';
 import { nearestIndex, type NearestIndex } from './nearestPoint';
 import { PointsCanvas } from './PointsCanvas';
+import { placePoints, type ScreenPositions } from './screenPositions';
 import { useElementSize } from './useElementSize';
 
 /** A stretch of one axis where points are infeasible, shaded across the plot. */
@@ -24,7 +25,7 @@ export interface AxisSpec {
 }
 
 interface ScatterChartProps {
-  readonly data: readonly ScatterDatum[];
+  readonly data: ScatterPoints;
   /** Indices of the front, in drawing order along x. */
   readonly front: readonly number[];
   readonly x: AxisSpec;
@@ -37,7 +38,10 @@ interface ScatterChartProps {
   renderTooltip(index: number): ReactNode;
   /** Receives the chart's picture exports. */
   readonly exportRef?: Ref<ScatterExport>;
-  /** True while the data only grows at its end (a running sweep): the canvas then draws only new points. */
+  /**
+   * True while the data only grows at its end (a running sweep): the axes then grow in steps, with room
+   * ahead, so that the canvas stamps only the new points; once false the axes fit the points exactly.
+   */
   readonly growing?: boolean;
 }
 
@@ -77,42 +81,49 @@ export function ScatterChart(props: ScatterChartProps) {
   const plotW = Math.max(10, width - MARGIN.left - MARGIN.right);
   const plotH = Math.max(10, height - MARGIN.top - MARGIN.bottom);
 
+  // While growing, each axis keeps the extent it showed as long as the points fit in it.
+  const shown = useRef<{ source: object; x: ShownExtent; y: ShownExtent } | null>(null);
+  const kept = shown.current && shown.current.source === data.source ? shown.current : null;
+  const [xMin, xMax] = data.extent.x;
+  const [yMin, yMax] = data.extent.y;
+  const xShown = growing
+    ? grownExtent(kept?.x ?? null, xMin, xMax)
+    : { min: xMin, max: xMax, log: undefined };
+  const yShown = growing
+    ? grownExtent(kept?.y ?? null, yMin, yMax)
+    : { min: yMin, max: yMax, log: undefined };
+  if (growing) shown.current = { source: data.source, x: xShown as ShownExtent, y: yShown as ShownExtent };
+  else shown.current = null;
   const xs = useMemo(
-    () =>
-      axisScale(
-        data.map((d) => d.x),
-        0,
-        plotW,
-      ),
-    [data, plotW],
+    () => extentScale(xShown.min, xShown.max, 0, plotW, xShown.log),
+    [xShown.min, xShown.max, xShown.log, plotW],
   );
   const ys = useMemo(
-    () =>
-      axisScale(
-        data.map((d) => d.y),
-        plotH,
-        0,
-      ),
-    [data, plotH],
+    () => extentScale(yShown.min, yShown.max, plotH, 0, yShown.log),
+    [yShown.min, yShown.max, yShown.log, plotH],
   );
-  const screen = useMemo(
-    () => data.map((d): [number, number] => [xs.scale(d.x), ys.scale(d.y)]),
-    [data, xs, ys],
-  );
-  // The pick grid is built on the first pointer move after the points change, not on every update.
-  const picker = useRef<{ screen: readonly [number, number][]; index: NearestIndex } | null>(null);
   const placement = `${String(xs.scale.domain())}|${String(ys.scale.domain())}|${xs.log}|${ys.log}|${plotW}x${plotH}`;
+  // Positions of the points already placed are kept while the placement holds; only new points are placed.
+  const placed = useRef<ScreenPositions | null>(null);
+  const screen = useMemo(() => {
+    placed.current = placePoints(placed.current, data, xs, ys, placement);
+    return placed.current;
+  }, [data, xs, ys, placement]);
+  // The pick grid is built on the first pointer move after the points change, not on every update.
+  const picker = useRef<{ screen: ScreenPositions; index: NearestIndex } | null>(null);
 
   const nearest = (event: React.PointerEvent | React.MouseEvent): number | null => {
     const rect = event.currentTarget.getBoundingClientRect();
     if (picker.current?.screen !== screen)
-      picker.current = { screen, index: nearestIndex(screen, PICK_RADIUS) };
+      picker.current = { screen, index: nearestIndex(screen.count, screen.x, screen.y, PICK_RADIUS) };
     return picker.current.index.find(event.clientX - rect.left, event.clientY - rect.top);
   };
 
   const frontPath = useMemo(() => {
-    const points = front.map((i) => screen[i]).filter((p) => p !== undefined);
-    return points.length > 1 ? (line().curve(curveStepAfter)(points.map((p) => [p[0], p[1]])) ?? '') : '';
+    const points = front
+      .filter((i) => i < screen.count)
+      .map((i): [number, number] => [screen.x[i] ?? Number.NaN, screen.y[i] ?? Number.NaN]);
+    return points.length > 1 ? (line().curve(curveStepAfter)(points) ?? '') : '';
   }, [front, screen]);
 
   useImperativeHandle(exportRef, () => {
@@ -129,11 +140,13 @@ export function ScatterChart(props: ScatterChartProps) {
     };
   }, [data, screen, width, height]);
 
-  const hoveredAt = hovered !== null ? screen[hovered] : undefined;
-  const hoveredDatum = hovered !== null ? data[hovered] : undefined;
+  const hoveredAt: [number, number] | undefined =
+    hovered !== null && hovered < screen.count
+      ? [screen.x[hovered] ?? Number.NaN, screen.y[hovered] ?? Number.NaN]
+      : undefined;
 
   return (
-    <div className="scatter" ref={boxRef} data-testid="scatter" data-points={data.length}>
+    <div className="scatter" ref={boxRef} data-testid="scatter" data-points={data.count}>
       {width > 0 && (
         <>
           <svg ref={backRef} className="layer" width={width} height={height} aria-hidden="true">
@@ -142,14 +155,7 @@ export function ScatterChart(props: ScatterChartProps) {
               <Grid xs={xs} ys={ys} width={plotW} height={plotH} />
             </g>
           </svg>
-          <PointsCanvas
-            data={data}
-            screen={screen}
-            width={width}
-            height={height}
-            placement={placement}
-            growing={growing}
-          />
+          <PointsCanvas data={data} screen={screen} width={width} height={height} growing={growing} />
           <svg
             ref={frontRef}
             className="layer"
@@ -162,24 +168,20 @@ export function ScatterChart(props: ScatterChartProps) {
               <Axes xs={xs} ys={ys} x={x} y={y} width={plotW} height={plotH} />
               {frontPath && <path className="front-line" d={frontPath} data-testid="front-line" />}
               {front.map((i) => {
-                const p = screen[i];
-                const d = data[i];
-                if (!p || !d) return null;
+                if (i >= screen.count) return null;
                 return (
                   <path
                     key={i}
                     className="front-point"
                     data-testid="front-point"
                     data-index={i}
-                    d={FRONT_SHAPE_PATHS[d.shape % FRONT_SHAPE_PATHS.length]}
-                    transform={`translate(${p[0]},${p[1]})`}
-                    fill={d.colour}
+                    d={FRONT_SHAPE_PATHS[(data.shape[i] ?? 0) % FRONT_SHAPE_PATHS.length]}
+                    transform={`translate(${screen.x[i]},${screen.y[i]})`}
+                    fill={data.colourOf(data.series[i] ?? 0)}
                   />
                 );
               })}
-              {hoveredAt && hoveredDatum && (
-                <circle className="hover-ring" cx={hoveredAt[0]} cy={hoveredAt[1]} r={9} />
-              )}
+              {hoveredAt && <circle className="hover-ring" cx={hoveredAt[0]} cy={hoveredAt[1]} r={9} />}
               <rect
                 className="pick-surface"
                 width={plotW}

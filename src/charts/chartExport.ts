@@ -5,8 +5,9 @@ import {
   MARKER_SIZE,
   markerPath,
   PLOT_BACKGROUND,
-  type ScatterDatum,
+  type ScatterPoints,
 } from './chartStyle';
+import type { ScreenPositions } from './screenPositions';
 
 const SVG_NS = 'http://www.w3.org/2000/svg';
 /** Presentation properties copied from the live chart, so the file looks the same without the page's CSS. */
@@ -50,8 +51,8 @@ function inlinedCopy(layer: SVGSVGElement): SVGGElement {
  */
 export function scatterSvgText(
   layers: { readonly back: SVGSVGElement; readonly front: SVGSVGElement },
-  data: readonly ScatterDatum[],
-  screen: readonly (readonly [number, number])[],
+  data: ScatterPoints,
+  screen: ScreenPositions,
   width: number,
   height: number,
 ): string {
@@ -78,22 +79,24 @@ export function scatterSvgText(
   svg.append(clip);
   const points = document.createElementNS(SVG_NS, 'g');
   points.setAttribute('clip-path', 'url(#plot-area)');
+  const count = Math.min(data.count, screen.count);
   for (const infeasible of [true, false]) {
-    data.forEach((d, i) => {
-      if ((d.state === 'infeasible') !== infeasible) return;
-      const p = screen[i];
-      if (!p || !Number.isFinite(p[0]) || !Number.isFinite(p[1])) return;
+    for (let i = 0; i < count; i++) {
+      if ((data.infeasible[i] === 1) !== infeasible) continue;
+      const px = screen.x[i] ?? Number.NaN;
+      const py = screen.y[i] ?? Number.NaN;
+      if (!Number.isFinite(px) || !Number.isFinite(py)) continue;
       const marker = document.createElementNS(SVG_NS, 'path');
-      marker.setAttribute('d', markerPath(d.shape, MARKER_SIZE));
-      marker.setAttribute('transform', `translate(${MARGIN.left + p[0]},${MARGIN.top + p[1]})`);
-      marker.setAttribute('fill', infeasible ? INFEASIBLE_FILL : d.colour);
+      marker.setAttribute('d', markerPath(data.shape[i] ?? 0, MARKER_SIZE));
+      marker.setAttribute('transform', `translate(${MARGIN.left + px},${MARGIN.top + py})`);
+      marker.setAttribute('fill', infeasible ? INFEASIBLE_FILL : data.colourOf(data.series[i] ?? 0));
       marker.setAttribute('fill-opacity', infeasible ? '0.45' : '0.9');
       if (!infeasible) {
         marker.setAttribute('stroke', MARKER_OUTLINE);
         marker.setAttribute('stroke-width', '0.7');
       }
       points.append(marker);
-    });
+    }
   }
   svg.append(points);
   svg.append(inlinedCopy(layers.front));

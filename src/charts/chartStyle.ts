@@ -8,16 +8,29 @@ import {
   symbolWye,
 } from 'd3';
 
-/** How a point is drawn: on the front, feasible, or shaded out by a constraint or a failing check. */
-export type PointState = 'front' | 'feasible' | 'infeasible';
-
-export interface ScatterDatum {
-  readonly x: number;
-  readonly y: number;
-  readonly colour: string;
+/**
+ * A scatter's points as columns: the first `count` entries of each array. Columns, not an object per
+ * point, so a chart of 100,000 points costs no allocation per point and a growing one costs only its new
+ * points.
+ */
+export interface ScatterPoints {
+  /**
+   * Who filled the arrays: while an update has the same source as the one before, its points are the
+   * earlier ones (unchanged) followed by new ones, so what was drawn of them still holds.
+   */
+  readonly source: object;
+  readonly count: number;
+  readonly x: ArrayLike<number>;
+  readonly y: ArrayLike<number>;
+  /** 1 where the point is shaded out (a constraint or a failing check), drawn grey and under the rest. */
+  readonly infeasible: ArrayLike<number>;
+  /** Colour series of each point, coloured by `colourOf`. */
+  readonly series: ArrayLike<number>;
   /** Index into the marker shapes (one per series, e.g. per process). */
-  readonly shape: number;
-  readonly state: PointState;
+  readonly shape: ArrayLike<number>;
+  colourOf(series: number): string;
+  /** Least and greatest finite x and y among the points (Infinity / −Infinity when there are none). */
+  readonly extent: { readonly x: readonly [number, number]; readonly y: readonly [number, number] };
 }
 
 /** Space around the plot for ticks and axis titles (px). */

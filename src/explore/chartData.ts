@@ -34,8 +34,14 @@ export const LIMIT_LABELS = {
 export type InfeasibleReason =
   { readonly check: FindingKind } | { readonly limit: keyof typeof LIMIT_LABELS };
 
+/** The figures feasibility depends on. */
+export type FeasibilityFigures = Pick<PartitionFigures, 'errorKinds' | 'senseMargin' | 'wordlineDelay'>;
+
 /** Every reason a planned point is infeasible; empty when it is feasible. */
-export function infeasibleReasons(figures: PartitionFigures, limits: FeasibilityLimits): InfeasibleReason[] {
+export function infeasibleReasons(
+  figures: FeasibilityFigures,
+  limits: FeasibilityLimits,
+): InfeasibleReason[] {
   const reasons: InfeasibleReason[] = figures.errorKinds.map((check) => ({ check }));
   if (!(figures.senseMargin >= limits.minMargin)) reasons.push({ limit: 'minMargin' });
   if (!(figures.wordlineDelay <= limits.maxDelay)) reasons.push({ limit: 'maxDelay' });

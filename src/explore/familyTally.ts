@@ -1,6 +1,19 @@
 import { checkLabel, type FindingKind } from '../engine';
-import { infeasibleReasons, LIMIT_LABELS, type FeasibilityLimits, type InfeasibleReason } from './chartData';
-import type { SweepPoint } from './sweep';
+import {
+  infeasibleReasons,
+  LIMIT_LABELS,
+  type FeasibilityFigures,
+  type FeasibilityLimits,
+  type InfeasibleReason,
+} from './chartData';
+
+/** What a tally reads of a sweep point (a SweepPoint will do; SweepTable.tallyPoints() makes lighter ones). */
+export interface TallyPoint {
+  readonly cellIndex: number;
+  readonly processIndex: number;
+  /** Null when the point has no plan. */
+  readonly figures: FeasibilityFigures | null;
+}
 
 /**
  * Why whole families of a sweep are infeasible. A family is one cell of the sweep (one series colour
@@ -19,55 +32,86 @@ export interface FamilyTally {
   readonly limits: ReadonlyMap<keyof typeof LIMIT_LABELS, number>;
 }
 
-/** Tallies the points by `familyOf` (a whole number per family), in family order; empty families are left out. */
-function talliesBy(
-  points: readonly SweepPoint[],
-  limits: FeasibilityLimits,
-  familyOf: (p: SweepPoint) => number,
-): (FamilyTally & { readonly family: number })[] {
-  const byFamily = new Map<
-    number,
-    {
-      cellIndex: number;
-      points: number;
-      feasible: number;
-      unplanned: number;
-      checks: Map<FindingKind, number>;
-      limits: Map<keyof typeof LIMIT_LABELS, number>;
-    }
-  >();
-  for (const p of points) {
-    const family = familyOf(p);
-    let t = byFamily.get(family);
-    if (!t) {
-      t = {
-        cellIndex: p.cellIndex,
-        points: 0,
-        feasible: 0,
-        unplanned: 0,
-        checks: new Map(),
-        limits: new Map(),
-      };
-      byFamily.set(family, t);
-    }
-    t.points++;
-    if (!p.figures) {
-      t.unplanned++;
-      continue;
-    }
-    const reasons: InfeasibleReason[] = infeasibleReasons(p.figures, limits);
-    if (reasons.length === 0) t.feasible++;
-    for (const r of reasons) {
-      if ('check' in r) t.checks.set(r.check, (t.checks.get(r.check) ?? 0) + 1);
-      else t.limits.set(r.limit, (t.limits.get(r.limit) ?? 0) + 1);
-    }
+interface Counts {
+  cellIndex: number;
+  points: number;
+  feasible: number;
+  unplanned: number;
+  checks: Map<FindingKind, number>;
+  limits: Map<keyof typeof LIMIT_LABELS, number>;
+}
+
+/** Room for process indices in a cell × process key. */
+const PROCESS_KEY_SPAN = 1 << 16;
+
+/**
+ * The tallies of a sweep per cell and per cell × process, taken point by point: the chart model adds each
+ * point as it arrives (chartModelBuilder.ts), so the sentences at the end need no pass over every point.
+ */
+export class FamilyTallier {
+  private readonly byCell = new Map<number, Counts>();
+  private readonly byCellProcess = new Map<number, Counts>();
+
+  constructor(readonly limits: FeasibilityLimits) {}
+
+  add(point: TallyPoint): void {
+    const reasons: InfeasibleReason[] | null = point.figures
+      ? infeasibleReasons(point.figures, this.limits)
+      : null;
+    count(this.byCell, point.cellIndex, point.cellIndex, reasons);
+    count(
+      this.byCellProcess,
+      point.cellIndex * PROCESS_KEY_SPAN + point.processIndex,
+      point.cellIndex,
+      reasons,
+    );
   }
-  return [...byFamily.entries()].sort(([a], [b]) => a - b).map(([family, t]) => ({ family, ...t }));
+
+  /** Every family (cell) with points, in cell order. */
+  cells(): FamilyTally[] {
+    return sorted(this.byCell).map(([, t]) => ({ ...t }));
+  }
+
+  /** Every cell × process pair with points, in cell then process order. */
+  cellProcesses(): CellProcessTally[] {
+    return sorted(this.byCellProcess).map(([key, t]) => ({ ...t, processIndex: key % PROCESS_KEY_SPAN }));
+  }
+}
+
+function count(
+  tallies: Map<number, Counts>,
+  key: number,
+  cellIndex: number,
+  reasons: InfeasibleReason[] | null,
+) {
+  let t = tallies.get(key);
+  if (!t) {
+    t = { cellIndex, points: 0, feasible: 0, unplanned: 0, checks: new Map(), limits: new Map() };
+    tallies.set(key, t);
+  }
+  t.points++;
+  if (reasons === null) {
+    t.unplanned++;
+    return;
+  }
+  if (reasons.length === 0) t.feasible++;
+  for (const r of reasons) {
+    if ('check' in r) t.checks.set(r.check, (t.checks.get(r.check) ?? 0) + 1);
+    else t.limits.set(r.limit, (t.limits.get(r.limit) ?? 0) + 1);
+  }
+}
+
+const sorted = (tallies: Map<number, Counts>) => [...tallies.entries()].sort(([a], [b]) => a - b);
+
+function tallierOf(points: readonly TallyPoint[], limits: FeasibilityLimits): FamilyTallier {
+  const tallier = new FamilyTallier(limits);
+  for (const p of points) tallier.add(p);
+  return tallier;
 }
 
 /** Tallies every family of the points, in cell order; families without points are left out. */
-export function familyTallies(points: readonly SweepPoint[], limits: FeasibilityLimits): FamilyTally[] {
-  return talliesBy(points, limits, (p) => p.cellIndex);
+export function familyTallies(points: readonly TallyPoint[], limits: FeasibilityLimits): FamilyTally[] {
+  return tallierOf(points, limits).cells();
 }
 
 /** One cell on one process: a family's tally split by process. */
@@ -78,13 +122,10 @@ export interface CellProcessTally extends FamilyTally {
 
 /** Tallies every cell × process pair of the points, in cell then process order. */
 export function cellProcessTallies(
-  points: readonly SweepPoint[],
+  points: readonly TallyPoint[],
   limits: FeasibilityLimits,
-  processCount: number,
 ): CellProcessTally[] {
-  return talliesBy(points, limits, (p) => p.cellIndex * processCount + p.processIndex).map(
-    ({ family, ...t }) => ({ ...t, processIndex: family % processCount }),
-  );
+  return tallierOf(points, limits).cellProcesses();
 }
 
 /**
@@ -119,16 +160,25 @@ export function familyInfeasibleSentence(name: string, t: FamilyTally): string |
  * the retention check; feasible on 40 nm."); processes on which it fails alike share one sentence.
  */
 export function infeasibleFamilySentences(
-  points: readonly SweepPoint[],
+  points: readonly TallyPoint[],
   cellNames: readonly string[],
   limits: FeasibilityLimits,
   processNames: readonly string[] = [],
 ): string[] {
+  return familySentences(tallierOf(points, limits), cellNames, processNames);
+}
+
+/** infeasibleFamilySentences() from tallies already taken. */
+export function familySentences(
+  tallier: FamilyTallier,
+  cellNames: readonly string[],
+  processNames: readonly string[] = [],
+): string[] {
   const cellName = (i: number) => cellNames[i] ?? `cell ${i + 1}`;
   const processName = (i: number) => processNames[i] ?? `process ${i + 1}`;
-  const byProcess = processNames.length > 1 ? cellProcessTallies(points, limits, processNames.length) : [];
+  const byProcess = processNames.length > 1 ? tallier.cellProcesses() : [];
   const sentences: string[] = [];
-  for (const t of familyTallies(points, limits)) {
+  for (const t of tallier.cells()) {
     const whole = familyInfeasibleSentence(cellName(t.cellIndex), t);
     if (whole !== null) {
       sentences.push(whole);

@@ -1,4 +1,5 @@
-import type { SweepPoint, SweepRequest } from './sweep';
+import type { SweepRequest } from './sweep';
+import type { SweepChunk } from './sweepColumns';
 
 /** Messages between the app and the sweep worker. */
 export type SweepCommand = { readonly type: 'start'; readonly runId: number; readonly request: SweepRequest };
@@ -9,7 +10,8 @@ export type SweepReport =
       readonly runId: number;
       readonly done: number;
       readonly total: number;
-      readonly points: readonly SweepPoint[];
+      /** The chunk's points as columns (sweepColumns.ts); its buffers are transferred, not copied. */
+      readonly chunk: SweepChunk;
     }
   | { readonly type: 'done'; readonly runId: number; readonly total: number; readonly elapsed: number }
   | { readonly type: 'failed'; readonly runId: number; readonly error: string };

@@ -1,14 +1,15 @@
 /**
  * The sweep's Web Worker: a thin shell around runSweepRange(), which is pure and tested in Node. It
- * assesses the points chunk by chunk and posts each chunk with the progress; the app cancels a sweep by
- * terminating the worker.
+ * assesses the points chunk by chunk and posts each chunk with the progress as typed-array columns whose
+ * buffers it hands over (sweepColumns.ts); the app cancels a sweep by terminating the worker.
  */
 import { ProcessCache } from './partitionFigures';
 import { runSweepRange, sweepSize } from './sweep';
+import { chunkBuffers, encodeSweepChunk, SweepTextTables } from './sweepColumns';
 import { SWEEP_CHUNK, type SweepCommand, type SweepReport } from './sweepProtocol';
 
 interface WorkerScope {
-  postMessage(message: SweepReport): void;
+  postMessage(message: SweepReport, transfer?: Transferable[]): void;
   addEventListener(type: 'message', listener: (event: MessageEvent<SweepCommand>) => void): void;
 }
 
@@ -22,15 +23,13 @@ scope.addEventListener('message', (event) => {
     const started = performance.now();
     const total = sweepSize(request);
     const cache = new ProcessCache();
+    const tables = new SweepTextTables();
     for (let start = 0; start < total; start += SWEEP_CHUNK) {
-      const points = runSweepRange(request, start, start + SWEEP_CHUNK, cache);
-      scope.postMessage({
-        type: 'progress',
-        runId,
-        done: Math.min(total, start + SWEEP_CHUNK),
-        total,
-        points,
-      });
+      const chunk = encodeSweepChunk(runSweepRange(request, start, start + SWEEP_CHUNK, cache), tables);
+      scope.postMessage(
+        { type: 'progress', runId, done: Math.min(total, start + SWEEP_CHUNK), total, chunk },
+        chunkBuffers(chunk),
+      );
     }
     scope.postMessage({ type: 'done', runId, total, elapsed: (performance.now() - started) / 1000 });
   } catch (error) {

@@ -1,7 +1,8 @@
 import { create } from 'zustand';
 import type { FigureKey } from '../engine';
 import { DEFAULT_MAX_WORDLINE_DELAY } from '../explore/chartData';
-import type { SweepPoint, SweepRequest } from '../explore/sweep';
+import type { SweepRequest } from '../explore/sweep';
+import type { SweepTable } from '../explore/sweepColumns';
 import type { SweepCommand, SweepReport } from '../explore/sweepProtocol';
 import type { SweepSettings } from '../explore/sweepSettings';
 
@@ -17,7 +18,14 @@ export interface SweepRun {
   readonly id: number;
   readonly status: SweepStatus;
   readonly request: SweepRequest | null;
-  readonly points: readonly SweepPoint[];
+  /**
+   * Every point received so far, as columns; it only grows while the run lasts (a new run gets a new
+   * table); null before the first run. Build a point object with `table.point(row)` where one is needed.
+   */
+  readonly table: SweepTable | null;
+  /** Rows of the table the view shows: changes at each flush, a few times a second while running. */
+  readonly shown: number;
+  /** Points assessed when the view last flushed (the live count is in `progress`). */
   readonly done: number;
   readonly total: number;
   /** Wall time from start to the last point (s), once done. */
@@ -56,6 +64,8 @@ export interface ExploreState {
   readonly yAxis: FigureKey;
   readonly constraints: Constraints;
   readonly run: SweepRun;
+  /** Points assessed so far, updated with every chunk the worker posts (the progress bar reads it). */
+  readonly progress: { readonly done: number; readonly total: number };
   /** The variant last built from a point, to confirm what happened. */
   readonly lastBuilt: { readonly pointIndex: number; readonly name: string } | null;
 
@@ -63,7 +73,11 @@ export interface ExploreState {
   setSettings(settings: SweepSettings): void;
   setAxes(axes: { xAxis?: FigureKey; yAxis?: FigureKey }): void;
   setConstraints(patch: Partial<Constraints>): void;
-  startSweep(request: SweepRequest): void;
+  /**
+   * Starts a sweep whose points go into `table` (an empty one; the caller makes it, so the column code
+   * loads with the explorer rather than with the app).
+   */
+  startSweep(request: SweepRequest, table: SweepTable): void;
   cancelSweep(): void;
   noteBuilt(built: { pointIndex: number; name: string } | null): void;
 }
@@ -72,7 +86,8 @@ const IDLE: SweepRun = {
   id: 0,
   status: 'idle',
   request: null,
-  points: [],
+  table: null,
+  shown: 0,
   done: 0,
   total: 0,
   elapsed: null,
@@ -88,6 +103,12 @@ const IDLE: SweepRun = {
  */
 export const SWEEP_FLUSH_INTERVAL = 250;
 const FLUSH_MS_PER_POINT = 1 / 50;
+/**
+ * The progress bar moves at most this often (ms). Each move is a frame of its own (style, layers,
+ * compositing: a few ms on a loaded machine), so moving it at each of a sweep's chunks would cost more
+ * than the chart's updates.
+ */
+export const SWEEP_PROGRESS_INTERVAL = 200;
 
 export function createExploreStore(
   workerFactory: SweepWorkerFactory = browserSweepWorker,
@@ -95,24 +116,30 @@ export function createExploreStore(
 ) {
   let worker: SweepWorker | null = null;
   let startedAt = 0;
-  let pending: SweepPoint[] = [];
   let pendingDone = 0;
+  let pendingTotal = 0;
   let flushTimer: ReturnType<typeof setTimeout> | null = null;
+  let progressTimer: ReturnType<typeof setTimeout> | null = null;
   const stopWorker = () => {
     worker?.terminate();
     worker = null;
     if (flushTimer !== null) clearTimeout(flushTimer);
+    if (progressTimer !== null) clearTimeout(progressTimer);
     flushTimer = null;
+    progressTimer = null;
   };
 
   return create<ExploreState>()((set, get) => {
+    const showProgress = () => {
+      progressTimer = null;
+      set({ progress: { done: pendingDone, total: pendingTotal } });
+    };
     const flush = () => {
       flushTimer = null;
       const run = get().run;
-      if (pending.length === 0 && pendingDone === run.done) return;
-      const points = pending;
-      pending = [];
-      set({ run: { ...run, done: pendingDone, points: [...run.points, ...points] } });
+      const count = run.table?.count ?? 0;
+      if (run.shown === count && pendingDone === run.done) return;
+      set({ run: { ...run, done: pendingDone, shown: count } });
     };
     return {
       view: 'floorplan',
@@ -121,6 +148,7 @@ export function createExploreStore(
       yAxis: 'senseMargin',
       constraints: { minMargin: null, maxDelay: DEFAULT_MAX_WORDLINE_DELAY },
       run: IDLE,
+      progress: { done: 0, total: 0 },
       lastBuilt: null,
 
       setView(view) {
@@ -135,13 +163,17 @@ export function createExploreStore(
       setConstraints(patch) {
         set({ constraints: { ...get().constraints, ...patch } });
       },
-      startSweep(request) {
+      startSweep(request, table) {
         stopWorker();
         const id = get().run.id + 1;
         startedAt = performance.now();
-        pending = [];
         pendingDone = 0;
-        set({ run: { ...IDLE, id, status: 'running', request }, lastBuilt: null });
+        pendingTotal = 0;
+        set({
+          run: { ...IDLE, id, status: 'running', request, table },
+          progress: { done: 0, total: 0 },
+          lastBuilt: null,
+        });
         const w = workerFactory();
         worker = w;
         w.onmessage = (event) => {
@@ -149,15 +181,30 @@ export function createExploreStore(
           const run = get().run;
           if (report.runId !== run.id || run.status !== 'running') return;
           if (report.type === 'progress') {
-            pending.push(...report.points);
+            table.reserve(report.total);
+            table.append(report.chunk);
             pendingDone = report.done;
+            pendingTotal = report.total;
             if (run.total !== report.total) set({ run: { ...run, total: report.total } });
-            if (flushInterval <= 0) flush();
-            else flushTimer ??= setTimeout(flush, flushInterval + run.points.length * FLUSH_MS_PER_POINT);
+            if (flushInterval <= 0) {
+              showProgress();
+              flush();
+            } else {
+              progressTimer ??= setTimeout(showProgress, SWEEP_PROGRESS_INTERVAL);
+              flushTimer ??= setTimeout(flush, flushInterval + run.shown * FLUSH_MS_PER_POINT);
+            }
           } else if (report.type === 'done') {
             stopWorker();
-            flush();
-            set({ run: { ...get().run, status: 'done', elapsed: (performance.now() - startedAt) / 1000 } });
+            // The last points and the done state in one update: one render, one full redraw.
+            set({
+              run: {
+                ...run,
+                status: 'done',
+                done: pendingDone,
+                shown: table.count,
+                elapsed: (performance.now() - startedAt) / 1000,
+              },
+            });
           } else {
             stopWorker();
             set({ run: { ...run, status: 'failed', error: report.error } });

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { axisScale, axisTicks } from '../../src/charts/chartScale';
+import { axisScale, axisTicks, extentScale, grownExtent } from '../../src/charts/chartScale';
 import { nearestIndex } from '../../src/charts/nearestPoint';
 
 describe('chart scales', () => {
@@ -31,11 +31,45 @@ describe('chart scales', () => {
   });
 });
 
+describe('growing axis extent', () => {
+  it('keeps the shown extent while the points fit, grows past them when they do not, and fits them when none is shown', () => {
+    const first = grownExtent(null, 1, 2);
+    expect(first.min).toBeLessThan(1);
+    expect(first.max).toBeGreaterThan(2);
+    expect(first.log).toBe(false);
+    expect(grownExtent(first, 1.1, 2.05)).toBe(first);
+    const wider = grownExtent(first, 1, 5);
+    expect(wider.max).toBeGreaterThan(5);
+    expect(wider.min).toBe(first.min);
+    // Past a factor of 30 the axis turns logarithmic, and grows by decades.
+    const log = grownExtent(wider, 1e-3, 5);
+    expect(log.log).toBe(true);
+    expect(log.min).toBeLessThan(1e-3);
+    expect(log.min).toBeGreaterThan(0);
+    expect(grownExtent(log, 2e-3, 4)).toBe(log);
+  });
+
+  it('gives the same scale from an extent as from the values', () => {
+    const values = [3e-15, 8e-14, 1.2e-13, Number.NaN];
+    expect(extentScale(3e-15, 1.2e-13, 0, 400).scale.domain()).toEqual(
+      axisScale(values, 0, 400).scale.domain(),
+    );
+    expect(extentScale(0.01, 0.2, 400, 0).scale.domain()).toEqual(
+      axisScale([0.2, 0.01], 400, 0).scale.domain(),
+    );
+  });
+});
+
 describe('nearest point', () => {
   it('finds the closest point within the radius, else nothing (brute force)', () => {
     const points: [number, number][] = [];
     for (let i = 0; i < 400; i++) points.push([(i * 37) % 113, (i * 91) % 97]);
-    const index = nearestIndex(points, 14);
+    const index = nearestIndex(
+      points.length,
+      points.map((p) => p[0]),
+      points.map((p) => p[1]),
+      14,
+    );
     for (let x = -20; x < 130; x += 7) {
       for (let y = -20; y < 120; y += 7) {
         let best: number | null = null;

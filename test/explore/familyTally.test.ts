@@ -122,7 +122,7 @@ describe('a cell feasible on one process and not on another', () => {
       onProcess(point(1, ['senseAmpPitch']), 0),
       onProcess(point(1, ['senseAmpPitch']), 1),
     ];
-    const tallies = cellProcessTallies(points, limits, 2);
+    const tallies = cellProcessTallies(points, limits);
     expect(tallies.map((t) => [t.cellIndex, t.processIndex, t.points, t.feasible])).toEqual([
       [0, 0, 1, 1],
       [0, 1, 2, 0],

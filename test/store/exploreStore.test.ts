@@ -1,6 +1,7 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { runSweepRange, sweepSize, type SweepRequest } from '../../src/explore/sweep';
 import type { SweepCommand, SweepReport } from '../../src/explore/sweepProtocol';
+import { encodeSweepChunk, SweepTable, SweepTextTables } from '../../src/explore/sweepColumns';
 import { defaultSweepSettings, sweepRequestFor } from '../../src/explore/sweepSettings';
 import { demoDesign } from '../../src/designs/demoDesign';
 import { createExploreStore, type SweepWorker } from '../../src/store/exploreStore';
@@ -14,14 +15,15 @@ class StepWorker implements SweepWorker {
 
   postMessage(command: SweepCommand) {
     const total = sweepSize(command.request);
+    const tables = new SweepTextTables();
     for (let s = 0; s < total; s += 100) {
-      const points = runSweepRange(command.request, s, s + 100);
+      const chunk = encodeSweepChunk(runSweepRange(command.request, s, s + 100), tables);
       this.pending.push({
         type: 'progress',
         runId: command.runId,
         done: Math.min(total, s + 100),
         total,
-        points,
+        chunk,
       });
     }
     this.pending.push({ type: 'done', runId: command.runId, total, elapsed: 0.01 });
@@ -60,18 +62,19 @@ describe('explorer store', () => {
       return w;
     }, 0);
     const request = smallRequest();
-    store.getState().startSweep(request);
+    store.getState().startSweep(request, new SweepTable());
     expect(store.getState().run.status).toBe('running');
     const w = workers[0];
     if (!w) throw new Error('no worker');
     w.step();
-    expect(store.getState().run.points).toHaveLength(100);
+    expect(store.getState().run.shown).toBe(100);
     expect(store.getState().run.done).toBe(100);
+    expect(store.getState().progress).toEqual({ done: 100, total: sweepSize(request) });
     while (w.step());
     const run = store.getState().run;
     expect(run.status).toBe('done');
-    expect(run.points).toHaveLength(sweepSize(request));
-    expect(run.points.map((p) => p.index)).toEqual([...Array(sweepSize(request)).keys()]);
+    expect(run.shown).toBe(sweepSize(request));
+    expect(run.table?.points()).toEqual(runSweepRange(request, 0, sweepSize(request)));
     expect(w.terminated).toBe(true);
   });
 
@@ -82,7 +85,7 @@ describe('explorer store', () => {
       workers.push(w);
       return w;
     }, 0);
-    store.getState().startSweep(smallRequest());
+    store.getState().startSweep(smallRequest(), new SweepTable());
     const w = workers[0];
     if (!w) throw new Error('no worker');
     w.step();
@@ -90,7 +93,7 @@ describe('explorer store', () => {
     expect(w.terminated).toBe(true);
     expect(store.getState().run.status).toBe('cancelled');
     w.step();
-    expect(store.getState().run.points).toHaveLength(100);
+    expect(store.getState().run.shown).toBe(100);
   });
 
   it('a new sweep replaces a running one and ignores the old run', () => {
@@ -100,15 +103,15 @@ describe('explorer store', () => {
       workers.push(w);
       return w;
     }, 0);
-    store.getState().startSweep(smallRequest());
-    store.getState().startSweep(smallRequest());
+    store.getState().startSweep(smallRequest(), new SweepTable());
+    store.getState().startSweep(smallRequest(), new SweepTable());
     const [first, second] = workers;
     if (!first || !second) throw new Error('expected two workers');
     expect(first.terminated).toBe(true);
     first.step();
-    expect(store.getState().run.points).toHaveLength(0);
+    expect(store.getState().run.shown).toBe(0);
     second.step();
-    expect(store.getState().run.points).toHaveLength(100);
+    expect(store.getState().run.shown).toBe(100);
     expect(store.getState().run.id).toBe(2);
   });
 
@@ -120,20 +123,20 @@ describe('explorer store', () => {
       workers.push(w);
       return w;
     }, 150);
-    store.getState().startSweep(smallRequest());
+    store.getState().startSweep(smallRequest(), new SweepTable());
     const w = workers[0];
     if (!w) throw new Error('no worker');
     w.step();
     w.step();
-    expect(store.getState().run.points).toHaveLength(0);
+    expect(store.getState().run.shown).toBe(0);
     vi.advanceTimersByTime(160);
-    expect(store.getState().run.points).toHaveLength(200);
+    expect(store.getState().run.shown).toBe(200);
     expect(store.getState().run.done).toBe(200);
     w.step();
     while (w.step());
     // The last message flushes at once.
     expect(store.getState().run.status).toBe('done');
-    expect(store.getState().run.points).toHaveLength(store.getState().run.total);
+    expect(store.getState().run.shown).toBe(store.getState().run.total);
   });
 });
 

@@ -4,16 +4,18 @@ import { downloadBlob, fileBaseName } from '../../app/download';
 import {
   markerPath,
   ScatterChart,
-  type ScatterDatum,
   type ScatterExport,
+  type ScatterPoints,
   type ShadedBand,
 } from '../../charts/ScatterChart';
 import { createVariant } from '../../commands/createVariant';
-import { chartModel, type FeasibilityLimits } from '../../explore/chartData';
+import type { FeasibilityLimits } from '../../explore/chartData';
+import { ChartModelBuilder } from '../../explore/chartModelBuilder';
+import { SweepTable } from '../../explore/sweepColumns';
 import { bankFigureEntry, type FigureKey } from '../../engine';
 import { pointBuildSpec, type SweepRequest } from '../../explore/sweep';
 import { sweepPointsCsv } from '../../explore/pointsCsv';
-import { infeasibleFamilySentences } from '../../explore/familyTally';
+import { familySentences } from '../../explore/familyTally';
 import type { Design } from '../../model/design';
 import { formatQuantity } from '../../model/units';
 import { defaultSweepSettings, type SweepSettings } from '../../explore/sweepSettings';
@@ -25,7 +27,11 @@ import { FrontTable } from './FrontTable';
 import { PointCard } from './PointCard';
 import { seriesColour } from './seriesStyle';
 import { BankControls, SweepControls } from './SweepControls';
-import { sweepAnnouncement, sweepStatusText } from './sweepStatusText';
+import { SweepProgress } from './SweepProgress';
+import { sweepAnnouncement } from './sweepStatusText';
+
+/** The table of a view with no sweep yet. */
+const NO_POINTS = new SweepTable();
 
 /** Infeasible stretches of the axes that carry a constrained figure. */
 function constraintBands(xAxis: FigureKey, yAxis: FigureKey, limits: FeasibilityLimits): ShadedBand[] {
@@ -71,41 +77,56 @@ export function ExplorerView() {
     () => ({ minMargin, maxDelay: constraints.maxDelay }),
     [minMargin, constraints.maxDelay],
   );
-  const model = useMemo(
-    () => chartModel(run.points, xAxis, yAxis, limits),
-    [run.points, xAxis, yAxis, limits],
-  );
+  // The chart model grows with the table: each update takes in only the rows shown since the last one.
+  // Other axes, limits or another run start a new model from the whole table.
+  const builder = useRef<ChartModelBuilder | null>(null);
+  const table = run.table ?? NO_POINTS;
+  const model = useMemo(() => {
+    let b = builder.current;
+    if (!b || b.table !== table || b.xAxis !== xAxis || b.yAxis !== yAxis || b.limits !== limits)
+      builder.current = b = new ChartModelBuilder(table, xAxis, yAxis, limits);
+    b.update(run.shown);
+    return b.snapshot();
+  }, [table, run.shown, xAxis, yAxis, limits]);
   const data = useMemo(
-    (): ScatterDatum[] =>
-      model.plotted.map((p) => ({
-        x: p.x,
-        y: p.y,
-        colour: seriesColour(p.cellIndex),
-        shape: p.processIndex,
-        state: p.state,
-      })),
+    (): ScatterPoints => ({
+      source: model.source,
+      count: model.count,
+      x: model.x,
+      y: model.y,
+      infeasible: model.infeasible,
+      series: model.cellIndex,
+      shape: model.processIndex,
+      colourOf: seriesColour,
+      extent: model.extent,
+    }),
     [model],
   );
-  const frontSet = useMemo(() => new Set(model.front), [model]);
+  const frontSet = useMemo(() => new Set(model.front), [model.front]);
   const request = run.request;
-  // Tallied once the sweep has stopped, not at every progress step.
+  const shown = run.shown;
+  // Put in words once the sweep has stopped, from the tallies the chart model keeps.
   const whyInfeasible = useMemo(
     () =>
-      run.status === 'running' || !run.request
+      run.status === 'running' || !run.request || !builder.current
         ? []
-        : infeasibleFamilySentences(
-            run.points,
+        : familySentences(
+            builder.current.tallies,
             run.request.cells.map((c) => c.name),
-            limits,
             run.request.processes.map(shortProcessName),
           ),
-    [run.status, run.points, run.request, limits],
+    // The model stands for the builder's state: a new model, new tallies.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+    [run.status, run.request, model],
   );
-  const hoveredPoint = hovered !== null ? run.points[model.plotted[hovered]?.point ?? -1] : undefined;
+  const hoveredRow = hovered !== null && hovered < model.count ? (model.row[hovered] ?? -1) : -1;
+  const hoveredPoint = useMemo(
+    () => (hoveredRow >= 0 ? table.point(hoveredRow) : undefined),
+    [table, hoveredRow],
+  );
 
   const pick = (plottedIndex: number) => {
-    const plotted = model.plotted[plottedIndex];
-    const point = plotted ? run.points[plotted.point] : undefined;
+    const point = plottedIndex < model.count ? table.point(model.row[plottedIndex] ?? -1) : undefined;
     if (!point || !request || !point.figures) return;
     const built = buildPartition({ ...pointBuildSpec(request, point), cells: design.cells });
     if (!built.ok) {
@@ -123,10 +144,10 @@ export function ExplorerView() {
 
   const xInfo = bankFigureEntry(xAxis);
   const yInfo = bankFigureEntry(yAxis);
-  const builtPoint = lastBuilt ? run.points[lastBuilt.pointIndex] : undefined;
+  const builtRow = lastBuilt ? table.rowOf(lastBuilt.pointIndex) : -1;
+  const builtPoint = builtRow >= 0 ? table.point(builtRow) : undefined;
   const exportBase = () =>
     `${fileBaseName(design.name)}-${xAxis}-vs-${yAxis}`.replace(/([a-z])([A-Z])/g, '$1-$2').toLowerCase();
-  const percent = run.total > 0 ? Math.round((run.done / run.total) * 100) : 0;
 
   return (
     <div className="explorer" data-testid="explorer">
@@ -139,33 +160,27 @@ export function ExplorerView() {
       />
       <div className="explorer-main">
         <div className="sweep-status" data-testid="sweep-status" data-status={run.status}>
-          <div
-            className="progress"
-            role="progressbar"
-            aria-label="Sweep progress"
-            aria-valuemin={0}
-            aria-valuemax={100}
-            aria-valuenow={percent}
-          >
-            <div className="progress-bar" style={{ width: `${percent}%` }} data-testid="sweep-progress" />
-          </div>
-          <span>
-            {sweepStatusText(run)}
-            {run.points.length > 0 &&
-              ` · ${model.counts.feasible.toLocaleString('en-US')} feasible · ${model.front.length} on the front` +
-                (model.counts.unplanned > 0
-                  ? ` · ${model.counts.unplanned.toLocaleString('en-US')} need too many mats`
-                  : '')}
-          </span>
-          {run.points.length > 0 && request && (
+          <SweepProgress
+            run={run}
+            counts={
+              shown > 0
+                ? ` · ${model.counts.feasible.toLocaleString('en-US')} feasible · ${model.front.length} on the front` +
+                  (model.counts.unplanned > 0
+                    ? ` · ${model.counts.unplanned.toLocaleString('en-US')} need too many mats`
+                    : '')
+                : ''
+            }
+          />
+          {shown > 0 && request && (
             <span className="chart-exports">
               <button
                 type="button"
                 data-testid="export-points-csv"
                 title="Every point with every figure, its feasibility and whether it is on the front, as CSV"
                 onClick={() => {
-                  const front = new Set(model.front.map((i) => model.plotted[i]?.point ?? -1));
-                  const text = sweepPointsCsv(run.points, request, limits, front);
+                  const index = table.place('index');
+                  const front = new Set(model.front.map((i) => index[model.row[i] ?? -1] ?? -1));
+                  const text = sweepPointsCsv(table.points(shown), request, limits, front);
                   downloadBlob(new Blob([text], { type: 'text/csv' }), `${exportBase()}.points.csv`);
                 }}
               >
@@ -214,7 +229,8 @@ export function ExplorerView() {
             </ul>
           </details>
         )}
-        {run.points.length === 0 ? (
+        {/* The chart stands from the Run click on, so it has its size before the first points come. */}
+        {run.status === 'idle' ? (
           <div className="chart-empty">
             <p>
               Run a sweep to see {yInfo.label.toLowerCase()} against {xInfo.label.toLowerCase()} for every
@@ -237,7 +253,7 @@ export function ExplorerView() {
               format: (v) => formatQuantity(v, yInfo.quantity, 3),
             }}
             bands={constraintBands(xAxis, yAxis, limits)}
-            hovered={hovered !== null && hovered < data.length ? hovered : null}
+            hovered={hovered !== null && hovered < data.count ? hovered : null}
             onHover={setHovered}
             onPick={pick}
             exportRef={chart}
@@ -258,11 +274,11 @@ export function ExplorerView() {
             }
           />
         )}
-        {request && run.points.length > 0 && <SeriesLegend request={request} />}
+        {request && shown > 0 && <SeriesLegend request={request} />}
         {request && model.front.length > 0 && (
           <FrontTable
             model={model}
-            points={run.points}
+            table={table}
             request={request}
             xAxis={xAxis}
             yAxis={yAxis}
@@ -290,7 +306,7 @@ export function ExplorerView() {
               point={builtPoint}
               request={request}
               limits={limits}
-              onFront={model.plotted.some((p, i) => p.point === builtPoint.index && frontSet.has(i))}
+              onFront={model.front.some((i) => model.row[i] === builtRow)}
               explainable
               testId="built-point"
             />

@@ -1,14 +1,16 @@
 import { shortProcessName } from '../../designs/buildPartition';
-import type { ChartModel } from '../../explore/chartData';
+import type { ColumnChartModel } from '../../explore/chartModelBuilder';
+import type { SweepTable } from '../../explore/sweepColumns';
 import { bankFigureEntry, type FigureKey } from '../../engine';
-import type { SweepPoint, SweepRequest } from '../../explore/sweep';
+import type { SweepRequest } from '../../explore/sweep';
 import { formatQuantity } from '../../model/units';
 import { markerPath } from '../../charts/ScatterChart';
 import { seriesColour } from './seriesStyle';
 
 interface FrontTableProps {
-  readonly model: ChartModel;
-  readonly points: readonly SweepPoint[];
+  readonly model: ColumnChartModel;
+  /** The sweep's points; the table builds an object only for each front point. */
+  readonly table: SweepTable;
   readonly request: SweepRequest;
   readonly xAxis: FigureKey;
   readonly yAxis: FigureKey;
@@ -22,7 +24,7 @@ interface FrontTableProps {
  * two charted figures, and a button that builds it as a new variant. It is the keyboard's way to the
  * front; focusing a row's button rings its point on the chart.
  */
-export function FrontTable({ model, points, request, xAxis, yAxis, onFocusPoint, onBuild }: FrontTableProps) {
+export function FrontTable({ model, table, request, xAxis, yAxis, onFocusPoint, onBuild }: FrontTableProps) {
   const xInfo = bankFigureEntry(xAxis);
   const yInfo = bankFigureEntry(yAxis);
   return (
@@ -50,9 +52,9 @@ export function FrontTable({ model, points, request, xAxis, yAxis, onFocusPoint,
         </thead>
         <tbody>
           {model.front.map((plottedIndex, rank) => {
-            const plotted = model.plotted[plottedIndex];
-            const point = plotted ? points[plotted.point] : undefined;
-            if (!plotted || !point?.figures) return null;
+            const row = plottedIndex < model.count ? (model.row[plottedIndex] ?? -1) : -1;
+            const point = row >= 0 ? table.point(row) : undefined;
+            if (!point?.figures) return null;
             const cell = request.cells[point.cellIndex];
             const process = request.processes[point.processIndex];
             const title = `${cell?.name ?? '?'} · ${process ? shortProcessName(process) : '?'}`;

@@ -10,6 +10,7 @@ import {
 } from '../../explore/sweepSettings';
 import type { Design } from '../../model/design';
 import { formatQuantity } from '../../model/units';
+import { SweepTable } from '../../explore/sweepColumns';
 import { useExploreStore } from '../../store/useExploreStore';
 import { QuantityField } from '../QuantityField';
 import { RangeField } from './RangeField';
@@ -62,12 +63,13 @@ export function BankControls({ settings, onChange }: Omit<Props, 'design'>) {
 }
 
 export function SweepControls({ design, settings, onChange }: Props) {
-  const run = useExploreStore((s) => s.run);
+  // The status only: the run object changes with every chart update while a sweep runs.
+  const status = useExploreStore((s) => s.run.status);
   const startSweep = useExploreStore((s) => s.startSweep);
   const cancelSweep = useExploreStore((s) => s.cancelSweep);
   const request = sweepRequestFor(settings, design);
   const size = sweepSize(request);
-  const running = run.status === 'running';
+  const running = status === 'running';
   const toggle = (list: readonly string[], id: string, on: boolean) =>
     on ? [...list.filter((x) => x !== id), id] : list.filter((x) => x !== id);
   const choices = processChoices(design);
@@ -186,7 +188,7 @@ export function SweepControls({ design, settings, onChange }: Props) {
             className="primary"
             data-testid="run-sweep"
             disabled={size === 0 || size > MAX_SWEEP_POINTS}
-            onClick={() => startSweep(request)}
+            onClick={() => startSweep(request, new SweepTable())}
             title={
               size > MAX_SWEEP_POINTS
                 ? `at most ${MAX_SWEEP_POINTS.toLocaleString('en-US')} points`
