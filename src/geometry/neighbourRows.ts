@@ -122,7 +122,19 @@ function scatterPairs(
 }
 
 function sortRows(list: Int32Array, starts: Int32Array, ends: Int32Array, n: number): void {
-  for (let i = 0; i < n; i++) sortRange(list, starts[i] as number, ends[i] as number);
+  for (let i = 0; i < n; i++) {
+    const from = starts[i] as number;
+    const to = ends[i] as number;
+    // Rows filled backwards from pairs found in ascending order are often sorted already.
+    let sorted = true;
+    for (let k = from + 1; k < to; k++) {
+      if ((list[k - 1] as number) > (list[k] as number)) {
+        sorted = false;
+        break;
+      }
+    }
+    if (!sorted) sortRange(list, from, to);
+  }
 }
 
 /** Turns counts[0 … length − 1] into running totals, sets counts[length] to the sum and returns it. */
