@@ -119,22 +119,50 @@ export interface Binned {
   readonly members: Int32Array;
 }
 
+/**
+ * The grid and its bins as class instances rather than object literals or spreads, so that they keep one
+ * shape from call to call and the compiled passes reading them stay valid (see blockTable.ts, TableRows).
+ */
+class GridShape implements Grid {
+  constructor(
+    readonly minX: number,
+    readonly minY: number,
+    readonly spanX: number,
+    readonly spanY: number,
+    readonly columns: number,
+    readonly rows: number,
+    readonly cellSize: number,
+  ) {}
+}
+
+class Bins implements Binned {
+  constructor(
+    readonly firstColumn: Int32Array,
+    readonly lastColumn: Int32Array,
+    readonly firstRow: Int32Array,
+    readonly lastRow: Int32Array,
+    readonly start: Int32Array,
+    readonly members: Int32Array,
+  ) {}
+}
+
 function binBoxes(boxes: Boxes, margin: number, grid: Grid): Binned {
   const n = boxes.count;
-  const cells: Binned = {
-    firstColumn: SCRATCH.firstColumn.take(n),
-    lastColumn: SCRATCH.lastColumn.take(n),
-    firstRow: SCRATCH.firstRow.take(n),
-    lastRow: SCRATCH.lastRow.take(n),
-    start: SCRATCH.cellStart.take(grid.columns * grid.rows + 1),
-    members: SCRATCH.members.take(0),
-  };
+  const cells = new Bins(
+    SCRATCH.firstColumn.take(n),
+    SCRATCH.lastColumn.take(n),
+    SCRATCH.firstRow.take(n),
+    SCRATCH.lastRow.take(n),
+    SCRATCH.cellStart.take(grid.columns * grid.rows + 1),
+    SCRATCH.members.take(0),
+  );
   cellRanges(boxes, margin, grid, cells);
   const cellCount = grid.columns * grid.rows;
   cells.start.fill(0, 0, cellCount + 1);
   countPerCell(n, grid.columns, cells);
   const total = runningTotals(cells.start, cellCount);
-  const filled: Binned = { ...cells, members: SCRATCH.members.take(total) };
+  const { firstColumn, lastColumn, firstRow, lastRow, start } = cells;
+  const filled = new Bins(firstColumn, lastColumn, firstRow, lastRow, start, SCRATCH.members.take(total));
   fillCells(n, grid.columns, filled);
   return filled;
 }
@@ -313,7 +341,7 @@ function gridShape(boxes: Boxes, extent: Extent): Grid {
       rows = Math.max(1, Math.ceil(spanY / cellSize));
     }
   }
-  return { ...extent, columns, rows, cellSize };
+  return new GridShape(extent.minX, extent.minY, spanX, spanY, columns, rows, cellSize);
 }
 
 /** Whether the box of `i` grown by `margin` meets the box of `j` (closed), as an R-tree query computes it. */

@@ -24,10 +24,14 @@ export function designContext(design: Design, senseAmpCount: number, cellCount: 
 
 /** Sense amplifiers of all mats: the floorplan's share of the die's failure allowance. */
 export function countSenseAmps(table: BlockTable): number {
+  // Once per kind, then summed per mat in design order: the same sum, and no cell read per mat (cells
+  // of different designs may have different shapes, and a compiled loop reading them is thrown away).
+  const perKind = new Float64Array(table.kinds.length);
+  for (let k = 0; k < perKind.length; k++) perKind[k] = senseAmpsOfMat(table.kinds[k] as MatKind);
   let count = 0;
   for (let i = 0; i < table.count; i++) {
     const kind = table.kindOf[i] as number;
-    if (kind >= 0) count += senseAmpsOfMat(table.kinds[kind] as MatKind);
+    if (kind >= 0) count += perKind[kind] as number;
   }
   return count;
 }

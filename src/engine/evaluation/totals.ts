@@ -1,4 +1,4 @@
-import { BLOCK_TYPE_CODES, MAT_CODE, type BlockTable } from '../../geometry/blockTable';
+import { BLOCK_TYPE_CODES, MAT_CODE, type BlockTable, type MatKind } from '../../geometry/blockTable';
 import type { BlockType } from '../../model/block';
 import { needsRefresh } from '../../model/cellBasics';
 import type { Design } from '../../model/design';
@@ -31,18 +31,29 @@ export function refreshRows(table: BlockTable): number {
   let lastExtent = Number.NaN;
   let lastBand: Map<number, number> | null = null;
   let lastRows = 0;
+  // What each kind of mat contributes, read once per kind rather than from its cell per mat.
+  const kinds = table.kinds;
+  const refreshed = new Uint8Array(kinds.length);
+  const verticalKind = new Uint8Array(kinds.length);
+  const wordlinesOfKind = new Float64Array(kinds.length);
+  for (let k = 0; k < kinds.length; k++) {
+    const kind = kinds[k] as MatKind;
+    refreshed[k] = needsRefresh(kind.cell.kind) ? 1 : 0;
+    verticalKind[k] = kind.block.bitlineAxis === 'vertical' ? 1 : 0;
+    wordlinesOfKind[k] = kind.geometry.wordlineCount;
+  }
   for (let i = 0; i < table.count; i++) {
     if (table.type[i] !== MAT_CODE) continue;
-    const kind = table.kinds[table.kindOf[i] as number];
+    const k = table.kindOf[i] as number;
     // Static cells need no refresh and add no rows.
-    if (!kind || !needsRefresh(kind.cell.kind)) continue;
-    const vertical = kind.block.bitlineAxis === 'vertical';
+    if (!(k >= 0 && k < kinds.length) || refreshed[k] === 0) continue;
+    const vertical = verticalKind[k] === 1;
     const start = Math.round((vertical ? (table.y[i] as number) : (table.x[i] as number)) / BAND_GRID);
     const extent = Math.round(
       (vertical ? (table.height[i] as number) : (table.width[i] as number)) / BAND_GRID,
     );
     const key = start * 2 + (vertical ? 1 : 0);
-    const wordlines = kind.geometry.wordlineCount;
+    const wordlines = wordlinesOfKind[k] as number;
     if (key === lastKey && extent === lastExtent && lastBand) {
       if (wordlines > lastRows) {
         lastRows = wordlines;
