@@ -149,9 +149,15 @@ export function runSweepRange(
         spareColumns: c.spareColumns ?? undefined,
       },
     );
+    // Field by field rather than a spread of the coordinates: thousands of points per sweep.
     points.push({
       index,
-      ...c,
+      cellsPerBitline: c.cellsPerBitline,
+      cellsPerWordline: c.cellsPerWordline,
+      cellIndex: c.cellIndex,
+      processIndex: c.processIndex,
+      spareRows: c.spareRows,
+      spareColumns: c.spareColumns,
       matRows: result.ok ? result.plan.matRows : 0,
       matColumns: result.ok ? result.plan.matColumns : 0,
       figures: result.ok ? result.figures : null,

@@ -41,6 +41,26 @@ describe('word-line step responses kept by ratio (LineTimeMemo)', () => {
     LIMIT,
   );
 
+  it('hands out a whole timing it keeps for the same six inputs, and the right one after others pushed it out', () => {
+    const memo = new LineTimeMemo();
+    const lines = Array.from(
+      { length: 12 },
+      (_, i) => [2e3, 1e3 * (i + 1), 1e-13 * (i + 2), 2.6, 1.45, 0.45] as const,
+    );
+    const line0 = [2e3, 1e3, 2e-13, 2.6, 1.45, 0.45] as const;
+    const first = wordlineTiming(...line0, memo);
+    expect(wordlineTiming(...line0, memo)).toBe(first);
+    // Same line but for one input, each in turn: never the kept timing.
+    for (let i = 0; i < 6; i++) {
+      const changed: number[] = [...line0];
+      changed[i] = (changed[i] as number) * 1.5;
+      const [a, b, c, d, e, f] = changed as [number, number, number, number, number, number];
+      expect(wordlineTiming(a, b, c, d, e, f, memo)).toEqual(wordlineTiming(a, b, c, d, e, f));
+    }
+    for (const line of lines) expect(wordlineTiming(...line, memo)).toEqual(wordlineTiming(...line));
+    for (const line of lines) expect(wordlineTiming(...line, memo)).toEqual(wordlineTiming(...line));
+  });
+
   it(
     'keeps answering right after it has started over (more ratios than it keeps)',
     () => {

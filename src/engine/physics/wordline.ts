@@ -64,9 +64,37 @@ export interface WordlineTiming {
  * @param highLevel the level the word line rises to (VPP for 1T1C, VDD for gain-cell read lines) (V).
  * @param turnOnLevel the far-end level at which the farthest cell starts to conduct (V).
  * @param offLevel the level below which a cell is isolated again (V).
- * @param memo keeps the line's dimensionless times by Rd/Rw across calls (a sweep); the same numbers.
+ * @param memo keeps the line's dimensionless times by Rd/Rw, and the last few whole timings, across calls
+ *   (a sweep); the same numbers (a timing kept is handed out again, shared: it is read-only).
  */
 export function wordlineTiming(
+  driverResistance: number,
+  lineResistance: number,
+  lineCapacitance: number,
+  highLevel: number,
+  turnOnLevel: number,
+  offLevel: number,
+  memo?: LineTimeMemo,
+): WordlineTiming {
+  if (!memo)
+    return lineTiming(driverResistance, lineResistance, lineCapacitance, highLevel, turnOnLevel, offLevel);
+  const inputs = [driverResistance, lineResistance, lineCapacitance, highLevel, turnOnLevel, offLevel];
+  const kept = memo.recentTiming(inputs);
+  if (kept) return kept;
+  const timing = lineTiming(
+    driverResistance,
+    lineResistance,
+    lineCapacitance,
+    highLevel,
+    turnOnLevel,
+    offLevel,
+    memo,
+  );
+  memo.keepTiming(inputs, timing);
+  return timing;
+}
+
+function lineTiming(
   driverResistance: number,
   lineResistance: number,
   lineCapacitance: number,
