@@ -38,7 +38,6 @@ export function groupedGridPairs(
   pairs: PairBuffer,
 ): void {
   const { firstColumn, firstRow, start, members } = cells;
-  const { x, y, width, height } = boxes;
   const columns = grid.columns;
   const cellCount = columns * grid.rows;
   const order = BY_START.take(members.length);
@@ -74,36 +73,49 @@ export function groupedGridPairs(
     }
     const count = to - from;
     // Pairs with a box starting here both ways (with any other), then column-only with row-only boxes.
-    for (let a = 0; a < both; a++) pairsFrom(order[a] as number, a + 1, count);
-    for (let a = both; a < both + columnOnly; a++) pairsFrom(order[a] as number, both + columnOnly, atRow);
+    for (let a = 0; a < both; a++)
+      pairsFrom(boxes, margin, group, order, order[a] as number, a + 1, count, pairs);
+    for (let a = both; a < both + columnOnly; a++)
+      pairsFrom(boxes, margin, group, order, order[a] as number, both + columnOnly, atRow, pairs);
   }
+}
 
-  /** Tests box i against order[b] for b in [first, last). */
-  function pairsFrom(i: number, first: number, last: number): void {
-    const xi = x[i] as number;
-    const yi = y[i] as number;
-    const ri = xi + (width[i] as number);
-    const bi = yi + (height[i] as number);
-    const gi = group[i];
-    for (let b = first; b < last; b++) {
-      const j = order[b] as number;
-      const xj = x[j] as number;
-      const yj = y[j] as number;
-      const rj = xj + (width[j] as number);
-      const bj = yj + (height[j] as number);
-      if (gi !== group[j]) {
-        // The grown box of either against the plain box of the other, as neighbourTable compares them.
-        if (
-          (xi - margin <= rj && xj <= ri + margin && yi - margin <= bj && yj <= bi + margin) ||
-          (xj - margin <= ri && xi <= rj + margin && yj - margin <= bi && yi <= bj + margin)
-        )
-          pairs.add(i, j);
-      } else if (
-        Math.min(ri, rj) - Math.max(xi, xj) > margin &&
-        Math.min(bi, bj) - Math.max(yi, yj) > margin
-      ) {
+/**
+ * Tests box i against the boxes `order[first]` … `order[last − 1]` and keeps the pairs the rule accepts.
+ * A function of its own rather than a closure: a closure made per call is a new call target each call,
+ * and V8 throws away the compiled pass that had it inlined (on the second evaluation of a session).
+ */
+function pairsFrom(
+  boxes: Boxes,
+  margin: number,
+  group: Uint8Array,
+  order: Int32Array,
+  i: number,
+  first: number,
+  last: number,
+  pairs: PairBuffer,
+): void {
+  const { x, y, width, height } = boxes;
+  const xi = x[i] as number;
+  const yi = y[i] as number;
+  const ri = xi + (width[i] as number);
+  const bi = yi + (height[i] as number);
+  const gi = group[i];
+  for (let b = first; b < last; b++) {
+    const j = order[b] as number;
+    const xj = x[j] as number;
+    const yj = y[j] as number;
+    const rj = xj + (width[j] as number);
+    const bj = yj + (height[j] as number);
+    if (gi !== group[j]) {
+      // The grown box of either against the plain box of the other, as neighbourTable compares them.
+      if (
+        (xi - margin <= rj && xj <= ri + margin && yi - margin <= bj && yj <= bi + margin) ||
+        (xj - margin <= ri && xi <= rj + margin && yj - margin <= bi && yi <= bj + margin)
+      )
         pairs.add(i, j);
-      }
+    } else if (Math.min(ri, rj) - Math.max(xi, xj) > margin && Math.min(bi, bj) - Math.max(yi, yj) > margin) {
+      pairs.add(i, j);
     }
   }
 }
