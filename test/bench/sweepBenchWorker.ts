@@ -1,15 +1,19 @@
 // Runs inside a Node worker thread, bundled by sweep.bench.ts as the app's build bundles its worker: the
-// same chunked loop as the app's Web Worker (src/explore/sweepWorker.ts). Asked for
+// same chunked loop as the app's Web Worker (src/explore/sweepWorker.ts), each chunk encoded as typed-array
+// columns and cloned with its buffers handed over, as the worker posts it. Asked for
 // { request: 'bench' | 'explorer', runs }, it answers with each run's wall time and process CPU time (ms)
 // and the last run's feasible points. A fresh thread's first run is a cold sweep, as in a new browser
 // worker.
 import { parentPort } from 'node:worker_threads';
 import { ProcessCache } from '../../src/explore/partitionFigures';
 import { runSweepRange, sweepSize } from '../../src/explore/sweep';
+import { chunkBuffers, encodeSweepChunk, SweepTextTables } from '../../src/explore/sweepColumns';
 import { BENCH_CHUNK, BENCH_REQUEST, EXPLORER_REQUEST } from './sweepRequest';
 
 parentPort?.on('message', ({ request: which, runs }: { request: 'bench' | 'explorer'; runs: number }) => {
-  const request = which === 'bench' ? BENCH_REQUEST : EXPLORER_REQUEST;
+  // A copy, as the app's worker receives its request (postMessage clones it): every cell and process
+  // object then has the shape the deserialiser gives it, as in the app.
+  const request = structuredClone(which === 'bench' ? BENCH_REQUEST : EXPLORER_REQUEST);
   const total = sweepSize(request);
   const wall: number[] = [];
   const cpu: number[] = [];
@@ -18,12 +22,14 @@ parentPort?.on('message', ({ request: which, runs }: { request: 'bench' | 'explo
     const cpuStart = process.cpuUsage();
     const start = performance.now();
     const cache = new ProcessCache();
+    const tables = new SweepTextTables();
     feasible = 0;
     for (let s = 0; s < total; s += BENCH_CHUNK) {
       const points = runSweepRange(request, s, s + BENCH_CHUNK, cache);
-      // The worker posts each chunk; a structured clone of it is part of the cost.
-      const copy = structuredClone(points);
-      for (const p of copy) if (p.figures && p.figures.errorKinds.length === 0) feasible++;
+      const chunk = encodeSweepChunk(points, tables);
+      // Posting a chunk clones it and hands its buffers over: part of the cost.
+      structuredClone(chunk, { transfer: chunkBuffers(chunk) });
+      for (const p of points) if (p.figures && p.figures.errorKinds.length === 0) feasible++;
     }
     wall.push(performance.now() - start);
     const used = process.cpuUsage(cpuStart);
