@@ -101,6 +101,11 @@ function pairsFrom(
   const ri = xi + (width[i] as number);
   const bi = yi + (height[i] as number);
   const gi = group[i];
+  // Box i grown by the margin, once rather than per pair.
+  const left = xi - margin;
+  const right = ri + margin;
+  const top = yi - margin;
+  const bottom = bi + margin;
   for (let b = first; b < last; b++) {
     const j = order[b] as number;
     const xj = x[j] as number;
@@ -110,7 +115,7 @@ function pairsFrom(
     if (gi !== group[j]) {
       // The grown box of either against the plain box of the other, as neighbourTable compares them.
       if (
-        (xi - margin <= rj && xj <= ri + margin && yi - margin <= bj && yj <= bi + margin) ||
+        (left <= rj && xj <= right && top <= bj && yj <= bottom) ||
         (xj - margin <= ri && xi <= rj + margin && yj - margin <= bi && yi <= bj + margin)
       )
         pairs.add(i, j);
