@@ -107,6 +107,28 @@ export function evaluateMatAt(
   mats.set(k, at, figures, c.unsensedBitlines, c.undrivenWordlines);
 }
 
+/** Mats in the table. (Each hot loop ends its function: see DEVELOPERS.md, "One hot loop per function".) */
+function countMats(table: BlockTable): number {
+  let count = 0;
+  for (let i = 0; i < table.count; i++) if (table.type[i] === MAT_CODE) count++;
+  return count;
+}
+
+/** Evaluates every mat into `builder`, in design order; mats of one kind and connections share figures. */
+function evaluateAllMats(
+  table: BlockTable,
+  neighbours: NeighbourTable,
+  ctx: DesignContext,
+  builder: MatTableBuilder,
+): void {
+  const figuresByKind = new Map<number | string, MatFigures>();
+  for (let i = 0, k = 0; i < table.count; i++) {
+    if (table.type[i] !== MAT_CODE) continue;
+    evaluateMatAt(table, i, neighbours, ctx, builder, k, figuresByKind);
+    k++;
+  }
+}
+
 /**
  * The neighbours evaluation reads, found in one grid pass: a mat and a strip that meet (which strips
  * serve a mat; which mats lie beyond a sense-amplifier strip) and any two blocks that overlap (the overlap
@@ -133,15 +155,8 @@ export function evaluate(design: Design): Report {
   const neighbours = evaluationNeighbours(table);
   const senseAmpCount = countSenseAmps(table);
   const ctx = designContext(design, senseAmpCount, countCells(table));
-  const figuresByKind = new Map<number | string, MatFigures>();
-  let matCount = 0;
-  for (let i = 0; i < table.count; i++) if (table.type[i] === MAT_CODE) matCount++;
-  const builder = new MatTableBuilder(design.blocks, matCount);
-  for (let i = 0, k = 0; i < table.count; i++) {
-    if (table.type[i] !== MAT_CODE) continue;
-    evaluateMatAt(table, i, neighbours, ctx, builder, k, figuresByKind);
-    k++;
-  }
+  const builder = new MatTableBuilder(design.blocks, countMats(table));
+  evaluateAllMats(table, neighbours, ctx, builder);
   const mats = builder.finish();
   const overlaps = findPositionedOverlaps(table, neighbours);
   const totals = computeTotals(table, mats, design, ctx, senseAmpCount, overlaps);

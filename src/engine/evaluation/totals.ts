@@ -1,6 +1,5 @@
-import { BLOCK_TYPE_CODES, MAT_CODE, type BlockTable, type MatKind } from '../../geometry/blockTable';
+import { BLOCK_TYPE_CODES, MAT_CODE, type BlockTable } from '../../geometry/blockTable';
 import type { BlockType } from '../../model/block';
-import { needsRefresh } from '../../model/cellBasics';
 import type { Design } from '../../model/design';
 import type { DesignContext } from './designContext';
 import type { PositionedOverlap } from './overlaps';
@@ -12,71 +11,10 @@ import {
   rowsPerRefreshCommand,
 } from '../physics/refresh';
 import { figuresAt, matIdAt, matLabelAt, type MatTable } from './matTable';
+import { refreshRows } from './refreshRows';
 import type { MatFigures, RefreshFigures, Totals } from './report';
 
-/** Positions closer than this are the same band edge (m). */
-const BAND_GRID = 1e-9;
-
-/**
- * Rows to refresh. Mats side by side along the word-line direction, with the same extent across it,
- * form one band that a row activation crosses together (one global word line), so a band contributes
- * the largest word-line count among its mats, not the sum. Mats of static (6T) cells are not refreshed.
- * Common practice (no source).
- */
-export function refreshRows(table: BlockTable): number {
-  // Bands by axis and start (on a 1 nm grid, as one exact integer), then by extent. Mats of one band
-  // mostly follow each other in a tiled design, so the band of the previous mat is tried first.
-  const bands = new Map<number, Map<number, number>>();
-  let lastKey = Number.NaN;
-  let lastExtent = Number.NaN;
-  let lastBand: Map<number, number> | null = null;
-  let lastRows = 0;
-  // What each kind of mat contributes, read once per kind rather than from its cell per mat.
-  const kinds = table.kinds;
-  const refreshed = new Uint8Array(kinds.length);
-  const verticalKind = new Uint8Array(kinds.length);
-  const wordlinesOfKind = new Float64Array(kinds.length);
-  for (let k = 0; k < kinds.length; k++) {
-    const kind = kinds[k] as MatKind;
-    refreshed[k] = needsRefresh(kind.cell.kind) ? 1 : 0;
-    verticalKind[k] = kind.block.bitlineAxis === 'vertical' ? 1 : 0;
-    wordlinesOfKind[k] = kind.geometry.wordlineCount;
-  }
-  for (let i = 0; i < table.count; i++) {
-    if (table.type[i] !== MAT_CODE) continue;
-    const k = table.kindOf[i] as number;
-    // Static cells need no refresh and add no rows.
-    if (!(k >= 0 && k < kinds.length) || refreshed[k] === 0) continue;
-    const vertical = verticalKind[k] === 1;
-    const start = Math.round((vertical ? (table.y[i] as number) : (table.x[i] as number)) / BAND_GRID);
-    const extent = Math.round(
-      (vertical ? (table.height[i] as number) : (table.width[i] as number)) / BAND_GRID,
-    );
-    const key = start * 2 + (vertical ? 1 : 0);
-    const wordlines = wordlinesOfKind[k] as number;
-    if (key === lastKey && extent === lastExtent && lastBand) {
-      if (wordlines > lastRows) {
-        lastRows = wordlines;
-        lastBand.set(extent, wordlines);
-      }
-      continue;
-    }
-    let byExtent = bands.get(key);
-    if (!byExtent) {
-      byExtent = new Map();
-      bands.set(key, byExtent);
-    }
-    const rows = Math.max(byExtent.get(extent) ?? 0, wordlines);
-    byExtent.set(extent, rows);
-    lastKey = key;
-    lastExtent = extent;
-    lastBand = byExtent;
-    lastRows = rows;
-  }
-  let rows = 0;
-  for (const byExtent of bands.values()) for (const r of byExtent.values()) rows += r;
-  return rows;
-}
+export { refreshRows } from './refreshRows';
 
 /**
  * The tRC the refresh figures use: the process override when it is set (> 0), else the computed tRC of
@@ -288,20 +226,10 @@ function matOverlapArea(table: BlockTable, overlaps: readonly PositionedOverlap[
 }
 
 /**
- * Whole-floorplan figures. Array efficiency η = usable bits·A_cell / A_total and area per bit =
- * A_total / usable bits (= A_cell / η). Source: the definition used by Takahashi et al., "A Multigigabit
- * DRAM Technology With 6F² Open-Bitline Cell…", IEEE JSSC 36(11), 2001 (cell area over die area).
- * The total is the bounding box of every block, so gaps count against efficiency. Where mats overlap
- * (an error the checks report) their shared area is counted once, so η never exceeds 100 %.
+ * Bits, usable bits and usable cell area (m²) over all mats, into `out[0 … 2]`. (Each hot loop ends its
+ * function: code after a loop V8 compiled while it ran has no type feedback and is thrown away.)
  */
-export function computeTotals(
-  table: BlockTable,
-  mats: MatTable,
-  design: Design,
-  ctx: DesignContext,
-  senseAmpCount: number,
-  overlaps: readonly PositionedOverlap[],
-): Totals {
+function matSums(mats: MatTable, out: Float64Array): void {
   let bits = 0;
   let usableBits = 0;
   let cellArea = 0;
@@ -311,9 +239,17 @@ export function computeTotals(
     usableBits += f.usableBits;
     cellArea += f.usableBits * f.cellFootprint;
   }
+  out[0] = bits;
+  out[1] = usableBits;
+  out[2] = cellArea;
+}
+
+/**
+ * Area placed (m², returned), per block type code (added into `areaByCode`) and the bounding box of every
+ * block (`box`: left, top, right, bottom, m; ±Infinity without blocks).
+ */
+function blockSums(table: BlockTable, areaByCode: Float64Array, box: Float64Array): number {
   let placedArea = 0;
-  // Summed per type code in a typed array: adding to a record field would box a new number each time.
-  const areaByCode = new Float64Array(BLOCK_TYPE_CODES.length);
   let minX = Infinity;
   let minY = Infinity;
   let maxX = -Infinity;
@@ -331,6 +267,41 @@ export function computeTotals(
     maxX = Math.max(maxX, x + w);
     maxY = Math.max(maxY, y + h);
   }
+  box[0] = minX;
+  box[1] = minY;
+  box[2] = maxX;
+  box[3] = maxY;
+  return placedArea;
+}
+
+/**
+ * Whole-floorplan figures. Array efficiency η = usable bits·A_cell / A_total and area per bit =
+ * A_total / usable bits (= A_cell / η). Source: the definition used by Takahashi et al., "A Multigigabit
+ * DRAM Technology With 6F² Open-Bitline Cell…", IEEE JSSC 36(11), 2001 (cell area over die area).
+ * The total is the bounding box of every block, so gaps count against efficiency. Where mats overlap
+ * (an error the checks report) their shared area is counted once, so η never exceeds 100 %.
+ */
+export function computeTotals(
+  table: BlockTable,
+  mats: MatTable,
+  design: Design,
+  ctx: DesignContext,
+  senseAmpCount: number,
+  overlaps: readonly PositionedOverlap[],
+): Totals {
+  const sums = new Float64Array(3);
+  matSums(mats, sums);
+  const bits = sums[0] as number;
+  const usableBits = sums[1] as number;
+  const cellArea = sums[2] as number;
+  // Summed per type code in a typed array: adding to a record field would box a new number each time.
+  const areaByCode = new Float64Array(BLOCK_TYPE_CODES.length);
+  const box = new Float64Array(4);
+  const placedArea = blockSums(table, areaByCode, box);
+  const minX = box[0] as number;
+  const minY = box[1] as number;
+  const maxX = box[2] as number;
+  const maxY = box[3] as number;
   const sum = (type: BlockType) => areaByCode[BLOCK_TYPE_CODES.indexOf(type)] as number;
   const areaByType: Record<BlockType, number> = {
     mat: sum('mat'),
