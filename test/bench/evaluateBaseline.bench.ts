@@ -10,7 +10,7 @@
  * history the line says so and is skipped. Never fails the build: timing depends on the machine.
  */
 import { spawnSync } from 'node:child_process';
-import { existsSync, mkdirSync, symlinkSync } from 'node:fs';
+import { existsSync, mkdirSync, rmSync, symlinkSync } from 'node:fs';
 import { cpus, loadavg, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { performance } from 'node:perf_hooks';
@@ -56,7 +56,11 @@ function baselineFolder(): { ok: true; dir: string } | { ok: false; reason: stri
       return { ok: false, reason: `git archive ${BASELINE_COMMIT} failed: ${extracted.stderr.trim()}` };
   }
   const modules = join(dir, 'node_modules');
-  if (!existsSync(modules)) symlinkSync(join(repoRoot, 'node_modules'), modules, 'dir');
+  if (!existsSync(modules)) {
+    // A link left by a checkout that is gone points nowhere (existsSync follows it): link this one's.
+    rmSync(modules, { force: true });
+    symlinkSync(join(repoRoot, 'node_modules'), modules, 'dir');
+  }
   return { ok: true, dir };
 }
 
