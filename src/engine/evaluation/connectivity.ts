@@ -85,6 +85,11 @@ export function matConnections(
   serving: MatTableBuilder,
   k: number,
   into: MatConnections = emptyConnections(),
+  /**
+   * pairsAcrossStrips of the mat's cell, when the caller reads it once per kind: cells of different
+   * designs may differ in shape, and reading them per mat throws a compiled loop away.
+   */
+  openCell?: boolean,
 ): MatConnections {
   const kind = kindAt(table, at);
   const axis = kind.block.bitlineAxis;
@@ -134,8 +139,8 @@ export function matConnections(
   const g = kind.geometry;
   const senseAmpEnds = (top ? 1 : 0) + (bottom ? 1 : 0);
   // Open bit lines are counted from the contacts before the coverage count below reorders their spans.
-  const open = pairsAcrossStrips(kind.cell);
-  const unpartnered = unpartneredBitlines(table, at, contacts, neighbours);
+  const open = openCell ?? pairsAcrossStrips(kind.cell);
+  const unpartnered = unpartneredBitlines(table, at, contacts, neighbours, open);
   serving.setServing(k, senseAmpStrips, senseAmpCount, driverStrips, driverCount);
   // Open bit lines go half to each edge; other lines are served by a strip at either end.
   into.unsensedBitlines = open

@@ -9,6 +9,7 @@ import { layoutState } from './layoutFindings';
 import { emptyConnections, matConnections, type MatConnections } from './connectivity';
 import { designContext as contextOf, type DesignContext } from './designContext';
 import { matPhysics, senseAmpsOfMat } from './matPhysics';
+import { pairsAcrossStrips } from './openBitline';
 import { findPositionedOverlaps } from './overlaps';
 import { rememberReportState } from './reportState';
 import type { MatFigures, MatReport, Report } from './report';
@@ -86,8 +87,10 @@ export function evaluateMatAt(
   mats: MatTableBuilder,
   k: number,
   figuresByKind?: Map<number | string, MatFigures>,
+  /** Whether the mat's cell pairs bit lines across strips (see matConnections), when known per kind. */
+  openCell?: boolean,
 ): void {
-  const c = matConnections(table, at, neighbours, mats, k, connections);
+  const c = matConnections(table, at, neighbours, mats, k, connections, openCell);
   const kindIndex = table.kindOf[at] as number;
   const lost = c.unpartneredBitlines;
   const unsensed = c.unsensedBitlines;
@@ -122,9 +125,21 @@ function evaluateAllMats(
   builder: MatTableBuilder,
 ): void {
   const figuresByKind = new Map<number | string, MatFigures>();
+  const openKind = new Uint8Array(table.kinds.length);
+  for (let n = 0; n < openKind.length; n++)
+    openKind[n] = pairsAcrossStrips((table.kinds[n] as MatKind).cell) ? 1 : 0;
   for (let i = 0, k = 0; i < table.count; i++) {
     if (table.type[i] !== MAT_CODE) continue;
-    evaluateMatAt(table, i, neighbours, ctx, builder, k, figuresByKind);
+    evaluateMatAt(
+      table,
+      i,
+      neighbours,
+      ctx,
+      builder,
+      k,
+      figuresByKind,
+      openKind[table.kindOf[i] as number] === 1,
+    );
     k++;
   }
 }

@@ -86,9 +86,11 @@ export function unpartneredBitlines(
   at: number,
   contacts: SenseAmpContacts,
   neighbours: NeighbourTable,
+  /** pairsAcrossStrips of the mat's cell, when the caller knows it already (read once per kind). */
+  open?: boolean,
 ): number {
   const { cell, block, geometry: g } = kindAt(table, at);
-  if (!pairsAcrossStrips(cell) || contacts.count === 0) return 0;
+  if (!(open ?? pairsAcrossStrips(cell)) || contacts.count === 0) return 0;
   let lost = 0;
   for (let c = 0; c < contacts.count; c++) {
     const side = contacts.side[c] as Side;
