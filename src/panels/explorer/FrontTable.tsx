@@ -19,6 +19,8 @@ interface FrontTableProps {
   onBuild(plottedIndex: number): void;
 }
 
+const at = (column: Float64Array, row: number) => column[row] ?? Number.NaN;
+
 /**
  * The Pareto-front points as a table, best first along the horizontal axis: what partition each is, its
  * two charted figures, and a button that builds it as a new variant. It is the keyboard's way to the
@@ -53,8 +55,16 @@ export function FrontTable({ model, table, request, xAxis, yAxis, onFocusPoint, 
         <tbody>
           {model.front.map((plottedIndex, rank) => {
             const row = plottedIndex < model.count ? (model.row[plottedIndex] ?? -1) : -1;
-            const point = row >= 0 ? table.point(row) : undefined;
-            if (!point?.figures) return null;
+            if (row < 0 || !table.planned(row)) return null;
+            // Read from the columns: no point object per row.
+            const point = {
+              cellIndex: at(table.place('cellIndex'), row),
+              processIndex: at(table.place('processIndex'), row),
+              cellsPerBitline: at(table.place('cellsPerBitline'), row),
+              cellsPerWordline: at(table.place('cellsPerWordline'), row),
+              matRows: at(table.place('matRows'), row),
+              matColumns: at(table.place('matColumns'), row),
+            };
             const cell = request.cells[point.cellIndex];
             const process = request.processes[point.processIndex];
             const title = `${cell?.name ?? '?'} · ${process ? shortProcessName(process) : '?'}`;
@@ -77,8 +87,8 @@ export function FrontTable({ model, table, request, xAxis, yAxis, onFocusPoint, 
                 <td>
                   {point.matRows} × {point.matColumns}
                 </td>
-                <td className="num">{formatQuantity(point.figures[xAxis], xInfo.quantity)}</td>
-                <td className="num">{formatQuantity(point.figures[yAxis], yInfo.quantity)}</td>
+                <td className="num">{formatQuantity(at(table.figure(xAxis), row), xInfo.quantity)}</td>
+                <td className="num">{formatQuantity(at(table.figure(yAxis), row), yInfo.quantity)}</td>
                 <td>
                   <button
                     type="button"
