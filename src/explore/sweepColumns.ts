@@ -97,7 +97,8 @@ export class SweepTextTables {
   private problemCount = 0;
 
   kindList(kinds: readonly FindingKind[], added: FindingKind[][]): number {
-    const key = kinds.join(',');
+    // Most lists are empty or hold one kind: no joined text for those.
+    const key = kinds.length === 0 ? '' : kinds.length === 1 ? (kinds[0] ?? '') : kinds.join(',');
     let id = this.kindLists.get(key);
     if (id === undefined) {
       id = this.kindListCount++;
@@ -126,15 +127,22 @@ export function encodeSweepChunk(points: readonly SweepPoint[], tables: SweepTex
   const texts = new Int32Array(TEXT_COLUMNS.length * n).fill(-1);
   const newKindLists: FindingKind[][] = [];
   const newProblems: string[] = [];
+  // Column by column: each inner loop reads one property name from every point, so the read stays
+  // monomorphic, and writes run along the column.
+  PLACE_COLUMNS.forEach((column, c) => {
+    for (let i = 0; i < n; i++) place[c * n + i] = points[i]?.[column] ?? Number.NaN;
+  });
+  FIGURE_COLUMNS.forEach((key, k) => {
+    for (let i = 0; i < n; i++) {
+      const f = points[i]?.figures;
+      if (f) figures[k * n + i] = f[key];
+    }
+  });
   for (let i = 0; i < n; i++) {
     const p = points[i];
     if (!p) continue;
-    PLACE_COLUMNS.forEach((column, c) => {
-      place[c * n + i] = p[column] ?? Number.NaN;
-    });
     const f = p.figures;
     if (f) {
-      for (let k = 0; k < FIGURE_COLUMNS.length; k++) figures[k * n + i] = f[FIGURE_COLUMNS[k] as FigureKey];
       texts[i] = tables.kindList(f.errorKinds, newKindLists);
       texts[n + i] = tables.kindList(f.warningKinds, newKindLists);
     }
