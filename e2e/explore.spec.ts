@@ -1,5 +1,6 @@
 import { expect, test } from '@playwright/test';
 import { ExplorerPage } from './explorerPage';
+import { FRONT_ROWS_FIRST_SHOWN } from '../src/panels/explorer/frontTableRows';
 
 /** Figures a built point and its variant must share. */
 const COMPARED = [
@@ -160,4 +161,23 @@ test('build one partition from the form, then rename, switch, delete and undo va
   await page.getByTestId('variant-v3-areaPerBit').click();
   await expect(page.getByTestId('explanation')).toContainText('A_total / usable bits');
   await page.screenshot({ path: test.info().outputPath('variants-three.png') });
+});
+
+test('a long Pareto front lists its first rows and the rest on request; the chart marks every front point', async ({
+  page,
+}) => {
+  const explorer = new ExplorerPage(page);
+  await explorer.open();
+  await explorer.setRange('bl', 8, 1024, 8);
+  await explorer.setRange('wl', 64, 256, 64);
+  await explorer.runSweep();
+  const onChart = await page.getByTestId('front-point').count();
+  expect(onChart).toBeGreaterThan(FRONT_ROWS_FIRST_SHOWN);
+  await expect(page.getByTestId('front-table')).toContainText(`Pareto front: ${onChart} points`);
+  await expect(page.getByTestId('front-row')).toHaveCount(FRONT_ROWS_FIRST_SHOWN);
+  const more = page.getByTestId('front-show-all');
+  await expect(more).toHaveText(`Show the other ${onChart - FRONT_ROWS_FIRST_SHOWN} front points`);
+  await more.click();
+  await expect(page.getByTestId('front-row')).toHaveCount(onChart);
+  await expect(more).toHaveCount(0);
 });

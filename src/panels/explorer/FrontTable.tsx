@@ -1,3 +1,4 @@
+import { useState } from 'react';
 import { shortProcessName } from '../../designs/buildPartition';
 import type { ColumnChartModel } from '../../explore/chartModelBuilder';
 import type { SweepTable } from '../../explore/sweepColumns';
@@ -5,6 +6,7 @@ import { bankFigureEntry, type FigureKey } from '../../engine';
 import type { SweepRequest } from '../../explore/sweep';
 import { formatQuantity } from '../../model/units';
 import { markerPath } from '../../charts/ScatterChart';
+import { FRONT_ROWS_FIRST_SHOWN } from './frontTableRows';
 import { seriesColour } from './seriesStyle';
 
 interface FrontTableProps {
@@ -29,6 +31,9 @@ const at = (column: Float64Array, row: number) => column[row] ?? Number.NaN;
 export function FrontTable({ model, table, request, xAxis, yAxis, onFocusPoint, onBuild }: FrontTableProps) {
   const xInfo = bankFigureEntry(xAxis);
   const yInfo = bankFigureEntry(yAxis);
+  const [showAll, setShowAll] = useState(false);
+  const shown = showAll ? model.front : model.front.slice(0, FRONT_ROWS_FIRST_SHOWN);
+  const hidden = model.front.length - shown.length;
   return (
     <div className="front-table-box">
       <table className="front-table" data-testid="front-table">
@@ -53,7 +58,7 @@ export function FrontTable({ model, table, request, xAxis, yAxis, onFocusPoint, 
           </tr>
         </thead>
         <tbody>
-          {model.front.map((plottedIndex, rank) => {
+          {shown.map((plottedIndex, rank) => {
             const row = plottedIndex < model.count ? (model.row[plottedIndex] ?? -1) : -1;
             if (row < 0 || !table.planned(row)) return null;
             // Read from the columns: no point object per row.
@@ -107,6 +112,17 @@ export function FrontTable({ model, table, request, xAxis, yAxis, onFocusPoint, 
           })}
         </tbody>
       </table>
+      {hidden > 0 && (
+        <button
+          type="button"
+          className="front-more"
+          data-testid="front-show-all"
+          title="List every point of the Pareto front in this table"
+          onClick={() => setShowAll(true)}
+        >
+          Show the other {hidden} front points
+        </button>
+      )}
     </div>
   );
 }
