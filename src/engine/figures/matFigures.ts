@@ -3,18 +3,14 @@ import type { Design } from '../../model/design';
 import type { MatReport, Report } from '../evaluation/report';
 import { explanationOf } from './figure';
 import { input, SOURCES, type Explanation } from './explanation';
-import { FORMULAS } from './formulas';
 import { isGainCell } from '../../model/cellBasics';
-import {
-  currentReadTime,
-  matFigure,
-  MAT_FIGURE_GROUPS,
-  type MatFigureEntry,
-  type MatFigureGroup,
-} from './matFigure';
+import { matFigure, MAT_FIGURE_GROUPS, type MatFigureEntry, type MatFigureGroup } from './matFigure';
 import { READ_FIGURES } from './matReadFigures';
 import { MAT_SIZE_FIGURES, MAT_PARASITIC_FIGURES } from './matSizeFigures';
 import { MAT_TIMING_FIGURES } from './matTimingFigures';
+import { RETENTION_FIGURES } from './matRetentionFigures';
+import { LINE_FIGURES } from './matLineFigures';
+import { ENERGY_FIGURES } from './matEnergyFigures';
 
 /**
  * The catalogue of per-mat figures, in the order of the JSON summary; the panel shows the entries that
@@ -192,222 +188,10 @@ export const MAT_FIGURE_CATALOGUE = [
       };
     },
   }),
-  matFigure({
-    key: 'leakage',
-    label: 'Cell leakage at temperature',
-    quantity: 'current',
-    group: null,
-    exportKey: 'leakage_A',
-    value: (f) => f.leakage,
-  }),
-  matFigure({
-    key: 'allowedDroop',
-    label: 'Droop until the margin is zero',
-    quantity: 'voltage',
-    group: null,
-    exportKey: 'allowedDroop_V',
-    value: (f) => f.allowedDroop,
-  }),
-  matFigure({
-    key: 'retentionTime',
-    label: 'Retention time',
-    quantity: 'time',
-    group: 'Retention and speed',
-    exportKey: 'retentionTime_s',
-    csvHeader: 'retention_s',
-    value: (f) => f.retentionTime,
-    explain: (mat, design) => {
-      const f = mat.figures;
-      const p = design.process;
-      return {
-        symbol: 't_ret',
-        formula: `${FORMULAS.retention},  ${FORMULAS.leakageAtTemperature}`,
-        inputs: [
-          input('Cs', 'storage capacitance', f.storageCapacitance, 'capacitance'),
-          input('ΔV_allowed', 'droop until margin is zero', f.allowedDroop, 'voltage'),
-          input('I_ref', 'leakage at reference', p.cellLeakageCurrent, 'current'),
-          input('T_ref', 'reference temperature', p.leakageReferenceTemperature, 'temperature'),
-          input('T', 'operating temperature', design.operating.temperature, 'temperature'),
-          input('I(T)', 'leakage at temperature', f.leakage, 'current'),
-        ],
-        method: 'Constant-current leakage scaled with temperature by Arrhenius.',
-        source: SOURCES.arrhenius,
-      };
-    },
-  }),
-  matFigure({
-    key: 'wordlineResistance',
-    label: 'Sub-word-line resistance',
-    quantity: 'resistance',
-    group: null,
-    exportKey: 'wordlineResistance_ohm',
-    value: (f) => f.wordlineResistance,
-  }),
-  matFigure({
-    key: 'wordlineCapacitance',
-    label: 'Sub-word-line capacitance',
-    quantity: 'capacitance',
-    group: null,
-    exportKey: 'wordlineCapacitance_F',
-    value: (f) => f.wordlineCapacitance,
-  }),
-  matFigure({
-    key: 'wordlineDelay',
-    label: 'Word-line delay (50 %)',
-    quantity: 'time',
-    group: 'Retention and speed',
-    exportKey: 'wordlineDelay_s',
-    csvHeader: 'wordline_delay_s',
-    value: (f) => f.wordlineDelay,
-    explain: (mat, design) => ({
-      symbol: 't_wl',
-      formula: FORMULAS.wordlineDelay,
-      inputs: [
-        input('R_drv', 'driver resistance', design.process.wordlineDriverResistance, 'resistance'),
-        input('R_wl', 'sub-word-line resistance', mat.figures.wordlineResistance, 'resistance'),
-        input(
-          'C_wl',
-          'sub-word-line capacitance (gates, passing, BL crossings, wire)',
-          mat.figures.wordlineCapacitance,
-          'capacitance',
-        ),
-        input('t_on', 'far end to turn-on Vpre + Vt(Vpre)', mat.figures.wordlineTiming.toTurnOn, 'time'),
-        input(
-          't_90',
-          'far end to 90 % of the high level',
-          mat.figures.wordlineTiming.toNinetyPercent,
-          'time',
-        ),
-      ],
-      method:
-        'Exact step response of a distributed RC line driven through R_drv (eigen-series); 50 % point shown, turn-on and 90 % beside it.',
-      source: SOURCES.rabaey,
-    }),
-  }),
-  matFigure({
-    key: 'bitlineResistance',
-    label: 'Bit-line resistance',
-    quantity: 'resistance',
-    group: null,
-    exportKey: 'bitlineResistance_ohm',
-    value: (f) => f.bitlineResistance,
-  }),
-  matFigure({
-    key: 'bitlineDelay',
-    label: 'Bit-line development (50 %)',
-    quantity: 'time',
-    group: 'Retention and speed',
-    exportKey: 'bitlineDelay_s',
-    csvHeader: 'bitline_delay_s',
-    value: (f) => f.bitlineDelay,
-    explain: (mat, design) => {
-      const f = mat.figures;
-      return f.read.kind === 'chargeSharing'
-        ? {
-            symbol: 't_bl',
-            formula: 't_bl = τ·ln 2,  τ = R_acc·Cs·Cbl/(Cs+Cbl) + R_bl·Cbl/2',
-            inputs: [
-              input('R_acc', 'access transistor', design.process.accessTransistorResistance, 'resistance'),
-              input('Cs', 'storage capacitance', f.storageCapacitance, 'capacitance'),
-              input('R_bl', 'bit-line resistance', f.bitlineResistance, 'resistance'),
-              input('Cbl', 'bit-line capacitance', f.bitlineCapacitance.total, 'capacitance'),
-              input('τ', 'development time constant', f.read.developmentTimeConstant, 'time'),
-            ],
-            method:
-              'Single-pole development of the charge-sharing signal: half of it after τ·ln 2 (Elmore time constant of the access device into Cs in series with Cbl, plus the distributed bit line).',
-            source: 'W. C. Elmore, J. Appl. Phys. 19, 1948 (first-moment delay)',
-          }
-        : {
-            title: 'Read-bit-line sense time',
-            symbol: 't_sense',
-            formula: 't_sense: the read develops for as long as it is sensed',
-            inputs: [
-              input(
-                't_sense',
-                isGainCell(f.cellKind)
-                  ? 'gain-cell sense time (process)'
-                  : 'sense fires after turn-on (operating)',
-                currentReadTime(f, design),
-                'time',
-              ),
-            ],
-            method: 'The read bit line develops for a fixed time before sensing.',
-            source: SOURCES.gainCells,
-          };
-    },
-  }),
+  ...RETENTION_FIGURES,
+  ...LINE_FIGURES,
   ...MAT_TIMING_FIGURES,
-  matFigure({
-    key: 'activationEnergy',
-    label: 'Energy per activation',
-    quantity: 'energy',
-    group: 'Energy',
-    exportKey: 'activationEnergy_J',
-    csvHeader: 'activation_energy_J',
-    value: (f) => f.activationEnergy.total,
-    explain: (mat) => {
-      const f = mat.figures;
-      return {
-        symbol: 'E_act',
-        formula: 'E_act = E_bl + C_wl·V_wl² + M·C_sa·VDD²',
-        inputs: [
-          input(
-            'E_bl',
-            f.read.kind === 'chargeSharing' ? 'bit lines: M·Cbl·VDD²/2' : 'read bit lines: M·C·VDD·ΔV1',
-            f.activationEnergy.bitlines,
-            'energy',
-          ),
-          input('E_wl', 'word line', f.activationEnergy.wordline, 'energy'),
-          input('E_sa', 'sense-amplifier latches', f.activationEnergy.senseAmps, 'energy'),
-          input('M', 'cells per word line', f.cellsPerWordline, 'count'),
-        ],
-        method: 'One word line of the mat activated; half-VDD precharge with equalisation.',
-        source: `${SOURCES.common}; C·V² charging energy, ${SOURCES.rabaey}`,
-      };
-    },
-  }),
-  matFigure({
-    key: 'activationEnergyBitlines',
-    label: 'Activation energy of the bit lines',
-    quantity: 'energy',
-    group: null,
-    exportKey: 'activationEnergyBitlines_J',
-    value: (f) => f.activationEnergy.bitlines,
-  }),
-  matFigure({
-    key: 'activationEnergyWordline',
-    label: 'Activation energy of the word line',
-    quantity: 'energy',
-    group: null,
-    exportKey: 'activationEnergyWordline_J',
-    value: (f) => f.activationEnergy.wordline,
-  }),
-  matFigure({
-    key: 'activationEnergySenseAmps',
-    label: 'Activation energy of the sense amplifiers',
-    quantity: 'energy',
-    group: null,
-    exportKey: 'activationEnergySenseAmps_J',
-    value: (f) => f.activationEnergy.senseAmps,
-  }),
-  matFigure({
-    key: 'energyPerBit',
-    label: 'Activation energy per bit',
-    quantity: 'energy',
-    group: 'Energy',
-    exportKey: 'activationEnergyPerBit_J',
-    value: (f) => f.activationEnergy.perBit,
-    explain: (mat) => ({
-      symbol: 'E_bit',
-      formula: FORMULAS.energyPerBit,
-      inputs: [
-        input('E_act', 'energy per activation', mat.figures.activationEnergy.total, 'energy'),
-        input('M', 'cells per word line', mat.figures.cellsPerWordline, 'count'),
-      ],
-      method: 'Activation energy spread over the cells the word line opens.',
-      source: SOURCES.common,
-    }),
-  }),
+  ...ENERGY_FIGURES,
   matFigure({
     key: 'senseAmpPitchBudget',
     label: 'Sense-amplifier pitch budget',
