@@ -1,11 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import {
-  countProbabilities,
   estimateRepairProbability,
   RepairSimulation,
   type RepairMonteCarloRequest,
 } from '../../../src/engine/physics/repairMonteCarlo';
+import { countProbabilities } from '../../../src/engine/physics/repairSampling';
 import { sharedDomainLayout } from '../../../src/engine/physics/repairLayout';
 import {
   dieRepairProbability,
