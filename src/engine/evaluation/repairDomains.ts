@@ -344,14 +344,19 @@ export function gridRepairPlan(
     tileOf(r === 0 ? C : splitShare(C, 2, 1)),
     tileOf(r === matRows - 1 ? C : splitShare(C, 2, 0)),
   ];
-  const mixOf = (rs: readonly number[], matsPerRow: number): TileShare[] => {
+  // Mat rows differ only as first, inner or last: each kind once, weighted by its rows (whole numbers, so
+  // the counts are the same sums as row by row, and classes appear in the same order).
+  const rowKinds: [row: number, rows: number][] = [[0, 1]];
+  if (matRows > 2) rowKinds.push([1, matRows - 2]);
+  if (matRows > 1) rowKinds.push([matRows - 1, 1]);
+  const mixOf = (kindsOfRow: readonly [number, number][], matsPerRow: number): TileShare[] => {
     const kinds = new Map<string, { count: number } & Omit<TileShare, 'count'>>();
-    for (const r of rs) {
+    for (const [r, weight] of kindsOfRow) {
       for (const t of matTiles(r)) {
         const key = tileKey(t);
         const found = kinds.get(key);
-        if (found) found.count += matsPerRow;
-        else kinds.set(key, { count: matsPerRow, ...t });
+        if (found) found.count += matsPerRow * weight;
+        else kinds.set(key, { count: matsPerRow * weight, ...t });
       }
     }
     return [...kinds.entries()].sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0)).map(([, k]) => k);
@@ -363,22 +368,19 @@ export function gridRepairPlan(
       count: 1,
       domain: rowDomain,
       spareArea: rowSpareArea,
-      tiles: mixOf(
-        Array.from({ length: matRows }, (_, r) => r),
-        matColumns,
-      ),
+      tiles: mixOf(rowKinds, matColumns),
     });
   } else if (rowDomains > 0) {
     // Mat rows of one kind (first, inner, last) have the same tiles.
     const perMat = settings.repairDomain === 'mat' ? matColumns : 1;
     const matsPerRow = settings.repairDomain === 'mat' ? 1 : matColumns;
     const byMix = new Map<string, RepairDomainClass & { count: number }>();
-    for (let r = 0; r < matRows; r++) {
-      const tiles = mixOf([r], matsPerRow);
+    for (const [r, weight] of rowKinds) {
+      const tiles = mixOf([[r, 1]], matsPerRow);
       const key = tiles.map(tileKey).join(';');
       const found = byMix.get(key);
-      if (found) found.count += perMat;
-      else byMix.set(key, { count: perMat, domain: rowDomain, spareArea: rowSpareArea, tiles });
+      if (found) found.count += perMat * weight;
+      else byMix.set(key, { count: perMat * weight, domain: rowDomain, spareArea: rowSpareArea, tiles });
     }
     rowClasses.push(...byMix.values());
   }

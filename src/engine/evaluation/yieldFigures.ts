@@ -10,7 +10,7 @@ import {
   type RetentionTail,
   type FaultCounts,
 } from '../physics/faultRates';
-import { crossedRepairLowerBound, type LineDomainClass } from '../physics/redundancy';
+import { crossedRepairLowerBound, type LineDomainClass } from '../physics/crossedRepair';
 import { spareSetArea } from '../physics/redundancyArea';
 import type { RepairMonteCarloRequest } from '../physics/repairMonteCarlo';
 import { goodDiesPerWafer, grossDiesPerWafer, negativeBinomialYield } from '../physics/yield';

@@ -8,11 +8,11 @@ import {
 } from '../../../src/engine/physics/repairCover';
 import {
   crossedRepairLowerBound,
-  lineRepairProbability,
   splitPlanDomainProbability,
   type LineDomainClass,
   type TileShareClass,
-} from '../../../src/engine/physics/redundancy';
+} from '../../../src/engine/physics/crossedRepair';
+import { lineRepairProbability } from '../../../src/engine/physics/redundancy';
 import { estimateRepairProbability } from '../../../src/engine/physics/repairMonteCarlo';
 import { repairTiles, type RepairLayout, type RepairTile } from '../../../src/engine/physics/repairLayout';
 
