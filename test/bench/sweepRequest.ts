@@ -1,6 +1,6 @@
 import { demoDesign } from '../../src/designs/demoDesign';
 import { steppedValues, sweepSize, type SweepRequest } from '../../src/explore/sweep';
-import { defaultSweepSettings, sweepRequestFor } from '../../src/explore/sweepSettings';
+import { DEFAULT_SPARE_SWEEP, defaultSweepSettings, sweepRequestFor } from '../../src/explore/sweepSettings';
 import { BUILTIN_CELLS, BUILTIN_PROCESSES, DEFAULT_OPERATING } from '../../src/model/builtins';
 
 /** The benchmark sweep: 32 × 18 cell counts × every built-in cell × 3 processes for a 256 Mib bank. */
@@ -40,3 +40,25 @@ function explorerRequest(): SweepRequest {
 
 export const EXPLORER_REQUEST: SweepRequest = explorerRequest();
 export const EXPLORER_POINTS = sweepSize(EXPLORER_REQUEST);
+
+/**
+ * A sweep with spares, as the explorer makes it when the spare sweep is on (0 … 4 spare rows × 0 … 4
+ * spare columns, 25 pairs per partition) on the demo design, with cell counts 64 … 1024 by 128 per bit
+ * line and 128 … 2048 by 256 per word line (a quarter of the explorer's default grid, so a run takes
+ * seconds, not half a minute).
+ */
+function spareRequest(): SweepRequest {
+  const design = demoDesign();
+  return sweepRequestFor(
+    {
+      ...defaultSweepSettings(design),
+      cellsPerBitline: { from: 64, to: 1024, step: 128 },
+      cellsPerWordline: { from: 128, to: 2048, step: 256 },
+      spares: DEFAULT_SPARE_SWEEP,
+    },
+    design,
+  );
+}
+
+export const SPARE_REQUEST: SweepRequest = spareRequest();
+export const SPARE_POINTS = sweepSize(SPARE_REQUEST);
