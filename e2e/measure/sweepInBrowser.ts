@@ -18,7 +18,7 @@ import { writeFileSync } from 'node:fs';
 import type { CDPSession } from '@playwright/test';
 import { base, launchChromium, startServer } from './benchPage';
 import { profiled, summarise, type Profile } from './cpuProfile';
-import { prepareSweepPage, SWEEP_TIMES_SCRIPT, TARGET_POINTS } from './sweepPage';
+import { prepareSweepPage, runSweepToPaint, SWEEP_TIMES_SCRIPT, TARGET_POINTS } from './sweepPage';
 import { benchLine, HEADER, loadAverage, stats } from './paintTiming';
 
 const RUNS = Number(process.env.SWEEP_RUNS ?? 5);
@@ -51,12 +51,7 @@ async function main() {
       const cdp = await context.newCDPSession(page);
       await cdp.send('Performance.enable');
       const before = await mainThreadMs(cdp);
-      const sweep = async () => {
-        await page.getByTestId('run-sweep').click();
-        await page.waitForFunction('!Number.isNaN(window.__sweepTimes.painted)', undefined, {
-          timeout: 120_000,
-        });
-      };
+      const sweep = () => runSweepToPaint(page);
       if (PROFILE) profile = await profiled(cdp, sweep);
       else await sweep();
       const after = await mainThreadMs(cdp);

@@ -7,7 +7,7 @@
  */
 import { writeFileSync } from 'node:fs';
 import { base, launchChromium, startServer } from './benchPage';
-import { prepareSweepPage, SWEEP_TIMES_SCRIPT } from './sweepPage';
+import { prepareSweepPage, runSweepToPaint, SWEEP_TIMES_SCRIPT } from './sweepPage';
 
 interface TraceEvent {
   readonly name: string;
@@ -38,8 +38,7 @@ async function main() {
       categories: 'devtools.timeline,v8,disabled-by-default-devtools.timeline,blink.user_timing',
       transferMode: 'ReportEvents',
     });
-    await page.getByTestId('run-sweep').click();
-    await page.waitForFunction('!Number.isNaN(window.__sweepTimes.painted)', undefined, { timeout: 120_000 });
+    await runSweepToPaint(page);
     await cdp.send('Tracing.end');
     await complete;
     writeFileSync('/tmp/matloom-sweep-trace.json', JSON.stringify({ traceEvents: events }));
