@@ -17,13 +17,18 @@ const SPRITE_PX = 12;
 /** Sprites drawn so far, by colour, shape, feasibility and pixel ratio. */
 const sprites = new Map<string, Sprite>();
 
+let spriteCanvas: HTMLCanvasElement | null = null;
+
 /** One marker drawn once with the canvas API and read back as pixels. */
 function markerSprite(fill: string, shape: number, infeasible: boolean, ratio: number): Sprite {
   const key = `${fill}|${shape}|${infeasible}|${ratio}`;
   const known = sprites.get(key);
   if (known) return known;
   const side = Math.ceil(SPRITE_PX * ratio);
-  const canvas = document.createElement('canvas');
+  // One scratch canvas for every sprite: setting its size clears it and resets its context's state, as
+  // a new canvas would be, without a new canvas and context per sprite.
+  spriteCanvas ??= document.createElement('canvas');
+  const canvas = spriteCanvas;
   canvas.width = side;
   canvas.height = side;
   const context = canvas.getContext('2d');

@@ -32,13 +32,16 @@ export function stampSprite(
   left: number,
   top: number,
 ): void {
-  const x0 = Math.max(clip.x0, left);
   const y0 = Math.max(clip.y0, top);
-  const x1 = Math.min(clip.x1, left + sprite.width);
   const y1 = Math.min(clip.y1, top + sprite.height);
   const s = sprite.data;
+  const spans = spansOf(sprite);
   for (let y = y0; y < y1; y++) {
-    let si = ((y - top) * sprite.width + (x0 - left)) * 4;
+    // Only the row's stretch holding any colour: a marker fills about a third of its square.
+    const row = y - top;
+    const x0 = Math.max(clip.x0, left + (spans[2 * row] ?? 0));
+    const x1 = Math.min(clip.x1, left + (spans[2 * row + 1] ?? 0));
+    let si = (row * sprite.width + (x0 - left)) * 4;
     let ti = (y * targetWidth + x0) * 4;
     for (let x = x0; x < x1; x++, si += 4, ti += 4) {
       const as = (s[si + 3] ?? 0) / 255;
@@ -59,4 +62,26 @@ export function stampSprite(
       target[ti + 3] = a * 255;
     }
   }
+}
+
+/** Per sprite, each row's first and one-past-last pixel with any alpha (an empty row: 0, 0). */
+const rowSpans = new WeakMap<Sprite, Int32Array>();
+
+function spansOf(sprite: Sprite): Int32Array {
+  const known = rowSpans.get(sprite);
+  if (known) return known;
+  const spans = new Int32Array(2 * sprite.height);
+  for (let y = 0; y < sprite.height; y++) {
+    let first = -1;
+    let end = 0;
+    for (let x = 0; x < sprite.width; x++) {
+      if ((sprite.data[(y * sprite.width + x) * 4 + 3] ?? 0) === 0) continue;
+      if (first < 0) first = x;
+      end = x + 1;
+    }
+    spans[2 * y] = Math.max(0, first);
+    spans[2 * y + 1] = end;
+  }
+  rowSpans.set(sprite, spans);
+  return spans;
 }

@@ -1,10 +1,8 @@
 import { checkLabel, type FindingKind } from '../engine';
 import {
-  infeasibleReasons,
   LIMIT_LABELS,
   type FeasibilityFigures,
   type FeasibilityLimits,
-  type InfeasibleReason,
 } from './chartData';
 
 /** What a tally reads of a sweep point (a SweepPoint will do; SweepTable.tallyPoints() makes lighter ones). */
@@ -55,15 +53,11 @@ export class FamilyTallier {
   constructor(readonly limits: FeasibilityLimits) {}
 
   add(point: TallyPoint): void {
-    const reasons: InfeasibleReason[] | null = point.figures
-      ? infeasibleReasons(point.figures, this.limits)
-      : null;
-    count(this.byCell, point.cellIndex, point.cellIndex, reasons);
+    count(countsOf(this.byCell, point.cellIndex, point.cellIndex), point.figures, this.limits);
     count(
-      this.byCellProcess,
-      point.cellIndex * PROCESS_KEY_SPAN + point.processIndex,
-      point.cellIndex,
-      reasons,
+      countsOf(this.byCellProcess, point.cellIndex * PROCESS_KEY_SPAN + point.processIndex, point.cellIndex),
+      point.figures,
+      this.limits,
     );
   }
 
@@ -78,27 +72,34 @@ export class FamilyTallier {
   }
 }
 
-function count(
-  tallies: Map<number, Counts>,
-  key: number,
-  cellIndex: number,
-  reasons: InfeasibleReason[] | null,
-) {
+function countsOf(tallies: Map<number, Counts>, key: number, cellIndex: number): Counts {
   let t = tallies.get(key);
   if (!t) {
     t = { cellIndex, points: 0, feasible: 0, unplanned: 0, checks: new Map(), limits: new Map() };
     tallies.set(key, t);
   }
+  return t;
+}
+
+/**
+ * Counts one point under what infeasibleReasons() would give, in its order (failed checks, then the
+ * margin limit, then the delay limit), without building the list: the chart model tallies every point.
+ */
+function count(t: Counts, figures: FeasibilityFigures | null, limits: FeasibilityLimits) {
   t.points++;
-  if (reasons === null) {
+  if (figures === null) {
     t.unplanned++;
     return;
   }
-  if (reasons.length === 0) t.feasible++;
-  for (const r of reasons) {
-    if ('check' in r) t.checks.set(r.check, (t.checks.get(r.check) ?? 0) + 1);
-    else t.limits.set(r.limit, (t.limits.get(r.limit) ?? 0) + 1);
+  const marginMissed = !(figures.senseMargin >= limits.minMargin);
+  const delayMissed = !(figures.wordlineDelay <= limits.maxDelay);
+  if (figures.errorKinds.length === 0 && !marginMissed && !delayMissed) {
+    t.feasible++;
+    return;
   }
+  for (const check of figures.errorKinds) t.checks.set(check, (t.checks.get(check) ?? 0) + 1);
+  if (marginMissed) t.limits.set('minMargin', (t.limits.get('minMargin') ?? 0) + 1);
+  if (delayMissed) t.limits.set('maxDelay', (t.limits.get('maxDelay') ?? 0) + 1);
 }
 
 const sorted = (tallies: Map<number, Counts>) => [...tallies.entries()].sort(([a], [b]) => a - b);

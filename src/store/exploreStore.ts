@@ -75,9 +75,11 @@ export interface ExploreState {
   setConstraints(patch: Partial<Constraints>): void;
   /**
    * Starts a sweep whose points go into `table` (an empty one; the caller makes it, so the column code
-   * loads with the explorer rather than with the app).
+   * loads with the explorer rather than with the app). `total` is the sweep's size where the caller
+   * knows it (sweepSize(request)): the running state then shows it from the start, and the worker's
+   * first message, which reports it too, costs no render.
    */
-  startSweep(request: SweepRequest, table: SweepTable): void;
+  startSweep(request: SweepRequest, table: SweepTable, total?: number): void;
   cancelSweep(): void;
   noteBuilt(built: { pointIndex: number; name: string } | null): void;
 }
@@ -163,15 +165,15 @@ export function createExploreStore(
       setConstraints(patch) {
         set({ constraints: { ...get().constraints, ...patch } });
       },
-      startSweep(request, table) {
+      startSweep(request, table, total = 0) {
         stopWorker();
         const id = get().run.id + 1;
         startedAt = performance.now();
         pendingDone = 0;
-        pendingTotal = 0;
+        pendingTotal = total;
         set({
-          run: { ...IDLE, id, status: 'running', request, table },
-          progress: { done: 0, total: 0 },
+          run: { ...IDLE, id, status: 'running', request, table, total },
+          progress: { done: 0, total },
           lastBuilt: null,
         });
         const w = workerFactory();

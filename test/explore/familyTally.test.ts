@@ -1,7 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { CHECK_LABELS, type FindingKind } from '../../src/engine';
+import { infeasibleReasons } from '../../src/explore/chartData';
 import {
   cellProcessTallies,
+  type FamilyTally,
   familyInfeasibleSentence,
   familyTallies,
   infeasibleFamilySentences,
@@ -108,6 +110,52 @@ describe('why whole families are infeasible', () => {
     expect(tallies.reduce((s, t) => s + t.points, 0)).toBe(real.length);
     expect(sentences.length).toBe(tallies.filter((t) => t.feasible === 0).length);
     for (const s of sentences) expect(request.cells.some((c) => s.startsWith(`${c.name}:`))).toBe(true);
+  });
+});
+
+describe('the tally against infeasibleReasons()', () => {
+  it('counts per family and per cell × process exactly what each point’s reasons say', () => {
+    const seen = new Set<string>();
+    // Oracle: the counts rebuilt point by point from infeasibleReasons(), at limits that leave some
+    // points feasible, some missing one limit and some missing both.
+    for (const limits of [
+      { minMargin: 0.02, maxDelay: 0.5e-9 },
+      { minMargin: 0.05, maxDelay: 2e-9 },
+      { minMargin: -1, maxDelay: 1 },
+    ]) {
+      const expected = new Map<string, number>();
+      const bump = (key: string) => expected.set(key, (expected.get(key) ?? 0) + 1);
+      for (const p of real) {
+        for (const family of [`${p.cellIndex}`, `${p.cellIndex}/${p.processIndex}`]) {
+          bump(`${family} points`);
+          if (!p.figures) {
+            bump(`${family} unplanned`);
+            continue;
+          }
+          const reasons = infeasibleReasons(p.figures, limits);
+          if (reasons.length === 0) bump(`${family} feasible`);
+          for (const r of reasons) bump(`${family} ${'check' in r ? r.check : r.limit}`);
+        }
+      }
+      const actual = new Map<string, number>();
+      const put = (family: string, t: FamilyTally) => {
+        for (const [what, n] of [
+          ['points', t.points],
+          ['unplanned', t.unplanned],
+          ['feasible', t.feasible],
+          ...t.checks,
+          ...t.limits,
+        ] as const)
+          if (n > 0) actual.set(`${family} ${what}`, n);
+      };
+      for (const t of familyTallies(real, limits)) put(`${t.cellIndex}`, t);
+      for (const t of cellProcessTallies(real, limits)) put(`${t.cellIndex}/${t.processIndex}`, t);
+      expect(actual).toEqual(expected);
+      for (const k of expected.keys()) seen.add(k.split(' ')[1] ?? '');
+    }
+    // The limits above reach every branch: feasible points, missed limits, failed checks.
+    for (const what of ['feasible', 'minMargin', 'maxDelay']) expect(seen).toContain(what);
+    expect(seen.size).toBeGreaterThan(5);
   });
 });
 

@@ -78,6 +78,32 @@ describe('explorer store', () => {
     expect(w.terminated).toBe(true);
   });
 
+  it('with the size given at the start, shows it at once and the first chunk changes no run state', () => {
+    vi.useFakeTimers();
+    const workers: StepWorker[] = [];
+    const store = createExploreStore(() => {
+      const w = new StepWorker();
+      workers.push(w);
+      return w;
+    }, 150);
+    const request = smallRequest();
+    store.getState().startSweep(request, new SweepTable(), sweepSize(request));
+    const started = store.getState().run;
+    expect(started.total).toBe(sweepSize(request));
+    expect(store.getState().progress).toEqual({ done: 0, total: sweepSize(request) });
+    const w = workers[0];
+    if (!w) throw new Error('no worker');
+    w.step();
+    // Same object: no render until the timers show the points.
+    expect(store.getState().run).toBe(started);
+    vi.advanceTimersByTime(1000);
+    expect(store.getState().run.shown).toBe(100);
+    while (w.step());
+    expect(store.getState().run.status).toBe('done');
+    expect(store.getState().run.total).toBe(sweepSize(request));
+    vi.useRealTimers();
+  });
+
   it('cancels: the worker is terminated and late messages change nothing', () => {
     const workers: StepWorker[] = [];
     const store = createExploreStore(() => {

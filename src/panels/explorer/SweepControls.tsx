@@ -188,7 +188,7 @@ export function SweepControls({ design, settings, onChange }: Props) {
             className="primary"
             data-testid="run-sweep"
             disabled={size === 0 || size > MAX_SWEEP_POINTS}
-            onClick={() => startSweep(request, new SweepTable())}
+            onClick={() => startSweep(request, new SweepTable(), size)}
             title={
               size > MAX_SWEEP_POINTS
                 ? `at most ${MAX_SWEEP_POINTS.toLocaleString('en-US')} points`
