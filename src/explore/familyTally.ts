@@ -1,9 +1,5 @@
 import { checkLabel, type FindingKind } from '../engine';
-import {
-  LIMIT_LABELS,
-  type FeasibilityFigures,
-  type FeasibilityLimits,
-} from './chartData';
+import { LIMIT_LABELS, type FeasibilityFigures, type FeasibilityLimits } from './chartData';
 
 /** What a tally reads of a sweep point (a SweepPoint will do; SweepTable.tallyPoints() makes lighter ones). */
 export interface TallyPoint {
