@@ -5,7 +5,7 @@ import {
   type FindingKind,
   type PartitionFigures,
 } from '../engine';
-import { paretoFront } from './pareto';
+import { paretoFront, type Direction } from './pareto';
 import type { SweepPoint } from './sweep';
 
 /** Limits a partition must meet to count as feasible. */
@@ -80,6 +80,11 @@ export interface PlottedPoint {
   readonly state: 'front' | 'feasible' | 'infeasible';
 }
 
+/** Which way an axis is better, from its catalogue entry: the Pareto front's direction on that axis. */
+export function axisDirection(axis: FigureKey): Direction {
+  return bankFigureEntry(axis).better === 'higher' ? 'max' : 'min';
+}
+
 export interface ChartModel {
   readonly plotted: readonly PlottedPoint[];
   /** Indices into `plotted`, along x from best to worst. */
@@ -125,11 +130,10 @@ export function chartModel(
     });
   });
   const feasibleIndices = plotted.map((p, i) => (p.state === 'feasible' ? i : -1)).filter((i) => i >= 0);
-  const direction = (axis: FigureKey) => (bankFigureEntry(axis).better === 'higher' ? 'max' : 'min');
   const front = paretoFront(
     feasibleIndices.map((i) => plotted[i] ?? { x: Number.NaN, y: Number.NaN }),
-    direction(xAxis),
-    direction(yAxis),
+    axisDirection(xAxis),
+    axisDirection(yAxis),
   ).map((k) => feasibleIndices[k] ?? -1);
   for (const i of front) {
     const p = plotted[i];

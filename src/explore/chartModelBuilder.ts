@@ -1,5 +1,5 @@
-import { bankFigureEntry, type FigureKey } from '../engine';
-import type { FeasibilityFigures, FeasibilityLimits } from './chartData';
+import type { FigureKey } from '../engine';
+import { axisDirection, type ChartModel, type FeasibilityFigures, type FeasibilityLimits } from './chartData';
 import { FamilyTallier } from './familyTally';
 import { paretoFront, type Direction } from './pareto';
 import type { SweepTable } from './sweepColumns';
@@ -26,17 +26,10 @@ export interface ColumnChartModel {
   readonly infeasible: Uint8Array;
   /** Plotted indices of the front, along x from best to worst. */
   readonly front: readonly number[];
-  readonly counts: {
-    readonly points: number;
-    readonly plotted: number;
-    readonly feasible: number;
-    readonly unplanned: number;
-  };
+  readonly counts: ChartModel['counts'];
   /** Least and greatest plotted coordinate on each axis (Infinity / −Infinity when none). */
   readonly extent: { readonly x: readonly [number, number]; readonly y: readonly [number, number] };
 }
-
-const direction = (axis: FigureKey): Direction => (bankFigureEntry(axis).better === 'higher' ? 'max' : 'min');
 
 export class ChartModelBuilder {
   private rows = 0;
@@ -65,8 +58,8 @@ export class ChartModelBuilder {
     readonly yAxis: FigureKey,
     readonly limits: FeasibilityLimits,
   ) {
-    this.dx = direction(xAxis);
-    this.dy = direction(yAxis);
+    this.dx = axisDirection(xAxis);
+    this.dy = axisDirection(yAxis);
     this.tallies = new FamilyTallier(limits);
   }
 

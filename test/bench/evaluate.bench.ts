@@ -13,6 +13,7 @@ import { gridFloorplan } from '../../src/designs/gridFloorplan';
 import { DEMO_PROCESS, FOLDED_8F2_CELL } from '../../src/model/builtins';
 import type { Design } from '../../src/model/design';
 import { designWith } from '../support/designs';
+import { benchGridSpec } from './benchGrid';
 
 /** Square grids of mats with their strips; sizes as in the demo design (m). */
 const SIDES = [16, 64, 256] as const;
@@ -31,14 +32,7 @@ function gridDesign(side: number): Design {
     gridFloorplan({
       cell: FOLDED_8F2_CELL,
       featureSize: DEMO_PROCESS.featureSize,
-      matRows: side,
-      matColumns: side,
-      cellsPerBitline: 512,
-      cellsPerWordline: 512,
-      senseAmpStripHeight: 6e-6,
-      wordlineDriverStripWidth: 3e-6,
-      rowDecoderWidth: 18e-6,
-      columnDecoderHeight: 14e-6,
+      ...benchGridSpec(side),
     }),
   );
 }

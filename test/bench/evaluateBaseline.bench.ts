@@ -19,6 +19,7 @@ import { gridFloorplan } from '../../src/designs/gridFloorplan';
 import { evaluate } from '../../src/engine/evaluation/evaluate';
 import { DEMO_PROCESS, FOLDED_8F2_CELL } from '../../src/model/builtins';
 import { designWith } from '../support/designs';
+import { benchGridSpec } from './benchGrid';
 
 /** main before the timing-chain work (5 Dec 2026); its evaluate() lived in src/engine/evaluate.ts. */
 const BASELINE_COMMIT = 'e86d5f1';
@@ -113,16 +114,7 @@ async function main(): Promise<void> {
     },
     designs: (await import(from(BASELINE_MODULES.designs))) as { designWith(blocks: unknown[]): unknown },
   };
-  const spec = {
-    matRows: SIDE,
-    matColumns: SIDE,
-    cellsPerBitline: 512,
-    cellsPerWordline: 512,
-    senseAmpStripHeight: 6e-6,
-    wordlineDriverStripWidth: 3e-6,
-    rowDecoderWidth: 18e-6,
-    columnDecoderHeight: 14e-6,
-  };
+  const spec = benchGridSpec(SIDE);
   const oldDesign = old.designs.designWith(
     old.grid.gridFloorplan({
       ...spec,

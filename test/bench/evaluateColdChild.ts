@@ -11,20 +11,14 @@ import { evaluate } from '../../src/engine/evaluation/evaluate';
 import { gridFloorplan } from '../../src/designs/gridFloorplan';
 import { DEMO_PROCESS, FOLDED_8F2_CELL } from '../../src/model/builtins';
 import { designWith } from '../support/designs';
+import { benchGridSpec } from './benchGrid';
 
 const designs = [512, 256, 384].map((cellsPerBitline) =>
   designWith(
     gridFloorplan({
       cell: FOLDED_8F2_CELL,
       featureSize: DEMO_PROCESS.featureSize,
-      matRows: 64,
-      matColumns: 64,
-      cellsPerBitline,
-      cellsPerWordline: 512,
-      senseAmpStripHeight: 6e-6,
-      wordlineDriverStripWidth: 3e-6,
-      rowDecoderWidth: 18e-6,
-      columnDecoderHeight: 14e-6,
+      ...benchGridSpec(64, cellsPerBitline),
     }),
   ),
 );

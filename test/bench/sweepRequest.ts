@@ -2,16 +2,12 @@ import { demoDesign } from '../../src/designs/demoDesign';
 import { steppedValues, sweepSize, type SweepRequest } from '../../src/explore/sweep';
 import { DEFAULT_SPARE_SWEEP, defaultSweepSettings, sweepRequestFor } from '../../src/explore/sweepSettings';
 import { BUILTIN_CELLS, BUILTIN_PROCESSES, DEFAULT_OPERATING } from '../../src/model/builtins';
+import { DEMO_STRIPS } from '../../src/designs/demoSizes';
 
 /** The benchmark sweep: 32 × 18 cell counts × every built-in cell × 3 processes for a 256 Mib bank. */
 export const BENCH_REQUEST: SweepRequest = {
   targetBits: 256 * 2 ** 20,
-  strips: {
-    senseAmpStripHeight: 6e-6,
-    wordlineDriverStripWidth: 3e-6,
-    rowDecoderWidth: 18e-6,
-    columnDecoderHeight: 14e-6,
-  },
+  strips: DEMO_STRIPS,
   operating: DEFAULT_OPERATING,
   cellsPerBitline: steppedValues(32, 1024, 32),
   cellsPerWordline: steppedValues(128, 2304, 128),

@@ -76,10 +76,8 @@ export function wordlineTiming(
   offLevel: number,
   memo?: LineTimeMemo,
 ): WordlineTiming {
-  if (!memo)
-    return lineTiming(driverResistance, lineResistance, lineCapacitance, highLevel, turnOnLevel, offLevel);
   const inputs = [driverResistance, lineResistance, lineCapacitance, highLevel, turnOnLevel, offLevel];
-  const kept = memo.recentTiming(inputs);
+  const kept = memo?.recentTiming(inputs);
   if (kept) return kept;
   const timing = lineTiming(
     driverResistance,
@@ -90,7 +88,7 @@ export function wordlineTiming(
     offLevel,
     memo,
   );
-  memo.keepTiming(inputs, timing);
+  memo?.keepTiming(inputs, timing);
   return timing;
 }
 
