@@ -9,11 +9,11 @@ import { layoutState } from './layoutFindings';
 import { emptyConnections, matConnections, type MatConnections } from './connectivity';
 import { designContext as contextOf, type DesignContext } from './designContext';
 import { matPhysics, senseAmpsOfMat } from './matPhysics';
-import { pairsAcrossStrips } from './openBitline';
 import { findPositionedOverlaps } from './overlaps';
 import { rememberReportState } from './reportState';
 import type { MatFigures, MatReport, Report } from './report';
 import { matAt, matIndexOf, MatTableBuilder } from './matTable';
+import { connectAllMats, type ServedLines } from './servedLines';
 import { computeTotals } from './totals';
 
 export { MINIMUM_LEAKAGE } from './designContext';
@@ -111,36 +111,86 @@ export function evaluateMatAt(
 }
 
 /** Mats in the table. (Each hot loop ends its function: see DEVELOPERS.md, "One hot loop per function".) */
-function countMats(table: BlockTable): number {
+export function countMats(table: BlockTable): number {
   let count = 0;
   for (let i = 0; i < table.count; i++) if (table.type[i] === MAT_CODE) count++;
   return count;
 }
 
-/** Evaluates every mat into `builder`, in design order; mats of one kind and connections share figures. */
-function evaluateAllMats(
+/**
+ * Evaluates every mat into `builder`, in design order: the connection pass (servedLines.ts), then each
+ * mat's figures, shared by mats of one kind and connections (computed when a key is first met, in the
+ * order evaluateMatAt would meet it, so the report's figures list is the same).
+ */
+export function evaluateAllMats(
   table: BlockTable,
   neighbours: NeighbourTable,
   ctx: DesignContext,
   builder: MatTableBuilder,
+  matCount: number,
 ): void {
-  const figuresByKind = new Map<number | string, MatFigures>();
-  const openKind = new Uint8Array(table.kinds.length);
-  for (let n = 0; n < openKind.length; n++)
-    openKind[n] = pairsAcrossStrips((table.kinds[n] as MatKind).cell) ? 1 : 0;
-  for (let i = 0, k = 0; i < table.count; i++) {
-    if (table.type[i] !== MAT_CODE) continue;
-    evaluateMatAt(
-      table,
-      i,
-      neighbours,
-      ctx,
-      builder,
-      k,
-      figuresByKind,
-      openKind[table.kindOf[i] as number] === 1,
-    );
-    k++;
+  const lines = connectAllMats(table, neighbours, matCount, builder);
+  assignFigures(table, lines, ctx, builder, new Map<number | string, MatFigures>());
+}
+
+/** The figures of mats with this connection `key`, computed once per key (see evaluateMatAt). */
+function figuresOf(
+  table: BlockTable,
+  at: number,
+  c: MatConnections,
+  ctx: DesignContext,
+  figuresByKind: Map<number | string, MatFigures>,
+  key: number | string,
+): MatFigures {
+  let figures = figuresByKind.get(key);
+  if (!figures) {
+    const kind = kindAt(table, at);
+    figures = matPhysics(kind, c, ctx);
+    recipes.set(figures, { kind, connections: { ...c } });
+    figuresByKind.set(key, figures);
+  }
+  return figures;
+}
+
+/** Each mat's figures from its connections; a run of mats with one key looks it up once. */
+function assignFigures(
+  table: BlockTable,
+  lines: ServedLines,
+  ctx: DesignContext,
+  builder: MatTableBuilder,
+  figuresByKind: Map<number | string, MatFigures>,
+): void {
+  const kindOf = table.kindOf;
+  const { position, unsensedBitlines, undrivenWordlines, senseAmpEnds, unpartneredBitlines } = lines;
+  const c = connections;
+  let lastKey = -1;
+  let lastFigures: MatFigures | null = null;
+  for (let k = 0; k < lines.count; k++) {
+    const at = position[k] as number;
+    const kindIndex = kindOf[at] as number;
+    const lost = unpartneredBitlines[k] as number;
+    const unsensed = unsensedBitlines[k] as number;
+    const undriven = undrivenWordlines[k] as number;
+    const ends = senseAmpEnds[k] as number;
+    if (lost === 0 && unsensed === 0 && undriven === 0) {
+      const key = kindIndex * 3 + ends;
+      if (key !== lastKey || lastFigures === null) {
+        c.unsensedBitlines = unsensed;
+        c.undrivenWordlines = undriven;
+        c.senseAmpEnds = ends;
+        c.unpartneredBitlines = lost;
+        lastFigures = figuresOf(table, at, c, ctx, figuresByKind, key);
+        lastKey = key;
+      }
+      builder.set(k, at, lastFigures, unsensed, undriven);
+      continue;
+    }
+    c.unsensedBitlines = unsensed;
+    c.undrivenWordlines = undriven;
+    c.senseAmpEnds = ends;
+    c.unpartneredBitlines = lost;
+    const key = `${kindIndex}|${ends}|${lost}|${unsensed}|${undriven}`;
+    builder.set(k, at, figuresOf(table, at, c, ctx, figuresByKind, key), unsensed, undriven);
   }
 }
 
@@ -170,8 +220,9 @@ export function evaluate(design: Design): Report {
   const neighbours = evaluationNeighbours(table);
   const senseAmpCount = countSenseAmps(table);
   const ctx = designContext(design, senseAmpCount, countCells(table));
-  const builder = new MatTableBuilder(design.blocks, countMats(table));
-  evaluateAllMats(table, neighbours, ctx, builder);
+  const matCount = countMats(table);
+  const builder = new MatTableBuilder(design.blocks, matCount);
+  evaluateAllMats(table, neighbours, ctx, builder, matCount);
   const mats = builder.finish();
   const overlaps = findPositionedOverlaps(table, neighbours);
   const totals = computeTotals(table, mats, design, ctx, senseAmpCount, overlaps);

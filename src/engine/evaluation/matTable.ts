@@ -177,11 +177,16 @@ export class MatTableBuilder {
     drivers: Int32Array,
     driverCount: number,
   ): void {
-    this.servingOffsets[3 * k] = this.servingUsed;
-    for (let s = 0; s < senseAmpCount; s++) this.appendServing(senseAmps[s] as number);
-    this.servingOffsets[3 * k + 1] = this.servingUsed;
-    for (let d = 0; d < driverCount; d++) this.appendServing(drivers[d] as number);
-    this.servingOffsets[3 * k + 2] = this.servingUsed;
+    let used = this.servingUsed;
+    if (used + senseAmpCount + driverCount > this.servingPositions.length)
+      this.growServing(used + senseAmpCount + driverCount);
+    const positions = this.servingPositions;
+    this.servingOffsets[3 * k] = used;
+    for (let s = 0; s < senseAmpCount; s++) positions[used++] = senseAmps[s] as number;
+    this.servingOffsets[3 * k + 1] = used;
+    for (let d = 0; d < driverCount; d++) positions[used++] = drivers[d] as number;
+    this.servingOffsets[3 * k + 2] = used;
+    this.servingUsed = used;
   }
 
   /**
@@ -228,11 +233,14 @@ export class MatTableBuilder {
   }
 
   private appendServing(position: number): void {
-    if (this.servingUsed === this.servingPositions.length) {
-      const bigger = new Int32Array(2 * this.servingPositions.length);
-      bigger.set(this.servingPositions);
-      this.servingPositions = bigger;
-    }
+    if (this.servingUsed === this.servingPositions.length) this.growServing(this.servingUsed + 1);
     this.servingPositions[this.servingUsed++] = position;
+  }
+
+  /** Room for at least `length` serving positions, keeping those recorded. */
+  private growServing(length: number): void {
+    const bigger = new Int32Array(Math.max(length, 2 * this.servingPositions.length));
+    bigger.set(this.servingPositions);
+    this.servingPositions = bigger;
   }
 }

@@ -1,0 +1,337 @@
+import {
+  MAT_CODE,
+  ROW_DECODER_CODE,
+  SENSE_AMP_STRIP_CODE,
+  WORDLINE_DRIVER_STRIP_CODE,
+  type BlockTable,
+  type MatKind,
+} from '../../geometry/blockTable';
+import { uncoveredLineCount } from '../../geometry/interval';
+import type { NeighbourTable } from '../../geometry/neighbourRows';
+import { ABUTMENT_TOLERANCE } from '../../geometry/rect';
+import { emptyConnections, matConnections } from './connectivity';
+import type { MatTableBuilder } from './matTable';
+import { pairsAcrossStrips } from './openBitline';
+
+/**
+ * The connection pass of a whole die: {@link matConnections} for every mat in one loop, with the same
+ * arithmetic and the same answers (test/engine/servedLines.test.ts compares them on random floorplans).
+ * Why a second form: evaluate()'s first call in a process runs almost wholly in V8's interpreter, where
+ * the cost is the bytecodes executed per mat. This loop reads each mat's box once, tests each
+ * neighbour's two facing sides together, calls no helper per neighbour, reads a kind's line facts from
+ * typed arrays, and skips the line count of an edge its strips cover whole. Mats whose cell pairs bit
+ * lines across strips (open bit lines) look beyond their strips and go through matConnections itself.
+ */
+
+/** Per mat kind, what the pass reads (read from the kinds once, not from a kind or cell per mat). */
+class KindLines {
+  /** 1 when the kind's bit lines run vertically (its sense amplifiers sit on its top and bottom). */
+  readonly vertical: Uint8Array;
+  /** 1 when the kind's cell pairs bit lines across strips (openBitline.ts). */
+  readonly open: Uint8Array;
+  readonly bitlinePitch: Float64Array;
+  readonly bitlineCount: Float64Array;
+  readonly wordlinePitch: Float64Array;
+  readonly wordlineCount: Float64Array;
+  /** Length of the edge sense amplifiers serve (the word-line length, m). */
+  readonly senseEdge: Float64Array;
+  /** Length of the edge drivers serve (the bit-line length, m). */
+  readonly driveEdge: Float64Array;
+  /** senseEdge − tolerance: a covered part reaching this far leaves no line at the edge's end. */
+  readonly senseEdgeReach: Float64Array;
+  /** driveEdge − tolerance, likewise. */
+  readonly driveEdgeReach: Float64Array;
+
+  constructor(kinds: readonly MatKind[]) {
+    const n = kinds.length;
+    this.vertical = new Uint8Array(n);
+    this.open = new Uint8Array(n);
+    this.bitlinePitch = new Float64Array(n);
+    this.bitlineCount = new Float64Array(n);
+    this.wordlinePitch = new Float64Array(n);
+    this.wordlineCount = new Float64Array(n);
+    this.senseEdge = new Float64Array(n);
+    this.driveEdge = new Float64Array(n);
+    this.senseEdgeReach = new Float64Array(n);
+    this.driveEdgeReach = new Float64Array(n);
+    for (let k = 0; k < n; k++) {
+      const kind = kinds[k] as MatKind;
+      const g = kind.geometry;
+      this.vertical[k] = kind.block.bitlineAxis === 'vertical' ? 1 : 0;
+      this.open[k] = pairsAcrossStrips(kind.cell) ? 1 : 0;
+      this.bitlinePitch[k] = g.bitlinePitch;
+      this.bitlineCount[k] = g.bitlineCount;
+      this.wordlinePitch[k] = g.wordlinePitch;
+      this.wordlineCount[k] = g.wordlineCount;
+      this.senseEdge[k] = g.wordlineLength;
+      this.driveEdge[k] = g.bitlineLength;
+      // The same subtraction uncoveredLineCount makes for its last gap.
+      this.senseEdgeReach[k] = g.wordlineLength - ABUTMENT_TOLERANCE;
+      this.driveEdgeReach[k] = g.bitlineLength - ABUTMENT_TOLERANCE;
+    }
+  }
+}
+
+/**
+ * Every mat's connections, mat k (in design order of the mats) at a time: what {@link matConnections}
+ * returns for it, column-wise. Scratch columns reused from call to call (they never leave evaluate).
+ */
+export class ServedLines {
+  count = 0;
+  /** Design position of mat k. */
+  position = new Int32Array(0);
+  unsensedBitlines = new Float64Array(0);
+  undrivenWordlines = new Float64Array(0);
+  senseAmpEnds = new Uint8Array(0);
+  unpartneredBitlines = new Float64Array(0);
+
+  /** Room for `count` mats (contents stale). */
+  reset(count: number): void {
+    this.count = count;
+    if (this.position.length >= count) return;
+    this.position = new Int32Array(count);
+    this.unsensedBitlines = new Float64Array(count);
+    this.undrivenWordlines = new Float64Array(count);
+    this.senseAmpEnds = new Uint8Array(count);
+    this.unpartneredBitlines = new Float64Array(count);
+  }
+}
+
+/** Scratch lists of one mat's contacts, kept between calls and grown when a mat meets more strips. */
+class ContactScratch {
+  /** Sense-amplifier spans (start, end pairs, m along the edge). */
+  senseSpans: Float64Array = new Float64Array(32);
+  /** Driver spans, likewise. */
+  driveSpans: Float64Array = new Float64Array(32);
+  senseAmps: Int32Array = new Int32Array(16);
+  drivers: Int32Array = new Int32Array(16);
+
+  /** The lists with room for one more contact beyond `used` (spans hold two numbers a contact). */
+  growSenseSpans(used: number): Float64Array {
+    if (2 * used + 2 > this.senseSpans.length) this.senseSpans = grownFloats(this.senseSpans);
+    return this.senseSpans;
+  }
+  growDriveSpans(used: number): Float64Array {
+    if (2 * used + 2 > this.driveSpans.length) this.driveSpans = grownFloats(this.driveSpans);
+    return this.driveSpans;
+  }
+  growSenseAmps(used: number): Int32Array {
+    if (used + 1 > this.senseAmps.length) this.senseAmps = grownInts(this.senseAmps);
+    return this.senseAmps;
+  }
+  growDrivers(used: number): Int32Array {
+    if (used + 1 > this.drivers.length) this.drivers = grownInts(this.drivers);
+    return this.drivers;
+  }
+}
+
+function grownFloats(list: Float64Array): Float64Array {
+  const bigger = new Float64Array(2 * list.length);
+  bigger.set(list);
+  return bigger;
+}
+
+function grownInts(list: Int32Array): Int32Array {
+  const bigger = new Int32Array(2 * list.length);
+  bigger.set(list);
+  return bigger;
+}
+
+const SCRATCH = new ContactScratch();
+const LINES = new ServedLines();
+/** The record an open-bit-line mat's matConnections fills. */
+const OPEN_RECORD = emptyConnections();
+
+/**
+ * The connections of every mat of `table` (mat k = the k-th mat in design order), with each mat's serving
+ * strips recorded in `serving` as mat k. The returned columns are reused by the next call.
+ */
+export function connectAllMats(
+  table: BlockTable,
+  neighbours: NeighbourTable,
+  matCount: number,
+  serving: MatTableBuilder,
+): ServedLines {
+  LINES.reset(matCount);
+  connectEachMat(table, neighbours, new KindLines(table.kinds), serving, LINES);
+  return LINES;
+}
+
+/** Mat k's connections from matConnections itself (open bit lines look at the mats beyond a strip). */
+function connectOpenMat(
+  table: BlockTable,
+  at: number,
+  neighbours: NeighbourTable,
+  serving: MatTableBuilder,
+  k: number,
+  out: ServedLines,
+): void {
+  const c = matConnections(table, at, neighbours, serving, k, OPEN_RECORD, true);
+  out.unsensedBitlines[k] = c.unsensedBitlines;
+  out.undrivenWordlines[k] = c.undrivenWordlines;
+  out.senseAmpEnds[k] = c.senseAmpEnds;
+  out.unpartneredBitlines[k] = c.unpartneredBitlines;
+}
+
+/**
+ * The pass itself (the hot loop ends its function: DEVELOPERS.md). Per neighbour, as abutmentSpan has it:
+ * a side meets when the facing edges lie within the tolerance; the stretch covered runs from
+ * max(own start, its start) to min(own end, its end), measured from the side's start, and counts when
+ * longer than the tolerance. Both sides of an axis share that stretch, so it is computed once.
+ */
+function connectEachMat(
+  table: BlockTable,
+  neighbours: NeighbourTable,
+  kinds: KindLines,
+  serving: MatTableBuilder,
+  out: ServedLines,
+): void {
+  const tol = ABUTMENT_TOLERANCE;
+  const { x, y, width, height, type, kindOf } = table;
+  const { start, end, list } = neighbours;
+  const { vertical, open, senseEdge, driveEdge, senseEdgeReach, driveEdgeReach } = kinds;
+  const { position, unsensedBitlines, undrivenWordlines, senseAmpEnds, unpartneredBitlines } = out;
+  const scratch = SCRATCH;
+  let senseSpans = scratch.senseSpans;
+  let driveSpans = scratch.driveSpans;
+  let senseAmps = scratch.senseAmps;
+  let drivers = scratch.drivers;
+  const blockCount = table.count;
+  for (let at = 0, k = 0; at < blockCount; at++) {
+    if (type[at] !== MAT_CODE) continue;
+    const kind = kindOf[at] as number;
+    position[k] = at;
+    if (open[kind] === 1) {
+      connectOpenMat(table, at, neighbours, serving, k, out);
+      k++;
+      continue;
+    }
+    // Sense amplifiers serve the bit-line ends: top and bottom when the bit lines run vertically.
+    const senseAcross = vertical[kind] === 1;
+    const tx = x[at] as number;
+    const ty = y[at] as number;
+    const tr = tx + (width[at] as number);
+    const tb = ty + (height[at] as number);
+    let senseCount = 0;
+    let driveCount = 0;
+    let senseAmpCount = 0;
+    let driverCount = 0;
+    let first = 0;
+    let second = 0;
+    const last = end[at] as number;
+    for (let p = start[at] as number; p < last; p++) {
+      const i = list[p] as number;
+      const t = type[i] as number;
+      const sense = t === SENSE_AMP_STRIP_CODE;
+      if (!sense && t !== WORDLINE_DRIVER_STRIP_CODE && t !== ROW_DECODER_CODE) continue;
+      const nx = x[i] as number;
+      const ny = y[i] as number;
+      const nr = nx + (width[i] as number);
+      const nb = ny + (height[i] as number);
+      let meetsFirst: boolean;
+      let meetsSecond: boolean;
+      let from: number;
+      let to: number;
+      if (sense === senseAcross) {
+        // Top (its bottom on our top), then bottom; the stretch runs along x.
+        const dFirst = nb - ty;
+        const dSecond = ny - tb;
+        meetsFirst = !(dFirst > tol || dFirst < -tol);
+        meetsSecond = !(dSecond > tol || dSecond < -tol);
+        if (!meetsFirst && !meetsSecond) continue;
+        from = nx > tx ? nx - tx : 0;
+        to = (nr < tr ? nr : tr) - tx;
+      } else {
+        // Left (its right on our left), then right; the stretch runs along y.
+        const dFirst = nr - tx;
+        const dSecond = nx - tr;
+        meetsFirst = !(dFirst > tol || dFirst < -tol);
+        meetsSecond = !(dSecond > tol || dSecond < -tol);
+        if (!meetsFirst && !meetsSecond) continue;
+        from = ny > ty ? ny - ty : 0;
+        to = (nb < tb ? nb : tb) - ty;
+      }
+      if (!(to - from > tol)) continue;
+      if (sense) {
+        if (meetsFirst) {
+          if (2 * senseCount + 2 > senseSpans.length) senseSpans = scratch.growSenseSpans(senseCount);
+          senseSpans[2 * senseCount] = from;
+          senseSpans[2 * senseCount + 1] = to;
+          senseCount++;
+          first = 1;
+          if (senseAmpCount === senseAmps.length) senseAmps = scratch.growSenseAmps(senseAmpCount);
+          senseAmps[senseAmpCount++] = i;
+        }
+        if (meetsSecond) {
+          if (2 * senseCount + 2 > senseSpans.length) senseSpans = scratch.growSenseSpans(senseCount);
+          senseSpans[2 * senseCount] = from;
+          senseSpans[2 * senseCount + 1] = to;
+          senseCount++;
+          second = 1;
+          if (senseAmpCount === senseAmps.length) senseAmps = scratch.growSenseAmps(senseAmpCount);
+          senseAmps[senseAmpCount++] = i;
+        }
+      } else {
+        if (meetsFirst) {
+          if (2 * driveCount + 2 > driveSpans.length) driveSpans = scratch.growDriveSpans(driveCount);
+          driveSpans[2 * driveCount] = from;
+          driveSpans[2 * driveCount + 1] = to;
+          driveCount++;
+          if (driverCount === drivers.length) drivers = scratch.growDrivers(driverCount);
+          drivers[driverCount++] = i;
+        }
+        if (meetsSecond) {
+          if (2 * driveCount + 2 > driveSpans.length) driveSpans = scratch.growDriveSpans(driveCount);
+          driveSpans[2 * driveCount] = from;
+          driveSpans[2 * driveCount + 1] = to;
+          driveCount++;
+          if (driverCount === drivers.length) drivers = scratch.growDrivers(driverCount);
+          drivers[driverCount++] = i;
+        }
+      }
+    }
+    serving.setServing(k, senseAmps, senseAmpCount, drivers, driverCount);
+    // An edge whose spans all start within the tolerance of its start and one of which reaches within the
+    // tolerance of its end is covered as one part: uncoveredLineCount would find no gap (proof in
+    // servedLines.test.ts). Otherwise it counts.
+    let whole = senseCount > 0;
+    let reaches = false;
+    const senseReach = senseEdgeReach[kind] as number;
+    for (let c = 0; c < senseCount && whole; c++) {
+      if ((senseSpans[2 * c] as number) > tol) whole = false;
+      else if ((senseSpans[2 * c + 1] as number) >= senseReach) reaches = true;
+    }
+    unsensedBitlines[k] =
+      whole && reaches
+        ? 0
+        : uncoveredLineCount(
+            senseSpans,
+            senseCount,
+            senseEdge[kind] as number,
+            tol,
+            kinds.bitlinePitch[kind] as number,
+            kinds.bitlineCount[kind] as number,
+          );
+    whole = driveCount > 0;
+    reaches = false;
+    const driveReach = driveEdgeReach[kind] as number;
+    for (let c = 0; c < driveCount && whole; c++) {
+      if ((driveSpans[2 * c] as number) > tol) whole = false;
+      else if ((driveSpans[2 * c + 1] as number) >= driveReach) reaches = true;
+    }
+    undrivenWordlines[k] =
+      whole && reaches
+        ? 0
+        : uncoveredLineCount(
+            driveSpans,
+            driveCount,
+            driveEdge[kind] as number,
+            tol,
+            kinds.wordlinePitch[kind] as number,
+            kinds.wordlineCount[kind] as number,
+          );
+    senseAmpEnds[k] = first + second;
+    unpartneredBitlines[k] = 0;
+    k++;
+  }
+}

@@ -1,0 +1,261 @@
+import type { Block, BlockType, Mat } from '../../../src/model/block';
+import { BLOCK_TYPES } from '../../../src/model/blockBasics';
+import type { CellDefinition } from '../../../src/model/cell';
+import type { Design } from '../../../src/model/design';
+import { matGeometry, type MatGeometry } from '../../../src/geometry/matGeometry';
+import type { Rect } from '../../../src/geometry/rect';
+
+/** Block types in the order of their codes in {@link BlockTable.type}. */
+export const BLOCK_TYPE_CODES: readonly BlockType[] = BLOCK_TYPES;
+const CODE_OF = new Map(BLOCK_TYPE_CODES.map((type, code) => [type, code]));
+export const MAT_CODE = BLOCK_TYPE_CODES.indexOf('mat');
+export const SENSE_AMP_STRIP_CODE = BLOCK_TYPE_CODES.indexOf('senseAmpStrip');
+export const WORDLINE_DRIVER_STRIP_CODE = BLOCK_TYPE_CODES.indexOf('wordlineDriverStrip');
+export const ROW_DECODER_CODE = BLOCK_TYPE_CODES.indexOf('rowDecoder');
+
+/**
+ * What a mat's shape and physics follow from: its cell and cell counts (from a mat of that kind) and the
+ * geometry they give. Mats with the same cell, counts and bit-line axis share one kind.
+ */
+export interface MatKind {
+  readonly block: Pick<Mat, 'cellsPerBitline' | 'cellsPerWordline' | 'bitlineAxis' | 'footprint'>;
+  readonly cell: CellDefinition;
+  readonly geometry: MatGeometry;
+}
+
+/** Boxes in flat arrays (m): box i spans x[i] … x[i] + width[i] by y[i] … y[i] + height[i]. */
+export interface Boxes {
+  readonly count: number;
+  readonly x: Float64Array;
+  readonly y: Float64Array;
+  readonly width: Float64Array;
+  readonly height: Float64Array;
+}
+
+/**
+ * A design's blocks laid out in flat typed arrays, in design order: each block's rectangle (m), its type
+ * code and, for a mat, its kind. Evaluating a whole die reads positions from here rather than from one
+ * object per block, which keeps a 4,096-mat evaluation free of tens of thousands of small allocations.
+ */
+export interface BlockTable extends Boxes {
+  readonly blocks: readonly Block[];
+  /** Index into {@link BLOCK_TYPE_CODES}. */
+  readonly type: Uint8Array;
+  /** For a mat, the index of its kind in `kinds`; −1 for every other block. */
+  readonly kindOf: Int32Array;
+  readonly kinds: readonly MatKind[];
+  /** The design's process feature size (m), which the mats' geometry depends on. */
+  readonly featureSize: number;
+  /** Cells by id, to place further mats (live previews). */
+  readonly cells: ReadonlyMap<string, CellDefinition>;
+  /** Kind index by "cell|cells per BL|cells per WL|axis". */
+  readonly kindIndex: ReadonlyMap<string, number>;
+}
+
+/** A table while its rows are written: its list of kinds and their index still grow. */
+interface TableInProgress extends BlockTable {
+  readonly kinds: MatKind[];
+  readonly kindIndex: Map<string, number>;
+}
+
+/** Lays out every block of a design: strips are their own rectangles, mats take their size from their kind. */
+export function blockTable(design: Design): BlockTable {
+  const cells = new Map(design.cells.map((c) => [c.id, c]));
+  const table = emptyTable(design.blocks, design.process.featureSize, cells);
+  writeRows(table, design.blocks);
+  return table;
+}
+
+/**
+ * A copy of the table with some blocks replaced by new versions of themselves (same position in design
+ * order, new place or size): what the design looks like during a gesture, without laying out the rest again.
+ */
+export function withBlocksReplaced(
+  base: BlockTable,
+  replacements: ReadonlyMap<number, Block>,
+  /** The new block list, when the caller has it already (it must hold the replacements). */
+  replaced?: readonly Block[],
+): BlockTable {
+  const blocks = replaced ?? base.blocks.slice();
+  if (!replaced) for (const [i, block] of replacements) (blocks as Block[])[i] = block;
+  const table = new TableRows(
+    base.count,
+    blocks,
+    base.x.slice(),
+    base.y.slice(),
+    base.width.slice(),
+    base.height.slice(),
+    base.type.slice(),
+    base.kindOf.slice(),
+    base.kinds.slice(),
+    base.featureSize,
+    base.cells,
+    new Map(base.kindIndex),
+  );
+  for (const [i, block] of replacements) writeRow(table, i, block);
+  return table;
+}
+
+/** The rectangle of block i (m). */
+export function rectAt(table: Boxes, i: number): Rect {
+  return {
+    x: table.x[i] as number,
+    y: table.y[i] as number,
+    width: table.width[i] as number,
+    height: table.height[i] as number,
+  };
+}
+
+/** The kind of mat i; throws for a block that is not a mat. */
+export function kindAt(table: BlockTable, i: number): MatKind {
+  const kind = table.kinds[table.kindOf[i] as number];
+  if (!kind) throw new Error(`block ${table.blocks[i]?.id ?? i} is not a mat`);
+  return kind;
+}
+
+function emptyTable(
+  blocks: readonly Block[],
+  featureSize: number,
+  cells: ReadonlyMap<string, CellDefinition>,
+): TableInProgress {
+  const n = blocks.length;
+  return new TableRows(
+    n,
+    blocks,
+    new Float64Array(n),
+    new Float64Array(n),
+    new Float64Array(n),
+    new Float64Array(n),
+    new Uint8Array(n),
+    new Int32Array(n),
+    [],
+    featureSize,
+    cells,
+    new Map(),
+  );
+}
+
+/**
+ * A table's storage as a class, not an object literal: the second time a literal runs, V8 gives its
+ * objects a more general shape (it keeps a template from then on), and every compiled function that had
+ * read the first shape is thrown away. That was most of the engine in a session's second evaluation.
+ * Instances of a class keep one shape. (The same holds for the mat kinds and the mat and neighbour tables.)
+ */
+class TableRows implements TableInProgress {
+  constructor(
+    readonly count: number,
+    readonly blocks: readonly Block[],
+    readonly x: Float64Array,
+    readonly y: Float64Array,
+    readonly width: Float64Array,
+    readonly height: Float64Array,
+    readonly type: Uint8Array,
+    readonly kindOf: Int32Array,
+    readonly kinds: MatKind[],
+    readonly featureSize: number,
+    readonly cells: ReadonlyMap<string, CellDefinition>,
+    readonly kindIndex: Map<string, number>,
+  ) {}
+}
+
+/** A mat kind (a class for the reason given at {@link TableRows}). */
+class KindOfMat implements MatKind {
+  constructor(
+    readonly block: Mat,
+    readonly cell: CellDefinition,
+    readonly geometry: MatGeometry,
+  ) {}
+}
+
+function writeRows(table: TableInProgress, blocks: readonly Block[]): void {
+  // Consecutive mats are nearly always of one kind in a tiled array, so the last kind is tried first
+  // before building a key.
+  let last: Mat | null = null;
+  let lastKind = -1;
+  for (let i = 0; i < blocks.length; i++) {
+    const block = blocks[i] as Block;
+    if (
+      block.type === 'mat' &&
+      last !== null &&
+      block.cellId === last.cellId &&
+      block.cellsPerBitline === last.cellsPerBitline &&
+      block.cellsPerWordline === last.cellsPerWordline &&
+      block.bitlineAxis === last.bitlineAxis &&
+      block.footprint === undefined &&
+      last.footprint === undefined
+    ) {
+      const kind = table.kinds[lastKind] as MatKind;
+      table.x[i] = block.x;
+      table.y[i] = block.y;
+      table.width[i] = kind.geometry.width;
+      table.height[i] = kind.geometry.height;
+      table.type[i] = MAT_CODE;
+      table.kindOf[i] = lastKind;
+      continue;
+    }
+    writeRow(table, i, block);
+    if (block.type === 'mat') {
+      last = block;
+      lastKind = table.kindOf[i] as number;
+    }
+  }
+}
+
+function writeRow(table: TableInProgress, i: number, block: Block): void {
+  table.x[i] = block.x;
+  table.y[i] = block.y;
+  table.type[i] = typeCode(block.type);
+  if (block.type !== 'mat') {
+    table.width[i] = block.width;
+    table.height[i] = block.height;
+    table.kindOf[i] = -1;
+    return;
+  }
+  const kind = matKindOf(table, block);
+  table.width[i] = (table.kinds[kind] as MatKind).geometry.width;
+  table.height[i] = (table.kinds[kind] as MatKind).geometry.height;
+  table.kindOf[i] = kind;
+}
+
+/** The last type looked up and its code: blocks come in runs of one type, so most lookups are this. */
+let lastType: BlockType | null = null;
+let lastCode = -1;
+
+function typeCode(type: BlockType): number {
+  if (type !== lastType) {
+    lastCode = CODE_OF.get(type) ?? -1;
+    lastType = type;
+  }
+  return lastCode;
+}
+
+function matKindOf(table: TableInProgress, block: Mat): number {
+  const slot = block.footprint ? `|${block.footprint.width}|${block.footprint.height}` : '';
+  const key = `${block.cellId}|${block.cellsPerBitline}|${block.cellsPerWordline}|${block.bitlineAxis}${slot}`;
+  const known = table.kindIndex.get(key);
+  if (known !== undefined) return known;
+  const cell = table.cells.get(block.cellId);
+  if (!cell) throw new Error(`mat "${block.id}" uses unknown cell "${block.cellId}"`);
+  table.kinds.push(new KindOfMat(block, cell, matGeometry(block, cell, table.featureSize)));
+  table.kindIndex.set(key, table.kinds.length - 1);
+  return table.kinds.length - 1;
+}
+
+/** Plain rectangles as flat boxes (for callers that have rectangles rather than a design). */
+export function boxesOf(rects: readonly Rect[]): Boxes {
+  const n = rects.length;
+  const boxes = {
+    count: n,
+    x: new Float64Array(n),
+    y: new Float64Array(n),
+    width: new Float64Array(n),
+    height: new Float64Array(n),
+  };
+  rects.forEach((r, i) => {
+    boxes.x[i] = r.x;
+    boxes.y[i] = r.y;
+    boxes.width[i] = r.width;
+    boxes.height[i] = r.height;
+  });
+  return boxes;
+}

@@ -1,0 +1,87 @@
+import { MAT_CODE, type BlockTable, type MatKind } from '../../../src/geometry/blockTable';
+import { needsRefresh } from '../../../src/model/cellBasics';
+
+/** Positions closer than this are the same band edge (m). */
+const BAND_GRID = 1e-9;
+
+/**
+ * Rows to refresh. Mats side by side along the word-line direction, with the same extent across it,
+ * form one band that a row activation crosses together (one global word line), so a band contributes
+ * the largest word-line count among its mats, not the sum. Mats of static (6T) cells are not refreshed.
+ * Common practice (no source).
+ */
+export function refreshRows(table: BlockTable): number {
+  // What each kind of mat contributes, read here once per kind: the loop below reads no cell, whose shape
+  // may differ from design to design (a compiled loop that met another shape would be thrown away).
+  const kinds = table.kinds;
+  const facts = new KindFacts(kinds.length);
+  for (let k = 0; k < kinds.length; k++) {
+    const kind = kinds[k] as MatKind;
+    facts.refreshed[k] = needsRefresh(kind.cell.kind) ? 1 : 0;
+    facts.vertical[k] = kind.block.bitlineAxis === 'vertical' ? 1 : 0;
+    facts.wordlines[k] = kind.geometry.wordlineCount;
+  }
+  const bands = new Map<number, Map<number, number>>();
+  collectBands(table, facts, bands);
+  let rows = 0;
+  for (const byExtent of bands.values()) for (const r of byExtent.values()) rows += r;
+  return rows;
+}
+
+/**
+ * Fills `bands` with each band's rows: bands by axis and start (on a 1 nm grid, as one exact integer),
+ * then by extent. Mats of one band mostly follow each other in a tiled design, so the band of the
+ * previous mat is tried first. (The hot loop ends the function: see DEVELOPERS.md.)
+ */
+function collectBands(table: BlockTable, facts: KindFacts, bands: Map<number, Map<number, number>>): void {
+  let lastKey = Number.NaN;
+  let lastExtent = Number.NaN;
+  let lastBand: Map<number, number> | null = null;
+  let lastRows = 0;
+  const { refreshed, vertical: verticalKind, wordlines: wordlinesOfKind } = facts;
+  const kindCount = refreshed.length;
+  for (let i = 0; i < table.count; i++) {
+    if (table.type[i] !== MAT_CODE) continue;
+    const k = table.kindOf[i] as number;
+    // Static cells need no refresh and add no rows.
+    if (!(k >= 0 && k < kindCount) || refreshed[k] === 0) continue;
+    const vertical = verticalKind[k] === 1;
+    const start = Math.round((vertical ? (table.y[i] as number) : (table.x[i] as number)) / BAND_GRID);
+    const extent = Math.round(
+      (vertical ? (table.height[i] as number) : (table.width[i] as number)) / BAND_GRID,
+    );
+    const key = start * 2 + (vertical ? 1 : 0);
+    const wordlines = wordlinesOfKind[k] as number;
+    if (key === lastKey && extent === lastExtent && lastBand) {
+      if (wordlines > lastRows) {
+        lastRows = wordlines;
+        lastBand.set(extent, wordlines);
+      }
+      continue;
+    }
+    let byExtent = bands.get(key);
+    if (!byExtent) {
+      byExtent = new Map();
+      bands.set(key, byExtent);
+    }
+    const rows = Math.max(byExtent.get(extent) ?? 0, wordlines);
+    byExtent.set(extent, rows);
+    lastKey = key;
+    lastExtent = extent;
+    lastBand = byExtent;
+    lastRows = rows;
+  }
+}
+
+/** Per mat kind: refreshed (1) or static (0), bit lines vertical (1), word lines (count). */
+class KindFacts {
+  readonly refreshed: Uint8Array;
+  readonly vertical: Uint8Array;
+  readonly wordlines: Float64Array;
+
+  constructor(kinds: number) {
+    this.refreshed = new Uint8Array(kinds);
+    this.vertical = new Uint8Array(kinds);
+    this.wordlines = new Float64Array(kinds);
+  }
+}
