@@ -26,6 +26,7 @@ const FOLDERS = [
   'charts',
   'panels',
   'app',
+  'workers',
 ];
 const MAY_IMPORT = {
   model: [],
@@ -52,7 +53,10 @@ const MAY_IMPORT = {
     'app',
   ],
   app: FOLDERS.filter((f) => f !== 'app'),
+  workers: ['model', 'geometry', 'engine', 'designs', 'explore', 'charts'],
 };
+/** Web Worker entries compute and draw off the page: no React, Konva or zustand (d3 through charts). */
+const WORKER_BANNED = ['react', 'react-dom', 'konva', 'konva/*', 'zustand', 'zustand/*'];
 /** Folders that stay free of UI packages (pure TypeScript, tested in Node). */
 const PURE = ['model', 'geometry', 'engine', 'designs', 'io', 'cli', 'explore', 'commands'];
 const ENGINE_PARTS = ['physics', 'evaluation', 'figures'];
@@ -70,6 +74,11 @@ function layerRule(folder) {
     patterns.push({
       group: insideEngine,
       message: 'Other folders import the engine through src/engine/index.ts only.',
+    });
+  if (folder === 'workers')
+    patterns.push({
+      group: WORKER_BANNED,
+      message: 'src/workers stays free of React, Konva and zustand (it runs in a Web Worker).',
     });
   if (PURE.includes(folder))
     patterns.push({

@@ -181,3 +181,44 @@ test('a long Pareto front lists its first rows and the rest on request; the char
   await expect(page.getByTestId('front-row')).toHaveCount(onChart);
   await expect(more).toHaveCount(0);
 });
+
+test('the points the sweep worker draws for a finished sweep are the pixels the page draws itself', async ({
+  page,
+}) => {
+  const explorer = new ExplorerPage(page);
+  await explorer.open();
+  // Whether the worker sent a picture with its done message (else this test would compare the page with itself).
+  await page.evaluate(() => {
+    const Native = window.Worker;
+    const seen = window as unknown as { __sweepPicture: string | null };
+    seen.__sweepPicture = null;
+    window.Worker = class extends Native {
+      constructor(url: string | URL, options?: WorkerOptions) {
+        super(url, options);
+        this.addEventListener('message', (event: MessageEvent<{ type?: string; chart?: unknown }>) => {
+          if (event.data.type === 'done') seen.__sweepPicture = event.data.chart ? 'drawn' : 'none';
+        });
+      }
+    };
+  });
+  await explorer.runSweep();
+  expect(await page.evaluate(() => (window as unknown as { __sweepPicture: string }).__sweepPicture)).toBe(
+    'drawn',
+  );
+  const pixels = () =>
+    page.evaluate(async () => {
+      const canvas = document.querySelector<HTMLCanvasElement>('[data-testid="points-canvas"]');
+      const context = canvas?.getContext('2d');
+      if (!canvas || !context) return 'no canvas';
+      const data = context.getImageData(0, 0, canvas.width, canvas.height).data;
+      const digest = await crypto.subtle.digest('SHA-256', data);
+      return `${canvas.width}x${canvas.height} ${[...new Uint8Array(digest)].join(',')}`;
+    });
+  const fromWorker = await pixels();
+  // Another vertical axis and back: the page builds the model and stamps every point itself.
+  await page.getByTestId('y-axis').selectOption('wordlineDelay');
+  await expect(page.getByTestId('y-axis-label')).toContainText('Word-line delay');
+  await page.getByTestId('y-axis').selectOption('senseMargin');
+  await expect(page.getByTestId('y-axis-label')).not.toContainText('Word-line delay');
+  await expect.poll(pixels).toBe(fromWorker);
+});

@@ -1,12 +1,13 @@
 export type { ScatterPoints } from './chartStyle';
 export { markerPath } from './chartStyle';
 import { curveStepAfter, line, symbol } from 'd3';
-import { useImperativeHandle, useMemo, useRef, type ReactNode, type Ref } from 'react';
+import { useImperativeHandle, useLayoutEffect, useMemo, useRef, type ReactNode, type Ref } from 'react';
 import { scatterSvgText, svgToPng } from './chartExport';
 import { axisTicks, extentScale, grownExtent, type AxisScale, type ShownExtent } from './chartScale';
 import { MARGIN, MARKER_SHAPES, type ScatterPoints } from './chartStyle';
 import { nearestIndex, type NearestIndex } from './nearestPoint';
 import { PointsCanvas } from './PointsCanvas';
+import { placementOf, plotArea } from './pointsPicture';
 import { placePoints, type ScreenPositions } from './screenPositions';
 import { useElementSize } from './useElementSize';
 
@@ -43,6 +44,11 @@ interface ScatterChartProps {
    * ahead, so that the canvas stamps only the new points; once false the axes fit the points exactly.
    */
   readonly growing?: boolean;
+  /**
+   * Told the chart's size (CSS px) once it has one and whenever it changes, before the browser paints:
+   * whoever draws the points off the page (pointsPicture.ts) draws them for this size.
+   */
+  onSize?(width: number, height: number): void;
 }
 
 /** The chart as a picture file. */
@@ -73,13 +79,16 @@ export function ScatterChart(props: ScatterChartProps) {
     renderTooltip,
     exportRef,
     growing = false,
+    onSize,
   } = props;
   const boxRef = useRef<HTMLDivElement>(null);
   const backRef = useRef<SVGSVGElement>(null);
   const frontRef = useRef<SVGSVGElement>(null);
   const { width, height } = useElementSize(boxRef);
-  const plotW = Math.max(10, width - MARGIN.left - MARGIN.right);
-  const plotH = Math.max(10, height - MARGIN.top - MARGIN.bottom);
+  const { plotW, plotH } = plotArea(width, height);
+  useLayoutEffect(() => {
+    if (width > 0) onSize?.(width, height);
+  }, [width, height, onSize]);
 
   // While growing, each axis keeps the extent it showed as long as the points fit in it.
   const shown = useRef<{ source: object; x: ShownExtent; y: ShownExtent } | null>(null);
@@ -102,11 +111,16 @@ export function ScatterChart(props: ScatterChartProps) {
     () => extentScale(yShown.min, yShown.max, plotH, 0, yShown.log),
     [yShown.min, yShown.max, yShown.log, plotH],
   );
-  const placement = `${String(xs.scale.domain())}|${String(ys.scale.domain())}|${xs.log}|${ys.log}|${plotW}x${plotH}`;
-  // Positions of the points already placed are kept while the placement holds; only new points are placed.
+  const placement = placementOf(xs, ys, plotW, plotH);
+  // Positions of the points already placed are kept while the placement holds; only new points are
+  // placed. A picture drawn off the page for this placement brings every position with it.
   const placed = useRef<ScreenPositions | null>(null);
   const screen = useMemo(() => {
-    placed.current = placePoints(placed.current, data, xs, ys, placement);
+    const picture = data.picture;
+    placed.current =
+      picture && picture.placement === placement && picture.count === data.count
+        ? { source: data.source, placement, count: picture.count, x: picture.x, y: picture.y }
+        : placePoints(placed.current, data, xs, ys, placement);
     return placed.current;
   }, [data, xs, ys, placement]);
   // The pick grid is built on the first pointer move after the points change, not on every update.

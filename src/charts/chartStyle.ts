@@ -7,6 +7,7 @@ import {
   symbolTriangle,
   symbolWye,
 } from 'd3';
+import type { PointsPicture } from './pointsPicture';
 
 /**
  * A scatter's points as columns: the first `count` entries of each array. Columns, not an object per
@@ -31,6 +32,12 @@ export interface ScatterPoints {
   colourOf(series: number): string;
   /** Least and greatest finite x and y among the points (Infinity / −Infinity when there are none). */
   readonly extent: { readonly x: readonly [number, number]; readonly y: readonly [number, number] };
+  /**
+   * These points already drawn off the page for the chart's final (not growing) state, if someone did
+   * (pointsPicture.ts): the chart puts these pixels on its canvas when they were drawn for its own
+   * placement and size, instead of stamping every point.
+   */
+  readonly picture?: PointsPicture | null;
 }
 
 /** Space around the plot for ticks and axis titles (px). */

@@ -1,6 +1,6 @@
 import type { FigureKey } from '../engine';
 import { axisDirection, type ChartModel, type FeasibilityFigures, type FeasibilityLimits } from './chartData';
-import { FamilyTallier } from './familyTally';
+import { FamilyTallier, type TallierState } from './familyTally';
 import { paretoFront, type Direction } from './pareto';
 import type { SweepTable } from './sweepColumns';
 
@@ -31,6 +31,27 @@ export interface ColumnChartModel {
   readonly extent: { readonly x: readonly [number, number]; readonly y: readonly [number, number] };
 }
 
+/**
+ * A builder's whole state as plain data (typed arrays, numbers, maps): what the sweep worker hands the
+ * page for a finished sweep, so the page's builder goes on from it instead of taking in every row again.
+ */
+export interface ChartModelState {
+  readonly rows: number;
+  readonly plotted: number;
+  readonly feasible: number;
+  readonly unplanned: number;
+  readonly row: Int32Array<ArrayBuffer>;
+  readonly x: Float64Array<ArrayBuffer>;
+  readonly y: Float64Array<ArrayBuffer>;
+  readonly cellIndex: Int32Array<ArrayBuffer>;
+  readonly processIndex: Int32Array<ArrayBuffer>;
+  readonly infeasible: Uint8Array<ArrayBuffer>;
+  readonly front: readonly number[];
+  /** xMin, xMax, yMin, yMax. */
+  readonly extent: readonly [number, number, number, number];
+  readonly tallies: TallierState;
+}
+
 export class ChartModelBuilder {
   private rows = 0;
   private plotted = 0;
@@ -52,15 +73,60 @@ export class ChartModelBuilder {
   /** Why families are infeasible, tallied over every row taken in (familyTally.ts). */
   readonly tallies: FamilyTallier;
 
+  /**
+   * `state`: a builder's state() for the same table, axes and limits taken elsewhere (the sweep worker
+   * builds the model of a finished sweep), to go on from; its arrays are used, not copied.
+   */
   constructor(
     readonly table: SweepTable,
     readonly xAxis: FigureKey,
     readonly yAxis: FigureKey,
     readonly limits: FeasibilityLimits,
+    state?: ChartModelState,
   ) {
     this.dx = axisDirection(xAxis);
     this.dy = axisDirection(yAxis);
-    this.tallies = new FamilyTallier(limits);
+    this.tallies = new FamilyTallier(limits, state?.tallies);
+    if (state) {
+      this.rows = state.rows;
+      this.plotted = state.plotted;
+      this.feasible = state.feasible;
+      this.unplanned = state.unplanned;
+      this.row = state.row;
+      this.x = state.x;
+      this.y = state.y;
+      this.cellIndex = state.cellIndex;
+      this.processIndex = state.processIndex;
+      this.infeasible = state.infeasible;
+      this.front = [...state.front];
+      [this.xMin, this.xMax, this.yMin, this.yMax] = state.extent;
+    }
+  }
+
+  /** The whole state as plain data (shares the arrays: hand them over, then stop using this builder). */
+  state(): ChartModelState {
+    return {
+      rows: this.rows,
+      plotted: this.plotted,
+      feasible: this.feasible,
+      unplanned: this.unplanned,
+      row: this.row,
+      x: this.x,
+      y: this.y,
+      cellIndex: this.cellIndex,
+      processIndex: this.processIndex,
+      infeasible: this.infeasible,
+      front: this.front,
+      extent: [this.xMin, this.xMax, this.yMin, this.yMax],
+      tallies: this.tallies.state(),
+    };
+  }
+
+  /** The buffers of a state, to transfer rather than copy. */
+  static buffers(state: ChartModelState): ArrayBuffer[] {
+    return [state.row, state.x, state.y, state.cellIndex, state.processIndex, state.infeasible].map(
+      (a) => a.buffer,
+    );
   }
 
   /** Rows of the table taken in so far. */

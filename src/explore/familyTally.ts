@@ -26,13 +26,19 @@ export interface FamilyTally {
   readonly limits: ReadonlyMap<keyof typeof LIMIT_LABELS, number>;
 }
 
-interface Counts {
+export interface Counts {
   cellIndex: number;
   points: number;
   feasible: number;
   unplanned: number;
   checks: Map<FindingKind, number>;
   limits: Map<keyof typeof LIMIT_LABELS, number>;
+}
+
+/** A tallier's counts per cell and per cell × process key, as structured clone carries them. */
+export interface TallierState {
+  readonly byCell: Map<number, Counts>;
+  readonly byCellProcess: Map<number, Counts>;
 }
 
 /** Room for process indices in a cell × process key. */
@@ -43,10 +49,22 @@ const PROCESS_KEY_SPAN = 1 << 16;
  * point as it arrives (chartModelBuilder.ts), so the sentences at the end need no pass over every point.
  */
 export class FamilyTallier {
-  private readonly byCell = new Map<number, Counts>();
-  private readonly byCellProcess = new Map<number, Counts>();
+  private readonly byCell: Map<number, Counts>;
+  private readonly byCellProcess: Map<number, Counts>;
 
-  constructor(readonly limits: FeasibilityLimits) {}
+  /** `state`: the counts of a tallier taken elsewhere (state(), e.g. in the sweep worker), to go on from. */
+  constructor(
+    readonly limits: FeasibilityLimits,
+    state?: TallierState,
+  ) {
+    this.byCell = state?.byCell ?? new Map();
+    this.byCellProcess = state?.byCellProcess ?? new Map();
+  }
+
+  /** The counts as plain maps (they survive a structured clone); the tallier keeps using them. */
+  state(): TallierState {
+    return { byCell: this.byCell, byCellProcess: this.byCellProcess };
+  }
 
   add(point: TallyPoint): void {
     count(countsOf(this.byCell, point.cellIndex, point.cellIndex), point.figures, this.limits);

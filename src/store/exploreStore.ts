@@ -3,7 +3,7 @@ import type { FigureKey } from '../engine';
 import { DEFAULT_MAX_WORDLINE_DELAY } from '../explore/chartData';
 import type { SweepRequest } from '../explore/sweep';
 import type { SweepTable } from '../explore/sweepColumns';
-import type { SweepCommand, SweepReport } from '../explore/sweepProtocol';
+import type { SweepChart, SweepChartPlan, SweepCommand, SweepReport } from '../explore/sweepProtocol';
 import type { SweepSettings } from '../explore/sweepSettings';
 
 /**
@@ -31,6 +31,12 @@ export interface SweepRun {
   /** Wall time from start to the last point (s), once done. */
   readonly elapsed: number | null;
   readonly error: string | null;
+  /**
+   * The finished sweep's chart model and points picture as the worker built them for the last chart
+   * plan it had (planSweepChart), once done; null without one. The view takes them over when its axes,
+   * limits and size still match.
+   */
+  readonly chart: SweepChart | null;
 }
 
 /** Chart limits; points outside them are infeasible. */
@@ -52,7 +58,7 @@ export type SweepWorkerFactory = () => SweepWorker;
 
 /** The app's worker: bundled by Vite from the module next to the sweep core. */
 export const browserSweepWorker: SweepWorkerFactory = () =>
-  new Worker(new URL('../explore/sweepWorker.ts', import.meta.url), {
+  new Worker(new URL('../workers/sweepWorker.ts', import.meta.url), {
     type: 'module',
   }) as unknown as SweepWorker;
 
@@ -81,6 +87,11 @@ export interface ExploreState {
    */
   startSweep(request: SweepRequest, table: SweepTable, total?: number): void;
   cancelSweep(): void;
+  /**
+   * Tells the running sweep's worker what chart the view shows and at what size, so that it draws the
+   * finished chart (the last plan it has when the sweep ends); nothing when no sweep runs.
+   */
+  planSweepChart(plan: SweepChartPlan): void;
   noteBuilt(built: { pointIndex: number; name: string } | null): void;
 }
 
@@ -94,6 +105,7 @@ const IDLE: SweepRun = {
   total: 0,
   elapsed: null,
   error: null,
+  chart: null,
 };
 
 /**
@@ -205,6 +217,7 @@ export function createExploreStore(
                 done: pendingDone,
                 shown: table.count,
                 elapsed: (performance.now() - startedAt) / 1000,
+                chart: report.chart ?? null,
               },
             });
           } else {
@@ -223,6 +236,10 @@ export function createExploreStore(
         stopWorker();
         flush();
         set({ run: { ...get().run, status: 'cancelled' } });
+      },
+      planSweepChart(plan) {
+        const run = get().run;
+        if (run.status === 'running') worker?.postMessage({ type: 'plan', runId: run.id, plan });
       },
       noteBuilt(built) {
         set({ lastBuilt: built });

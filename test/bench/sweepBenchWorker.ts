@@ -1,5 +1,5 @@
 // Runs inside a Node worker thread, bundled by sweep.bench.ts as the app's build bundles its worker: the
-// same chunked loop as the app's Web Worker (src/explore/sweepWorker.ts), each chunk encoded as typed-array
+// same chunked loop as the app's Web Worker (src/workers/sweepWorker.ts), each chunk encoded as typed-array
 // columns and cloned with its buffers handed over, as the worker posts it. Asked for
 // { request: 'bench' | 'explorer' | 'spares', runs }, it answers with each run's wall time and process CPU time (ms)
 // and the last run's feasible points. A fresh thread's first run is a cold sweep, as in a new browser

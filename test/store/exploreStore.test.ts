@@ -14,6 +14,7 @@ class StepWorker implements SweepWorker {
   private pending: SweepReport[] = [];
 
   postMessage(command: SweepCommand) {
+    if (command.type !== 'start') return;
     const total = sweepSize(command.request);
     const tables = new SweepTextTables();
     for (let s = 0; s < total; s += 100) {

@@ -1,4 +1,4 @@
-import { memo, useMemo, useRef, useState } from 'react';
+import { memo, useCallback, useLayoutEffect, useMemo, useRef, useState } from 'react';
 import { buildPartition, shortProcessName } from '../../designs/buildPartition';
 import { downloadBlob, fileBaseName } from '../../app/download';
 import {
@@ -11,6 +11,7 @@ import {
 import { createVariant } from '../../commands/createVariant';
 import type { FeasibilityLimits } from '../../explore/chartData';
 import { ChartModelBuilder } from '../../explore/chartModelBuilder';
+import type { SweepChart } from '../../explore/sweepProtocol';
 import { SweepTable } from '../../explore/sweepColumns';
 import { bankFigureEntry, type FigureKey } from '../../engine';
 import { pointBuildSpec, type SweepRequest } from '../../explore/sweep';
@@ -28,6 +29,7 @@ import { PointCard } from './PointCard';
 import { seriesColour } from './seriesStyle';
 import { BankControls, SweepControls } from './SweepControls';
 import { SweepProgress } from './SweepProgress';
+import { sweepChartPlan } from './sweepChartPlan';
 import { sweepAnnouncement } from './sweepStatusText';
 
 /** The table of a view with no sweep yet. */
@@ -78,16 +80,30 @@ export function ExplorerView() {
     [minMargin, constraints.maxDelay],
   );
   // The chart model grows with the table: each update takes in only the rows shown since the last one.
-  // Other axes, limits or another run start a new model from the whole table.
+  // Other axes, limits or another run start a new model from the whole table. A finished sweep's model
+  // and points picture, built by the worker for these very axes and limits, are taken over once.
   const builder = useRef<ChartModelBuilder | null>(null);
+  const adopted = useRef<{ chart: SweepChart; builder: ChartModelBuilder } | null>(null);
   const table = run.table ?? NO_POINTS;
+  const finished = run.status === 'done' ? run.chart : null;
   const model = useMemo(() => {
     let b = builder.current;
-    if (!b || b.table !== table || b.xAxis !== xAxis || b.yAxis !== yAxis || b.limits !== limits)
+    if (
+      finished &&
+      adopted.current?.chart !== finished &&
+      finished.xAxis === xAxis &&
+      finished.yAxis === yAxis &&
+      finished.limits.minMargin === limits.minMargin &&
+      finished.limits.maxDelay === limits.maxDelay &&
+      finished.model.rows === run.shown
+    ) {
+      builder.current = b = new ChartModelBuilder(table, xAxis, yAxis, limits, finished.model);
+      adopted.current = { chart: finished, builder: b };
+    } else if (!b || b.table !== table || b.xAxis !== xAxis || b.yAxis !== yAxis || b.limits !== limits)
       builder.current = b = new ChartModelBuilder(table, xAxis, yAxis, limits);
     b.update(run.shown);
     return b.snapshot();
-  }, [table, run.shown, xAxis, yAxis, limits]);
+  }, [table, run.shown, xAxis, yAxis, limits, finished]);
   const data = useMemo(
     (): ScatterPoints => ({
       source: model.source,
@@ -99,6 +115,7 @@ export function ExplorerView() {
       shape: model.processIndex,
       colourOf: seriesColour,
       extent: model.extent,
+      picture: adopted.current?.builder === model.source ? adopted.current.chart.picture : null,
     }),
     [model],
   );
@@ -123,6 +140,24 @@ export function ExplorerView() {
   const hoveredPoint = useMemo(
     () => (hoveredRow >= 0 ? table.point(hoveredRow) : undefined),
     [table, hoveredRow],
+  );
+
+  // The worker draws the finished chart for the chart shown: it is told the axes, limits and size at the
+  // start of each run (once the chart has its size) and whenever they change while the sweep runs.
+  const planSweepChart = useExploreStore((s) => s.planSweepChart);
+  const chartSize = useRef<{ width: number; height: number } | null>(null);
+  const running = run.status === 'running';
+  const sendPlan = useCallback(() => {
+    const size = chartSize.current;
+    if (running && request && size) planSweepChart(sweepChartPlan(request, { xAxis, yAxis }, limits, size));
+  }, [running, request, xAxis, yAxis, limits, planSweepChart]);
+  useLayoutEffect(sendPlan, [sendPlan, run.id]);
+  const onChartSize = useCallback(
+    (width: number, height: number) => {
+      chartSize.current = { width, height };
+      sendPlan();
+    },
+    [sendPlan],
   );
 
   const pick = (plottedIndex: number) => {
@@ -257,7 +292,8 @@ export function ExplorerView() {
             onHover={setHovered}
             onPick={pick}
             exportRef={chart}
-            growing={run.status === 'running'}
+            growing={running}
+            onSize={onChartSize}
             renderTooltip={() =>
               hoveredPoint && request ? (
                 <>

@@ -1,0 +1,117 @@
+/**
+ * The sweep's Web Worker: a thin shell around runSweepRange(), which is pure and tested in Node. It
+ * assesses the points chunk by chunk and posts each chunk with the progress as typed-array columns whose
+ * buffers it hands over (explore/sweepColumns.ts); the app cancels a sweep by terminating the worker.
+ *
+ * It keeps a copy of the points, and when the sweep ends it builds the chart's model for the chart the
+ * page said it shows (the last 'plan' message) and draws that chart's points (charts/pointsPicture.ts),
+ * so the page takes the model and the pixels over instead of a pass over every point on its main thread.
+ */
+import { drawPointsPicture } from '../charts/pointsPicture';
+import { spriteSetLookup } from '../charts/pointsRaster';
+import { ChartModelBuilder } from '../explore/chartModelBuilder';
+import { ProcessCache } from '../explore/partitionFigures';
+import { runSweepRange, sweepSize } from '../explore/sweep';
+import { chunkBuffers, encodeSweepChunk, SweepTable, SweepTextTables } from '../explore/sweepColumns';
+import {
+  SWEEP_CHUNK,
+  type SweepChart,
+  type SweepChartPlan,
+  type SweepCommand,
+  type SweepReport,
+} from '../explore/sweepProtocol';
+
+interface WorkerScope {
+  postMessage(message: SweepReport, transfer?: Transferable[]): void;
+  addEventListener(type: 'message', listener: (event: MessageEvent<SweepCommand>) => void): void;
+}
+
+const scope = self as unknown as WorkerScope;
+
+/** The run being swept and the last chart plan the page sent for it. */
+let current = -1;
+let plan: SweepChartPlan | null = null;
+
+/** The finished sweep's chart model and points picture for `plan`. */
+function chartOf(table: SweepTable, plan: SweepChartPlan): SweepChart {
+  const builder = new ChartModelBuilder(table, plan.xAxis, plan.yAxis, plan.limits);
+  builder.update();
+  const model = builder.snapshot();
+  const colours = plan.colours;
+  const picture = drawPointsPicture(
+    {
+      source: builder,
+      count: model.count,
+      x: model.x,
+      y: model.y,
+      infeasible: model.infeasible,
+      series: model.cellIndex,
+      shape: model.processIndex,
+      colourOf: (series) => colours[series] ?? '',
+      extent: model.extent,
+    },
+    plan,
+    spriteSetLookup(plan.sprites),
+  );
+  return { xAxis: plan.xAxis, yAxis: plan.yAxis, limits: plan.limits, model: builder.state(), picture };
+}
+
+function chartBuffers(chart: SweepChart): ArrayBuffer[] {
+  const { pixels, x, y } = chart.picture;
+  return [...ChartModelBuilder.buffers(chart.model), ...[pixels, x, y].map((a) => a.buffer as ArrayBuffer)];
+}
+
+/** Runs `then` once the messages already queued for this worker (the page's plan) have been handled. */
+function afterQueuedMessages(then: () => void): void {
+  const channel = new MessageChannel();
+  channel.port1.onmessage = () => {
+    channel.port1.close();
+    then();
+  };
+  channel.port2.postMessage(null);
+}
+
+scope.addEventListener('message', (event) => {
+  const command = event.data;
+  if (command.type === 'plan') {
+    if (command.runId === current) plan = command.plan;
+    return;
+  }
+  if (command.type !== 'start') return;
+  const { runId, request } = command;
+  current = runId;
+  plan = null;
+  try {
+    const started = performance.now();
+    const total = sweepSize(request);
+    const cache = new ProcessCache();
+    const tables = new SweepTextTables();
+    const table = new SweepTable();
+    table.reserve(total);
+    for (let start = 0; start < total; start += SWEEP_CHUNK) {
+      const chunk = encodeSweepChunk(runSweepRange(request, start, start + SWEEP_CHUNK, cache), tables);
+      table.append(chunk);
+      scope.postMessage(
+        { type: 'progress', runId, done: Math.min(total, start + SWEEP_CHUNK), total, chunk },
+        chunkBuffers(chunk),
+      );
+    }
+    const elapsed = (performance.now() - started) / 1000;
+    afterQueuedMessages(() => {
+      try {
+        const chart = plan ? chartOf(table, plan) : undefined;
+        scope.postMessage({ type: 'done', runId, total, elapsed, chart }, chart ? chartBuffers(chart) : []);
+      } catch (error) {
+        // The chart is a convenience: without it the page draws the points itself.
+        console.error(error);
+        scope.postMessage({ type: 'done', runId, total, elapsed });
+      }
+    });
+  } catch (error) {
+    scope.postMessage({
+      type: 'failed',
+      runId,
+      error: error instanceof Error ? error.message : String(error),
+    });
+  }
+});
