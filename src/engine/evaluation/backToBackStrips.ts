@@ -1,10 +1,12 @@
 import {
   kindAt,
   SENSE_AMP_STRIP_CODE,
+  type MatKind,
   WORDLINE_DRIVER_STRIP_CODE,
   type BlockTable,
 } from '../../geometry/blockTable';
 import { ABUTMENT_TOLERANCE } from '../../geometry/rect';
+import { facingPairs, PairList } from './facingStrips';
 import { BLOCK_TYPE_LABEL } from '../../model/blockBasics';
 import type { MatTable } from './matTable';
 import type { ServedMats } from './reachComponents';
@@ -25,7 +27,11 @@ const NAMED_PAIRS = 3;
  */
 export function backToBackStrips(table: BlockTable, mats: MatTable): BackToBackState {
   const facing = servedEdgeOrientation(table, mats);
-  const pairs = STRIP_CODES.map((code) => pairsOfType(table, code, facing).toArray());
+  const strips = ServingStrips.of(table, facing);
+  const pairs = [
+    pairsOfType(table, strips.senseAmps, strips.senseAmpsLying),
+    pairsOfType(table, strips.drivers, strips.driversLying),
+  ];
   return { facing, pairs, findings: pairFindings(table, pairs) };
 }
 
@@ -185,156 +191,83 @@ const ALONG_VERTICAL_EDGE = 2;
  */
 function servedEdgeOrientation(table: BlockTable, mats: MatTable): Uint8Array {
   const facing = new Uint8Array(table.count);
+  // Whether each kind's bit lines run vertically, read once per kind rather than once per mat.
+  const { kinds, kindOf } = table;
+  const vertical = new Uint8Array(kinds.length);
+  for (let n = 0; n < kinds.length; n++)
+    vertical[n] = (kinds[n] as MatKind).block.bitlineAxis === 'vertical' ? 1 : 0;
+  const { position, servingOffsets, servingPositions } = mats;
   for (let k = 0; k < mats.count; k++) {
-    const vertical = kindAt(table, mats.position[k] as number).block.bitlineAxis === 'vertical';
-    const a = mats.servingOffsets[3 * k] as number;
-    const b = mats.servingOffsets[3 * k + 1] as number;
-    const c = mats.servingOffsets[3 * k + 2] as number;
-    for (let p = a; p < b; p++)
-      facing[mats.servingPositions[p] as number] = vertical ? ALONG_HORIZONTAL_EDGE : ALONG_VERTICAL_EDGE;
-    for (let p = b; p < c; p++)
-      facing[mats.servingPositions[p] as number] = vertical ? ALONG_VERTICAL_EDGE : ALONG_HORIZONTAL_EDGE;
+    const kind = kindOf[position[k] as number] as number;
+    if (kind < 0) throw new Error(`block ${table.blocks[position[k] as number]?.id ?? k} is not a mat`);
+    const senseAmpFacing = vertical[kind] === 1 ? ALONG_HORIZONTAL_EDGE : ALONG_VERTICAL_EDGE;
+    const driverFacing = vertical[kind] === 1 ? ALONG_VERTICAL_EDGE : ALONG_HORIZONTAL_EDGE;
+    const a = servingOffsets[3 * k] as number;
+    const b = servingOffsets[3 * k + 1] as number;
+    const c = servingOffsets[3 * k + 2] as number;
+    for (let p = a; p < b; p++) facing[servingPositions[p] as number] = senseAmpFacing;
+    for (let p = b; p < c; p++) facing[servingPositions[p] as number] = driverFacing;
   }
   return facing;
 }
 
-/** Every back-to-back pair of serving strips of type `code`, the upper or left strip first, as [a, b] runs. */
-function pairsOfType(table: BlockTable, code: number, facing: Uint8Array): PairList {
-  let lyingCount = 0;
-  let standingCount = 0;
-  for (let i = 0; i < table.count; i++) {
-    if (table.type[i] !== code || facing[i] === UNSERVING) continue;
-    if (facing[i] === ALONG_HORIZONTAL_EDGE) lyingCount++;
-    else standingCount++;
-  }
-  const lying = new Int32Array(lyingCount);
-  const standing = new Int32Array(standingCount);
-  for (let i = 0, l = 0, s = 0; i < table.count; i++) {
-    if (table.type[i] !== code || facing[i] === UNSERVING) continue;
-    if (facing[i] === ALONG_HORIZONTAL_EDGE) lying[l++] = i;
-    else standing[s++] = i;
-  }
-  const pairs = new PairList();
-  facingPairs(lying, table.y, table.height, table.x, table.width, pairs);
-  facingPairs(standing, table.x, table.width, table.y, table.height, pairs);
-  return pairs;
-}
-
-/** Pairs of table positions, two Int32 per pair, grown by doubling. */
-class PairList {
-  private data = new Int32Array(64);
-  length = 0;
-
-  push(a: number, b: number): void {
-    if (2 * this.length + 2 > this.data.length) {
-      const grown = new Int32Array(2 * this.data.length);
-      grown.set(this.data);
-      this.data = grown;
-    }
-    this.data[2 * this.length] = a;
-    this.data[2 * this.length + 1] = b;
-    this.length++;
-  }
-
-  /** The pairs as [first, second, …]. */
-  toArray(): Int32Array {
-    return this.data.slice(0, 2 * this.length);
-  }
-}
-
 /**
- * Pairs among `strips` (ascending positions) where one's far edge (start + size across) meets the other's
- * near edge and they overlap along the strip by more than the tolerance, in the order: each strip in turn,
- * its partners by start across, then by position.
- *
- * The strips are bucketed by their distinct start values (a native numeric sort of the starts, then a
- * counting sort of the strips), so there is no comparison callback and no object per strip. A strip whose
- * start is not a number meets nothing and is left out.
+ * The serving strips of the two checked types, ascending, each split into those lying across and those
+ * standing, found in one pass over the table. Per type, one array as long as the table holds the lying
+ * strips from its start and the standing ones from its end (then reversed in place, natively).
  */
-function facingPairs(
-  strips: Int32Array,
-  across: Float64Array,
-  thickness: Float64Array,
-  along: Float64Array,
-  length: Float64Array,
-  pairs: PairList,
-): void {
-  if (strips.length < 2) return;
-  const starts = new Float64Array(strips.length);
-  for (let s = 0; s < strips.length; s++) starts[s] = across[strips[s] as number] as number;
-  const distinct = distinctSorted(starts);
-  // Counting sort of the strips by the rank of their start; ranks ascend with position, so ties keep it.
-  const rank = new Int32Array(strips.length);
-  const bucket = new Int32Array(distinct.length + 1);
-  let r = 0;
-  for (let s = 0; s < strips.length; s++) {
-    const start = starts[s] as number;
-    // Strips of a tiled array come in rows whose starts repeat or step to the next value: try there first.
-    r = start === start ? lowerBoundFrom(distinct, start, r) : -1;
-    rank[s] = r;
-    if (r >= 0) (bucket[r + 1] as number)++;
-  }
-  for (let r = 0; r < distinct.length; r++) bucket[r + 1] = (bucket[r + 1] as number) + (bucket[r] as number);
-  const fill = bucket.slice(0, distinct.length);
-  const byStart = new Int32Array(bucket[distinct.length] as number);
-  for (let s = 0; s < strips.length; s++) {
-    const r = rank[s] as number;
-    if (r >= 0) byStart[(fill[r] as number)++] = strips[s] as number;
-  }
-  let first = 0;
-  for (let s = 0; s < strips.length; s++) {
-    const i = strips[s] as number;
-    const edge = (across[i] as number) + (thickness[i] as number);
-    const alongStart = along[i] as number;
-    const alongEnd = alongStart + (length[i] as number);
-    first = lowerBoundFrom(distinct, edge - ABUTMENT_TOLERANCE, first);
-    for (let r = first; r < distinct.length; r++) {
-      if (!((distinct[r] as number) <= edge + ABUTMENT_TOLERANCE)) break;
-      for (let q = bucket[r] as number; q < (bucket[r + 1] as number); q++) {
-        const j = byStart[q] as number;
-        if (j === i) continue;
-        const overlap =
-          Math.min(alongEnd, (along[j] as number) + (length[j] as number)) -
-          Math.max(alongStart, along[j] as number);
-        if (overlap > ABUTMENT_TOLERANCE) pairs.push(i, j);
+class ServingStrips {
+  private constructor(
+    readonly senseAmps: Int32Array,
+    readonly senseAmpsLying: number,
+    readonly drivers: Int32Array,
+    readonly driversLying: number,
+  ) {}
+
+  static of(table: BlockTable, facing: Uint8Array): ServingStrips {
+    const { type } = table;
+    const senseAmps = new Int32Array(table.count);
+    const drivers = new Int32Array(table.count);
+    let senseAmpsLying = 0;
+    let senseAmpsStanding = table.count;
+    let driversLying = 0;
+    let driversStanding = table.count;
+    for (let i = 0; i < table.count; i++) {
+      const f = facing[i] as number;
+      if (f === UNSERVING) continue;
+      const t = type[i] as number;
+      if (t === SENSE_AMP_STRIP_CODE) {
+        if (f === ALONG_HORIZONTAL_EDGE) senseAmps[senseAmpsLying++] = i;
+        else senseAmps[--senseAmpsStanding] = i;
+      } else if (t === WORDLINE_DRIVER_STRIP_CODE) {
+        if (f === ALONG_HORIZONTAL_EDGE) drivers[driversLying++] = i;
+        else drivers[--driversStanding] = i;
       }
     }
+    senseAmps.subarray(senseAmpsStanding).reverse();
+    drivers.subarray(driversStanding).reverse();
+    return new ServingStrips(
+      packed(senseAmps, senseAmpsLying, senseAmpsStanding),
+      senseAmpsLying,
+      packed(drivers, driversLying, driversStanding),
+      driversLying,
+    );
   }
 }
 
-/** The distinct numbers among `values` (NaN left out), ascending. */
-function distinctSorted(values: Float64Array): Float64Array {
-  const sorted = values.slice().sort();
-  let n = 0;
-  for (let s = 0; s < sorted.length; s++) {
-    const v = sorted[s] as number;
-    if (v !== v) break; // NaN sorts last
-    if (n === 0 || v !== sorted[n - 1]) sorted[n++] = v;
-  }
-  return sorted.subarray(0, n);
+/** The lying strips `list[0 … lying)` followed by the standing ones `list[standing …)`, in one array. */
+function packed(list: Int32Array, lying: number, standing: number): Int32Array {
+  list.copyWithin(lying, standing);
+  return list.subarray(0, lying + list.length - standing);
 }
 
 /**
- * {@link lowerBound}, checking `guess` and `guess + 1` before searching: the same answer, found without a
- * search when consecutive lookups land on the same or the next value.
+ * Every back-to-back pair among one type's serving strips (`strips`: the first `lying` lie across, the
+ * rest stand), the upper or left strip first, as [a, b, …]: lying pairs, then standing ones.
  */
-function lowerBoundFrom(values: Float64Array, value: number, guess: number): number {
-  const n = values.length;
-  for (let g = guess < 0 ? 0 : guess; g <= guess + 1 && g <= n; g++) {
-    if ((g === 0 || (values[g - 1] as number) < value) && (g === n || !((values[g] as number) < value)))
-      return g;
-  }
-  return lowerBound(values, value);
-}
-
-/** First index whose value is ≥ `value` in an ascending array. */
-function lowerBound(values: Float64Array, value: number): number {
-  let lo = 0;
-  let hi = values.length;
-  while (lo < hi) {
-    const mid = (lo + hi) >>> 1;
-    if ((values[mid] as number) < value) lo = mid + 1;
-    else hi = mid;
-  }
-  return lo;
+function pairsOfType(table: BlockTable, strips: Int32Array, lying: number): Int32Array {
+  const pairs = new PairList();
+  facingPairs(strips.subarray(0, lying), table.y, table.height, table.x, table.width, pairs);
+  facingPairs(strips.subarray(lying), table.x, table.width, table.y, table.height, pairs);
+  return pairs.toArray();
 }

@@ -11,6 +11,7 @@ import { DecoderEdges } from './decoderEdges';
 import { groupLabel } from './findingText';
 import type { MatTable } from './matTable';
 import {
+  ComponentsOnDemand,
   isReached,
   reachComponents,
   reachComponentsAfterEdit,
@@ -19,6 +20,7 @@ import {
   type ReachComponents,
   type ServingPart,
 } from './reachComponents';
+import { ServingForest } from './servingForest';
 import type { Finding } from './report';
 
 const ROW_DECODER = BLOCK_TYPE_CODES.indexOf('rowDecoder');
@@ -46,14 +48,43 @@ export function reachSeeds(
 ): Uint8Array {
   const seed = new Uint8Array(table.count);
   if (edges === null) return seed;
+  for (const d of edges.decoders) seed[d] = 1;
+  const box = edges.reach;
+  if (box === null) {
+    for (let i = 0; i < table.count; i++)
+      if (table.type[i] !== decoderCode && seedAt(table, matIndexAt, edges, i, decoderCode, stripCode))
+        seed[i] = 1;
+    return seed;
+  }
+  return seedsInBox(table, matIndexAt, edges, box, decoderCode, stripCode, seed);
+}
+
+/**
+ * The seeds among blocks that lie at least partly inside the decoders' grown bounding box `box` (the
+ * test of {@link DecoderEdges.mayAbut}, written out: this loop visits every block of the first evaluation).
+ */
+function seedsInBox(
+  table: BlockTable,
+  matIndexAt: Int32Array,
+  edges: DecoderEdges,
+  box: Float64Array,
+  decoderCode: number,
+  stripCode: number,
+  seed: Uint8Array,
+): Uint8Array {
+  const { type, x, y, width, height } = table;
+  const left = box[0] as number;
+  const top = box[1] as number;
+  const right = box[2] as number;
+  const bottom = box[3] as number;
+  const matsToo = decoderCode === COLUMN_DECODER;
   for (let i = 0; i < table.count; i++) {
-    const type = table.type[i];
-    if (type === decoderCode) seed[i] = 1;
-    else if (
-      (type === stripCode || (decoderCode === COLUMN_DECODER && (matIndexAt[i] as number) >= 0)) &&
-      edges.mayAbut(table, i)
-    )
-      seed[i] = seedAt(table, matIndexAt, edges, i, decoderCode, stripCode) ? 1 : 0;
+    if (type[i] !== stripCode && !(matsToo && (matIndexAt[i] as number) >= 0)) continue;
+    const bx = x[i] as number;
+    const by = y[i] as number;
+    if (bx > right || by > bottom || bx + (width[i] as number) < left || by + (height[i] as number) < top)
+      continue;
+    if (seedAt(table, matIndexAt, edges, i, decoderCode, stripCode)) seed[i] = 1;
   }
   return seed;
 }
@@ -146,12 +177,12 @@ function hasServing(mats: MatTable, k: number, part: ServingPart): boolean {
 }
 
 /** Mats with at least one serving strip in the check's part that no decoder reaches, as one grouped finding. */
-function unreachedFinding(mats: MatTable, reach: ReachComponents, check: ReachCheck): Finding | null {
+function unreachedFinding(mats: MatTable, reached: Uint8Array, check: ReachCheck): Finding | null {
   const ids: string[] = [];
   const labels: string[] = [];
   for (let k = 0; k < mats.count; k++) {
     const at = mats.position[k] as number;
-    if (isReached(reach, at) || !hasServing(mats, k, check.part)) continue;
+    if (reached[k] === 1 || !hasServing(mats, k, check.part)) continue;
     const block = mats.blocks[at];
     ids.push(block?.id ?? '');
     if (labels.length < 3) labels.push(block?.name || block?.id || '');
@@ -178,16 +209,52 @@ export interface DecoderReachState {
   readonly results: readonly ReachResult[];
 }
 
+/**
+ * One reach check of the whole design: the seeds, which trees of the serving forest hold one, and the mats
+ * in the others. The components block by block are labelled only when an edit asks for them.
+ */
 function reachResult(
   table: BlockTable,
   mats: MatTable,
   matIndexAt: Int32Array,
   check: ReachCheck,
+  forest: ServingForest,
 ): ReachResult {
   const edges = DecoderEdges.of(table, check.decoderCode);
   const seed = reachSeeds(table, matIndexAt, edges, check.decoderCode, check.stripCode);
-  const reach = reachComponents(mats, matIndexAt, check.part, seed);
-  return { check, edges, reach, finding: unreachedFinding(mats, reach, check) };
+  const reach = new ComponentsOnDemand(check.part, seed, mats, matIndexAt);
+  const seededRoots = seededTrees(forest, check.part, seed);
+  const finding = seededRoots === null ? null : unreachedInForest(mats, forest, check, seededRoots);
+  return { check, edges, reach, finding };
+}
+
+/**
+ * Per table position, 1 at the roots of the trees holding a seed; null when every tree holds one (then
+ * every mat is reached). The seeds are found by the native search of the seed array: they are few.
+ */
+function seededTrees(forest: ServingForest, part: ServingPart, seed: Uint8Array): Uint8Array | null {
+  const seededRoot = new Uint8Array(seed.length);
+  let seeded = 0;
+  for (let i = seed.indexOf(1); i >= 0; i = seed.indexOf(1, i + 1)) {
+    const r = forest.rootOf(part, i);
+    if (r < 0 || seededRoot[r] !== 0) continue;
+    seededRoot[r] = 1;
+    seeded++;
+  }
+  return seeded === forest.trees[part] ? null : seededRoot;
+}
+
+/** {@link unreachedFinding} with the reach read from the forest: a mat is reached when its root is seeded. */
+function unreachedInForest(
+  mats: MatTable,
+  forest: ServingForest,
+  check: ReachCheck,
+  seededRoot: Uint8Array,
+): Finding | null {
+  const reached = new Uint8Array(mats.count);
+  for (let k = 0; k < mats.count; k++)
+    reached[k] = seededRoot[forest.rootOf(check.part, mats.position[k] as number)] as number;
+  return unreachedFinding(mats, reached, check);
 }
 
 /**
@@ -195,7 +262,13 @@ function reachResult(
  * and bit lines whose sense-amplifier strips (the column path) lead to no column decoder.
  */
 export function decoderReach(table: BlockTable, mats: MatTable, matIndexAt: Int32Array): DecoderReachState {
-  return { results: REACH_CHECKS.map((check) => reachResult(table, mats, matIndexAt, check)) };
+  const forest = ServingForest.of(mats, table.count);
+  return {
+    results: [
+      reachResult(table, mats, matIndexAt, REACH_CHECKS[0] as ReachCheck, forest),
+      reachResult(table, mats, matIndexAt, REACH_CHECKS[1] as ReachCheck, forest),
+    ],
+  };
 }
 
 export function decoderReachFindings(state: DecoderReachState): Finding[] {
@@ -217,9 +290,11 @@ export function decoderReachAfterEdit(
   mats: MatTable,
   edit: LayoutEdit,
 ): DecoderReachState {
+  let forest: ServingForest | null = null;
   const results = previous.results.map((r) => {
     const { check, edges } = r;
-    const full = () => reachResult(table, mats, edit.matIndexAt, check);
+    const full = () =>
+      reachResult(table, mats, edit.matIndexAt, check, (forest ??= ServingForest.of(mats, table.count)));
     if (edit.changed.some((i) => table.type[i] === check.decoderCode)) return full();
     const next = reachComponentsAfterEdit(r.reach, before, mats, edit, (i) =>
       seedAt(table, edit.matIndexAt, edges, i, check.decoderCode, check.stripCode),
@@ -242,7 +317,8 @@ export function decoderReachAfterEdit(
       const k = edit.matIndexAt[i] as number;
       if (k >= 0 && unreachedNow(i, k)) same = false;
     }
-    return { check, edges, reach, finding: same ? r.finding : unreachedFinding(mats, reach, check) };
+    const finding = same ? r.finding : unreachedFinding(mats, reachedMats(reach, mats), check);
+    return { check, edges, reach, finding };
   });
   return { results };
 }

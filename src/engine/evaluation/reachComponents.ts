@@ -200,6 +200,44 @@ export function reachComponents(
   return { part, served, seed, label, components, built: components.length };
 }
 
+/**
+ * {@link reachComponents} labelled on first use. A whole evaluation needs only which mats a decoder reaches
+ * (see servingForest.ts); the components block by block, and the served lists behind them, are what an
+ * edit starts from, so the report keeps the inputs and labels them when the first edit asks.
+ */
+export class ComponentsOnDemand implements ReachComponents {
+  private labelled: ReachComponents | null = null;
+
+  constructor(
+    readonly part: ServingPart,
+    readonly seed: Uint8Array,
+    private readonly mats: MatTable,
+    private readonly matIndexAt: Int32Array,
+  ) {}
+
+  private get whole(): ReachComponents {
+    if (this.labelled === null)
+      this.labelled = reachComponents(this.mats, this.matIndexAt, this.part, this.seed);
+    return this.labelled;
+  }
+
+  get served(): ServedMats {
+    return this.whole.served;
+  }
+
+  get label(): Int32Array {
+    return this.whole.label;
+  }
+
+  get components(): readonly (Component | undefined)[] {
+    return this.whole.components;
+  }
+
+  get built(): number {
+    return this.whole.built;
+  }
+}
+
 /** What an edit in place changed, as the layout checks need it. */
 export interface LayoutEdit {
   /** Table positions of the blocks the edit replaced. */

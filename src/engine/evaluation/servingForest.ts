@@ -1,0 +1,101 @@
+import type { MatTable } from './matTable';
+import type { ServingPart } from './reachComponents';
+
+/**
+ * The mats and the strips their serving lists name, joined into trees (union–find, per table position)
+ * for both parts of the lists at once: two positions share a tree exactly when they share a component of
+ * {@link reachComponents} in that part. Whether a decoder reaches a mat needs only that, and one pass over
+ * the serving lists finds it without turning the lists around per strip (which the components labelled
+ * block by block need; the report builds those only when an edit asks for them).
+ */
+export class ServingForest {
+  private constructor(
+    /** Per part, per table position: the position above it in its tree, itself for a root, −1 if unlisted. */
+    private readonly up: readonly [Int32Array, Int32Array],
+    /** Per part: how many trees, one per component. */
+    readonly trees: readonly [number, number],
+  ) {}
+
+  /** The root of position `i`'s tree in `part` (−1 for a position no mat lists and that is no mat). */
+  rootOf(part: ServingPart, i: number): number {
+    return rootIn(this.up[part], i);
+  }
+
+  /**
+   * One pass over the mats in report order: a mat starts a tree, and each strip it lists joins the mat's
+   * tree (a strip seen before brings its tree along). In a tiled array a strip is met again from the next
+   * mat of its row or column, so almost every step is one comparison.
+   */
+  static of(mats: MatTable, tableCount: number): ServingForest {
+    const up0 = new Int32Array(tableCount).fill(-1);
+    const up1 = new Int32Array(tableCount).fill(-1);
+    const { position, servingOffsets, servingPositions } = mats;
+    let trees0 = 0;
+    let trees1 = 0;
+    for (let k = 0; k < mats.count; k++) {
+      const m = position[k] as number;
+      const a = servingOffsets[3 * k] as number;
+      const b = servingOffsets[3 * k + 1] as number;
+      const c = servingOffsets[3 * k + 2] as number;
+      let root = m;
+      up0[m] = m;
+      trees0++;
+      for (let p = a; p < b; p++) {
+        const s = servingPositions[p] as number;
+        let r = up0[s] as number;
+        if (r === root) continue;
+        if (r < 0) {
+          up0[s] = root;
+          continue;
+        }
+        // Path halving: every other step points past its parent.
+        while ((up0[r] as number) !== r) {
+          const g = up0[up0[r] as number] as number;
+          up0[r] = g;
+          r = g;
+        }
+        if (r !== root) {
+          up0[root] = r;
+          root = r;
+          trees0--;
+        }
+        up0[s] = r;
+      }
+      root = m;
+      up1[m] = m;
+      trees1++;
+      for (let p = b; p < c; p++) {
+        const s = servingPositions[p] as number;
+        let r = up1[s] as number;
+        if (r === root) continue;
+        if (r < 0) {
+          up1[s] = root;
+          continue;
+        }
+        while ((up1[r] as number) !== r) {
+          const g = up1[up1[r] as number] as number;
+          up1[r] = g;
+          r = g;
+        }
+        if (r !== root) {
+          up1[root] = r;
+          root = r;
+          trees1--;
+        }
+        up1[s] = r;
+      }
+    }
+    return new ServingForest([up0, up1], [trees0, trees1]);
+  }
+}
+
+function rootIn(up: Int32Array, i: number): number {
+  let r = up[i] as number;
+  if (r < 0) return -1;
+  while ((up[r] as number) !== r) {
+    const g = up[up[r] as number] as number;
+    up[r] = g;
+    r = g;
+  }
+  return r;
+}
