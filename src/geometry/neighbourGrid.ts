@@ -1,5 +1,6 @@
 import type { Boxes } from './blockTable';
 import { PairBuffer, runningTotals, type NeighbourTable } from './neighbourRows';
+import { bandedNeighbourTable } from './bandedPairs';
 import { groupedGridPairs, sharesBeyond } from './groupedPairs';
 import { ScratchBuffer } from './scratchBuffer';
 
@@ -48,6 +49,14 @@ export function neighbourTable(
  * `neighbourTable(boxes, margin, (i, j) => group[i] !== group[j] || sharedBeyond(i, j))` (tested).
  */
 export function groupedNeighbourTable(boxes: Boxes, margin: number, group: Uint8Array): NeighbourTable {
+  return bandedNeighbourTable(boxes, margin, group, IDENTITY) ?? groupedGridTable(boxes, margin, group);
+}
+
+/** Groups as their own codes. */
+const IDENTITY = Uint8Array.from({ length: 256 }, (_, k) => k);
+
+/** {@link groupedNeighbourTable} by the grid alone (the general path, and the banded pass's oracle). */
+export function groupedGridTable(boxes: Boxes, margin: number, group: Uint8Array): NeighbourTable {
   const n = boxes.count;
   const pairs = new PairBuffer();
   if (n < 2) return pairs.table(n);

@@ -8,14 +8,36 @@ export interface NeighbourTable {
   readonly start: Int32Array;
   readonly end: Int32Array;
   readonly list: Int32Array;
+  /**
+   * Every pair of boxes that share more than a margin in both directions, when the pass that made the
+   * table found them on its way (null when it did not): a whole-die evaluation then need not test every
+   * neighbour again for overlaps.
+   */
+  readonly shared?: SharedPairs | null;
+}
+
+/**
+ * Pairs of boxes that share more than `margin` (m) in both directions (an overlap, not a touch): pair k
+ * is `pairs[2k]` < `pairs[2k + 1]`, in ascending order of the first and then the second.
+ */
+export class SharedPairs {
+  constructor(
+    readonly margin: number,
+    readonly pairs: Int32Array,
+  ) {}
+
+  get count(): number {
+    return this.pairs.length >> 1;
+  }
 }
 
 /** A table as a class, so that it keeps one shape from call to call (see blockTable.ts, TableRows). */
-class NeighbourRows implements NeighbourTable {
+export class NeighbourRows implements NeighbourTable {
   constructor(
     readonly start: Int32Array,
     readonly end: Int32Array,
     readonly list: Int32Array,
+    readonly shared: SharedPairs | null = null,
   ) {}
 }
 

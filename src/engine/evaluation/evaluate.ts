@@ -1,5 +1,13 @@
-import { blockTable, kindAt, MAT_CODE, type BlockTable, type MatKind } from '../../geometry/blockTable';
-import { groupedNeighbourTable } from '../../geometry/neighbourGrid';
+import { bandedNeighbourTable } from '../../geometry/bandedPairs';
+import {
+  BLOCK_TYPE_CODES,
+  blockTable,
+  kindAt,
+  MAT_CODE,
+  type BlockTable,
+  type MatKind,
+} from '../../geometry/blockTable';
+import { groupedGridTable } from '../../geometry/neighbourGrid';
 import type { NeighbourTable } from '../../geometry/neighbourRows';
 import { ABUTMENT_TOLERANCE } from '../../geometry/rect';
 import type { Design } from '../../model/design';
@@ -201,10 +209,21 @@ function assignFigures(
  */
 export function evaluationNeighbours(table: BlockTable): NeighbourTable {
   // Mats in one group, every other block in the other: pairs across the groups that meet are kept, pairs
-  // within one only when they overlap (overlapAreaAt > 0: more than the tolerance both ways).
+  // within one only when they overlap (overlapAreaAt > 0: more than the tolerance both ways). Floorplans
+  // written row by row take the banded pass; anything else the grid, with the same result.
+  return (
+    bandedNeighbourTable(table, ABUTMENT_TOLERANCE, table.type, MAT_GROUP) ??
+    groupedGridTable(table, ABUTMENT_TOLERANCE, matGroups(table))
+  );
+}
+
+/** The group of each block type code: 1 for mats, 0 for every other block. */
+const MAT_GROUP = Uint8Array.from(BLOCK_TYPE_CODES, (_, code) => (code === MAT_CODE ? 1 : 0));
+
+function matGroups(table: BlockTable): Uint8Array {
   const isMat = new Uint8Array(table.count);
   for (let i = 0; i < table.count; i++) if (table.type[i] === MAT_CODE) isMat[i] = 1;
-  return groupedNeighbourTable(table, ABUTMENT_TOLERANCE, isMat);
+  return isMat;
 }
 
 /**

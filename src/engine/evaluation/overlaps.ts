@@ -27,6 +27,29 @@ export function findOverlaps(table: BlockTable, neighbours: NeighbourTable): Ove
 
 /** {@link findOverlaps} with the design positions of each pair, so a later edit can update the list. */
 export function findPositionedOverlaps(table: BlockTable, neighbours: NeighbourTable): PositionedOverlap[] {
+  const shared = neighbours.shared;
+  // The pass that found the neighbours also found the pairs sharing more than the tolerance both ways
+  // (overlapAreaAt > 0), in this order: no need to test every neighbour again.
+  if (shared && shared.margin === ABUTMENT_TOLERANCE) return overlapsOfShared(table, shared.pairs);
+  return overlapsAmongNeighbours(table, neighbours);
+}
+
+function overlapsOfShared(table: BlockTable, pairs: Int32Array): PositionedOverlap[] {
+  const overlaps: PositionedOverlap[] = [];
+  for (let k = 0; k < pairs.length; k += 2) {
+    const i = pairs[k] as number;
+    const j = pairs[k + 1] as number;
+    const area = overlapAreaAt(table, i, j);
+    overlaps.push({
+      overlap: { firstId: table.blocks[i]?.id ?? '', secondId: table.blocks[j]?.id ?? '', area },
+      first: i,
+      second: j,
+    });
+  }
+  return overlaps;
+}
+
+function overlapsAmongNeighbours(table: BlockTable, neighbours: NeighbourTable): PositionedOverlap[] {
   const overlaps: PositionedOverlap[] = [];
   const { start, end, list } = neighbours;
   for (let i = 0; i < table.count; i++) {

@@ -1,0 +1,112 @@
+import type { Boxes } from './blockTable';
+
+/**
+ * A table's blocks cut into runs: a run is a stretch of blocks that follow each other in design order,
+ * carry the same code (a block type, say), share their top edge and height exactly (floating-point
+ * equality), and stand side by side from left to right (each starts at or after the right edge of the
+ * block before it in the run). Tiled arrays are written row by row, so a 64 × 64 grid of mats with its
+ * strips is about 200 runs of 12,418 blocks: a whole-die pass can work per run, and per pair of runs,
+ * instead of per block or per pair of blocks.
+ *
+ * Run r holds blocks `start[r]` … `start[r + 1] − 1`; all of them span `top[r]` … `bottom[r]` vertically
+ * (bottom = y + height, computed as every box test computes it). Within a run, design order is left to
+ * right order.
+ */
+export class BlockRuns {
+  constructor(
+    readonly count: number,
+    readonly start: Int32Array,
+    readonly top: Float64Array,
+    readonly bottom: Float64Array,
+    readonly code: Uint8Array,
+    /**
+     * 1 when two consecutive blocks of run r meet horizontally with the margin the runs were cut for
+     * (either of the box test's comparisons holds), 0 when each block clears the next.
+     */
+    readonly touching: Uint8Array,
+  ) {}
+}
+
+/**
+ * The runs of a table, with each block's code: blocks of different codes never share a run. `margin`
+ * (m, ≥ 0) decides which runs count as touching. Returns null when some box is not finite, or when the
+ * blocks do not form long runs — more than `maxRuns` of them —, or a width is negative, so that a caller can take its general
+ * path having paid for one pass only.
+ */
+export function blockRuns(boxes: Boxes, code: Uint8Array, margin: number, maxRuns: number): BlockRuns | null {
+  const n = boxes.count;
+  const cap = Math.min(n, maxRuns);
+  const starts = new Int32Array(cap + 1);
+  const touching = new Uint8Array(cap);
+  const count = cutRuns(boxes, code, margin, starts, touching, cap);
+  if (count < 0) return null;
+  starts[count] = n;
+  const top = new Float64Array(count);
+  const bottom = new Float64Array(count);
+  const codes = new Uint8Array(count);
+  describeRuns(boxes, code, starts, top, bottom, codes);
+  return new BlockRuns(count, starts.subarray(0, count + 1), top, bottom, codes, touching.subarray(0, count));
+}
+
+/**
+ * Writes where each run starts into `starts`, marks runs whose blocks touch, and returns the number of
+ * runs, or −1 when there would be more than `cap`, some coordinate is not finite or some width negative. (One hot loop per
+ * function: see DEVELOPERS.md.)
+ */
+function cutRuns(
+  boxes: Boxes,
+  code: Uint8Array,
+  margin: number,
+  starts: Int32Array,
+  touching: Uint8Array,
+  cap: number,
+): number {
+  const { x, y, width, height } = boxes;
+  const n = boxes.count;
+  let count = 0;
+  let runY = NaN;
+  let runHeight = NaN;
+  let runCode = -1;
+  let lastRight = 0;
+  // A sum of finite terms is finite (or overflows, which sends such boxes to the general path too), and
+  // x + width is finite exactly when both are: so one sum tells whether every coordinate is finite.
+  let sum = 0;
+  for (let i = 0; i < n; i++) {
+    const xi = x[i] as number;
+    const yi = y[i] as number;
+    const hi = height[i] as number;
+    const right = xi + (width[i] as number);
+    // A negative width (or NaN) takes the general path: runs rely on right edges not before left ones.
+    if (!(right >= xi)) return -1;
+    if (yi !== runY || hi !== runHeight || code[i] !== runCode || !(xi >= lastRight)) {
+      if (count === cap) return -1;
+      starts[count++] = i;
+      runY = yi;
+      runHeight = hi;
+      runCode = code[i] as number;
+      sum += yi + hi;
+    } else if (!(xi > lastRight + margin && xi - margin > lastRight)) {
+      touching[count - 1] = 1;
+    }
+    lastRight = right;
+    sum += right;
+  }
+  return Number.isFinite(sum) ? count : -1;
+}
+
+function describeRuns(
+  boxes: Boxes,
+  code: Uint8Array,
+  starts: Int32Array,
+  top: Float64Array,
+  bottom: Float64Array,
+  codes: Uint8Array,
+): void {
+  const { y, height } = boxes;
+  for (let r = 0; r < top.length; r++) {
+    const i = starts[r] as number;
+    top[r] = y[i] as number;
+    bottom[r] = (y[i] as number) + (height[i] as number);
+    codes[r] = code[i] as number;
+  }
+}

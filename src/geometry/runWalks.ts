@@ -1,0 +1,204 @@
+import type { Boxes } from './blockTable';
+import type { PairSink } from './orderedPairs';
+
+/*
+ * The walks of bandedPairs.ts over one pair of runs: boxes a0 … a1 − 1 of one run against b0 … b1 − 1 of
+ * the other, both in left-to-right order. Each keeps the pairs the grid pass would keep, tested with the
+ * grid's comparisons, and hands them to the sink in an order where both a and b never go back.
+ */
+
+/**
+ * {@link crossGroupWalk} for two runs whose blocks clear their neighbours in the run (not touching): an
+ * ordinary merge of two sorted lists of disjoint intervals, advancing whichever box ends first. When box a
+ * ends no later than box b, no box after b can meet a: the next one starts beyond b's right edge by more
+ * than the margin both ways the box test counts it (that is what not touching means), so beyond a's as
+ * well; likewise the other way round. Each step tests one pair, and the run pair costs |A| + |B| steps.
+ */
+export function crossGroupMerge(
+  boxes: Boxes,
+  margin: number,
+  a0: number,
+  a1: number,
+  b0: number,
+  b1: number,
+  aMeetsB: boolean,
+  bMeetsA: boolean,
+  sharedY: boolean,
+  sink: PairSink,
+): void {
+  const { x, width } = boxes;
+  const degree = sink.degree;
+  let first = sink.first;
+  let second = sink.second;
+  let count = sink.count;
+  let a = a0;
+  let b = b0;
+  let xa = x[a] as number;
+  let ra = xa + (width[a] as number);
+  let xb = x[b] as number;
+  let rb = xb + (width[b] as number);
+  for (;;) {
+    if (
+      (aMeetsB && xa - margin <= rb && xb <= ra + margin) ||
+      (bMeetsA && xb - margin <= ra && xa <= rb + margin)
+    ) {
+      if (count === first.length) {
+        sink.count = count;
+        sink.grow();
+        first = sink.first;
+        second = sink.second;
+      }
+      first[count] = a;
+      second[count] = b;
+      count++;
+      degree[a] = (degree[a] as number) + 1;
+      degree[b] = (degree[b] as number) + 1;
+      if (sharedY && (ra < rb ? ra : rb) - (xa > xb ? xa : xb) > margin) sink.share(a, b);
+    }
+    if (ra <= rb) {
+      if (++a === a1) break;
+      xa = x[a] as number;
+      ra = xa + (width[a] as number);
+    } else {
+      if (++b === b1) break;
+      xb = x[b] as number;
+      rb = xb + (width[b] as number);
+    }
+  }
+  sink.count = count;
+}
+
+/** {@link sameGroupWalk} for two runs that do not touch, as a merge (see {@link crossGroupMerge}). */
+export function sameGroupMerge(
+  boxes: Boxes,
+  margin: number,
+  a0: number,
+  a1: number,
+  b0: number,
+  b1: number,
+  sink: PairSink,
+): void {
+  const { x, width } = boxes;
+  const degree = sink.degree;
+  let a = a0;
+  let b = b0;
+  let xa = x[a] as number;
+  let ra = xa + (width[a] as number);
+  let xb = x[b] as number;
+  let rb = xb + (width[b] as number);
+  for (;;) {
+    if ((ra < rb ? ra : rb) - (xa > xb ? xa : xb) > margin) {
+      sink.add(a, b);
+      degree[a] = (degree[a] as number) + 1;
+      degree[b] = (degree[b] as number) + 1;
+      sink.share(a, b);
+    }
+    if (ra <= rb) {
+      if (++a === a1) break;
+      xa = x[a] as number;
+      ra = xa + (width[a] as number);
+    } else {
+      if (++b === b1) break;
+      xb = x[b] as number;
+      rb = xb + (width[b] as number);
+    }
+  }
+}
+
+/**
+ * Pairs of boxes of runs of different groups (a in a0 … a1 − 1, b in b0 … b1 − 1) that meet: the grid's
+ * test `(a grown meets b) || (b grown meets a)` with its vertical halves known for the whole pair of runs
+ * (`aMeetsB`, `bMeetsA`). Pairs that also share more than the margin both ways (`sharedY`: the runs do
+ * vertically) go to the shared list.
+ */
+export function crossGroupWalk(
+  boxes: Boxes,
+  margin: number,
+  a0: number,
+  a1: number,
+  b0: number,
+  b1: number,
+  aMeetsB: boolean,
+  bMeetsA: boolean,
+  sharedY: boolean,
+  sink: PairSink,
+): void {
+  const { x, width } = boxes;
+  const degree = sink.degree;
+  let first = sink.first;
+  let second = sink.second;
+  let count = sink.count;
+  let p = b0;
+  for (let a = a0; a < a1; a++) {
+    const xa = x[a] as number;
+    const ra = xa + (width[a] as number);
+    const left = xa - margin;
+    const right = ra + margin;
+    // Boxes of b that end before a (either test fails) are behind every later a as well.
+    while (p < b1) {
+      const rb = (x[p] as number) + (width[p] as number);
+      if (rb < left && rb + margin < xa) p++;
+      else break;
+    }
+    for (let b = p; b < b1; b++) {
+      const xb = x[b] as number;
+      // This box and every later one start past a (either test fails).
+      if (xb > right && xb - margin > ra) break;
+      const rb = xb + (width[b] as number);
+      if ((aMeetsB && left <= rb && xb <= right) || (bMeetsA && xb - margin <= ra && xa <= rb + margin)) {
+        if (count === first.length) {
+          sink.count = count;
+          sink.grow();
+          first = sink.first;
+          second = sink.second;
+        }
+        first[count] = a;
+        second[count] = b;
+        count++;
+        degree[a] = (degree[a] as number) + 1;
+        degree[b] = (degree[b] as number) + 1;
+        if (sharedY && (ra < rb ? ra : rb) - (xa > xb ? xa : xb) > margin) sink.share(a, b);
+      }
+    }
+  }
+  sink.count = count;
+}
+
+/**
+ * Pairs of boxes of runs of one group that share more than the margin both ways (the runs do
+ * vertically, which bandedPairs.ts checked), as the grid's sharesBeyond computes it.
+ */
+export function sameGroupWalk(
+  boxes: Boxes,
+  margin: number,
+  a0: number,
+  a1: number,
+  b0: number,
+  b1: number,
+  sink: PairSink,
+): void {
+  const { x, width } = boxes;
+  const degree = sink.degree;
+  let p = b0;
+  for (let a = a0; a < a1; a++) {
+    const xa = x[a] as number;
+    const ra = xa + (width[a] as number);
+    // As in crossGroupWalk: with a margin ≥ 0, boxes that fail both meet tests share nothing either.
+    while (p < b1) {
+      const rb = (x[p] as number) + (width[p] as number);
+      if (rb < xa - margin && rb + margin < xa) p++;
+      else break;
+    }
+    for (let b = p; b < b1; b++) {
+      const xb = x[b] as number;
+      if (xb > ra + margin && xb - margin > ra) break;
+      const rb = xb + (width[b] as number);
+      if ((ra < rb ? ra : rb) - (xa > xb ? xa : xb) > margin) {
+        sink.add(a, b);
+        degree[a] = (degree[a] as number) + 1;
+        degree[b] = (degree[b] as number) + 1;
+        sink.share(a, b);
+      }
+    }
+  }
+}
