@@ -50,19 +50,37 @@ export interface BlockTable extends Boxes {
   readonly cells: ReadonlyMap<string, CellDefinition>;
   /** Kind index by "cell|cells per BL|cells per WL|axis". */
   readonly kindIndex: ReadonlyMap<string, number>;
+  /** Sums over the blocks, gathered while the rows were written (see {@link TableSums}). */
+  readonly sums: TableSums;
+}
+
+/**
+ * Sums over a table's blocks that evaluation reads (totals, counts), gathered while the rows are written,
+ * where each block's place and size are at hand: a pass of their own would read every row again.
+ */
+export class TableSums {
+  /** Area of every block (m², width · height), summed in design order. */
+  placedArea = 0;
+  /** The same per type code (index into {@link BLOCK_TYPE_CODES}), each summed in design order. */
+  readonly areaByCode = new Float64Array(BLOCK_TYPE_CODES.length);
+  /** Bounding box of every block (m): left, top, right, bottom; ±Infinity without blocks. */
+  readonly bounds = Float64Array.of(Infinity, Infinity, -Infinity, -Infinity);
+  /** Mats of each kind (indices as the table's kinds). */
+  readonly matsOfKind: number[] = [];
 }
 
 /** A table while its rows are written: its list of kinds and their index still grow. */
 interface TableInProgress extends BlockTable {
   readonly kinds: MatKind[];
   readonly kindIndex: Map<string, number>;
+  readonly sums: TableSums;
 }
 
 /** Lays out every block of a design: strips are their own rectangles, mats take their size from their kind. */
 export function blockTable(design: Design): BlockTable {
   const cells = new Map(design.cells.map((c) => [c.id, c]));
   const table = emptyTable(design.blocks, design.process.featureSize, cells);
-  writeRows(table, design.blocks);
+  table.sums.placedArea = writeRows(table, design.blocks);
   return table;
 }
 
@@ -91,8 +109,11 @@ export function withBlocksReplaced(
     base.featureSize,
     base.cells,
     new Map(base.kindIndex),
+    new TableSums(),
   );
   for (const [i, block] of replacements) writeRow(table, i, block);
+  for (let k = 0; k < table.kinds.length; k++) table.sums.matsOfKind.push(0);
+  table.sums.placedArea = sumRows(table);
   return table;
 }
 
@@ -132,6 +153,7 @@ function emptyTable(
     featureSize,
     cells,
     new Map(),
+    new TableSums(),
   );
 }
 
@@ -155,6 +177,7 @@ class TableRows implements TableInProgress {
     readonly featureSize: number,
     readonly cells: ReadonlyMap<string, CellDefinition>,
     readonly kindIndex: Map<string, number>,
+    readonly sums: TableSums,
   ) {}
 }
 
@@ -167,38 +190,109 @@ class KindOfMat implements MatKind {
   ) {}
 }
 
-function writeRows(table: TableInProgress, blocks: readonly Block[]): void {
+/**
+ * Writes every row and gathers the table's sums in the same pass (design order); returns the placed
+ * area. (The hot loop ends its function: DEVELOPERS.md.)
+ */
+function writeRows(table: TableInProgress, blocks: readonly Block[]): number {
+  const { x: xs, y: ys, width: widths, height: heights, type: types, kindOf, kinds, sums } = table;
+  const { areaByCode, bounds, matsOfKind } = sums;
+  let placedArea = 0;
+  let minX = Infinity;
+  let minY = Infinity;
+  let maxX = -Infinity;
+  let maxY = -Infinity;
   // Consecutive mats are nearly always of one kind in a tiled array, so the last kind is tried first
-  // before building a key.
+  // before building a key; strips come in runs of one type, so the last type's code likewise.
   let last: Mat | null = null;
   let lastKind = -1;
+  let lastWidth = 0;
+  let lastHeight = 0;
+  let runType: BlockType | null = null;
+  let runCode = -1;
   for (let i = 0; i < blocks.length; i++) {
     const block = blocks[i] as Block;
-    if (
-      block.type === 'mat' &&
-      last !== null &&
-      block.cellId === last.cellId &&
-      block.cellsPerBitline === last.cellsPerBitline &&
-      block.cellsPerWordline === last.cellsPerWordline &&
-      block.bitlineAxis === last.bitlineAxis &&
-      block.footprint === undefined &&
-      last.footprint === undefined
-    ) {
-      const kind = table.kinds[lastKind] as MatKind;
-      table.x[i] = block.x;
-      table.y[i] = block.y;
-      table.width[i] = kind.geometry.width;
-      table.height[i] = kind.geometry.height;
-      table.type[i] = MAT_CODE;
-      table.kindOf[i] = lastKind;
-      continue;
-    }
-    writeRow(table, i, block);
+    const x = block.x;
+    const y = block.y;
+    let w: number;
+    let h: number;
+    let code: number;
     if (block.type === 'mat') {
-      last = block;
-      lastKind = table.kindOf[i] as number;
+      if (
+        last === null ||
+        block.cellId !== last.cellId ||
+        block.cellsPerBitline !== last.cellsPerBitline ||
+        block.cellsPerWordline !== last.cellsPerWordline ||
+        block.bitlineAxis !== last.bitlineAxis ||
+        block.footprint !== undefined ||
+        last.footprint !== undefined
+      ) {
+        lastKind = matKindOf(table, block);
+        if (lastKind === matsOfKind.length) matsOfKind.push(0);
+        const g = (kinds[lastKind] as MatKind).geometry;
+        last = block;
+        lastWidth = g.width;
+        lastHeight = g.height;
+      }
+      w = lastWidth;
+      h = lastHeight;
+      code = MAT_CODE;
+      kindOf[i] = lastKind;
+      matsOfKind[lastKind] = (matsOfKind[lastKind] as number) + 1;
+    } else {
+      w = block.width;
+      h = block.height;
+      if (block.type !== runType) {
+        runType = block.type;
+        runCode = CODE_OF.get(block.type) ?? -1;
+      }
+      code = runCode;
+      kindOf[i] = -1;
     }
+    xs[i] = x;
+    ys[i] = y;
+    widths[i] = w;
+    heights[i] = h;
+    types[i] = code;
+    const area = w * h;
+    placedArea += area;
+    areaByCode[code] = (areaByCode[code] as number) + area;
+    // Comparisons rather than Math.min/max calls: coordinates are finite (restore checks them).
+    const right = x + w;
+    const bottom = y + h;
+    if (x < minX) bounds[0] = minX = x;
+    if (y < minY) bounds[1] = minY = y;
+    if (right > maxX) bounds[2] = maxX = right;
+    if (bottom > maxY) bounds[3] = maxY = bottom;
   }
+  return placedArea;
+}
+
+/**
+ * The sums of a table whose rows were written one by one (a copy with some blocks replaced), into its
+ * {@link TableSums} whose mat counts start at 0 per kind; returns the placed area.
+ */
+function sumRows(table: TableInProgress): number {
+  const { x: xs, y: ys, width: widths, height: heights, type: types, kindOf, sums } = table;
+  const { areaByCode, bounds, matsOfKind } = sums;
+  let placedArea = 0;
+  for (let i = 0; i < table.count; i++) {
+    const x = xs[i] as number;
+    const y = ys[i] as number;
+    const w = widths[i] as number;
+    const h = heights[i] as number;
+    const code = types[i] as number;
+    const area = w * h;
+    placedArea += area;
+    areaByCode[code] = (areaByCode[code] as number) + area;
+    if (x < (bounds[0] as number)) bounds[0] = x;
+    if (y < (bounds[1] as number)) bounds[1] = y;
+    if (x + w > (bounds[2] as number)) bounds[2] = x + w;
+    if (y + h > (bounds[3] as number)) bounds[3] = y + h;
+    const kind = kindOf[i] as number;
+    if (kind >= 0) matsOfKind[kind] = (matsOfKind[kind] as number) + 1;
+  }
+  return placedArea;
 }
 
 function writeRow(table: TableInProgress, i: number, block: Block): void {

@@ -33,26 +33,51 @@ export function designContext(design: Design, senseAmpCount: number, cellCount: 
 
 /** Sense amplifiers of all mats: the floorplan's share of the die's failure allowance. */
 export function countSenseAmps(table: BlockTable): number {
-  // Once per kind, then summed per mat in design order: the same sum, and no cell read per mat (cells
-  // of different designs may have different shapes, and a compiled loop reading them is thrown away).
+  // Once per kind, then counted per kind: no cell read per mat (cells of different designs may have
+  // different shapes, and a compiled loop reading them is thrown away).
   const perKind = new Float64Array(table.kinds.length);
   for (let k = 0; k < perKind.length; k++) perKind[k] = senseAmpsOfMat(table.kinds[k] as MatKind);
-  let count = 0;
-  for (let i = 0; i < table.count; i++) {
-    const kind = table.kindOf[i] as number;
-    if (kind >= 0) count += perKind[kind] as number;
-  }
-  return count;
+  return sumOverMats(table, perKind);
 }
 
 /** Cells of all mats: the floorplan's share of the die's cells, among which the weakest is sought. */
 export function countCells(table: BlockTable): number {
-  let count = 0;
+  const perKind = new Float64Array(table.kinds.length);
+  for (let k = 0; k < perKind.length; k++) perKind[k] = (table.kinds[k] as MatKind).geometry.bits;
+  return sumOverMats(table, perKind);
+}
+
+/** Below this every multiple of ½ is a double, exactly (2^52 / 2). */
+const EXACT_HALVES = 2 ** 51;
+
+/**
+ * Σ over the mats of their kind's value, as a sum mat by mat in design order gives it. When every value
+ * is a multiple of ½ and the sum of magnitudes stays below 2^51, every partial sum in any order is exact,
+ * so mats per kind × value per kind is that sum to the bit; otherwise the mats are summed one by one.
+ */
+function sumOverMats(table: BlockTable, perKind: Float64Array): number {
+  const matsOfKind = table.sums.matsOfKind;
+  let sum = 0;
+  let magnitude = 0;
+  let exact = true;
+  for (let k = 0; k < perKind.length; k++) {
+    const value = perKind[k] as number;
+    const mats = matsOfKind[k] ?? 0;
+    if (!Number.isInteger(2 * value)) exact = false;
+    sum += mats * value;
+    magnitude += mats * Math.abs(value);
+  }
+  return exact && magnitude < EXACT_HALVES ? sum : sumMatByMat(table, perKind);
+}
+
+/** Σ over the mats of their kind's value, mat by mat in design order. */
+function sumMatByMat(table: BlockTable, perKind: Float64Array): number {
+  let sum = 0;
   for (let i = 0; i < table.count; i++) {
     const kind = table.kindOf[i] as number;
-    if (kind >= 0) count += (table.kinds[kind] as MatKind).geometry.bits;
+    if (kind >= 0) sum += perKind[kind] as number;
   }
-  return count;
+  return sum;
 }
 
 /** Filled for one mat at a time and read at once, so one record serves every mat. */
@@ -118,10 +143,10 @@ export function evaluateMatAt(
   mats.set(k, at, figures, c.unsensedBitlines, c.undrivenWordlines);
 }
 
-/** Mats in the table. (Each hot loop ends its function: see DEVELOPERS.md, "One hot loop per function".) */
+/** Mats in the table. */
 export function countMats(table: BlockTable): number {
   let count = 0;
-  for (let i = 0; i < table.count; i++) if (table.type[i] === MAT_CODE) count++;
+  for (const mats of table.sums.matsOfKind) count += mats;
   return count;
 }
 

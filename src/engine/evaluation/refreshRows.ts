@@ -38,20 +38,36 @@ function collectBands(table: BlockTable, facts: KindFacts, bands: Map<number, Ma
   let lastExtent = Number.NaN;
   let lastBand: Map<number, number> | null = null;
   let lastRows = 0;
+  // The band of the previous mat by its start and extent as read (m): equal readings give equal grid
+  // positions, so a mat in the same row as the one before needs no rounding.
+  let lastStart = Number.NaN;
+  let lastLength = Number.NaN;
+  let lastVertical = false;
   const { refreshed, vertical: verticalKind, wordlines: wordlinesOfKind } = facts;
+  const { type, kindOf, x, y, width, height } = table;
   const kindCount = refreshed.length;
   for (let i = 0; i < table.count; i++) {
-    if (table.type[i] !== MAT_CODE) continue;
-    const k = table.kindOf[i] as number;
+    if (type[i] !== MAT_CODE) continue;
+    const k = kindOf[i] as number;
     // Static cells need no refresh and add no rows.
     if (!(k >= 0 && k < kindCount) || refreshed[k] === 0) continue;
     const vertical = verticalKind[k] === 1;
-    const start = Math.round((vertical ? (table.y[i] as number) : (table.x[i] as number)) / BAND_GRID);
-    const extent = Math.round(
-      (vertical ? (table.height[i] as number) : (table.width[i] as number)) / BAND_GRID,
-    );
-    const key = start * 2 + (vertical ? 1 : 0);
+    const at = (vertical ? y[i] : x[i]) as number;
+    const length = (vertical ? height[i] : width[i]) as number;
     const wordlines = wordlinesOfKind[k] as number;
+    if (at === lastStart && length === lastLength && vertical === lastVertical && lastBand) {
+      if (wordlines > lastRows) {
+        lastRows = wordlines;
+        lastBand.set(lastExtent, wordlines);
+      }
+      continue;
+    }
+    const start = Math.round(at / BAND_GRID);
+    const extent = Math.round(length / BAND_GRID);
+    const key = start * 2 + (vertical ? 1 : 0);
+    lastStart = at;
+    lastLength = length;
+    lastVertical = vertical;
     if (key === lastKey && extent === lastExtent && lastBand) {
       if (wordlines > lastRows) {
         lastRows = wordlines;

@@ -31,9 +31,10 @@ export function refreshRowCycle(
 
 function refreshFigures(
   table: BlockTable,
-  mats: MatTable,
   design: Design,
   computedRowCycle: number,
+  /** Activation energy of every word line of every refreshed mat, once each (J): one window's refresh. */
+  energyOfAllRows: number,
 ): RefreshFigures {
   const o = design.operating;
   const rows = refreshRows(table);
@@ -42,12 +43,6 @@ function refreshFigures(
   const cycle = refreshRowCycle(design.process.rowCycleTimeOverride, computedRowCycle);
   const cycleTime =
     rows > 0 ? refreshCycleTime(rowsPerCommand, o.refreshRowsInParallel, cycle.rowCycleTime) : 0;
-  // Every word line of every refreshed mat is activated once per window.
-  let energyOfAllRows = 0;
-  for (let k = 0; k < mats.count; k++) {
-    const f = figuresAt(mats, k);
-    if (f.needsRefresh) energyOfAllRows += f.activationEnergy.total * f.wordlineCount;
-  }
   return {
     rows,
     interval,
@@ -108,9 +103,10 @@ function higher(current: number, value: number): number {
 
 /**
  * Smallest signal, margin and retention and largest word-line delay over all mats, first mat winning ties,
- * in one pass that reads the fields directly (a callback per figure would box every value it returns).
+ * in one pass over the runs of mats sharing figures (`runs`: the first mat of each run) that reads the
+ * fields directly (a callback per figure would box every value it returns).
  */
-function extremes(mats: MatTable): Extremes {
+function extremes(mats: MatTable, runs: Int32Array, runCount: number, sums: Float64Array): Extremes {
   const nan = Number.NaN;
   const e: Extremes = {
     worstSenseSignal: nan,
@@ -134,8 +130,8 @@ function extremes(mats: MatTable): Extremes {
     worstRowCycleTimeMatName: null,
     shortestWeakestRetentionMatId: null,
     shortestWeakestRetentionMatName: null,
-    standbyPower: 0,
-    heldBits: 0,
+    standbyPower: sums[STANDBY_POWER] as number,
+    heldBits: sums[HELD_BITS] as number,
   };
   // A sensed, refreshed mat with no margin to lose has no retention: then the shortest does not exist.
   let noMarginToLose = false;
@@ -145,14 +141,10 @@ function extremes(mats: MatTable): Extremes {
   let rcMat = -1;
   let weakestMat = -1;
   let wordlineMat = -1;
-  let previous: MatFigures | null = null;
-  for (let k = 0; k < mats.count; k++) {
+  // Mats of one kind share their figures: only the first mat of each run needs a look.
+  for (let r = 0; r < runCount; r++) {
+    const k = runs[r] as number;
     const f = figuresAt(mats, k);
-    e.standbyPower += f.standbyPower;
-    if (f.standbyPower > 0) e.heldBits += f.bits;
-    // Mats of one kind share their figures: the extremes of the others need no second look.
-    if (f === previous) continue;
-    previous = f;
     // Only a mat with a sensed bit line has a signal and a margin to report.
     if (f.usableBits > 0) {
       if (signalMat < 0 || f.senseSignal < e.worstSenseSignal) {
@@ -225,53 +217,79 @@ function matOverlapArea(table: BlockTable, overlaps: readonly PositionedOverlap[
   return area;
 }
 
+/** Slots of the sums over all mats (see {@link matSums}). */
+const BITS = 0;
+const USABLE_BITS = 1;
+const CELL_AREA = 2;
+const STANDBY_POWER = 3;
+const HELD_BITS = 4;
+const REFRESH_ENERGY = 5;
+const SUM_SLOTS = 6;
+
 /**
- * Bits, usable bits and usable cell area (m²) over all mats, into `out[0 … 2]`. (Each hot loop ends its
- * function: code after a loop V8 compiled while it ran has no type feedback and is thrown away.)
+ * What each figures object of a mat table adds to the sums for each of its mats, in the slots of
+ * {@link matSums} (computed once per figures object; each product is the one a per-mat sum would form):
+ * bits, usable bits, usable cell area (usable bits · cell footprint, m²), standby power (W), bits held
+ * by standby power, and the activation energy of all its word lines when it is refreshed (J).
  */
-function matSums(mats: MatTable, out: Float64Array): void {
+function addendsOf(figures: readonly MatFigures[]): Float64Array {
+  const addends = new Float64Array(SUM_SLOTS * figures.length);
+  for (let i = 0; i < figures.length; i++) {
+    const f = figures[i] as MatFigures;
+    const at = SUM_SLOTS * i;
+    addends[at + BITS] = f.bits;
+    addends[at + USABLE_BITS] = f.usableBits;
+    addends[at + CELL_AREA] = f.usableBits * f.cellFootprint;
+    addends[at + STANDBY_POWER] = f.standbyPower;
+    // Adding 0 for the others leaves each sum as skipping them would (the sums start at +0).
+    addends[at + HELD_BITS] = f.standbyPower > 0 ? f.bits : 0;
+    addends[at + REFRESH_ENERGY] = f.needsRefresh ? f.activationEnergy.total * f.wordlineCount : 0;
+  }
+  return addends;
+}
+
+/** Where each run of mats sharing one figures object starts; reused between calls. */
+let runStarts = new Int32Array(1024);
+
+/**
+ * The sums over all mats, mat by mat in design order (so each floating-point sum is the same to the
+ * bit), into `out` (slots above), and the first mat of each run of mats sharing figures into
+ * {@link runStarts} (returns how many runs). (Each hot loop ends its function: code after a loop V8
+ * compiled while it ran has no type feedback and is thrown away.)
+ */
+function matSums(mats: MatTable, addends: Float64Array, out: Float64Array): number {
+  if (runStarts.length < mats.count) runStarts = new Int32Array(mats.count);
+  const runs = runStarts;
+  const { figureIndex, figures } = mats;
   let bits = 0;
   let usableBits = 0;
   let cellArea = 0;
+  let standbyPower = 0;
+  let heldBits = 0;
+  let refreshEnergy = 0;
+  let runCount = 0;
+  let previous = -1;
   for (let k = 0; k < mats.count; k++) {
-    const f = figuresAt(mats, k);
-    bits += f.bits;
-    usableBits += f.usableBits;
-    cellArea += f.usableBits * f.cellFootprint;
+    const i = figureIndex[k] as number;
+    const at = SUM_SLOTS * i;
+    bits += addends[at + BITS] as number;
+    usableBits += addends[at + USABLE_BITS] as number;
+    cellArea += addends[at + CELL_AREA] as number;
+    standbyPower += addends[at + STANDBY_POWER] as number;
+    heldBits += addends[at + HELD_BITS] as number;
+    refreshEnergy += addends[at + REFRESH_ENERGY] as number;
+    if (i !== previous) {
+      if (previous < 0 || figures[i] !== figures[previous]) runs[runCount++] = k;
+      previous = i;
+    }
   }
-  out[0] = bits;
-  out[1] = usableBits;
-  out[2] = cellArea;
-}
-
-/**
- * Area placed (m², returned), per block type code (added into `areaByCode`) and the bounding box of every
- * block (`box`: left, top, right, bottom, m; ±Infinity without blocks).
- */
-function blockSums(table: BlockTable, areaByCode: Float64Array, box: Float64Array): number {
-  let placedArea = 0;
-  let minX = Infinity;
-  let minY = Infinity;
-  let maxX = -Infinity;
-  let maxY = -Infinity;
-  for (let i = 0; i < table.count; i++) {
-    const x = table.x[i] as number;
-    const y = table.y[i] as number;
-    const w = table.width[i] as number;
-    const h = table.height[i] as number;
-    placedArea += w * h;
-    const code = table.type[i] as number;
-    areaByCode[code] = (areaByCode[code] as number) + w * h;
-    minX = Math.min(minX, x);
-    minY = Math.min(minY, y);
-    maxX = Math.max(maxX, x + w);
-    maxY = Math.max(maxY, y + h);
-  }
-  box[0] = minX;
-  box[1] = minY;
-  box[2] = maxX;
-  box[3] = maxY;
-  return placedArea;
+  out[BITS] = bits;
+  out[USABLE_BITS] = usableBits;
+  out[CELL_AREA] = cellArea;
+  out[STANDBY_POWER] = standbyPower;
+  out[HELD_BITS] = heldBits;
+  out[REFRESH_ENERGY] = refreshEnergy;
+  return runCount;
 }
 
 /**
@@ -289,19 +307,17 @@ export function computeTotals(
   senseAmpCount: number,
   overlaps: readonly PositionedOverlap[],
 ): Totals {
-  const sums = new Float64Array(3);
-  matSums(mats, sums);
-  const bits = sums[0] as number;
-  const usableBits = sums[1] as number;
-  const cellArea = sums[2] as number;
-  // Summed per type code in a typed array: adding to a record field would box a new number each time.
-  const areaByCode = new Float64Array(BLOCK_TYPE_CODES.length);
-  const box = new Float64Array(4);
-  const placedArea = blockSums(table, areaByCode, box);
-  const minX = box[0] as number;
-  const minY = box[1] as number;
-  const maxX = box[2] as number;
-  const maxY = box[3] as number;
+  const sums = new Float64Array(SUM_SLOTS);
+  const runCount = matSums(mats, addendsOf(mats.figures), sums);
+  const bits = sums[BITS] as number;
+  const usableBits = sums[USABLE_BITS] as number;
+  const cellArea = sums[CELL_AREA] as number;
+  // Placed area per type and the bounding box were summed while the table was laid out.
+  const { placedArea, areaByCode, bounds } = table.sums;
+  const minX = bounds[0] as number;
+  const minY = bounds[1] as number;
+  const maxX = bounds[2] as number;
+  const maxY = bounds[3] as number;
   const sum = (type: BlockType) => areaByCode[BLOCK_TYPE_CODES.indexOf(type)] as number;
   const areaByType: Record<BlockType, number> = {
     mat: sum('mat'),
@@ -318,7 +334,7 @@ export function computeTotals(
   const F = design.process.featureSize;
   const overlapArea = matOverlapArea(table, overlaps);
   const cellAreaOnce = Math.max(0, cellArea - overlapArea);
-  const e = extremes(mats);
+  const e = extremes(mats, runStarts, runCount, sums);
   return {
     matCount: mats.count,
     bits,
@@ -336,6 +352,6 @@ export function computeTotals(
     offsetSigmaMultiplier: ctx.sigmaMultiplier,
     ...e,
     matOverlapArea: overlapArea,
-    refresh: refreshFigures(table, mats, design, e.worstRowCycleTime),
+    refresh: refreshFigures(table, design, e.worstRowCycleTime, sums[REFRESH_ENERGY] as number),
   };
 }

@@ -4,6 +4,7 @@ import type { CellDefinition } from '../../../src/model/cell';
 import type { Design } from '../../../src/model/design';
 import { matGeometry, type MatGeometry } from '../../../src/geometry/matGeometry';
 import type { Rect } from '../../../src/geometry/rect';
+import type { TableSums } from '../../../src/geometry/blockTable';
 
 /** Block types in the order of their codes in {@link BlockTable.type}. */
 export const BLOCK_TYPE_CODES: readonly BlockType[] = BLOCK_TYPES;
@@ -50,6 +51,8 @@ export interface BlockTable extends Boxes {
   readonly cells: ReadonlyMap<string, CellDefinition>;
   /** Kind index by "cell|cells per BL|cells per WL|axis". */
   readonly kindIndex: ReadonlyMap<string, number>;
+  /** The sums src's table gathers while it is written, here from a pass of their own. */
+  readonly sums: TableSums;
 }
 
 /** A table while its rows are written: its list of kinds and their index still grow. */
@@ -63,6 +66,7 @@ export function blockTable(design: Design): BlockTable {
   const cells = new Map(design.cells.map((c) => [c.id, c]));
   const table = emptyTable(design.blocks, design.process.featureSize, cells);
   writeRows(table, design.blocks);
+  sumRows(table);
   return table;
 }
 
@@ -155,6 +159,12 @@ class TableRows implements TableInProgress {
     readonly featureSize: number,
     readonly cells: ReadonlyMap<string, CellDefinition>,
     readonly kindIndex: Map<string, number>,
+    readonly sums: TableSums = {
+      placedArea: 0,
+      areaByCode: new Float64Array(BLOCK_TYPE_CODES.length),
+      bounds: Float64Array.of(Infinity, Infinity, -Infinity, -Infinity),
+      matsOfKind: [],
+    },
   ) {}
 }
 
@@ -165,6 +175,27 @@ class KindOfMat implements MatKind {
     readonly cell: CellDefinition,
     readonly geometry: MatGeometry,
   ) {}
+}
+
+/** The sums, as totals.ts's blockSums had them (Math.min/max over the rows, in design order). */
+function sumRows(table: TableInProgress): void {
+  const sums = table.sums;
+  for (let k = 0; k < table.kinds.length; k++) sums.matsOfKind.push(0);
+  for (let i = 0; i < table.count; i++) {
+    const x = table.x[i] as number;
+    const y = table.y[i] as number;
+    const w = table.width[i] as number;
+    const h = table.height[i] as number;
+    sums.placedArea += w * h;
+    const code = table.type[i] as number;
+    sums.areaByCode[code] = (sums.areaByCode[code] as number) + w * h;
+    sums.bounds[0] = Math.min(sums.bounds[0] as number, x);
+    sums.bounds[1] = Math.min(sums.bounds[1] as number, y);
+    sums.bounds[2] = Math.max(sums.bounds[2] as number, x + w);
+    sums.bounds[3] = Math.max(sums.bounds[3] as number, y + h);
+    const kind = table.kindOf[i] as number;
+    if (kind >= 0) sums.matsOfKind[kind] = (sums.matsOfKind[kind] as number) + 1;
+  }
 }
 
 function writeRows(table: TableInProgress, blocks: readonly Block[]): void {
