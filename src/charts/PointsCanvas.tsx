@@ -1,8 +1,11 @@
 import { useEffect, useRef } from 'react';
 import type { ScatterPoints } from './chartStyle';
-import { markerSprite } from './markerSprites';
+import { scratchSurface, spriteLookup, spriteMaker } from './markerSprites';
 import { devicePixels, pictureKey, plotClip, stampPoints } from './pointsRaster';
 import type { ScreenPositions } from './screenPositions';
+
+/** The page's marker sprites (drawn on one scratch canvas of the page). */
+const pageSprites = spriteMaker(scratchSurface(() => document.createElement('canvas')));
 
 /** What the canvas holds: its pixels and which points they show. */
 interface Drawn {
@@ -57,6 +60,12 @@ export function PointsCanvas(props: {
         : 0;
     if (canvas.width !== w) canvas.width = w;
     if (canvas.height !== h) canvas.height = h;
+    if (count === 0) {
+      // Nothing to draw (a sweep's first frame): clear rather than put a whole empty buffer.
+      context.clearRect(0, 0, w, h);
+      drawn.current = null;
+      return;
+    }
     const picture = data.picture;
     let image: ImageData;
     if (from === 0 && picture && picture.key === key && picture.ratio === ratio && picture.count === count) {
@@ -77,7 +86,7 @@ export function PointsCanvas(props: {
         screen,
         from,
         ratio,
-        (fill, shape, infeasible) => markerSprite(fill, shape, infeasible, ratio),
+        spriteLookup(pageSprites, ratio),
       );
     }
     context.putImageData(image, 0, 0);

@@ -11,19 +11,6 @@ import { stampSprite, type PixelBox, type Sprite } from './spriteRaster';
 /** The sprite of a marker by its fill, shape (index into MARKER_SHAPES) and feasibility. */
 export type SpriteLookup = (fill: string, shape: number, infeasible: boolean) => Sprite | undefined;
 
-/** A sprite with what it draws, for handing a set of them to a worker. */
-export interface MarkerSprite extends Sprite {
-  readonly fill: string;
-  readonly shape: number;
-  readonly infeasible: boolean;
-}
-
-/** Looks sprites of a set up by fill, shape and feasibility (for stampPoints). */
-export function spriteSetLookup(set: readonly MarkerSprite[]): SpriteLookup {
-  const byKey = new Map(set.map((s) => [`${s.fill}|${s.shape}|${s.infeasible}`, s]));
-  return (fill, shape, infeasible) => byKey.get(`${fill}|${shape}|${infeasible}`);
-}
-
 /** Device pixels of a chart `width` × `height` CSS px at pixel ratio `ratio`. */
 export function devicePixels(width: number, height: number, ratio: number) {
   return { w: Math.round(width * ratio), h: Math.round(height * ratio) };

@@ -6,8 +6,7 @@ import type { SweepChunk } from './sweepColumns';
 
 /**
  * What the page's chart shows and at what size, so the worker can build the chart's model and draw its
- * points for a finished sweep (the page then only puts the pixels on its canvas). The sprites are the
- * page's own (drawn by its canvas), so the worker's pixels are the ones the page would stamp.
+ * points for a finished sweep (the page then only puts the pixels on its canvas).
  */
 export interface SweepChartPlan {
   readonly xAxis: FigureKey;
@@ -19,15 +18,6 @@ export interface SweepChartPlan {
   readonly ratio: number;
   /** Series colour of each cell of the request, by cell index. */
   readonly colours: readonly string[];
-  /** Marker sprites by fill, shape and feasibility (charts/pointsRaster.ts MarkerSprite). */
-  readonly sprites: readonly {
-    readonly fill: string;
-    readonly shape: number;
-    readonly infeasible: boolean;
-    readonly width: number;
-    readonly height: number;
-    readonly data: Uint8ClampedArray;
-  }[];
 }
 
 /** The chart of a finished sweep as the worker built it for a plan (charts/pointsPicture.ts PointsPicture). */
@@ -77,5 +67,11 @@ export type SweepReport =
     }
   | { readonly type: 'failed'; readonly runId: number; readonly error: string };
 
-/** Points per progress message: small enough for a smooth bar, large enough to keep messages few. */
+/** Points the worker assesses between looks at the clock. */
 export const SWEEP_CHUNK = 500;
+/**
+ * The worker posts the points assessed so far at most this often (ms), and the rest at the end: often
+ * enough for the progress bar and the chart's updates (every 200 and 250 ms or more on the page), while
+ * a sweep of a tenth of a second costs the page two or three messages rather than one per chunk.
+ */
+export const SWEEP_POST_INTERVAL = 50;

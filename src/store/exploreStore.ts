@@ -113,7 +113,8 @@ const IDLE: SweepRun = {
  * 50 points already shown (the chart's model and its new points cost about 10 µs a point on a loaded
  * machine, so this keeps the chart's share of the main thread near a third), so a running sweep
  * re-renders the chart a few times a second rather than once per chunk and leaves the page most of its
- * time. The last points are shown at once when the sweep ends.
+ * time. The last points are shown at once when the sweep ends; a flush is skipped when, at the rate so
+ * far, the sweep is due to end within another interval (its chart would be replaced at once).
  */
 export const SWEEP_FLUSH_INTERVAL = 250;
 const FLUSH_MS_PER_POINT = 1 / 50;
@@ -154,6 +155,14 @@ export function createExploreStore(
       const count = run.table?.count ?? 0;
       if (run.shown === count && pendingDone === run.done) return;
       set({ run: { ...run, done: pendingDone, shown: count } });
+    };
+    // A partial chart the whole one would replace within one more interval is not worth drawing: at
+    // the rate so far, the sweep is due sooner than that (the done message then shows every point).
+    const flushUnlessDueSoon = () => {
+      const elapsed = performance.now() - startedAt;
+      const dueIn = pendingDone > 0 ? (elapsed * (pendingTotal - pendingDone)) / pendingDone : Infinity;
+      if (dueIn < flushInterval) flushTimer = null;
+      else flush();
     };
     return {
       view: 'floorplan',
@@ -205,7 +214,7 @@ export function createExploreStore(
               flush();
             } else {
               progressTimer ??= setTimeout(showProgress, SWEEP_PROGRESS_INTERVAL);
-              flushTimer ??= setTimeout(flush, flushInterval + run.shown * FLUSH_MS_PER_POINT);
+              flushTimer ??= setTimeout(flushUnlessDueSoon, flushInterval + run.shown * FLUSH_MS_PER_POINT);
             }
           } else if (report.type === 'done') {
             stopWorker();

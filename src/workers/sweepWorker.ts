@@ -1,20 +1,22 @@
 /**
  * The sweep's Web Worker: a thin shell around runSweepRange(), which is pure and tested in Node. It
- * assesses the points chunk by chunk and posts each chunk with the progress as typed-array columns whose
- * buffers it hands over (explore/sweepColumns.ts); the app cancels a sweep by terminating the worker.
+ * assesses the points chunk by chunk and posts those assessed so far with the progress (at most every
+ * SWEEP_POST_INTERVAL ms) as typed-array columns whose buffers it hands over (explore/sweepColumns.ts);
+ * the app cancels a sweep by terminating the worker.
  *
  * It keeps a copy of the points, and when the sweep ends it builds the chart's model for the chart the
  * page said it shows (the last 'plan' message) and draws that chart's points (charts/pointsPicture.ts),
  * so the page takes the model and the pixels over instead of a pass over every point on its main thread.
  */
 import { drawPointsPicture } from '../charts/pointsPicture';
-import { spriteSetLookup } from '../charts/pointsRaster';
+import { scratchSurface, spriteLookup, spriteMaker } from '../charts/markerSprites';
 import { ChartModelBuilder } from '../explore/chartModelBuilder';
 import { ProcessCache } from '../explore/partitionFigures';
-import { runSweepRange, sweepSize } from '../explore/sweep';
+import { runSweepRange, sweepSize, type SweepPoint } from '../explore/sweep';
 import { chunkBuffers, encodeSweepChunk, SweepTable, SweepTextTables } from '../explore/sweepColumns';
 import {
   SWEEP_CHUNK,
+  SWEEP_POST_INTERVAL,
   type SweepChart,
   type SweepChartPlan,
   type SweepCommand,
@@ -28,12 +30,21 @@ interface WorkerScope {
 
 const scope = self as unknown as WorkerScope;
 
+/**
+ * The worker's marker sprites, drawn as the page draws its own (charts/markerSprites.ts) on an
+ * OffscreenCanvas; null where the worker has none (the page then draws the points itself).
+ */
+const sprites =
+  typeof OffscreenCanvas === 'function'
+    ? spriteMaker(scratchSurface((side) => new OffscreenCanvas(side, side)))
+    : null;
+
 /** The run being swept and the last chart plan the page sent for it. */
 let current = -1;
 let plan: SweepChartPlan | null = null;
 
 /** The finished sweep's chart model and points picture for `plan`. */
-function chartOf(table: SweepTable, plan: SweepChartPlan): SweepChart {
+function chartOf(table: SweepTable, plan: SweepChartPlan, make: NonNullable<typeof sprites>): SweepChart {
   const builder = new ChartModelBuilder(table, plan.xAxis, plan.yAxis, plan.limits);
   builder.update();
   const model = builder.snapshot();
@@ -51,7 +62,7 @@ function chartOf(table: SweepTable, plan: SweepChartPlan): SweepChart {
       extent: model.extent,
     },
     plan,
-    spriteSetLookup(plan.sprites),
+    spriteLookup(make, plan.ratio),
   );
   return { xAxis: plan.xAxis, yAxis: plan.yAxis, limits: plan.limits, model: builder.state(), picture };
 }
@@ -88,18 +99,24 @@ scope.addEventListener('message', (event) => {
     const tables = new SweepTextTables();
     const table = new SweepTable();
     table.reserve(total);
+    let pending: SweepPoint[] = [];
+    let posted = started;
     for (let start = 0; start < total; start += SWEEP_CHUNK) {
-      const chunk = encodeSweepChunk(runSweepRange(request, start, start + SWEEP_CHUNK, cache), tables);
+      const points = runSweepRange(request, start, start + SWEEP_CHUNK, cache);
+      pending = pending.length === 0 ? points : pending.concat(points);
+      const done = Math.min(total, start + SWEEP_CHUNK);
+      const now = performance.now();
+      if (done < total && now - posted < SWEEP_POST_INTERVAL) continue;
+      posted = now;
+      const chunk = encodeSweepChunk(pending, tables);
+      pending = [];
       table.append(chunk);
-      scope.postMessage(
-        { type: 'progress', runId, done: Math.min(total, start + SWEEP_CHUNK), total, chunk },
-        chunkBuffers(chunk),
-      );
+      scope.postMessage({ type: 'progress', runId, done, total, chunk }, chunkBuffers(chunk));
     }
     const elapsed = (performance.now() - started) / 1000;
     afterQueuedMessages(() => {
       try {
-        const chart = plan ? chartOf(table, plan) : undefined;
+        const chart = plan && sprites ? chartOf(table, plan, sprites) : undefined;
         scope.postMessage({ type: 'done', runId, total, elapsed, chart }, chart ? chartBuffers(chart) : []);
       } catch (error) {
         // The chart is a convenience: without it the page draws the points itself.

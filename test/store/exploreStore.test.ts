@@ -143,7 +143,7 @@ describe('explorer store', () => {
   });
 
   it('while a sweep runs, gathers chunks and shows them a few times a second', () => {
-    vi.useFakeTimers();
+    vi.useFakeTimers({ toFake: ['setTimeout', 'clearTimeout', 'performance'] });
     const workers: StepWorker[] = [];
     const store = createExploreStore(() => {
       const w = new StepWorker();
@@ -154,16 +154,42 @@ describe('explorer store', () => {
     const w = workers[0];
     if (!w) throw new Error('no worker');
     w.step();
-    w.step();
     expect(store.getState().run.shown).toBe(0);
     vi.advanceTimersByTime(160);
-    expect(store.getState().run.shown).toBe(200);
-    expect(store.getState().run.done).toBe(200);
+    // A quarter of the points in 160 ms: the rest is due in about 480 ms, so this flush shows them.
+    expect(store.getState().run.shown).toBe(100);
+    expect(store.getState().run.done).toBe(100);
     w.step();
+    vi.advanceTimersByTime(10);
+    expect(store.getState().run.shown).toBe(100);
     while (w.step());
     // The last message flushes at once.
     expect(store.getState().run.status).toBe('done');
     expect(store.getState().run.shown).toBe(store.getState().run.total);
+  });
+
+  it('skips a flush when, at the rate so far, the sweep is due to end within another interval', () => {
+    vi.useFakeTimers({ toFake: ['setTimeout', 'clearTimeout', 'performance'] });
+    const workers: StepWorker[] = [];
+    const store = createExploreStore(() => {
+      const w = new StepWorker();
+      workers.push(w);
+      return w;
+    }, 150);
+    const request = smallRequest();
+    const total = sweepSize(request);
+    store.getState().startSweep(request, new SweepTable(), total);
+    const w = workers[0];
+    if (!w) throw new Error('no worker');
+    // All but the last chunk within the first 160 ms: the rest is due in well under 150 ms.
+    const chunks = Math.ceil(total / 100);
+    for (let c = 0; c < chunks - 1; c++) w.step();
+    vi.advanceTimersByTime(160);
+    expect(store.getState().run.shown).toBe(0);
+    w.step();
+    w.step();
+    expect(store.getState().run.status).toBe('done');
+    expect(store.getState().run.shown).toBe(total);
   });
 });
 

@@ -1,4 +1,3 @@
-import { markerSpriteSet } from '../../charts/markerSprites';
 import type { FeasibilityLimits } from '../../explore/chartData';
 import type { SweepRequest } from '../../explore/sweep';
 import type { SweepChartPlan } from '../../explore/sweepProtocol';
@@ -7,7 +6,7 @@ import { seriesColour } from './seriesStyle';
 
 /**
  * The chart the explorer shows for a sweep, for the sweep worker to draw when the sweep ends: axes,
- * limits, the chart's size and pixel ratio, the cells' series colours and this page's marker sprites.
+ * limits, the chart's size and pixel ratio, the cells' series colours.
  */
 export function sweepChartPlan(
   request: SweepRequest,
@@ -15,15 +14,12 @@ export function sweepChartPlan(
   limits: FeasibilityLimits,
   size: { readonly width: number; readonly height: number },
 ): SweepChartPlan {
-  const ratio = window.devicePixelRatio || 1;
-  const colours = request.cells.map((_, i) => seriesColour(i));
   return {
     ...axes,
     limits,
     width: size.width,
     height: size.height,
-    ratio,
-    colours,
-    sprites: markerSpriteSet(colours, request.processes.length, ratio),
+    ratio: window.devicePixelRatio || 1,
+    colours: request.cells.map((_, i) => seriesColour(i)),
   };
 }
