@@ -19,8 +19,8 @@ import { crossGroupMerge, crossGroupWalk, sameGroupMerge, sameGroupWalk } from '
  * same arithmetic), so rounding decides every pair as it does there. Boxes of one run never share
  * anything (each starts where the ones before it end), and two runs of one group whose vertical extents
  * share no more than the margin have no pair to keep: neither is walked. A 64 × 64 mat array (12,418
- * blocks, 195 runs) then costs some 37,000 box visits in 385 walks, where the grid bins every box and
- * tests some 82,000 pairs.
+ * blocks, 195 runs) then costs some 17,000 merge steps in 385 walks for its 16,400 pairs, where the grid
+ * bins every box and tests some 82,000 pairs.
  *
  * Rows come out in ascending order without sorting: runs hold consecutive positions, pairs of runs are
  * walked in order of (lower run, higher run), and a walk meets the boxes of each run in position order,
@@ -74,10 +74,14 @@ const RUN_PAIR_ALLOWANCE = 256;
 
 /** The runs in ascending order of their top edge (ties in run order). */
 function runsByTop(runs: BlockRuns): Int32Array {
-  const order = new Int32Array(runs.count);
-  for (let r = 0; r < order.length; r++) order[r] = r;
+  const order = runOrder(runs.count);
   sortingTops = runs.top;
-  order.sort(byTop);
+  return order.sort(byTop);
+}
+
+function runOrder(count: number): Int32Array {
+  const order = new Int32Array(count);
+  for (let r = 0; r < count; r++) order[r] = r;
   return order;
 }
 

@@ -29,9 +29,9 @@ export class BlockRuns {
 
 /**
  * The runs of a table, with each block's code: blocks of different codes never share a run. `margin`
- * (m, ≥ 0) decides which runs count as touching. Returns null when some box is not finite, or when the
- * blocks do not form long runs — more than `maxRuns` of them —, or a width is negative, so that a caller can take its general
- * path having paid for one pass only.
+ * (m, ≥ 0) decides which runs count as touching. Returns null when some box is not finite or has a
+ * negative width, or when the blocks do not form long runs (more than `maxRuns` of them), so that a
+ * caller can take its general path having paid for one pass only.
  */
 export function blockRuns(boxes: Boxes, code: Uint8Array, margin: number, maxRuns: number): BlockRuns | null {
   const n = boxes.count;
@@ -44,14 +44,15 @@ export function blockRuns(boxes: Boxes, code: Uint8Array, margin: number, maxRun
   const top = new Float64Array(count);
   const bottom = new Float64Array(count);
   const codes = new Uint8Array(count);
-  describeRuns(boxes, code, starts, top, bottom, codes);
+  if (!describeRuns(boxes, code, starts, top, bottom, codes)) return null;
   return new BlockRuns(count, starts.subarray(0, count + 1), top, bottom, codes, touching.subarray(0, count));
 }
 
 /**
  * Writes where each run starts into `starts`, marks runs whose blocks touch, and returns the number of
- * runs, or −1 when there would be more than `cap`, some coordinate is not finite or some width negative. (One hot loop per
- * function: see DEVELOPERS.md.)
+ * runs, or −1 when there would be more than `cap` or a right edge lies left of its box's left edge
+ * (a negative width, or NaN). One hot loop per function, with nothing after it: code after a loop that
+ * V8 compiled while it ran has no type feedback and throws the compiled loop away (DEVELOPERS.md).
  */
 function cutRuns(
   boxes: Boxes,
@@ -68,15 +69,11 @@ function cutRuns(
   let runHeight = NaN;
   let runCode = -1;
   let lastRight = 0;
-  // A sum of finite terms is finite (or overflows, which sends such boxes to the general path too), and
-  // x + width is finite exactly when both are: so one sum tells whether every coordinate is finite.
-  let sum = 0;
   for (let i = 0; i < n; i++) {
     const xi = x[i] as number;
     const yi = y[i] as number;
     const hi = height[i] as number;
     const right = xi + (width[i] as number);
-    // A negative width (or NaN) takes the general path: runs rely on right edges not before left ones.
     if (!(right >= xi)) return -1;
     if (yi !== runY || hi !== runHeight || code[i] !== runCode || !(xi >= lastRight)) {
       if (count === cap) return -1;
@@ -84,16 +81,20 @@ function cutRuns(
       runY = yi;
       runHeight = hi;
       runCode = code[i] as number;
-      sum += yi + hi;
     } else if (!(xi > lastRight + margin && xi - margin > lastRight)) {
       touching[count - 1] = 1;
     }
     lastRight = right;
-    sum += right;
   }
-  return Number.isFinite(sum) ? count : -1;
+  return count;
 }
 
+/**
+ * Each run's vertical extent and code; false when some coordinate of the run is not finite. Within a run
+ * every left edge lies at or right of the right edge before it, and every right edge at or right of its
+ * left edge, so the first block's left edge and the last one's right edge bound all the others: when those
+ * two are finite, so is every x and width of the run (and y and height, when the run's bottom is).
+ */
 function describeRuns(
   boxes: Boxes,
   code: Uint8Array,
@@ -101,12 +102,17 @@ function describeRuns(
   top: Float64Array,
   bottom: Float64Array,
   codes: Uint8Array,
-): void {
-  const { y, height } = boxes;
+): boolean {
+  const { x, y, width, height } = boxes;
   for (let r = 0; r < top.length; r++) {
     const i = starts[r] as number;
+    const last = (starts[r + 1] as number) - 1;
+    const runBottom = (y[i] as number) + (height[i] as number);
+    const runRight = (x[last] as number) + (width[last] as number);
+    if (!Number.isFinite((x[i] as number) + runRight + runBottom)) return false;
     top[r] = y[i] as number;
-    bottom[r] = (y[i] as number) + (height[i] as number);
+    bottom[r] = runBottom;
     codes[r] = code[i] as number;
   }
+  return true;
 }

@@ -30,6 +30,14 @@ export class PairSink {
     this.second = SCRATCH.second.grow(2 * this.count, this.count);
   }
 
+  /** Room for `more` pairs after those found so far. */
+  reserve(more: number): void {
+    const needed = this.count + more;
+    if (needed <= this.first.length) return;
+    this.first = SCRATCH.first.grow(Math.max(needed, 2 * this.count), this.count);
+    this.second = SCRATCH.second.grow(Math.max(needed, 2 * this.count), this.count);
+  }
+
   add(a: number, b: number): void {
     if (this.count === this.first.length) this.grow();
     this.first[this.count] = a;

@@ -9,10 +9,11 @@ import type { PairSink } from './orderedPairs';
 
 /**
  * {@link crossGroupWalk} for two runs whose blocks clear their neighbours in the run (not touching): an
- * ordinary merge of two sorted lists of disjoint intervals, advancing whichever box ends first. When box a
- * ends no later than box b, no box after b can meet a: the next one starts beyond b's right edge by more
- * than the margin both ways the box test counts it (that is what not touching means), so beyond a's as
- * well; likewise the other way round. Each step tests one pair, and the run pair costs |A| + |B| steps.
+ * ordinary merge of two sorted lists of disjoint intervals, advancing whichever box ends first (both when they end
+ * together). When box a ends no later than box b, no box after b can meet a: the next one starts beyond
+ * b's right edge by more than the margin both ways the box test counts it (that is what not touching
+ * means), so beyond a's as well; likewise the other way round. Each step tests one pair, and a pair of
+ * runs costs fewer than |A| + |B| steps.
  */
 export function crossGroupMerge(
   boxes: Boxes,
@@ -28,8 +29,10 @@ export function crossGroupMerge(
 ): void {
   const { x, width } = boxes;
   const degree = sink.degree;
-  let first = sink.first;
-  let second = sink.second;
+  // A merge keeps at most one pair per step, and takes fewer than |A| + |B| steps.
+  sink.reserve(a1 - a0 + b1 - b0);
+  const first = sink.first;
+  const second = sink.second;
   let count = sink.count;
   let a = a0;
   let b = b0;
@@ -42,12 +45,6 @@ export function crossGroupMerge(
       (aMeetsB && xa - margin <= rb && xb <= ra + margin) ||
       (bMeetsA && xb - margin <= ra && xa <= rb + margin)
     ) {
-      if (count === first.length) {
-        sink.count = count;
-        sink.grow();
-        first = sink.first;
-        second = sink.second;
-      }
       first[count] = a;
       second[count] = b;
       count++;
@@ -55,11 +52,14 @@ export function crossGroupMerge(
       degree[b] = (degree[b] as number) + 1;
       if (sharedY && (ra < rb ? ra : rb) - (xa > xb ? xa : xb) > margin) sink.share(a, b);
     }
+    // Both advance when they end together (aligned tiles): each side's next box clears the other.
+    const bEndsFirst = rb <= ra;
     if (ra <= rb) {
       if (++a === a1) break;
       xa = x[a] as number;
       ra = xa + (width[a] as number);
-    } else {
+    }
+    if (bEndsFirst) {
       if (++b === b1) break;
       xb = x[b] as number;
       rb = xb + (width[b] as number);
@@ -93,11 +93,14 @@ export function sameGroupMerge(
       degree[b] = (degree[b] as number) + 1;
       sink.share(a, b);
     }
+    // Both advance when they end together (aligned tiles): each side's next box clears the other.
+    const bEndsFirst = rb <= ra;
     if (ra <= rb) {
       if (++a === a1) break;
       xa = x[a] as number;
       ra = xa + (width[a] as number);
-    } else {
+    }
+    if (bEndsFirst) {
       if (++b === b1) break;
       xb = x[b] as number;
       rb = xb + (width[b] as number);
