@@ -13,7 +13,7 @@ export class ServingForest {
     /** Per part, per table position: the position above it in its tree, itself for a root, −1 if unlisted. */
     private readonly up: readonly [Int32Array, Int32Array],
     /** Per part: how many trees, one per component. */
-    readonly trees: readonly [number, number],
+    readonly trees: Int32Array,
   ) {}
 
   /** The root of position `i`'s tree in `part` (−1 for a position no mat lists and that is no mat). */
@@ -29,63 +29,74 @@ export class ServingForest {
   static of(mats: MatTable, tableCount: number): ServingForest {
     const up0 = new Int32Array(tableCount).fill(-1);
     const up1 = new Int32Array(tableCount).fill(-1);
-    const { position, servingOffsets, servingPositions } = mats;
-    let trees0 = 0;
-    let trees1 = 0;
-    for (let k = 0; k < mats.count; k++) {
-      const m = position[k] as number;
-      const a = servingOffsets[3 * k] as number;
-      const b = servingOffsets[3 * k + 1] as number;
-      const c = servingOffsets[3 * k + 2] as number;
-      let root = m;
-      up0[m] = m;
-      trees0++;
-      for (let p = a; p < b; p++) {
-        const s = servingPositions[p] as number;
-        let r = up0[s] as number;
-        if (r === root) continue;
-        if (r < 0) {
-          up0[s] = root;
-          continue;
-        }
-        // Path halving: every other step points past its parent.
-        while ((up0[r] as number) !== r) {
-          const g = up0[up0[r] as number] as number;
-          up0[r] = g;
-          r = g;
-        }
-        if (r !== root) {
-          up0[root] = r;
-          root = r;
-          trees0--;
-        }
-        up0[s] = r;
+    const trees = new Int32Array(2);
+    joinServingLists(mats, up0, up1, trees);
+    return new ServingForest([up0, up1], trees);
+  }
+}
+
+/**
+ * The pass of {@link ServingForest.of}, in a function of its own that ends with its loop: V8 compiles
+ * the loop while it runs, and code after it would have no type feedback yet and be thrown away.
+ */
+function joinServingLists(mats: MatTable, up0: Int32Array, up1: Int32Array, trees: Int32Array): void {
+  const { position, servingOffsets, servingPositions } = mats;
+  let trees0 = 0;
+  let trees1 = 0;
+  for (let k = 0; k < mats.count; k++) {
+    const m = position[k] as number;
+    const a = servingOffsets[3 * k] as number;
+    const b = servingOffsets[3 * k + 1] as number;
+    const c = servingOffsets[3 * k + 2] as number;
+    let root = m;
+    up0[m] = m;
+    trees0++;
+    for (let p = a; p < b; p++) {
+      const s = servingPositions[p] as number;
+      let r = up0[s] as number;
+      if (r === root) continue;
+      if (r < 0) {
+        up0[s] = root;
+        continue;
       }
-      root = m;
-      up1[m] = m;
-      trees1++;
-      for (let p = b; p < c; p++) {
-        const s = servingPositions[p] as number;
-        let r = up1[s] as number;
-        if (r === root) continue;
-        if (r < 0) {
-          up1[s] = root;
-          continue;
-        }
-        while ((up1[r] as number) !== r) {
-          const g = up1[up1[r] as number] as number;
-          up1[r] = g;
-          r = g;
-        }
-        if (r !== root) {
-          up1[root] = r;
-          root = r;
-          trees1--;
-        }
-        up1[s] = r;
+      // Path halving: every other step points past its parent.
+      while ((up0[r] as number) !== r) {
+        const g = up0[up0[r] as number] as number;
+        up0[r] = g;
+        r = g;
       }
+      if (r !== root) {
+        up0[root] = r;
+        root = r;
+        trees0--;
+      }
+      up0[s] = r;
     }
-    return new ServingForest([up0, up1], [trees0, trees1]);
+    trees[0] = trees0;
+    root = m;
+    up1[m] = m;
+    trees1++;
+    for (let p = b; p < c; p++) {
+      const s = servingPositions[p] as number;
+      let r = up1[s] as number;
+      if (r === root) continue;
+      if (r < 0) {
+        up1[s] = root;
+        continue;
+      }
+      while ((up1[r] as number) !== r) {
+        const g = up1[up1[r] as number] as number;
+        up1[r] = g;
+        r = g;
+      }
+      if (r !== root) {
+        up1[root] = r;
+        root = r;
+        trees1--;
+      }
+      up1[s] = r;
+    }
+    trees[1] = trees1;
   }
 }
 
