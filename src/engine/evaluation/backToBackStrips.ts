@@ -1,12 +1,12 @@
 import {
   kindAt,
   SENSE_AMP_STRIP_CODE,
-  type MatKind,
   WORDLINE_DRIVER_STRIP_CODE,
   type BlockTable,
 } from '../../geometry/blockTable';
 import { ABUTMENT_TOLERANCE } from '../../geometry/rect';
 import { facingPairs, PairList } from './facingStrips';
+import { ALONG_HORIZONTAL_EDGE, ALONG_VERTICAL_EDGE, ServingForest, UNSERVING } from './servingForest';
 import { BLOCK_TYPE_LABEL } from '../../model/blockBasics';
 import type { MatTable } from './matTable';
 import type { ServedMats } from './reachComponents';
@@ -25,8 +25,12 @@ const NAMED_PAIRS = 3;
  * Found by sorting: each strip's far long edge is looked up among the near long edges of the others, so a
  * die of tens of thousands of strips is one native sort of numbers, not a comparison of every pair.
  */
-export function backToBackStrips(table: BlockTable, mats: MatTable): BackToBackState {
-  const facing = servedEdgeOrientation(table, mats);
+export function backToBackStrips(
+  table: BlockTable,
+  mats: MatTable,
+  /** Each block's orientation, when the caller has the serving forest already. */
+  facing: Uint8Array = ServingForest.of(mats, table).facing,
+): BackToBackState {
   const strips = ServingStrips.of(table, facing);
   const pairs = [
     pairsOfType(table, strips.senseAmps, strips.senseAmpsLying),
@@ -178,37 +182,6 @@ function orientationOf(
   const vertical = kindAt(table, mats.position[k] as number).block.bitlineAxis === 'vertical';
   if (k1 >= k0) return vertical ? ALONG_VERTICAL_EDGE : ALONG_HORIZONTAL_EDGE;
   return vertical ? ALONG_HORIZONTAL_EDGE : ALONG_VERTICAL_EDGE;
-}
-
-const UNSERVING = 0;
-const ALONG_HORIZONTAL_EDGE = 1;
-const ALONG_VERTICAL_EDGE = 2;
-
-/**
- * For each block, the direction of the mat edge it serves: a strip along a top or bottom edge lies
- * across, one along a left or right edge stands. Strips serving no mat are left out: what lines they
- * would serve is unknown. A short piece of a strip may be taller than wide and still lie across.
- */
-function servedEdgeOrientation(table: BlockTable, mats: MatTable): Uint8Array {
-  const facing = new Uint8Array(table.count);
-  // Whether each kind's bit lines run vertically, read once per kind rather than once per mat.
-  const { kinds, kindOf } = table;
-  const vertical = new Uint8Array(kinds.length);
-  for (let n = 0; n < kinds.length; n++)
-    vertical[n] = (kinds[n] as MatKind).block.bitlineAxis === 'vertical' ? 1 : 0;
-  const { position, servingOffsets, servingPositions } = mats;
-  for (let k = 0; k < mats.count; k++) {
-    const kind = kindOf[position[k] as number] as number;
-    if (kind < 0) throw new Error(`block ${table.blocks[position[k] as number]?.id ?? k} is not a mat`);
-    const senseAmpFacing = vertical[kind] === 1 ? ALONG_HORIZONTAL_EDGE : ALONG_VERTICAL_EDGE;
-    const driverFacing = vertical[kind] === 1 ? ALONG_VERTICAL_EDGE : ALONG_HORIZONTAL_EDGE;
-    const a = servingOffsets[3 * k] as number;
-    const b = servingOffsets[3 * k + 1] as number;
-    const c = servingOffsets[3 * k + 2] as number;
-    for (let p = a; p < b; p++) facing[servingPositions[p] as number] = senseAmpFacing;
-    for (let p = b; p < c; p++) facing[servingPositions[p] as number] = driverFacing;
-  }
-  return facing;
 }
 
 /**

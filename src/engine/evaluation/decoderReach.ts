@@ -361,8 +361,12 @@ function unreachedInForest(
  * Warnings for mats cut off from the decoders: word lines whose driver strips lead to no row decoder,
  * and bit lines whose sense-amplifier strips (the column path) lead to no column decoder.
  */
-export function decoderReach(table: BlockTable, mats: MatTable, matIndexAt: Int32Array): DecoderReachState {
-  const forest = ServingForest.of(mats, table.count);
+export function decoderReach(
+  table: BlockTable,
+  mats: MatTable,
+  matIndexAt: Int32Array,
+  forest: ServingForest = ServingForest.of(mats, table),
+): DecoderReachState {
   const rows = REACH_CHECKS[0] as ReachCheck;
   const columns = REACH_CHECKS[1] as ReachCheck;
   const rowEdges = DecoderEdges.of(table, rows.decoderCode);
@@ -401,7 +405,7 @@ export function decoderReachAfterEdit(
     const full = () => {
       const edges = DecoderEdges.of(table, check.decoderCode);
       const seed = reachSeeds(table, edit.matIndexAt, edges, check.decoderCode, check.stripCode);
-      forest ??= ServingForest.of(mats, table.count);
+      forest ??= ServingForest.of(mats, table);
       return reachResult(mats, edit.matIndexAt, check, edges, seed, forest);
     };
     if (edit.changed.some((i) => table.type[i] === check.decoderCode)) return full();

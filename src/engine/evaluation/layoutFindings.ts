@@ -10,6 +10,7 @@ import {
 import type { MatTable } from './matTable';
 import type { LayoutEdit } from './reachComponents';
 import type { Finding } from './report';
+import { ServingForest } from './servingForest';
 
 /**
  * What the layout checks leave with a report (see reportState.ts): the components the decoders reach
@@ -31,8 +32,9 @@ export function layoutFindings(table: BlockTable, mats: MatTable): Finding[] {
 
 /** The layout checks of the whole design, with what they leave for the next edit. */
 export function layoutState(table: BlockTable, mats: MatTable, matIndexAt?: Int32Array): LayoutState {
-  const reach = decoderReach(table, mats, matIndexAt ?? matIndexByPosition(mats, table.count));
-  const backToBack = backToBackStrips(table, mats);
+  const forest = ServingForest.of(mats, table);
+  const reach = decoderReach(table, mats, matIndexAt ?? matIndexByPosition(mats, table.count), forest);
+  const backToBack = backToBackStrips(table, mats, forest.facing);
   return { reach, backToBack, findings: findingsOf(mats, reach, backToBack) };
 }
 

@@ -1,5 +1,13 @@
+import type { BlockTable, MatKind } from '../../geometry/blockTable';
 import type { MatTable } from './matTable';
 import type { ServingPart } from './reachComponents';
+
+/** A block no mat lists, so what lines it would serve is unknown (an orientation code of {@link ServingForest.facing}). */
+export const UNSERVING = 0;
+/** A strip along a mat's top or bottom edge: it lies across. */
+export const ALONG_HORIZONTAL_EDGE = 1;
+/** A strip along a mat's left or right edge: it stands. */
+export const ALONG_VERTICAL_EDGE = 2;
 
 /**
  * The mats and the strips their serving lists name, joined into trees (union–find, per table position)
@@ -14,6 +22,13 @@ export class ServingForest {
     private readonly up: readonly [Int32Array, Int32Array],
     /** Per part: how many trees, one per component. */
     readonly trees: Int32Array,
+    /**
+     * Per table position, the direction of the mat edge it serves (an orientation code above): that of
+     * the last mat in report order listing it, its driver part after its sense-amplifier part. A short
+     * piece of a strip may be taller than wide and still lie across. The back-to-back check reads it; it
+     * is found here because the pass over the serving lists is the cost.
+     */
+    readonly facing: Uint8Array,
   ) {}
 
   /** The root of position `i`'s tree in `part` (−1 for a position no mat lists and that is no mat). */
@@ -26,12 +41,18 @@ export class ServingForest {
    * tree (a strip seen before brings its tree along). In a tiled array a strip is met again from the next
    * mat of its row or column, so almost every step is one comparison.
    */
-  static of(mats: MatTable, tableCount: number): ServingForest {
-    const up0 = new Int32Array(tableCount).fill(-1);
-    const up1 = new Int32Array(tableCount).fill(-1);
+  static of(mats: MatTable, table: BlockTable): ServingForest {
+    const up0 = new Int32Array(table.count).fill(-1);
+    const up1 = new Int32Array(table.count).fill(-1);
     const trees = new Int32Array(2);
-    joinServingLists(mats, up0, up1, trees);
-    return new ServingForest([up0, up1], trees);
+    const facing = new Uint8Array(table.count);
+    // Whether each kind's bit lines run vertically, read once per kind rather than once per mat.
+    const { kinds } = table;
+    const vertical = new Uint8Array(kinds.length);
+    for (let n = 0; n < kinds.length; n++)
+      vertical[n] = (kinds[n] as MatKind).block.bitlineAxis === 'vertical' ? 1 : 0;
+    joinServingLists(mats, table, vertical, up0, up1, trees, facing);
+    return new ServingForest([up0, up1], trees, facing);
   }
 }
 
@@ -39,12 +60,25 @@ export class ServingForest {
  * The pass of {@link ServingForest.of}, in a function of its own that ends with its loop: V8 compiles
  * the loop while it runs, and code after it would have no type feedback yet and be thrown away.
  */
-function joinServingLists(mats: MatTable, up0: Int32Array, up1: Int32Array, trees: Int32Array): void {
+function joinServingLists(
+  mats: MatTable,
+  table: BlockTable,
+  vertical: Uint8Array,
+  up0: Int32Array,
+  up1: Int32Array,
+  trees: Int32Array,
+  facing: Uint8Array,
+): void {
   const { position, servingOffsets, servingPositions } = mats;
+  const { kindOf } = table;
   let trees0 = 0;
   let trees1 = 0;
   for (let k = 0; k < mats.count; k++) {
     const m = position[k] as number;
+    const kind = kindOf[m] as number;
+    if (kind < 0) notAMat(table, m);
+    const senseAmpFacing = vertical[kind] === 1 ? ALONG_HORIZONTAL_EDGE : ALONG_VERTICAL_EDGE;
+    const driverFacing = vertical[kind] === 1 ? ALONG_VERTICAL_EDGE : ALONG_HORIZONTAL_EDGE;
     const a = servingOffsets[3 * k] as number;
     const b = servingOffsets[3 * k + 1] as number;
     const c = servingOffsets[3 * k + 2] as number;
@@ -53,6 +87,7 @@ function joinServingLists(mats: MatTable, up0: Int32Array, up1: Int32Array, tree
     trees0++;
     for (let p = a; p < b; p++) {
       const s = servingPositions[p] as number;
+      facing[s] = senseAmpFacing;
       let r = up0[s] as number;
       if (r === root) continue;
       if (r < 0) {
@@ -78,6 +113,7 @@ function joinServingLists(mats: MatTable, up0: Int32Array, up1: Int32Array, tree
     trees1++;
     for (let p = b; p < c; p++) {
       const s = servingPositions[p] as number;
+      facing[s] = driverFacing;
       let r = up1[s] as number;
       if (r === root) continue;
       if (r < 0) {
@@ -109,4 +145,8 @@ function rootIn(up: Int32Array, i: number): number {
     r = g;
   }
   return r;
+}
+
+function notAMat(table: BlockTable, i: number): never {
+  throw new Error(`block ${table.blocks[i]?.id ?? i} is not a mat`);
 }
