@@ -185,7 +185,10 @@ function figuresOf(
   return figures;
 }
 
-/** Each mat's figures from its connections; a run of mats with one key looks it up once. */
+/**
+ * Each mat's figures from its connections: a run of mats that leave no line unserved and share a kind
+ * and sense-amplifier ends gets one figures object at once; any other mat its own lookup.
+ */
 function assignFigures(
   table: BlockTable,
   lines: ServedLines,
@@ -193,38 +196,40 @@ function assignFigures(
   builder: MatTableBuilder,
   figuresByKind: Map<number | string, MatFigures>,
 ): void {
-  const kindOf = table.kindOf;
-  const { position, unsensedBitlines, undrivenWordlines, senseAmpEnds, unpartneredBitlines } = lines;
-  const c = connections;
-  let lastKey = -1;
-  let lastFigures: MatFigures | null = null;
-  for (let k = 0; k < lines.count; k++) {
-    const at = position[k] as number;
-    const kindIndex = kindOf[at] as number;
-    const lost = unpartneredBitlines[k] as number;
-    const unsensed = unsensedBitlines[k] as number;
-    const undriven = undrivenWordlines[k] as number;
-    const ends = senseAmpEnds[k] as number;
-    if (lost === 0 && unsensed === 0 && undriven === 0) {
-      const key = kindIndex * 3 + ends;
-      if (key !== lastKey || lastFigures === null) {
-        c.unsensedBitlines = unsensed;
-        c.undrivenWordlines = undriven;
-        c.senseAmpEnds = ends;
-        c.unpartneredBitlines = lost;
-        lastFigures = figuresOf(table, at, c, ctx, figuresByKind, key);
-        lastKey = key;
-      }
-      builder.set(k, at, lastFigures, unsensed, undriven);
-      continue;
-    }
-    c.unsensedBitlines = unsensed;
-    c.undrivenWordlines = undriven;
-    c.senseAmpEnds = ends;
-    c.unpartneredBitlines = lost;
-    const key = `${kindIndex}|${ends}|${lost}|${unsensed}|${undriven}`;
-    builder.set(k, at, figuresOf(table, at, c, ctx, figuresByKind, key), unsensed, undriven);
+  const { position, servedKey } = lines;
+  builder.setLines(lines.count, position, lines.unsensedBitlines, lines.undrivenWordlines);
+  let runStart = 0;
+  let runKey = lines.count > 0 ? (servedKey[0] as number) : -1;
+  for (let k = 1; k <= lines.count; k++) {
+    const key = k < lines.count ? (servedKey[k] as number) : -2;
+    if (key === runKey && key >= 0) continue;
+    // The run runStart … k − 1 ends here (a mat with unserved lines is a run of its own).
+    builder.setFigures(runStart, k, figuresOfMat(table, lines, runStart, ctx, figuresByKind));
+    runStart = k;
+    runKey = key;
   }
+}
+
+/** The figures of mat k of `lines`, found or computed by its connection key (see evaluateMatAt). */
+function figuresOfMat(
+  table: BlockTable,
+  lines: ServedLines,
+  k: number,
+  ctx: DesignContext,
+  figuresByKind: Map<number | string, MatFigures>,
+): MatFigures {
+  const at = lines.position[k] as number;
+  const c = connections;
+  c.unsensedBitlines = lines.unsensedBitlines[k] as number;
+  c.undrivenWordlines = lines.undrivenWordlines[k] as number;
+  c.senseAmpEnds = lines.senseAmpEnds[k] as number;
+  c.unpartneredBitlines = lines.unpartneredBitlines[k] as number;
+  const served = lines.servedKey[k] as number;
+  const key =
+    served >= 0
+      ? served
+      : `${table.kindOf[at] as number}|${c.senseAmpEnds}|${c.unpartneredBitlines}|${c.unsensedBitlines}|${c.undrivenWordlines}`;
+  return figuresOf(table, at, c, ctx, figuresByKind, key);
 }
 
 /**

@@ -169,6 +169,29 @@ export class MatTableBuilder {
     this.undriven[k] = undriven;
   }
 
+  /**
+   * Records the design position and unserved lines of mats 0 … count − 1 at once (columns of at least
+   * `count`); their figures follow with {@link setFigures}.
+   */
+  setLines(count: number, position: Int32Array, unsensed: Float64Array, undriven: Float64Array): void {
+    this.position.set(position.subarray(0, count));
+    this.unsensed.set(unsensed.subarray(0, count));
+    this.undriven.set(undriven.subarray(0, count));
+  }
+
+  /** Gives mats from … to − 1 (whose lines are recorded) these figures, as {@link set} would one by one. */
+  setFigures(from: number, to: number, figures: MatFigures): void {
+    let index = figures === this.lastFigures ? this.lastIndex : this.figureIndexOf.get(figures);
+    if (index === undefined) {
+      index = this.figures.length;
+      this.figures.push(figures);
+      this.figureIndexOf.set(figures, index);
+    }
+    this.lastFigures = figures;
+    this.lastIndex = index;
+    this.figureIndex.fill(index, from, to);
+  }
+
   /** Records mat k's serving strips: the first `senseAmpCount` of `senseAmps`, then the first `driverCount` of `drivers` (design positions). */
   setServing(
     k: number,

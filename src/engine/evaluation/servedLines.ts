@@ -84,6 +84,11 @@ export class ServedLines {
   undrivenWordlines = new Float64Array(0);
   senseAmpEnds = new Uint8Array(0);
   unpartneredBitlines = new Float64Array(0);
+  /**
+   * kind · 3 + sense-amplifier ends when the mat leaves no line unserved (evaluate's number key for its
+   * figures), else −1.
+   */
+  servedKey = new Int32Array(0);
 
   /** Room for `count` mats (contents stale). */
   reset(count: number): void {
@@ -94,6 +99,7 @@ export class ServedLines {
     this.undrivenWordlines = new Float64Array(count);
     this.senseAmpEnds = new Uint8Array(count);
     this.unpartneredBitlines = new Float64Array(count);
+    this.servedKey = new Int32Array(count);
   }
 }
 
@@ -171,6 +177,10 @@ function connectOpenMat(
   out.undrivenWordlines[k] = c.undrivenWordlines;
   out.senseAmpEnds[k] = c.senseAmpEnds;
   out.unpartneredBitlines[k] = c.unpartneredBitlines;
+  out.servedKey[k] =
+    c.unsensedBitlines === 0 && c.undrivenWordlines === 0 && c.unpartneredBitlines === 0
+      ? 3 * (table.kindOf[at] as number) + c.senseAmpEnds
+      : -1;
 }
 
 /**
@@ -187,10 +197,11 @@ function connectEachMat(
   out: ServedLines,
 ): void {
   const tol = ABUTMENT_TOLERANCE;
+  const negativeTol = -ABUTMENT_TOLERANCE;
   const { x, y, width, height, type, kindOf } = table;
   const { start, end, list } = neighbours;
   const { vertical, open, senseEdge, driveEdge, senseEdgeReach, driveEdgeReach } = kinds;
-  const { position, unsensedBitlines, undrivenWordlines, senseAmpEnds, unpartneredBitlines } = out;
+  const { position, unsensedBitlines, undrivenWordlines, senseAmpEnds, unpartneredBitlines, servedKey } = out;
   const scratch = SCRATCH;
   let senseSpans = scratch.senseSpans;
   let driveSpans = scratch.driveSpans;
@@ -218,6 +229,14 @@ function connectEachMat(
     let driverCount = 0;
     let first = 0;
     let second = 0;
+    // For the covered-whole test below: whether some span starts beyond the tolerance, and whether one
+    // reaches within the tolerance of the edge's end.
+    let senseStartsLate = false;
+    let senseReaches = false;
+    let driveStartsLate = false;
+    let driveReaches = false;
+    const senseReach = senseEdgeReach[kind] as number;
+    const driveReach = driveEdgeReach[kind] as number;
     const last = end[at] as number;
     for (let p = start[at] as number; p < last; p++) {
       const i = list[p] as number;
@@ -236,8 +255,8 @@ function connectEachMat(
         // Top (its bottom on our top), then bottom; the stretch runs along x.
         const dFirst = nb - ty;
         const dSecond = ny - tb;
-        meetsFirst = !(dFirst > tol || dFirst < -tol);
-        meetsSecond = !(dSecond > tol || dSecond < -tol);
+        meetsFirst = !(dFirst > tol || dFirst < negativeTol);
+        meetsSecond = !(dSecond > tol || dSecond < negativeTol);
         if (!meetsFirst && !meetsSecond) continue;
         from = nx > tx ? nx - tx : 0;
         to = (nr < tr ? nr : tr) - tx;
@@ -245,14 +264,16 @@ function connectEachMat(
         // Left (its right on our left), then right; the stretch runs along y.
         const dFirst = nr - tx;
         const dSecond = nx - tr;
-        meetsFirst = !(dFirst > tol || dFirst < -tol);
-        meetsSecond = !(dSecond > tol || dSecond < -tol);
+        meetsFirst = !(dFirst > tol || dFirst < negativeTol);
+        meetsSecond = !(dSecond > tol || dSecond < negativeTol);
         if (!meetsFirst && !meetsSecond) continue;
         from = ny > ty ? ny - ty : 0;
         to = (nb < tb ? nb : tb) - ty;
       }
       if (!(to - from > tol)) continue;
       if (sense) {
+        if (from > tol) senseStartsLate = true;
+        if (to >= senseReach) senseReaches = true;
         if (meetsFirst) {
           if (2 * senseCount + 2 > senseSpans.length) senseSpans = scratch.growSenseSpans(senseCount);
           senseSpans[2 * senseCount] = from;
@@ -272,6 +293,8 @@ function connectEachMat(
           senseAmps[senseAmpCount++] = i;
         }
       } else {
+        if (from > tol) driveStartsLate = true;
+        if (to >= driveReach) driveReaches = true;
         if (meetsFirst) {
           if (2 * driveCount + 2 > driveSpans.length) driveSpans = scratch.growDriveSpans(driveCount);
           driveSpans[2 * driveCount] = from;
@@ -292,17 +315,11 @@ function connectEachMat(
     }
     serving.setServing(k, senseAmps, senseAmpCount, drivers, driverCount);
     // An edge whose spans all start within the tolerance of its start and one of which reaches within the
-    // tolerance of its end is covered as one part: uncoveredLineCount would find no gap (proof in
-    // servedLines.test.ts). Otherwise it counts.
-    let whole = senseCount > 0;
-    let reaches = false;
-    const senseReach = senseEdgeReach[kind] as number;
-    for (let c = 0; c < senseCount && whole; c++) {
-      if ((senseSpans[2 * c] as number) > tol) whole = false;
-      else if ((senseSpans[2 * c + 1] as number) >= senseReach) reaches = true;
-    }
-    unsensedBitlines[k] =
-      whole && reaches
+    // tolerance of its end is covered as one part: uncoveredLineCount would find no gap (sorted, every
+    // span merges into the first part, which starts at most a tolerance in and ends at most one short).
+    // Otherwise it counts.
+    const unsensed =
+      senseCount > 0 && !senseStartsLate && senseReaches
         ? 0
         : uncoveredLineCount(
             senseSpans,
@@ -312,15 +329,8 @@ function connectEachMat(
             kinds.bitlinePitch[kind] as number,
             kinds.bitlineCount[kind] as number,
           );
-    whole = driveCount > 0;
-    reaches = false;
-    const driveReach = driveEdgeReach[kind] as number;
-    for (let c = 0; c < driveCount && whole; c++) {
-      if ((driveSpans[2 * c] as number) > tol) whole = false;
-      else if ((driveSpans[2 * c + 1] as number) >= driveReach) reaches = true;
-    }
-    undrivenWordlines[k] =
-      whole && reaches
+    const undriven =
+      driveCount > 0 && !driveStartsLate && driveReaches
         ? 0
         : uncoveredLineCount(
             driveSpans,
@@ -330,6 +340,9 @@ function connectEachMat(
             kinds.wordlinePitch[kind] as number,
             kinds.wordlineCount[kind] as number,
           );
+    unsensedBitlines[k] = unsensed;
+    undrivenWordlines[k] = undriven;
+    servedKey[k] = unsensed === 0 && undriven === 0 ? 3 * kind + first + second : -1;
     senseAmpEnds[k] = first + second;
     unpartneredBitlines[k] = 0;
     k++;
