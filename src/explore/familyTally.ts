@@ -1,4 +1,5 @@
 import { checkLabel, type FindingKind } from '../engine';
+import { formatWholeNumber } from '../model/units';
 import { LIMIT_LABELS, type FeasibilityFigures, type FeasibilityLimits } from './chartData';
 
 /** What a tally reads of a sweep point (a SweepPoint will do; SweepTable.tallyPoints() makes lighter ones). */
@@ -150,7 +151,7 @@ export function cellProcessTallies(
  */
 export function familyInfeasibleSentence(name: string, t: FamilyTally): string | null {
   if (t.feasible > 0 || t.points === 0) return null;
-  const n = (v: number) => v.toLocaleString('en-US');
+  const n = formatWholeNumber;
   const causes: { words: string; count: number }[] = [
     ...[...t.checks.entries()].map(([kind, count]) => ({ words: `the ${checkLabel(kind)} check`, count })),
     ...[...t.limits.entries()].map(([limit, count]) => ({

@@ -54,8 +54,11 @@ export type SweepReport =
       readonly runId: number;
       readonly done: number;
       readonly total: number;
-      /** The chunk's points as columns (sweepColumns.ts); its buffers are transferred, not copied. */
-      readonly chunk: SweepChunk;
+      /**
+       * The points assessed since the last message, chunk by chunk as columns (sweepColumns.ts); their
+       * buffers are transferred, not copied.
+       */
+      readonly chunks: readonly SweepChunk[];
     }
   | {
       readonly type: 'done';

@@ -205,7 +205,7 @@ export function createExploreStore(
           if (report.runId !== run.id || run.status !== 'running') return;
           if (report.type === 'progress') {
             table.reserve(report.total);
-            table.append(report.chunk);
+            for (const chunk of report.chunks) table.append(chunk);
             pendingDone = report.done;
             pendingTotal = report.total;
             if (run.total !== report.total) set({ run: { ...run, total: report.total } });

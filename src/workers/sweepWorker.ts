@@ -12,8 +12,14 @@ import { drawPointsPicture } from '../charts/pointsPicture';
 import { scratchSurface, spriteLookup, spriteMaker } from '../charts/markerSprites';
 import { ChartModelBuilder } from '../explore/chartModelBuilder';
 import { ProcessCache } from '../explore/partitionFigures';
-import { runSweepRange, sweepSize, type SweepPoint } from '../explore/sweep';
-import { chunkBuffers, encodeSweepChunk, SweepTable, SweepTextTables } from '../explore/sweepColumns';
+import { runSweepRange, sweepSize } from '../explore/sweep';
+import {
+  chunkBuffers,
+  encodeSweepChunk,
+  SweepTable,
+  SweepTextTables,
+  type SweepChunk,
+} from '../explore/sweepColumns';
 import {
   SWEEP_CHUNK,
   SWEEP_POST_INTERVAL,
@@ -99,19 +105,22 @@ scope.addEventListener('message', (event) => {
     const tables = new SweepTextTables();
     const table = new SweepTable();
     table.reserve(total);
-    let pending: SweepPoint[] = [];
+    // Each chunk is encoded at once (its point objects die young); the encoded ones wait for the post.
+    let pending: SweepChunk[] = [];
     let posted = started;
     for (let start = 0; start < total; start += SWEEP_CHUNK) {
-      const points = runSweepRange(request, start, start + SWEEP_CHUNK, cache);
-      pending = pending.length === 0 ? points : pending.concat(points);
+      const chunk = encodeSweepChunk(runSweepRange(request, start, start + SWEEP_CHUNK, cache), tables);
+      table.append(chunk);
+      pending.push(chunk);
       const done = Math.min(total, start + SWEEP_CHUNK);
       const now = performance.now();
       if (done < total && now - posted < SWEEP_POST_INTERVAL) continue;
       posted = now;
-      const chunk = encodeSweepChunk(pending, tables);
+      scope.postMessage(
+        { type: 'progress', runId, done, total, chunks: pending },
+        pending.flatMap(chunkBuffers),
+      );
       pending = [];
-      table.append(chunk);
-      scope.postMessage({ type: 'progress', runId, done, total, chunk }, chunkBuffers(chunk));
     }
     const elapsed = (performance.now() - started) / 1000;
     afterQueuedMessages(() => {

@@ -24,7 +24,7 @@ class StepWorker implements SweepWorker {
         runId: command.runId,
         done: Math.min(total, s + 100),
         total,
-        chunk,
+        chunks: [chunk],
       });
     }
     this.pending.push({ type: 'done', runId: command.runId, total, elapsed: 0.01 });

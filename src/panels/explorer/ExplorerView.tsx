@@ -18,7 +18,7 @@ import { pointBuildSpec, type SweepRequest } from '../../explore/sweep';
 import { sweepPointsCsv } from '../../explore/pointsCsv';
 import { familySentences } from '../../explore/familyTally';
 import type { Design } from '../../model/design';
-import { formatQuantity } from '../../model/units';
+import { formatQuantity, formatWholeNumber } from '../../model/units';
 import { defaultSweepSettings, type SweepSettings } from '../../explore/sweepSettings';
 import { useAppStore } from '../../store/useAppStore';
 import { useExploreStore } from '../../store/useExploreStore';
@@ -199,9 +199,9 @@ export function ExplorerView() {
             run={run}
             counts={
               shown > 0
-                ? ` · ${model.counts.feasible.toLocaleString('en-US')} feasible · ${model.front.length} on the front` +
+                ? ` · ${formatWholeNumber(model.counts.feasible)} feasible · ${model.front.length} on the front` +
                   (model.counts.unplanned > 0
-                    ? ` · ${model.counts.unplanned.toLocaleString('en-US')} need too many mats`
+                    ? ` · ${formatWholeNumber(model.counts.unplanned)} need too many mats`
                     : '')
                 : ''
             }

@@ -1,5 +1,5 @@
 import type { StripSizes } from '../../designs/partitionPlan';
-import { formatBits } from '../../model/units';
+import { formatBits, formatWholeNumber } from '../../model/units';
 import { MAX_SWEEP_POINTS, SWEEP_POINT_LIMIT_REASON, sweepSize } from '../../explore/sweep';
 import {
   DEFAULT_SPARE_SWEEP,
@@ -171,7 +171,7 @@ export function SweepControls({ design, settings, onChange }: Props) {
         {formatQuantity(design.operating.refreshWindow, 'time')} (Process tab).
       </p>
       <div className="sweep-run">
-        <span data-testid="sweep-size">{size.toLocaleString('en-US')} points</span>
+        <span data-testid="sweep-size">{formatWholeNumber(size)} points</span>
         {running ? (
           <button
             type="button"
@@ -191,7 +191,7 @@ export function SweepControls({ design, settings, onChange }: Props) {
             onClick={() => startSweep(request, new SweepTable(), size)}
             title={
               size > MAX_SWEEP_POINTS
-                ? `at most ${MAX_SWEEP_POINTS.toLocaleString('en-US')} points`
+                ? `at most ${formatWholeNumber(MAX_SWEEP_POINTS)} points`
                 : 'Assess every partition of the sweep and chart it'
             }
           >
@@ -200,7 +200,7 @@ export function SweepControls({ design, settings, onChange }: Props) {
         )}
       </div>
       <p className="hint" data-testid="sweep-limit">
-        At most {MAX_SWEEP_POINTS.toLocaleString('en-US')} points a sweep: {SWEEP_POINT_LIMIT_REASON}.
+        At most {formatWholeNumber(MAX_SWEEP_POINTS)} points a sweep: {SWEEP_POINT_LIMIT_REASON}.
       </p>
     </section>
   );

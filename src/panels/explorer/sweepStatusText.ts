@@ -1,9 +1,9 @@
 import type { SweepRun } from '../../store/exploreStore';
-import { formatQuantity } from '../../model/units';
+import { formatQuantity, formatWholeNumber } from '../../model/units';
 
 /** What the sweep is doing, in words; the status line and the screen-reader announcement share it. */
 export function sweepStatusText(run: SweepRun): string {
-  const n = (v: number) => v.toLocaleString('en-US');
+  const n = formatWholeNumber;
   switch (run.status) {
     case 'idle':
       return 'No sweep yet.';
@@ -28,7 +28,7 @@ export function sweepAnnouncement(
   onFront: number,
   whyInfeasible: readonly string[] = [],
 ): string {
-  const n = (v: number) => v.toLocaleString('en-US');
+  const n = formatWholeNumber;
   switch (run.status) {
     case 'idle':
       return '';
