@@ -17,7 +17,7 @@ import { crossGroupMerge, crossGroupWalk, sameGroupMerge, sameGroupWalk } from '
  * meet, both lists are in left-to-right order and a merge walk pairs each box with the boxes of the other
  * run across from it; every candidate pair gets the exact box test of the grid pass (same comparisons,
  * same arithmetic), so rounding decides every pair as it does there. Boxes of one run never share
- * anything (each starts where the ones before it end), and two runs of one group whose vertical extents
+ * more than the margin across (see blockRuns.ts), and two runs of one group whose vertical extents
  * share no more than the margin have no pair to keep: neither is walked. A 64 × 64 mat array (12,418
  * blocks, 195 runs) then costs some 17,000 merge steps in 385 walks for its 16,400 pairs, where the grid
  * bins every box and tests some 82,000 pairs.

@@ -3,8 +3,9 @@ import type { Boxes } from './blockTable';
 /**
  * A table's blocks cut into runs: a run is a stretch of blocks that follow each other in design order,
  * carry the same code (a block type, say), share their top edge and height exactly (floating-point
- * equality), and stand side by side from left to right (each starts at or after the right edge of the
- * block before it in the run). Tiled arrays are written row by row, so a 64 × 64 grid of mats with its
+ * equality), and stand side by side from left to right: each starts at or right of where the one before
+ * it starts, and reaches back over the blocks before it by no more than the margin (rounding can make
+ * abutting tiles overlap by a few ulps), so no two blocks of a run share more than the margin across. Tiled arrays are written row by row, so a 64 × 64 grid of mats with its
  * strips is about 200 runs of 12,418 blocks: a whole-die pass can work per run, and per pair of runs,
  * instead of per block or per pair of blocks.
  *
@@ -68,6 +69,8 @@ function cutRuns(
   let runY = NaN;
   let runHeight = NaN;
   let runCode = -1;
+  let lastX = 0;
+  // The furthest right edge of the run so far.
   let lastRight = 0;
   for (let i = 0; i < n; i++) {
     const xi = x[i] as number;
@@ -75,25 +78,27 @@ function cutRuns(
     const hi = height[i] as number;
     const right = xi + (width[i] as number);
     if (!(right >= xi)) return -1;
-    if (yi !== runY || hi !== runHeight || code[i] !== runCode || !(xi >= lastRight)) {
+    if (yi !== runY || hi !== runHeight || code[i] !== runCode || !(xi >= lastX) || lastRight - xi > margin) {
       if (count === cap) return -1;
       starts[count++] = i;
       runY = yi;
       runHeight = hi;
       runCode = code[i] as number;
-    } else if (!(xi > lastRight + margin && xi - margin > lastRight)) {
-      touching[count - 1] = 1;
+      lastRight = right;
+    } else {
+      if (!(xi > lastRight + margin && xi - margin > lastRight)) touching[count - 1] = 1;
+      if (right > lastRight) lastRight = right;
     }
-    lastRight = right;
+    lastX = xi;
   }
   return count;
 }
 
 /**
  * Each run's vertical extent and code; false when some coordinate of the run is not finite. Within a run
- * every left edge lies at or right of the right edge before it, and every right edge at or right of its
- * left edge, so the first block's left edge and the last one's right edge bound all the others: when those
- * two are finite, so is every x and width of the run (and y and height, when the run's bottom is).
+ * left edges never decrease and every right edge lies at or right of its left edge, and a right edge of
+ * +∞ would have ended the run (the next block reaching back over it by more than the margin): so when the
+ * first left edge, the last right edge and the bottom are finite, so is every coordinate of the run.
  */
 function describeRuns(
   boxes: Boxes,

@@ -173,5 +173,8 @@ describe('bandedNeighbourTable: the grid pass by runs of blocks', () => {
     expect(runs && Array.from(runs.start)).toEqual([0, 3, 4, 6]);
     expect(runs && Array.from(runs.touching)).toEqual([1, 0, 0]);
     expect(runs && Array.from(runs.bottom)).toEqual([1, 1, 2]);
+    // Reaching back by no more than the margin (abutting tiles placed with rounding) keeps the run.
+    const withMargin = blockRuns(boxesOf(rects), new Uint8Array(6), 0.5, 6);
+    expect(withMargin && Array.from(withMargin.start)).toEqual([0, 4, 6]);
   });
 });
