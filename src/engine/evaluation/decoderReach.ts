@@ -111,84 +111,107 @@ function seedsOfChecks(
   const seedB = new Uint8Array(table.count);
   if (edgesA !== null) for (const d of edgesA.decoders) seedA[d] = 1;
   if (edgesB !== null) for (const d of edgesB.decoders) seedB[d] = 1;
+  if (inBoxes.length < 2 * table.count) inBoxes = new Int32Array(2 * table.count);
   // A check without decoders has no seeds: its strip code matches no block and its box is never consulted.
-  const stripA = edgesA === null ? -1 : a.stripCode;
-  const stripB = edgesB === null ? -1 : b.stripCode;
-  const matsA = edgesA !== null && a.decoderCode === COLUMN_DECODER;
-  const matsB = edgesB !== null && b.decoderCode === COLUMN_DECODER;
+  const found = blocksInBoxes(
+    table,
+    matIndexAt,
+    edgesA === null ? -1 : a.stripCode,
+    edgesA !== null && a.decoderCode === COLUMN_DECODER,
+    narrowFirst(table, edgesA?.reach ?? NOWHERE),
+    edgesB === null ? -1 : b.stripCode,
+    edgesB !== null && b.decoderCode === COLUMN_DECODER,
+    narrowFirst(table, edgesB?.reach ?? NOWHERE),
+    inBoxes,
+  );
+  for (let n = 0; n < found; n++) {
+    const v = inBoxes[n] as number;
+    if (v >= 0) {
+      if (seedAt(table, matIndexAt, edgesA, v, a.decoderCode, a.stripCode)) seedA[v] = 1;
+    } else if (seedAt(table, matIndexAt, edgesB, ~v, b.decoderCode, b.stripCode)) seedB[~v] = 1;
+  }
+  return [seedA, seedB];
+}
+
+/** Scratch for {@link blocksInBoxes}: at least twice as long as the table. */
+let inBoxes = new Int32Array(1024);
+
+/**
+ * Writes to `out`, in table order, each candidate block of check A (a strip of its type, or a mat where
+ * mats count) lying at least partly inside box A as its position, and each of check B inside box B as
+ * the position's complement (~i), and returns how many it wrote: the test of {@link DecoderEdges.mayAbut},
+ * written out, with each box tested first across its narrow side (a row decoder's box is narrow in x, a
+ * column decoder's in y) so that most blocks leave after one or two comparisons. The exact test runs
+ * afterwards, outside this loop: V8 compiles the loop while it runs, and with that test inside it
+ * inlined a dozen geometry functions (a 20 ms compile for a loop that runs once per evaluation).
+ */
+function blocksInBoxes(
+  table: BlockTable,
+  matIndexAt: Int32Array,
+  stripA: number,
+  matsA: boolean,
+  boxA: NarrowFirst,
+  stripB: number,
+  matsB: boolean,
+  boxB: NarrowFirst,
+  out: Int32Array,
+): number {
+  const { start: startA, size: sizeA, cross: crossA, crossSize: crossSizeA } = boxA;
+  const { start: startB, size: sizeB, cross: crossB, crossSize: crossSizeB } = boxB;
+  const { from: fromA, to: toA, crossFrom: crossFromA, crossTo: crossToA } = boxA;
+  const { from: fromB, to: toB, crossFrom: crossFromB, crossTo: crossToB } = boxB;
   const { type, count } = table;
-  // Each box is tested first across its narrow side (a row decoder's box is narrow in x, a column
-  // decoder's in y), so that most blocks leave after one or two comparisons.
-  const [startA, sizeA, crossA, crossSizeA, boxA] = narrowFirst(table, edgesA?.reach ?? NOWHERE);
-  const [startB, sizeB, crossB, crossSizeB, boxB] = narrowFirst(table, edgesB?.reach ?? NOWHERE);
-  const fromA = boxA[0] as number;
-  const toA = boxA[1] as number;
-  const crossFromA = boxA[2] as number;
-  const crossToA = boxA[3] as number;
-  const fromB = boxB[0] as number;
-  const toB = boxB[1] as number;
-  const crossFromB = boxB[2] as number;
-  const crossToB = boxB[3] as number;
-  const decoderA = a.decoderCode;
-  const decoderB = b.decoderCode;
+  let n = 0;
   for (let i = 0; i < count; i++) {
     const t = type[i] as number;
     if (t === stripA || (matsA && (matIndexAt[i] as number) >= 0)) {
       const at = startA[i] as number;
       if (!(at > toA || at + (sizeA[i] as number) < fromA)) {
         const cross = crossA[i] as number;
-        if (!(cross > crossToA || cross + (crossSizeA[i] as number) < crossFromA))
-          markSeed(seedA, table, matIndexAt, edgesA, i, decoderA, stripA);
+        if (!(cross > crossToA || cross + (crossSizeA[i] as number) < crossFromA)) out[n++] = i;
       }
     }
     if (t === stripB || (matsB && (matIndexAt[i] as number) >= 0)) {
       const at = startB[i] as number;
       if (!(at > toB || at + (sizeB[i] as number) < fromB)) {
         const cross = crossB[i] as number;
-        if (!(cross > crossToB || cross + (crossSizeB[i] as number) < crossFromB))
-          markSeed(seedB, table, matIndexAt, edgesB, i, decoderB, stripB);
+        if (!(cross > crossToB || cross + (crossSizeB[i] as number) < crossFromB)) out[n++] = ~i;
       }
     }
   }
-  return [seedA, seedB];
+  return n;
 }
 
 /**
- * The table's start and size arrays across the box's narrow side, then along its long side, and the box
- * (m: left, top, right, bottom) as [from, to] across then along.
+ * A box (m) as the table's start and size arrays across its narrow side and its span there, then along
+ * its long side and its span there.
  */
-function narrowFirst(
-  table: BlockTable,
-  box: Float64Array,
-): readonly [Float64Array, Float64Array, Float64Array, Float64Array, Float64Array] {
+class NarrowFirst {
+  constructor(
+    readonly start: Float64Array,
+    readonly size: Float64Array,
+    readonly from: number,
+    readonly to: number,
+    readonly cross: Float64Array,
+    readonly crossSize: Float64Array,
+    readonly crossFrom: number,
+    readonly crossTo: number,
+  ) {}
+}
+
+/** Box `box` (left, top, right, bottom) of blocks of `table`, narrow side first. */
+function narrowFirst(table: BlockTable, box: Float64Array): NarrowFirst {
   const left = box[0] as number;
   const top = box[1] as number;
   const right = box[2] as number;
   const bottom = box[3] as number;
   return right - left <= bottom - top
-    ? [table.x, table.width, table.y, table.height, Float64Array.of(left, right, top, bottom)]
-    : [table.y, table.height, table.x, table.width, Float64Array.of(top, bottom, left, right)];
+    ? new NarrowFirst(table.x, table.width, left, right, table.y, table.height, top, bottom)
+    : new NarrowFirst(table.y, table.height, top, bottom, table.x, table.width, left, right);
 }
 
 /** The box of a check without decoders: a placeholder, never consulted (no block is a candidate for it). */
 const NOWHERE = Float64Array.of(Infinity, Infinity, -Infinity, -Infinity);
-
-/**
- * The exact test for a block inside a box, as one call: in a tiled table those blocks come last, after V8
- * compiled the loop above, so what runs for them is kept out of it (it deoptimises that loop once in a
- * process's first evaluation at most; doing the same steps for every block to avoid that cost more).
- */
-function markSeed(
-  seed: Uint8Array,
-  table: BlockTable,
-  matIndexAt: Int32Array,
-  edges: DecoderEdges | null,
-  i: number,
-  decoderCode: number,
-  stripCode: number,
-): void {
-  if (seedAt(table, matIndexAt, edges, i, decoderCode, stripCode)) seed[i] = 1;
-}
 
 /** True when the block at table position `i` is a seed of {@link reachSeeds}. */
 export function seedAt(
