@@ -201,7 +201,7 @@ class ServingStrips {
     const senseAmps = new Int32Array(table.count);
     const drivers = new Int32Array(table.count);
     const ends = Int32Array.of(0, table.count, 0, table.count);
-    sortServingStrips(table, facing, senseAmps, drivers, ends);
+    sortServingStrips(table.count, table.type, facing, senseAmps, drivers, ends);
     const senseAmpsLying = ends[0] as number;
     const senseAmpsStanding = ends[1] as number;
     const driversLying = ends[2] as number;
@@ -219,35 +219,42 @@ class ServingStrips {
 
 /**
  * The pass of {@link ServingStrips.of}: lying strips from the start of their type's array, standing ones
- * from its end, `ends` = [sense-amplifier strips lying, standing from, drivers lying, standing from]. It
- * ends its function: code after a loop V8 compiled while it ran has no type feedback and is thrown away.
+ * from its end, `ends` = [sense-amplifier strips lying, standing from, drivers lying, standing from]. V8
+ * compiles the loop while it runs, and what is read before or after it has no type feedback then, so the
+ * loop ends the function and everything it reads comes in as an argument.
  */
 function sortServingStrips(
-  table: BlockTable,
+  count: number,
+  type: Uint8Array,
   facing: Uint8Array,
   senseAmps: Int32Array,
   drivers: Int32Array,
   ends: Int32Array,
 ): void {
-  const { type } = table;
   let senseAmpsLying = 0;
-  let senseAmpsStanding = table.count;
+  let senseAmpsStanding = count;
   let driversLying = 0;
-  let driversStanding = table.count;
-  for (let i = 0; i < table.count; i++) {
+  let driversStanding = count;
+  for (let i = 0; i < count; i++) {
     const f = facing[i] as number;
     if (f === UNSERVING) continue;
     const t = type[i] as number;
-    if (t === SENSE_AMP_STRIP_CODE) {
-      if (f === ALONG_HORIZONTAL_EDGE) {
+    // Both types and the orientation are tested for every strip before branching: a test first met
+    // after V8 compiled the loop (driver strips come after the sense amplifiers in a tiled table) would
+    // have no type feedback and throw the compiled loop away.
+    const senseAmp = t === SENSE_AMP_STRIP_CODE;
+    const driver = t === WORDLINE_DRIVER_STRIP_CODE;
+    const lying = f === ALONG_HORIZONTAL_EDGE;
+    if (senseAmp) {
+      if (lying) {
         senseAmps[senseAmpsLying++] = i;
         ends[0] = senseAmpsLying;
       } else {
         senseAmps[--senseAmpsStanding] = i;
         ends[1] = senseAmpsStanding;
       }
-    } else if (t === WORDLINE_DRIVER_STRIP_CODE) {
-      if (f === ALONG_HORIZONTAL_EDGE) {
+    } else if (driver) {
+      if (lying) {
         drivers[driversLying++] = i;
         ends[2] = driversLying;
       } else {

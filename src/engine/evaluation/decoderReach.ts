@@ -112,16 +112,33 @@ function seedsOfChecks(
   if (edgesA !== null) for (const d of edgesA.decoders) seedA[d] = 1;
   if (edgesB !== null) for (const d of edgesB.decoders) seedB[d] = 1;
   if (inBoxes.length < 2 * table.count) inBoxes = new Int32Array(2 * table.count);
+  const boxA = narrowFirst(table, edgesA?.reach ?? NOWHERE);
+  const boxB = narrowFirst(table, edgesB?.reach ?? NOWHERE);
   // A check without decoders has no seeds: its strip code matches no block and its box is never consulted.
   const found = blocksInBoxes(
-    table,
+    table.count,
+    table.type,
     matIndexAt,
     edgesA === null ? -1 : a.stripCode,
     edgesA !== null && a.decoderCode === COLUMN_DECODER,
-    narrowFirst(table, edgesA?.reach ?? NOWHERE),
+    boxA.start,
+    boxA.size,
+    boxA.from,
+    boxA.to,
+    boxA.cross,
+    boxA.crossSize,
+    boxA.crossFrom,
+    boxA.crossTo,
     edgesB === null ? -1 : b.stripCode,
     edgesB !== null && b.decoderCode === COLUMN_DECODER,
-    narrowFirst(table, edgesB?.reach ?? NOWHERE),
+    boxB.start,
+    boxB.size,
+    boxB.from,
+    boxB.to,
+    boxB.cross,
+    boxB.crossSize,
+    boxB.crossFrom,
+    boxB.crossTo,
     inBoxes,
   );
   for (let n = 0; n < found; n++) {
@@ -143,24 +160,36 @@ let inBoxes = new Int32Array(1024);
  * written out, with each box tested first across its narrow side (a row decoder's box is narrow in x, a
  * column decoder's in y) so that most blocks leave after one or two comparisons. The exact test runs
  * afterwards, outside this loop: V8 compiles the loop while it runs, and with that test inside it
- * inlined a dozen geometry functions (a 20 ms compile for a loop that runs once per evaluation).
+ * inlined a dozen geometry functions (a 20 ms compile for a loop that runs once per evaluation). What
+ * the loop reads comes in as arguments: read before the loop it would have no type feedback when V8
+ * compiles the function (its feedback is allocated during the loop), and the code would be thrown away.
  */
 function blocksInBoxes(
-  table: BlockTable,
+  count: number,
+  type: Uint8Array,
   matIndexAt: Int32Array,
   stripA: number,
   matsA: boolean,
-  boxA: NarrowFirst,
+  startA: Float64Array,
+  sizeA: Float64Array,
+  fromA: number,
+  toA: number,
+  crossA: Float64Array,
+  crossSizeA: Float64Array,
+  crossFromA: number,
+  crossToA: number,
   stripB: number,
   matsB: boolean,
-  boxB: NarrowFirst,
+  startB: Float64Array,
+  sizeB: Float64Array,
+  fromB: number,
+  toB: number,
+  crossB: Float64Array,
+  crossSizeB: Float64Array,
+  crossFromB: number,
+  crossToB: number,
   out: Int32Array,
 ): number {
-  const { start: startA, size: sizeA, cross: crossA, crossSize: crossSizeA } = boxA;
-  const { start: startB, size: sizeB, cross: crossB, crossSize: crossSizeB } = boxB;
-  const { from: fromA, to: toA, crossFrom: crossFromA, crossTo: crossToA } = boxA;
-  const { from: fromB, to: toB, crossFrom: crossFromB, crossTo: crossToB } = boxB;
-  const { type, count } = table;
   let n = 0;
   for (let i = 0; i < count; i++) {
     const t = type[i] as number;

@@ -51,29 +51,47 @@ export class ServingForest {
     const vertical = new Uint8Array(kinds.length);
     for (let n = 0; n < kinds.length; n++)
       vertical[n] = (kinds[n] as MatKind).block.bitlineAxis === 'vertical' ? 1 : 0;
-    joinServingLists(mats, table, vertical, up0, up1, trees, facing);
+    const { position, servingOffsets, servingPositions } = mats;
+    joinServingLists(
+      mats.count,
+      position,
+      servingOffsets,
+      servingPositions,
+      table.kindOf,
+      vertical,
+      up0,
+      up1,
+      trees,
+      facing,
+      table,
+    );
     return new ServingForest([up0, up1], trees, facing);
   }
 }
 
 /**
- * The pass of {@link ServingForest.of}, in a function of its own that ends with its loop: V8 compiles
- * the loop while it runs, and code after it would have no type feedback yet and be thrown away.
+ * The pass of {@link ServingForest.of}. V8 compiles its loop while it runs, and what is read before or
+ * after the loop has no type feedback then (the function's feedback is allocated during the loop), so
+ * compiled code would be thrown away at its start or end: the loop ends the function, and everything it
+ * reads comes in as an argument.
  */
 function joinServingLists(
-  mats: MatTable,
-  table: BlockTable,
+  matCount: number,
+  position: Int32Array,
+  servingOffsets: Int32Array,
+  servingPositions: Int32Array,
+  kindOf: Int32Array,
   vertical: Uint8Array,
   up0: Int32Array,
   up1: Int32Array,
   trees: Int32Array,
   facing: Uint8Array,
+  /** For the error about a listed mat that is not one. */
+  table: BlockTable,
 ): void {
-  const { position, servingOffsets, servingPositions } = mats;
-  const { kindOf } = table;
   let trees0 = 0;
   let trees1 = 0;
-  for (let k = 0; k < mats.count; k++) {
+  for (let k = 0; k < matCount; k++) {
     const m = position[k] as number;
     const kind = kindOf[m] as number;
     if (kind < 0) notAMat(table, m);
