@@ -64,6 +64,114 @@ interface IssueGroup {
 }
 
 /**
+ * The issue groups of a report's mats, found once per figures object (mats of one kind share their
+ * figures, so their issues and groups) and per mat with unserved lines. A class rather than closures
+ * made per call: a closure is a new call target on every call, and the loops calling it were thrown
+ * away on a later call.
+ */
+class IssueGrouping {
+  /** Every group in the order first met: the findings' order. */
+  readonly groups = new Map<string, IssueGroup>();
+  private readonly groupOfIssue = new Map<MatIssue, IssueGroup>();
+  private readonly physicsCache = new Map<MatFigures, readonly MatIssue[]>();
+  private readonly servedCache = new Map<MatFigures, readonly IssueGroup[]>();
+
+  constructor(
+    private readonly mats: MatTable,
+    private readonly design: Design,
+  ) {}
+
+  /** The groups mat k falls in (connection issues first, then its physics'). */
+  groupsOf(k: number): readonly IssueGroup[] {
+    const figures = figuresAt(this.mats, k);
+    const unsensed = this.mats.unsensedBitlines[k] ?? 0;
+    const undriven = this.mats.undrivenWordlines[k] ?? 0;
+    if (unsensed === 0 && undriven === 0) {
+      let groups = this.servedCache.get(figures);
+      if (!groups) {
+        groups = this.physicsOf(figures).map((issue) => this.groupOf(issue));
+        this.servedCache.set(figures, groups);
+      }
+      return groups;
+    }
+    const issues = [...connectionIssues(unsensed, undriven, figures), ...this.physicsOf(figures)];
+    return issues.map((issue) => this.groupOf(issue));
+  }
+
+  private physicsOf(figures: MatFigures): readonly MatIssue[] {
+    // Mats of one kind share one figures object (evaluate computes it once per kind), so format it once.
+    let physics = this.physicsCache.get(figures);
+    if (!physics) {
+      physics = physicsIssues(figures, this.design);
+      this.physicsCache.set(figures, physics);
+    }
+    return physics;
+  }
+
+  private groupOf(issue: MatIssue): IssueGroup {
+    // Mats of one kind share their issue objects, so most lookups go by identity, not by building a key.
+    let group = this.groupOfIssue.get(issue);
+    if (!group) {
+      const key = `${issue.kind}|${issue.severity}|${issue.detail}`;
+      group = this.groups.get(key);
+      if (!group) {
+        group = { issue, count: 0, ids: [], labels: [] };
+        this.groups.set(key, group);
+      }
+      this.groupOfIssue.set(issue, group);
+    }
+    return group;
+  }
+}
+
+/**
+ * Where the run of mats starting at k ends: mats with every line served and the same figures fall in
+ * the same groups, and a die lists them in runs.
+ */
+function runEnd(mats: MatTable, k: number): number {
+  const { figureIndex, unsensedBitlines, undrivenWordlines } = mats;
+  if (unsensedBitlines[k] !== 0 || undrivenWordlines[k] !== 0) return k + 1;
+  const figures = figureIndex[k];
+  let end = k + 1;
+  while (
+    end < mats.count &&
+    figureIndex[end] === figures &&
+    unsensedBitlines[end] === 0 &&
+    undrivenWordlines[end] === 0
+  )
+    end++;
+  return end;
+}
+
+/** First pass: each group's mat count and its first few names, run by run in mat order. */
+function countGroups(mats: MatTable, grouping: IssueGrouping): void {
+  for (let k = 0; k < mats.count;) {
+    const end = runEnd(mats, k);
+    const groups = grouping.groupsOf(k);
+    for (let g = 0; g < groups.length; g++) {
+      const group = groups[g] as IssueGroup;
+      group.count += end - k;
+      for (let m = k; m < end && group.labels.length < NAMED_IN_MESSAGE; m++)
+        group.labels.push(matLabelAt(mats, m));
+    }
+    k = end;
+  }
+}
+
+/** Second pass: each group's mat ids, into lists of exactly the counted length (see collectFindings). */
+function listGroupIds(mats: MatTable, grouping: IssueGrouping): void {
+  for (let k = 0; k < mats.count;) {
+    const end = runEnd(mats, k);
+    const groups = grouping.groupsOf(k);
+    for (let g = 0; g < groups.length; g++) {
+      const group = groups[g] as IssueGroup;
+      for (let m = k; m < end; m++) group.ids[group.count++] = matIdAt(mats, m);
+    }
+    k = end;
+  }
+}
+
+/**
  * Turns geometry and physics into findings, each naming its blocks. Mats with the same issue and the
  * same figures are grouped into one finding that names them all, so a regular array with one weakness
  * gives one line, not thousands.
@@ -76,64 +184,14 @@ export function collectFindings(
   /** The blocks as they stand (a live preview's, when they differ from the design's), for names. */
   blocks: readonly Block[] = design.blocks,
 ): Finding[] {
-  const groups = new Map<string, IssueGroup>();
-  // Mats of one kind share their issue objects, so most lookups go by identity, not by building a key.
-  const groupOfIssue = new Map<MatIssue, IssueGroup>();
-  const physicsCache = new Map<MatFigures, readonly MatIssue[]>();
-  const issuesOf = (k: number): readonly MatIssue[] => {
-    // Mats of one kind share one figures object (evaluate computes it once per kind), so format it once.
-    const figures = figuresAt(mats, k);
-    let physics = physicsCache.get(figures);
-    if (!physics) {
-      physics = physicsIssues(figures, design);
-      physicsCache.set(figures, physics);
-    }
-    const unsensed = mats.unsensedBitlines[k] ?? 0;
-    const undriven = mats.undrivenWordlines[k] ?? 0;
-    if (unsensed === 0 && undriven === 0) return physics;
-    return [...connectionIssues(unsensed, undriven, figures), ...physics];
-  };
-  const groupOf = (issue: MatIssue): IssueGroup => {
-    let group = groupOfIssue.get(issue);
-    if (!group) {
-      const key = `${issue.kind}|${issue.severity}|${issue.detail}`;
-      group = groups.get(key);
-      if (!group) {
-        group = { issue, count: 0, ids: [], labels: [] };
-        groups.set(key, group);
-      }
-      groupOfIssue.set(issue, group);
-    }
-    return group;
-  };
-  // Mats of one kind with every line served fall in the same groups; a die lists them in runs, so the
-  // groups of the mat before are tried first.
-  let lastFigures: MatFigures | null = null;
-  let lastGroups: readonly IssueGroup[] = [];
-  const groupsOf = (k: number): readonly IssueGroup[] => {
-    const figures = figuresAt(mats, k);
-    const served = (mats.unsensedBitlines[k] ?? 0) === 0 && (mats.undrivenWordlines[k] ?? 0) === 0;
-    if (served && figures === lastFigures) return lastGroups;
-    const found = issuesOf(k).map(groupOf);
-    if (served) {
-      lastFigures = figures;
-      lastGroups = found;
-    }
-    return found;
-  };
+  const grouping = new IssueGrouping(mats, design);
+  const groups = grouping.groups;
   // Two passes: count each group's mats, then fill lists of exactly that length (growing a list of tens
   // of thousands of ids by push costs several times more).
-  for (let k = 0; k < mats.count; k++) {
-    for (const group of groupsOf(k)) {
-      group.count++;
-      if (group.labels.length < NAMED_IN_MESSAGE) group.labels.push(matLabelAt(mats, k));
-    }
-  }
+  countGroups(mats, grouping);
   for (const group of groups.values()) group.ids = new Array<string>(group.count);
   for (const group of groups.values()) group.count = 0;
-  for (let k = 0; k < mats.count; k++) {
-    for (const group of groupsOf(k)) group.ids[group.count++] = matIdAt(mats, k);
-  }
+  listGroupIds(mats, grouping);
   const findings: Finding[] = [];
   for (const { issue, ids, labels } of groups.values()) {
     findings.push({
