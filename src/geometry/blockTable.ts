@@ -202,6 +202,16 @@ function writeRows(table: TableInProgress, blocks: readonly Block[]): number {
   let minY = Infinity;
   let maxX = -Infinity;
   let maxY = -Infinity;
+  let areaWidth = Number.NaN;
+  let areaHeight = Number.NaN;
+  let area = 0;
+  let sumCode = -1;
+  let codeArea = 0;
+  // The box whose right (bottom) edge is the far one so far: its left (top) and width (height).
+  let rightX = Number.NaN;
+  let rightWidth = Number.NaN;
+  let bottomY = Number.NaN;
+  let bottomHeight = Number.NaN;
   // Consecutive mats are nearly always of one kind in a tiled array, so the last kind is tried first
   // before building a key; strips come in runs of one type, so the last type's code likewise.
   let last: Mat | null = null;
@@ -254,16 +264,41 @@ function writeRows(table: TableInProgress, blocks: readonly Block[]): number {
     widths[i] = w;
     heights[i] = h;
     types[i] = code;
-    const area = w * h;
+    // Blocks come in runs of one size and type: the product, a type's running sum and the box's far
+    // edges are formed only when they can change (each stays the same number, to the bit).
+    if (w !== areaWidth || h !== areaHeight) {
+      areaWidth = w;
+      areaHeight = h;
+      area = w * h;
+    }
     placedArea += area;
-    areaByCode[code] = (areaByCode[code] as number) + area;
+    if (code !== sumCode) {
+      sumCode = code;
+      codeArea = areaByCode[code] as number;
+    }
+    codeArea += area;
+    areaByCode[code] = codeArea;
     // Comparisons rather than Math.min/max calls: coordinates are finite (restore checks them).
-    const right = x + w;
-    const bottom = y + h;
     if (x < minX) bounds[0] = minX = x;
     if (y < minY) bounds[1] = minY = y;
-    if (right > maxX) bounds[2] = maxX = right;
-    if (bottom > maxY) bounds[3] = maxY = bottom;
+    // x + w rounds monotonically in x: a box of the far edge's width starting no further right ends no
+    // further right.
+    if (w !== rightWidth || x > rightX) {
+      const right = x + w;
+      if (right > maxX) {
+        bounds[2] = maxX = right;
+        rightX = x;
+        rightWidth = w;
+      }
+    }
+    if (h !== bottomHeight || y > bottomY) {
+      const bottom = y + h;
+      if (bottom > maxY) {
+        bounds[3] = maxY = bottom;
+        bottomY = y;
+        bottomHeight = h;
+      }
+    }
   }
   return placedArea;
 }
