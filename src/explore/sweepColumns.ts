@@ -151,6 +151,16 @@ export function encodeSweepChunk(points: readonly SweepPoint[], tables: SweepTex
   return { count: n, place, figures, texts, newKindLists, newProblems };
 }
 
+/** A table's rows as plain data (typed arrays and texts), to hand from the worker to the page. */
+export interface SweepTableState {
+  readonly count: number;
+  readonly place: readonly Float64Array[];
+  readonly figures: readonly Float64Array[];
+  readonly texts: readonly Int32Array[];
+  readonly kindLists: readonly (readonly FindingKind[])[];
+  readonly problems: readonly string[];
+}
+
 /**
  * Every point of a run, column by column, filled chunk by chunk in arrival order. Rows are positions in
  * arrival order (a sweep's points arrive by index, so row i is point i). Append-only: a row once written
@@ -161,8 +171,8 @@ export class SweepTable {
   private placeColumns: Float64Array[];
   private figureColumns: Float64Array[];
   private textColumns: Int32Array[];
-  private readonly kindLists: (readonly FindingKind[])[] = [];
-  private readonly problems: string[] = [];
+  private kindLists: (readonly FindingKind[])[] = [];
+  private problems: string[] = [];
   count = 0;
 
   constructor() {
@@ -190,6 +200,43 @@ export class SweepTable {
     this.kindLists.push(...chunk.newKindLists);
     this.problems.push(...chunk.newProblems);
     this.count += n;
+  }
+
+  /** The rows as plain data; the arrays are shared (hand them over, then stop using this table). */
+  state(): SweepTableState {
+    return {
+      count: this.count,
+      place: this.placeColumns,
+      figures: this.figureColumns,
+      texts: this.textColumns,
+      kindLists: this.kindLists,
+      problems: this.problems,
+    };
+  }
+
+  /** The buffers of a state, to transfer rather than copy. */
+  static buffers(state: SweepTableState): ArrayBuffer[] {
+    return [...state.place, ...state.figures, ...state.texts].map((c) => c.buffer as ArrayBuffer);
+  }
+
+  /**
+   * Takes over the rows of another table of the same run (the sweep worker's, which holds every row
+   * this one has and more): its arrays are used, not copied. Views taken before stay valid for the rows
+   * they held (the rows are the same), but read the columns again for the new ones.
+   */
+  adopt(state: SweepTableState): void {
+    if (state.count < this.count) throw new Error('a table can only take over a table with more rows');
+    this.placeColumns = [...state.place];
+    this.figureColumns = [...state.figures];
+    this.textColumns = [...state.texts];
+    this.capacity = Math.min(
+      ...this.placeColumns.map((c) => c.length),
+      ...this.figureColumns.map((c) => c.length),
+      ...this.textColumns.map((c) => c.length),
+    );
+    this.kindLists = [...state.kindLists];
+    this.problems = [...state.problems];
+    this.count = state.count;
   }
 
   private grow(capacity: number): void {

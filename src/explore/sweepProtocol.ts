@@ -2,7 +2,7 @@ import type { FigureKey } from '../engine';
 import type { FeasibilityLimits } from './chartData';
 import type { ChartModelState } from './chartModelBuilder';
 import type { SweepRequest } from './sweep';
-import type { SweepChunk } from './sweepColumns';
+import type { SweepChunk, SweepTableState } from './sweepColumns';
 
 /**
  * What the page's chart shows and at what size, so the worker can build the chart's model and draw its
@@ -67,6 +67,11 @@ export type SweepReport =
       readonly elapsed: number;
       /** The finished chart for the last plan the worker had, if it had one; buffers transferred. */
       readonly chart?: SweepChart;
+      /**
+       * Every point of the sweep as the worker's table holds them (buffers transferred): the page takes
+       * them over instead of appending the chunks it has not appended yet.
+       */
+      readonly table?: SweepTableState;
     }
   | { readonly type: 'failed'; readonly runId: number; readonly error: string };
 

@@ -2,7 +2,7 @@ import { create } from 'zustand';
 import type { FigureKey } from '../engine';
 import { DEFAULT_MAX_WORDLINE_DELAY } from '../explore/chartData';
 import type { SweepRequest } from '../explore/sweep';
-import type { SweepTable } from '../explore/sweepColumns';
+import type { SweepChunk, SweepTable } from '../explore/sweepColumns';
 import type { SweepChart, SweepChartPlan, SweepCommand, SweepReport } from '../explore/sweepProtocol';
 import type { SweepSettings } from '../explore/sweepSettings';
 
@@ -134,6 +134,11 @@ export function createExploreStore(
   let pendingDone = 0;
   let pendingTotal = 0;
   let flushTimer: ReturnType<typeof setTimeout> | null = null;
+  /**
+   * Chunks received but not yet appended to the run's table: they are appended when the view shows
+   * them (a flush, a cancel), or dropped when the done message brings the worker's whole table.
+   */
+  let pendingChunks: SweepChunk[] = [];
   let progressTimer: ReturnType<typeof setTimeout> | null = null;
   const stopWorker = () => {
     worker?.terminate();
@@ -149,9 +154,17 @@ export function createExploreStore(
       progressTimer = null;
       set({ progress: { done: pendingDone, total: pendingTotal } });
     };
+    const appendPending = (table: SweepTable | null) => {
+      if (table && pendingChunks.length > 0) {
+        table.reserve(pendingTotal);
+        for (const chunk of pendingChunks) table.append(chunk);
+      }
+      pendingChunks = [];
+    };
     const flush = () => {
       flushTimer = null;
       const run = get().run;
+      appendPending(run.table);
       const count = run.table?.count ?? 0;
       if (run.shown === count && pendingDone === run.done) return;
       set({ run: { ...run, done: pendingDone, shown: count } });
@@ -192,6 +205,7 @@ export function createExploreStore(
         startedAt = performance.now();
         pendingDone = 0;
         pendingTotal = total;
+        pendingChunks = [];
         set({
           run: { ...IDLE, id, status: 'running', request, table, total },
           progress: { done: 0, total },
@@ -204,8 +218,7 @@ export function createExploreStore(
           const run = get().run;
           if (report.runId !== run.id || run.status !== 'running') return;
           if (report.type === 'progress') {
-            table.reserve(report.total);
-            for (const chunk of report.chunks) table.append(chunk);
+            for (const chunk of report.chunks) pendingChunks.push(chunk);
             pendingDone = report.done;
             pendingTotal = report.total;
             if (run.total !== report.total) set({ run: { ...run, total: report.total } });
@@ -218,6 +231,10 @@ export function createExploreStore(
             }
           } else if (report.type === 'done') {
             stopWorker();
+            if (report.table) {
+              table.adopt(report.table);
+              pendingChunks = [];
+            } else appendPending(table);
             // The last points and the done state in one update: one render, one full redraw.
             set({
               run: {

@@ -126,9 +126,13 @@ scope.addEventListener('message', (event) => {
     afterQueuedMessages(() => {
       try {
         const chart = plan && sprites ? chartOf(table, plan, sprites) : undefined;
-        scope.postMessage({ type: 'done', runId, total, elapsed, chart }, chart ? chartBuffers(chart) : []);
+        const rows = table.state();
+        scope.postMessage({ type: 'done', runId, total, elapsed, chart, table: rows }, [
+          ...(chart ? chartBuffers(chart) : []),
+          ...SweepTable.buffers(rows),
+        ]);
       } catch (error) {
-        // The chart is a convenience: without it the page draws the points itself.
+        // The chart and the table are a convenience: without them the page appends and draws itself.
         console.error(error);
         scope.postMessage({ type: 'done', runId, total, elapsed });
       }

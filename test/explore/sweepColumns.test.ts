@@ -49,6 +49,26 @@ describe('sweep points as columns', () => {
   const plain = runSweepRange(request, 0, sweepSize(request));
   const spared = runSweepRange(withSpares, 0, sweepSize(withSpares));
 
+  it('a table takes over the rows of another (the worker’s, through a structured clone) and goes on', () => {
+    for (const points of [plain, spared]) {
+      const whole = throughColumns(points, 7);
+      const page = throughColumns(points.slice(0, 10), 7);
+      const state = whole.state();
+      page.adopt(structuredClone(state, { transfer: SweepTable.buffers(state) }));
+      expect(page.count).toBe(points.length);
+      expect(page.points()).toEqual(points);
+      // Rows appended after the takeover land after it.
+      const tables = new SweepTextTables();
+      const more = points.slice(0, 3);
+      encodeSweepChunk(points, tables);
+      page.append(encodeSweepChunk(more, tables));
+      expect(page.points().slice(points.length)).toEqual(more);
+    }
+    expect(() =>
+      throughColumns(plain.slice(0, 5), 5).adopt(throughColumns(plain.slice(0, 2), 2).state()),
+    ).toThrow();
+  });
+
   it('has a column for every numeric figure of a point', () => {
     const f = plain.find((p) => p.figures)?.figures;
     if (!f) throw new Error('expected a planned point');

@@ -13,12 +13,17 @@ class StepWorker implements SweepWorker {
   terminated = false;
   private pending: SweepReport[] = [];
 
+  /** `withTable`: the done message brings every row, as the app's worker sends its own table. */
+  constructor(readonly withTable = false) {}
+
   postMessage(command: SweepCommand) {
     if (command.type !== 'start') return;
     const total = sweepSize(command.request);
     const tables = new SweepTextTables();
+    const rows = new SweepTable();
     for (let s = 0; s < total; s += 100) {
       const chunk = encodeSweepChunk(runSweepRange(command.request, s, s + 100), tables);
+      rows.append(chunk);
       this.pending.push({
         type: 'progress',
         runId: command.runId,
@@ -27,7 +32,13 @@ class StepWorker implements SweepWorker {
         chunks: [chunk],
       });
     }
-    this.pending.push({ type: 'done', runId: command.runId, total, elapsed: 0.01 });
+    this.pending.push({
+      type: 'done',
+      runId: command.runId,
+      total,
+      elapsed: 0.01,
+      ...(this.withTable ? { table: structuredClone(rows.state()) } : {}),
+    });
   }
   terminate() {
     this.terminated = true;
@@ -166,6 +177,29 @@ describe('explorer store', () => {
     // The last message flushes at once.
     expect(store.getState().run.status).toBe('done');
     expect(store.getState().run.shown).toBe(store.getState().run.total);
+  });
+
+  it('takes the worker’s table over at the end instead of appending the chunks no flush showed', () => {
+    vi.useFakeTimers();
+    const workers: StepWorker[] = [];
+    const store = createExploreStore(() => {
+      const w = new StepWorker(true);
+      workers.push(w);
+      return w;
+    }, 10_000);
+    const request = smallRequest();
+    const table = new SweepTable();
+    store.getState().startSweep(request, table, sweepSize(request));
+    const w = workers[0];
+    if (!w) throw new Error('no worker');
+    w.step();
+    w.step();
+    // Nothing shown yet: nothing appended.
+    expect(table.count).toBe(0);
+    while (w.step());
+    expect(store.getState().run.status).toBe('done');
+    expect(store.getState().run.shown).toBe(sweepSize(request));
+    expect(table.points()).toEqual(runSweepRange(request, 0, sweepSize(request)));
   });
 
   it('skips a flush when, at the rate so far, the sweep is due to end within another interval', () => {
