@@ -9,11 +9,11 @@ import type { PairSink } from './orderedPairs';
 
 /**
  * {@link crossGroupWalk} for two runs whose blocks clear their neighbours in the run (not touching): an
- * ordinary merge of two sorted lists of disjoint intervals, advancing whichever box ends first (both when they end
- * together). When box a ends no later than box b, no box after b can meet a: the next one starts beyond
- * b's right edge by more than the margin both ways the box test counts it (that is what not touching
- * means), so beyond a's as well; likewise the other way round. Each step tests one pair, and a pair of
- * runs costs fewer than |A| + |B| steps.
+ * ordinary merge of two sorted lists of disjoint intervals, advancing whichever box ends first (both
+ * when they end together). When box a ends no later than box b, no box after b can meet a: the next one
+ * starts beyond b's right edge by more than the margin both ways the box test counts it (that is what
+ * not touching means), so beyond a's as well; likewise the other way round. Each step tests one pair,
+ * and a pair of runs costs fewer than |A| + |B| steps.
  */
 export function crossGroupMerge(
   boxes: Boxes,
@@ -137,7 +137,7 @@ export function crossGroupWalk(
     const ra = xa + (width[a] as number);
     const left = xa - margin;
     const right = ra + margin;
-    // Boxes of b that end before a (either test fails) are behind every later a as well.
+    // Boxes of b that end before a (both tests fail) fail them for every later a as well.
     while (p < b1) {
       const rb = (x[p] as number) + (width[p] as number);
       if (rb < left && rb + margin < xa) p++;
@@ -145,7 +145,7 @@ export function crossGroupWalk(
     }
     for (let b = p; b < b1; b++) {
       const xb = x[b] as number;
-      // This box and every later one start past a (either test fails).
+      // This box and every later one start past a (both tests fail).
       if (xb > right && xb - margin > ra) break;
       const rb = xb + (width[b] as number);
       if ((aMeetsB && left <= rb && xb <= right) || (bMeetsA && xb - margin <= ra && xa <= rb + margin)) {
