@@ -3,6 +3,7 @@ import { createRoot } from 'react-dom/client';
 import { App } from './app/App';
 import { loadChecks } from './io/checksOnDemand';
 import { documentSession } from './app/session';
+import { primeEdits } from './app/editPrimer';
 import { primeTextLengths } from './app/textLengthPrimer';
 import { useEditorStore } from './store/editorStore';
 import { useAppStore } from './store/useAppStore';
@@ -32,4 +33,6 @@ void documentSession
     requestAnimationFrame(() => setTimeout(() => void loadChecks(), 0));
     // The first edit after opening a whole die finds the design's text length measured (io/designTextLength.ts).
     primeTextLengths(useAppStore);
+    // ... and the layout checks' edit index built (engine reportState.prepareForEdits).
+    primeEdits(useAppStore);
   });

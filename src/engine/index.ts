@@ -78,6 +78,7 @@ export {
 } from './evaluation/checkRules';
 export { preparePreview, previewReport, type PreviewBase } from './evaluation/preview';
 export { editReport } from './evaluation/editReport';
+export { prepareForEdits } from './evaluation/reportState';
 export {
   computeYieldFigures,
   matDomainShare,

@@ -8,7 +8,7 @@ import {
   type DecoderReachState,
 } from './decoderReach';
 import type { MatTable } from './matTable';
-import type { LayoutEdit } from './reachComponents';
+import { ComponentsOnDemand, type LayoutEdit } from './reachComponents';
 import type { Finding } from './report';
 import { ServingForest } from './servingForest';
 
@@ -36,6 +36,21 @@ export function layoutState(table: BlockTable, mats: MatTable, matIndexAt?: Int3
   const reach = decoderReach(table, mats, matIndexAt ?? matIndexByPosition(mats, table.count), forest);
   const backToBack = backToBackStrips(table, mats, forest.facing);
   return { reach, backToBack, findings: findingsOf(mats, reach, backToBack) };
+}
+
+/**
+ * Labels the components an edit starts from where the checks left them to be labelled on first use
+ * (see ComponentsOnDemand), so that the first edit after a whole evaluation does not pay for it: the app
+ * calls this in idle time. Returns true when anything was left to label.
+ */
+export function labelForEdits(layout: LayoutState): boolean {
+  let labelled = false;
+  for (const r of layout.reach.results) {
+    if (!(r.reach instanceof ComponentsOnDemand) || r.reach.isLabelled) continue;
+    r.reach.labelNow();
+    labelled = true;
+  }
+  return labelled;
 }
 
 function findingsOf(mats: MatTable, reach: DecoderReachState, backToBack: BackToBackState): Finding[] {

@@ -215,26 +215,32 @@ export class ComponentsOnDemand implements ReachComponents {
     private readonly matIndexAt: Int32Array,
   ) {}
 
-  private get whole(): ReachComponents {
+  /** The components, labelled now if no edit has asked yet (the app does it in idle time). */
+  labelNow(): ReachComponents {
     if (this.labelled === null)
       this.labelled = reachComponents(this.mats, this.matIndexAt, this.part, this.seed);
     return this.labelled;
   }
 
+  /** True once the components are labelled. */
+  get isLabelled(): boolean {
+    return this.labelled !== null;
+  }
+
   get served(): ServedMats {
-    return this.whole.served;
+    return this.labelNow().served;
   }
 
   get label(): Int32Array {
-    return this.whole.label;
+    return this.labelNow().label;
   }
 
   get components(): readonly (Component | undefined)[] {
-    return this.whole.components;
+    return this.labelNow().components;
   }
 
   get built(): number {
-    return this.whole.built;
+    return this.labelNow().built;
   }
 }
 

@@ -1,5 +1,5 @@
 import type { BlockTable } from '../../geometry/blockTable';
-import type { LayoutState } from './layoutFindings';
+import { labelForEdits, type LayoutState } from './layoutFindings';
 import type { PositionedOverlap } from './overlaps';
 import type { Report } from './report';
 
@@ -25,4 +25,14 @@ export function rememberReportState(report: Report, state: ReportState): void {
 
 export function reportState(report: Report): ReportState | undefined {
   return states.get(report);
+}
+
+/**
+ * Builds now what an edit of `report`'s design starts from and a whole evaluation leaves to first use
+ * (the components the decoders reach through): idle-time work, so the first edit stays quick. Returns
+ * true when anything was left to build.
+ */
+export function prepareForEdits(report: Report): boolean {
+  const state = states.get(report);
+  return state ? labelForEdits(state.layout) : false;
 }
