@@ -1,6 +1,6 @@
 import { create } from 'zustand';
 import type { FigureKey } from '../engine';
-import { DEFAULT_MAX_WORDLINE_DELAY } from '../explore/chartData';
+import { DEFAULT_MAX_WORDLINE_DELAY } from '../explore/feasibilityLimits';
 import type { SweepRequest } from '../explore/sweep';
 import type { SweepChunk, SweepTable } from '../explore/sweepColumns';
 import type { SweepChart, SweepChartPlan, SweepCommand, SweepReport } from '../explore/sweepProtocol';
