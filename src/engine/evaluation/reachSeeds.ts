@@ -1,0 +1,264 @@
+import { abutmentSpan, type Side } from '../../geometry/abutment';
+import { BLOCK_TYPE_CODES, kindAt, type BlockTable } from '../../geometry/blockTable';
+import { bitlineEndSides } from '../../geometry/stripFit';
+import type { DecoderEdges } from './decoderEdges';
+
+/*
+ * Where the lines of a decoder type enter the stack of mats and strips (the seeds of the decoder-reach
+ * check, decoderReach.ts): the decoders themselves, the strips of the check's type abutting one, and for
+ * column decoders the mats with a bit-line end against one.
+ */
+
+const COLUMN_DECODER = BLOCK_TYPE_CODES.indexOf('columnDecoder');
+
+/** The decoder and strip types of one reach check. */
+export interface SeedCheck {
+  readonly decoderCode: number;
+  readonly stripCode: number;
+}
+
+const ALL_SIDES: readonly Side[] = ['top', 'bottom', 'left', 'right'];
+const scratch = new Float64Array(2);
+
+/** True when boxes i and j share a stretch of edge on any side of i. */
+function abutting(table: BlockTable, i: number, j: number): boolean {
+  for (const side of ALL_SIDES) if (abutmentSpan(table, i, j, side, scratch, 0)) return true;
+  return false;
+}
+
+/**
+ * Where the lines of decoders of type `decoderCode` enter the stack of mats and strips, per table position:
+ * the decoders themselves, the strips of type `stripCode` abutting one, and (for column decoders) mats
+ * with a bit-line end against one. Found by binary search on the decoders' sorted edges, one pass in all.
+ */
+export function reachSeeds(
+  table: BlockTable,
+  matIndexAt: Int32Array,
+  edges: DecoderEdges | null,
+  decoderCode: number,
+  stripCode: number,
+): Uint8Array {
+  const seed = new Uint8Array(table.count);
+  if (edges === null) return seed;
+  for (const d of edges.decoders) seed[d] = 1;
+  const box = edges.reach;
+  if (box === null) {
+    for (let i = 0; i < table.count; i++)
+      if (table.type[i] !== decoderCode && seedAt(table, matIndexAt, edges, i, decoderCode, stripCode))
+        seed[i] = 1;
+    return seed;
+  }
+  return seedsInBox(table, matIndexAt, edges, box, decoderCode, stripCode, seed);
+}
+
+/**
+ * The seeds among blocks that lie at least partly inside the decoders' grown bounding box `box` (the
+ * test of {@link DecoderEdges.mayAbut}, written out): one check's seeds, for an edit that checks it again
+ * whole ({@link seedsOfChecks} does both checks of a whole evaluation in one pass).
+ */
+function seedsInBox(
+  table: BlockTable,
+  matIndexAt: Int32Array,
+  edges: DecoderEdges,
+  box: Float64Array,
+  decoderCode: number,
+  stripCode: number,
+  seed: Uint8Array,
+): Uint8Array {
+  const { type, x, y, width, height } = table;
+  const left = box[0] as number;
+  const top = box[1] as number;
+  const right = box[2] as number;
+  const bottom = box[3] as number;
+  const matsToo = decoderCode === COLUMN_DECODER;
+  for (let i = 0; i < table.count; i++) {
+    if (type[i] !== stripCode && !(matsToo && (matIndexAt[i] as number) >= 0)) continue;
+    const bx = x[i] as number;
+    const by = y[i] as number;
+    if (bx > right || by > bottom || bx + (width[i] as number) < left || by + (height[i] as number) < top)
+      continue;
+    if (seedAt(table, matIndexAt, edges, i, decoderCode, stripCode)) seed[i] = 1;
+  }
+  return seed;
+}
+
+/**
+ * {@link reachSeeds} of the two reach checks in one pass over the table (the first evaluation runs this
+ * loop before V8 has compiled it, so one pass instead of two is half the cost). Falls back to one pass per
+ * check when a check's decoders have no finite bounding box.
+ */
+export function seedsOfChecks(
+  table: BlockTable,
+  matIndexAt: Int32Array,
+  a: SeedCheck,
+  edgesA: DecoderEdges | null,
+  b: SeedCheck,
+  edgesB: DecoderEdges | null,
+): readonly [Uint8Array, Uint8Array] {
+  if ((edgesA !== null && edgesA.reach === null) || (edgesB !== null && edgesB.reach === null))
+    return [
+      reachSeeds(table, matIndexAt, edgesA, a.decoderCode, a.stripCode),
+      reachSeeds(table, matIndexAt, edgesB, b.decoderCode, b.stripCode),
+    ];
+  const seedA = new Uint8Array(table.count);
+  const seedB = new Uint8Array(table.count);
+  if (edgesA !== null) for (const d of edgesA.decoders) seedA[d] = 1;
+  if (edgesB !== null) for (const d of edgesB.decoders) seedB[d] = 1;
+  if (inBoxes.length < 2 * table.count) inBoxes = new Int32Array(2 * table.count);
+  const boxA = narrowFirst(table, edgesA?.reach ?? NOWHERE);
+  const boxB = narrowFirst(table, edgesB?.reach ?? NOWHERE);
+  // A check without decoders has no seeds: its strip code matches no block and its box is never consulted.
+  const found = blocksInBoxes(
+    table.count,
+    table.type,
+    matIndexAt,
+    edgesA === null ? -1 : a.stripCode,
+    edgesA !== null && a.decoderCode === COLUMN_DECODER,
+    boxA.start,
+    boxA.size,
+    boxA.from,
+    boxA.to,
+    boxA.cross,
+    boxA.crossSize,
+    boxA.crossFrom,
+    boxA.crossTo,
+    edgesB === null ? -1 : b.stripCode,
+    edgesB !== null && b.decoderCode === COLUMN_DECODER,
+    boxB.start,
+    boxB.size,
+    boxB.from,
+    boxB.to,
+    boxB.cross,
+    boxB.crossSize,
+    boxB.crossFrom,
+    boxB.crossTo,
+    inBoxes,
+  );
+  for (let n = 0; n < found; n++) {
+    const v = inBoxes[n] as number;
+    if (v >= 0) {
+      if (seedAt(table, matIndexAt, edgesA, v, a.decoderCode, a.stripCode)) seedA[v] = 1;
+    } else if (seedAt(table, matIndexAt, edgesB, ~v, b.decoderCode, b.stripCode)) seedB[~v] = 1;
+  }
+  return [seedA, seedB];
+}
+
+/** Scratch for {@link blocksInBoxes}: at least twice as long as the table. */
+let inBoxes = new Int32Array(1024);
+
+/**
+ * Writes to `out`, in table order, each candidate block of check A (a strip of its type, or a mat where
+ * mats count) lying at least partly inside box A as its position, and each of check B inside box B as
+ * the position's complement (~i), and returns how many it wrote: the test of {@link DecoderEdges.mayAbut},
+ * written out, with each box tested first across its narrow side (a row decoder's box is narrow in x, a
+ * column decoder's in y) so that most blocks leave after one or two comparisons. The exact test runs
+ * afterwards, outside this loop: V8 compiles the loop while it runs, and with that test inside it
+ * inlined a dozen geometry functions (a 20 ms compile for a loop that runs once per evaluation). What
+ * the loop reads comes in as arguments: read before the loop it would have no type feedback when V8
+ * compiles the function (its feedback is allocated during the loop), and the code would be thrown away.
+ */
+function blocksInBoxes(
+  count: number,
+  type: Uint8Array,
+  matIndexAt: Int32Array,
+  stripA: number,
+  matsA: boolean,
+  startA: Float64Array,
+  sizeA: Float64Array,
+  fromA: number,
+  toA: number,
+  crossA: Float64Array,
+  crossSizeA: Float64Array,
+  crossFromA: number,
+  crossToA: number,
+  stripB: number,
+  matsB: boolean,
+  startB: Float64Array,
+  sizeB: Float64Array,
+  fromB: number,
+  toB: number,
+  crossB: Float64Array,
+  crossSizeB: Float64Array,
+  crossFromB: number,
+  crossToB: number,
+  out: Int32Array,
+): number {
+  let n = 0;
+  for (let i = 0; i < count; i++) {
+    const t = type[i] as number;
+    if (t === stripA || (matsA && (matIndexAt[i] as number) >= 0)) {
+      const at = startA[i] as number;
+      if (!(at > toA || at + (sizeA[i] as number) < fromA)) {
+        const cross = crossA[i] as number;
+        if (!(cross > crossToA || cross + (crossSizeA[i] as number) < crossFromA)) out[n++] = i;
+      }
+    }
+    if (t === stripB || (matsB && (matIndexAt[i] as number) >= 0)) {
+      const at = startB[i] as number;
+      if (!(at > toB || at + (sizeB[i] as number) < fromB)) {
+        const cross = crossB[i] as number;
+        if (!(cross > crossToB || cross + (crossSizeB[i] as number) < crossFromB)) out[n++] = ~i;
+      }
+    }
+  }
+  return n;
+}
+
+/**
+ * A box (m) as the table's start and size arrays across its narrow side and its span there, then along
+ * its long side and its span there.
+ */
+class NarrowFirst {
+  constructor(
+    readonly start: Float64Array,
+    readonly size: Float64Array,
+    readonly from: number,
+    readonly to: number,
+    readonly cross: Float64Array,
+    readonly crossSize: Float64Array,
+    readonly crossFrom: number,
+    readonly crossTo: number,
+  ) {}
+}
+
+/** Box `box` (left, top, right, bottom) of blocks of `table`, narrow side first. */
+function narrowFirst(table: BlockTable, box: Float64Array): NarrowFirst {
+  const left = box[0] as number;
+  const top = box[1] as number;
+  const right = box[2] as number;
+  const bottom = box[3] as number;
+  return right - left <= bottom - top
+    ? new NarrowFirst(table.x, table.width, left, right, table.y, table.height, top, bottom)
+    : new NarrowFirst(table.y, table.height, top, bottom, table.x, table.width, left, right);
+}
+
+/** The box of a check without decoders: a placeholder, never consulted (no block is a candidate for it). */
+const NOWHERE = Float64Array.of(Infinity, Infinity, -Infinity, -Infinity);
+
+/** True when the block at table position `i` is a seed of {@link reachSeeds}. */
+export function seedAt(
+  table: BlockTable,
+  matIndexAt: Int32Array,
+  edges: DecoderEdges | null,
+  i: number,
+  decoderCode: number,
+  stripCode: number,
+): boolean {
+  if (edges === null) return false;
+  const type = table.type[i];
+  if (type === decoderCode) return true;
+  const isStrip = type === stripCode;
+  if (!isStrip && !(decoderCode === COLUMN_DECODER && (matIndexAt[i] as number) >= 0)) return false;
+  const found = edges.near(table, i);
+  const candidates = edges.candidates;
+  for (let c = 0; c < found; c++) {
+    const d = candidates[c] as number;
+    if (isStrip) {
+      if (abutting(table, d, i)) return true;
+      continue;
+    }
+    for (const side of bitlineEndSides(kindAt(table, i).block.bitlineAxis))
+      if (abutmentSpan(table, i, d, side, scratch, 0)) return true;
+  }
+  return false;
+}
