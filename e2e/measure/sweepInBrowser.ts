@@ -95,7 +95,8 @@ async function main() {
   // The same span's CPU time of the main thread (no goal of its own: a check on the line above when the
   // machine is busy, where task times also count the time other processes held the core).
   console.log(benchLine(`sweep, ${n} points: main-thread CPU in that time`, stats(mainThreadCpu), {}));
-  // Part of the total, no goal of its own: from the worker's start message to its done message.
+  // Part of the total, no goal of its own: from the worker's start message to the end of its sweep (the
+  // chart model and points picture it then builds for the page are not in it).
   console.log(benchLine(`sweep, ${n} points: the worker's own sweep`, stats(workerSweep), {}));
   console.log(`load average at the end ${loadAverage()}`);
   if (profile) {
