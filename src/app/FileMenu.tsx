@@ -3,7 +3,7 @@ import type { ImageOptions } from '../canvas/floorplanImage';
 import { useAppStore } from '../store/useAppStore';
 import { ModalDialog } from './a11y/ModalDialog';
 import { downloadBlob, fileBaseName } from './download';
-import { exportFile } from './exportFiles';
+import type { ExportKind } from './exportFiles';
 
 /** Size of the live canvas, for exporting the current view. */
 function liveView() {
@@ -14,6 +14,18 @@ function liveView() {
     width: Math.round(box?.width ?? 800),
     height: Math.round(box?.height ?? 600),
   };
+}
+
+/** Makes and saves a summary or CSV; exportFiles.ts loads on the first export, not with the page. */
+function exportOnDemand(kind: ExportKind): void {
+  import('./exportFiles').then(
+    ({ exportFile }) => exportFile(kind),
+    () =>
+      useAppStore.getState().setNotice({
+        kind: 'error',
+        text: 'The export code could not be loaded (is the connection down?). Nothing was written; try again.',
+      }),
+  );
 }
 
 /** Exports: PNG pictures, JSON summaries and CSV tables. */
@@ -30,7 +42,7 @@ export function FileMenu() {
         type="button"
         data-testid="export-summary"
         title="Design, figures and checks as JSON, units in every key"
-        onClick={() => void exportFile('summary')}
+        onClick={() => exportOnDemand('summary')}
       >
         Summary JSON
       </button>
@@ -38,7 +50,7 @@ export function FileMenu() {
         type="button"
         data-testid="export-csv"
         title="Per-mat figures as CSV"
-        onClick={() => void exportFile('csv')}
+        onClick={() => exportOnDemand('csv')}
       >
         CSV
       </button>
