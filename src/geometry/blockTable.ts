@@ -80,7 +80,32 @@ interface TableInProgress extends BlockTable {
 export function blockTable(design: Design): BlockTable {
   const cells = new Map(design.cells.map((c) => [c.id, c]));
   const table = emptyTable(design.blocks, design.process.featureSize, cells);
-  table.sums.placedArea = writeRows(table, design.blocks);
+  const { x, y, width, height, type, kindOf, kinds, sums } = table;
+  // The first mat's kind is found here, not in the loop: a call made only on the loop's first pass has
+  // no type feedback yet, and the code V8 compiles for the loop would be thrown away at it on the next
+  // call (a new design brings a new first kind).
+  const first = design.blocks.find((b): b is Mat => b.type === 'mat') ?? null;
+  const firstKind = first ? matKindOf(table, first) : -1;
+  if (firstKind >= 0) sums.matsOfKind.push(0);
+  const firstGeometry = first ? (kinds[firstKind] as MatKind).geometry : null;
+  sums.placedArea = writeRows(
+    table,
+    design.blocks,
+    first,
+    firstKind,
+    firstGeometry?.width ?? 0,
+    firstGeometry?.height ?? 0,
+    x,
+    y,
+    width,
+    height,
+    type,
+    kindOf,
+    kinds,
+    sums.areaByCode,
+    sums.bounds,
+    sums.matsOfKind,
+  );
   return table;
 }
 
@@ -190,34 +215,58 @@ class KindOfMat implements MatKind {
   ) {}
 }
 
+/** Starting values of the sums, read from module constants (see {@link writeRows}). */
+const FAR = Infinity;
+const NEAR = -Infinity;
+
 /**
  * Writes every row and gathers the table's sums in the same pass (design order); returns the placed
- * area. (The hot loop ends its function: DEVELOPERS.md.)
+ * area. What the loop reads comes in as arguments and the loop nearly ends the function: a function V8
+ * compiles after its first call would otherwise find no type feedback for code before the loop (the
+ * first call ran it before the function had a feedback vector) and be thrown away at entry, running
+ * the whole loop in the interpreter again (DEVELOPERS.md).
  */
-function writeRows(table: TableInProgress, blocks: readonly Block[]): number {
-  const { x: xs, y: ys, width: widths, height: heights, type: types, kindOf, kinds, sums } = table;
-  const { areaByCode, bounds, matsOfKind } = sums;
+function writeRows(
+  table: TableInProgress,
+  blocks: readonly Block[],
+  /** The first mat, its kind and that kind's size (m), found by the caller; null and −1 without mats. */
+  firstMat: Mat | null,
+  firstKind: number,
+  firstWidth: number,
+  firstHeight: number,
+  xs: Float64Array,
+  ys: Float64Array,
+  widths: Float64Array,
+  heights: Float64Array,
+  types: Uint8Array,
+  kindOf: Int32Array,
+  kinds: readonly MatKind[],
+  areaByCode: Float64Array,
+  bounds: Float64Array,
+  matsOfKind: number[],
+): number {
   let placedArea = 0;
-  let minX = Infinity;
-  let minY = Infinity;
-  let maxX = -Infinity;
-  let maxY = -Infinity;
-  let areaWidth = Number.NaN;
-  let areaHeight = Number.NaN;
+  let minX = FAR;
+  let minY = FAR;
+  let maxX = NEAR;
+  let maxY = NEAR;
+  // Sizes are positive: −1 matches none.
+  let areaWidth = -1;
+  let areaHeight = -1;
   let area = 0;
   let sumCode = -1;
   let codeArea = 0;
   // The box whose right (bottom) edge is the far one so far: its left (top) and width (height).
-  let rightX = Number.NaN;
-  let rightWidth = Number.NaN;
-  let bottomY = Number.NaN;
-  let bottomHeight = Number.NaN;
+  let rightX = 0;
+  let rightWidth = -1;
+  let bottomY = 0;
+  let bottomHeight = -1;
   // Consecutive mats are nearly always of one kind in a tiled array, so the last kind is tried first
   // before building a key; strips come in runs of one type, so the last type's code likewise.
-  let last: Mat | null = null;
-  let lastKind = -1;
-  let lastWidth = 0;
-  let lastHeight = 0;
+  let last = firstMat;
+  let lastKind = firstKind;
+  let lastWidth = firstWidth;
+  let lastHeight = firstHeight;
   let runType: BlockType | null = null;
   let runCode = -1;
   for (let i = 0; i < blocks.length; i++) {
@@ -279,14 +328,14 @@ function writeRows(table: TableInProgress, blocks: readonly Block[]): number {
     codeArea += area;
     areaByCode[code] = codeArea;
     // Comparisons rather than Math.min/max calls: coordinates are finite (restore checks them).
-    if (x < minX) bounds[0] = minX = x;
-    if (y < minY) bounds[1] = minY = y;
+    if (x < minX) minX = x;
+    if (y < minY) minY = y;
     // x + w rounds monotonically in x: a box of the far edge's width starting no further right ends no
     // further right.
     if (w !== rightWidth || x > rightX) {
       const right = x + w;
       if (right > maxX) {
-        bounds[2] = maxX = right;
+        maxX = right;
         rightX = x;
         rightWidth = w;
       }
@@ -294,12 +343,18 @@ function writeRows(table: TableInProgress, blocks: readonly Block[]): number {
     if (h !== bottomHeight || y > bottomY) {
       const bottom = y + h;
       if (bottom > maxY) {
-        bounds[3] = maxY = bottom;
+        maxY = bottom;
         bottomY = y;
         bottomHeight = h;
       }
     }
   }
+  // After the loop, not in it: a store made only when the box grows may never have run (and so have
+  // no type feedback) when V8 compiles the loop, and would throw the compiled loop away mid-way.
+  bounds[0] = minX;
+  bounds[1] = minY;
+  bounds[2] = maxX;
+  bounds[3] = maxY;
   return placedArea;
 }
 

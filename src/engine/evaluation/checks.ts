@@ -128,25 +128,31 @@ class IssueGrouping {
  * Where the run of mats starting at k ends: mats with every line served and the same figures fall in
  * the same groups, and a die lists them in runs.
  */
-function runEnd(mats: MatTable, k: number): number {
-  const { figureIndex, unsensedBitlines, undrivenWordlines } = mats;
-  if (unsensedBitlines[k] !== 0 || undrivenWordlines[k] !== 0) return k + 1;
-  const figures = figureIndex[k];
-  let end = k + 1;
+function runEnd(
+  count: number,
+  figureIndex: Int32Array,
+  unsensedBitlines: Float64Array,
+  undrivenWordlines: Int32Array,
+  k: number,
+): number {
+  // Every operation is in the loop (none before it): see geometry/blockTable.ts, writeRows.
+  let end = k;
+  do end++;
   while (
-    end < mats.count &&
-    figureIndex[end] === figures &&
+    end < count &&
+    unsensedBitlines[k] === 0 &&
+    undrivenWordlines[k] === 0 &&
+    figureIndex[end] === figureIndex[k] &&
     unsensedBitlines[end] === 0 &&
     undrivenWordlines[end] === 0
-  )
-    end++;
+  );
   return end;
 }
 
 /** First pass: each group's mat count and its first few names, run by run in mat order. */
 function countGroups(mats: MatTable, grouping: IssueGrouping): void {
   for (let k = 0; k < mats.count;) {
-    const end = runEnd(mats, k);
+    const end = runEnd(mats.count, mats.figureIndex, mats.unsensedBitlines, mats.undrivenWordlines, k);
     const groups = grouping.groupsOf(k);
     for (let g = 0; g < groups.length; g++) {
       const group = groups[g] as IssueGroup;
@@ -161,7 +167,7 @@ function countGroups(mats: MatTable, grouping: IssueGrouping): void {
 /** Second pass: each group's mat ids, into lists of exactly the counted length (see collectFindings). */
 function listGroupIds(mats: MatTable, grouping: IssueGrouping): void {
   for (let k = 0; k < mats.count;) {
-    const end = runEnd(mats, k);
+    const end = runEnd(mats.count, mats.figureIndex, mats.unsensedBitlines, mats.undrivenWordlines, k);
     const groups = grouping.groupsOf(k);
     for (let g = 0; g < groups.length; g++) {
       const group = groups[g] as IssueGroup;

@@ -22,7 +22,20 @@ export function refreshRows(table: BlockTable): number {
     facts.wordlines[k] = kind.geometry.wordlineCount;
   }
   const bands = new Map<number, Map<number, number>>();
-  collectBands(table, facts, bands);
+  const { type, kindOf, x, y, width, height } = table;
+  collectBands(
+    table.count,
+    type,
+    kindOf,
+    x,
+    y,
+    width,
+    height,
+    facts.refreshed,
+    facts.vertical,
+    facts.wordlines,
+    bands,
+  );
   let rows = 0;
   for (const byExtent of bands.values()) for (const r of byExtent.values()) rows += r;
   return rows;
@@ -33,24 +46,35 @@ export function refreshRows(table: BlockTable): number {
  * then by extent. Mats of one band mostly follow each other in a tiled design, so the band of the
  * previous mat is tried first. (The hot loop ends the function: see DEVELOPERS.md.)
  */
-function collectBands(table: BlockTable, facts: KindFacts, bands: Map<number, Map<number, number>>): void {
-  let lastKey = Number.NaN;
-  let lastExtent = Number.NaN;
+function collectBands(
+  count: number,
+  type: Uint8Array,
+  kindOf: Int32Array,
+  x: Float64Array,
+  y: Float64Array,
+  width: Float64Array,
+  height: Float64Array,
+  refreshed: Uint8Array,
+  verticalKind: Uint8Array,
+  wordlinesOfKind: Float64Array,
+  bands: Map<number, Map<number, number>>,
+): void {
+  // Nothing before the loop reads a property (see blockTable.ts, writeRows): no grid position is −1, and
+  // lengths are positive.
+  let lastKey = -1;
+  let lastExtent = -1;
   let lastBand: Map<number, number> | null = null;
   let lastRows = 0;
   // The band of the previous mat by its start and extent as read (m): equal readings give equal grid
   // positions, so a mat in the same row as the one before needs no rounding.
-  let lastStart = Number.NaN;
-  let lastLength = Number.NaN;
+  let lastStart = 0;
+  let lastLength = -1;
   let lastVertical = false;
-  const { refreshed, vertical: verticalKind, wordlines: wordlinesOfKind } = facts;
-  const { type, kindOf, x, y, width, height } = table;
-  const kindCount = refreshed.length;
-  for (let i = 0; i < table.count; i++) {
+  for (let i = 0; i < count; i++) {
     if (type[i] !== MAT_CODE) continue;
     const k = kindOf[i] as number;
     // Static cells need no refresh and add no rows.
-    if (!(k >= 0 && k < kindCount) || refreshed[k] === 0) continue;
+    if (!(k >= 0 && k < refreshed.length) || refreshed[k] === 0) continue;
     const vertical = verticalKind[k] === 1;
     const at = (vertical ? y[i] : x[i]) as number;
     const length = (vertical ? height[i] : width[i]) as number;

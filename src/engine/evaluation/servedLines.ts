@@ -144,6 +144,8 @@ function grownInts(list: Int32Array): Int32Array {
 }
 
 const SCRATCH = new ContactScratch();
+/** −tolerance as a constant: negating in the pass would be an operation needing type feedback. */
+const NEGATIVE_TOLERANCE = -ABUTMENT_TOLERANCE;
 const LINES = new ServedLines();
 /** The record an open-bit-line mat's matConnections fills. */
 const OPEN_RECORD = emptyConnections();
@@ -159,7 +161,40 @@ export function connectAllMats(
   serving: MatTableBuilder,
 ): ServedLines {
   LINES.reset(matCount);
-  connectEachMat(table, neighbours, new KindLines(table.kinds), serving, LINES);
+  const kinds = new KindLines(table.kinds);
+  const lines = LINES;
+  const scratch = SCRATCH;
+  connectEachMat(
+    table,
+    neighbours,
+    kinds,
+    serving,
+    lines,
+    table.count,
+    table.x,
+    table.y,
+    table.width,
+    table.height,
+    table.type,
+    table.kindOf,
+    neighbours.start,
+    neighbours.end,
+    neighbours.list,
+    kinds.vertical,
+    kinds.open,
+    kinds.senseEdgeReach,
+    kinds.driveEdgeReach,
+    lines.position,
+    lines.unsensedBitlines,
+    lines.undrivenWordlines,
+    lines.senseAmpEnds,
+    lines.unpartneredBitlines,
+    lines.servedKey,
+    scratch.senseSpans,
+    scratch.driveSpans,
+    scratch.senseAmps,
+    scratch.drivers,
+  );
   return LINES;
 }
 
@@ -195,19 +230,39 @@ function connectEachMat(
   kinds: KindLines,
   serving: MatTableBuilder,
   out: ServedLines,
+  // What the loop reads, as arguments: code before the loop that read properties would have no type
+  // feedback when V8 compiles the function after its first call (that call ran it before the function
+  // had a feedback vector), and the compiled code would be thrown away at entry (see blockTable.ts,
+  // writeRows).
+  blockCount: number,
+  x: Float64Array,
+  y: Float64Array,
+  width: Float64Array,
+  height: Float64Array,
+  type: Uint8Array,
+  kindOf: Int32Array,
+  start: Int32Array,
+  end: Int32Array,
+  list: Int32Array,
+  vertical: Uint8Array,
+  open: Uint8Array,
+  senseEdgeReach: Float64Array,
+  driveEdgeReach: Float64Array,
+  position: Int32Array,
+  unsensedBitlines: Float64Array,
+  undrivenWordlines: Float64Array,
+  senseAmpEnds: Uint8Array,
+  unpartneredBitlines: Float64Array,
+  servedKey: Int32Array,
+  // Scratch lists (SCRATCH's), replaced by bigger ones when a mat meets more strips.
+  senseSpans: Float64Array,
+  driveSpans: Float64Array,
+  senseAmps: Int32Array,
+  drivers: Int32Array,
 ): void {
   const tol = ABUTMENT_TOLERANCE;
-  const negativeTol = -ABUTMENT_TOLERANCE;
-  const { x, y, width, height, type, kindOf } = table;
-  const { start, end, list } = neighbours;
-  const { vertical, open, senseEdge, driveEdge, senseEdgeReach, driveEdgeReach } = kinds;
-  const { position, unsensedBitlines, undrivenWordlines, senseAmpEnds, unpartneredBitlines, servedKey } = out;
+  const negativeTol = NEGATIVE_TOLERANCE;
   const scratch = SCRATCH;
-  let senseSpans = scratch.senseSpans;
-  let driveSpans = scratch.driveSpans;
-  let senseAmps = scratch.senseAmps;
-  let drivers = scratch.drivers;
-  const blockCount = table.count;
   for (let at = 0, k = 0; at < blockCount; at++) {
     if (type[at] !== MAT_CODE) continue;
     const kind = kindOf[at] as number;
@@ -324,7 +379,7 @@ function connectEachMat(
         : uncoveredLineCount(
             senseSpans,
             senseCount,
-            senseEdge[kind] as number,
+            kinds.senseEdge[kind] as number,
             tol,
             kinds.bitlinePitch[kind] as number,
             kinds.bitlineCount[kind] as number,
@@ -335,7 +390,7 @@ function connectEachMat(
         : uncoveredLineCount(
             driveSpans,
             driveCount,
-            driveEdge[kind] as number,
+            kinds.driveEdge[kind] as number,
             tol,
             kinds.wordlinePitch[kind] as number,
             kinds.wordlineCount[kind] as number,

@@ -253,23 +253,30 @@ let runStarts = new Int32Array(1024);
 
 /**
  * The sums over all mats, mat by mat in design order (so each floating-point sum is the same to the
- * bit), into `out` (slots above), and the first mat of each run of mats sharing figures into
- * {@link runStarts} (returns how many runs). (Each hot loop ends its function: code after a loop V8
- * compiled while it ran has no type feedback and is thrown away.)
+ * bit), into `out` (slots above), and the first mat of each run of mats sharing figures into `runs`
+ * (returns how many runs). What the loop reads comes in as arguments (see geometry/blockTable.ts,
+ * writeRows).
  */
-function matSums(mats: MatTable, addends: Float64Array, out: Float64Array): number {
-  if (runStarts.length < mats.count) runStarts = new Int32Array(mats.count);
-  const runs = runStarts;
-  const { figureIndex, figures } = mats;
+function matSums(
+  count: number,
+  figureIndex: Int32Array,
+  figures: readonly MatFigures[],
+  addends: Float64Array,
+  runs: Int32Array,
+  out: Float64Array,
+  /** The first mat's figures index and whether it starts a run (1; the caller wrote runs[0] = 0), or 0 and 0 without mats. */
+  firstIndex: number,
+  firstRuns: number,
+): number {
   let bits = 0;
   let usableBits = 0;
   let cellArea = 0;
   let standbyPower = 0;
   let heldBits = 0;
   let refreshEnergy = 0;
-  let runCount = 0;
-  let previous = -1;
-  for (let k = 0; k < mats.count; k++) {
+  let runCount = firstRuns;
+  let previous = firstIndex;
+  for (let k = 0; k < count; k++) {
     const i = figureIndex[k] as number;
     const at = SUM_SLOTS * i;
     bits += addends[at + BITS] as number;
@@ -279,7 +286,7 @@ function matSums(mats: MatTable, addends: Float64Array, out: Float64Array): numb
     heldBits += addends[at + HELD_BITS] as number;
     refreshEnergy += addends[at + REFRESH_ENERGY] as number;
     if (i !== previous) {
-      if (previous < 0 || figures[i] !== figures[previous]) runs[runCount++] = k;
+      if (figures[i] !== figures[previous]) runs[runCount++] = k;
       previous = i;
     }
   }
@@ -308,7 +315,18 @@ export function computeTotals(
   overlaps: readonly PositionedOverlap[],
 ): Totals {
   const sums = new Float64Array(SUM_SLOTS);
-  const runCount = matSums(mats, addendsOf(mats.figures), sums);
+  if (runStarts.length < mats.count) runStarts = new Int32Array(mats.count);
+  runStarts[0] = 0;
+  const runCount = matSums(
+    mats.count,
+    mats.figureIndex,
+    mats.figures,
+    addendsOf(mats.figures),
+    runStarts,
+    sums,
+    mats.count > 0 ? (mats.figureIndex[0] as number) : 0,
+    mats.count > 0 ? 1 : 0,
+  );
   const bits = sums[BITS] as number;
   const usableBits = sums[USABLE_BITS] as number;
   const cellArea = sums[CELL_AREA] as number;
