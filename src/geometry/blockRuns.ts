@@ -31,7 +31,7 @@ export class BlockRuns {
 /**
  * The runs of a table, with each block's code: blocks of different codes never share a run. `margin`
  * (m, ≥ 0) decides which runs count as touching. Returns null when some box is not finite or has a
- * negative width, or when the blocks do not form long runs (more than `maxRuns` of them), so that a
+ * negative width or height, or when the blocks do not form long runs (more than `maxRuns` of them), so that a
  * caller can take its general path having paid for one pass only.
  */
 export function blockRuns(boxes: Boxes, code: Uint8Array, margin: number, maxRuns: number): BlockRuns | null {
@@ -115,6 +115,9 @@ function describeRuns(
     const runBottom = (y[i] as number) + (height[i] as number);
     const runRight = (x[last] as number) + (width[last] as number);
     if (!Number.isFinite((x[i] as number) + runRight + runBottom)) return false;
+    // A bottom above the top (negative height) takes the general path too: the grid bins such a box
+    // into no cell, and its answer is the one to give.
+    if (!(runBottom >= (y[i] as number))) return false;
     top[r] = y[i] as number;
     bottom[r] = runBottom;
     codes[r] = code[i] as number;

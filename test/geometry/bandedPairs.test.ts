@@ -120,8 +120,10 @@ describe('bandedNeighbourTable: the grid pass by runs of blocks', () => {
           const code = Uint8Array.from(blocks, (b) => b.code);
           const group = Uint8Array.from(blocks, (b) => groupOf[b.code] as number);
           const banded = bandedNeighbourTable(boxes, margin, code, groupOf, ANY_BOXES);
-          // A right edge left of the left one (a nudge can make one) is left to the grid, as is a lone block.
-          if (blocks.length < 2 || blocks.some((b) => b.rect.x + b.rect.width < b.rect.x)) {
+          // An edge before its opposite one (a nudge can make one) is left to the grid, as is a lone block.
+          const backwards = (b: Coded) =>
+            b.rect.x + b.rect.width < b.rect.x || b.rect.y + b.rect.height < b.rect.y;
+          if (blocks.length < 2 || blocks.some(backwards)) {
             expect(banded).toBeNull();
             return;
           }
@@ -138,7 +140,7 @@ describe('bandedNeighbourTable: the grid pass by runs of blocks', () => {
     );
   }, 60_000);
 
-  it('leaves floorplans without long runs to the grid, and refuses non-finite boxes and negative widths', () => {
+  it('leaves floorplans without long runs to the grid, and refuses non-finite boxes and negative sizes', () => {
     const scattered = boxesOf(
       Array.from({ length: 40 }, (_, i) => ({
         x: (i % 7) * MICRON,
@@ -158,6 +160,9 @@ describe('bandedNeighbourTable: the grid pass by runs of blocks', () => {
     expect(bandedNeighbourTable(boxesOf(row(NaN)), 0, eight, grouping)).toBeNull();
     const backwards = row(0).map((r, i) => (i === 3 ? { ...r, width: -MICRON } : r));
     expect(bandedNeighbourTable(boxesOf(backwards), 0, eight, grouping)).toBeNull();
+    // A negative height, even by less than an ulp of y: the grid bins such a box into no cell.
+    const upside = row(0).map((r, i) => (i === 0 ? { ...r, y: MICRON, height: -1e-21 } : r));
+    expect(bandedNeighbourTable(boxesOf(upside), 0, eight, grouping)).toBeNull();
   });
 
   it('cuts a row written left to right into one run, and breaks it where a block steps back or changes', () => {
