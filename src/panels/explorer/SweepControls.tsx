@@ -1,6 +1,11 @@
 import type { StripSizes } from '../../designs/partitionPlan';
 import { formatBits, formatWholeNumber } from '../../model/units';
-import { MAX_SWEEP_POINTS, SWEEP_POINT_LIMIT_REASON, sweepSize } from '../../explore/sweep';
+import {
+  MAX_SWEEP_POINTS,
+  SWEEP_POINT_LIMIT_REASON,
+  sweepSize,
+  type SweepRequest,
+} from '../../explore/sweep';
 import {
   DEFAULT_SPARE_SWEEP,
   processChoices,
@@ -62,14 +67,46 @@ export function BankControls({ settings, onChange }: Omit<Props, 'design'>) {
   );
 }
 
-export function SweepControls({ design, settings, onChange }: Props) {
+/**
+ * Run, or Cancel while a sweep runs. Its own component: it follows the sweep's status, so starting and
+ * ending a sweep re-render this button and not the settings around it.
+ */
+function RunButton({ request, size }: { readonly request: SweepRequest; readonly size: number }) {
   // The status only: the run object changes with every chart update while a sweep runs.
   const status = useExploreStore((s) => s.run.status);
   const startSweep = useExploreStore((s) => s.startSweep);
   const cancelSweep = useExploreStore((s) => s.cancelSweep);
+  return status === 'running' ? (
+    <button
+      type="button"
+      className="primary"
+      data-testid="cancel-sweep"
+      title="Stop the sweep; the points so far stay"
+      onClick={cancelSweep}
+    >
+      Cancel
+    </button>
+  ) : (
+    <button
+      type="button"
+      className="primary"
+      data-testid="run-sweep"
+      disabled={size === 0 || size > MAX_SWEEP_POINTS}
+      onClick={() => startSweep(request, new SweepTable(), size)}
+      title={
+        size > MAX_SWEEP_POINTS
+          ? `at most ${formatWholeNumber(MAX_SWEEP_POINTS)} points`
+          : 'Assess every partition of the sweep and chart it'
+      }
+    >
+      Run sweep
+    </button>
+  );
+}
+
+export function SweepControls({ design, settings, onChange }: Props) {
   const request = sweepRequestFor(settings, design);
   const size = sweepSize(request);
-  const running = status === 'running';
   const toggle = (list: readonly string[], id: string, on: boolean) =>
     on ? [...list.filter((x) => x !== id), id] : list.filter((x) => x !== id);
   const choices = processChoices(design);
@@ -172,32 +209,7 @@ export function SweepControls({ design, settings, onChange }: Props) {
       </p>
       <div className="sweep-run">
         <span data-testid="sweep-size">{formatWholeNumber(size)} points</span>
-        {running ? (
-          <button
-            type="button"
-            className="primary"
-            data-testid="cancel-sweep"
-            title="Stop the sweep; the points so far stay"
-            onClick={cancelSweep}
-          >
-            Cancel
-          </button>
-        ) : (
-          <button
-            type="button"
-            className="primary"
-            data-testid="run-sweep"
-            disabled={size === 0 || size > MAX_SWEEP_POINTS}
-            onClick={() => startSweep(request, new SweepTable(), size)}
-            title={
-              size > MAX_SWEEP_POINTS
-                ? `at most ${formatWholeNumber(MAX_SWEEP_POINTS)} points`
-                : 'Assess every partition of the sweep and chart it'
-            }
-          >
-            Run sweep
-          </button>
-        )}
+        <RunButton request={request} size={size} />
       </div>
       <p className="hint" data-testid="sweep-limit">
         At most {formatWholeNumber(MAX_SWEEP_POINTS)} points a sweep: {SWEEP_POINT_LIMIT_REASON}.
