@@ -2,6 +2,7 @@ import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { App } from './app/App';
 import { loadChecks } from './io/checksOnDemand';
+import { loadEditPath } from './store/editPathOnDemand';
 import { documentSession } from './app/session';
 import { primeEdits } from './app/editPrimer';
 import { primeTextLengths } from './app/textLengthPrimer';
@@ -31,6 +32,8 @@ void documentSession
     // Restore and the edit check (with the schema library) load after the first paint: edits made
     // before they arrive are checked when they do (store/appStore.ts).
     requestAnimationFrame(() => setTimeout(() => void loadChecks(), 0));
+    // So does the edit path (engine/editPath.ts): until it arrives, edits are evaluated whole.
+    requestAnimationFrame(() => setTimeout(() => void loadEditPath().catch(() => undefined), 0));
     // The first edit after opening a whole die finds the design's text length measured (io/designTextLength.ts).
     primeTextLengths(useAppStore);
     // ... and the layout checks' edit index built (engine reportState.prepareForEdits).

@@ -1,6 +1,6 @@
-import { prepareForEdits } from '../engine';
 import type { Report } from '../engine';
 import type { AppStore } from '../store/appStore';
+import { loadEditPath, loadedEditPath } from '../store/editPathOnDemand';
 import { requestIdle } from './idleTime';
 
 /**
@@ -14,7 +14,15 @@ export function primeEdits(store: AppStore): () => void {
   const run = () => {
     const report = waiting;
     waiting = null;
-    if (report) prepareForEdits(report);
+    if (!report) return;
+    // The edit path loads after the first paint; the index is built once it is here.
+    const path = loadedEditPath();
+    if (path) path.prepareForEdits(report);
+    else
+      loadEditPath().then(
+        (loaded) => loaded.prepareForEdits(report),
+        () => undefined,
+      );
   };
   const start = (report: Report) => {
     if (waiting === null) requestIdle(run);

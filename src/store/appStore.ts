@@ -1,6 +1,7 @@
 import { create } from 'zustand';
 import type { Command } from '../commands/command';
-import { editReport, evaluate, type Report } from '../engine';
+import { evaluate, type Report } from '../engine';
+import { loadedEditPath } from './editPathOnDemand';
 import { loadChecks, loadedChecks } from '../io/checksOnDemand';
 import type { Design } from '../model/design';
 import { demoDesign } from '../designs/demoDesign';
@@ -81,17 +82,19 @@ const reports = new WeakMap<Design, Report>();
 
 /**
  * The document state after a change from `from` to the new present. An edit of a few blocks in place
- * (a move, new cell counts) is evaluated through the live preview's incremental path; anything else is
- * evaluated whole. A document seen before takes its report from the cache.
+ * (a move, new cell counts) is evaluated through the live preview's incremental path (once it has loaded,
+ * store/editPathOnDemand.ts); anything else is evaluated whole. A document seen before takes its report from the cache.
  */
 function documentState(history: History<Design>, from?: { design: Design; report: Report }) {
   const design = history.present;
   const changed = from ? blocksEditedInPlace(from.design, design, INCREMENTAL_EDIT_LIMIT) : null;
   let report = reports.get(design);
   if (!report) {
+    // Before the edit path has loaded (just after the first paint) the edit is evaluated whole: same report.
+    const path = loadedEditPath();
     report =
-      from && changed && changed.length > 0
-        ? editReport(from.design, from.report, design, changed)
+      path && from && changed && changed.length > 0
+        ? path.editReport(from.design, from.report, design, changed)
         : evaluate(design);
     reports.set(design, report);
   }
