@@ -40,7 +40,7 @@ export function backToBackStrips(
 }
 
 /** Strip types checked, in the order of their findings. */
-const STRIP_CODES = [SENSE_AMP_STRIP_CODE, WORDLINE_DRIVER_STRIP_CODE] as const;
+export const STRIP_CODES = [SENSE_AMP_STRIP_CODE, WORDLINE_DRIVER_STRIP_CODE] as const;
 
 /** What the check leaves for the next edit: each strip's orientation and the pairs per strip type. */
 export interface BackToBackState {
@@ -50,7 +50,7 @@ export interface BackToBackState {
   readonly findings: readonly Finding[];
 }
 
-function pairFindings(table: BlockTable, pairsByType: readonly Int32Array[]): Finding[] {
+export function pairFindings(table: BlockTable, pairsByType: readonly Int32Array[]): Finding[] {
   const findings: Finding[] = [];
   for (const pairs of pairsByType) {
     const count = pairs.length / 2;
@@ -77,57 +77,10 @@ function pairFindings(table: BlockTable, pairsByType: readonly Int32Array[]): Fi
 }
 
 /**
- * The check after an edit in place: only strips the edit moved, or whose served mats it changed (listed
- * before or now by a mat it evaluated again), can gain or lose a partner. Their orientation is read again
- * from the mats serving them, their pairs are dropped and searched again among the strips `near` them
- * (table positions within the abutment tolerance), and every other pair is kept.
- */
-export function backToBackAfterEdit(
-  previous: BackToBackState,
-  table: BlockTable,
-  mats: MatTable,
-  dirty: ReadonlySet<number>,
-  served: readonly [ServedMats, ServedMats],
-  near: (i: number) => readonly number[],
-): BackToBackState {
-  const facing = previous.facing.slice();
-  for (const s of dirty) facing[s] = orientationOf(table, mats, served, s);
-  const pairs = STRIP_CODES.map((code, c) => {
-    const kept: number[] = [];
-    const old = previous.pairs[c] as Int32Array;
-    for (let n = 0; n < old.length; n += 2) {
-      const a = old[n] as number;
-      const b = old[n + 1] as number;
-      if (!dirty.has(a) && !dirty.has(b)) kept.push(a, b);
-    }
-    for (const s of dirty) {
-      if (table.type[s] !== code || facing[s] === UNSERVING) continue;
-      for (const j of near(s)) {
-        if (j === s || table.type[j] !== code || facing[j] !== facing[s]) continue;
-        if (meets(table, facing[s] as number, s, j)) kept.push(s, j);
-        // A pair of two dirty strips is found from its first strip.
-        if (!dirty.has(j) && meets(table, facing[s] as number, j, s)) kept.push(j, s);
-      }
-    }
-    return inFindingOrder(table, facing, kept);
-  });
-  const same = pairs.every((p, c) => samePairs(p, previous.pairs[c] as Int32Array));
-  // A changed strip the finding names may have a new name.
-  const named = pairs.some((p) => p.some((i) => dirty.has(i)));
-  return { facing, pairs, findings: same && !named ? previous.findings : pairFindings(table, pairs) };
-}
-
-function samePairs(a: Int32Array, b: Int32Array): boolean {
-  if (a.length !== b.length) return false;
-  for (let n = 0; n < a.length; n++) if (a[n] !== b[n]) return false;
-  return true;
-}
-
-/**
  * The order the whole-table search gives: strips lying across before strips standing, then by the first
  * strip's position, the second's start across, the second's position.
  */
-function inFindingOrder(table: BlockTable, facing: Uint8Array, flat: readonly number[]): Int32Array {
+export function inFindingOrder(table: BlockTable, facing: Uint8Array, flat: readonly number[]): Int32Array {
   const order: number[] = [];
   for (let n = 0; n < flat.length; n += 2) order.push(n);
   const across = (j: number) =>
@@ -148,7 +101,7 @@ function inFindingOrder(table: BlockTable, facing: Uint8Array, flat: readonly nu
 }
 
 /** True when strip `i`'s far long edge meets strip `j`'s near one and they overlap along the strip. */
-function meets(table: BlockTable, orientation: number, i: number, j: number): boolean {
+export function meets(table: BlockTable, orientation: number, i: number, j: number): boolean {
   const lying = orientation === ALONG_HORIZONTAL_EDGE;
   const across = lying ? table.y : table.x;
   const thickness = lying ? table.height : table.width;
@@ -168,7 +121,7 @@ function meets(table: BlockTable, orientation: number, i: number, j: number): bo
  * The orientation {@link servedEdgeOrientation} gives strip `s`: that of the last mat in report order
  * serving it, its driver part after its sense-amplifier part.
  */
-function orientationOf(
+export function orientationOf(
   table: BlockTable,
   mats: MatTable,
   served: readonly [ServedMats, ServedMats],

@@ -7,16 +7,8 @@ import {
 import { DecoderEdges } from './decoderEdges';
 import { groupLabel } from './findingText';
 import type { MatTable } from './matTable';
-import {
-  ComponentsOnDemand,
-  isReached,
-  reachComponentsAfterEdit,
-  reachedMats,
-  type LayoutEdit,
-  type ReachComponents,
-  type ServingPart,
-} from './reachComponents';
-import { reachSeeds, seedAt, seedsOfChecks, type SeedCheck } from './reachSeeds';
+import { ComponentsOnDemand, type ReachComponents, type ServingPart } from './reachComponents';
+import { seedsOfChecks, type SeedCheck } from './reachSeeds';
 import { ServingForest } from './servingForest';
 import type { Finding } from './report';
 
@@ -55,12 +47,12 @@ const REACH_CHECKS: readonly ReachCheck[] = [
 ];
 
 /** A mat with no serving strip in `part` already has an error for its unserved lines. */
-function hasServing(mats: MatTable, k: number, part: ServingPart): boolean {
+export function hasServing(mats: MatTable, k: number, part: ServingPart): boolean {
   return mats.servingOffsets[3 * k + part] !== mats.servingOffsets[3 * k + part + 1];
 }
 
 /** Mats with at least one serving strip in the check's part that no decoder reaches, as one grouped finding. */
-function unreachedFinding(mats: MatTable, reached: Uint8Array, check: ReachCheck): Finding | null {
+export function unreachedFinding(mats: MatTable, reached: Uint8Array, check: ReachCheck): Finding | null {
   const ids: string[] = [];
   const labels: string[] = [];
   for (let k = 0; k < mats.count; k++) {
@@ -96,7 +88,7 @@ export interface DecoderReachState {
  * One reach check of the whole design: the seeds, which trees of the serving forest hold one, and the mats
  * in the others. The components block by block are labelled only when an edit asks for them.
  */
-function reachResult(
+export function reachResult(
   mats: MatTable,
   matIndexAt: Int32Array,
   check: ReachCheck,
@@ -173,54 +165,4 @@ export function decoderReachFindings(state: DecoderReachState): Finding[] {
   const findings: Finding[] = [];
   for (const r of state.results) if (r.finding) findings.push(r.finding);
   return findings;
-}
-
-/**
- * The checks after an edit in place (see {@link LayoutEdit}): components are labelled again only where
- * the edit touched them, and a finding is listed again only when a mat's standing changed or it names a
- * changed block; otherwise the previous finding is kept as it was. A moved decoder changes the seeds of
- * whatever it leaves or meets, so the check of its type is done again whole.
- */
-export function decoderReachAfterEdit(
-  previous: DecoderReachState,
-  before: MatTable,
-  table: BlockTable,
-  mats: MatTable,
-  edit: LayoutEdit,
-): DecoderReachState {
-  let forest: ServingForest | null = null;
-  const results = previous.results.map((r) => {
-    const { check, edges } = r;
-    const full = () => {
-      const edges = DecoderEdges.of(table, check.decoderCode);
-      const seed = reachSeeds(table, edit.matIndexAt, edges, check.decoderCode, check.stripCode);
-      forest ??= ServingForest.of(mats, table);
-      return reachResult(mats, edit.matIndexAt, check, edges, seed, forest);
-    };
-    if (edit.changed.some((i) => table.type[i] === check.decoderCode)) return full();
-    const next = reachComponentsAfterEdit(r.reach, before, mats, edit, (i) =>
-      seedAt(table, edit.matIndexAt, edges, i, check.decoderCode, check.stripCode),
-    );
-    if (!next) return full();
-    const { reach, relabelled } = next;
-    const unreachedBefore = (i: number, k: number) =>
-      !isReached(r.reach, i) && hasServing(before, k, check.part);
-    const unreachedNow = (i: number, k: number) => !isReached(reach, i) && hasServing(mats, k, check.part);
-    let same = true;
-    for (const i of relabelled) {
-      const k = edit.matIndexAt[i] as number;
-      if (k >= 0 && unreachedBefore(i, k) !== unreachedNow(i, k)) {
-        same = false;
-        break;
-      }
-    }
-    // A changed mat the finding names may have a new name.
-    for (const i of edit.changed) {
-      const k = edit.matIndexAt[i] as number;
-      if (k >= 0 && unreachedNow(i, k)) same = false;
-    }
-    const finding = same ? r.finding : unreachedFinding(mats, reachedMats(reach, mats), check);
-    return { check, edges, reach, finding };
-  });
-  return { results };
 }

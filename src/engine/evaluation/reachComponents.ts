@@ -4,7 +4,7 @@ import type { MatTable } from './matTable';
 export type ServingPart = 0 | 1;
 
 /** Past this many strips listed again beside the table-wide list, the list is built again. */
-const MOST_PATCHED = 4096;
+export const MOST_PATCHED = 4096;
 
 /**
  * Which mats (report indices, ascending) each block serves in one part of the mats' serving lists. The
@@ -134,7 +134,7 @@ let queue = new Int32Array(1024);
  * Labels the component of table position `from` (a mat) with `labelNo`: breadth-first from a mat to the
  * blocks its serving list names, from a block to the mats it serves.
  */
-function walk(
+export function walk(
   from: number,
   labelNo: number,
   label: Int32Array,
@@ -252,51 +252,4 @@ export interface LayoutEdit {
   readonly redone: ReadonlySet<number>;
   /** For each table position, the index of its mat in the report, or −1 (the same before and after). */
   readonly matIndexAt: Int32Array;
-}
-
-/**
- * The components after an edit: only those holding a block the edit changed, a mat it evaluated again or
- * a block such a mat listed before or lists now are labelled again (any edge the edit added or removed
- * has both ends among those blocks, so every other component keeps its blocks and seeds). `seedAt` gives
- * the seed of a changed block. Returns the blocks labelled again beside the new components, or null when
- * the caller should label everything again.
- */
-export function reachComponentsAfterEdit(
-  previous: ReachComponents,
-  before: MatTable,
-  after: MatTable,
-  edit: LayoutEdit,
-  seedAt: (i: number) => boolean,
-): { readonly reach: ReachComponents; readonly relabelled: ReadonlySet<number> } | null {
-  const { part } = previous;
-  const touched = new Set<number>(edit.changed);
-  for (const k of edit.redone) touched.add(after.position[k] as number);
-  const served = previous.served.afterEdit(before, after, part, edit.redone, touched);
-  if (!served) return null;
-  let seed = previous.seed;
-  for (const i of edit.changed) {
-    const s = seedAt(i) ? 1 : 0;
-    if (seed[i] === s) continue;
-    if (seed === previous.seed) seed = seed.slice();
-    seed[i] = s;
-  }
-  // Every block of a touched component is labelled again.
-  const relabel = new Set<number>(touched);
-  const components = previous.components.slice();
-  for (const i of touched) {
-    const l = previous.label[i] as number;
-    const component = l >= 0 ? components[l] : undefined;
-    if (!component) continue;
-    for (const m of component.members) relabel.add(m);
-    components[l] = undefined;
-  }
-  const label = previous.label.slice();
-  for (const i of relabel) label[i] = -1;
-  const { matIndexAt } = edit;
-  for (const i of relabel) {
-    if ((matIndexAt[i] as number) < 0 || (label[i] as number) >= 0) continue;
-    components.push(walk(i, components.length, label, seed, after, matIndexAt, served, part));
-  }
-  if (components.length > previous.built + MOST_PATCHED) return null;
-  return { reach: { part, served, seed, label, components, built: previous.built }, relabelled: relabel };
 }

@@ -1,0 +1,212 @@
+/**
+ * The layout checks after an edit in place (same blocks in the same order): decoder reach and back-to-back
+ * strips checked again only around what the edit touched, starting from the state the report before it
+ * left. Part of the engine's edit path (engine/editPath.ts), which the app loads after its first paint;
+ * the whole-design checks are layoutFindings.ts. Tested against them on random edit chains
+ * (test/engine/layoutIncremental.test.ts).
+ */
+import type { BlockTable } from '../../geometry/blockTable';
+import {
+  backToBackStrips,
+  inFindingOrder,
+  meets,
+  orientationOf,
+  pairFindings,
+  STRIP_CODES,
+  type BackToBackState,
+} from './backToBackStrips';
+import { DecoderEdges } from './decoderEdges';
+import { hasServing, reachResult, unreachedFinding, type DecoderReachState } from './decoderReach';
+import { findingsOf, type LayoutState } from './layoutFindings';
+import type { MatTable } from './matTable';
+import {
+  isReached,
+  MOST_PATCHED,
+  reachedMats,
+  walk,
+  type LayoutEdit,
+  type ReachComponents,
+  type ServedMats,
+} from './reachComponents';
+import { reachSeeds, seedAt } from './reachSeeds';
+import { ServingForest, UNSERVING } from './servingForest';
+
+/**
+ * The layout checks after an edit in place (same blocks in the same order), from the state the report
+ * before it left: `before` is that report's mat table, `table` and `mats` the edited design's, `near` the
+ * table positions within the abutment tolerance of a block of the edited design. Equals
+ * {@link layoutState} of the edited design (tested against it on random edit chains).
+ */
+export function layoutStateAfterEdit(
+  previous: LayoutState,
+  before: MatTable,
+  table: BlockTable,
+  mats: MatTable,
+  edit: LayoutEdit,
+  near: (i: number) => readonly number[],
+): LayoutState {
+  const reach = decoderReachAfterEdit(previous.reach, before, table, mats, edit);
+  // Strips whose place or served mats changed: the changed blocks and what the redone mats listed or list.
+  const dirty = new Set<number>(edit.changed);
+  for (const k of edit.redone) {
+    for (const m of [before, mats]) {
+      const to = m.servingOffsets[3 * k + 2] as number;
+      for (let p = m.servingOffsets[3 * k] as number; p < to; p++) dirty.add(m.servingPositions[p] as number);
+    }
+  }
+  const servedIn = (part: number) => reach.results.find((r) => r.reach.part === part)?.reach.served;
+  const served0 = servedIn(0);
+  const served1 = servedIn(1);
+  const backToBack =
+    served0 && served1
+      ? backToBackAfterEdit(previous.backToBack, table, mats, dirty, [served0, served1], near)
+      : backToBackStrips(table, mats);
+  const same =
+    backToBack.findings === previous.backToBack.findings &&
+    reach.results.every((r, n) => r.finding === previous.reach.results[n]?.finding);
+  return { reach, backToBack, findings: same ? previous.findings : findingsOf(mats, reach, backToBack) };
+}
+
+/**
+ * The check after an edit in place: only strips the edit moved, or whose served mats it changed (listed
+ * before or now by a mat it evaluated again), can gain or lose a partner. Their orientation is read again
+ * from the mats serving them, their pairs are dropped and searched again among the strips `near` them
+ * (table positions within the abutment tolerance), and every other pair is kept.
+ */
+export function backToBackAfterEdit(
+  previous: BackToBackState,
+  table: BlockTable,
+  mats: MatTable,
+  dirty: ReadonlySet<number>,
+  served: readonly [ServedMats, ServedMats],
+  near: (i: number) => readonly number[],
+): BackToBackState {
+  const facing = previous.facing.slice();
+  for (const s of dirty) facing[s] = orientationOf(table, mats, served, s);
+  const pairs = STRIP_CODES.map((code, c) => {
+    const kept: number[] = [];
+    const old = previous.pairs[c] as Int32Array;
+    for (let n = 0; n < old.length; n += 2) {
+      const a = old[n] as number;
+      const b = old[n + 1] as number;
+      if (!dirty.has(a) && !dirty.has(b)) kept.push(a, b);
+    }
+    for (const s of dirty) {
+      if (table.type[s] !== code || facing[s] === UNSERVING) continue;
+      for (const j of near(s)) {
+        if (j === s || table.type[j] !== code || facing[j] !== facing[s]) continue;
+        if (meets(table, facing[s] as number, s, j)) kept.push(s, j);
+        // A pair of two dirty strips is found from its first strip.
+        if (!dirty.has(j) && meets(table, facing[s] as number, j, s)) kept.push(j, s);
+      }
+    }
+    return inFindingOrder(table, facing, kept);
+  });
+  const same = pairs.every((p, c) => samePairs(p, previous.pairs[c] as Int32Array));
+  // A changed strip the finding names may have a new name.
+  const named = pairs.some((p) => p.some((i) => dirty.has(i)));
+  return { facing, pairs, findings: same && !named ? previous.findings : pairFindings(table, pairs) };
+}
+
+function samePairs(a: Int32Array, b: Int32Array): boolean {
+  if (a.length !== b.length) return false;
+  for (let n = 0; n < a.length; n++) if (a[n] !== b[n]) return false;
+  return true;
+}
+
+/**
+ * The checks after an edit in place (see {@link LayoutEdit}): components are labelled again only where
+ * the edit touched them, and a finding is listed again only when a mat's standing changed or it names a
+ * changed block; otherwise the previous finding is kept as it was. A moved decoder changes the seeds of
+ * whatever it leaves or meets, so the check of its type is done again whole.
+ */
+export function decoderReachAfterEdit(
+  previous: DecoderReachState,
+  before: MatTable,
+  table: BlockTable,
+  mats: MatTable,
+  edit: LayoutEdit,
+): DecoderReachState {
+  let forest: ServingForest | null = null;
+  const results = previous.results.map((r) => {
+    const { check, edges } = r;
+    const full = () => {
+      const edges = DecoderEdges.of(table, check.decoderCode);
+      const seed = reachSeeds(table, edit.matIndexAt, edges, check.decoderCode, check.stripCode);
+      forest ??= ServingForest.of(mats, table);
+      return reachResult(mats, edit.matIndexAt, check, edges, seed, forest);
+    };
+    if (edit.changed.some((i) => table.type[i] === check.decoderCode)) return full();
+    const next = reachComponentsAfterEdit(r.reach, before, mats, edit, (i) =>
+      seedAt(table, edit.matIndexAt, edges, i, check.decoderCode, check.stripCode),
+    );
+    if (!next) return full();
+    const { reach, relabelled } = next;
+    const unreachedBefore = (i: number, k: number) =>
+      !isReached(r.reach, i) && hasServing(before, k, check.part);
+    const unreachedNow = (i: number, k: number) => !isReached(reach, i) && hasServing(mats, k, check.part);
+    let same = true;
+    for (const i of relabelled) {
+      const k = edit.matIndexAt[i] as number;
+      if (k >= 0 && unreachedBefore(i, k) !== unreachedNow(i, k)) {
+        same = false;
+        break;
+      }
+    }
+    // A changed mat the finding names may have a new name.
+    for (const i of edit.changed) {
+      const k = edit.matIndexAt[i] as number;
+      if (k >= 0 && unreachedNow(i, k)) same = false;
+    }
+    const finding = same ? r.finding : unreachedFinding(mats, reachedMats(reach, mats), check);
+    return { check, edges, reach, finding };
+  });
+  return { results };
+}
+
+/**
+ * The components after an edit: only those holding a block the edit changed, a mat it evaluated again or
+ * a block such a mat listed before or lists now are labelled again (any edge the edit added or removed
+ * has both ends among those blocks, so every other component keeps its blocks and seeds). `seedAt` gives
+ * the seed of a changed block. Returns the blocks labelled again beside the new components, or null when
+ * the caller should label everything again.
+ */
+export function reachComponentsAfterEdit(
+  previous: ReachComponents,
+  before: MatTable,
+  after: MatTable,
+  edit: LayoutEdit,
+  seedAt: (i: number) => boolean,
+): { readonly reach: ReachComponents; readonly relabelled: ReadonlySet<number> } | null {
+  const { part } = previous;
+  const touched = new Set<number>(edit.changed);
+  for (const k of edit.redone) touched.add(after.position[k] as number);
+  const served = previous.served.afterEdit(before, after, part, edit.redone, touched);
+  if (!served) return null;
+  let seed = previous.seed;
+  for (const i of edit.changed) {
+    const s = seedAt(i) ? 1 : 0;
+    if (seed[i] === s) continue;
+    if (seed === previous.seed) seed = seed.slice();
+    seed[i] = s;
+  }
+  // Every block of a touched component is labelled again.
+  const relabel = new Set<number>(touched);
+  const components = previous.components.slice();
+  for (const i of touched) {
+    const l = previous.label[i] as number;
+    const component = l >= 0 ? components[l] : undefined;
+    if (!component) continue;
+    for (const m of component.members) relabel.add(m);
+    components[l] = undefined;
+  }
+  const label = previous.label.slice();
+  for (const i of relabel) label[i] = -1;
+  const { matIndexAt } = edit;
+  for (const i of relabel) {
+    if ((matIndexAt[i] as number) < 0 || (label[i] as number) >= 0) continue;
+    components.push(walk(i, components.length, label, seed, after, matIndexAt, served, part));
+  }
+  if (components.length > previous.built + MOST_PATCHED) return null;
+  return { reach: { part, served, seed, label, components, built: previous.built }, relabelled: relabel };
+}
