@@ -219,6 +219,8 @@ test.describe('floorplan editor journeys', () => {
     // East handle: the right edge at mid-height (the demo mat is 36.864 µm square).
     const east = await app.worldPoint(mat.x + 36.864e-6, mat.y + 18.432e-6);
     await app.drag(east, { x: east.x - 30, y: east.y + 3 });
+    // The panel shows the commit once React has rendered it: wait for the field to change, then read it.
+    await expect(app.field('cells-per-wordline')).not.toHaveValue('512');
     const cells = Number(await app.field('cells-per-wordline').inputValue());
     expect(cells).toBeLessThan(512);
     expect(Number.isInteger(cells)).toBe(true);
