@@ -50,5 +50,7 @@ export const SOURCES = {
   gainCells:
     'P. Meinerzhagen, A. Teman, R. Giterman et al., Gain-Cell Embedded DRAMs for Low-Power VLSI Systems-on-Chip, Springer, 2018 (from memory)',
   arrhenius: 'Arrhenius law; K. Itoh, VLSI Memory Chip Design, Springer, 2001 (from memory)',
+  elmore: 'W. C. Elmore, J. Appl. Phys. 19, 1948 (first-moment delay)',
+  criticalArea: 'critical-area / kill-ratio yield modelling (Stapper; Maly) (from memory)',
   common: 'common practice (no source)',
 } as const;

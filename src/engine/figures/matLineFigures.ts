@@ -85,7 +85,7 @@ export const LINE_FIGURES = [
             ],
             method:
               'Single-pole development of the charge-sharing signal: half of it after τ·ln 2 (Elmore time constant of the access device into Cs in series with Cbl, plus the distributed bit line).',
-            source: 'W. C. Elmore, J. Appl. Phys. 19, 1948 (first-moment delay)',
+            source: SOURCES.elmore,
           }
         : {
             title: 'Read-bit-line sense time',

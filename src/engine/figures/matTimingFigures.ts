@@ -1,7 +1,6 @@
 import { input, SOURCES } from './explanation';
 import { matFigure } from './matFigure';
 
-const ELMORE = 'W. C. Elmore, J. Appl. Phys. 19, 1948 (first-moment delay)';
 const LATCH =
   'latch regeneration: B. Razavi, "The StrongARM Latch", IEEE SSC Magazine 7(2), 2015 (from memory)';
 const CHAIN = `JEDEC JESD79-4 (tRCD, tRAS, tRP, tRC); the first-order chain: ${SOURCES.common}`;
@@ -37,7 +36,7 @@ export const MAT_TIMING_FIGURES = [
               input('ΔV_dev', 'developed signal (the margin uses it)', f.senseSignal, 'voltage'),
             ],
             method: 'Single-pole development of the charge-sharing signal, Elmore time constant.',
-            source: `${SOURCES.keethBaker}; ${ELMORE}`,
+            source: `${SOURCES.keethBaker}; ${SOURCES.elmore}`,
           }
         : {
             symbol: 'ΔV',
@@ -167,7 +166,7 @@ export const MAT_TIMING_FIGURES = [
         input('V_res', 'residual tolerated', design.operating.equaliseResidual, 'voltage'),
       ],
       method: 'Differential-mode RC decay of the pair, Elmore first moment for the line.',
-      source: ELMORE,
+      source: SOURCES.elmore,
     }),
   }),
   matFigure({

@@ -48,7 +48,7 @@ export const TOTAL_YIELD_FIGURES = [
         method:
           'Poisson defects with kill ratios (critical-area share of each fault kind), plus cells whose retention is shorter than the refresh window.' +
           CAUTION,
-        source: 'critical-area / kill-ratio yield modelling (Stapper; Maly) (from memory)',
+        source: SOURCES.criticalArea,
       };
     },
   }),
@@ -65,7 +65,7 @@ export const TOTAL_YIELD_FIGURES = [
       formula: 'λ_row = N · Σ_mats D0·A_mat·k_WL',
       inputs: defectInputs(Y(r, d)),
       method: 'Poisson defects that open or short a whole word line.' + CAUTION,
-      source: 'critical-area / kill-ratio yield modelling (Stapper; Maly) (from memory)',
+      source: SOURCES.criticalArea,
     }),
   }),
   totalFigure({
