@@ -155,16 +155,7 @@ export class MatTableBuilder {
   /** Records mat k: design position, figures, unserved lines. */
   set(k: number, position: number, figures: MatFigures, unsensed: number, undriven: number): void {
     this.position[k] = position;
-    // Mats in a row nearly always share their figures: the last answer saves a map lookup per mat.
-    let index = figures === this.lastFigures ? this.lastIndex : this.figureIndexOf.get(figures);
-    if (index === undefined) {
-      index = this.figures.length;
-      this.figures.push(figures);
-      this.figureIndexOf.set(figures, index);
-    }
-    this.lastFigures = figures;
-    this.lastIndex = index;
-    this.figureIndex[k] = index;
+    this.figureIndex[k] = this.indexOfFigures(figures);
     this.unsensed[k] = unsensed;
     this.undriven[k] = undriven;
   }
@@ -181,6 +172,12 @@ export class MatTableBuilder {
 
   /** Gives mats from … to − 1 (whose lines are recorded) these figures, as {@link set} would one by one. */
   setFigures(from: number, to: number, figures: MatFigures): void {
+    this.figureIndex.fill(this.indexOfFigures(figures), from, to);
+  }
+
+  /** The index of `figures` in the table's list, added when new. */
+  private indexOfFigures(figures: MatFigures): number {
+    // Mats in a row nearly always share their figures: the last answer saves a map lookup per mat.
     let index = figures === this.lastFigures ? this.lastIndex : this.figureIndexOf.get(figures);
     if (index === undefined) {
       index = this.figures.length;
@@ -189,7 +186,7 @@ export class MatTableBuilder {
     }
     this.lastFigures = figures;
     this.lastIndex = index;
-    this.figureIndex.fill(index, from, to);
+    return index;
   }
 
   /** Records mat k's serving strips: the first `senseAmpCount` of `senseAmps`, then the first `driverCount` of `drivers` (design positions). */
