@@ -32,6 +32,25 @@ export interface ColumnChartModel {
 }
 
 /**
+ * The points of a chart model as the scatter chart draws them (charts/chartStyle.ts ScatterPoints, without
+ * a picture): colour by the cell, marker shape by the process. The page's chart and the sweep worker's
+ * drawing both read it.
+ */
+export function scatterInputOf(model: ColumnChartModel, colourOf: (series: number) => string) {
+  return {
+    source: model.source,
+    count: model.count,
+    x: model.x,
+    y: model.y,
+    infeasible: model.infeasible,
+    series: model.cellIndex,
+    shape: model.processIndex,
+    colourOf,
+    extent: model.extent,
+  };
+}
+
+/**
  * A builder's whole state as plain data (typed arrays, numbers, maps): what the sweep worker hands the
  * page for a finished sweep, so the page's builder goes on from it instead of taking in every row again.
  */

@@ -10,7 +10,7 @@
  */
 import { drawPointsPicture } from '../charts/pointsPicture';
 import { scratchSurface, spriteLookup, spriteMaker } from '../charts/markerSprites';
-import { ChartModelBuilder } from '../explore/chartModelBuilder';
+import { ChartModelBuilder, scatterInputOf } from '../explore/chartModelBuilder';
 import { ProcessCache } from '../explore/partitionFigures';
 import { runSweepRange, sweepSize } from '../explore/sweep';
 import {
@@ -56,17 +56,7 @@ function chartOf(table: SweepTable, plan: SweepChartPlan, make: NonNullable<type
   const model = builder.snapshot();
   const colours = plan.colours;
   const picture = drawPointsPicture(
-    {
-      source: builder,
-      count: model.count,
-      x: model.x,
-      y: model.y,
-      infeasible: model.infeasible,
-      series: model.cellIndex,
-      shape: model.processIndex,
-      colourOf: (series) => colours[series] ?? '',
-      extent: model.extent,
-    },
+    scatterInputOf(model, (series) => colours[series] ?? ''),
     plan,
     spriteLookup(make, plan.ratio),
   );

@@ -10,7 +10,7 @@ import {
 } from '../../charts/ScatterChart';
 import { createVariant } from '../../commands/createVariant';
 import type { FeasibilityLimits } from '../../explore/chartData';
-import { ChartModelBuilder } from '../../explore/chartModelBuilder';
+import { ChartModelBuilder, scatterInputOf } from '../../explore/chartModelBuilder';
 import type { SweepChart } from '../../explore/sweepProtocol';
 import { SweepTable } from '../../explore/sweepColumns';
 import { bankFigureEntry, type FigureKey } from '../../engine';
@@ -106,15 +106,7 @@ export function ExplorerView() {
   }, [table, run.shown, xAxis, yAxis, limits, finished]);
   const data = useMemo(
     (): ScatterPoints => ({
-      source: model.source,
-      count: model.count,
-      x: model.x,
-      y: model.y,
-      infeasible: model.infeasible,
-      series: model.cellIndex,
-      shape: model.processIndex,
-      colourOf: seriesColour,
-      extent: model.extent,
+      ...scatterInputOf(model, seriesColour),
       picture: adopted.current?.builder === model.source ? adopted.current.chart.picture : null,
     }),
     [model],
