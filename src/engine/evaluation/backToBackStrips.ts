@@ -6,6 +6,7 @@ import {
 } from '../../geometry/blockTable';
 import { ABUTMENT_TOLERANCE } from '../../geometry/rect';
 import { facingPairs, PairList } from './facingStrips';
+import { mayFaceInRange, StripRange } from './stripRanges';
 import { ALONG_HORIZONTAL_EDGE, ALONG_VERTICAL_EDGE, ServingForest, UNSERVING } from './servingForest';
 import { BLOCK_TYPE_LABEL } from '../../model/blockBasics';
 import type { MatTable } from './matTable';
@@ -31,12 +32,38 @@ export function backToBackStrips(
   /** Each block's orientation, when the caller has the serving forest already. */
   facing: Uint8Array = ServingForest.of(mats, table).facing,
 ): BackToBackState {
+  const pairs = pairsInRanges(table, facing) ?? pairsOfServingStrips(table, facing);
+  return { facing, pairs, findings: pairFindings(table, pairs) };
+}
+
+/** The pairs per strip type, from one pass over the table (the general path). */
+export function pairsOfServingStrips(table: BlockTable, facing: Uint8Array): Int32Array[] {
   const strips = ServingStrips.of(table, facing);
-  const pairs = [
+  return [
     pairsOfType(table, strips.senseAmps, strips.senseAmpsLying),
     pairsOfType(table, strips.drivers, strips.driversLying),
   ];
-  return { facing, pairs, findings: pairFindings(table, pairs) };
+}
+
+/**
+ * The pairs per strip type when the table lists each type's serving strips as one stretch facing one way
+ * (see stripRanges.ts), or null when it does not. A stretch whose strips cannot face is not searched.
+ */
+export function pairsInRanges(table: BlockTable, facing: Uint8Array): Int32Array[] | null {
+  const senseAmps = StripRange.of(table.type, facing, SENSE_AMP_STRIP_CODE);
+  const drivers = senseAmps && StripRange.of(table.type, facing, WORDLINE_DRIVER_STRIP_CODE);
+  if (!senseAmps || !drivers) return null;
+  return [pairsInRange(table, senseAmps), pairsInRange(table, drivers)];
+}
+
+function pairsInRange(table: BlockTable, range: StripRange): Int32Array {
+  const lying = range.facing === ALONG_HORIZONTAL_EDGE;
+  const across = lying ? table.y : table.x;
+  const thickness = lying ? table.height : table.width;
+  if (!mayFaceInRange(across, thickness, range.from, range.to)) return new Int32Array(0);
+  const strips = new Int32Array(range.to + 1 - range.from);
+  for (let s = 0; s < strips.length; s++) strips[s] = range.from + s;
+  return pairsOfType(table, strips, lying ? strips.length : 0);
 }
 
 /** Strip types checked, in the order of their findings. */
