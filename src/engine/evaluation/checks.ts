@@ -126,12 +126,15 @@ class IssueGrouping {
 
 /**
  * Where the run of mats starting at k ends: mats with every line served and the same figures fall in
- * the same groups, and a die lists them in runs.
+ * the same groups, and a die lists them in runs. Unsensed counts are read as the two 32-bit words of
+ * their doubles (`unsensedWords`, see {@link wordsOf}): a double read in the interpreter is a new heap
+ * number, a 32-bit integer is not. Both words 0 is +0; a −0 or any other value ends the run, which at
+ * most splits a run whose mats would be grouped alike.
  */
 function runEnd(
   count: number,
   figureIndex: Int32Array,
-  unsensedBitlines: Float64Array,
+  unsensedWords: Int32Array,
   undrivenWordlines: Int32Array,
   k: number,
 ): number {
@@ -140,19 +143,24 @@ function runEnd(
   do end++;
   while (
     end < count &&
-    unsensedBitlines[k] === 0 &&
-    undrivenWordlines[k] === 0 &&
     figureIndex[end] === figureIndex[k] &&
-    unsensedBitlines[end] === 0 &&
-    undrivenWordlines[end] === 0
+    undrivenWordlines[k] === 0 &&
+    undrivenWordlines[end] === 0 &&
+    ((unsensedWords[2 * k] as number) | (unsensedWords[2 * k + 1] as number)) === 0 &&
+    ((unsensedWords[2 * end] as number) | (unsensedWords[2 * end + 1] as number)) === 0
   );
   return end;
 }
 
+/** The 32-bit words of a list of doubles (two per double, in memory order). */
+function wordsOf(list: Float64Array): Int32Array {
+  return new Int32Array(list.buffer, list.byteOffset, 2 * list.length);
+}
+
 /** First pass: each group's mat count and its first few names, run by run in mat order. */
-function countGroups(mats: MatTable, grouping: IssueGrouping): void {
+function countGroups(mats: MatTable, grouping: IssueGrouping, unsensedWords: Int32Array): void {
   for (let k = 0; k < mats.count;) {
-    const end = runEnd(mats.count, mats.figureIndex, mats.unsensedBitlines, mats.undrivenWordlines, k);
+    const end = runEnd(mats.count, mats.figureIndex, unsensedWords, mats.undrivenWordlines, k);
     const groups = grouping.groupsOf(k);
     for (let g = 0; g < groups.length; g++) {
       const group = groups[g] as IssueGroup;
@@ -165,9 +173,9 @@ function countGroups(mats: MatTable, grouping: IssueGrouping): void {
 }
 
 /** Second pass: each group's mat ids, into lists of exactly the counted length (see collectFindings). */
-function listGroupIds(mats: MatTable, grouping: IssueGrouping): void {
+function listGroupIds(mats: MatTable, grouping: IssueGrouping, unsensedWords: Int32Array): void {
   for (let k = 0; k < mats.count;) {
-    const end = runEnd(mats.count, mats.figureIndex, mats.unsensedBitlines, mats.undrivenWordlines, k);
+    const end = runEnd(mats.count, mats.figureIndex, unsensedWords, mats.undrivenWordlines, k);
     const groups = grouping.groupsOf(k);
     for (let g = 0; g < groups.length; g++) {
       const group = groups[g] as IssueGroup;
@@ -194,10 +202,11 @@ export function collectFindings(
   const groups = grouping.groups;
   // Two passes: count each group's mats, then fill lists of exactly that length (growing a list of tens
   // of thousands of ids by push costs several times more).
-  countGroups(mats, grouping);
+  const unsensedWords = wordsOf(mats.unsensedBitlines);
+  countGroups(mats, grouping, unsensedWords);
   for (const group of groups.values()) group.ids = new Array<string>(group.count);
   for (const group of groups.values()) group.count = 0;
-  listGroupIds(mats, grouping);
+  listGroupIds(mats, grouping, unsensedWords);
   const findings: Finding[] = [];
   for (const { issue, ids, labels } of groups.values()) {
     findings.push({

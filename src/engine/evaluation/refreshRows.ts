@@ -31,6 +31,10 @@ export function refreshRows(table: BlockTable): number {
     y,
     width,
     height,
+    wordsOf(x),
+    wordsOf(y),
+    wordsOf(width),
+    wordsOf(height),
     facts.refreshed,
     facts.vertical,
     facts.wordlines,
@@ -39,6 +43,11 @@ export function refreshRows(table: BlockTable): number {
   let rows = 0;
   for (const byExtent of bands.values()) for (const r of byExtent.values()) rows += r;
   return rows;
+}
+
+/** The 32-bit words of a list of doubles (two per double, in memory order). */
+function wordsOf(list: Float64Array): Int32Array {
+  return new Int32Array(list.buffer, list.byteOffset, 2 * list.length);
 }
 
 /**
@@ -54,6 +63,11 @@ function collectBands(
   y: Float64Array,
   width: Float64Array,
   height: Float64Array,
+  /** The same lists as 32-bit words (two per double), compared without reading a double. */
+  xWords: Int32Array,
+  yWords: Int32Array,
+  widthWords: Int32Array,
+  heightWords: Int32Array,
   refreshed: Uint8Array,
   verticalKind: Uint8Array,
   wordlinesOfKind: Float64Array,
@@ -70,12 +84,33 @@ function collectBands(
   let lastStart = 0;
   let lastLength = -1;
   let lastVertical = false;
+  // The kind and the words of start and extent of the mat last added: a mat of that kind whose start and
+  // extent have the same bits adds nothing (its band holds at least its kind's rows already). Reading
+  // words, not doubles, keeps the interpreter from boxing two numbers per mat.
+  let lastKind = -1;
+  let startLow = 0;
+  let startHigh = 0;
+  let lengthLow = 0;
+  let lengthHigh = 0;
   for (let i = 0; i < count; i++) {
     if (type[i] !== MAT_CODE) continue;
     const k = kindOf[i] as number;
     // Static cells need no refresh and add no rows.
     if (!(k >= 0 && k < refreshed.length) || refreshed[k] === 0) continue;
     const vertical = verticalKind[k] === 1;
+    const startWords = vertical ? yWords : xWords;
+    const lengthWords = vertical ? heightWords : widthWords;
+    const s0 = startWords[2 * i] as number;
+    const s1 = startWords[2 * i + 1] as number;
+    const l0 = lengthWords[2 * i] as number;
+    const l1 = lengthWords[2 * i + 1] as number;
+    if (k === lastKind && s0 === startLow && s1 === startHigh && l0 === lengthLow && l1 === lengthHigh)
+      continue;
+    lastKind = k;
+    startLow = s0;
+    startHigh = s1;
+    lengthLow = l0;
+    lengthHigh = l1;
     const at = (vertical ? y[i] : x[i]) as number;
     const length = (vertical ? height[i] : width[i]) as number;
     const wordlines = wordlinesOfKind[k] as number;

@@ -12,6 +12,7 @@ import {
 } from '../physics/refresh';
 import { figuresAt, matIdAt, matLabelAt, type MatTable } from './matTable';
 import { refreshRows } from './refreshRows';
+import { repeatedSum } from './repeatedSum';
 import type { MatFigures, RefreshFigures, Totals } from './report';
 
 export { refreshRows } from './refreshRows';
@@ -253,9 +254,10 @@ let runStarts = new Int32Array(1024);
 
 /**
  * The sums over all mats, mat by mat in design order (so each floating-point sum is the same to the
- * bit), into `out` (slots above), and the first mat of each run of mats sharing figures into `runs`
- * (returns how many runs). What the loop reads comes in as arguments (see geometry/blockTable.ts,
- * writeRows).
+ * bit), into `out` (slots above, starting at +0), and the first mat of each run of mats sharing figures
+ * into `runs` (returns how many runs). Mats follow each other in runs of one figures index; each run adds
+ * its addends once per mat (see {@link addRun}). What the loop reads comes in as arguments (see
+ * geometry/blockTable.ts, writeRows).
  */
 function matSums(
   count: number,
@@ -268,35 +270,36 @@ function matSums(
   firstIndex: number,
   firstRuns: number,
 ): number {
-  let bits = 0;
-  let usableBits = 0;
-  let cellArea = 0;
-  let standbyPower = 0;
-  let heldBits = 0;
-  let refreshEnergy = 0;
   let runCount = firstRuns;
   let previous = firstIndex;
-  for (let k = 0; k < count; k++) {
-    const i = figureIndex[k] as number;
-    const at = SUM_SLOTS * i;
-    bits += addends[at + BITS] as number;
-    usableBits += addends[at + USABLE_BITS] as number;
-    cellArea += addends[at + CELL_AREA] as number;
-    standbyPower += addends[at + STANDBY_POWER] as number;
-    heldBits += addends[at + HELD_BITS] as number;
-    refreshEnergy += addends[at + REFRESH_ENERGY] as number;
-    if (i !== previous) {
-      if (figures[i] !== figures[previous]) runs[runCount++] = k;
-      previous = i;
-    }
+  let runStart = 0;
+  for (let k = 1; k <= count; k++) {
+    const i = k < count ? (figureIndex[k] as number) : -1;
+    if (i === previous) continue;
+    // Mats runStart … k − 1 share the figures at index `previous`.
+    addRun(out, addends, SUM_SLOTS * previous, k - runStart);
+    if (i >= 0 && figures[i] !== figures[previous]) runs[runCount++] = k;
+    previous = i;
+    runStart = k;
   }
-  out[BITS] = bits;
-  out[USABLE_BITS] = usableBits;
-  out[CELL_AREA] = cellArea;
-  out[STANDBY_POWER] = standbyPower;
-  out[HELD_BITS] = heldBits;
-  out[REFRESH_ENERGY] = refreshEnergy;
   return runCount;
+}
+
+/** Runs at least this long are summed by {@link repeatedSum}; shorter ones by a loop (cheaper for a few). */
+const LONG_RUN = 16;
+
+/**
+ * Adds the addends at `at` (one per slot) to the sums `out`, `mats` times each, one addition after the
+ * other: the sums a loop over the run's mats forms.
+ */
+function addRun(out: Float64Array, addends: Float64Array, at: number, mats: number): void {
+  for (let slot = 0; slot < SUM_SLOTS; slot++) {
+    const v = addends[at + slot] as number;
+    let sum = out[slot] as number;
+    if (mats >= LONG_RUN) sum = repeatedSum(sum, v, mats);
+    else for (let m = 0; m < mats; m++) sum += v;
+    out[slot] = sum;
+  }
 }
 
 /**
