@@ -49,7 +49,7 @@ export function bandedNeighbourTable(
   if (pairCount < 0 || (cost[0] as number) > limits.visitsPerBlock * n) return null;
   const walked = keys.subarray(0, pairCount).sort();
   const sink = new PairSink(n);
-  walkRunPairs(boxes, margin, runs, group, walked, sink);
+  walkRunPairs(boxes, margin, runs, group, walked, sink, limits.repeatWalks);
   return sink.table(n, margin);
 }
 
@@ -67,9 +67,16 @@ export interface BandLimits {
   readonly runPairsPerRun: number;
   /** Boxes the walks may visit per block (the sum of both runs' lengths over the pairs walked). */
   readonly visitsPerBlock: number;
+  /** Whether pairs of runs laid out like pairs walked before repeat their pairs (false: tests' oracle). */
+  readonly repeatWalks: boolean;
 }
 
-export const BAND_LIMITS: BandLimits = { minRunLength: 4, runPairsPerRun: 8, visitsPerBlock: 24 };
+export const BAND_LIMITS: BandLimits = {
+  minRunLength: 4,
+  runPairsPerRun: 8,
+  visitsPerBlock: 24,
+  repeatWalks: true,
+};
 const RUN_PAIR_ALLOWANCE = 256;
 
 /** The runs in ascending order of their top edge (ties in run order). */
@@ -139,7 +146,14 @@ function meetingRuns(
   return found;
 }
 
-/** Walks every pair of runs in key order (see {@link bandedNeighbourTable} on why that order). */
+/**
+ * Walks every pair of runs in key order (see {@link bandedNeighbourTable} on why that order). What a walk
+ * finds follows from the two runs' left edges and widths, the margin and how the runs meet vertically:
+ * a pair of runs whose layouts (see blockRuns.ts) and vertical relation match a pair walked before gets
+ * that walk's pairs again, shifted to its own blocks (the rows of a tiled array: a 64 × 64 mat array is
+ * walked some five times, its other 380 pairs of runs repeat one of those). Walks that found pairs
+ * sharing area (overlaps, rare) are not repeated.
+ */
 function walkRunPairs(
   boxes: Boxes,
   margin: number,
@@ -147,9 +161,14 @@ function walkRunPairs(
   label: Uint8Array,
   keys: Float64Array,
   sink: PairSink,
+  repeat: boolean,
 ): void {
-  const { top, bottom, start, touching } = runs;
+  const { top, bottom, start, touching, layout } = runs;
   const count = runs.count;
+  // Walks that may be repeated, by layouts and relation: where their pairs lie in the sink, and where
+  // the runs they walked (first as the walk took them) start.
+  const walked = new Map<number, number>();
+  const found: number[] = [];
   for (let k = 0; k < keys.length; k++) {
     const key = keys[k] as number;
     const a = Math.floor(key / count);
@@ -163,20 +182,39 @@ function walkRunPairs(
     const b0 = start[b] as number;
     const b1 = start[b + 1] as number;
     const sharedY = (bottomA < bottomB ? bottomA : bottomB) - (topA > topB ? topA : topB) > margin;
+    const sameGroup = label[a] === label[b];
+    // The vertical halves of the grid's two box tests (grown a against b, grown b against a).
+    const aMeetsB = topA - margin <= bottomB && topB <= bottomA + margin;
+    const bMeetsA = topB - margin <= bottomA && topA <= bottomB + margin;
     // Runs whose blocks clear each other are merged in one pass; otherwise the shorter run drives.
     const merge = touching[a] === 0 && touching[b] === 0;
-    const aDrives = a1 - a0 <= b1 - b0;
-    if (label[a] === label[b]) {
+    const aDrives = merge || a1 - a0 <= b1 - b0;
+    const first = aDrives ? a0 : b0;
+    const second = aDrives ? b0 : a0;
+    const relation = (sameGroup ? 1 : 0) + (aMeetsB ? 2 : 0) + (bMeetsA ? 4 : 0) + (sharedY ? 8 : 0);
+    const pattern = ((layout[a] as number) * runs.layouts + (layout[b] as number)) * 16 + relation;
+    const before = walked.get(pattern);
+    if (before !== undefined) {
+      sink.repeat(
+        found[before] as number,
+        found[before + 1] as number,
+        first - (found[before + 2] as number),
+        second - (found[before + 3] as number),
+      );
+      continue;
+    }
+    const from = sink.count;
+    const shared = sink.sharedCount;
+    if (sameGroup) {
       if (merge) sameGroupMerge(boxes, margin, a0, a1, b0, b1, sink);
       else if (aDrives) sameGroupWalk(boxes, margin, a0, a1, b0, b1, sink);
       else sameGroupWalk(boxes, margin, b0, b1, a0, a1, sink);
-    } else {
-      // The vertical halves of the grid's two box tests (grown a against b, grown b against a).
-      const aMeetsB = topA - margin <= bottomB && topB <= bottomA + margin;
-      const bMeetsA = topB - margin <= bottomA && topA <= bottomB + margin;
-      if (merge) crossGroupMerge(boxes, margin, a0, a1, b0, b1, aMeetsB, bMeetsA, sharedY, sink);
-      else if (aDrives) crossGroupWalk(boxes, margin, a0, a1, b0, b1, aMeetsB, bMeetsA, sharedY, sink);
-      else crossGroupWalk(boxes, margin, b0, b1, a0, a1, bMeetsA, aMeetsB, sharedY, sink);
+    } else if (merge) crossGroupMerge(boxes, margin, a0, a1, b0, b1, aMeetsB, bMeetsA, sharedY, sink);
+    else if (aDrives) crossGroupWalk(boxes, margin, a0, a1, b0, b1, aMeetsB, bMeetsA, sharedY, sink);
+    else crossGroupWalk(boxes, margin, b0, b1, a0, a1, bMeetsA, aMeetsB, sharedY, sink);
+    if (repeat && sink.sharedCount === shared) {
+      walked.set(pattern, found.length);
+      found.push(from, sink.count, first, second);
     }
   }
 }

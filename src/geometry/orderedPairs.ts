@@ -17,7 +17,8 @@ export class PairSink {
   /** Pairs of box i in `degree[i]`; one longer, for the running totals. */
   readonly degree: Int32Array;
   private sharedPairs = SCRATCH.shared.take(16);
-  private sharedCount = 0;
+  /** Pairs handed to {@link share} so far. */
+  sharedCount = 0;
 
   constructor(n: number) {
     this.first = SCRATCH.first.take(2 * n);
@@ -45,6 +46,24 @@ export class PairSink {
     this.count++;
   }
 
+  /**
+   * Pairs from..to − 1 found again, box for box shifted: the first of each pair by `shiftFirst`, the
+   * second by `shiftSecond` (bandedPairs.ts: two runs laid out like two it walked before).
+   */
+  repeat(from: number, to: number, shiftFirst: number, shiftSecond: number): void {
+    this.reserve(to - from);
+    this.count = repeatPairs(
+      this.first,
+      this.second,
+      this.degree,
+      from,
+      to,
+      shiftFirst,
+      shiftSecond,
+      this.count,
+    );
+  }
+
   share(a: number, b: number): void {
     if (2 * this.sharedCount + 2 > this.sharedPairs.length)
       this.sharedPairs = SCRATCH.shared.grow(2 * this.sharedPairs.length, 2 * this.sharedCount);
@@ -65,6 +84,30 @@ export class PairSink {
     scatterInOrder(this.first, this.second, this.count, cursor, list);
     return new NeighbourRows(start, end, list, sharedInOrder(this.sharedPairs, this.sharedCount, n, margin));
   }
+}
+
+/** {@link PairSink.repeat}'s loop; returns the new count. */
+function repeatPairs(
+  first: Int32Array,
+  second: Int32Array,
+  degree: Int32Array,
+  from: number,
+  to: number,
+  shiftFirst: number,
+  shiftSecond: number,
+  count: number,
+): number {
+  let at = count;
+  for (let k = from; k < to; k++) {
+    const i = (first[k] as number) + shiftFirst;
+    const j = (second[k] as number) + shiftSecond;
+    first[at] = i;
+    second[at] = j;
+    at++;
+    degree[i] = (degree[i] as number) + 1;
+    degree[j] = (degree[j] as number) + 1;
+  }
+  return at;
 }
 
 /** Each pair into both rows, each row filled forwards from its start. */

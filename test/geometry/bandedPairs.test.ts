@@ -9,7 +9,12 @@ import { neighboursOf, type NeighbourTable } from '../../src/geometry/neighbourR
 import { ABUTMENT_TOLERANCE, type Rect } from '../../src/geometry/rect';
 
 /** No fallback to the grid: the banded pass runs on whatever boxes the test gives it. */
-const ANY_BOXES: BandLimits = { minRunLength: 0, runPairsPerRun: Infinity, visitsPerBlock: Infinity };
+const ANY_BOXES: BandLimits = {
+  minRunLength: 0,
+  runPairsPerRun: Infinity,
+  visitsPerBlock: Infinity,
+  repeatWalks: true,
+};
 const MICRON = 1e-6;
 
 /** A block of a generated floorplan: its rectangle and its code (a block type). */

@@ -1,0 +1,177 @@
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { bandedNeighbourTable, type BandLimits } from '../../src/geometry/bandedPairs';
+import { blockRuns } from '../../src/geometry/blockRuns';
+import { boxesOf, type Boxes } from '../../src/geometry/blockTable';
+import { groupedGridTable } from '../../src/geometry/neighbourGrid';
+import { neighboursOf, type NeighbourTable } from '../../src/geometry/neighbourRows';
+import { ABUTMENT_TOLERANCE, type Rect } from '../../src/geometry/rect';
+import { blockRunsBefore } from '../support/blockRunsBefore';
+
+/*
+ * Runs cut once per band layout and walks repeated for pairs of runs laid out alike (blockRuns.ts,
+ * bandedPairs.ts) against the block-by-block cut and walking every pair of runs (the oracles), on
+ * floorplans made of repeated rows: the same row of left edges and widths at several heights, with
+ * several codes, some copies nudged by a margin or an ulp so that they only nearly repeat.
+ */
+
+const MICRON = 1e-6;
+const ANY_BOXES: BandLimits = {
+  minRunLength: 0,
+  runPairsPerRun: Infinity,
+  visitsPerBlock: Infinity,
+  repeatWalks: true,
+};
+const NO_REPEATS: BandLimits = { ...ANY_BOXES, repeatWalks: false };
+
+interface Coded {
+  readonly rect: Rect;
+  readonly code: number;
+}
+
+/** A row of left edges and widths (m): gaps from touching to a few microns, now and then an overlap. */
+const rowLayout = fc
+  .record({
+    x: fc.integer({ min: -4, max: 4 }),
+    blocks: fc.array(
+      fc.record({ width: fc.integer({ min: 0, max: 5 }), gap: fc.constantFrom(0, 0, 1, 2, -1) }),
+      { minLength: 1, maxLength: 8 },
+    ),
+  })
+  .map(({ x, blocks }) => {
+    let at = x;
+    return blocks.map((b) => {
+      const placed = { x: at * MICRON, width: b.width * MICRON };
+      at += b.width + b.gap;
+      return placed;
+    });
+  });
+
+/** Nudges on and around the margins, rounding-sized ones, and a sign change of zero. */
+const nudge = fc.constantFrom(ABUTMENT_TOLERANCE, -ABUTMENT_TOLERANCE, 1e-21, -1e-21, 5e-22, MICRON, -0);
+
+/**
+ * A few row layouts, each written at several heights (tops and heights that meet, overlap or clear the
+ * rows around them), with one code per row or mixed codes, in some design order; a few coordinates
+ * nudged.
+ */
+const repeatedRows = fc
+  .record({
+    layouts: fc.array(rowLayout, { minLength: 1, maxLength: 3 }),
+    rows: fc.array(
+      fc.record({
+        layout: fc.nat(),
+        y: fc.integer({ min: 0, max: 12 }),
+        height: fc.integer({ min: 0, max: 4 }),
+        code: fc.integer({ min: 0, max: 3 }),
+        mixed: fc.boolean(),
+      }),
+      { minLength: 1, maxLength: 9 },
+    ),
+    nudges: fc.array(
+      fc.record({ at: fc.nat(), field: fc.constantFrom('x', 'y', 'width', 'height'), by: nudge }),
+      { maxLength: 3 },
+    ),
+  })
+  .map(({ layouts, rows, nudges }): Coded[] => {
+    const blocks = rows.flatMap((row) =>
+      (layouts[row.layout % layouts.length] ?? []).map((placed, k) => ({
+        rect: { x: placed.x, y: row.y * MICRON, width: placed.width, height: row.height * MICRON },
+        code: row.mixed ? (row.code + k) % 4 : row.code,
+      })),
+    );
+    for (const { at, field, by } of nudges) {
+      const block = blocks[at % blocks.length];
+      if (block) block.rect[field as keyof Rect] = by === 0 ? -0 : block.rect[field as keyof Rect] + by;
+    }
+    return blocks;
+  });
+
+const GROUPINGS = [Uint8Array.of(1, 0, 0, 0), Uint8Array.of(0, 1, 2, 3)];
+
+function rows(table: NeighbourTable, n: number): number[][] {
+  return Array.from({ length: n }, (_, i) => neighboursOf(table, i));
+}
+
+function bits(values: Float64Array, from: number, to: number): string {
+  return Array.from(new Uint32Array(values.slice(from, to).buffer)).join(',');
+}
+
+/** Whether runs r and s hold the same left edges and widths, bit for bit. */
+function laidOutAlike(boxes: Boxes, start: Int32Array, r: number, s: number): boolean {
+  const at = (k: number) => start[k] as number;
+  return (
+    at(r + 1) - at(r) === at(s + 1) - at(s) &&
+    bits(boxes.x, at(r), at(r + 1)) === bits(boxes.x, at(s), at(s + 1)) &&
+    bits(boxes.width, at(r), at(r + 1)) === bits(boxes.width, at(s), at(s + 1))
+  );
+}
+
+describe('runs cut per band layout, walks repeated per pair of layouts', () => {
+  it('cuts the runs the block-by-block cut does, and gives one layout only to runs laid out alike', () => {
+    fc.assert(
+      fc.property(repeatedRows, fc.constantFrom(0, ABUTMENT_TOLERANCE, MICRON), (blocks, margin) => {
+        const boxes = boxesOf(blocks.map((b) => b.rect));
+        const code = Uint8Array.from(blocks, (b) => b.code);
+        const runs = blockRuns(boxes, code, margin, boxes.count);
+        const before = blockRunsBefore(boxes, code, margin, boxes.count);
+        // Bands are told apart by bits: a top edge or height of −0 beside 0 starts a band (and a run)
+        // the numeric comparison did not; the walks give the same pairs either way.
+        const signedZero = blocks.some((b) => Object.is(b.rect.y, -0) || Object.is(b.rect.height, -0));
+        expect(runs === null).toBe(before === null);
+        if (!runs || !before) return;
+        if (!signedZero) {
+          expect(Array.from(runs.start)).toEqual(Array.from(before.start));
+          expect(Array.from(runs.top)).toEqual(Array.from(before.top));
+          expect(Array.from(runs.bottom)).toEqual(Array.from(before.bottom));
+          expect(Array.from(runs.code)).toEqual(Array.from(before.code));
+          expect(Array.from(runs.touching)).toEqual(Array.from(before.touching));
+        }
+        for (let r = 0; r < runs.count; r++) {
+          for (let s = 0; s < r; s++) {
+            if (runs.layout[r] !== runs.layout[s]) continue;
+            expect(laidOutAlike(boxes, runs.start, r, s)).toBe(true);
+            expect(runs.touching[r]).toBe(runs.touching[s]);
+          }
+        }
+      }),
+      { numRuns: 1500 },
+    );
+  }, 60_000);
+
+  it('finds by repeated walks the rows and shared pairs of walking every pair of runs, and of the grid', () => {
+    fc.assert(
+      fc.property(
+        repeatedRows,
+        fc.constantFrom(0, ABUTMENT_TOLERANCE, MICRON),
+        fc.constantFrom(...GROUPINGS),
+        (blocks, margin, groupOf) => {
+          const boxes = boxesOf(blocks.map((b) => b.rect));
+          const code = Uint8Array.from(blocks, (b) => b.code);
+          const repeated = bandedNeighbourTable(boxes, margin, code, groupOf, ANY_BOXES);
+          const walked = bandedNeighbourTable(boxes, margin, code, groupOf, NO_REPEATS);
+          expect(repeated === null).toBe(walked === null);
+          if (!repeated || !walked) return;
+          const n = boxes.count;
+          expect(rows(repeated, n)).toEqual(rows(walked, n));
+          expect(Array.from(repeated.start)).toEqual(Array.from(walked.start));
+          expect(Array.from(repeated.end)).toEqual(Array.from(walked.end));
+          expect(Array.from(repeated.shared?.pairs ?? [])).toEqual(Array.from(walked.shared?.pairs ?? []));
+          const group = Uint8Array.from(blocks, (b) => groupOf[b.code] as number);
+          expect(rows(repeated, n)).toEqual(rows(groupedGridTable(boxes, margin, group), n));
+        },
+      ),
+      { numRuns: 1500 },
+    );
+  }, 60_000);
+
+  it('repeats the walks of a tiled array: rows of one layout share one layout id', () => {
+    const rects: Rect[] = [];
+    for (let r = 0; r < 4; r++)
+      for (let c = 0; c < 5; c++)
+        rects.push({ x: c * 3 * MICRON, y: r * 2 * MICRON, width: 2 * MICRON, height: MICRON });
+    const runs = blockRuns(boxesOf(rects), new Uint8Array(rects.length), ABUTMENT_TOLERANCE, rects.length);
+    expect(runs && Array.from(runs.layout)).toEqual([0, 0, 0, 0]);
+    expect(runs?.layouts).toBe(1);
+  });
+});
