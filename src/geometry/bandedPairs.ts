@@ -7,8 +7,8 @@ import { crossGroupMerge, crossGroupWalk, sameGroupMerge, sameGroupWalk } from '
 /**
  * neighbourGrid.ts's groupedNeighbourTable for floorplans made of rows, by runs instead of a grid: the
  * same pairs (boxes of different groups that meet, boxes of one group that share more than `margin`
- * both ways), the same rows in the same order, and the pairs that share more than `margin` besides
- * (`shared`). Returns null when the blocks do not form long runs (see blockRuns.ts) or the runs would cost
+ * both ways), the same rows in the same order, the pairs that share more than `margin` besides
+ * (`shared`), and the runs (`runs`). Returns null when the blocks do not form long runs (see blockRuns.ts) or the runs would cost
  * more than a grid pass; the caller then takes the grid.
  *
  * Method: a run's boxes share their vertical extent, so whether two runs can meet, and how far they share
@@ -50,7 +50,7 @@ export function bandedNeighbourTable(
   const walked = keys.subarray(0, pairCount).sort();
   const sink = new PairSink(n);
   walkRunPairs(boxes, margin, runs, group, walked, sink, limits.repeatWalks);
-  return sink.table(n, margin);
+  return sink.table(n, margin, runs);
 }
 
 function runGroups(runs: BlockRuns, groupOf: Uint8Array): Uint8Array {

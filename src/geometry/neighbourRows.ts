@@ -1,3 +1,4 @@
+import type { BlockRuns } from './blockRuns';
 import { ScratchBuffer } from './scratchBuffer';
 
 /**
@@ -14,6 +15,11 @@ export interface NeighbourTable {
    * neighbour again for overlaps.
    */
   readonly shared?: SharedPairs | null;
+  /**
+   * The runs the boxes were cut into (blockRuns.ts), when the pass that made the table worked by runs
+   * (null or absent when it did not): other whole-die passes can work per run too.
+   */
+  readonly runs?: BlockRuns | null;
 }
 
 /**
@@ -38,6 +44,7 @@ export class NeighbourRows implements NeighbourTable {
     readonly end: Int32Array,
     readonly list: Int32Array,
     readonly shared: SharedPairs | null = null,
+    readonly runs: BlockRuns | null = null,
   ) {}
 }
 

@@ -1,3 +1,4 @@
+import type { BlockRuns } from './blockRuns';
 import { NeighbourRows, runningTotals, SharedPairs, type NeighbourTable } from './neighbourRows';
 import { ScratchBuffer } from './scratchBuffer';
 
@@ -73,7 +74,7 @@ export class PairSink {
   }
 
   /** The rows, filled in the order the pairs were found (bandedPairs.ts keeps each row ascending). */
-  table(n: number, margin: number): NeighbourTable {
+  table(n: number, margin: number, runs: BlockRuns): NeighbourTable {
     const end = this.degree;
     const total = runningTotals(end, n);
     const start = new Int32Array(n);
@@ -82,7 +83,13 @@ export class PairSink {
     const cursor = SCRATCH.cursor.take(n);
     cursor.set(start);
     scatterInOrder(this.first, this.second, this.count, cursor, list);
-    return new NeighbourRows(start, end, list, sharedInOrder(this.sharedPairs, this.sharedCount, n, margin));
+    return new NeighbourRows(
+      start,
+      end,
+      list,
+      sharedInOrder(this.sharedPairs, this.sharedCount, n, margin),
+      runs,
+    );
   }
 }
 

@@ -157,6 +157,10 @@ describe('runs cut per band layout, walks repeated per pair of layouts', () => {
           expect(Array.from(repeated.start)).toEqual(Array.from(walked.start));
           expect(Array.from(repeated.end)).toEqual(Array.from(walked.end));
           expect(Array.from(repeated.shared?.pairs ?? [])).toEqual(Array.from(walked.shared?.pairs ?? []));
+          // The table carries the runs it was found by, for other passes to read.
+          expect(Array.from(repeated.runs?.start ?? [])).toEqual(
+            Array.from(blockRuns(boxes, code, margin, n)?.start ?? []),
+          );
           const group = Uint8Array.from(blocks, (b) => groupOf[b.code] as number);
           expect(rows(repeated, n)).toEqual(rows(groupedGridTable(boxes, margin, group), n));
         },
