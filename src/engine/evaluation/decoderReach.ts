@@ -4,6 +4,7 @@ import {
   WORDLINE_DRIVER_STRIP_CODE,
   type BlockTable,
 } from '../../geometry/blockTable';
+import type { BlockRuns } from '../../geometry/blockRuns';
 import { DecoderEdges } from './decoderEdges';
 import { groupLabel } from './findingText';
 import type { MatTable } from './matTable';
@@ -147,12 +148,22 @@ export function decoderReach(
   mats: MatTable,
   matIndexAt: Int32Array,
   forest: ServingForest = ServingForest.of(mats, table),
+  /** The table's runs by block type with the margin ABUTMENT_TOLERANCE (as evaluate's neighbours cut them). */
+  runs: BlockRuns | null = null,
 ): DecoderReachState {
   const rows = REACH_CHECKS[0] as ReachCheck;
   const columns = REACH_CHECKS[1] as ReachCheck;
   const rowEdges = DecoderEdges.of(table, rows.decoderCode);
   const columnEdges = DecoderEdges.of(table, columns.decoderCode);
-  const [rowSeeds, columnSeeds] = seedsOfChecks(table, matIndexAt, rows, rowEdges, columns, columnEdges);
+  const [rowSeeds, columnSeeds] = seedsOfChecks(
+    table,
+    matIndexAt,
+    rows,
+    rowEdges,
+    columns,
+    columnEdges,
+    runs,
+  );
   return {
     results: [
       reachResult(mats, matIndexAt, rows, rowEdges, rowSeeds, forest),

@@ -1,3 +1,4 @@
+import type { BlockRuns } from '../../geometry/blockRuns';
 import type { BlockTable } from '../../geometry/blockTable';
 import { backToBackStrips, type BackToBackState } from './backToBackStrips';
 import {
@@ -30,9 +31,15 @@ export function layoutFindings(table: BlockTable, mats: MatTable): Finding[] {
 }
 
 /** The layout checks of the whole design, with what they leave for the next edit. */
-export function layoutState(table: BlockTable, mats: MatTable, matIndexAt?: Int32Array): LayoutState {
+export function layoutState(
+  table: BlockTable,
+  mats: MatTable,
+  matIndexAt?: Int32Array,
+  /** The table's runs by block type with the margin ABUTMENT_TOLERANCE (evaluate's neighbours cut them). */
+  runs: BlockRuns | null = null,
+): LayoutState {
   const forest = ServingForest.of(mats, table);
-  const reach = decoderReach(table, mats, matIndexAt ?? matIndexByPosition(mats, table.count), forest);
+  const reach = decoderReach(table, mats, matIndexAt ?? matIndexByPosition(mats, table.count), forest, runs);
   const backToBack = backToBackStrips(table, mats, forest.facing);
   return { reach, backToBack, findings: findingsOf(mats, reach, backToBack) };
 }

@@ -1,5 +1,7 @@
 import { abutmentSpan, type Side } from '../../geometry/abutment';
-import { BLOCK_TYPE_CODES, kindAt, type BlockTable } from '../../geometry/blockTable';
+import { BLOCK_TYPE_CODES, kindAt, MAT_CODE, type BlockTable } from '../../geometry/blockTable';
+import type { BlockRuns } from '../../geometry/blockRuns';
+import { ABUTMENT_TOLERANCE } from '../../geometry/rect';
 import { bitlineEndSides } from '../../geometry/stripFit';
 import type { DecoderEdges } from './decoderEdges';
 
@@ -94,6 +96,8 @@ export function seedsOfChecks(
   edgesA: DecoderEdges | null,
   b: SeedCheck,
   edgesB: DecoderEdges | null,
+  /** The table's runs by block type with the margin ABUTMENT_TOLERANCE, when the caller has them. */
+  runs: BlockRuns | null = null,
 ): readonly [Uint8Array, Uint8Array] {
   if ((edgesA !== null && edgesA.reach === null) || (edgesB !== null && edgesB.reach === null))
     return [
@@ -104,11 +108,65 @@ export function seedsOfChecks(
   const seedB = new Uint8Array(table.count);
   if (edgesA !== null) for (const d of edgesA.decoders) seedA[d] = 1;
   if (edgesB !== null) for (const d of edgesB.decoders) seedB[d] = 1;
+  const found = candidatesOfChecks(table, matIndexAt, a, edgesA, b, edgesB, runs);
+  for (let n = 0; n < found; n++) {
+    const v = inBoxes[n] as number;
+    if (v >= 0) {
+      if (seedAt(table, matIndexAt, edgesA, v, a.decoderCode, a.stripCode)) seedA[v] = 1;
+    } else if (seedAt(table, matIndexAt, edgesB, ~v, b.decoderCode, b.stripCode)) seedB[~v] = 1;
+  }
+  return [seedA, seedB];
+}
+
+/**
+ * The candidates of {@link seedsOfChecks}, as {@link blocksInBoxes} writes them to {@link inBoxes} (run by
+ * run when `runs` is given, in another order); returns how many.
+ */
+export function candidatesOfChecks(
+  table: BlockTable,
+  matIndexAt: Int32Array,
+  a: SeedCheck,
+  edgesA: DecoderEdges | null,
+  b: SeedCheck,
+  edgesB: DecoderEdges | null,
+  runs: BlockRuns | null,
+): number {
   if (inBoxes.length < 2 * table.count) inBoxes = new Int32Array(2 * table.count);
+  return runs === null
+    ? blocksInBoxesOf(table, matIndexAt, a, edgesA, b, edgesB)
+    : blocksInBoxesByRuns(
+        runs,
+        table.x,
+        table.width,
+        matIndexAt,
+        edgesA === null ? -1 : a.stripCode,
+        edgesA !== null && a.decoderCode === COLUMN_DECODER,
+        edgesA?.reach ?? NOWHERE,
+        edgesB === null ? -1 : b.stripCode,
+        edgesB !== null && b.decoderCode === COLUMN_DECODER,
+        edgesB?.reach ?? NOWHERE,
+        inBoxes,
+      );
+}
+
+/** The first `count` candidates {@link candidatesOfChecks} wrote, sorted (for tests). */
+export function candidatesFound(count: number): Int32Array {
+  return inBoxes.slice(0, count).sort();
+}
+
+/** {@link blocksInBoxes} of a table, each box narrow side first. */
+function blocksInBoxesOf(
+  table: BlockTable,
+  matIndexAt: Int32Array,
+  a: SeedCheck,
+  edgesA: DecoderEdges | null,
+  b: SeedCheck,
+  edgesB: DecoderEdges | null,
+): number {
   const boxA = narrowFirst(table, edgesA?.reach ?? NOWHERE);
   const boxB = narrowFirst(table, edgesB?.reach ?? NOWHERE);
   // A check without decoders has no seeds: its strip code matches no block and its box is never consulted.
-  const found = blocksInBoxes(
+  return blocksInBoxes(
     table.count,
     table.type,
     matIndexAt,
@@ -134,13 +192,78 @@ export function seedsOfChecks(
     boxB.crossTo,
     inBoxes,
   );
-  for (let n = 0; n < found; n++) {
-    const v = inBoxes[n] as number;
-    if (v >= 0) {
-      if (seedAt(table, matIndexAt, edgesA, v, a.decoderCode, a.stripCode)) seedA[v] = 1;
-    } else if (seedAt(table, matIndexAt, edgesB, ~v, b.decoderCode, b.stripCode)) seedB[~v] = 1;
+}
+
+/**
+ * What {@link blocksInBoxes} writes, in another order, found run by run (geometry/blockRuns.ts): the
+ * blocks of a run share their top and bottom edges, so one test per run leaves out the runs beside the
+ * boxes, and a run's left edges never decrease, so a binary search finds where its blocks may enter a
+ * box and the walk stops at the first block right of it. `boxA` and `boxB` are (left, top, right, bottom).
+ */
+function blocksInBoxesByRuns(
+  runs: BlockRuns,
+  x: Float64Array,
+  width: Float64Array,
+  matIndexAt: Int32Array,
+  stripA: number,
+  matsA: boolean,
+  boxA: Float64Array,
+  stripB: number,
+  matsB: boolean,
+  boxB: Float64Array,
+  out: Int32Array,
+): number {
+  let n = 0;
+  for (let r = 0; r < runs.count; r++) {
+    const code = runs.code[r] as number;
+    if (code === stripA || (matsA && code === MAT_CODE))
+      n = blocksOfRunInBox(runs, r, x, width, code !== stripA ? matIndexAt : null, boxA, 0, out, n);
+    if (code === stripB || (matsB && code === MAT_CODE))
+      n = blocksOfRunInBox(runs, r, x, width, code !== stripB ? matIndexAt : null, boxB, -1, out, n);
   }
-  return [seedA, seedB];
+  return n;
+}
+
+/**
+ * Appends to `out` from `n` the blocks of run `r` at least partly inside `box` (only mats of the report
+ * when `matIndexAt` is given), each as its position XOR `flip` (0, or −1 for the complement).
+ */
+function blocksOfRunInBox(
+  runs: BlockRuns,
+  r: number,
+  x: Float64Array,
+  width: Float64Array,
+  matIndexAt: Int32Array | null,
+  box: Float64Array,
+  flip: number,
+  out: Int32Array,
+  n: number,
+): number {
+  if ((runs.top[r] as number) > (box[3] as number) || (runs.bottom[r] as number) < (box[1] as number))
+    return n;
+  const left = box[0] as number;
+  const right = box[2] as number;
+  const from = runs.start[r] as number;
+  const end = runs.start[r + 1] as number;
+  // A block of a run ends no further right than the margin past the next block's left edge (blockRuns.ts
+  // cuts a run where one reaches back further), so every block before the one before the first left
+  // edge at or past this threshold ends left of the box. The threshold leaves the margin twice and a
+  // rounding allowance of 2⁻⁴⁰ of the box's edge.
+  const threshold = left - 2 * ABUTMENT_TOLERANCE - Math.abs(left) * 2 ** -40;
+  let lo = from;
+  let hi = end;
+  while (lo < hi) {
+    const mid = (lo + hi) >>> 1;
+    if ((x[mid] as number) < threshold) lo = mid + 1;
+    else hi = mid;
+  }
+  for (let i = lo > from ? lo - 1 : from; i < end; i++) {
+    const bx = x[i] as number;
+    if (bx > right) break;
+    if (bx + (width[i] as number) < left || (matIndexAt !== null && (matIndexAt[i] as number) < 0)) continue;
+    out[n++] = i ^ flip;
+  }
+  return n;
 }
 
 /** Scratch for {@link blocksInBoxes}: at least twice as long as the table. */
