@@ -14,7 +14,9 @@ import {
   WORDLINE_DRIVER_STRIP_CODE,
 } from '../../src/geometry/blockTable';
 import { ABUTMENT_TOLERANCE } from '../../src/geometry/rect';
-import type { Block } from '../../src/model/block';
+import type { Block, Strip } from '../../src/model/block';
+import { layoutState } from '../../src/engine/evaluation/layoutFindings';
+import { layoutState as layoutStateBefore } from '../support/layoutBefore/layoutFindings';
 import type { Design } from '../../src/model/design';
 import { DEMO_PROCESS, FOLDED_8F2_CELL } from '../../src/model/builtins';
 import { designWith, mat, strip } from '../support/designs';
@@ -213,6 +215,33 @@ describe('decoder seeds found run by run (reachSeeds.ts)', () => {
         },
       ),
       { numRuns: 300 },
+    );
+  }, 60_000);
+});
+
+describe('decoder seeds when a decoder has an edge that is not finite', () => {
+  it('are those of the code the one-pass search replaced', () => {
+    fc.assert(
+      fc.property(
+        fc.array(rowArb, { minLength: 1, maxLength: 6 }),
+        fc.array(decoderArb, { minLength: 1, maxLength: 2 }),
+        fc.constantFrom(Infinity, -Infinity, NaN),
+        fc.constantFrom('x', 'width'),
+        (rows, decoders, bad, field) => {
+          const blocks = withDecoders(rowsOf(rows), decoders);
+          const last = blocks[blocks.length - 1] as Strip;
+          blocks[blocks.length - 1] = { ...last, [field]: bad };
+          const design = designWith(blocks);
+          const table = blockTable(design);
+          const { mats } = evaluate(design);
+          const now = layoutState(table, mats);
+          const before = layoutStateBefore(table, mats);
+          for (let n = 0; n < 2; n++)
+            expect(now.reach.results[n]?.reach.seed).toEqual(before.reach.results[n]?.reach.seed);
+          expect(now.findings).toEqual(before.findings);
+        },
+      ),
+      { numRuns: 200 },
     );
   }, 60_000);
 });

@@ -1,16 +1,9 @@
-import {
-  kindAt,
-  SENSE_AMP_STRIP_CODE,
-  WORDLINE_DRIVER_STRIP_CODE,
-  type BlockTable,
-} from '../../geometry/blockTable';
-import { ABUTMENT_TOLERANCE } from '../../geometry/rect';
+import { SENSE_AMP_STRIP_CODE, WORDLINE_DRIVER_STRIP_CODE, type BlockTable } from '../../geometry/blockTable';
 import { facingPairs, PairList } from './facingStrips';
 import { mayFaceInRange, StripRange } from './stripRanges';
-import { ALONG_HORIZONTAL_EDGE, ALONG_VERTICAL_EDGE, ServingForest, UNSERVING } from './servingForest';
+import { ALONG_HORIZONTAL_EDGE, ServingForest, UNSERVING } from './servingForest';
 import { BLOCK_TYPE_LABEL } from '../../model/blockBasics';
 import type { MatTable } from './matTable';
-import type { ServedMats } from './reachComponents';
 import type { Finding } from './report';
 
 /** Pairs named in a finding's message; its block ids name them all. */
@@ -101,67 +94,6 @@ export function pairFindings(table: BlockTable, pairsByType: readonly Int32Array
     });
   }
   return findings;
-}
-
-/**
- * The order the whole-table search gives: strips lying across before strips standing, then by the first
- * strip's position, the second's start across, the second's position.
- */
-export function inFindingOrder(table: BlockTable, facing: Uint8Array, flat: readonly number[]): Int32Array {
-  const order: number[] = [];
-  for (let n = 0; n < flat.length; n += 2) order.push(n);
-  const across = (j: number) =>
-    facing[j] === ALONG_HORIZONTAL_EDGE ? (table.y[j] as number) : (table.x[j] as number);
-  order.sort((p, q) => {
-    const a = flat[p] as number;
-    const b = flat[q] as number;
-    const c = flat[p + 1] as number;
-    const d = flat[q + 1] as number;
-    return (facing[a] as number) - (facing[b] as number) || a - b || across(c) - across(d) || c - d;
-  });
-  const out = new Int32Array(flat.length);
-  order.forEach((p, n) => {
-    out[2 * n] = flat[p] as number;
-    out[2 * n + 1] = flat[p + 1] as number;
-  });
-  return out;
-}
-
-/** True when strip `i`'s far long edge meets strip `j`'s near one and they overlap along the strip. */
-export function meets(table: BlockTable, orientation: number, i: number, j: number): boolean {
-  const lying = orientation === ALONG_HORIZONTAL_EDGE;
-  const across = lying ? table.y : table.x;
-  const thickness = lying ? table.height : table.width;
-  const along = lying ? table.x : table.y;
-  const length = lying ? table.width : table.height;
-  const edge = (across[i] as number) + (thickness[i] as number);
-  const start = across[j] as number;
-  if (!(start >= edge - ABUTMENT_TOLERANCE && start <= edge + ABUTMENT_TOLERANCE)) return false;
-  const alongStart = along[i] as number;
-  const overlap =
-    Math.min(alongStart + (length[i] as number), (along[j] as number) + (length[j] as number)) -
-    Math.max(alongStart, along[j] as number);
-  return overlap > ABUTMENT_TOLERANCE;
-}
-
-/**
- * The orientation {@link servedEdgeOrientation} gives strip `s`: that of the last mat in report order
- * serving it, its driver part after its sense-amplifier part.
- */
-export function orientationOf(
-  table: BlockTable,
-  mats: MatTable,
-  served: readonly [ServedMats, ServedMats],
-  s: number,
-): number {
-  const last = (list: Int32Array) => (list.length === 0 ? -1 : (list[list.length - 1] as number));
-  const k0 = last(served[0].mats(s));
-  const k1 = last(served[1].mats(s));
-  if (k0 < 0 && k1 < 0) return UNSERVING;
-  const k = k1 >= k0 ? k1 : k0;
-  const vertical = kindAt(table, mats.position[k] as number).block.bitlineAxis === 'vertical';
-  if (k1 >= k0) return vertical ? ALONG_VERTICAL_EDGE : ALONG_HORIZONTAL_EDGE;
-  return vertical ? ALONG_HORIZONTAL_EDGE : ALONG_VERTICAL_EDGE;
 }
 
 /**

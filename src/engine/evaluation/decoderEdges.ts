@@ -23,7 +23,7 @@ export class DecoderEdges {
   /**
    * The decoders' common bounding box grown by {@link WINDOW} (m: left, top, right, bottom), or null when
    * some decoder's edges are not finite. A block that abuts a decoder lies within the abutment tolerance
-   * of it, so a block wholly outside this box abuts none: see {@link mayAbut}.
+   * of it, so a block wholly outside this box abuts none (reachSeeds.ts tests blocks against it).
    */
   readonly reach: Float64Array | null;
 
@@ -37,24 +37,6 @@ export class DecoderEdges {
   ) {
     this.candidates = new Int32Array(4 * decoders.length + unsorted.length);
     this.reach = unsorted.length > 0 ? null : grownBounds(top, bottom, left, right);
-  }
-
-  /**
-   * False when block `i` certainly abuts no decoder: it lies wholly outside {@link reach}. True otherwise
-   * (also for a block whose edges are not numbers), and the caller's exact test decides. Two comparisons
-   * per side, so that a pass over the table asks {@link near} only about the few blocks beside a decoder.
-   */
-  mayAbut(table: BlockTable, i: number): boolean {
-    const reach = this.reach;
-    if (reach === null) return true;
-    const left = table.x[i] as number;
-    const top = table.y[i] as number;
-    return !(
-      left + (table.width[i] as number) < (reach[0] as number) ||
-      top + (table.height[i] as number) < (reach[1] as number) ||
-      left > (reach[2] as number) ||
-      top > (reach[3] as number)
-    );
   }
 
   /** The edges of the decoders of type `decoderCode`, or null when there are none. */

@@ -6,15 +6,9 @@
  * (test/engine/layoutIncremental.test.ts).
  */
 import type { BlockTable } from '../../geometry/blockTable';
-import {
-  backToBackStrips,
-  inFindingOrder,
-  meets,
-  orientationOf,
-  pairFindings,
-  STRIP_CODES,
-  type BackToBackState,
-} from './backToBackStrips';
+import { kindAt } from '../../geometry/blockTable';
+import { ABUTMENT_TOLERANCE } from '../../geometry/rect';
+import { backToBackStrips, pairFindings, STRIP_CODES, type BackToBackState } from './backToBackStrips';
 import { DecoderEdges } from './decoderEdges';
 import { hasServing, reachResult, unreachedFinding, type DecoderReachState } from './decoderReach';
 import { findingsOf, type LayoutState } from './layoutFindings';
@@ -28,8 +22,8 @@ import {
   type ReachComponents,
   type ServedMats,
 } from './reachComponents';
-import { reachSeeds, seedAt } from './reachSeeds';
-import { ServingForest, UNSERVING } from './servingForest';
+import { COLUMN_DECODER, seedAt } from './reachSeeds';
+import { ALONG_HORIZONTAL_EDGE, ALONG_VERTICAL_EDGE, ServingForest, UNSERVING } from './servingForest';
 
 /**
  * The layout checks after an edit in place (same blocks in the same order), from the state the report
@@ -209,4 +203,121 @@ export function reachComponentsAfterEdit(
   }
   if (components.length > previous.built + MOST_PATCHED) return null;
   return { reach: { part, served, seed, label, components, built: previous.built }, relabelled: relabel };
+}
+
+/**
+ * The order the whole-table search gives: strips lying across before strips standing, then by the first
+ * strip's position, the second's start across, the second's position.
+ */
+function inFindingOrder(table: BlockTable, facing: Uint8Array, flat: readonly number[]): Int32Array {
+  const order: number[] = [];
+  for (let n = 0; n < flat.length; n += 2) order.push(n);
+  const across = (j: number) =>
+    facing[j] === ALONG_HORIZONTAL_EDGE ? (table.y[j] as number) : (table.x[j] as number);
+  order.sort((p, q) => {
+    const a = flat[p] as number;
+    const b = flat[q] as number;
+    const c = flat[p + 1] as number;
+    const d = flat[q + 1] as number;
+    return (facing[a] as number) - (facing[b] as number) || a - b || across(c) - across(d) || c - d;
+  });
+  const out = new Int32Array(flat.length);
+  order.forEach((p, n) => {
+    out[2 * n] = flat[p] as number;
+    out[2 * n + 1] = flat[p + 1] as number;
+  });
+  return out;
+}
+
+/** True when strip `i`'s far long edge meets strip `j`'s near one and they overlap along the strip. */
+function meets(table: BlockTable, orientation: number, i: number, j: number): boolean {
+  const lying = orientation === ALONG_HORIZONTAL_EDGE;
+  const across = lying ? table.y : table.x;
+  const thickness = lying ? table.height : table.width;
+  const along = lying ? table.x : table.y;
+  const length = lying ? table.width : table.height;
+  const edge = (across[i] as number) + (thickness[i] as number);
+  const start = across[j] as number;
+  if (!(start >= edge - ABUTMENT_TOLERANCE && start <= edge + ABUTMENT_TOLERANCE)) return false;
+  const alongStart = along[i] as number;
+  const overlap =
+    Math.min(alongStart + (length[i] as number), (along[j] as number) + (length[j] as number)) -
+    Math.max(alongStart, along[j] as number);
+  return overlap > ABUTMENT_TOLERANCE;
+}
+
+/**
+ * The orientation {@link servedEdgeOrientation} gives strip `s`: that of the last mat in report order
+ * serving it, its driver part after its sense-amplifier part.
+ */
+function orientationOf(
+  table: BlockTable,
+  mats: MatTable,
+  served: readonly [ServedMats, ServedMats],
+  s: number,
+): number {
+  const last = (list: Int32Array) => (list.length === 0 ? -1 : (list[list.length - 1] as number));
+  const k0 = last(served[0].mats(s));
+  const k1 = last(served[1].mats(s));
+  if (k0 < 0 && k1 < 0) return UNSERVING;
+  const k = k1 >= k0 ? k1 : k0;
+  const vertical = kindAt(table, mats.position[k] as number).block.bitlineAxis === 'vertical';
+  if (k1 >= k0) return vertical ? ALONG_VERTICAL_EDGE : ALONG_HORIZONTAL_EDGE;
+  return vertical ? ALONG_HORIZONTAL_EDGE : ALONG_VERTICAL_EDGE;
+}
+
+/**
+ * Where the lines of decoders of type `decoderCode` enter the stack of mats and strips, per table position:
+ * the decoders themselves, the strips of type `stripCode` abutting one, and (for column decoders) mats
+ * with a bit-line end against one. Found by binary search on the decoders' sorted edges, one pass in all.
+ */
+function reachSeeds(
+  table: BlockTable,
+  matIndexAt: Int32Array,
+  edges: DecoderEdges | null,
+  decoderCode: number,
+  stripCode: number,
+): Uint8Array {
+  const seed = new Uint8Array(table.count);
+  if (edges === null) return seed;
+  for (const d of edges.decoders) seed[d] = 1;
+  const box = edges.reach;
+  if (box === null) {
+    for (let i = 0; i < table.count; i++)
+      if (table.type[i] !== decoderCode && seedAt(table, matIndexAt, edges, i, decoderCode, stripCode))
+        seed[i] = 1;
+    return seed;
+  }
+  return seedsInBox(table, matIndexAt, edges, box, decoderCode, stripCode, seed);
+}
+
+/**
+ * The seeds among blocks that lie at least partly inside the decoders' grown bounding box `box` (the
+ * test against {@link DecoderEdges.reach}): one check's seeds, for an edit that checks it again
+ * whole ({@link seedsOfChecks} does both checks of a whole evaluation in one pass).
+ */
+function seedsInBox(
+  table: BlockTable,
+  matIndexAt: Int32Array,
+  edges: DecoderEdges,
+  box: Float64Array,
+  decoderCode: number,
+  stripCode: number,
+  seed: Uint8Array,
+): Uint8Array {
+  const { type, x, y, width, height } = table;
+  const left = box[0] as number;
+  const top = box[1] as number;
+  const right = box[2] as number;
+  const bottom = box[3] as number;
+  const matsToo = decoderCode === COLUMN_DECODER;
+  for (let i = 0; i < table.count; i++) {
+    if (type[i] !== stripCode && !(matsToo && (matIndexAt[i] as number) >= 0)) continue;
+    const bx = x[i] as number;
+    const by = y[i] as number;
+    if (bx > right || by > bottom || bx + (width[i] as number) < left || by + (height[i] as number) < top)
+      continue;
+    if (seedAt(table, matIndexAt, edges, i, decoderCode, stripCode)) seed[i] = 1;
+  }
+  return seed;
 }

@@ -11,7 +11,7 @@ import type { DecoderEdges } from './decoderEdges';
  * column decoders the mats with a bit-line end against one.
  */
 
-const COLUMN_DECODER = BLOCK_TYPE_CODES.indexOf('columnDecoder');
+export const COLUMN_DECODER = BLOCK_TYPE_CODES.indexOf('columnDecoder');
 
 /** The decoder and strip types of one reach check. */
 export interface SeedCheck {
@@ -29,65 +29,12 @@ function abutting(table: BlockTable, i: number, j: number): boolean {
 }
 
 /**
- * Where the lines of decoders of type `decoderCode` enter the stack of mats and strips, per table position:
- * the decoders themselves, the strips of type `stripCode` abutting one, and (for column decoders) mats
- * with a bit-line end against one. Found by binary search on the decoders' sorted edges, one pass in all.
- */
-export function reachSeeds(
-  table: BlockTable,
-  matIndexAt: Int32Array,
-  edges: DecoderEdges | null,
-  decoderCode: number,
-  stripCode: number,
-): Uint8Array {
-  const seed = new Uint8Array(table.count);
-  if (edges === null) return seed;
-  for (const d of edges.decoders) seed[d] = 1;
-  const box = edges.reach;
-  if (box === null) {
-    for (let i = 0; i < table.count; i++)
-      if (table.type[i] !== decoderCode && seedAt(table, matIndexAt, edges, i, decoderCode, stripCode))
-        seed[i] = 1;
-    return seed;
-  }
-  return seedsInBox(table, matIndexAt, edges, box, decoderCode, stripCode, seed);
-}
-
-/**
- * The seeds among blocks that lie at least partly inside the decoders' grown bounding box `box` (the
- * test of {@link DecoderEdges.mayAbut}, written out): one check's seeds, for an edit that checks it again
- * whole ({@link seedsOfChecks} does both checks of a whole evaluation in one pass).
- */
-function seedsInBox(
-  table: BlockTable,
-  matIndexAt: Int32Array,
-  edges: DecoderEdges,
-  box: Float64Array,
-  decoderCode: number,
-  stripCode: number,
-  seed: Uint8Array,
-): Uint8Array {
-  const { type, x, y, width, height } = table;
-  const left = box[0] as number;
-  const top = box[1] as number;
-  const right = box[2] as number;
-  const bottom = box[3] as number;
-  const matsToo = decoderCode === COLUMN_DECODER;
-  for (let i = 0; i < table.count; i++) {
-    if (type[i] !== stripCode && !(matsToo && (matIndexAt[i] as number) >= 0)) continue;
-    const bx = x[i] as number;
-    const by = y[i] as number;
-    if (bx > right || by > bottom || bx + (width[i] as number) < left || by + (height[i] as number) < top)
-      continue;
-    if (seedAt(table, matIndexAt, edges, i, decoderCode, stripCode)) seed[i] = 1;
-  }
-  return seed;
-}
-
-/**
- * {@link reachSeeds} of the two reach checks in one pass over the table (the first evaluation runs this
- * loop before V8 has compiled it, so one pass instead of two is half the cost). Falls back to one pass per
- * check when a check's decoders have no finite bounding box.
+ * Where the lines of the two reach checks' decoders enter the stack of mats and strips, per table
+ * position: the decoders themselves, the strips of the check's type abutting one, and (for column
+ * decoders) mats with a bit-line end against one. One pass over the table for both checks (the first
+ * evaluation runs it before V8 has compiled it, so one pass instead of two is half the cost), testing
+ * only the blocks inside the decoders' grown bounding box exactly; a check whose decoders have no finite
+ * box tests every candidate.
  */
 export function seedsOfChecks(
   table: BlockTable,
@@ -99,11 +46,6 @@ export function seedsOfChecks(
   /** The table's runs by block type with the margin ABUTMENT_TOLERANCE, when the caller has them. */
   runs: BlockRuns | null = null,
 ): readonly [Uint8Array, Uint8Array] {
-  if ((edgesA !== null && edgesA.reach === null) || (edgesB !== null && edgesB.reach === null))
-    return [
-      reachSeeds(table, matIndexAt, edgesA, a.decoderCode, a.stripCode),
-      reachSeeds(table, matIndexAt, edgesB, b.decoderCode, b.stripCode),
-    ];
   const seedA = new Uint8Array(table.count);
   const seedB = new Uint8Array(table.count);
   if (edgesA !== null) for (const d of edgesA.decoders) seedA[d] = 1;
@@ -141,10 +83,10 @@ export function candidatesOfChecks(
         matIndexAt,
         edgesA === null ? -1 : a.stripCode,
         edgesA !== null && a.decoderCode === COLUMN_DECODER,
-        edgesA?.reach ?? NOWHERE,
+        reachOf(edgesA),
         edgesB === null ? -1 : b.stripCode,
         edgesB !== null && b.decoderCode === COLUMN_DECODER,
-        edgesB?.reach ?? NOWHERE,
+        reachOf(edgesB),
         inBoxes,
       );
 }
@@ -163,8 +105,8 @@ function blocksInBoxesOf(
   b: SeedCheck,
   edgesB: DecoderEdges | null,
 ): number {
-  const boxA = narrowFirst(table, edgesA?.reach ?? NOWHERE);
-  const boxB = narrowFirst(table, edgesB?.reach ?? NOWHERE);
+  const boxA = narrowFirst(table, reachOf(edgesA));
+  const boxB = narrowFirst(table, reachOf(edgesB));
   // A check without decoders has no seeds: its strip code matches no block and its box is never consulted.
   return blocksInBoxes(
     table.count,
@@ -272,8 +214,8 @@ let inBoxes = new Int32Array(1024);
 /**
  * Writes to `out`, in table order, each candidate block of check A (a strip of its type, or a mat where
  * mats count) lying at least partly inside box A as its position, and each of check B inside box B as
- * the position's complement (~i), and returns how many it wrote: the test of {@link DecoderEdges.mayAbut},
- * written out, with each box tested first across its narrow side (a row decoder's box is narrow in x, a
+ * the position's complement (~i), and returns how many it wrote: the test against
+ * {@link DecoderEdges.reach}, with each box tested first across its narrow side (a row decoder's box is narrow in x, a
  * column decoder's in y) so that most blocks leave after one or two comparisons. The exact test runs
  * afterwards, outside this loop: V8 compiles the loop while it runs, and with that test inside it
  * inlined a dozen geometry functions (a 20 ms compile for a loop that runs once per evaluation). What
@@ -357,6 +299,13 @@ function narrowFirst(table: BlockTable, box: Float64Array): NarrowFirst {
 
 /** The box of a check without decoders: a placeholder, never consulted (no block is a candidate for it). */
 const NOWHERE = Float64Array.of(Infinity, Infinity, -Infinity, -Infinity);
+/** The box of decoders with an edge that is not finite: every candidate is tested. */
+const EVERYWHERE = Float64Array.of(-Infinity, -Infinity, Infinity, Infinity);
+
+/** The box the candidates of a check are taken from (left, top, right, bottom). */
+function reachOf(edges: DecoderEdges | null): Float64Array {
+  return edges === null ? NOWHERE : (edges.reach ?? EVERYWHERE);
+}
 
 /** True when the block at table position `i` is a seed of {@link reachSeeds}. */
 export function seedAt(
