@@ -276,7 +276,7 @@ export function evaluate(design: Design): Report {
   const overlaps = findPositionedOverlaps(table, neighbours);
   const totals = computeTotals(table, mats, design, ctx, senseAmpCount, overlaps);
   const matIndexAt = matIndexByPosition(mats, table.count);
-  const layout = layoutState(table, mats, matIndexAt);
+  const layout = layoutState(table, mats, matIndexAt, neighbours.runs ?? null);
   const report: Report = {
     mats,
     totals,
