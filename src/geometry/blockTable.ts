@@ -1,8 +1,9 @@
-import type { Block, BlockType, Mat } from '../model/block';
+import type { BitlineAxis, Block, BlockType, Mat } from '../model/block';
 import { BLOCK_TYPES } from '../model/blockBasics';
 import type { CellDefinition } from '../model/cell';
 import type { Design } from '../model/design';
 import { matGeometry, type MatGeometry } from './matGeometry';
+import { repeatedSum } from './repeatedSum';
 import type { Rect } from './rect';
 
 /** Block types in the order of their codes in {@link BlockTable.type}. */
@@ -88,10 +89,15 @@ export function blockTable(design: Design): BlockTable {
   const firstKind = first ? matKindOf(table, first) : -1;
   if (firstKind >= 0) sums.matsOfKind.push(0);
   const firstGeometry = first ? (kinds[firstKind] as MatKind).geometry : null;
-  sums.placedArea = writeRows(
+  const stretches = new Int32Array(design.blocks.length + 1);
+  const count = writeRows(
     table,
     design.blocks,
-    first,
+    first?.cellId ?? '',
+    first?.cellsPerBitline ?? 0,
+    first?.cellsPerWordline ?? 0,
+    first?.bitlineAxis ?? 'vertical',
+    first?.footprint !== undefined,
     firstKind,
     firstGeometry?.width ?? 0,
     firstGeometry?.height ?? 0,
@@ -102,11 +108,33 @@ export function blockTable(design: Design): BlockTable {
     type,
     kindOf,
     kinds,
-    sums.areaByCode,
     sums.bounds,
     sums.matsOfKind,
+    stretches,
   );
+  stretches[count] = design.blocks.length;
+  sums.placedArea = addStretches(table, stretches.subarray(0, count + 1), sums.areaByCode);
   return table;
+}
+
+/**
+ * The areas of a table written by {@link writeRows}, stretch by stretch (stretch k: blocks
+ * `stretches[k]` … `stretches[k + 1] − 1`, in a row, of one size and type code): each block's area
+ * (width · height) into its code's sum and the placed area, in design order. A stretch is added at once
+ * (repeatedSum.ts: to the bit what adding block by block gives, without a new number per block in the
+ * interpreter). Returns the placed area.
+ */
+function addStretches(table: BlockTable, stretches: Int32Array, areaByCode: Float64Array): number {
+  let placedArea = 0;
+  for (let k = 0; k + 1 < stretches.length; k++) {
+    const from = stretches[k] as number;
+    const to = stretches[k + 1] as number;
+    const area = (table.width[from] as number) * (table.height[from] as number);
+    const code = table.type[from] as number;
+    placedArea = repeatedSum(placedArea, area, to - from);
+    areaByCode[code] = repeatedSum(areaByCode[code] as number, area, to - from);
+  }
+  return placedArea;
 }
 
 /**
@@ -220,17 +248,24 @@ const FAR = Infinity;
 const NEAR = -Infinity;
 
 /**
- * Writes every row and gathers the table's sums in the same pass (design order); returns the placed
- * area. What the loop reads comes in as arguments and the loop nearly ends the function: a function V8
- * compiles after its first call would otherwise find no type feedback for code before the loop (the
- * first call ran it before the function had a feedback vector) and be thrown away at entry, running
- * the whole loop in the interpreter again (DEVELOPERS.md).
+ * Writes every row, the table's bounds and mats per kind, and where each stretch of blocks of one size
+ * and code begins, in one pass (design order); returns the number of stretches. What the loop reads comes in as arguments and the loop ends the
+ * function: a function V8 compiles after its first call would otherwise find no type feedback for code
+ * before the loop (the first call ran it before the function had a feedback vector) and be thrown away
+ * at entry, running the whole loop in the interpreter again (DEVELOPERS.md). The last mat's cell and
+ * counts are kept in locals: consecutive mats are nearly always of one kind in a tiled array, so the
+ * kind is looked up only when one of them changes.
  */
 function writeRows(
   table: TableInProgress,
   blocks: readonly Block[],
-  /** The first mat, its kind and that kind's size (m), found by the caller; null and −1 without mats. */
-  firstMat: Mat | null,
+  /** The first mat's cell, counts, axis and whether it has a footprint ('' and 0 without mats). */
+  firstCell: string,
+  firstPerBitline: number,
+  firstPerWordline: number,
+  firstAxis: BitlineAxis,
+  firstFootprint: boolean,
+  /** The first mat's kind and that kind's size (m), found by the caller; −1 without mats. */
   firstKind: number,
   firstWidth: number,
   firstHeight: number,
@@ -241,32 +276,35 @@ function writeRows(
   types: Uint8Array,
   kindOf: Int32Array,
   kinds: readonly MatKind[],
-  areaByCode: Float64Array,
   bounds: Float64Array,
   matsOfKind: number[],
+  /** Where each stretch of blocks of one size and code begins (see {@link addStretches}). */
+  stretches: Int32Array,
 ): number {
-  let placedArea = 0;
   let minX = FAR;
   let minY = FAR;
   let maxX = NEAR;
   let maxY = NEAR;
-  // Sizes are positive: −1 matches none.
+  // The size and code of the stretch so far: sizes are ≥ 0, so −1 matches none and the first block
+  // opens a stretch.
   let areaWidth = -1;
   let areaHeight = -1;
-  let area = 0;
   let sumCode = -1;
-  let codeArea = 0;
+  let count = 0;
   // The box whose right (bottom) edge is the far one so far: its left (top) and width (height).
   let rightX = 0;
   let rightWidth = -1;
   let bottomY = 0;
   let bottomHeight = -1;
-  // Consecutive mats are nearly always of one kind in a tiled array, so the last kind is tried first
-  // before building a key; strips come in runs of one type, so the last type's code likewise.
-  let last = firstMat;
+  let lastCell = firstCell;
+  let lastPerBitline = firstPerBitline;
+  let lastPerWordline = firstPerWordline;
+  let lastAxis = firstAxis;
+  let lastFootprint = firstFootprint;
   let lastKind = firstKind;
   let lastWidth = firstWidth;
   let lastHeight = firstHeight;
+  // Strips come in runs of one type: the last type's code likewise.
   let runType: BlockType | null = null;
   let runCode = -1;
   for (let i = 0; i < blocks.length; i++) {
@@ -278,18 +316,21 @@ function writeRows(
     let code: number;
     if (block.type === 'mat') {
       if (
-        last === null ||
-        block.cellId !== last.cellId ||
-        block.cellsPerBitline !== last.cellsPerBitline ||
-        block.cellsPerWordline !== last.cellsPerWordline ||
-        block.bitlineAxis !== last.bitlineAxis ||
+        block.cellId !== lastCell ||
+        block.cellsPerBitline !== lastPerBitline ||
+        block.cellsPerWordline !== lastPerWordline ||
+        block.bitlineAxis !== lastAxis ||
         block.footprint !== undefined ||
-        last.footprint !== undefined
+        lastFootprint
       ) {
         lastKind = matKindOf(table, block);
         if (lastKind === matsOfKind.length) matsOfKind.push(0);
         const g = (kinds[lastKind] as MatKind).geometry;
-        last = block;
+        lastCell = block.cellId;
+        lastPerBitline = block.cellsPerBitline;
+        lastPerWordline = block.cellsPerWordline;
+        lastAxis = block.bitlineAxis;
+        lastFootprint = block.footprint !== undefined;
         lastWidth = g.width;
         lastHeight = g.height;
       }
@@ -313,23 +354,23 @@ function writeRows(
     widths[i] = w;
     heights[i] = h;
     types[i] = code;
-    // Blocks come in runs of one size and type: the product, a type's running sum and the box's far
-    // edges are formed only when they can change (each stays the same number, to the bit).
-    if (w !== areaWidth || h !== areaHeight) {
+    if (w !== areaWidth || h !== areaHeight || code !== sumCode) {
       areaWidth = w;
       areaHeight = h;
-      area = w * h;
-    }
-    placedArea += area;
-    if (code !== sumCode) {
       sumCode = code;
-      codeArea = areaByCode[code] as number;
+      stretches[count++] = i;
     }
-    codeArea += area;
-    areaByCode[code] = codeArea;
     // Comparisons rather than Math.min/max calls: coordinates are finite (restore checks them).
-    if (x < minX) minX = x;
-    if (y < minY) minY = y;
+    // The bounds are stored as they grow (rarely, and the first block stores all four): code after the
+    // loop would have no type feedback when V8 compiles the loop as it runs (DEVELOPERS.md).
+    if (x < minX) {
+      minX = x;
+      bounds[0] = x;
+    }
+    if (y < minY) {
+      minY = y;
+      bounds[1] = y;
+    }
     // x + w rounds monotonically in x: a box of the far edge's width starting no further right ends no
     // further right.
     if (w !== rightWidth || x > rightX) {
@@ -338,6 +379,7 @@ function writeRows(
         maxX = right;
         rightX = x;
         rightWidth = w;
+        bounds[2] = right;
       }
     }
     if (h !== bottomHeight || y > bottomY) {
@@ -346,16 +388,11 @@ function writeRows(
         maxY = bottom;
         bottomY = y;
         bottomHeight = h;
+        bounds[3] = bottom;
       }
     }
   }
-  // After the loop, not in it: a store made only when the box grows may never have run (and so have
-  // no type feedback) when V8 compiles the loop, and would throw the compiled loop away mid-way.
-  bounds[0] = minX;
-  bounds[1] = minY;
-  bounds[2] = maxX;
-  bounds[3] = maxY;
-  return placedArea;
+  return count;
 }
 
 /**

@@ -12,7 +12,7 @@ import {
 } from '../physics/refresh';
 import { figuresAt, matIdAt, matLabelAt, type MatTable } from './matTable';
 import { refreshRows } from './refreshRows';
-import { repeatedSum } from './repeatedSum';
+import { repeatedSum } from '../../geometry/repeatedSum';
 import type { MatFigures, RefreshFigures, Totals } from './report';
 
 export { refreshRows } from './refreshRows';

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { repeatedSum } from '../../src/engine/evaluation/repeatedSum';
+import { repeatedSum } from '../../src/geometry/repeatedSum';
 
 /** The definition: n additions one after the other. */
 function loopSum(s: number, v: number, n: number): number {
