@@ -22,6 +22,12 @@ const SIGNIFICAND_HIGH = 2 ** 53;
  * binade each take one plain addition. IEEE 754 round-to-nearest-even, as JavaScript numbers are.
  */
 export function repeatedSum(s: number, v: number, n: number): number {
+  if (!(n > 0)) return s;
+  // After one addition of a zero the sum is its own sum with that zero (±0 + ±0 rounds alike each time).
+  if (v === 0) return s + v;
+  // Negative sums of negative addends round as their mirror images do (round-to-nearest-even is
+  // symmetric, and no sum is 0 after the first addition).
+  if (v < 0 && s <= 0) return -repeatedSum(-s, -v, n);
   let sum = s;
   let left = n;
   while (left > 0) {

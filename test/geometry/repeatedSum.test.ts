@@ -86,6 +86,12 @@ describe('repeatedSum', () => {
       [2 ** 53 - 1, 1, 5],
       [0, 3 * 2 ** -20, 5000],
       [1e300, 1e292, 3000],
+      // Zeros keep their sign rules; a sum that reaches 0 exactly is +0.
+      [-0, 0, 3],
+      [-0, -0, 3],
+      [3, -1, 3],
+      [3, -1, 5],
+      [-0, -0.1, 100],
     ] as const)
       expect(Object.is(repeatedSum(s, v, n), loopSum(s, v, n))).toBe(true);
   });

@@ -9,12 +9,12 @@ import {
 import { uncoveredLineCount } from '../../geometry/interval';
 import type { NeighbourTable } from '../../geometry/neighbourRows';
 import { ABUTMENT_TOLERANCE } from '../../geometry/rect';
-import { emptyConnections, matConnections } from './connectivity';
 import type { MatTableBuilder } from './matTable';
 import { pairsAcrossStrips } from './openBitline';
+import { connectMatAlone, connectRunMats } from './servedRuns';
 
 /**
- * The connection pass of a whole die: {@link matConnections} for every mat in one loop, with the same
+ * The connection pass of a whole die: matConnections (connectivity.ts) for every mat in one loop, with the same
  * arithmetic and the same answers (test/engine/servedLines.test.ts compares them on random floorplans).
  * Why a second form: evaluate()'s first call in a process runs almost wholly in V8's interpreter, where
  * the cost is the bytecodes executed per mat. This loop reads each mat's box once, tests each
@@ -73,7 +73,7 @@ class KindLines {
 }
 
 /**
- * Every mat's connections, mat k (in design order of the mats) at a time: what {@link matConnections}
+ * Every mat's connections, mat k (in design order of the mats) at a time: what matConnections (connectivity.ts)
  * returns for it, column-wise. Scratch columns reused from call to call (they never leave evaluate).
  */
 export class ServedLines {
@@ -147,8 +147,6 @@ const SCRATCH = new ContactScratch();
 /** −tolerance as a constant: negating in the pass would be an operation needing type feedback. */
 const NEGATIVE_TOLERANCE = -ABUTMENT_TOLERANCE;
 const LINES = new ServedLines();
-/** The record an open-bit-line mat's matConnections fills. */
-const OPEN_RECORD = emptyConnections();
 
 /**
  * The connections of every mat of `table` (mat k = the k-th mat in design order), with each mat's serving
@@ -162,6 +160,11 @@ export function connectAllMats(
 ): ServedLines {
   LINES.reset(matCount);
   const kinds = new KindLines(table.kinds);
+  const runs = neighbours.runs;
+  if (runs) {
+    connectRunMats(table, neighbours, runs, kinds, serving, LINES);
+    return LINES;
+  }
   const lines = LINES;
   const scratch = SCRATCH;
   connectEachMat(
@@ -196,26 +199,6 @@ export function connectAllMats(
     scratch.drivers,
   );
   return LINES;
-}
-
-/** Mat k's connections from matConnections itself (open bit lines look at the mats beyond a strip). */
-function connectOpenMat(
-  table: BlockTable,
-  at: number,
-  neighbours: NeighbourTable,
-  serving: MatTableBuilder,
-  k: number,
-  out: ServedLines,
-): void {
-  const c = matConnections(table, at, neighbours, serving, k, OPEN_RECORD, true);
-  out.unsensedBitlines[k] = c.unsensedBitlines;
-  out.undrivenWordlines[k] = c.undrivenWordlines;
-  out.senseAmpEnds[k] = c.senseAmpEnds;
-  out.unpartneredBitlines[k] = c.unpartneredBitlines;
-  out.servedKey[k] =
-    c.unsensedBitlines === 0 && c.undrivenWordlines === 0 && c.unpartneredBitlines === 0
-      ? 3 * (table.kindOf[at] as number) + c.senseAmpEnds
-      : -1;
 }
 
 /**
@@ -268,7 +251,7 @@ function connectEachMat(
     const kind = kindOf[at] as number;
     position[k] = at;
     if (open[kind] === 1) {
-      connectOpenMat(table, at, neighbours, serving, k, out);
+      connectMatAlone(table, at, neighbours, serving, k, out, true);
       k++;
       continue;
     }

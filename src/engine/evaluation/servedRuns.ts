@@ -1,0 +1,379 @@
+import {
+  MAT_CODE,
+  ROW_DECODER_CODE,
+  SENSE_AMP_STRIP_CODE,
+  WORDLINE_DRIVER_STRIP_CODE,
+  type BlockTable,
+} from '../../geometry/blockTable';
+import type { BlockRuns } from '../../geometry/blockRuns';
+import type { NeighbourTable } from '../../geometry/neighbourRows';
+import { ABUTMENT_TOLERANCE } from '../../geometry/rect';
+import { emptyConnections, matConnections } from './connectivity';
+import type { MatTableBuilder } from './matTable';
+import type { ServedLines } from './servedLines';
+
+/**
+ * The connection pass (servedLines.ts, connectEachMat) for a floorplan the neighbour pass cut into runs
+ * (geometry/blockRuns.ts): the same answers, with fewer numbers read and formed per mat. Why: on
+ * evaluate()'s first call the pass runs in V8's interpreter, where every double read from a typed array
+ * and every double result is a new heap number (~50 per mat in connectEachMat).
+ *
+ * Blocks of one run share their top edge and bottom (top + height, as every box test forms it), so what
+ * a mat's box test reads vertically is one pair of numbers per run: whether a strip meets the mat's top
+ * or bottom edge, and how far it shares the mat's height, are decided once per pair of runs (and mat
+ * kind) and kept as a small code. What differs per pair is horizontal: a strip on the top or bottom edge
+ * that has exactly the mat's left edge and width (the bits of both doubles, read as 32-bit words) shares
+ * the mat's width as the mat measures it, once per mat; a strip on the left or right edge is tested as
+ * connectEachMat tests it, and the strip between two mats of a row is read once for both. Every test is
+ * connectEachMat's comparison on the same doubles. A mat whose strips do not cover both edges whole (the
+ * only case that needs their spans), that meets more strips than the scratch lists hold, or whose cell
+ * pairs bit lines across strips goes through matConnections itself.
+ */
+
+/** A run pair's code: the other run's bottom on the mats' top edge (within the tolerance)… */
+const MEETS_FIRST = 1;
+/** …its top on the mats' bottom edge. */
+const MEETS_SECOND = 2;
+/** A stretch code's bits: the stretch shared is longer than the tolerance… */
+const PASSES = 1;
+/** …it starts beyond the tolerance from the edge's start… */
+const STARTS_LATE = 2;
+/** …it reaches the edge's end within the tolerance. */
+const REACHES = 4;
+/** Where a run pair's code keeps the stretch code of the mats' height it shares. */
+const STRETCH_SHIFT = 2;
+
+const NEGATIVE_TOLERANCE = -ABUTMENT_TOLERANCE;
+/** Contacts a mat may have on this path; a mat with more goes through matConnections. */
+const CONTACTS = 16;
+const SENSE_AMPS = new Int32Array(CONTACTS);
+const DRIVERS = new Int32Array(CONTACTS);
+/** Where the pass resumes: the mat's design position and its index among the mats. */
+const RESUME = new Int32Array(2);
+/** The record matConnections fills for a mat of this path's. */
+const RECORD = emptyConnections();
+
+/** Per mat kind, what the pass reads (from the kinds once, not per mat). */
+export interface RunKindLines {
+  /** 1 when the kind's bit lines run vertically (its sense amplifiers on its top and bottom). */
+  readonly vertical: Uint8Array;
+  /** 1 when the kind's cell pairs bit lines across strips. */
+  readonly open: Uint8Array;
+  readonly senseEdgeReach: Float64Array;
+  readonly driveEdgeReach: Float64Array;
+}
+
+/**
+ * Mat k's connections from matConnections itself, into column k of `out` (the path for mats the passes
+ * do not handle themselves).
+ */
+export function connectMatAlone(
+  table: BlockTable,
+  at: number,
+  neighbours: NeighbourTable,
+  serving: MatTableBuilder,
+  k: number,
+  out: ServedLines,
+  open: boolean,
+): void {
+  const c = matConnections(table, at, neighbours, serving, k, RECORD, open);
+  out.unsensedBitlines[k] = c.unsensedBitlines;
+  out.undrivenWordlines[k] = c.undrivenWordlines;
+  out.senseAmpEnds[k] = c.senseAmpEnds;
+  out.unpartneredBitlines[k] = c.unpartneredBitlines;
+  out.servedKey[k] =
+    c.unsensedBitlines === 0 && c.undrivenWordlines === 0 && c.unpartneredBitlines === 0
+      ? 3 * (table.kindOf[at] as number) + c.senseAmpEnds
+      : -1;
+}
+
+/** The connections of every mat, as connectEachMat finds them, for a table cut into `runs`. */
+export function connectRunMats(
+  table: BlockTable,
+  neighbours: NeighbourTable,
+  runs: BlockRuns,
+  kinds: RunKindLines,
+  serving: MatTableBuilder,
+  out: ServedLines,
+): void {
+  // Each block's run.
+  const runOf = new Int32Array(table.count);
+  for (let r = 0; r < runs.count; r++) runOf.fill(r, runs.start[r], runs.start[r + 1]);
+  // The stretch reach of each kind's top/bottom strips and of its left/right strips: sense amplifiers
+  // sit on the bit-line ends (top and bottom when the bit lines run vertically), drivers on the others.
+  const n = kinds.vertical.length;
+  const acrossReach = new Float64Array(n);
+  const alongReach = new Float64Array(n);
+  for (let k = 0; k < n; k++) {
+    const vertical = kinds.vertical[k] === 1;
+    acrossReach[k] = (vertical ? kinds.senseEdgeReach[k] : kinds.driveEdgeReach[k]) as number;
+    alongReach[k] = (vertical ? kinds.driveEdgeReach[k] : kinds.senseEdgeReach[k]) as number;
+  }
+  const runOfPair = new Int32Array(runs.count).fill(-1);
+  const kindOfPair = new Int32Array(runs.count);
+  const pairCode = new Uint8Array(runs.count);
+  const xWords = wordsOf(table.x);
+  const widthWords = wordsOf(table.width);
+  const resume = RESUME;
+  resume[0] = 0;
+  resume[1] = 0;
+  // The pass stops at a mat whose strip run has no code for the mat's run and kind yet, and starts that
+  // mat again once the code is here: the code's arithmetic stays out of the pass's compiled loop.
+  for (;;) {
+    const missing = connectEachRunMat(
+      table,
+      neighbours,
+      serving,
+      out,
+      resume,
+      table.count,
+      table.x,
+      table.width,
+      xWords,
+      widthWords,
+      table.type,
+      table.kindOf,
+      neighbours.start,
+      neighbours.end,
+      neighbours.list,
+      runOf,
+      runOfPair,
+      kindOfPair,
+      pairCode,
+      kinds.vertical,
+      kinds.open,
+      acrossReach,
+      out.position,
+      out.unsensedBitlines,
+      out.undrivenWordlines,
+      out.senseAmpEnds,
+      out.unpartneredBitlines,
+      out.servedKey,
+      SENSE_AMPS,
+      DRIVERS,
+    );
+    if (missing < 0) return;
+    const at = resume[0] as number;
+    const run = runOf[at] as number;
+    const kind = table.kindOf[at] as number;
+    pairCode[missing] = runPairCode(runs.top, runs.bottom, run, missing, alongReach[kind] as number);
+    runOfPair[missing] = run;
+    kindOfPair[missing] = kind;
+  }
+}
+
+/** The 32-bit words of a list of doubles (two per double, in memory order). */
+function wordsOf(list: Float64Array): Int32Array {
+  return new Int32Array(list.buffer, list.byteOffset, 2 * list.length);
+}
+
+/**
+ * How a strip spanning `from` … `to` along an edge of a mat spanning `start` … `end` (m) covers it, as
+ * connectEachMat measures it: the stretch shared runs from max(own start, its start) to min(own end,
+ * its end), from the edge's start; bits PASSES, STARTS_LATE, REACHES (against `reach`, the edge's
+ * length less the tolerance).
+ */
+function stretchCode(start: number, end: number, from: number, to: number, reach: number): number {
+  const shareFrom = from > start ? from - start : 0;
+  const shareTo = (to < end ? to : end) - start;
+  const tol = ABUTMENT_TOLERANCE;
+  return (
+    (shareTo - shareFrom > tol ? PASSES : 0) |
+    (shareFrom > tol ? STARTS_LATE : 0) |
+    (shareTo >= reach ? REACHES : 0)
+  );
+}
+
+/**
+ * What run `s` is to the mats of run `r`: MEETS_FIRST / MEETS_SECOND when its bottom lies on their top
+ * or its top on their bottom (within the tolerance), and the stretch code of their height it shares
+ * (against `reach`), shifted by STRETCH_SHIFT.
+ */
+function runPairCode(top: Float64Array, bottom: Float64Array, r: number, s: number, reach: number): number {
+  const ownTop = top[r] as number;
+  const ownBottom = bottom[r] as number;
+  const otherTop = top[s] as number;
+  const otherBottom = bottom[s] as number;
+  const dFirst = otherBottom - ownTop;
+  const dSecond = otherTop - ownBottom;
+  const tol = ABUTMENT_TOLERANCE;
+  return (
+    (dFirst > tol || dFirst < NEGATIVE_TOLERANCE ? 0 : MEETS_FIRST) |
+    (dSecond > tol || dSecond < NEGATIVE_TOLERANCE ? 0 : MEETS_SECOND) |
+    (stretchCode(ownTop, ownBottom, otherTop, otherBottom, reach) << STRETCH_SHIFT)
+  );
+}
+
+/**
+ * The pass itself, from the mat at `resume` on: returns −1 when every mat is done, or a strip run whose
+ * code the mat at `resume` (now holding it) wants for its run and kind. What the loop reads comes in as
+ * arguments (see blockTable.ts, writeRows).
+ */
+function connectEachRunMat(
+  table: BlockTable,
+  neighbours: NeighbourTable,
+  serving: MatTableBuilder,
+  out: ServedLines,
+  resume: Int32Array,
+  blockCount: number,
+  x: Float64Array,
+  width: Float64Array,
+  xWords: Int32Array,
+  widthWords: Int32Array,
+  type: Uint8Array,
+  kindOf: Int32Array,
+  start: Int32Array,
+  end: Int32Array,
+  list: Int32Array,
+  runOf: Int32Array,
+  /** Per run, the mat run and kind its code in `pairCode` holds for (−1: none yet). */
+  runOfPair: Int32Array,
+  kindOfPair: Int32Array,
+  pairCode: Uint8Array,
+  vertical: Uint8Array,
+  open: Uint8Array,
+  acrossReach: Float64Array,
+  position: Int32Array,
+  unsensedBitlines: Float64Array,
+  undrivenWordlines: Float64Array,
+  senseAmpEnds: Uint8Array,
+  unpartneredBitlines: Float64Array,
+  servedKey: Int32Array,
+  senseAmps: Int32Array,
+  drivers: Int32Array,
+): number {
+  const tol = ABUTMENT_TOLERANCE;
+  const negativeTol = NEGATIVE_TOLERANCE;
+  // The kind whose reach for a top or bottom strip's stretch is at hand.
+  let reachKind = -1;
+  let kindAcrossReach = 0;
+  // The strip on a left or right edge read last, and its left and right edges (m): the strip between
+  // two mats of a row is the right one of the first and the left one of the second.
+  let lastStrip = -1;
+  let lastLeft = 0;
+  let lastRight = 0;
+  for (let at = resume[0] as number, k = resume[1] as number; at < blockCount; at++) {
+    if (type[at] !== MAT_CODE) continue;
+    const kind = kindOf[at] as number;
+    position[k] = at;
+    if (open[kind] === 1) {
+      connectMatAlone(table, at, neighbours, serving, k, out, true);
+      k++;
+      continue;
+    }
+    const run = runOf[at] as number;
+    if (kind !== reachKind) {
+      reachKind = kind;
+      kindAcrossReach = acrossReach[kind] as number;
+    }
+    const senseAcross = vertical[kind] === 1;
+    const tx = x[at] as number;
+    const tr = tx + (width[at] as number);
+    const x0 = xWords[2 * at] as number;
+    const x1 = xWords[2 * at + 1] as number;
+    const w0 = widthWords[2 * at] as number;
+    const w1 = widthWords[2 * at + 1] as number;
+    // The stretch code of a top or bottom strip with the mat's own left edge and width.
+    let ownCode = -1;
+    let senseAmpCount = 0;
+    let driverCount = 0;
+    let first = 0;
+    let second = 0;
+    let senseStartsLate = false;
+    let senseReaches = false;
+    let driveStartsLate = false;
+    let driveReaches = false;
+    let alone = false;
+    const last = end[at] as number;
+    for (let p = start[at] as number; p < last; p++) {
+      const i = list[p] as number;
+      const t = type[i] as number;
+      const sense = t === SENSE_AMP_STRIP_CODE;
+      if (!sense && t !== WORDLINE_DRIVER_STRIP_CODE && t !== ROW_DECODER_CODE) continue;
+      const s = runOf[i] as number;
+      if (runOfPair[s] !== run || kindOfPair[s] !== kind) {
+        resume[0] = at;
+        resume[1] = k;
+        return s;
+      }
+      const code = pairCode[s] as number;
+      let meets: number;
+      let stretch: number;
+      if (sense === senseAcross) {
+        // On the top or bottom edge (decided per run pair); the stretch runs along x.
+        meets = code & (MEETS_FIRST | MEETS_SECOND);
+        if (meets === 0) continue;
+        if (
+          xWords[2 * i] === x0 &&
+          xWords[2 * i + 1] === x1 &&
+          widthWords[2 * i] === w0 &&
+          widthWords[2 * i + 1] === w1
+        ) {
+          if (ownCode < 0) ownCode = stretchCode(tx, tr, tx, tr, kindAcrossReach);
+          stretch = ownCode;
+        } else {
+          const left = x[i] as number;
+          stretch = stretchCode(tx, tr, left, left + (width[i] as number), kindAcrossReach);
+        }
+      } else {
+        // On the left (its right on our left) or right edge; the stretch runs along y (per run pair).
+        if (i !== lastStrip) {
+          lastStrip = i;
+          lastLeft = x[i] as number;
+          lastRight = lastLeft + (width[i] as number);
+        }
+        const dFirst = lastRight - tx;
+        const dSecond = lastLeft - tr;
+        meets =
+          (dFirst > tol || dFirst < negativeTol ? 0 : MEETS_FIRST) |
+          (dSecond > tol || dSecond < negativeTol ? 0 : MEETS_SECOND);
+        if (meets === 0) continue;
+        stretch = code >> STRETCH_SHIFT;
+      }
+      if ((stretch & PASSES) === 0) continue;
+      if (senseAmpCount + driverCount + 2 > CONTACTS) {
+        alone = true;
+        break;
+      }
+      if (sense) {
+        if ((stretch & STARTS_LATE) !== 0) senseStartsLate = true;
+        if ((stretch & REACHES) !== 0) senseReaches = true;
+        if ((meets & MEETS_FIRST) !== 0) {
+          senseAmps[senseAmpCount++] = i;
+          first = 1;
+        }
+        if ((meets & MEETS_SECOND) !== 0) {
+          senseAmps[senseAmpCount++] = i;
+          second = 1;
+        }
+      } else {
+        if ((stretch & STARTS_LATE) !== 0) driveStartsLate = true;
+        if ((stretch & REACHES) !== 0) driveReaches = true;
+        if ((meets & MEETS_FIRST) !== 0) drivers[driverCount++] = i;
+        if ((meets & MEETS_SECOND) !== 0) drivers[driverCount++] = i;
+      }
+    }
+    // Both edges covered as one part each (see connectEachMat): no line left unserved. Otherwise the
+    // spans are wanted, and matConnections finds them.
+    if (
+      alone ||
+      senseAmpCount === 0 ||
+      senseStartsLate ||
+      !senseReaches ||
+      driverCount === 0 ||
+      driveStartsLate ||
+      !driveReaches
+    ) {
+      connectMatAlone(table, at, neighbours, serving, k, out, false);
+    } else {
+      serving.setServing(k, senseAmps, senseAmpCount, drivers, driverCount);
+      unsensedBitlines[k] = 0;
+      undrivenWordlines[k] = 0;
+      servedKey[k] = 3 * kind + first + second;
+      senseAmpEnds[k] = first + second;
+      unpartneredBitlines[k] = 0;
+    }
+    k++;
+  }
+  return -1;
+}
