@@ -21,7 +21,12 @@ import { editedGridFloorplan, irregularFloorplan, stripChainFloorplan } from '..
 // (servedLines.ts, connectEachMat). Both must give the same columns and the same serving strips.
 
 /** No fallback to the grid: the banded pass cuts runs on any floorplan. */
-const ANY_BOXES: BandLimits = { minRunLength: 0, runPairsPerRun: Infinity, visitsPerBlock: Infinity };
+const ANY_BOXES: BandLimits = {
+  minRunLength: 0,
+  runPairsPerRun: Infinity,
+  visitsPerBlock: Infinity,
+  repeatWalks: true,
+};
 const MAT_GROUP = Uint8Array.from(BLOCK_TYPE_CODES, (_, code) => (code === MAT_CODE ? 1 : 0));
 
 function connections(table: BlockTable, neighbours: NeighbourTable) {
