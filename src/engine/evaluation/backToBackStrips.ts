@@ -1,6 +1,7 @@
 import { SENSE_AMP_STRIP_CODE, WORDLINE_DRIVER_STRIP_CODE, type BlockTable } from '../../geometry/blockTable';
 import { facingPairs, PairList } from './facingStrips';
-import { mayFaceInRange, StripRange } from './stripRanges';
+import { mayFaceInRuns, StripRange } from './stripRanges';
+import type { BlockRuns } from '../../geometry/blockRuns';
 import { ALONG_HORIZONTAL_EDGE, ServingForest, UNSERVING } from './servingForest';
 import { BLOCK_TYPE_LABEL } from '../../model/blockBasics';
 import type { MatTable } from './matTable';
@@ -24,8 +25,10 @@ export function backToBackStrips(
   mats: MatTable,
   /** Each block's orientation, when the caller has the serving forest already. */
   facing: Uint8Array = ServingForest.of(mats, table).facing,
+  /** The table's runs by block type (geometry/blockRuns.ts), when the caller has them. */
+  runs: BlockRuns | null = null,
 ): BackToBackState {
-  const pairs = pairsInRanges(table, facing) ?? pairsOfServingStrips(table, facing);
+  const pairs = pairsInRanges(table, facing, runs) ?? pairsOfServingStrips(table, facing);
   return { facing, pairs, findings: pairFindings(table, pairs) };
 }
 
@@ -42,18 +45,22 @@ export function pairsOfServingStrips(table: BlockTable, facing: Uint8Array): Int
  * The pairs per strip type when the table lists each type's serving strips as one stretch facing one way
  * (see stripRanges.ts), or null when it does not. A stretch whose strips cannot face is not searched.
  */
-export function pairsInRanges(table: BlockTable, facing: Uint8Array): Int32Array[] | null {
+export function pairsInRanges(
+  table: BlockTable,
+  facing: Uint8Array,
+  runs: BlockRuns | null,
+): Int32Array[] | null {
+  if (runs === null) return null;
   const senseAmps = StripRange.of(table.type, facing, SENSE_AMP_STRIP_CODE);
   const drivers = senseAmps && StripRange.of(table.type, facing, WORDLINE_DRIVER_STRIP_CODE);
   if (!senseAmps || !drivers) return null;
-  return [pairsInRange(table, senseAmps), pairsInRange(table, drivers)];
+  return [pairsInRange(table, senseAmps, runs), pairsInRange(table, drivers, runs)];
 }
 
-function pairsInRange(table: BlockTable, range: StripRange): Int32Array {
+function pairsInRange(table: BlockTable, range: StripRange, runs: BlockRuns): Int32Array {
   const lying = range.facing === ALONG_HORIZONTAL_EDGE;
-  const across = lying ? table.y : table.x;
-  const thickness = lying ? table.height : table.width;
-  if (!mayFaceInRange(across, thickness, range.from, range.to)) return new Int32Array(0);
+  if (range.to < range.from || !mayFaceInRuns(runs, table.x, table.width, range.from, range.to, lying))
+    return new Int32Array(0);
   const strips = new Int32Array(range.to + 1 - range.from);
   for (let s = 0; s < strips.length; s++) strips[s] = range.from + s;
   return pairsOfType(table, strips, lying ? strips.length : 0);

@@ -117,16 +117,25 @@ function mayFace(strips: Int32Array, across: Float64Array, thickness: Float64Arr
     edges[runs] = start + size;
     runs++;
   }
-  const sortedStarts = starts.subarray(0, runs).sort();
-  const sortedEdges = edges.subarray(0, runs).sort();
+  return someEdgeNearAStart(starts.subarray(0, runs), edges.subarray(0, runs));
+}
+
+/**
+ * True when some far edge (start + thickness, as the search adds them) lies within the tolerance of
+ * some start, as the search compares them; sorts both arrays in place (natively) and merges them.
+ */
+export function someEdgeNearAStart(starts: Float64Array, edges: Float64Array): boolean {
+  const n = starts.length;
+  const sortedStarts = starts.sort();
+  const sortedEdges = edges.sort();
   // NaN sorts last and meets nothing: the walk stops at the first NaN of either list.
   let first = 0;
-  for (let e = 0; e < runs; e++) {
+  for (let e = 0; e < n; e++) {
     const edge = sortedEdges[e] as number;
     if (edge !== edge) return false;
     const from = edge - ABUTMENT_TOLERANCE;
-    while (first < runs && (sortedStarts[first] as number) < from) first++;
-    if (first === runs) return false;
+    while (first < n && (sortedStarts[first] as number) < from) first++;
+    if (first === n) return false;
     if ((sortedStarts[first] as number) <= edge + ABUTMENT_TOLERANCE) return true;
   }
   return false;

@@ -40,7 +40,7 @@ export function layoutState(
 ): LayoutState {
   const forest = ServingForest.of(mats, table);
   const reach = decoderReach(table, mats, matIndexAt ?? matIndexByPosition(mats, table.count), forest, runs);
-  const backToBack = backToBackStrips(table, mats, forest.facing);
+  const backToBack = backToBackStrips(table, mats, forest.facing, runs);
   return { reach, backToBack, findings: findingsOf(mats, reach, backToBack) };
 }
 

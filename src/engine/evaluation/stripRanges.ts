@@ -1,12 +1,13 @@
 import { BLOCK_TYPE_CODES } from '../../geometry/blockTable';
-import { ABUTMENT_TOLERANCE } from '../../geometry/rect';
+import type { BlockRuns } from '../../geometry/blockRuns';
+import { someEdgeNearAStart } from './facingStrips';
 import { UNSERVING } from './servingForest';
 
 /*
  * The back-to-back check's shortcut for tiled arrays (backToBackStrips.ts), where a table lists each
  * strip type as one stretch of positions facing one way: native searches of the type and orientation
- * arrays find that stretch, and two native sorts of its coordinates show that no two strips can face,
- * so that the check reads no coordinate strip by strip (in the interpreter every number read from a
+ * arrays find that stretch, and the table's runs show whether any two strips may face, so that the check
+ * reads coordinates per run rather than strip by strip (in the interpreter every number read from a
  * Float64Array is a fresh heap object).
  */
 
@@ -36,73 +37,46 @@ export class StripRange {
 }
 
 /**
- * False only when no strip among positions `from … to` can have its far edge (start + thickness across)
- * within the tolerance of another's start, which is what facingPairs (facingStrips.ts) looks for; true
- * when some may, and the caller searches. From the sorted starts and thicknesses: a pair needs two
- * distinct starts whose difference lies within the thinnest and thickest strip, widened by the tolerance
- * and by a margin for rounding (2⁻⁴⁰ of the largest magnitude, far above the few ulps the search's sums
- * can move). The distinct starts are found by galloping searches, so a tiled array's few rows cost a few
- * reads each.
+ * Whether any strip among positions `from … to` (one stretch of a strip type, see {@link StripRange})
+ * has its far edge within the tolerance of some strip's start: the answer facingStrips.ts's own test
+ * gives for them, from the table's runs (geometry/blockRuns.ts) rather than strip by strip. Strips lying
+ * across (`lying`) are measured top to bottom, and the strips of a run share their top and bottom edges:
+ * one start and edge per run. Strips standing are measured left to right, and runs of one layout have the
+ * same left edges and widths: the strips of one run per layout.
  */
-export function mayFaceInRange(
-  across: Float64Array,
-  thickness: Float64Array,
+export function mayFaceInRuns(
+  runs: BlockRuns,
+  x: Float64Array,
+  width: Float64Array,
   from: number,
   to: number,
+  lying: boolean,
 ): boolean {
-  const starts = across.slice(from, to + 1).sort();
-  const sizes = thickness.slice(from, to + 1).sort();
-  const n = starts.length;
-  if (n < 2) return false;
-  const lowest = starts[0] as number;
-  const highest = starts[n - 1] as number;
-  const thinnest = sizes[0] as number;
-  const thickest = sizes[n - 1] as number;
-  // NaN sorts last: a start or thickness that is not finite leaves the answer to the search.
-  if (!Number.isFinite(lowest + highest + thinnest + thickest)) return true;
-  const slack =
-    ABUTMENT_TOLERANCE + (Math.max(Math.abs(lowest), Math.abs(highest)) + Math.abs(thickest)) * 2 ** -40;
-  const nearest = thinnest - slack;
-  const furthest = thickest + slack;
-  if (!(nearest > 0)) return true;
-  const distinct = distinctValues(starts);
-  return someGapWithin(distinct, nearest, furthest);
-}
-
-/** The distinct values of an ascending array without NaN, found by galloping past each run of one value. */
-function distinctValues(sorted: Float64Array): Float64Array {
-  const distinct = new Float64Array(sorted.length);
-  let k = 0;
-  for (let at = 0; at < sorted.length;) {
-    const value = sorted[at] as number;
-    distinct[k++] = value;
-    // Gallop: double the step while the value repeats, then halve back to the first larger value.
-    let lo = at;
-    let step = 1;
-    while (lo + step < sorted.length && (sorted[lo + step] as number) <= value) {
-      lo += step;
-      step *= 2;
-    }
-    let hi = Math.min(lo + step, sorted.length);
-    while (hi - lo > 1) {
-      const mid = (lo + hi) >>> 1;
-      if ((sorted[mid] as number) <= value) lo = mid;
-      else hi = mid;
-    }
-    at = hi;
+  const starts = new Float64Array(to + 1 - from);
+  const edges = new Float64Array(to + 1 - from);
+  const seen = new Uint8Array(runs.layouts);
+  let n = 0;
+  // The run holding position `from` (runs cover the table in order; none spans two types).
+  let lo = 0;
+  let hi = runs.count - 1;
+  while (lo < hi) {
+    const mid = (lo + hi + 1) >>> 1;
+    if ((runs.start[mid] as number) <= from) lo = mid;
+    else hi = mid - 1;
   }
-  return distinct.subarray(0, k);
-}
-
-/** True when two of the ascending `values` differ by at least `nearest` and at most `furthest`. */
-function someGapWithin(values: Float64Array, nearest: number, furthest: number): boolean {
-  let b = 0;
-  for (let a = 0; a < values.length; a++) {
-    const base = values[a] as number;
-    if (b <= a) b = a + 1;
-    while (b < values.length && (values[b] as number) - base < nearest) b++;
-    if (b === values.length) return false;
-    if ((values[b] as number) - base <= furthest) return true;
+  for (let r = lo; r < runs.count && (runs.start[r] as number) <= to; r++) {
+    if (lying) {
+      starts[n] = runs.top[r] as number;
+      edges[n++] = runs.bottom[r] as number;
+      continue;
+    }
+    const layout = runs.layout[r] as number;
+    if (seen[layout] === 1) continue;
+    seen[layout] = 1;
+    for (let i = runs.start[r] as number; i < (runs.start[r + 1] as number); i++) {
+      starts[n] = x[i] as number;
+      edges[n++] = (x[i] as number) + (width[i] as number);
+    }
   }
-  return false;
+  return someEdgeNearAStart(starts.subarray(0, n), edges.subarray(0, n));
 }
