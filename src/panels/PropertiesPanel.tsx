@@ -1,18 +1,12 @@
-import { lazy, Suspense, useEffect, useState } from 'react';
+import { useEffect, useState } from 'react';
 import type { AnchorCorner } from '../geometry/stretchMap';
 import { useAppStore } from '../store/useAppStore';
-import type { CellNote, SelectionEditor } from './SelectionEditor';
+import { afterFirstPaint } from './afterFirstPaint';
+import type { CellNote } from './SelectionEditor';
 
 // The editor of a selection loads after the first paint (nothing is selected when a design opens), so
 // the first load does not carry it and the commands behind its fields.
-// Once loaded it renders at once: a lazy component would still show its fallback for a frame.
-let loadedEditor: typeof SelectionEditor | null = null;
-const loadEditor = () =>
-  import('./SelectionEditor').then((m) => {
-    loadedEditor = m.SelectionEditor;
-    return { default: m.SelectionEditor };
-  });
-const LazyEditor = lazy(loadEditor);
+const editor = afterFirstPaint(() => import('./SelectionEditor').then((m) => m.SelectionEditor));
 
 /** The selected blocks' properties; the editor itself is SelectionEditor.tsx. */
 export function PropertiesPanel() {
@@ -23,18 +17,13 @@ export function PropertiesPanel() {
   const [keepCounts, setKeepCounts] = useState(false);
   const [cellNote, setCellNote] = useState<CellNote | null>(null);
   // After the first paint: fetched before anyone can select anything.
-  useEffect(() => void loadEditor().catch(() => undefined), []);
+  useEffect(() => editor.preload(), []);
   const choices = { anchor, setAnchor, keepCounts, setKeepCounts, cellNote, setCellNote };
-  const Editor = loadedEditor;
   return (
     <section className="panel" aria-labelledby="properties-heading">
       <h2 id="properties-heading">Properties</h2>
-      {selected && Editor ? (
-        <Editor choices={choices} />
-      ) : selected ? (
-        <Suspense fallback={<p className="panel-loading">Loading…</p>}>
-          <LazyEditor choices={choices} />
-        </Suspense>
+      {selected ? (
+        <editor.Render props={{ choices }} fallback={<p className="panel-loading">Loading…</p>} />
       ) : (
         <p className="hint">Nothing selected. Click a block, or drag on empty canvas.</p>
       )}

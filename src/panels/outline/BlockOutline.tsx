@@ -6,8 +6,11 @@ import { BLOCK_TYPE_LABEL } from '../../model/block';
 import { useEditorStore } from '../../store/editorStore';
 import { useAppStore } from '../../store/useAppStore';
 import { useUiStore } from '../../store/uiStore';
-import { AddBlockForm } from './AddBlockForm';
+import { afterFirstPaint } from '../afterFirstPaint';
 import { formatWholeNumber } from '../../model/units';
+
+// The add-block form comes with the code behind it after the first paint (the first load does not carry it).
+const addBlockForm = afterFirstPaint(() => import('./AddBlockForm').then((m) => m.AddBlockForm));
 
 /** Height of one row of the list (px); the list draws only the rows in view, so it must be fixed. */
 const ROW_HEIGHT = 24;
@@ -182,7 +185,7 @@ export function BlockOutline() {
           {rows}
         </div>
       </div>
-      <AddBlockForm />
+      <addBlockForm.Render props={{}} fallback={null} />
     </section>
   );
 }
