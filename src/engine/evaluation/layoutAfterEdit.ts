@@ -19,8 +19,9 @@ import {
   reachedMats,
   walk,
   type LayoutEdit,
+  ServedMats,
   type ReachComponents,
-  type ServedMats,
+  type ServingPart,
 } from './reachComponents';
 import { COLUMN_DECODER, seedAt } from './reachSeeds';
 import { ALONG_HORIZONTAL_EDGE, ALONG_VERTICAL_EDGE, ServingForest, UNSERVING } from './servingForest';
@@ -175,7 +176,7 @@ export function reachComponentsAfterEdit(
   const { part } = previous;
   const touched = new Set<number>(edit.changed);
   for (const k of edit.redone) touched.add(after.position[k] as number);
-  const served = previous.served.afterEdit(before, after, part, edit.redone, touched);
+  const served = servedAfterEdit(previous.served, before, after, part, edit.redone, touched);
   if (!served) return null;
   let seed = previous.seed;
   for (const i of edit.changed) {
@@ -320,4 +321,43 @@ function seedsInBox(
     if (seedAt(table, matIndexAt, edges, i, decoderCode, stripCode)) seed[i] = 1;
   }
   return seed;
+}
+
+/**
+ * `served` after the mats `redone` (report indices) were evaluated again: each block one of them listed
+ * before or lists now serves the mats it served that were not redone, plus the redone ones that list it
+ * now. Returns the blocks whose list was written (`touched`), or null when so many strips are listed
+ * again that the caller should build the whole list instead.
+ */
+function servedAfterEdit(
+  served: ServedMats,
+  before: MatTable,
+  after: MatTable,
+  part: ServingPart,
+  redone: ReadonlySet<number>,
+  touched: Set<number>,
+): ServedMats | null {
+  const added = new Map<number, number[]>();
+  for (const k of redone) {
+    const from = before.servingOffsets[3 * k + part] as number;
+    const to = before.servingOffsets[3 * k + part + 1] as number;
+    for (let p = from; p < to; p++) touched.add(before.servingPositions[p] as number);
+    const a = after.servingOffsets[3 * k + part] as number;
+    const b = after.servingOffsets[3 * k + part + 1] as number;
+    for (let p = a; p < b; p++) {
+      const s = after.servingPositions[p] as number;
+      touched.add(s);
+      const list = added.get(s);
+      if (list) list.push(k);
+      else added.set(s, [k]);
+    }
+  }
+  if (served.patched.size + touched.size > MOST_PATCHED) return null;
+  const patched = new Map(served.patched);
+  for (const s of touched) {
+    const kept = Array.from(served.mats(s)).filter((k) => !redone.has(k));
+    const list = kept.concat(added.get(s) ?? []).sort((a, b) => a - b);
+    patched.set(s, Int32Array.from(list));
+  }
+  return new ServedMats(served.start, served.list, patched);
 }

@@ -12,11 +12,12 @@ export const MOST_PATCHED = 4096;
  * only the strips the edit touched again, beside the table-wide list.
  */
 export class ServedMats {
-  private constructor(
+  constructor(
     /** Block i's mats are `list[start[i]]` … `list[start[i + 1] − 1]`, unless it has a patched list. */
     readonly start: Int32Array,
     readonly list: Int32Array,
-    private readonly patched: ReadonlyMap<number, Int32Array>,
+    /** The lists edits wrote, by block (see layoutAfterEdit.ts servedAfterEdit). */
+    readonly patched: ReadonlyMap<number, Int32Array>,
   ) {}
 
   /**
@@ -50,44 +51,6 @@ export class ServedMats {
   /** The mats block `i` serves, ascending. */
   mats(i: number): Int32Array {
     return this.patched.get(i) ?? this.list.subarray(this.start[i] as number, this.start[i + 1] as number);
-  }
-
-  /**
-   * The lists after the mats `redone` (report indices) were evaluated again: each block one of them listed
-   * before or lists now serves the mats it served that were not redone, plus the redone ones that list it
-   * now. Returns the blocks whose list was written (`touched`), or null when so many strips are listed
-   * again that the caller should build the whole list instead.
-   */
-  afterEdit(
-    before: MatTable,
-    after: MatTable,
-    part: ServingPart,
-    redone: ReadonlySet<number>,
-    touched: Set<number>,
-  ): ServedMats | null {
-    const added = new Map<number, number[]>();
-    for (const k of redone) {
-      const from = before.servingOffsets[3 * k + part] as number;
-      const to = before.servingOffsets[3 * k + part + 1] as number;
-      for (let p = from; p < to; p++) touched.add(before.servingPositions[p] as number);
-      const a = after.servingOffsets[3 * k + part] as number;
-      const b = after.servingOffsets[3 * k + part + 1] as number;
-      for (let p = a; p < b; p++) {
-        const s = after.servingPositions[p] as number;
-        touched.add(s);
-        const list = added.get(s);
-        if (list) list.push(k);
-        else added.set(s, [k]);
-      }
-    }
-    if (this.patched.size + touched.size > MOST_PATCHED) return null;
-    const patched = new Map(this.patched);
-    for (const s of touched) {
-      const kept = Array.from(this.mats(s)).filter((k) => !redone.has(k));
-      const list = kept.concat(added.get(s) ?? []).sort((a, b) => a - b);
-      patched.set(s, Int32Array.from(list));
-    }
-    return new ServedMats(this.start, this.list, patched);
   }
 }
 

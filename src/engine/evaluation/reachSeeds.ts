@@ -1,4 +1,4 @@
-import { abutmentSpan, type Side } from '../../geometry/abutment';
+import { abutmentSpan } from '../../geometry/abutment';
 import { BLOCK_TYPE_CODES, kindAt, MAT_CODE, type BlockTable } from '../../geometry/blockTable';
 import type { BlockRuns } from '../../geometry/blockRuns';
 import { ABUTMENT_TOLERANCE } from '../../geometry/rect';
@@ -19,13 +19,32 @@ export interface SeedCheck {
   readonly stripCode: number;
 }
 
-const ALL_SIDES: readonly Side[] = ['top', 'bottom', 'left', 'right'];
 const scratch = new Float64Array(2);
 
-/** True when boxes i and j share a stretch of edge on any side of i. */
+/**
+ * True when boxes i and j share a stretch of edge on any side of i: {@link abutmentSpan}'s test of each
+ * side, the same arithmetic, with each box read once (top and bottom share the stretch along x, left and
+ * right the stretch along y).
+ */
 function abutting(table: BlockTable, i: number, j: number): boolean {
-  for (const side of ALL_SIDES) if (abutmentSpan(table, i, j, side, scratch, 0)) return true;
-  return false;
+  const tol = ABUTMENT_TOLERANCE;
+  const tx = table.x[i] as number;
+  const ty = table.y[i] as number;
+  const tr = tx + (table.width[i] as number);
+  const tb = ty + (table.height[i] as number);
+  const nx = table.x[j] as number;
+  const ny = table.y[j] as number;
+  const nr = nx + (table.width[j] as number);
+  const nb = ny + (table.height[j] as number);
+  if (
+    (!(Math.abs(nb - ty) > tol) || !(Math.abs(ny - tb) > tol)) &&
+    Math.min(tr, nr) - tx - (Math.max(tx, nx) - tx) > tol
+  )
+    return true;
+  return (
+    (!(Math.abs(nr - tx) > tol) || !(Math.abs(nx - tr) > tol)) &&
+    Math.min(tb, nb) - ty - (Math.max(ty, ny) - ty) > tol
+  );
 }
 
 /**
@@ -96,7 +115,7 @@ export function candidatesFound(count: number): Int32Array {
   return inBoxes.slice(0, count).sort();
 }
 
-/** {@link blocksInBoxes} of a table, each box narrow side first. */
+/** {@link blocksInBoxes} of a table. */
 function blocksInBoxesOf(
   table: BlockTable,
   matIndexAt: Int32Array,
@@ -105,33 +124,29 @@ function blocksInBoxesOf(
   b: SeedCheck,
   edgesB: DecoderEdges | null,
 ): number {
-  const boxA = narrowFirst(table, reachOf(edgesA));
-  const boxB = narrowFirst(table, reachOf(edgesB));
+  const boxA = reachOf(edgesA);
+  const boxB = reachOf(edgesB);
   // A check without decoders has no seeds: its strip code matches no block and its box is never consulted.
   return blocksInBoxes(
     table.count,
     table.type,
+    table.x,
+    table.y,
+    table.width,
+    table.height,
     matIndexAt,
     edgesA === null ? -1 : a.stripCode,
     edgesA !== null && a.decoderCode === COLUMN_DECODER,
-    boxA.start,
-    boxA.size,
-    boxA.from,
-    boxA.to,
-    boxA.cross,
-    boxA.crossSize,
-    boxA.crossFrom,
-    boxA.crossTo,
+    boxA[0] as number,
+    boxA[1] as number,
+    boxA[2] as number,
+    boxA[3] as number,
     edgesB === null ? -1 : b.stripCode,
     edgesB !== null && b.decoderCode === COLUMN_DECODER,
-    boxB.start,
-    boxB.size,
-    boxB.from,
-    boxB.to,
-    boxB.cross,
-    boxB.crossSize,
-    boxB.crossFrom,
-    boxB.crossTo,
+    boxB[0] as number,
+    boxB[1] as number,
+    boxB[2] as number,
+    boxB[3] as number,
     inBoxes,
   );
 }
@@ -215,86 +230,49 @@ let inBoxes = new Int32Array(1024);
  * Writes to `out`, in table order, each candidate block of check A (a strip of its type, or a mat where
  * mats count) lying at least partly inside box A as its position, and each of check B inside box B as
  * the position's complement (~i), and returns how many it wrote: the test against
- * {@link DecoderEdges.reach}, with each box tested first across its narrow side (a row decoder's box is narrow in x, a
- * column decoder's in y) so that most blocks leave after one or two comparisons. The exact test runs
- * afterwards, outside this loop: V8 compiles the loop while it runs, and with that test inside it
- * inlined a dozen geometry functions (a 20 ms compile for a loop that runs once per evaluation). What
- * the loop reads comes in as arguments: read before the loop it would have no type feedback when V8
- * compiles the function (its feedback is allocated during the loop), and the code would be thrown away.
+ * {@link DecoderEdges.reach}, written out. The exact test runs afterwards, outside this loop: V8 compiles
+ * the loop while it runs, and with that test inside it inlined a dozen geometry functions (a 20 ms
+ * compile for a loop that runs once per evaluation). What the loop reads comes in as arguments: read
+ * before the loop it would have no type feedback when V8 compiles the function (its feedback is
+ * allocated during the loop), and the code would be thrown away. Tables cut into runs take
+ * {@link blocksInBoxesByRuns} instead.
  */
 function blocksInBoxes(
   count: number,
   type: Uint8Array,
+  x: Float64Array,
+  y: Float64Array,
+  width: Float64Array,
+  height: Float64Array,
   matIndexAt: Int32Array,
   stripA: number,
   matsA: boolean,
-  startA: Float64Array,
-  sizeA: Float64Array,
-  fromA: number,
-  toA: number,
-  crossA: Float64Array,
-  crossSizeA: Float64Array,
-  crossFromA: number,
-  crossToA: number,
+  leftA: number,
+  topA: number,
+  rightA: number,
+  bottomA: number,
   stripB: number,
   matsB: boolean,
-  startB: Float64Array,
-  sizeB: Float64Array,
-  fromB: number,
-  toB: number,
-  crossB: Float64Array,
-  crossSizeB: Float64Array,
-  crossFromB: number,
-  crossToB: number,
+  leftB: number,
+  topB: number,
+  rightB: number,
+  bottomB: number,
   out: Int32Array,
 ): number {
   let n = 0;
   for (let i = 0; i < count; i++) {
     const t = type[i] as number;
-    if (t === stripA || (matsA && (matIndexAt[i] as number) >= 0)) {
-      const at = startA[i] as number;
-      if (!(at > toA || at + (sizeA[i] as number) < fromA)) {
-        const cross = crossA[i] as number;
-        if (!(cross > crossToA || cross + (crossSizeA[i] as number) < crossFromA)) out[n++] = i;
-      }
-    }
-    if (t === stripB || (matsB && (matIndexAt[i] as number) >= 0)) {
-      const at = startB[i] as number;
-      if (!(at > toB || at + (sizeB[i] as number) < fromB)) {
-        const cross = crossB[i] as number;
-        if (!(cross > crossToB || cross + (crossSizeB[i] as number) < crossFromB)) out[n++] = ~i;
-      }
-    }
+    const inA = t === stripA || (matsA && (matIndexAt[i] as number) >= 0);
+    const inB = t === stripB || (matsB && (matIndexAt[i] as number) >= 0);
+    if (!inA && !inB) continue;
+    const left = x[i] as number;
+    const top = y[i] as number;
+    const right = left + (width[i] as number);
+    const bottom = top + (height[i] as number);
+    if (inA && !(left > rightA || top > bottomA || right < leftA || bottom < topA)) out[n++] = i;
+    if (inB && !(left > rightB || top > bottomB || right < leftB || bottom < topB)) out[n++] = ~i;
   }
   return n;
-}
-
-/**
- * A box (m) as the table's start and size arrays across its narrow side and its span there, then along
- * its long side and its span there.
- */
-class NarrowFirst {
-  constructor(
-    readonly start: Float64Array,
-    readonly size: Float64Array,
-    readonly from: number,
-    readonly to: number,
-    readonly cross: Float64Array,
-    readonly crossSize: Float64Array,
-    readonly crossFrom: number,
-    readonly crossTo: number,
-  ) {}
-}
-
-/** Box `box` (left, top, right, bottom) of blocks of `table`, narrow side first. */
-function narrowFirst(table: BlockTable, box: Float64Array): NarrowFirst {
-  const left = box[0] as number;
-  const top = box[1] as number;
-  const right = box[2] as number;
-  const bottom = box[3] as number;
-  return right - left <= bottom - top
-    ? new NarrowFirst(table.x, table.width, left, right, table.y, table.height, top, bottom)
-    : new NarrowFirst(table.y, table.height, top, bottom, table.x, table.width, left, right);
 }
 
 /** The box of a check without decoders: a placeholder, never consulted (no block is a candidate for it). */
@@ -307,7 +285,10 @@ function reachOf(edges: DecoderEdges | null): Float64Array {
   return edges === null ? NOWHERE : (edges.reach ?? EVERYWHERE);
 }
 
-/** True when the block at table position `i` is a seed of {@link reachSeeds}. */
+/** Up to this many decoders of a type, {@link seedAt} tests each rather than searching their edges. */
+const FEW_DECODERS = 4;
+
+/** True when the block at table position `i` is a seed (see {@link seedsOfChecks}). */
 export function seedAt(
   table: BlockTable,
   matIndexAt: Int32Array,
@@ -321,8 +302,10 @@ export function seedAt(
   if (type === decoderCode) return true;
   const isStrip = type === stripCode;
   if (!isStrip && !(decoderCode === COLUMN_DECODER && (matIndexAt[i] as number) >= 0)) return false;
-  const found = edges.near(table, i);
-  const candidates = edges.candidates;
+  // A few decoders are all tested (near() would read the block's edges to pick among them).
+  const few = edges.decoders.length <= FEW_DECODERS;
+  const found = few ? edges.decoders.length : edges.near(table, i);
+  const candidates = few ? edges.decoders : edges.candidates;
   for (let c = 0; c < found; c++) {
     const d = candidates[c] as number;
     if (isStrip) {
