@@ -2,7 +2,8 @@ import type { Boxes } from './blockTable';
 import { blockRuns, type BlockRuns } from './blockRuns';
 import type { NeighbourTable } from './neighbourRows';
 import { PairSink } from './orderedPairs';
-import { crossGroupMerge, crossGroupWalk, sameGroupMerge, sameGroupWalk } from './runWalks';
+import { rowsByRun, RunWalks } from './runRows';
+import { runMerge, runWalk } from './runWalks';
 
 /**
  * neighbourGrid.ts's groupedNeighbourTable for floorplans made of rows, by runs instead of a grid: the
@@ -49,8 +50,9 @@ export function bandedNeighbourTable(
   if (pairCount < 0 || (cost[0] as number) > limits.visitsPerBlock * n) return null;
   const walked = keys.subarray(0, pairCount).sort();
   const sink = new PairSink(n);
-  walkRunPairs(boxes, margin, runs, group, walked, sink, limits.repeatWalks);
-  return sink.table(n, margin, runs);
+  const walks = new RunWalks(walked.length);
+  walkRunPairs(boxes, margin, runs, group, walked, sink, walks, limits.repeatWalks);
+  return rowsByRun(runs, walks, sink, n, margin);
 }
 
 function runGroups(runs: BlockRuns, groupOf: Uint8Array): Uint8Array {
@@ -147,12 +149,12 @@ function meetingRuns(
 }
 
 /**
- * Walks every pair of runs in key order (see {@link bandedNeighbourTable} on why that order). What a walk
- * finds follows from the two runs' left edges and widths, the margin and how the runs meet vertically:
- * a pair of runs whose layouts (see blockRuns.ts) and vertical relation match a pair walked before gets
- * that walk's pairs again, shifted to its own blocks (the rows of a tiled array: a 64 × 64 mat array is
- * walked some five times, its other 380 pairs of runs repeat one of those). Walks that found pairs
- * sharing area (overlaps, rare) are not repeated.
+ * Walks every pair of runs in key order (see {@link bandedNeighbourTable} on why that order), noting each
+ * in `walks`. What a walk finds follows from the two runs' left edges and widths, the margin and how the
+ * runs meet vertically: a pair of runs whose layouts (see blockRuns.ts) and vertical relation match a
+ * pair walked before is not walked when `repeat` holds, but noted as repeating that walk (the rows of a
+ * tiled array: a 64 × 64 mat array is walked some five times, its other 380 pairs of runs repeat one of
+ * those; runRows.ts fills the rows). Walks that found pairs sharing area (overlaps, rare) are not repeated.
  */
 function walkRunPairs(
   boxes: Boxes,
@@ -161,14 +163,13 @@ function walkRunPairs(
   label: Uint8Array,
   keys: Float64Array,
   sink: PairSink,
+  walks: RunWalks,
   repeat: boolean,
 ): void {
   const { top, bottom, start, touching, layout } = runs;
   const count = runs.count;
-  // Walks that may be repeated, by layouts and relation: where their pairs lie in the sink, and where
-  // the runs they walked (first as the walk took them) start.
+  // Walks that may be repeated, by layouts and relation.
   const walked = new Map<number, number>();
-  const found: number[] = [];
   for (let k = 0; k < keys.length; k++) {
     const key = keys[k] as number;
     const a = Math.floor(key / count);
@@ -189,32 +190,23 @@ function walkRunPairs(
     // Runs whose blocks clear each other are merged in one pass; otherwise the shorter run drives.
     const merge = touching[a] === 0 && touching[b] === 0;
     const aDrives = merge || a1 - a0 <= b1 - b0;
-    const first = aDrives ? a0 : b0;
-    const second = aDrives ? b0 : a0;
+    walks.first[k] = aDrives ? a : b;
+    walks.second[k] = aDrives ? b : a;
     const relation = (sameGroup ? 1 : 0) + (aMeetsB ? 2 : 0) + (bMeetsA ? 4 : 0) + (sharedY ? 8 : 0);
     const pattern = ((layout[a] as number) * runs.layouts + (layout[b] as number)) * 16 + relation;
-    const before = walked.get(pattern);
+    const before = repeat ? walked.get(pattern) : undefined;
     if (before !== undefined) {
-      sink.repeat(
-        found[before] as number,
-        found[before + 1] as number,
-        first - (found[before + 2] as number),
-        second - (found[before + 3] as number),
-      );
+      walks.template[k] = before;
       continue;
     }
-    const from = sink.count;
+    walks.template[k] = k;
+    walks.from[k] = sink.count;
+    // Runs of one group share more than the margin vertically (meetingRuns kept no others): sharedY.
     const shared = sink.sharedCount;
-    if (sameGroup) {
-      if (merge) sameGroupMerge(boxes, margin, a0, a1, b0, b1, sink);
-      else if (aDrives) sameGroupWalk(boxes, margin, a0, a1, b0, b1, sink);
-      else sameGroupWalk(boxes, margin, b0, b1, a0, a1, sink);
-    } else if (merge) crossGroupMerge(boxes, margin, a0, a1, b0, b1, aMeetsB, bMeetsA, sharedY, sink);
-    else if (aDrives) crossGroupWalk(boxes, margin, a0, a1, b0, b1, aMeetsB, bMeetsA, sharedY, sink);
-    else crossGroupWalk(boxes, margin, b0, b1, a0, a1, bMeetsA, aMeetsB, sharedY, sink);
-    if (repeat && sink.sharedCount === shared) {
-      walked.set(pattern, found.length);
-      found.push(from, sink.count, first, second);
-    }
+    if (merge) runMerge(boxes, margin, a0, a1, b0, b1, sameGroup, aMeetsB, bMeetsA, sharedY, sink);
+    else if (aDrives) runWalk(boxes, margin, a0, a1, b0, b1, sameGroup, aMeetsB, bMeetsA, sharedY, sink);
+    else runWalk(boxes, margin, b0, b1, a0, a1, sameGroup, bMeetsA, aMeetsB, sharedY, sink);
+    walks.to[k] = sink.count;
+    if (sink.sharedCount === shared) walked.set(pattern, k);
   }
 }

@@ -1,7 +1,6 @@
 import type { Boxes } from './blockTable';
 import { PairBuffer, runningTotals, type NeighbourTable } from './neighbourRows';
 import { bandedNeighbourTable } from './bandedPairs';
-import { groupedGridPairs, sharesBeyond } from './groupedPairs';
 import { ScratchBuffer } from './scratchBuffer';
 
 /** Whether a meeting pair of boxes belongs in the table. */
@@ -43,10 +42,9 @@ export function neighbourTable(
 }
 
 /**
- * {@link neighbourTable} with the rule evaluation needs, decided inside the pair pass instead of by a
- * call per pair: boxes of different groups that meet (as there), and boxes of one group only when they
- * share more than `margin` in both directions (an overlap, not a touch; such boxes always meet). Equals
- * `neighbourTable(boxes, margin, (i, j) => group[i] !== group[j] || sharedBeyond(i, j))` (tested).
+ * {@link neighbourTable} with the rule evaluation needs: boxes of different groups that meet (as there),
+ * and boxes of one group only when they share more than `margin` in both directions (an overlap, not a
+ * touch; such boxes always meet). Floorplans written in rows take the banded pass (bandedPairs.ts).
  */
 export function groupedNeighbourTable(boxes: Boxes, margin: number, group: Uint8Array): NeighbourTable {
   return bandedNeighbourTable(boxes, margin, group, IDENTITY) ?? groupedGridTable(boxes, margin, group);
@@ -55,20 +53,27 @@ export function groupedNeighbourTable(boxes: Boxes, margin: number, group: Uint8
 /** Groups as their own codes. */
 const IDENTITY = Uint8Array.from({ length: 256 }, (_, k) => k);
 
-/** {@link groupedNeighbourTable} by the grid alone (the general path, and the banded pass's oracle). */
+/**
+ * {@link groupedNeighbourTable} by the grid alone: the general path (floorplans not written in rows,
+ * such as a small hand-drawn die) and the banded pass's oracle.
+ */
 export function groupedGridTable(boxes: Boxes, margin: number, group: Uint8Array): NeighbourTable {
-  const n = boxes.count;
-  const pairs = new PairBuffer();
-  if (n < 2) return pairs.table(n);
-  const bounds = extent(boxes, margin);
-  if (!bounds) {
-    allPairs(boxes, margin, (i, j) => group[i] !== group[j] || sharesBeyond(boxes, i, j, margin), pairs);
-    return pairs.table(n);
-  }
-  const grid = gridShape(boxes, bounds);
-  const cells = binBoxes(boxes, margin, grid);
-  groupedGridPairs(boxes, margin, group, grid, cells, pairs);
-  return pairs.table(n);
+  return neighbourTable(boxes, margin, (i, j) => group[i] !== group[j] || sharesBeyond(boxes, i, j, margin));
+}
+
+/**
+ * True when boxes i and j share more than `margin` (m) in both directions: the overlap test of
+ * engine/evaluation/overlaps.ts (overlapAreaAt > 0) with the same arithmetic.
+ */
+export function sharesBeyond(boxes: Boxes, i: number, j: number, margin: number): boolean {
+  const { x, y, width, height } = boxes;
+  const ax = x[i] as number;
+  const ay = y[i] as number;
+  const bx = x[j] as number;
+  const by = y[j] as number;
+  const w = Math.min(ax + (width[i] as number), bx + (width[j] as number)) - Math.max(ax, bx);
+  const h = Math.min(ay + (height[i] as number), by + (height[j] as number)) - Math.max(ay, by);
+  return w > margin && h > margin;
 }
 
 /** The grid's origin and size (m): the boxes grown by the margin. */
@@ -111,14 +116,14 @@ function allPairs(boxes: Boxes, margin: number, keep: PairFilter, pairs: PairBuf
   }
 }
 
-export interface Grid extends Extent {
+interface Grid extends Extent {
   readonly columns: number;
   readonly rows: number;
   readonly cellSize: number;
 }
 
 /** Which cells each grown box covers (a column and row range), and the boxes of each cell. */
-export interface Binned {
+interface Binned {
   readonly firstColumn: Int32Array;
   readonly lastColumn: Int32Array;
   readonly firstRow: Int32Array;

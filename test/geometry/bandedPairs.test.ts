@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { bandedNeighbourTable, type BandLimits } from '../../src/geometry/bandedPairs';
 import { blockRuns } from '../../src/geometry/blockRuns';
 import { boxesOf, type Boxes } from '../../src/geometry/blockTable';
-import { sharesBeyond } from '../../src/geometry/groupedPairs';
+import { sharesBeyond } from '../../src/geometry/neighbourGrid';
 import { groupedGridTable } from '../../src/geometry/neighbourGrid';
 import { neighboursOf, type NeighbourTable } from '../../src/geometry/neighbourRows';
 import { ABUTMENT_TOLERANCE, type Rect } from '../../src/geometry/rect';

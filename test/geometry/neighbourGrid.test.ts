@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { boxesOf } from '../../src/geometry/blockTable';
 import { groupedNeighbourTable, neighbourTable } from '../../src/geometry/neighbourGrid';
-import { sharesBeyond } from '../../src/geometry/groupedPairs';
+import { sharesBeyond } from '../../src/geometry/neighbourGrid';
 import { neighbourTableOf, neighboursOf } from '../../src/geometry/neighbourRows';
 import { ABUTMENT_TOLERANCE, type Rect } from '../../src/geometry/rect';
 import { buildSpatialIndex } from '../../src/geometry/spatialIndex';
