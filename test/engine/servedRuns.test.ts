@@ -71,6 +71,8 @@ const mixedRows = fc
   .array(
     fc.record({
       vertical: fc.boolean(),
+      // Mats side by side with no strip between (the strips of one touch the next mat's corners).
+      abut: fc.boolean(),
       mats: fc.array(
         fc.record({
           counts: fc.constantFrom(128, 256, 384),
@@ -102,10 +104,11 @@ const mixedRows = fc
         const shape: Partial<Mat> = row.vertical
           ? { cellsPerBitline: 256, cellsPerWordline: m.counts, bitlineAxis: 'vertical' }
           : { cellsPerBitline: m.counts, cellsPerWordline: 256, bitlineAxis: 'horizontal' };
-        const block = mat({ id: `m${r}-${c}`, x: x + 3 * MICRON + m.gap, y, ...shape });
+        const step = row.abut ? (c === 0 ? 0 : m.gap === MICRON ? 0 : m.gap) : 3 * MICRON + m.gap;
+        const block = mat({ id: `m${r}-${c}`, x: x + step, y, ...shape });
         const g = matGeometry(block, FOLDED_8F2_CELL, F);
         height = g.height;
-        if (m.between !== 'none') {
+        if (m.between !== 'none' && !row.abut) {
           const h = m.between === 'short' ? g.height / 2 : g.height;
           betweens.push(strip(`b${r}-${c}`, along, x, y, 3 * MICRON, h));
         }
@@ -122,7 +125,7 @@ const mixedRows = fc
         }
         x = block.x + g.width;
       });
-      betweens.push(strip(`b${r}-end`, along, x, y, 3 * MICRON, height));
+      if (!row.abut) betweens.push(strip(`b${r}-end`, along, x, y, 3 * MICRON, height));
       blocks.push(...mats, ...edges, ...betweens);
       y += height + 6 * MICRON;
     });
@@ -135,6 +138,25 @@ describe('the connection pass by runs', () => {
       expect(
         sameByRuns(gridFloorplan({ cell, featureSize: DEMO_PROCESS.featureSize, ...benchGridSpec(8, 384) })),
       ).toBe(true);
+  });
+
+  it("a strip of the mats' layout at another place that touches a mat's corner shares none of its edge", () => {
+    // Two mats 0.5 nm apart with a driver strip that thin between them: the sense-amplifier strip over
+    // the second mat touches the first mat's corner (within the tolerance); both rows of strips have the
+    // mats' left edges and widths, so the runs share one layout.
+    const g = matGeometry(mat(), FOLDED_8F2_CELL, F);
+    const gap = 0.5e-9;
+    const y = 6 * MICRON;
+    const mats = [mat({ id: 'a', x: 3 * MICRON, y }), mat({ id: 'b', x: 3 * MICRON + g.width + gap, y })];
+    const blocks: Block[] = [
+      ...mats,
+      ...mats.map((m) => strip(`top-${m.id}`, 'senseAmpStrip', m.x, 0, g.width, y)),
+      ...mats.map((m) => strip(`bottom-${m.id}`, 'senseAmpStrip', m.x, y + g.height, g.width, y)),
+      strip('left', 'wordlineDriverStrip', 0, y, 3 * MICRON, g.height),
+      strip('between', 'wordlineDriverStrip', 3 * MICRON + g.width, y, gap, g.height),
+      strip('right', 'wordlineDriverStrip', 3 * MICRON + 2 * g.width + gap, y, 3 * MICRON, g.height),
+    ];
+    expect(sameByRuns(blocks)).toBe(true);
   });
 
   it('gives the block-by-block answers on random rows of mixed mats and strips', () => {

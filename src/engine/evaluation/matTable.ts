@@ -121,6 +121,56 @@ class FilledMatTable implements MatTable {
   ) {}
 }
 
+/**
+ * The serving strips of a table's mats while it is filled: mat k's sense amplifiers are
+ * `positions[offsets[3k]]` … before `offsets[3k + 1]`, its drivers from there to before `offsets[3k + 2]`;
+ * `used` positions are filled. A whole-die pass may write them itself (servedRuns.ts), keeping `used`.
+ */
+export class ServingLists {
+  positions: Int32Array;
+  used = 0;
+  readonly offsets: Int32Array;
+
+  constructor(count: number) {
+    // A tiled mat has two sense-amplifier strips and two drivers; the list grows if a design has more.
+    this.positions = new Int32Array(Math.max(16, 4 * count));
+    this.offsets = new Int32Array(3 * count);
+  }
+
+  /** The positions list, with room for `extra` more after the used ones. */
+  room(extra: number): Int32Array {
+    if (this.used + extra > this.positions.length) {
+      const bigger = new Int32Array(Math.max(this.used + extra, 2 * this.positions.length));
+      bigger.set(this.positions);
+      this.positions = bigger;
+    }
+    return this.positions;
+  }
+
+  /** Records mat k's serving strips: the first `senseAmpCount` of `senseAmps`, then the first `driverCount` of `drivers`. */
+  set(
+    k: number,
+    senseAmps: Int32Array,
+    senseAmpCount: number,
+    drivers: Int32Array,
+    driverCount: number,
+  ): void {
+    const positions = this.room(senseAmpCount + driverCount);
+    let used = this.used;
+    this.offsets[3 * k] = used;
+    for (let s = 0; s < senseAmpCount; s++) positions[used++] = senseAmps[s] as number;
+    this.offsets[3 * k + 1] = used;
+    for (let d = 0; d < driverCount; d++) positions[used++] = drivers[d] as number;
+    this.offsets[3 * k + 2] = used;
+    this.used = used;
+  }
+
+  /** Appends one position (mat by mat, as {@link MatTableBuilder.copy} does). */
+  append(position: number): void {
+    this.room(1)[this.used++] = position;
+  }
+}
+
 /** Fills a mat table, mat by mat in any order, or by copying mats of an earlier table over the same blocks. */
 export class MatTableBuilder {
   private readonly position: Int32Array;
@@ -129,9 +179,8 @@ export class MatTableBuilder {
   private readonly figureIndexOf: Map<MatFigures, number>;
   private readonly unsensed: Float64Array;
   private readonly undriven: Int32Array;
-  private servingPositions: Int32Array;
-  private servingUsed = 0;
-  private readonly servingOffsets: Int32Array;
+  /** The mats' serving strips. */
+  readonly serving: ServingLists;
   private lastFigures: MatFigures | null = null;
   private lastIndex = -1;
 
@@ -147,9 +196,7 @@ export class MatTableBuilder {
     this.figureIndexOf = new Map(this.figures.map((f, i) => [f, i]));
     this.unsensed = new Float64Array(count);
     this.undriven = new Int32Array(count);
-    // A tiled mat has two sense-amplifier strips and two drivers; the list grows if a design has more.
-    this.servingPositions = new Int32Array(Math.max(16, 4 * count));
-    this.servingOffsets = new Int32Array(3 * count);
+    this.serving = new ServingLists(count);
   }
 
   /** Records mat k: design position, figures, unserved lines. */
@@ -197,16 +244,7 @@ export class MatTableBuilder {
     drivers: Int32Array,
     driverCount: number,
   ): void {
-    let used = this.servingUsed;
-    if (used + senseAmpCount + driverCount > this.servingPositions.length)
-      this.growServing(used + senseAmpCount + driverCount);
-    const positions = this.servingPositions;
-    this.servingOffsets[3 * k] = used;
-    for (let s = 0; s < senseAmpCount; s++) positions[used++] = senseAmps[s] as number;
-    this.servingOffsets[3 * k + 1] = used;
-    for (let d = 0; d < driverCount; d++) positions[used++] = drivers[d] as number;
-    this.servingOffsets[3 * k + 2] = used;
-    this.servingUsed = used;
+    this.serving.set(k, senseAmps, senseAmpCount, drivers, driverCount);
   }
 
   /**
@@ -231,11 +269,12 @@ export class MatTableBuilder {
     const a = earlier.servingOffsets[3 * k] ?? 0;
     const b = earlier.servingOffsets[3 * k + 1] ?? 0;
     const c = earlier.servingOffsets[3 * k + 2] ?? 0;
-    this.servingOffsets[3 * k] = this.servingUsed;
-    for (let p = a; p < b; p++) this.appendServing(earlier.servingPositions[p] as number);
-    this.servingOffsets[3 * k + 1] = this.servingUsed;
-    for (let p = b; p < c; p++) this.appendServing(earlier.servingPositions[p] as number);
-    this.servingOffsets[3 * k + 2] = this.servingUsed;
+    const serving = this.serving;
+    serving.offsets[3 * k] = serving.used;
+    for (let p = a; p < b; p++) serving.append(earlier.servingPositions[p] as number);
+    serving.offsets[3 * k + 1] = serving.used;
+    for (let p = b; p < c; p++) serving.append(earlier.servingPositions[p] as number);
+    serving.offsets[3 * k + 2] = serving.used;
   }
 
   finish(): MatTable {
@@ -247,20 +286,8 @@ export class MatTableBuilder {
       this.figures,
       this.unsensed,
       this.undriven,
-      this.servingPositions.subarray(0, this.servingUsed),
-      this.servingOffsets,
+      this.serving.positions.subarray(0, this.serving.used),
+      this.serving.offsets,
     );
-  }
-
-  private appendServing(position: number): void {
-    if (this.servingUsed === this.servingPositions.length) this.growServing(this.servingUsed + 1);
-    this.servingPositions[this.servingUsed++] = position;
-  }
-
-  /** Room for at least `length` serving positions, keeping those recorded. */
-  private growServing(length: number): void {
-    const bigger = new Int32Array(Math.max(length, 2 * this.servingPositions.length));
-    bigger.set(this.servingPositions);
-    this.servingPositions = bigger;
   }
 }

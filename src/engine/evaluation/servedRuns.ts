@@ -9,7 +9,7 @@ import type { BlockRuns } from '../../geometry/blockRuns';
 import type { NeighbourTable } from '../../geometry/neighbourRows';
 import { ABUTMENT_TOLERANCE } from '../../geometry/rect';
 import { emptyConnections, matConnections } from './connectivity';
-import type { MatTableBuilder } from './matTable';
+import type { MatTableBuilder, ServingLists } from './matTable';
 import type { ServedLines } from './servedLines';
 
 /**
@@ -22,8 +22,9 @@ import type { ServedLines } from './servedLines';
  * a mat's box test reads vertically is one pair of numbers per run: whether a strip meets the mat's top
  * or bottom edge, and how far it shares the mat's height, are decided once per pair of runs (and mat
  * kind) and kept as a small code. What differs per pair is horizontal: a strip on the top or bottom edge
- * that has exactly the mat's left edge and width (the bits of both doubles, read as 32-bit words) shares
- * the mat's width as the mat measures it, once per mat; a strip on the left or right edge is tested as
+ * at the mat's place in a run of the mat's run's layout (so with the mat's left edge and width to the
+ * bit, see blockRuns.ts) shares the mat's width as the mat measures it, once per mat; any other is
+ * measured as connectEachMat measures it; a strip on the left or right edge is tested as
  * connectEachMat tests it, and the strip between two mats of a row is read once for both. Every test is
  * connectEachMat's comparison on the same doubles. A mat whose strips do not cover both edges whole (the
  * only case that needs their spans), that meets more strips than the scratch lists hold, or whose cell
@@ -48,8 +49,11 @@ const NEGATIVE_TOLERANCE = -ABUTMENT_TOLERANCE;
 const CONTACTS = 16;
 const SENSE_AMPS = new Int32Array(CONTACTS);
 const DRIVERS = new Int32Array(CONTACTS);
-/** Where the pass resumes: the mat's design position and its index among the mats. */
-const RESUME = new Int32Array(2);
+/** What the pass returns besides a strip run: every mat done, or more room wanted in the serving list. */
+const DONE = -1;
+const ROOM = -2;
+/** Where the pass resumes: the mat's design position, its index among the mats, serving positions used. */
+const RESUME = new Int32Array(3);
 /** The record matConnections fills for a mat of this path's. */
 const RECORD = emptyConnections();
 
@@ -96,9 +100,22 @@ export function connectRunMats(
   serving: MatTableBuilder,
   out: ServedLines,
 ): void {
-  // Each block's run.
+  // Each block's run and place in it.
   const runOf = new Int32Array(table.count);
-  for (let r = 0; r < runs.count; r++) runOf.fill(r, runs.start[r], runs.start[r + 1]);
+  const placeOf = new Int32Array(table.count);
+  let longest = 0;
+  for (let r = 0; r < runs.count; r++) {
+    const from = runs.start[r] as number;
+    const to = runs.start[r + 1] as number;
+    runOf.fill(r, from, to);
+    if (to - from > longest) longest = to - from;
+  }
+  const places = new Int32Array(longest);
+  for (let p = 0; p < longest; p++) places[p] = p;
+  for (let r = 0; r < runs.count; r++) {
+    const from = runs.start[r] as number;
+    placeOf.set(places.subarray(0, (runs.start[r + 1] as number) - from), from);
+  }
   // The stretch reach of each kind's top/bottom strips and of its left/right strips: sense amplifiers
   // sit on the bit-line ends (top and bottom when the bit lines run vertically), drivers on the others.
   const n = kinds.vertical.length;
@@ -112,11 +129,11 @@ export function connectRunMats(
   const runOfPair = new Int32Array(runs.count).fill(-1);
   const kindOfPair = new Int32Array(runs.count);
   const pairCode = new Uint8Array(runs.count);
-  const xWords = wordsOf(table.x);
-  const widthWords = wordsOf(table.width);
+  const lists = serving.serving;
   const resume = RESUME;
   resume[0] = 0;
   resume[1] = 0;
+  resume[2] = lists.used;
   // The pass stops at a mat whose strip run has no code for the mat's run and kind yet, and starts that
   // mat again once the code is here: the code's arithmetic stays out of the pass's compiled loop.
   for (;;) {
@@ -129,14 +146,14 @@ export function connectRunMats(
       table.count,
       table.x,
       table.width,
-      xWords,
-      widthWords,
       table.type,
       table.kindOf,
       neighbours.start,
       neighbours.end,
       neighbours.list,
       runOf,
+      placeOf,
+      runs.layout,
       runOfPair,
       kindOfPair,
       pairCode,
@@ -149,10 +166,15 @@ export function connectRunMats(
       out.senseAmpEnds,
       out.unpartneredBitlines,
       out.servedKey,
+      lists,
+      lists.room(2 * CONTACTS),
+      lists.offsets,
       SENSE_AMPS,
       DRIVERS,
     );
-    if (missing < 0) return;
+    lists.used = resume[2] as number;
+    if (missing === DONE) return;
+    if (missing === ROOM) continue;
     const at = resume[0] as number;
     const run = runOf[at] as number;
     const kind = table.kindOf[at] as number;
@@ -160,11 +182,6 @@ export function connectRunMats(
     runOfPair[missing] = run;
     kindOfPair[missing] = kind;
   }
-}
-
-/** The 32-bit words of a list of doubles (two per double, in memory order). */
-function wordsOf(list: Float64Array): Int32Array {
-  return new Int32Array(list.buffer, list.byteOffset, 2 * list.length);
 }
 
 /**
@@ -205,9 +222,12 @@ function runPairCode(top: Float64Array, bottom: Float64Array, r: number, s: numb
 }
 
 /**
- * The pass itself, from the mat at `resume` on: returns −1 when every mat is done, or a strip run whose
- * code the mat at `resume` (now holding it) wants for its run and kind. What the loop reads comes in as
- * arguments (see blockTable.ts, writeRows).
+ * The pass itself, from the mat at `resume` (design position, mat index, serving positions used) on:
+ * returns DONE when every mat is done, ROOM when the serving list needs room for the mat at `resume` (now
+ * holding where it stopped), or a strip run whose code that mat wants for its run and kind. Serving strips go straight into `positions` and `offsets` (the
+ * builder's ServingLists, with room for one mat's contacts); a mat that goes through matConnections
+ * writes them through the builder. What the loop reads comes in as arguments (see blockTable.ts,
+ * writeRows), and its exits share the code after it (run many times before V8 compiles the function).
  */
 function connectEachRunMat(
   table: BlockTable,
@@ -218,14 +238,16 @@ function connectEachRunMat(
   blockCount: number,
   x: Float64Array,
   width: Float64Array,
-  xWords: Int32Array,
-  widthWords: Int32Array,
   type: Uint8Array,
   kindOf: Int32Array,
   start: Int32Array,
   end: Int32Array,
   list: Int32Array,
   runOf: Int32Array,
+  /** Each block's place in its run. */
+  placeOf: Int32Array,
+  /** Each run's layout (blockRuns.ts): same layout, same place, same left edge and width bits. */
+  layoutOf: Int32Array,
   /** Per run, the mat run and kind its code in `pairCode` holds for (−1: none yet). */
   runOfPair: Int32Array,
   kindOfPair: Int32Array,
@@ -239,6 +261,9 @@ function connectEachRunMat(
   senseAmpEnds: Uint8Array,
   unpartneredBitlines: Float64Array,
   servedKey: Int32Array,
+  lists: ServingLists,
+  positions: Int32Array,
+  offsets: Int32Array,
   senseAmps: Int32Array,
   drivers: Int32Array,
 ): number {
@@ -252,12 +277,25 @@ function connectEachRunMat(
   let lastStrip = -1;
   let lastLeft = 0;
   let lastRight = 0;
-  for (let at = resume[0] as number, k = resume[1] as number; at < blockCount; at++) {
+  let used = resume[2] as number;
+  let missing = DONE;
+  let at = resume[0] as number;
+  let k = resume[1] as number;
+  mats: for (; at < blockCount; at++) {
     if (type[at] !== MAT_CODE) continue;
+    // Room for this mat's contacts, or back to the caller for it (growing the list here would be code
+    // that runs only near the end of a die, after V8 compiled the loop without it).
+    if (used + 2 * CONTACTS > positions.length) {
+      missing = ROOM;
+      break;
+    }
     const kind = kindOf[at] as number;
     position[k] = at;
     if (open[kind] === 1) {
+      lists.used = used;
       connectMatAlone(table, at, neighbours, serving, k, out, true);
+      used = lists.used;
+      positions = lists.positions;
       k++;
       continue;
     }
@@ -267,12 +305,10 @@ function connectEachRunMat(
       kindAcrossReach = acrossReach[kind] as number;
     }
     const senseAcross = vertical[kind] === 1;
+    const layout = layoutOf[run] as number;
+    const place = placeOf[at] as number;
     const tx = x[at] as number;
     const tr = tx + (width[at] as number);
-    const x0 = xWords[2 * at] as number;
-    const x1 = xWords[2 * at + 1] as number;
-    const w0 = widthWords[2 * at] as number;
-    const w1 = widthWords[2 * at + 1] as number;
     // The stretch code of a top or bottom strip with the mat's own left edge and width.
     let ownCode = -1;
     let senseAmpCount = 0;
@@ -292,9 +328,8 @@ function connectEachRunMat(
       if (!sense && t !== WORDLINE_DRIVER_STRIP_CODE && t !== ROW_DECODER_CODE) continue;
       const s = runOf[i] as number;
       if (runOfPair[s] !== run || kindOfPair[s] !== kind) {
-        resume[0] = at;
-        resume[1] = k;
-        return s;
+        missing = s;
+        break mats;
       }
       const code = pairCode[s] as number;
       let meets: number;
@@ -303,12 +338,7 @@ function connectEachRunMat(
         // On the top or bottom edge (decided per run pair); the stretch runs along x.
         meets = code & (MEETS_FIRST | MEETS_SECOND);
         if (meets === 0) continue;
-        if (
-          xWords[2 * i] === x0 &&
-          xWords[2 * i + 1] === x1 &&
-          widthWords[2 * i] === w0 &&
-          widthWords[2 * i + 1] === w1
-        ) {
+        if (layoutOf[s] === layout && placeOf[i] === place) {
           if (ownCode < 0) ownCode = stretchCode(tx, tr, tx, tr, kindAcrossReach);
           stretch = ownCode;
         } else {
@@ -364,9 +394,17 @@ function connectEachRunMat(
       driveStartsLate ||
       !driveReaches
     ) {
+      lists.used = used;
       connectMatAlone(table, at, neighbours, serving, k, out, false);
+      used = lists.used;
+      positions = lists.positions;
     } else {
-      serving.setServing(k, senseAmps, senseAmpCount, drivers, driverCount);
+      // The serving strips as ServingLists.set writes them (room for them was made before).
+      offsets[3 * k] = used;
+      for (let c = 0; c < senseAmpCount; c++) positions[used++] = senseAmps[c] as number;
+      offsets[3 * k + 1] = used;
+      for (let c = 0; c < driverCount; c++) positions[used++] = drivers[c] as number;
+      offsets[3 * k + 2] = used;
       unsensedBitlines[k] = 0;
       undrivenWordlines[k] = 0;
       servedKey[k] = 3 * kind + first + second;
@@ -375,5 +413,8 @@ function connectEachRunMat(
     }
     k++;
   }
-  return -1;
+  resume[0] = at;
+  resume[1] = k;
+  resume[2] = used;
+  return missing;
 }
