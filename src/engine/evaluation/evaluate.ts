@@ -14,9 +14,10 @@ import type { Design } from '../../model/design';
 import { collectFindings } from './checks';
 import { matIndexByPosition } from './decoderReach';
 import { layoutState } from './layoutFindings';
-import { emptyConnections, matConnections, type MatConnections } from './connectivity';
+import { emptyConnections, type MatConnections } from './connectivity';
 import { designContext as contextOf, type DesignContext } from './designContext';
-import { matPhysics, senseAmpsOfMat } from './matPhysics';
+import { figuresOfKind } from './figureRecipes';
+import { senseAmpsOfMat } from './matPhysics';
 import { findPositionedOverlaps } from './overlaps';
 import { rememberReportState } from './reportState';
 import type { MatFigures, MatReport, Report } from './report';
@@ -83,66 +84,6 @@ function sumMatByMat(table: BlockTable, perKind: Float64Array): number {
 /** Filled for one mat at a time and read at once, so one record serves every mat. */
 const connections = emptyConnections();
 
-/** What a mat's figures were computed from besides the design-wide values: its kind and connections. */
-interface FiguresRecipe {
-  readonly kind: MatKind;
-  readonly connections: MatConnections;
-}
-
-const recipes = new WeakMap<MatFigures, FiguresRecipe>();
-
-/**
- * The figures `figures` would have under other design-wide values (a floorplan with other sense-amplifier
- * or cell counts moves k and the weakest cell): the same kind and connections, computed with `ctx`.
- * Undefined for figures this module did not compute.
- */
-export function refigured(figures: MatFigures, ctx: DesignContext): MatFigures | undefined {
-  const recipe = recipes.get(figures);
-  if (!recipe) return undefined;
-  const again = matPhysics(recipe.kind, recipe.connections, ctx);
-  // The next count-changing edit starts from these.
-  recipes.set(again, recipe);
-  return again;
-}
-
-/**
- * Evaluates mat `at` of the table and records it as mat `k` of the report being built: its connections
- * from its neighbours, then its physics. Mats with the same kind and sense-amplifier arrangement have the
- * same physics, so with a `figuresByKind` map a regular array computes it once per kind of mat and every
- * mat of that kind shares the object.
- */
-export function evaluateMatAt(
-  table: BlockTable,
-  /** The mat's position in the table and in the neighbour table. */
-  at: number,
-  neighbours: NeighbourTable,
-  ctx: DesignContext,
-  mats: MatTableBuilder,
-  k: number,
-  figuresByKind?: Map<number | string, MatFigures>,
-  /** Whether the mat's cell pairs bit lines across strips (see matConnections), when known per kind. */
-  openCell?: boolean,
-): void {
-  const c = matConnections(table, at, neighbours, mats, k, connections, openCell);
-  const kindIndex = table.kindOf[at] as number;
-  const lost = c.unpartneredBitlines;
-  const unsensed = c.unsensedBitlines;
-  const undriven = c.undrivenWordlines;
-  // A number for the common case (every line served), a string otherwise: either way one map lookup.
-  const key =
-    lost === 0 && unsensed === 0 && undriven === 0
-      ? kindIndex * 3 + c.senseAmpEnds
-      : `${kindIndex}|${c.senseAmpEnds}|${lost}|${unsensed}|${undriven}`;
-  let figures = figuresByKind?.get(key);
-  if (!figures) {
-    const kind = kindAt(table, at);
-    figures = matPhysics(kind, c, ctx);
-    recipes.set(figures, { kind, connections: { ...c } });
-    figuresByKind?.set(key, figures);
-  }
-  mats.set(k, at, figures, c.unsensedBitlines, c.undrivenWordlines);
-}
-
 /** Mats in the table. */
 export function countMats(table: BlockTable): number {
   let count = 0;
@@ -153,7 +94,7 @@ export function countMats(table: BlockTable): number {
 /**
  * Evaluates every mat into `builder`, in design order: the connection pass (servedLines.ts), then each
  * mat's figures, shared by mats of one kind and connections (computed when a key is first met, in the
- * order evaluateMatAt would meet it, so the report's figures list is the same).
+ * order matEvaluation.ts evaluateMatAt would meet it, so the report's figures list is the same).
  */
 export function evaluateAllMats(
   table: BlockTable,
@@ -166,7 +107,7 @@ export function evaluateAllMats(
   assignFigures(table, lines, ctx, builder, new Map<number | string, MatFigures>());
 }
 
-/** The figures of mats with this connection `key`, computed once per key (see evaluateMatAt). */
+/** The figures of mats with this connection `key`, computed once per key (see matEvaluation.ts, evaluateMatAt). */
 function figuresOf(
   table: BlockTable,
   at: number,
@@ -177,9 +118,7 @@ function figuresOf(
 ): MatFigures {
   let figures = figuresByKind.get(key);
   if (!figures) {
-    const kind = kindAt(table, at);
-    figures = matPhysics(kind, c, ctx);
-    recipes.set(figures, { kind, connections: { ...c } });
+    figures = figuresOfKind(kindAt(table, at), c, ctx);
     figuresByKind.set(key, figures);
   }
   return figures;
@@ -210,7 +149,7 @@ function assignFigures(
   }
 }
 
-/** The figures of mat k of `lines`, found or computed by its connection key (see evaluateMatAt). */
+/** The figures of mat k of `lines`, found or computed by its connection key (see matEvaluation.ts, evaluateMatAt). */
 function figuresOfMat(
   table: BlockTable,
   lines: ServedLines,

@@ -103,47 +103,13 @@ export class ServedLines {
   }
 }
 
-/** Scratch lists of one mat's contacts, kept between calls and grown when a mat meets more strips. */
-class ContactScratch {
-  /** Sense-amplifier spans (start, end pairs, m along the edge). */
-  senseSpans: Float64Array = new Float64Array(32);
-  /** Driver spans, likewise. */
-  driveSpans: Float64Array = new Float64Array(32);
-  senseAmps: Int32Array = new Int32Array(16);
-  drivers: Int32Array = new Int32Array(16);
-
-  /** The lists with room for one more contact beyond `used` (spans hold two numbers a contact). */
-  growSenseSpans(used: number): Float64Array {
-    if (2 * used + 2 > this.senseSpans.length) this.senseSpans = grownFloats(this.senseSpans);
-    return this.senseSpans;
-  }
-  growDriveSpans(used: number): Float64Array {
-    if (2 * used + 2 > this.driveSpans.length) this.driveSpans = grownFloats(this.driveSpans);
-    return this.driveSpans;
-  }
-  growSenseAmps(used: number): Int32Array {
-    if (used + 1 > this.senseAmps.length) this.senseAmps = grownInts(this.senseAmps);
-    return this.senseAmps;
-  }
-  growDrivers(used: number): Int32Array {
-    if (used + 1 > this.drivers.length) this.drivers = grownInts(this.drivers);
-    return this.drivers;
-  }
-}
-
-function grownFloats(list: Float64Array): Float64Array {
-  const bigger = new Float64Array(2 * list.length);
-  bigger.set(list);
-  return bigger;
-}
-
-function grownInts(list: Int32Array): Int32Array {
-  const bigger = new Int32Array(2 * list.length);
-  bigger.set(list);
-  return bigger;
-}
-
-const SCRATCH = new ContactScratch();
+/** Contacts of one edge kind a mat may have in this pass; a mat with more goes through matConnections. */
+const CONTACT_LIMIT = 16;
+/** Scratch lists of one mat's contacts: spans (start, end pairs, m along the edge) and strips. */
+const SENSE_SPANS = new Float64Array(2 * CONTACT_LIMIT);
+const DRIVE_SPANS = new Float64Array(2 * CONTACT_LIMIT);
+const SENSE_AMPS = new Int32Array(CONTACT_LIMIT);
+const DRIVERS = new Int32Array(CONTACT_LIMIT);
 /** −tolerance as a constant: negating in the pass would be an operation needing type feedback. */
 const NEGATIVE_TOLERANCE = -ABUTMENT_TOLERANCE;
 const LINES = new ServedLines();
@@ -166,7 +132,6 @@ export function connectAllMats(
     return LINES;
   }
   const lines = LINES;
-  const scratch = SCRATCH;
   connectEachMat(
     table,
     neighbours,
@@ -193,10 +158,10 @@ export function connectAllMats(
     lines.senseAmpEnds,
     lines.unpartneredBitlines,
     lines.servedKey,
-    scratch.senseSpans,
-    scratch.driveSpans,
-    scratch.senseAmps,
-    scratch.drivers,
+    SENSE_SPANS,
+    DRIVE_SPANS,
+    SENSE_AMPS,
+    DRIVERS,
   );
   return LINES;
 }
@@ -237,7 +202,7 @@ function connectEachMat(
   senseAmpEnds: Uint8Array,
   unpartneredBitlines: Float64Array,
   servedKey: Int32Array,
-  // Scratch lists (SCRATCH's), replaced by bigger ones when a mat meets more strips.
+  // Scratch lists of CONTACT_LIMIT contacts.
   senseSpans: Float64Array,
   driveSpans: Float64Array,
   senseAmps: Int32Array,
@@ -245,7 +210,6 @@ function connectEachMat(
 ): void {
   const tol = ABUTMENT_TOLERANCE;
   const negativeTol = NEGATIVE_TOLERANCE;
-  const scratch = SCRATCH;
   for (let at = 0, k = 0; at < blockCount; at++) {
     if (type[at] !== MAT_CODE) continue;
     const kind = kindOf[at] as number;
@@ -273,6 +237,7 @@ function connectEachMat(
     let senseReaches = false;
     let driveStartsLate = false;
     let driveReaches = false;
+    let alone = false;
     const senseReach = senseEdgeReach[kind] as number;
     const driveReach = driveEdgeReach[kind] as number;
     const last = end[at] as number;
@@ -309,47 +274,48 @@ function connectEachMat(
         to = (nb < tb ? nb : tb) - ty;
       }
       if (!(to - from > tol)) continue;
+      if (senseCount + 2 > CONTACT_LIMIT || driveCount + 2 > CONTACT_LIMIT) {
+        alone = true;
+        break;
+      }
       if (sense) {
         if (from > tol) senseStartsLate = true;
         if (to >= senseReach) senseReaches = true;
         if (meetsFirst) {
-          if (2 * senseCount + 2 > senseSpans.length) senseSpans = scratch.growSenseSpans(senseCount);
           senseSpans[2 * senseCount] = from;
           senseSpans[2 * senseCount + 1] = to;
           senseCount++;
           first = 1;
-          if (senseAmpCount === senseAmps.length) senseAmps = scratch.growSenseAmps(senseAmpCount);
           senseAmps[senseAmpCount++] = i;
         }
         if (meetsSecond) {
-          if (2 * senseCount + 2 > senseSpans.length) senseSpans = scratch.growSenseSpans(senseCount);
           senseSpans[2 * senseCount] = from;
           senseSpans[2 * senseCount + 1] = to;
           senseCount++;
           second = 1;
-          if (senseAmpCount === senseAmps.length) senseAmps = scratch.growSenseAmps(senseAmpCount);
           senseAmps[senseAmpCount++] = i;
         }
       } else {
         if (from > tol) driveStartsLate = true;
         if (to >= driveReach) driveReaches = true;
         if (meetsFirst) {
-          if (2 * driveCount + 2 > driveSpans.length) driveSpans = scratch.growDriveSpans(driveCount);
           driveSpans[2 * driveCount] = from;
           driveSpans[2 * driveCount + 1] = to;
           driveCount++;
-          if (driverCount === drivers.length) drivers = scratch.growDrivers(driverCount);
           drivers[driverCount++] = i;
         }
         if (meetsSecond) {
-          if (2 * driveCount + 2 > driveSpans.length) driveSpans = scratch.growDriveSpans(driveCount);
           driveSpans[2 * driveCount] = from;
           driveSpans[2 * driveCount + 1] = to;
           driveCount++;
-          if (driverCount === drivers.length) drivers = scratch.growDrivers(driverCount);
           drivers[driverCount++] = i;
         }
       }
+    }
+    if (alone) {
+      connectMatAlone(table, at, neighbours, serving, k, out, false);
+      k++;
+      continue;
     }
     serving.setServing(k, senseAmps, senseAmpCount, drivers, driverCount);
     // An edge whose spans all start within the tolerance of its start and one of which reaches within the

@@ -1,0 +1,66 @@
+import { kindAt, type BlockTable } from '../../geometry/blockTable';
+import type { NeighbourTable } from '../../geometry/neighbourRows';
+import { emptyConnections, matConnections } from './connectivity';
+import type { DesignContext } from './designContext';
+import { figuresOfKind, recipes } from './figureRecipes';
+import { matPhysics } from './matPhysics';
+import type { MatTableBuilder } from './matTable';
+import type { MatFigures } from './report';
+
+/**
+ * One mat at a time, for the edit path (a live preview evaluates the mats an edit touches); evaluate()
+ * connects a whole die at once (servedLines.ts) and shares figures the same way.
+ */
+
+/** Filled for one mat at a time and read at once, so one record serves every mat. */
+const connections = emptyConnections();
+
+/**
+ * The figures `figures` would have under other design-wide values (a floorplan with other sense-amplifier
+ * or cell counts moves k and the weakest cell): the same kind and connections, computed with `ctx`.
+ * Undefined for figures the engine did not compute.
+ */
+export function refigured(figures: MatFigures, ctx: DesignContext): MatFigures | undefined {
+  const recipe = recipes.get(figures);
+  if (!recipe) return undefined;
+  const again = matPhysics(recipe.kind, recipe.connections, ctx);
+  // The next count-changing edit starts from these.
+  recipes.set(again, recipe);
+  return again;
+}
+
+/**
+ * Evaluates mat `at` of the table and records it as mat `k` of the report being built: its connections
+ * from its neighbours, then its physics. Mats with the same kind and sense-amplifier arrangement have the
+ * same physics, so with a `figuresByKind` map a regular array computes it once per kind of mat and every
+ * mat of that kind shares the object.
+ */
+export function evaluateMatAt(
+  table: BlockTable,
+  /** The mat's position in the table and in the neighbour table. */
+  at: number,
+  neighbours: NeighbourTable,
+  ctx: DesignContext,
+  mats: MatTableBuilder,
+  k: number,
+  figuresByKind?: Map<number | string, MatFigures>,
+  /** Whether the mat's cell pairs bit lines across strips (see matConnections), when known per kind. */
+  openCell?: boolean,
+): void {
+  const c = matConnections(table, at, neighbours, mats, k, connections, openCell);
+  const kindIndex = table.kindOf[at] as number;
+  const lost = c.unpartneredBitlines;
+  const unsensed = c.unsensedBitlines;
+  const undriven = c.undrivenWordlines;
+  // A number for the common case (every line served), a string otherwise: either way one map lookup.
+  const key =
+    lost === 0 && unsensed === 0 && undriven === 0
+      ? kindIndex * 3 + c.senseAmpEnds
+      : `${kindIndex}|${c.senseAmpEnds}|${lost}|${unsensed}|${undriven}`;
+  let figures = figuresByKind?.get(key);
+  if (!figures) {
+    figures = figuresOfKind(kindAt(table, at), c, ctx);
+    figuresByKind?.set(key, figures);
+  }
+  mats.set(k, at, figures, c.unsensedBitlines, c.undrivenWordlines);
+}
