@@ -4,14 +4,12 @@ import { useAppStore } from '../store/useAppStore';
 import { CommandButton } from './CommandButton';
 import { openDesignFile } from './designFiles';
 import { makeShareLink, registerFileInput } from './documentActions';
-import { downloadBlob } from './download';
 import { documentSession } from './session';
 import './documents.css';
-import { formatWholeNumber } from '../model/units';
+import { afterFirstPaint } from '../panels/afterFirstPaint';
 
-function savedWhen(ms: number): string {
-  return new Date(ms).toLocaleString(undefined, { dateStyle: 'short', timeStyle: 'short' });
-}
+// The list Recent opens comes after the first paint (asked for then, long before anyone can click).
+const recentList = afterFirstPaint(() => import('./RecentList').then((m) => m.RecentList));
 
 /** New, Open, Save, the recent designs (each can be reopened or forgotten) and a share link. */
 export function DocumentMenu() {
@@ -21,6 +19,7 @@ export function DocumentMenu() {
   const documentId = useAppStore((s) => s.documentId);
   const [link, setLink] = useState<string | null>(null);
   useEffect(() => registerFileInput(() => fileInput.current?.click()), []);
+  useEffect(() => recentList.preload(), []);
   // An open list follows what the notices report (a design forgotten, or put back by Undo).
   const notice = useAppStore((s) => s.notice);
   const listOpen = recent !== null;
@@ -78,93 +77,10 @@ export function DocumentMenu() {
         Share link
       </button>
       {recent && (
-        <div className="recent-list" role="dialog" aria-label="Recent designs" data-testid="recent-list">
-          {recent.length === 0 && aside.length === 0 && <p>No designs kept in this browser yet.</p>}
-          <ul>
-            {recent.map((entry) => (
-              <li key={entry.id}>
-                <button
-                  type="button"
-                  className="recent-open"
-                  data-testid="recent-entry"
-                  data-document-id={entry.id}
-                  disabled={entry.id === documentId}
-                  title={entry.name}
-                  onClick={async () => {
-                    setRecent(null);
-                    if (await documentSession.reopen(entry.id)) useAppStore.getState().setNotice(null);
-                  }}
-                >
-                  <span className="recent-name">{entry.name}</span>
-                  <span className="recent-about">
-                    {formatWholeNumber(entry.blockCount)} blocks · {savedWhen(entry.savedAt)}
-                    {entry.id === documentId ? ' · open' : ''}
-                  </span>
-                </button>
-                {entry.id !== documentId && (
-                  <button
-                    type="button"
-                    className="recent-forget"
-                    data-testid="recent-forget"
-                    data-document-id={entry.id}
-                    title={`Forget “${entry.name}”: remove it from this browser's storage (Undo is offered)`}
-                    aria-label={`Forget ${entry.name}`}
-                    onClick={async () => {
-                      await documentSession.forget(entry.id);
-                      setRecent(await documentSession.recent());
-                    }}
-                  >
-                    Forget
-                  </button>
-                )}
-              </li>
-            ))}
-          </ul>
-          {aside.length > 0 && (
-            <section className="kept-aside" data-testid="kept-aside" aria-label="Designs kept aside">
-              <h3>Kept aside: could not be restored</h3>
-              <p>Save one to a file to mend it by hand and open it again, or discard it.</p>
-              <ul>
-                {aside.map((entry) => (
-                  <li key={entry.key} data-testid="kept-aside-entry" data-key={entry.key}>
-                    <span className="recent-about">
-                      {entry.keptAt > 0 ? savedWhen(entry.keptAt) : entry.key}
-                    </span>
-                    <button
-                      type="button"
-                      data-testid="kept-aside-save"
-                      title="Save this kept-aside design, exactly as it was stored, to a file"
-                      onClick={async () => {
-                        const text = await documentSession.keptAsideText(entry.key);
-                        if (text === null) return;
-                        const stamp = new Date(entry.keptAt).toISOString().slice(0, 19).replace(/[:T]/g, '-');
-                        downloadBlob(
-                          new Blob([text], { type: 'application/json' }),
-                          `kept-aside-${stamp}.json`,
-                        );
-                      }}
-                    >
-                      Save to a file
-                    </button>
-                    <button
-                      type="button"
-                      data-testid="kept-aside-discard"
-                      title="Remove this kept-aside design from this browser for good (asks first)"
-                      onClick={async () => {
-                        if (!window.confirm('Discard this kept-aside design for good? It cannot be undone.'))
-                          return;
-                        await documentSession.discardKeptAside(entry.key);
-                        setAside(await documentSession.keptAside());
-                      }}
-                    >
-                      Discard
-                    </button>
-                  </li>
-                ))}
-              </ul>
-            </section>
-          )}
-        </div>
+        <recentList.Render
+          props={{ recent, aside, documentId, setRecent, setAside }}
+          fallback={<div className="recent-list" role="dialog" aria-label="Recent designs" aria-busy />}
+        />
       )}
     </div>
   );
