@@ -69,6 +69,10 @@ function expectSameSeeds(design: Design): boolean {
   const byRuns = decoderReach(table, mats, matIndexAt, forest, runs);
   for (let n = 0; n < 2; n++) expect(byRuns.results[n]?.reach.seed).toEqual(byBlocks.results[n]?.reach.seed);
   for (let n = 0; n < 2; n++) expect(byRuns.results[n]?.finding).toEqual(byBlocks.results[n]?.finding);
+  for (let n = 0; n < 2; n++) {
+    expect(byRuns.results[n]?.edges?.decoders).toEqual(byBlocks.results[n]?.edges?.decoders);
+    expect(byRuns.results[n]?.edges?.reach).toEqual(byBlocks.results[n]?.edges?.reach);
+  }
   return true;
 }
 

@@ -1,3 +1,4 @@
+import type { BlockRuns } from '../../geometry/blockRuns';
 import type { BlockTable } from '../../geometry/blockTable';
 import { ABUTMENT_TOLERANCE } from '../../geometry/rect';
 
@@ -26,46 +27,46 @@ export class DecoderEdges {
    * of it, so a block wholly outside this box abuts none (reachSeeds.ts tests blocks against it).
    */
   readonly reach: Float64Array | null;
+  /** The top, bottom, left and right edges sorted, on the first {@link near} (a whole evaluation of a
+   * die with a few decoders never asks). */
+  private sorted: readonly [SortedEdges, SortedEdges, SortedEdges, SortedEdges] | null = null;
 
   private constructor(
     readonly decoders: Int32Array,
-    private readonly top: SortedEdges,
-    private readonly bottom: SortedEdges,
-    private readonly left: SortedEdges,
-    private readonly right: SortedEdges,
+    /** The decoders whose edges are all finite numbers. */
+    private readonly finite: readonly number[],
     private readonly unsorted: Int32Array,
+    table: BlockTable,
   ) {
     this.candidates = new Int32Array(4 * decoders.length + unsorted.length);
-    this.reach = unsorted.length > 0 ? null : grownBounds(top, bottom, left, right);
+    this.reach = unsorted.length > 0 ? null : grownBounds(table, finite);
   }
 
-  /** The edges of the decoders of type `decoderCode`, or null when there are none. */
-  static of(table: BlockTable, decoderCode: number): DecoderEdges | null {
-    // Decoders are few: the native search finds them without a step of the interpreter per block.
-    const { type } = table;
-    let count = 0;
-    for (let i = type.indexOf(decoderCode); i >= 0; i = type.indexOf(decoderCode, i + 1)) count++;
-    if (count === 0) return null;
-    const decoders = new Int32Array(count);
-    for (let i = type.indexOf(decoderCode), n = 0; i >= 0; i = type.indexOf(decoderCode, i + 1))
-      decoders[n++] = i;
+  /**
+   * The edges of the decoders of type `decoderCode`, or null when there are none. The table's runs by
+   * block type (geometry/blockRuns.ts), when the caller has them, say where the decoders are.
+   */
+  static of(table: BlockTable, decoderCode: number, runs: BlockRuns | null = null): DecoderEdges | null {
+    const found: number[] = [];
+    if (runs === null) {
+      // Decoders are few: the native search finds them without a step of the interpreter per block.
+      const { type } = table;
+      for (let i = type.indexOf(decoderCode); i >= 0; i = type.indexOf(decoderCode, i + 1)) found.push(i);
+    } else {
+      const { code, start } = runs;
+      for (let r = code.indexOf(decoderCode); r >= 0; r = code.indexOf(decoderCode, r + 1))
+        for (let i = start[r] as number; i < (start[r + 1] as number); i++) found.push(i);
+    }
+    if (found.length === 0) return null;
     const finite: number[] = [];
     const unsorted: number[] = [];
-    for (const d of decoders) {
+    for (const d of found) {
       const right = (table.x[d] as number) + (table.width[d] as number);
       const bottom = (table.y[d] as number) + (table.height[d] as number);
       const ok = Number.isFinite(table.x[d]) && Number.isFinite(table.y[d]);
       (ok && Number.isFinite(right) && Number.isFinite(bottom) ? finite : unsorted).push(d);
     }
-    const { x, y, width, height } = table;
-    return new DecoderEdges(
-      decoders,
-      sortedEdges(finite, (d) => y[d] as number),
-      sortedEdges(finite, (d) => (y[d] as number) + (height[d] as number)),
-      sortedEdges(finite, (d) => x[d] as number),
-      sortedEdges(finite, (d) => (x[d] as number) + (width[d] as number)),
-      Int32Array.from(unsorted),
-    );
+    return new DecoderEdges(Int32Array.from(found), finite, Int32Array.from(unsorted), table);
   }
 
   /**
@@ -87,31 +88,48 @@ export class DecoderEdges {
       out.set(this.decoders);
       return this.decoders.length;
     }
+    const [topEdges, bottomEdges, leftEdges, rightEdges] = (this.sorted ??= sortedFour(table, this.finite));
     let n = 0;
-    n = within(this.bottom, top, out, n);
-    n = within(this.top, bottom, out, n);
-    n = within(this.right, left, out, n);
-    n = within(this.left, right, out, n);
+    n = within(bottomEdges, top, out, n);
+    n = within(topEdges, bottom, out, n);
+    n = within(rightEdges, left, out, n);
+    n = within(leftEdges, right, out, n);
     out.set(this.unsorted, n);
     return n + this.unsorted.length;
   }
 }
 
-/** The box from the first top and left edges to the last bottom and right edges, grown by WINDOW. */
-function grownBounds(
-  top: SortedEdges,
-  bottom: SortedEdges,
-  left: SortedEdges,
-  right: SortedEdges,
-): Float64Array | null {
-  const last = (edges: SortedEdges) => edges.at[edges.at.length - 1] as number;
-  if (top.at.length === 0) return null;
-  return Float64Array.of(
-    (left.at[0] as number) - WINDOW,
-    (top.at[0] as number) - WINDOW,
-    last(right) + WINDOW,
-    last(bottom) + WINDOW,
-  );
+/**
+ * The box from the least top and left edges to the greatest bottom and right edges of the decoders (all
+ * finite), grown by WINDOW; null when there are none.
+ */
+function grownBounds(table: BlockTable, decoders: readonly number[]): Float64Array | null {
+  if (decoders.length === 0) return null;
+  let left = Infinity;
+  let top = Infinity;
+  let right = -Infinity;
+  let bottom = -Infinity;
+  for (const d of decoders) {
+    left = Math.min(left, table.x[d] as number);
+    top = Math.min(top, table.y[d] as number);
+    right = Math.max(right, (table.x[d] as number) + (table.width[d] as number));
+    bottom = Math.max(bottom, (table.y[d] as number) + (table.height[d] as number));
+  }
+  return Float64Array.of(left - WINDOW, top - WINDOW, right + WINDOW, bottom + WINDOW);
+}
+
+/** The top, bottom, left and right edges of the decoders, each sorted. */
+function sortedFour(
+  table: BlockTable,
+  finite: readonly number[],
+): readonly [SortedEdges, SortedEdges, SortedEdges, SortedEdges] {
+  const { x, y, width, height } = table;
+  return [
+    sortedEdges(finite, (d) => y[d] as number),
+    sortedEdges(finite, (d) => (y[d] as number) + (height[d] as number)),
+    sortedEdges(finite, (d) => x[d] as number),
+    sortedEdges(finite, (d) => (x[d] as number) + (width[d] as number)),
+  ];
 }
 
 function sortedEdges(decoders: readonly number[], edge: (d: number) => number): SortedEdges {

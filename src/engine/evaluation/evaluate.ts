@@ -12,7 +12,6 @@ import type { NeighbourTable } from '../../geometry/neighbourRows';
 import { ABUTMENT_TOLERANCE } from '../../geometry/rect';
 import type { Design } from '../../model/design';
 import { collectFindings } from './checks';
-import { matIndexByPosition } from './decoderReach';
 import { layoutState } from './layoutFindings';
 import { emptyConnections, type MatConnections } from './connectivity';
 import { designContext as contextOf, type DesignContext } from './designContext';
@@ -214,15 +213,14 @@ export function evaluate(design: Design): Report {
   const mats = builder.finish();
   const overlaps = findPositionedOverlaps(table, neighbours);
   const totals = computeTotals(table, mats, design, ctx, senseAmpCount, overlaps);
-  const matIndexAt = matIndexByPosition(mats, table.count);
-  const layout = layoutState(table, mats, matIndexAt, neighbours.runs ?? null);
+  const layout = layoutState(table, mats, undefined, neighbours.runs ?? null);
   const report: Report = {
     mats,
     totals,
     storedHigh: ctx.storedHigh,
     findings: [...collectFindings(mats, overlaps, ctx.storedHigh, design), ...layout.findings],
   };
-  rememberReportState(report, { table, overlaps, matIndexAt, layout });
+  rememberReportState(report, { table, overlaps, matIndexAt: layout.matIndexAt, layout });
   return report;
 }
 

@@ -59,7 +59,12 @@ export function layoutStateAfterEdit(
   const same =
     backToBack.findings === previous.backToBack.findings &&
     reach.results.every((r, n) => r.finding === previous.reach.results[n]?.finding);
-  return { reach, backToBack, findings: same ? previous.findings : findingsOf(mats, reach, backToBack) };
+  return {
+    matIndexAt: edit.matIndexAt,
+    reach,
+    backToBack,
+    findings: same ? previous.findings : findingsOf(mats, reach, backToBack),
+  };
 }
 
 /**

@@ -1,12 +1,7 @@
 import type { BlockRuns } from '../../geometry/blockRuns';
 import type { BlockTable } from '../../geometry/blockTable';
 import { backToBackStrips, type BackToBackState } from './backToBackStrips';
-import {
-  decoderReach,
-  decoderReachFindings,
-  matIndexByPosition,
-  type DecoderReachState,
-} from './decoderReach';
+import { decoderReach, decoderReachFindings, type DecoderReachState } from './decoderReach';
 import type { MatTable } from './matTable';
 import { ComponentsOnDemand } from './reachComponents';
 import type { Finding } from './report';
@@ -17,6 +12,8 @@ import { ServingForest } from './servingForest';
  * through and the back-to-back pairs, so that an edit of a few blocks checks again only around them.
  */
 export interface LayoutState {
+  /** For each table position, the index of its mat in the report, or −1 (see matIndexByPosition). */
+  readonly matIndexAt: Int32Array;
   readonly reach: DecoderReachState;
   readonly backToBack: BackToBackState;
   readonly findings: readonly Finding[];
@@ -38,10 +35,12 @@ export function layoutState(
   /** The table's runs by block type with the margin ABUTMENT_TOLERANCE (evaluate's neighbours cut them). */
   runs: BlockRuns | null = null,
 ): LayoutState {
-  const forest = ServingForest.of(mats, table);
-  const reach = decoderReach(table, mats, matIndexAt ?? matIndexByPosition(mats, table.count), forest, runs);
+  // The serving forest's pass over the mats writes each position's mat index when the caller has none.
+  const index = matIndexAt ?? new Int32Array(table.count).fill(-1);
+  const forest = ServingForest.of(mats, table, matIndexAt ? undefined : index);
+  const reach = decoderReach(table, mats, index, forest, runs);
   const backToBack = backToBackStrips(table, mats, forest.facing, runs);
-  return { reach, backToBack, findings: findingsOf(mats, reach, backToBack) };
+  return { matIndexAt: index, reach, backToBack, findings: findingsOf(mats, reach, backToBack) };
 }
 
 /**

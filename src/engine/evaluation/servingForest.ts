@@ -41,7 +41,12 @@ export class ServingForest {
    * tree (a strip seen before brings its tree along). In a tiled array a strip is met again from the next
    * mat of its row or column, so almost every step is one comparison.
    */
-  static of(mats: MatTable, table: BlockTable): ServingForest {
+  static of(
+    mats: MatTable,
+    table: BlockTable,
+    /** Written on the way: each position's mat (report index), −1 elsewhere (see matIndexByPosition). */
+    matIndexAt: Int32Array = new Int32Array(table.count).fill(-1),
+  ): ServingForest {
     const up0 = new Int32Array(table.count).fill(-1);
     const up1 = new Int32Array(table.count).fill(-1);
     const trees = new Int32Array(2);
@@ -63,6 +68,7 @@ export class ServingForest {
       up1,
       trees,
       facing,
+      matIndexAt,
       table,
     );
     return new ServingForest([up0, up1], trees, facing);
@@ -86,6 +92,7 @@ function joinServingLists(
   up1: Int32Array,
   trees: Int32Array,
   facing: Uint8Array,
+  matIndexAt: Int32Array,
   /** For the error about a listed mat that is not one. */
   table: BlockTable,
 ): void {
@@ -95,6 +102,7 @@ function joinServingLists(
     const m = position[k] as number;
     const kind = kindOf[m] as number;
     if (kind < 0) notAMat(table, m);
+    matIndexAt[m] = k;
     const senseAmpFacing = vertical[kind] === 1 ? ALONG_HORIZONTAL_EDGE : ALONG_VERTICAL_EDGE;
     const driverFacing = vertical[kind] === 1 ? ALONG_VERTICAL_EDGE : ALONG_HORIZONTAL_EDGE;
     const a = servingOffsets[3 * k] as number;
