@@ -48,12 +48,23 @@ export class BlockRuns {
 export function blockRuns(boxes: Boxes, code: Uint8Array, margin: number, maxRuns: number): BlockRuns | null {
   const n = boxes.count;
   const cap = Math.min(n, maxRuns);
-  const bandStart = new Int32Array(cap + 1);
-  const bands = cutBands(wordsOf(boxes.y), wordsOf(boxes.height), code, bandStart, n, cap);
-  if (bands < 0) return null;
-  bandStart[bands] = n;
+  // Stretches the writer noted are bands too, each of one width besides (see Boxes.stretches).
+  const noted = boxes.stretches;
+  const bandStart = noted ?? new Int32Array(cap + 1);
+  const bands = noted
+    ? noted.length - 1
+    : cutBands(wordsOf(boxes.y), wordsOf(boxes.height), code, bandStart, n, cap);
+  if (bands < 0 || bands > cap) return null;
+  if (!noted) bandStart[bands] = n;
   const bandLayout = new Int32Array(bands);
-  classifyBands(wordsOf(boxes.x), wordsOf(boxes.width), bandStart, bands, bandLayout);
+  classifyBands(
+    wordsOf(boxes.x),
+    wordsOf(boxes.width),
+    bandStart,
+    bands,
+    bandLayout,
+    noted !== null && noted !== undefined,
+  );
   const runs = new RunCuts(cap, bands);
   for (let b = 0; b < bands; b++) {
     const layout = bandLayout[b] as number;
@@ -126,7 +137,8 @@ const RECENT_LAYOUTS = 4;
 
 /**
  * For each band, the first band with the same length, left edges and widths (bit for bit) among the
- * last few layouts seen, or the band itself when it starts a layout.
+ * last few layouts seen, or the band itself when it starts a layout. When each band has one width
+ * (`oneWidth`), the widths of two bands are compared once.
  */
 function classifyBands(
   xWords: Int32Array,
@@ -134,6 +146,7 @@ function classifyBands(
   bandStart: Int32Array,
   bands: number,
   bandLayout: Int32Array,
+  oneWidth: boolean,
 ): void {
   const recent = new Int32Array(RECENT_LAYOUTS).fill(-1);
   for (let b = 0; b < bands; b++) {
@@ -146,7 +159,8 @@ function classifyBands(
       const rFrom = bandStart[r] as number;
       if (
         (bandStart[r + 1] as number) - rFrom === length &&
-        sameWords(xWords, widthWords, 2 * rFrom, 2 * from, 2 * length)
+        sameWords(widthWords, 2 * rFrom, 2 * from, oneWidth ? 2 : 2 * length) &&
+        sameWords(xWords, 2 * rFrom, 2 * from, 2 * length)
       ) {
         layout = r;
         break;
@@ -160,17 +174,9 @@ function classifyBands(
   }
 }
 
-/** Whether words a … a + length − 1 equal words b … b + length − 1 in both arrays. */
-function sameWords(
-  xWords: Int32Array,
-  widthWords: Int32Array,
-  a: number,
-  b: number,
-  length: number,
-): boolean {
-  for (let k = 0; k < length; k++) {
-    if (xWords[a + k] !== xWords[b + k] || widthWords[a + k] !== widthWords[b + k]) return false;
-  }
+/** Whether words a … a + length − 1 equal words b … b + length − 1. */
+function sameWords(words: Int32Array, a: number, b: number, length: number): boolean {
+  for (let k = 0; k < length; k++) if (words[a + k] !== words[b + k]) return false;
   return true;
 }
 

@@ -31,6 +31,12 @@ export interface Boxes {
   readonly y: Float64Array;
   readonly width: Float64Array;
   readonly height: Float64Array;
+  /**
+   * Where the stretches of boxes that follow each other with one top edge, width, height and type code
+   * begin, then the count (box indices, ascending), when whoever wrote the boxes noted them (a block
+   * table written in one pass does); null or absent otherwise.
+   */
+  readonly stretches?: Int32Array | null;
 }
 
 /**
@@ -75,6 +81,7 @@ interface TableInProgress extends BlockTable {
   readonly kinds: MatKind[];
   readonly kindIndex: Map<string, number>;
   readonly sums: TableSums;
+  stretches: Int32Array | null;
 }
 
 /** Lays out every block of a design: strips are their own rectangles, mats take their size from their kind. */
@@ -113,26 +120,38 @@ export function blockTable(design: Design): BlockTable {
     stretches,
   );
   stretches[count] = design.blocks.length;
-  sums.placedArea = addStretches(table, stretches.subarray(0, count + 1), sums.areaByCode);
+  table.stretches = stretches.subarray(0, count + 1);
+  sums.placedArea = addStretches(table, table.stretches, sums.areaByCode);
   return table;
 }
 
 /**
  * The areas of a table written by {@link writeRows}, stretch by stretch (stretch k: blocks
- * `stretches[k]` … `stretches[k + 1] − 1`, in a row, of one size and type code): each block's area
+ * `stretches[k]` … `stretches[k + 1] − 1`, of one top edge, size and type code): each block's area
  * (width · height) into its code's sum and the placed area, in design order. A stretch is added at once
  * (repeatedSum.ts: to the bit what adding block by block gives, without a new number per block in the
  * interpreter). Returns the placed area.
  */
 function addStretches(table: BlockTable, stretches: Int32Array, areaByCode: Float64Array): number {
+  const { width, height, type } = table;
   let placedArea = 0;
-  for (let k = 0; k + 1 < stretches.length; k++) {
+  for (let k = 0; k + 1 < stretches.length;) {
     const from = stretches[k] as number;
-    const to = stretches[k + 1] as number;
-    const area = (table.width[from] as number) * (table.height[from] as number);
-    const code = table.type[from] as number;
-    placedArea = repeatedSum(placedArea, area, to - from);
-    areaByCode[code] = repeatedSum(areaByCode[code] as number, area, to - from);
+    const w = width[from] as number;
+    const h = height[from] as number;
+    const code = type[from] as number;
+    // Stretches of one size and code that follow each other (rows of a tiled array) are one sum.
+    let next = k + 1;
+    while (next + 1 < stretches.length) {
+      const at = stretches[next] as number;
+      if (width[at] !== w || height[at] !== h || type[at] !== code) break;
+      next++;
+    }
+    const count = (stretches[next] as number) - from;
+    const area = w * h;
+    placedArea = repeatedSum(placedArea, area, count);
+    areaByCode[code] = repeatedSum(areaByCode[code] as number, area, count);
+    k = next;
   }
   return placedArea;
 }
@@ -232,6 +251,9 @@ class TableRows implements TableInProgress {
     readonly kindIndex: Map<string, number>,
     readonly sums: TableSums,
   ) {}
+
+  /** See {@link Boxes.stretches}: noted by blockTable(), null for a copy with blocks replaced. */
+  stretches: Int32Array | null = null;
 }
 
 /** A mat kind (a class for the reason given at {@link TableRows}). */
@@ -248,8 +270,8 @@ const FAR = Infinity;
 const NEAR = -Infinity;
 
 /**
- * Writes every row, the table's bounds and mats per kind, and where each stretch of blocks of one size
- * and code begins, in one pass (design order); returns the number of stretches. What the loop reads comes in as arguments and the loop ends the
+ * Writes every row, the table's bounds and mats per kind, and where each stretch of blocks of one top
+ * edge, size and code begins, in one pass (design order); returns the number of stretches. What the loop reads comes in as arguments and the loop ends the
  * function: a function V8 compiles after its first call would otherwise find no type feedback for code
  * before the loop (the first call ran it before the function had a feedback vector) and be thrown away
  * at entry, running the whole loop in the interpreter again (DEVELOPERS.md). The last mat's cell and
@@ -278,15 +300,16 @@ function writeRows(
   kinds: readonly MatKind[],
   bounds: Float64Array,
   matsOfKind: number[],
-  /** Where each stretch of blocks of one size and code begins (see {@link addStretches}). */
+  /** Where each stretch of blocks of one top edge, size and code begins (see {@link Boxes.stretches}). */
   stretches: Int32Array,
 ): number {
   let minX = FAR;
   let minY = FAR;
   let maxX = NEAR;
   let maxY = NEAR;
-  // The size and code of the stretch so far: sizes are ≥ 0, so −1 matches none and the first block
-  // opens a stretch.
+  // The top edge, size and code of the stretch so far: sizes are ≥ 0, so −1 matches none and the first
+  // block opens a stretch.
+  let stretchY = 0;
   let areaWidth = -1;
   let areaHeight = -1;
   let sumCode = -1;
@@ -354,7 +377,8 @@ function writeRows(
     widths[i] = w;
     heights[i] = h;
     types[i] = code;
-    if (w !== areaWidth || h !== areaHeight || code !== sumCode) {
+    if (y !== stretchY || w !== areaWidth || h !== areaHeight || code !== sumCode) {
+      stretchY = y;
       areaWidth = w;
       areaHeight = h;
       sumCode = code;

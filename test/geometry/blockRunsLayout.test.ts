@@ -2,11 +2,13 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { bandedNeighbourTable, type BandLimits } from '../../src/geometry/bandedPairs';
 import { blockRuns } from '../../src/geometry/blockRuns';
-import { boxesOf, type Boxes } from '../../src/geometry/blockTable';
 import { groupedGridTable } from '../../src/geometry/neighbourGrid';
 import { neighboursOf, type NeighbourTable } from '../../src/geometry/neighbourRows';
 import { ABUTMENT_TOLERANCE, type Rect } from '../../src/geometry/rect';
+import { blockTable, boxesOf, MAT_CODE, type BlockTable, type Boxes } from '../../src/geometry/blockTable';
 import { blockRunsBefore } from '../support/blockRunsBefore';
+import { designWith } from '../support/designs';
+import { editedGridFloorplan, irregularFloorplan, stripChainFloorplan } from '../support/randomFloorplans';
 
 /*
  * Runs cut once per band layout and walks repeated for pairs of runs laid out alike (blockRuns.ts,
@@ -178,6 +180,37 @@ describe('runs cut per band layout, walks repeated per pair of layouts', () => {
         },
       ),
       { numRuns: 1500 },
+    );
+  }, 60_000);
+
+  it('takes a table’s stretches as bands: the rows of bands cut from the coordinates, and the grid’s', () => {
+    const isMat = Uint8Array.from({ length: 8 }, (_, code) => (code === MAT_CODE ? 1 : 0));
+    const floorplans = fc.oneof(editedGridFloorplan, irregularFloorplan, stripChainFloorplan);
+    fc.assert(
+      fc.property(floorplans, (blocks) => {
+        const table: BlockTable = blockTable(designWith(blocks));
+        const stretches = table.stretches ?? new Int32Array(0);
+        // Each stretch: one top edge, width, height and code.
+        for (let k = 0; k + 1 < stretches.length; k++)
+          for (let i = (stretches[k] as number) + 1; i < (stretches[k + 1] as number); i++)
+            for (const field of ['y', 'width', 'height', 'type'] as const)
+              expect(table[field][i]).toBe(table[field][i - 1]);
+        const { count, x, y, width, height } = table;
+        const plain = { count, x, y, width, height };
+        const noted = bandedNeighbourTable(table, ABUTMENT_TOLERANCE, table.type, isMat, ANY_BOXES);
+        const cut = bandedNeighbourTable(plain, ABUTMENT_TOLERANCE, table.type, isMat, ANY_BOXES);
+        expect(noted === null).toBe(cut === null);
+        if (!noted || !cut) return;
+        expect(rows(noted, count)).toEqual(rows(cut, count));
+        const group = Uint8Array.from(table.type, (code) => isMat[code] as number);
+        expect(rows(noted, count)).toEqual(rows(groupedGridTable(plain, ABUTMENT_TOLERANCE, group), count));
+        const runs = noted.runs;
+        if (runs)
+          for (let r = 0; r < runs.count; r++)
+            for (let s = 0; s < r; s++)
+              if (runs.layout[r] === runs.layout[s]) expect(laidOutAlike(table, runs.start, r, s)).toBe(true);
+      }),
+      { numRuns: 400 },
     );
   }, 60_000);
 
