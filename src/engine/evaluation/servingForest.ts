@@ -51,11 +51,14 @@ export class ServingForest {
     const up1 = new Int32Array(table.count).fill(-1);
     const trees = new Int32Array(2);
     const facing = new Uint8Array(table.count);
-    // Whether each kind's bit lines run vertically, read once per kind rather than once per mat.
+    // Each kind's strip orientations, read once per kind rather than once per mat.
     const { kinds } = table;
-    const vertical = new Uint8Array(kinds.length);
-    for (let n = 0; n < kinds.length; n++)
-      vertical[n] = (kinds[n] as MatKind).block.bitlineAxis === 'vertical' ? 1 : 0;
+    const facingOfKind = new Uint8Array(2 * kinds.length);
+    for (let n = 0; n < kinds.length; n++) {
+      const vertical = (kinds[n] as MatKind).block.bitlineAxis === 'vertical';
+      facingOfKind[2 * n] = vertical ? ALONG_HORIZONTAL_EDGE : ALONG_VERTICAL_EDGE;
+      facingOfKind[2 * n + 1] = vertical ? ALONG_VERTICAL_EDGE : ALONG_HORIZONTAL_EDGE;
+    }
     const { position, servingOffsets, servingPositions } = mats;
     joinServingLists(
       mats.count,
@@ -63,7 +66,7 @@ export class ServingForest {
       servingOffsets,
       servingPositions,
       table.kindOf,
-      vertical,
+      facingOfKind,
       up0,
       up1,
       trees,
@@ -87,7 +90,8 @@ function joinServingLists(
   servingOffsets: Int32Array,
   servingPositions: Int32Array,
   kindOf: Int32Array,
-  vertical: Uint8Array,
+  /** Per mat kind, the orientation code of its sense-amplifier strips, then of its driver strips. */
+  facingOfKind: Uint8Array,
   up0: Int32Array,
   up1: Int32Array,
   trees: Int32Array,
@@ -103,60 +107,77 @@ function joinServingLists(
     const kind = kindOf[m] as number;
     if (kind < 0) notAMat(table, m);
     matIndexAt[m] = k;
-    const senseAmpFacing = vertical[kind] === 1 ? ALONG_HORIZONTAL_EDGE : ALONG_VERTICAL_EDGE;
-    const driverFacing = vertical[kind] === 1 ? ALONG_VERTICAL_EDGE : ALONG_HORIZONTAL_EDGE;
     const a = servingOffsets[3 * k] as number;
     const b = servingOffsets[3 * k + 1] as number;
     const c = servingOffsets[3 * k + 2] as number;
-    let root = m;
-    up0[m] = m;
-    trees0++;
+    // The mat joins the tree of its first strip that has one, or starts a tree with its first strip.
+    let f = facingOfKind[2 * kind] as number;
+    let root = -1;
     for (let p = a; p < b; p++) {
       const s = servingPositions[p] as number;
-      facing[s] = senseAmpFacing;
+      facing[s] = f;
       let r = up0[s] as number;
-      if (r === root) continue;
       if (r < 0) {
+        if (root < 0) {
+          root = m;
+          up0[m] = m;
+          trees0++;
+        }
         up0[s] = root;
         continue;
       }
+      if (r === root) continue;
       // Path halving: every other step points past its parent.
       while ((up0[r] as number) !== r) {
         const g = up0[up0[r] as number] as number;
         up0[r] = g;
         r = g;
       }
-      if (r !== root) {
+      if (root < 0) up0[m] = r;
+      else if (r !== root) {
         up0[root] = r;
-        root = r;
         trees0--;
       }
+      root = r;
       up0[s] = r;
     }
+    if (root < 0) {
+      up0[m] = m;
+      trees0++;
+    }
     trees[0] = trees0;
-    root = m;
-    up1[m] = m;
-    trees1++;
+    f = facingOfKind[2 * kind + 1] as number;
+    root = -1;
     for (let p = b; p < c; p++) {
       const s = servingPositions[p] as number;
-      facing[s] = driverFacing;
+      facing[s] = f;
       let r = up1[s] as number;
-      if (r === root) continue;
       if (r < 0) {
+        if (root < 0) {
+          root = m;
+          up1[m] = m;
+          trees1++;
+        }
         up1[s] = root;
         continue;
       }
+      if (r === root) continue;
       while ((up1[r] as number) !== r) {
         const g = up1[up1[r] as number] as number;
         up1[r] = g;
         r = g;
       }
-      if (r !== root) {
+      if (root < 0) up1[m] = r;
+      else if (r !== root) {
         up1[root] = r;
-        root = r;
         trees1--;
       }
+      root = r;
       up1[s] = r;
+    }
+    if (root < 0) {
+      up1[m] = m;
+      trees1++;
     }
     trees[1] = trees1;
   }
