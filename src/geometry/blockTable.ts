@@ -33,8 +33,8 @@ export interface Boxes {
   readonly height: Float64Array;
   /**
    * Where the stretches of boxes that follow each other with one top edge, width, height and type code
-   * begin, then the count (box indices, ascending), when whoever wrote the boxes noted them (a block
-   * table written in one pass does); null or absent otherwise.
+   * (and mat kind) begin, then the count (box indices, ascending), when whoever wrote the boxes noted
+   * them (a block table written in one pass does); null or absent otherwise.
    */
   readonly stretches?: Int32Array | null;
 }
@@ -121,32 +121,52 @@ export function blockTable(design: Design): BlockTable {
   );
   stretches[count] = design.blocks.length;
   table.stretches = stretches.subarray(0, count + 1);
-  sums.placedArea = addStretches(table, table.stretches, sums.areaByCode);
+  sums.placedArea = finishStretches(table, table.stretches, sums);
   return table;
 }
 
 /**
- * The areas of a table written by {@link writeRows}, stretch by stretch (stretch k: blocks
- * `stretches[k]` … `stretches[k + 1] − 1`, of one top edge, size and type code): each block's area
- * (width · height) into its code's sum and the placed area, in design order. A stretch is added at once
- * (repeatedSum.ts: to the bit what adding block by block gives, without a new number per block in the
- * interpreter). Returns the placed area.
+ * Finishes a table written by {@link writeRows}, stretch by stretch (stretch k: blocks `stretches[k]` …
+ * `stretches[k + 1] − 1`, of one top edge, width, height, type code and mat kind, whose first block
+ * holds them): the other blocks' widths, heights, codes and kinds (TypedArray.fill), the mats of each
+ * kind, the top and bottom bounds, and each block's area (width · height) into its code's sum and the
+ * placed area, in design order. Stretches of one size and code that follow each other (rows of a tiled
+ * array) are added at once (repeatedSum.ts: to the bit what adding block by block gives, without a new
+ * number per block in the interpreter). Returns the placed area.
  */
-function addStretches(table: BlockTable, stretches: Int32Array, areaByCode: Float64Array): number {
-  const { width, height, type } = table;
+function finishStretches(table: BlockTable, stretches: Int32Array, sums: TableSums): number {
+  const { y, width, height, type, kindOf } = table;
+  const { areaByCode, bounds, matsOfKind } = sums;
   let placedArea = 0;
-  for (let k = 0; k + 1 < stretches.length;) {
+  let k = 0;
+  while (k + 1 < stretches.length) {
     const from = stretches[k] as number;
     const w = width[from] as number;
     const h = height[from] as number;
     const code = type[from] as number;
-    // Stretches of one size and code that follow each other (rows of a tiled array) are one sum.
-    let next = k + 1;
-    while (next + 1 < stretches.length) {
+    // Consecutive stretches of one size and code are one sum.
+    let next = k;
+    do {
       const at = stretches[next] as number;
-      if (width[at] !== w || height[at] !== h || type[at] !== code) break;
+      const to = stretches[next + 1] as number;
+      const kind = kindOf[at] as number;
+      width.fill(w, at + 1, to);
+      height.fill(h, at + 1, to);
+      type.fill(code, at + 1, to);
+      kindOf.fill(kind, at + 1, to);
+      if (kind >= 0) matsOfKind[kind] = (matsOfKind[kind] as number) + to - at;
+      // Comparisons as the rows' left and right bounds (writeRows): one top edge per stretch.
+      const top = y[at] as number;
+      const bottom = top + h;
+      if (top < (bounds[1] as number)) bounds[1] = top;
+      if (bottom > (bounds[3] as number)) bounds[3] = bottom;
       next++;
-    }
+    } while (
+      next + 1 < stretches.length &&
+      width[stretches[next] as number] === w &&
+      height[stretches[next] as number] === h &&
+      type[stretches[next] as number] === code
+    );
     const count = (stretches[next] as number) - from;
     const area = w * h;
     placedArea = repeatedSum(placedArea, area, count);
@@ -270,8 +290,9 @@ const FAR = Infinity;
 const NEAR = -Infinity;
 
 /**
- * Writes every row, the table's bounds and mats per kind, and where each stretch of blocks of one top
- * edge, size and code begins, in one pass (design order); returns the number of stretches. What the loop reads comes in as arguments and the loop ends the
+ * Writes every block's left and top edge, its left and right bounds, and where each stretch of blocks of
+ * one top edge, size, code and mat kind begins with those in its first block's row, in one pass (design
+ * order; {@link finishStretches} fills in the rest per stretch); returns the number of stretches. What the loop reads comes in as arguments and the loop ends the
  * function: a function V8 compiles after its first call would otherwise find no type feedback for code
  * before the loop (the first call ran it before the function had a feedback vector) and be thrown away
  * at entry, running the whole loop in the interpreter again (DEVELOPERS.md). The last mat's cell and
@@ -300,25 +321,22 @@ function writeRows(
   kinds: readonly MatKind[],
   bounds: Float64Array,
   matsOfKind: number[],
-  /** Where each stretch of blocks of one top edge, size and code begins (see {@link Boxes.stretches}). */
+  /** Where each stretch of blocks of one top edge, size, code and kind begins (see {@link Boxes.stretches}). */
   stretches: Int32Array,
 ): number {
   let minX = FAR;
-  let minY = FAR;
   let maxX = NEAR;
-  let maxY = NEAR;
   // The top edge, size and code of the stretch so far: sizes are ≥ 0, so −1 matches none and the first
   // block opens a stretch.
   let stretchY = 0;
   let areaWidth = -1;
   let areaHeight = -1;
   let sumCode = -1;
+  let stretchKind = -1;
   let count = 0;
-  // The box whose right (bottom) edge is the far one so far: its left (top) and width (height).
+  // The box whose right edge is the far one so far: its left edge and width.
   let rightX = 0;
   let rightWidth = -1;
-  let bottomY = 0;
-  let bottomHeight = -1;
   let lastCell = firstCell;
   let lastPerBitline = firstPerBitline;
   let lastPerWordline = firstPerWordline;
@@ -337,6 +355,7 @@ function writeRows(
     let w: number;
     let h: number;
     let code: number;
+    let kind: number;
     if (block.type === 'mat') {
       if (
         block.cellId !== lastCell ||
@@ -360,8 +379,7 @@ function writeRows(
       w = lastWidth;
       h = lastHeight;
       code = MAT_CODE;
-      kindOf[i] = lastKind;
-      matsOfKind[lastKind] = (matsOfKind[lastKind] as number) + 1;
+      kind = lastKind;
     } else {
       w = block.width;
       h = block.height;
@@ -370,30 +388,38 @@ function writeRows(
         runCode = CODE_OF.get(block.type) ?? -1;
       }
       code = runCode;
-      kindOf[i] = -1;
+      kind = -1;
     }
     xs[i] = x;
     ys[i] = y;
-    widths[i] = w;
-    heights[i] = h;
-    types[i] = code;
-    if (y !== stretchY || w !== areaWidth || h !== areaHeight || code !== sumCode) {
+    // A zero size opens a stretch of its own: 0 and −0 compare equal, and the stretch's other blocks
+    // take the first one's numbers bit for bit.
+    if (
+      y !== stretchY ||
+      w !== areaWidth ||
+      h !== areaHeight ||
+      code !== sumCode ||
+      kind !== stretchKind ||
+      w === 0 ||
+      h === 0
+    ) {
       stretchY = y;
       areaWidth = w;
       areaHeight = h;
       sumCode = code;
+      stretchKind = kind;
+      widths[i] = w;
+      heights[i] = h;
+      types[i] = code;
+      kindOf[i] = kind;
       stretches[count++] = i;
     }
     // Comparisons rather than Math.min/max calls: coordinates are finite (restore checks them).
-    // The bounds are stored as they grow (rarely, and the first block stores all four): code after the
+    // The bounds are stored as they grow (rarely, and the first block stores both): code after the
     // loop would have no type feedback when V8 compiles the loop as it runs (DEVELOPERS.md).
     if (x < minX) {
       minX = x;
       bounds[0] = x;
-    }
-    if (y < minY) {
-      minY = y;
-      bounds[1] = y;
     }
     // x + w rounds monotonically in x: a box of the far edge's width starting no further right ends no
     // further right.
@@ -404,15 +430,6 @@ function writeRows(
         rightX = x;
         rightWidth = w;
         bounds[2] = right;
-      }
-    }
-    if (h !== bottomHeight || y > bottomY) {
-      const bottom = y + h;
-      if (bottom > maxY) {
-        maxY = bottom;
-        bottomY = y;
-        bottomHeight = h;
-        bounds[3] = bottom;
       }
     }
   }

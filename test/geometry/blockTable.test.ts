@@ -57,6 +57,23 @@ describe('blockTable', () => {
     ).toEqual(design.blocks.map((_, i) => rectAt(table, i)));
   });
 
+  it('keeps every strip’s size bit for bit where a row fills in its stretch (0 beside −0 included)', () => {
+    const strip = (id: string, x: number, width: number): Block => ({
+      id,
+      name: id,
+      type: 'senseAmpStrip',
+      x,
+      y: 0,
+      width,
+      height: 1e-6,
+    });
+    const blocks = [strip('a', 0, 2e-6), strip('b', 2e-6, 2e-6), strip('c', 4e-6, 0), strip('d', 4e-6, -0)];
+    const table = blockTable(designWith(blocks));
+    blocks.forEach((block, i) =>
+      expect(Object.is(table.width[i], (block as { width: number }).width)).toBe(true),
+    );
+  });
+
   it('gives mats of one cell, counts and axis one kind, and others their own', () => {
     const table = blockTable(designWith(mixed));
     const kindOf = (id: string) => table.kindOf[table.blocks.findIndex((b) => b.id === id)];
