@@ -21,11 +21,12 @@ import type { ServedLines } from './servedLines';
  * Blocks of one run share their top edge and bottom (top + height, as every box test forms it), so what
  * a mat's box test reads vertically is one pair of numbers per run: whether a strip meets the mat's top
  * or bottom edge, and how far it shares the mat's height, are decided once per pair of runs (and mat
- * kind) and kept as a small code. What differs per pair is horizontal: a strip on the top or bottom edge
- * at the mat's place in a run of the mat's run's layout (so with the mat's left edge and width to the
- * bit, see blockRuns.ts) shares the mat's width as the mat measures it, once per mat; any other is
- * measured as connectEachMat measures it; a strip on the left or right edge is tested as
- * connectEachMat tests it, and the strip between two mats of a row is read once for both. Every test is
+ * kind) and kept as a small code. What differs per pair is horizontal, and that depends only on the two
+ * blocks' left edges and widths, which runs of one layout share place by place (blockRuns.ts): so it is
+ * found once per layout and place of the mat (and of the strip) and read for every later row laid out
+ * alike. A strip on the top or bottom edge at the mat's own layout and place shares the mat's width as
+ * the mat measures it; any other is measured as connectEachMat measures it; whether a strip on the left
+ * or right edge meets is connectEachMat's test, kept per pair of layouts and places. Every test is
  * connectEachMat's comparison on the same doubles. A mat whose strips do not cover both edges whole (the
  * only case that needs their spans), that meets more strips than the scratch lists hold, or whose cell
  * pairs bit lines across strips goes through matConnections itself.
@@ -100,21 +101,18 @@ export function connectRunMats(
   serving: MatTableBuilder,
   out: ServedLines,
 ): void {
-  // Each block's run and place in it.
+  // Each block's run, and each run's shift to the run that starts its layout: a block's place i + shift
+  // names its layout and place (same layout and place, same left edge and width to the bit, see
+  // blockRuns.ts), so what depends only on those is found once per layout and place.
   const runOf = new Int32Array(table.count);
-  const placeOf = new Int32Array(table.count);
-  let longest = 0;
+  const shiftOf = new Int32Array(runs.count);
+  const layoutStart = new Int32Array(runs.layouts).fill(-1);
   for (let r = 0; r < runs.count; r++) {
     const from = runs.start[r] as number;
-    const to = runs.start[r + 1] as number;
-    runOf.fill(r, from, to);
-    if (to - from > longest) longest = to - from;
-  }
-  const places = new Int32Array(longest);
-  for (let p = 0; p < longest; p++) places[p] = p;
-  for (let r = 0; r < runs.count; r++) {
-    const from = runs.start[r] as number;
-    placeOf.set(places.subarray(0, (runs.start[r + 1] as number) - from), from);
+    runOf.fill(r, from, runs.start[r + 1]);
+    const layout = runs.layout[r] as number;
+    if ((layoutStart[layout] as number) < 0) layoutStart[layout] = from;
+    shiftOf[r] = (layoutStart[layout] as number) - from;
   }
   // The stretch reach of each kind's top/bottom strips and of its left/right strips: sense amplifiers
   // sit on the bit-line ends (top and bottom when the bit lines run vertically), drivers on the others.
@@ -129,6 +127,12 @@ export function connectRunMats(
   const runOfPair = new Int32Array(runs.count).fill(-1);
   const kindOfPair = new Int32Array(runs.count);
   const pairCode = new Uint8Array(runs.count);
+  // Per mat layout and place: the stretch code of a top/bottom strip laid out like the mat (for the kind
+  // it was found for), and the meets code of up to two left/right strips (by their layout and place).
+  const ownKind = new Int32Array(table.count).fill(-1);
+  const ownCode = new Uint8Array(table.count);
+  const sideStrips = new Int32Array(2 * table.count).fill(-1);
+  const sideCodes = new Uint8Array(2 * table.count);
   const lists = serving.serving;
   const resume = RESUME;
   resume[0] = 0;
@@ -152,8 +156,11 @@ export function connectRunMats(
       neighbours.end,
       neighbours.list,
       runOf,
-      placeOf,
-      runs.layout,
+      shiftOf,
+      ownKind,
+      ownCode,
+      sideStrips,
+      sideCodes,
       runOfPair,
       kindOfPair,
       pairCode,
@@ -244,10 +251,14 @@ function connectEachRunMat(
   end: Int32Array,
   list: Int32Array,
   runOf: Int32Array,
-  /** Each block's place in its run. */
-  placeOf: Int32Array,
-  /** Each run's layout (blockRuns.ts): same layout, same place, same left edge and width bits. */
-  layoutOf: Int32Array,
+  /** Per run, what to add to a block's position to name its layout and place (see connectRunMats). */
+  shiftOf: Int32Array,
+  /** Per mat layout and place: the kind `ownCode` holds a code for (−1: none) and that code. */
+  ownKind: Int32Array,
+  ownCode: Uint8Array,
+  /** Per mat layout and place, two slots: a left/right strip's layout and place (−1: none), its meets code. */
+  sideStrips: Int32Array,
+  sideCodes: Uint8Array,
   /** Per run, the mat run and kind its code in `pairCode` holds for (−1: none yet). */
   runOfPair: Int32Array,
   kindOfPair: Int32Array,
@@ -272,11 +283,6 @@ function connectEachRunMat(
   // The kind whose reach for a top or bottom strip's stretch is at hand.
   let reachKind = -1;
   let kindAcrossReach = 0;
-  // The strip on a left or right edge read last, and its left and right edges (m): the strip between
-  // two mats of a row is the right one of the first and the left one of the second.
-  let lastStrip = -1;
-  let lastLeft = 0;
-  let lastRight = 0;
   let used = resume[2] as number;
   let missing = DONE;
   let at = resume[0] as number;
@@ -305,12 +311,11 @@ function connectEachRunMat(
       kindAcrossReach = acrossReach[kind] as number;
     }
     const senseAcross = vertical[kind] === 1;
-    const layout = layoutOf[run] as number;
-    const place = placeOf[at] as number;
-    const tx = x[at] as number;
-    const tr = tx + (width[at] as number);
-    // The stretch code of a top or bottom strip with the mat's own left edge and width.
-    let ownCode = -1;
+    // The mat's layout and place; its left and right edges are read when a code is not known yet.
+    const slot = at + (shiftOf[run] as number);
+    let tx = 0;
+    let tr = 0;
+    let edgesRead = false;
     let senseAmpCount = 0;
     let driverCount = 0;
     let first = 0;
@@ -338,25 +343,49 @@ function connectEachRunMat(
         // On the top or bottom edge (decided per run pair); the stretch runs along x.
         meets = code & (MEETS_FIRST | MEETS_SECOND);
         if (meets === 0) continue;
-        if (layoutOf[s] === layout && placeOf[i] === place) {
-          if (ownCode < 0) ownCode = stretchCode(tx, tr, tx, tr, kindAcrossReach);
-          stretch = ownCode;
+        if (i + (shiftOf[s] as number) === slot) {
+          // Laid out like the mat: its stretch is the mat's own width as the mat measures it.
+          if (ownKind[slot] !== kind) {
+            if (!edgesRead) {
+              tx = x[at] as number;
+              tr = tx + (width[at] as number);
+              edgesRead = true;
+            }
+            ownCode[slot] = stretchCode(tx, tr, tx, tr, kindAcrossReach);
+            ownKind[slot] = kind;
+          }
+          stretch = ownCode[slot] as number;
         } else {
+          if (!edgesRead) {
+            tx = x[at] as number;
+            tr = tx + (width[at] as number);
+            edgesRead = true;
+          }
           const left = x[i] as number;
           stretch = stretchCode(tx, tr, left, left + (width[i] as number), kindAcrossReach);
         }
       } else {
-        // On the left (its right on our left) or right edge; the stretch runs along y (per run pair).
-        if (i !== lastStrip) {
-          lastStrip = i;
-          lastLeft = x[i] as number;
-          lastRight = lastLeft + (width[i] as number);
+        // On the left (its right on our left) or right edge: meets as the two layouts and places have
+        // it; the stretch runs along y (per run pair).
+        const side = i + (shiftOf[s] as number);
+        if (sideStrips[2 * slot] === side) meets = sideCodes[2 * slot] as number;
+        else if (sideStrips[2 * slot + 1] === side) meets = sideCodes[2 * slot + 1] as number;
+        else {
+          if (!edgesRead) {
+            tx = x[at] as number;
+            tr = tx + (width[at] as number);
+            edgesRead = true;
+          }
+          const left = x[i] as number;
+          const dFirst = left + (width[i] as number) - tx;
+          const dSecond = left - tr;
+          meets =
+            (dFirst > tol || dFirst < negativeTol ? 0 : MEETS_FIRST) |
+            (dSecond > tol || dSecond < negativeTol ? 0 : MEETS_SECOND);
+          const free = sideStrips[2 * slot] === -1 ? 2 * slot : 2 * slot + 1;
+          sideStrips[free] = side;
+          sideCodes[free] = meets;
         }
-        const dFirst = lastRight - tx;
-        const dSecond = lastLeft - tr;
-        meets =
-          (dFirst > tol || dFirst < negativeTol ? 0 : MEETS_FIRST) |
-          (dSecond > tol || dSecond < negativeTol ? 0 : MEETS_SECOND);
         if (meets === 0) continue;
         stretch = code >> STRETCH_SHIFT;
       }
