@@ -368,9 +368,8 @@ function connectEachRunMat(
         // On the left (its right on our left) or right edge: meets as the two layouts and places have
         // it; the stretch runs along y (per run pair).
         const side = i + (shiftOf[s] as number);
-        if (sideStrips[2 * slot] === side) meets = sideCodes[2 * slot] as number;
-        else if (sideStrips[2 * slot + 1] === side) meets = sideCodes[2 * slot + 1] as number;
-        else {
+        let found = 2 * slot;
+        if (sideStrips[found] !== side && sideStrips[++found] !== side) {
           if (!edgesRead) {
             tx = x[at] as number;
             tr = tx + (width[at] as number);
@@ -379,13 +378,15 @@ function connectEachRunMat(
           const left = x[i] as number;
           const dFirst = left + (width[i] as number) - tx;
           const dSecond = left - tr;
-          meets =
+          found = sideStrips[2 * slot] === -1 ? 2 * slot : 2 * slot + 1;
+          sideStrips[found] = side;
+          sideCodes[found] =
             (dFirst > tol || dFirst < negativeTol ? 0 : MEETS_FIRST) |
             (dSecond > tol || dSecond < negativeTol ? 0 : MEETS_SECOND);
-          const free = sideStrips[2 * slot] === -1 ? 2 * slot : 2 * slot + 1;
-          sideStrips[free] = side;
-          sideCodes[free] = meets;
         }
+        // One read for found and new codes alike (a read first reached on a later row would have no
+        // type feedback in the code V8 compiled during the first).
+        meets = sideCodes[found] as number;
         if (meets === 0) continue;
         stretch = code >> STRETCH_SHIFT;
       }
