@@ -1,12 +1,15 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { refreshRows } from '../../src/engine/evaluation/totals';
-import { blockTable, MAT_CODE, type BlockTable } from '../../src/geometry/blockTable';
+import { bandedNeighbourTable, type BandLimits } from '../../src/geometry/bandedPairs';
+import { BLOCK_TYPE_CODES, blockTable, MAT_CODE, type BlockTable } from '../../src/geometry/blockTable';
+import { ABUTMENT_TOLERANCE } from '../../src/geometry/rect';
 import { matGeometry } from '../../src/geometry/matGeometry';
 import type { Block } from '../../src/model/block';
 import { DEMO_PROCESS, FOLDED_8F2_CELL } from '../../src/model/builtins';
 import { designWith, mat } from '../support/designs';
 import { refreshRows as oracleRefreshRows } from '../support/evaluateOracle/refreshRows';
+import { editedGridFloorplan, irregularFloorplan, stripChainFloorplan } from '../support/randomFloorplans';
 
 // Rows to refresh: mats side by side along their word lines, with the same extent across them, form one
 // band that one row activation crosses, so a band counts its largest word-line count once. The band rule is
@@ -96,5 +99,27 @@ describe('refresh rows against the pre-rewrite pass', () => {
       }),
       { numRuns: 5_000 },
     );
+  }, 60_000);
+});
+
+describe('refresh rows run by run', () => {
+  // With the neighbour pass's runs, only runs of mats are visited and a mat of the last one's kind in the
+  // same run is skipped; without, every block. Floorplans of every kind, runs cut on any of them.
+  const anyBoxes: BandLimits = {
+    minRunLength: 0,
+    runPairsPerRun: Infinity,
+    visitsPerBlock: Infinity,
+    repeatWalks: true,
+  };
+  const matGroup = Uint8Array.from(BLOCK_TYPE_CODES, (_, code) => (code === MAT_CODE ? 1 : 0));
+  const sameByRuns = (blocks: Block[]) => {
+    const table = blockTable(designWith(blocks));
+    const runs = bandedNeighbourTable(table, ABUTMENT_TOLERANCE, table.type, matGroup, anyBoxes)?.runs;
+    if (runs) expect(Object.is(refreshRows(table, runs), oracleRefreshRows(table))).toBe(true);
+  };
+
+  it('counts the rows the block-by-block pass counts', () => {
+    for (const arb of [editedGridFloorplan, irregularFloorplan, stripChainFloorplan])
+      fc.assert(fc.property(arb, sameByRuns), { numRuns: 300 });
   }, 60_000);
 });

@@ -212,7 +212,7 @@ export function evaluate(design: Design): Report {
   evaluateAllMats(table, neighbours, ctx, builder, matCount);
   const mats = builder.finish();
   const overlaps = findPositionedOverlaps(table, neighbours);
-  const totals = computeTotals(table, mats, design, ctx, senseAmpCount, overlaps);
+  const totals = computeTotals(table, mats, design, ctx, senseAmpCount, overlaps, neighbours.runs ?? null);
   const layout = layoutState(table, mats, undefined, neighbours.runs ?? null);
   const report: Report = {
     mats,

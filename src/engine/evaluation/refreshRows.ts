@@ -1,4 +1,5 @@
 import { MAT_CODE, type BlockTable, type MatKind } from '../../geometry/blockTable';
+import type { BlockRuns } from '../../geometry/blockRuns';
 import { needsRefresh } from '../../model/cellBasics';
 
 /** Positions closer than this are the same band edge (m). */
@@ -10,7 +11,11 @@ const BAND_GRID = 1e-9;
  * the largest word-line count among its mats, not the sum. Mats of static (6T) cells are not refreshed.
  * Common practice (no source).
  */
-export function refreshRows(table: BlockTable): number {
+export function refreshRows(
+  table: BlockTable,
+  /** The table's runs by block type (blockRuns.ts), when known: then only runs of mats are visited. */
+  runs: BlockRuns | null = null,
+): number {
   // What each kind of mat contributes, read here once per kind: the loop below reads no cell, whose shape
   // may differ from design to design (a compiled loop that met another shape would be thrown away).
   const kinds = table.kinds;
@@ -23,8 +28,10 @@ export function refreshRows(table: BlockTable): number {
   }
   const bands = new Map<number, Map<number, number>>();
   const { type, kindOf, x, y, width, height } = table;
+  const ranges = runs ? matRuns(runs) : Int32Array.of(0, table.count);
   collectBands(
-    table.count,
+    ranges,
+    runs ? 1 : 0,
     type,
     kindOf,
     x,
@@ -45,6 +52,19 @@ export function refreshRows(table: BlockTable): number {
   return rows;
 }
 
+/** Where each run of mats starts and ends (from, to pairs). */
+function matRuns(runs: BlockRuns): Int32Array {
+  let count = 0;
+  for (let r = 0; r < runs.count; r++) if (runs.code[r] === MAT_CODE) count++;
+  const ranges = new Int32Array(2 * count);
+  for (let r = 0, at = 0; r < runs.count; r++) {
+    if (runs.code[r] !== MAT_CODE) continue;
+    ranges[at++] = runs.start[r] as number;
+    ranges[at++] = runs.start[r + 1] as number;
+  }
+  return ranges;
+}
+
 /** The 32-bit words of a list of doubles (two per double, in memory order). */
 function wordsOf(list: Float64Array): Int32Array {
   return new Int32Array(list.buffer, list.byteOffset, 2 * list.length);
@@ -56,7 +76,10 @@ function wordsOf(list: Float64Array): Int32Array {
  * previous mat is tried first. (The hot loop ends the function: see DEVELOPERS.md.)
  */
 function collectBands(
-  count: number,
+  /** Blocks to visit: from, to pairs (the whole table, or its runs of mats). */
+  ranges: Int32Array,
+  /** 1 when each range is a run (its blocks share their top edge and height to the bit). */
+  rangesAreRuns: number,
   type: Uint8Array,
   kindOf: Int32Array,
   x: Float64Array,
@@ -92,12 +115,22 @@ function collectBands(
   let startHigh = 0;
   let lengthLow = 0;
   let lengthHigh = 0;
-  for (let i = 0; i < count; i++) {
+  // The range of the mat last added, when the ranges are runs.
+  let lastRun = -1;
+  for (let r = 0, i = 0, to = 0; r < ranges.length || i < to; i++) {
+    if (i >= to) {
+      i = ranges[r] as number;
+      to = ranges[r + 1] as number;
+      r += 2;
+      if (i >= to) continue;
+    }
     if (type[i] !== MAT_CODE) continue;
     const k = kindOf[i] as number;
     // Static cells need no refresh and add no rows.
     if (!(k >= 0 && k < refreshed.length) || refreshed[k] === 0) continue;
     const vertical = verticalKind[k] === 1;
+    // A mat of the last one's kind in the same run shares its top edge and height: nothing to add.
+    if (vertical && k === lastKind && lastRun === r) continue;
     const startWords = vertical ? yWords : xWords;
     const lengthWords = vertical ? heightWords : widthWords;
     const s0 = startWords[2 * i] as number;
@@ -107,6 +140,7 @@ function collectBands(
     if (k === lastKind && s0 === startLow && s1 === startHigh && l0 === lengthLow && l1 === lengthHigh)
       continue;
     lastKind = k;
+    lastRun = rangesAreRuns === 1 ? r : -1;
     startLow = s0;
     startHigh = s1;
     lengthLow = l0;

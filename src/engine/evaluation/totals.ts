@@ -1,4 +1,5 @@
 import { BLOCK_TYPE_CODES, MAT_CODE, type BlockTable } from '../../geometry/blockTable';
+import type { BlockRuns } from '../../geometry/blockRuns';
 import type { BlockType } from '../../model/block';
 import type { Design } from '../../model/design';
 import type { DesignContext } from './designContext';
@@ -36,9 +37,10 @@ function refreshFigures(
   computedRowCycle: number,
   /** Activation energy of every word line of every refreshed mat, once each (J): one window's refresh. */
   energyOfAllRows: number,
+  runs: BlockRuns | null,
 ): RefreshFigures {
   const o = design.operating;
-  const rows = refreshRows(table);
+  const rows = refreshRows(table, runs);
   const interval = refreshInterval(o.refreshWindow, o.refreshCommandsPerWindow);
   const rowsPerCommand = rowsPerRefreshCommand(rows, o.refreshCommandsPerWindow);
   const cycle = refreshRowCycle(design.process.rowCycleTimeOverride, computedRowCycle);
@@ -316,6 +318,8 @@ export function computeTotals(
   ctx: DesignContext,
   senseAmpCount: number,
   overlaps: readonly PositionedOverlap[],
+  /** The table's runs by block type, when the neighbour pass found them (refresh bands go run by run). */
+  runs: BlockRuns | null = null,
 ): Totals {
   const sums = new Float64Array(SUM_SLOTS);
   if (runStarts.length < mats.count) runStarts = new Int32Array(mats.count);
@@ -373,6 +377,6 @@ export function computeTotals(
     offsetSigmaMultiplier: ctx.sigmaMultiplier,
     ...e,
     matOverlapArea: overlapArea,
-    refresh: refreshFigures(table, design, e.worstRowCycleTime, sums[REFRESH_ENERGY] as number),
+    refresh: refreshFigures(table, design, e.worstRowCycleTime, sums[REFRESH_ENERGY] as number, runs),
   };
 }
