@@ -339,53 +339,48 @@ function connectEachRunMat(
       const code = pairCode[s] as number;
       let meets: number;
       let stretch: number;
-      if (sense === senseAcross) {
+      // The strip's layout and place. A code not known yet for it needs the mat's left and right edges,
+      // read at this one place (a read first reached on a later row would have no type feedback in the
+      // code V8 compiled during the first).
+      const across = sense === senseAcross;
+      const place = i + (shiftOf[s] as number);
+      let found = 2 * slot;
+      const known = across
+        ? place === slot && ownKind[slot] === kind
+        : sideStrips[found] === place || sideStrips[++found] === place;
+      if (!known && !edgesRead) {
+        tx = x[at] as number;
+        tr = tx + (width[at] as number);
+        edgesRead = true;
+      }
+      if (across) {
         // On the top or bottom edge (decided per run pair); the stretch runs along x.
         meets = code & (MEETS_FIRST | MEETS_SECOND);
         if (meets === 0) continue;
-        if (i + (shiftOf[s] as number) === slot) {
+        if (place === slot) {
           // Laid out like the mat: its stretch is the mat's own width as the mat measures it.
-          if (ownKind[slot] !== kind) {
-            if (!edgesRead) {
-              tx = x[at] as number;
-              tr = tx + (width[at] as number);
-              edgesRead = true;
-            }
+          if (!known) {
             ownCode[slot] = stretchCode(tx, tr, tx, tr, kindAcrossReach);
             ownKind[slot] = kind;
           }
           stretch = ownCode[slot] as number;
         } else {
-          if (!edgesRead) {
-            tx = x[at] as number;
-            tr = tx + (width[at] as number);
-            edgesRead = true;
-          }
           const left = x[i] as number;
           stretch = stretchCode(tx, tr, left, left + (width[i] as number), kindAcrossReach);
         }
       } else {
         // On the left (its right on our left) or right edge: meets as the two layouts and places have
         // it; the stretch runs along y (per run pair).
-        const side = i + (shiftOf[s] as number);
-        let found = 2 * slot;
-        if (sideStrips[found] !== side && sideStrips[++found] !== side) {
-          if (!edgesRead) {
-            tx = x[at] as number;
-            tr = tx + (width[at] as number);
-            edgesRead = true;
-          }
+        if (!known) {
           const left = x[i] as number;
           const dFirst = left + (width[i] as number) - tx;
           const dSecond = left - tr;
           found = sideStrips[2 * slot] === -1 ? 2 * slot : 2 * slot + 1;
-          sideStrips[found] = side;
+          sideStrips[found] = place;
           sideCodes[found] =
             (dFirst > tol || dFirst < negativeTol ? 0 : MEETS_FIRST) |
             (dSecond > tol || dSecond < negativeTol ? 0 : MEETS_SECOND);
         }
-        // One read for found and new codes alike (a read first reached on a later row would have no
-        // type feedback in the code V8 compiled during the first).
         meets = sideCodes[found] as number;
         if (meets === 0) continue;
         stretch = code >> STRETCH_SHIFT;

@@ -258,8 +258,7 @@ let runStarts = new Int32Array(1024);
  * The sums over all mats, mat by mat in design order (so each floating-point sum is the same to the
  * bit), into `out` (slots above, starting at +0), and the first mat of each run of mats sharing figures
  * into `runs` (returns how many runs). Mats follow each other in runs of one figures index; each run adds
- * its addends once per mat (see {@link addRun}). What the loop reads comes in as arguments (see
- * geometry/blockTable.ts, writeRows).
+ * its addends once per mat (see {@link addRun}).
  */
 function matSums(
   count: number,
@@ -268,23 +267,29 @@ function matSums(
   addends: Float64Array,
   runs: Int32Array,
   out: Float64Array,
-  /** The first mat's figures index and whether it starts a run (1; the caller wrote runs[0] = 0), or 0 and 0 without mats. */
-  firstIndex: number,
-  firstRuns: number,
 ): number {
-  let runCount = firstRuns;
-  let previous = firstIndex;
-  let runStart = 0;
-  for (let k = 1; k <= count; k++) {
-    const i = k < count ? (figureIndex[k] as number) : -1;
-    if (i === previous) continue;
-    // Mats runStart … k − 1 share the figures at index `previous`.
-    addRun(out, addends, SUM_SLOTS * previous, k - runStart);
-    if (i >= 0 && figures[i] !== figures[previous]) runs[runCount++] = k;
-    previous = i;
-    runStart = k;
+  let runCount = 0;
+  for (let k = 0; k < count;) {
+    const end = sameFiguresUntil(figureIndex, k, count);
+    const i = figureIndex[k] as number;
+    addRun(out, addends, SUM_SLOTS * i, end - k);
+    if (k === 0 || figures[i] !== figures[figureIndex[k - 1] as number]) runs[runCount++] = k;
+    k = end;
   }
   return runCount;
+}
+
+/**
+ * Where the mats from k on stop sharing mat k's figures index (the hot loop ends the function, and
+ * what is done per run happens in the caller: code after a loop V8 compiled while it ran has no type
+ * feedback, see DEVELOPERS.md).
+ */
+function sameFiguresUntil(figureIndex: Int32Array, k: number, count: number): number {
+  // Every operation is in the loop (none before it: see geometry/blockTable.ts, writeRows).
+  let end = k;
+  do end++;
+  while (end < count && figureIndex[end] === figureIndex[k]);
+  return end;
 }
 
 /** Runs at least this long are summed by {@link repeatedSum}; shorter ones by a loop (cheaper for a few). */
@@ -323,7 +328,6 @@ export function computeTotals(
 ): Totals {
   const sums = new Float64Array(SUM_SLOTS);
   if (runStarts.length < mats.count) runStarts = new Int32Array(mats.count);
-  runStarts[0] = 0;
   const runCount = matSums(
     mats.count,
     mats.figureIndex,
@@ -331,8 +335,6 @@ export function computeTotals(
     addendsOf(mats.figures),
     runStarts,
     sums,
-    mats.count > 0 ? (mats.figureIndex[0] as number) : 0,
-    mats.count > 0 ? 1 : 0,
   );
   const bits = sums[BITS] as number;
   const usableBits = sums[USABLE_BITS] as number;
