@@ -206,7 +206,8 @@ export function collectFindings(
   countGroups(mats, grouping, unsensedWords);
   for (const group of groups.values()) group.ids = new Array<string>(group.count);
   for (const group of groups.values()) group.count = 0;
-  listGroupIds(mats, grouping, unsensedWords);
+  // A die whose mats raise no issue has nothing to list (the second walk would find no group).
+  if (groups.size > 0) listGroupIds(mats, grouping, unsensedWords);
   const findings: Finding[] = [];
   for (const { issue, ids, labels } of groups.values()) {
     findings.push({
