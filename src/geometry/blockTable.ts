@@ -8,7 +8,8 @@ import type { Rect } from './rect';
 
 /** Block types in the order of their codes in {@link BlockTable.type}. */
 export const BLOCK_TYPE_CODES: readonly BlockType[] = BLOCK_TYPES;
-const CODE_OF = new Map(BLOCK_TYPE_CODES.map((type, code) => [type, code]));
+/** Each block type's code (the index in BLOCK_TYPE_CODES). */
+export const CODE_OF = new Map(BLOCK_TYPE_CODES.map((type, code) => [type, code]));
 export const MAT_CODE = BLOCK_TYPE_CODES.indexOf('mat');
 export const SENSE_AMP_STRIP_CODE = BLOCK_TYPE_CODES.indexOf('senseAmpStrip');
 export const WORDLINE_DRIVER_STRIP_CODE = BLOCK_TYPE_CODES.indexOf('wordlineDriverStrip');
@@ -77,7 +78,7 @@ export class TableSums {
 }
 
 /** A table while its rows are written: its list of kinds and their index still grow. */
-interface TableInProgress extends BlockTable {
+export interface TableInProgress extends BlockTable {
   readonly kinds: MatKind[];
   readonly kindIndex: Map<string, number>;
   readonly sums: TableSums;
@@ -176,39 +177,6 @@ function finishStretches(table: BlockTable, stretches: Int32Array, sums: TableSu
   return placedArea;
 }
 
-/**
- * A copy of the table with some blocks replaced by new versions of themselves (same position in design
- * order, new place or size): what the design looks like during a gesture, without laying out the rest again.
- */
-export function withBlocksReplaced(
-  base: BlockTable,
-  replacements: ReadonlyMap<number, Block>,
-  /** The new block list, when the caller has it already (it must hold the replacements). */
-  replaced?: readonly Block[],
-): BlockTable {
-  const blocks = replaced ?? base.blocks.slice();
-  if (!replaced) for (const [i, block] of replacements) (blocks as Block[])[i] = block;
-  const table = new TableRows(
-    base.count,
-    blocks,
-    base.x.slice(),
-    base.y.slice(),
-    base.width.slice(),
-    base.height.slice(),
-    base.type.slice(),
-    base.kindOf.slice(),
-    base.kinds.slice(),
-    base.featureSize,
-    base.cells,
-    new Map(base.kindIndex),
-    new TableSums(),
-  );
-  for (const [i, block] of replacements) writeRow(table, i, block);
-  for (let k = 0; k < table.kinds.length; k++) table.sums.matsOfKind.push(0);
-  table.sums.placedArea = sumRows(table);
-  return table;
-}
-
 /** The rectangle of block i (m). */
 export function rectAt(table: Boxes, i: number): Rect {
   return {
@@ -255,7 +223,7 @@ function emptyTable(
  * read the first shape is thrown away. That was most of the engine in a session's second evaluation.
  * Instances of a class keep one shape. (The same holds for the mat kinds and the mat and neighbour tables.)
  */
-class TableRows implements TableInProgress {
+export class TableRows implements TableInProgress {
   constructor(
     readonly count: number,
     readonly blocks: readonly Block[],
@@ -436,62 +404,8 @@ function writeRows(
   return count;
 }
 
-/**
- * The sums of a table whose rows were written one by one (a copy with some blocks replaced), into its
- * {@link TableSums} whose mat counts start at 0 per kind; returns the placed area.
- */
-function sumRows(table: TableInProgress): number {
-  const { x: xs, y: ys, width: widths, height: heights, type: types, kindOf, sums } = table;
-  const { areaByCode, bounds, matsOfKind } = sums;
-  let placedArea = 0;
-  for (let i = 0; i < table.count; i++) {
-    const x = xs[i] as number;
-    const y = ys[i] as number;
-    const w = widths[i] as number;
-    const h = heights[i] as number;
-    const code = types[i] as number;
-    const area = w * h;
-    placedArea += area;
-    areaByCode[code] = (areaByCode[code] as number) + area;
-    if (x < (bounds[0] as number)) bounds[0] = x;
-    if (y < (bounds[1] as number)) bounds[1] = y;
-    if (x + w > (bounds[2] as number)) bounds[2] = x + w;
-    if (y + h > (bounds[3] as number)) bounds[3] = y + h;
-    const kind = kindOf[i] as number;
-    if (kind >= 0) matsOfKind[kind] = (matsOfKind[kind] as number) + 1;
-  }
-  return placedArea;
-}
-
-function writeRow(table: TableInProgress, i: number, block: Block): void {
-  table.x[i] = block.x;
-  table.y[i] = block.y;
-  table.type[i] = typeCode(block.type);
-  if (block.type !== 'mat') {
-    table.width[i] = block.width;
-    table.height[i] = block.height;
-    table.kindOf[i] = -1;
-    return;
-  }
-  const kind = matKindOf(table, block);
-  table.width[i] = (table.kinds[kind] as MatKind).geometry.width;
-  table.height[i] = (table.kinds[kind] as MatKind).geometry.height;
-  table.kindOf[i] = kind;
-}
-
-/** The last type looked up and its code: blocks come in runs of one type, so most lookups are this. */
-let lastType: BlockType | null = null;
-let lastCode = -1;
-
-function typeCode(type: BlockType): number {
-  if (type !== lastType) {
-    lastCode = CODE_OF.get(type) ?? -1;
-    lastType = type;
-  }
-  return lastCode;
-}
-
-function matKindOf(table: TableInProgress, block: Mat): number {
+/** The index of `block`'s mat kind in the table, the kind added when new (also replacedBlocks.ts). */
+export function matKindOf(table: TableInProgress, block: Mat): number {
   const slot = block.footprint ? `|${block.footprint.width}|${block.footprint.height}` : '';
   const key = `${block.cellId}|${block.cellsPerBitline}|${block.cellsPerWordline}|${block.bitlineAxis}${slot}`;
   const known = table.kindIndex.get(key);

@@ -1,7 +1,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { evaluate } from '../../src/engine';
-import { blockTable, withBlocksReplaced, type BlockTable } from '../../src/geometry/blockTable';
+import { blockTable, type BlockTable } from '../../src/geometry/blockTable';
+import { withBlocksReplaced } from '../../src/geometry/replacedBlocks';
 import type { Block } from '../../src/model/block';
 import { demoDesign } from '../../src/designs/demoDesign';
 import { gridFloorplan } from '../../src/designs/gridFloorplan';

@@ -1,11 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import {
-  BLOCK_TYPE_CODES,
-  blockTable,
-  kindAt,
-  rectAt,
-  withBlocksReplaced,
-} from '../../src/geometry/blockTable';
+import { BLOCK_TYPE_CODES, blockTable, kindAt, rectAt } from '../../src/geometry/blockTable';
+import { withBlocksReplaced } from '../../src/geometry/replacedBlocks';
 import { matGeometry, matRect } from '../../src/geometry/matGeometry';
 import { placeBlocks } from '../../src/geometry/placedBlocks';
 import type { Block } from '../../src/model/block';

@@ -1,11 +1,5 @@
-import {
-  blockTable,
-  MAT_CODE,
-  rectAt,
-  withBlocksReplaced,
-  type BlockTable,
-  type MatKind,
-} from '../../geometry/blockTable';
+import { blockTable, MAT_CODE, rectAt, type BlockTable, type MatKind } from '../../geometry/blockTable';
+import { withBlocksReplaced } from '../../geometry/replacedBlocks';
 import { senseAmpsOfMat } from './matPhysics';
 import { neighbourTableOf, type NeighbourTable } from '../../geometry/neighbourRows';
 import { placedDesign } from '../../geometry/placedIndex';
