@@ -15,7 +15,7 @@ import { collectFindings } from './checks';
 import { layoutState } from './layoutFindings';
 import { emptyConnections, type MatConnections } from './connectivity';
 import { designContext as contextOf, type DesignContext } from './designContext';
-import { figuresOfKind } from './figureRecipes';
+import { figuresOfKind, unservedFiguresKey } from './figureRecipes';
 import { senseAmpsOfMat } from './matPhysics';
 import { findPositionedOverlaps } from './overlaps';
 import { rememberReportState } from './reportState';
@@ -163,10 +163,7 @@ function figuresOfMat(
   c.senseAmpEnds = lines.senseAmpEnds[k] as number;
   c.unpartneredBitlines = lines.unpartneredBitlines[k] as number;
   const served = lines.servedKey[k] as number;
-  const key =
-    served >= 0
-      ? served
-      : `${table.kindOf[at] as number}|${c.senseAmpEnds}|${c.unpartneredBitlines}|${c.unsensedBitlines}|${c.undrivenWordlines}`;
+  const key = served >= 0 ? served : unservedFiguresKey(table.kindOf[at] as number, c);
   return figuresOf(table, at, c, ctx, figuresByKind, key);
 }
 

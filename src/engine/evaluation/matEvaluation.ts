@@ -2,7 +2,7 @@ import { kindAt, type BlockTable } from '../../geometry/blockTable';
 import type { NeighbourTable } from '../../geometry/neighbourRows';
 import { emptyConnections, matConnections } from './connectivity';
 import type { DesignContext } from './designContext';
-import { figuresOfKind, recipes } from './figureRecipes';
+import { figuresOfKind, recipes, servedFiguresKey, unservedFiguresKey } from './figureRecipes';
 import { matPhysics } from './matPhysics';
 import type { MatTableBuilder } from './matTable';
 import type { MatFigures } from './report';
@@ -49,14 +49,10 @@ export function evaluateMatAt(
 ): void {
   const c = matConnections(table, at, neighbours, mats, k, connections, openCell);
   const kindIndex = table.kindOf[at] as number;
-  const lost = c.unpartneredBitlines;
-  const unsensed = c.unsensedBitlines;
-  const undriven = c.undrivenWordlines;
-  // A number for the common case (every line served), a string otherwise: either way one map lookup.
   const key =
-    lost === 0 && unsensed === 0 && undriven === 0
-      ? kindIndex * 3 + c.senseAmpEnds
-      : `${kindIndex}|${c.senseAmpEnds}|${lost}|${unsensed}|${undriven}`;
+    c.unpartneredBitlines === 0 && c.unsensedBitlines === 0 && c.undrivenWordlines === 0
+      ? servedFiguresKey(kindIndex, c.senseAmpEnds)
+      : unservedFiguresKey(kindIndex, c);
   let figures = figuresByKind?.get(key);
   if (!figures) {
     figures = figuresOfKind(kindAt(table, at), c, ctx);

@@ -1,3 +1,4 @@
+import { servedFiguresKey } from './figureRecipes';
 import {
   MAT_CODE,
   ROW_DECODER_CODE,
@@ -85,8 +86,7 @@ export class ServedLines {
   senseAmpEnds = new Uint8Array(0);
   unpartneredBitlines = new Float64Array(0);
   /**
-   * kind · 3 + sense-amplifier ends when the mat leaves no line unserved (evaluate's number key for its
-   * figures), else −1.
+   * The mat's figures key ({@link servedFiguresKey}) when it leaves no line unserved, else −1.
    */
   servedKey = new Int32Array(0);
 
@@ -346,7 +346,7 @@ function connectEachMat(
           );
     unsensedBitlines[k] = unsensed;
     undrivenWordlines[k] = undriven;
-    servedKey[k] = unsensed === 0 && undriven === 0 ? 3 * kind + first + second : -1;
+    servedKey[k] = unsensed === 0 && undriven === 0 ? servedFiguresKey(kind, first + second) : -1;
     senseAmpEnds[k] = first + second;
     unpartneredBitlines[k] = 0;
     k++;

@@ -1,3 +1,4 @@
+import { servedFiguresKey } from './figureRecipes';
 import {
   MAT_CODE,
   ROW_DECODER_CODE,
@@ -88,7 +89,7 @@ export function connectMatAlone(
   out.unpartneredBitlines[k] = c.unpartneredBitlines;
   out.servedKey[k] =
     c.unsensedBitlines === 0 && c.undrivenWordlines === 0 && c.unpartneredBitlines === 0
-      ? 3 * (table.kindOf[at] as number) + c.senseAmpEnds
+      ? servedFiguresKey(table.kindOf[at] as number, c.senseAmpEnds)
       : -1;
 }
 
@@ -432,7 +433,7 @@ function connectEachRunMat(
       offsets[3 * k + 2] = used;
       unsensedBitlines[k] = 0;
       undrivenWordlines[k] = 0;
-      servedKey[k] = 3 * kind + first + second;
+      servedKey[k] = servedFiguresKey(kind, first + second);
       senseAmpEnds[k] = first + second;
       unpartneredBitlines[k] = 0;
     }
