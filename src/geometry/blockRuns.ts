@@ -1,3 +1,4 @@
+import { wordsOf } from './doubleWords';
 import type { Boxes } from './blockTable';
 
 /**
@@ -85,11 +86,6 @@ export function blockRuns(boxes: Boxes, code: Uint8Array, margin: number, maxRun
     runs.layout.subarray(0, count),
     runs.layouts,
   );
-}
-
-/** The 32-bit words of an array of doubles, two per double: equal words, equal bits. */
-function wordsOf(values: Float64Array): Int32Array {
-  return new Int32Array(values.buffer, values.byteOffset, 2 * values.length);
 }
 
 /**

@@ -1,3 +1,4 @@
+import { wordsOf } from '../../geometry/doubleWords';
 import type { Design } from '../../model/design';
 import { formatQuantity } from '../../model/units';
 import { MAT_RULES, storedHighSeverity } from './checkRules';
@@ -150,11 +151,6 @@ function runEnd(
     ((unsensedWords[2 * end] as number) | (unsensedWords[2 * end + 1] as number)) === 0
   );
   return end;
-}
-
-/** The 32-bit words of a list of doubles (two per double, in memory order). */
-function wordsOf(list: Float64Array): Int32Array {
-  return new Int32Array(list.buffer, list.byteOffset, 2 * list.length);
 }
 
 /** First pass: each group's mat count and its first few names, run by run in mat order. */

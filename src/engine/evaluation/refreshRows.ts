@@ -1,3 +1,4 @@
+import { wordsOf } from '../../geometry/doubleWords';
 import { MAT_CODE, type BlockTable, type MatKind } from '../../geometry/blockTable';
 import type { BlockRuns } from '../../geometry/blockRuns';
 import { needsRefresh } from '../../model/cellBasics';
@@ -63,11 +64,6 @@ function matRuns(runs: BlockRuns): Int32Array {
     ranges[at++] = runs.start[r + 1] as number;
   }
   return ranges;
-}
-
-/** The 32-bit words of a list of doubles (two per double, in memory order). */
-function wordsOf(list: Float64Array): Int32Array {
-  return new Int32Array(list.buffer, list.byteOffset, 2 * list.length);
 }
 
 /**
