@@ -8,6 +8,7 @@ import type { Report } from '../../src/engine';
 import { DEMO_PROCESS, FOLDED_8F2_CELL } from '../../src/model/builtins';
 import { createAppStore } from '../../src/store/appStore';
 import { designWith } from '../support/designs';
+import { DEMO_STRIPS } from '../../src/designs/demoSizes';
 
 function tiled(side: number) {
   return designWith(
@@ -18,10 +19,7 @@ function tiled(side: number) {
       matColumns: side,
       cellsPerBitline: 256,
       cellsPerWordline: 256,
-      senseAmpStripHeight: 6e-6,
-      wordlineDriverStripWidth: 3e-6,
-      rowDecoderWidth: 18e-6,
-      columnDecoderHeight: 14e-6,
+      ...DEMO_STRIPS,
     }),
   );
 }
