@@ -5,9 +5,10 @@
  * Prints load average, process count, min and median per call (wall), CPU time of the whole process
  * (V8 compiles on other threads, so CPU can exceed wall) and the collector's pauses within each call;
  * never fails the build. Two runs of processes: as the process finds itself after building the designs,
- * and with the collector's work left from building them done before call 1 (a full collection), which
- * shows what evaluate() itself costs cold; the first is what a caller that has just built a large design
- * waits for.
+ * and with the collector's and the compiler's work left from building them done before call 1 (a full
+ * collection, idle time for V8's background compiles, another collection; see evaluateColdChild.ts),
+ * which shows what evaluate() itself costs cold; the first is what a caller that has just built a large
+ * design waits for.
  */
 import { spawnSync } from 'node:child_process';
 import { cpus, loadavg } from 'node:os';
@@ -57,7 +58,7 @@ function measure(title: string, nodeOptions: readonly string[], childOptions: re
 
 measure('evaluate() cold, 4,096 mats, first three calls in a fresh process, a different design each', [], []);
 measure(
-  "evaluate() cold, the same, with the collector's work left from building the designs done before call 1",
+  "evaluate() cold, the same, with the collector's and compiler's work left from building the designs done before call 1",
   ['--expose-gc'],
   ['--debt-paid'],
 );
