@@ -14,6 +14,7 @@ import { demoDesign } from '../../src/designs/demoDesign';
 import { activeVariantId, variantContent, variantEntries } from '../../src/model/variants';
 import { createAppStore } from '../../src/store/appStore';
 import { expectRefused, runAndCheckChange } from '../support/commandSteps';
+import { DEMO_STRIPS } from '../../src/designs/demoSizes';
 
 function builtVariant(): VariantDesign {
   const built = buildPartition({
@@ -23,12 +24,7 @@ function builtVariant(): VariantDesign {
     operating: DEFAULT_OPERATING,
     cellsPerBitline: 256,
     cellsPerWordline: 512,
-    strips: {
-      senseAmpStripHeight: 6e-6,
-      wordlineDriverStripWidth: 3e-6,
-      rowDecoderWidth: 18e-6,
-      columnDecoderHeight: 14e-6,
-    },
+    strips: DEMO_STRIPS,
     name: 'Open trial',
   });
   if (!built.ok) throw new Error(built.error);

@@ -3,7 +3,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { buildPartition, partitionName } from '../../src/designs/buildPartition';
 import { formatBits } from '../../src/model/units';
-import { gridExtent, losesEdgeBits, planPartition, type StripSizes } from '../../src/designs/partitionPlan';
+import { gridExtent, losesEdgeBits, planPartition } from '../../src/designs/partitionPlan';
 import { evaluate } from '../../src/engine';
 import { findOverlaps } from '../../src/engine/evaluation/overlaps';
 import { senseAmpStripIdsOf } from '../../src/engine/evaluation/matTable';
@@ -22,13 +22,8 @@ import {
 } from '../../src/model/builtins';
 import { variantDesignSchema } from '../../src/model/designSchema';
 import type { CellDefinition } from '../../src/model/cell';
+import { DEMO_STRIPS } from '../../src/designs/demoSizes';
 
-const STRIPS: StripSizes = {
-  senseAmpStripHeight: 6e-6,
-  wordlineDriverStripWidth: 3e-6,
-  rowDecoderWidth: 18e-6,
-  columnDecoderHeight: 14e-6,
-};
 const MIB = 2 ** 20;
 
 const anySpec = fc.record({
@@ -97,7 +92,7 @@ describe('partition builder', () => {
         fc.double({ min: 0.2e-6, max: 40e-6, noNaN: true }),
         fc.double({ min: 0.2e-6, max: 40e-6, noNaN: true }),
         (cell: CellDefinition, matsWanted, sa, swd) => {
-          const strips = { ...STRIPS, senseAmpStripHeight: sa, wordlineDriverStripWidth: swd };
+          const strips = { ...DEMO_STRIPS, senseAmpStripHeight: sa, wordlineDriverStripWidth: swd };
           const spec = {
             cell,
             featureSize: DEMO_PROCESS.featureSize,
@@ -143,7 +138,7 @@ describe('partition builder', () => {
           operating: { ...DEFAULT_OPERATING, refreshWindow: window },
           cellsPerBitline,
           cellsPerWordline,
-          strips: STRIPS,
+          strips: DEMO_STRIPS,
         });
         if (!built.ok) throw new Error(built.error);
         const errors = evaluate(built.design).findings.filter((f) => f.severity === 'error');
@@ -160,7 +155,7 @@ describe('partition builder', () => {
       operating: DEFAULT_OPERATING,
       cellsPerBitline: 256,
       cellsPerWordline: 512,
-      strips: STRIPS,
+      strips: DEMO_STRIPS,
     });
     if (!built.ok) throw new Error(built.error);
     const report = evaluate(built.design);
@@ -178,7 +173,7 @@ describe('partition builder', () => {
       operating: DEFAULT_OPERATING,
       cellsPerBitline: 512,
       cellsPerWordline: 512,
-      strips: STRIPS,
+      strips: DEMO_STRIPS,
     });
     if (!built.ok) throw new Error(built.error);
     const { plan, design } = built;
@@ -200,7 +195,7 @@ describe('partition builder', () => {
       operating: DEFAULT_OPERATING,
       cellsPerBitline: 512,
       cellsPerWordline: 512,
-      strips: STRIPS,
+      strips: DEMO_STRIPS,
     };
     const refused = (patch: object) => {
       const r = buildPartition({ ...base, ...patch });
@@ -209,8 +204,8 @@ describe('partition builder', () => {
     expect(refused({ cellsPerBitline: 0 })).toMatch(/whole numbers/);
     expect(refused({ cellsPerWordline: 1.5 })).toMatch(/whole numbers/);
     expect(refused({ targetBits: 0 })).toMatch(/target capacity/);
-    expect(refused({ strips: { ...STRIPS, senseAmpStripHeight: 0 } })).toMatch(/above zero/);
-    expect(refused({ strips: { ...STRIPS, rowDecoderWidth: Number.NaN } })).toMatch(/decoder/);
+    expect(refused({ strips: { ...DEMO_STRIPS, senseAmpStripHeight: 0 } })).toMatch(/above zero/);
+    expect(refused({ strips: { ...DEMO_STRIPS, rowDecoderWidth: Number.NaN } })).toMatch(/decoder/);
     expect(refused({ targetBits: 2 ** 34, cellsPerBitline: 16, cellsPerWordline: 16 })).toMatch(/mats/);
   });
 
@@ -225,7 +220,7 @@ describe('partition builder', () => {
       operating: DEFAULT_OPERATING,
       cellsPerBitline: 512,
       cellsPerWordline: 1024,
-      strips: STRIPS,
+      strips: DEMO_STRIPS,
     });
     expect(name).toBe('64 Mib bank · 1T1C folded 8F² · 512 × 1024 · Halden D18');
   });

@@ -15,6 +15,7 @@ import {
 } from '../../src/model/builtins';
 import { cellFootprint, footprintInF2 } from '../../src/model/cell';
 import { designWith, mat, processWith, servedMatFigures } from '../support/designs';
+import { DEMO_STRIPS } from '../../src/designs/demoSizes';
 
 const F = 18e-9;
 const strip = (id: string, x: number, y: number, width: number, height: number): Strip => ({
@@ -127,8 +128,7 @@ describe('checks from physics', () => {
     matColumns: 2,
     cellsPerBitline: 512,
     cellsPerWordline: 512,
-    senseAmpStripHeight: 6e-6,
-    wordlineDriverStripWidth: 3e-6,
+    ...DEMO_STRIPS,
     rowDecoderWidth: 10e-6,
     columnDecoderHeight: 10e-6,
   });

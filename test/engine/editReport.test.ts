@@ -9,6 +9,7 @@ import { blocksEditedInPlace } from '../../src/model/designEdit';
 import { reportState } from '../../src/engine/evaluation/reportState';
 import { designWith } from '../support/designs';
 import { expectSameReport } from '../support/sameReport';
+import { DEMO_STRIPS } from '../../src/designs/demoSizes';
 
 function grid(side: number): Design {
   return designWith(
@@ -19,10 +20,7 @@ function grid(side: number): Design {
       matColumns: side,
       cellsPerBitline: 512,
       cellsPerWordline: 512,
-      senseAmpStripHeight: 6e-6,
-      wordlineDriverStripWidth: 3e-6,
-      rowDecoderWidth: 18e-6,
-      columnDecoderHeight: 14e-6,
+      ...DEMO_STRIPS,
     }),
   );
 }

@@ -9,6 +9,7 @@ import type { Design } from '../../src/model/design';
 import { blocksEditedInPlace } from '../../src/model/designEdit';
 import { designWith, mat, strip } from '../support/designs';
 import { expectSameReport } from '../support/sameReport';
+import { DEMO_STRIPS } from '../../src/designs/demoSizes';
 
 /** 64 folded-cell pitches (2F at F = 18 nm): mats of 128 or 256 cells per line span 2 or 4 units (arithmetic). */
 const UNIT = 64 * 2 * 18e-9;
@@ -73,10 +74,7 @@ function tiledArray(): Design {
       matColumns: 3,
       cellsPerBitline: 256,
       cellsPerWordline: 256,
-      senseAmpStripHeight: 6e-6,
-      wordlineDriverStripWidth: 3e-6,
-      rowDecoderWidth: 18e-6,
-      columnDecoderHeight: 14e-6,
+      ...DEMO_STRIPS,
     }),
   );
 }

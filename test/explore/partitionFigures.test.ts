@@ -13,6 +13,7 @@ import {
   FOLDED_8F2_CELL,
 } from '../../src/model/builtins';
 import { expectRelativelyClose } from '../support/close';
+import { DEMO_STRIPS } from '../../src/designs/demoSizes';
 
 const NUMERIC: readonly FigureKey[] = [
   'matCount',
@@ -123,8 +124,7 @@ describe('fast partition figures agree with evaluate() on the built design', () 
       cellsPerBitline: 512,
       cellsPerWordline: 512,
       strips: {
-        senseAmpStripHeight: 6e-6,
-        wordlineDriverStripWidth: 3e-6,
+        ...DEMO_STRIPS,
         rowDecoderWidth: 0,
         columnDecoderHeight: 0,
       },
@@ -147,12 +147,7 @@ describe('fast partition figures agree with evaluate() on the built design', () 
       operating: DEFAULT_OPERATING,
       cellsPerBitline: 512,
       cellsPerWordline: 512,
-      strips: {
-        senseAmpStripHeight: 6e-6,
-        wordlineDriverStripWidth: 3e-6,
-        rowDecoderWidth: 18e-6,
-        columnDecoderHeight: 14e-6,
-      },
+      strips: DEMO_STRIPS,
     };
     const fast = partitionFigures(spec);
     const built = buildPartition(spec);

@@ -9,15 +9,11 @@ import {
   type SweepRequest,
 } from '../../src/explore/sweep';
 import { BUILTIN_CELLS, BUILTIN_PROCESSES, DEFAULT_OPERATING } from '../../src/model/builtins';
+import { DEMO_STRIPS } from '../../src/designs/demoSizes';
 
 const request: SweepRequest = {
   targetBits: 32 * 2 ** 20,
-  strips: {
-    senseAmpStripHeight: 6e-6,
-    wordlineDriverStripWidth: 3e-6,
-    rowDecoderWidth: 18e-6,
-    columnDecoderHeight: 14e-6,
-  },
+  strips: DEMO_STRIPS,
   operating: DEFAULT_OPERATING,
   cellsPerBitline: [64, 128, 256, 512],
   cellsPerWordline: [8, 256, 512],

@@ -9,15 +9,11 @@ import {
   SweepTextTables,
 } from '../../src/explore/sweepColumns';
 import { BUILTIN_CELLS, BUILTIN_PROCESSES, DEFAULT_OPERATING } from '../../src/model/builtins';
+import { DEMO_STRIPS } from '../../src/designs/demoSizes';
 
 const request: SweepRequest = {
   targetBits: 32 * 2 ** 20,
-  strips: {
-    senseAmpStripHeight: 6e-6,
-    wordlineDriverStripWidth: 3e-6,
-    rowDecoderWidth: 18e-6,
-    columnDecoderHeight: 14e-6,
-  },
+  strips: DEMO_STRIPS,
   operating: DEFAULT_OPERATING,
   // 8 cells per word line: too many mats for the capacity, so those points have no plan.
   cellsPerBitline: [64, 256, 1024],
