@@ -31,8 +31,16 @@ export function overlapArea(a: Rect, b: Rect): number {
   return w > ABUTMENT_TOLERANCE && h > ABUTMENT_TOLERANCE ? w * h : 0;
 }
 
-/** The smallest rectangle holding all given rectangles, or null for none. */
-export function boundingBox(rects: Iterable<Rect>): Rect | null {
+/** The extremes of some rectangles' edges (m); ±Infinity for none. */
+export interface Bounds {
+  readonly minX: number;
+  readonly minY: number;
+  readonly maxX: number;
+  readonly maxY: number;
+}
+
+/** The extremes of the given rectangles' edges: left and top least, right and bottom greatest. */
+export function boundsOf(rects: Iterable<Rect>): Bounds {
   let minX = Infinity;
   let minY = Infinity;
   let maxX = -Infinity;
@@ -43,6 +51,12 @@ export function boundingBox(rects: Iterable<Rect>): Rect | null {
     maxX = Math.max(maxX, right(r));
     maxY = Math.max(maxY, bottom(r));
   }
+  return { minX, minY, maxX, maxY };
+}
+
+/** The smallest rectangle holding all given rectangles, or null for none. */
+export function boundingBox(rects: Iterable<Rect>): Rect | null {
+  const { minX, minY, maxX, maxY } = boundsOf(rects);
   if (minX === Infinity) return null;
   return { x: minX, y: minY, width: maxX - minX, height: maxY - minY };
 }

@@ -1,5 +1,5 @@
 import Flatbush from 'flatbush';
-import { bottom, right, type Rect } from './rect';
+import { bottom, boundsOf, right, type Bounds, type Rect } from './rect';
 
 /**
  * A static spatial index over rectangles (a packed Hilbert R-tree from the flatbush package), so that
@@ -23,26 +23,11 @@ export function buildSpatialIndex(rects: readonly Rect[]): SpatialIndex {
  */
 class TreeOnDemand implements SpatialIndex {
   private tree: Flatbush | null = null;
-  private readonly minX: number;
-  private readonly minY: number;
-  private readonly maxX: number;
-  private readonly maxY: number;
+  /** The extremes of every rectangle's edges (m). */
+  private readonly bounds: Bounds;
 
   constructor(private readonly rects: readonly Rect[]) {
-    let minX = Infinity;
-    let minY = Infinity;
-    let maxX = -Infinity;
-    let maxY = -Infinity;
-    for (const r of rects) {
-      minX = Math.min(minX, r.x);
-      minY = Math.min(minY, r.y);
-      maxX = Math.max(maxX, right(r));
-      maxY = Math.max(maxY, bottom(r));
-    }
-    this.minX = minX;
-    this.minY = minY;
-    this.maxX = maxX;
-    this.maxY = maxY;
+    this.bounds = boundsOf(rects);
   }
 
   near(rect: Rect, margin: number): number[] {
@@ -51,7 +36,8 @@ class TreeOnDemand implements SpatialIndex {
     const x1 = right(rect) + margin;
     const y1 = bottom(rect) + margin;
     // A box that holds the bounds of them all meets every rectangle (closed, as the tree compares).
-    if (x0 <= this.minX && y0 <= this.minY && x1 >= this.maxX && y1 >= this.maxY) {
+    const { minX, minY, maxX, maxY } = this.bounds;
+    if (x0 <= minX && y0 <= minY && x1 >= maxX && y1 >= maxY) {
       return Array.from({ length: this.rects.length }, (_, i) => i);
     }
     if (!this.tree) {
