@@ -43,23 +43,26 @@ export function pairsOfServingStrips(table: BlockTable, facing: Uint8Array): Int
 
 /**
  * The pairs per strip type when the table lists each type's serving strips as one stretch facing one way
- * (see stripRanges.ts), or null when it does not. A stretch whose strips cannot face is not searched.
+ * (see stripRanges.ts), or null when it does not. With the table's runs, a stretch whose strips cannot
+ * face is not searched.
  */
 export function pairsInRanges(
   table: BlockTable,
   facing: Uint8Array,
   runs: BlockRuns | null,
 ): Int32Array[] | null {
-  if (runs === null) return null;
   const senseAmps = StripRange.of(table.type, facing, SENSE_AMP_STRIP_CODE);
   const drivers = senseAmps && StripRange.of(table.type, facing, WORDLINE_DRIVER_STRIP_CODE);
   if (!senseAmps || !drivers) return null;
   return [pairsInRange(table, senseAmps, runs), pairsInRange(table, drivers, runs)];
 }
 
-function pairsInRange(table: BlockTable, range: StripRange, runs: BlockRuns): Int32Array {
+function pairsInRange(table: BlockTable, range: StripRange, runs: BlockRuns | null): Int32Array {
   const lying = range.facing === ALONG_HORIZONTAL_EDGE;
-  if (range.to < range.from || !mayFaceInRuns(runs, table.x, table.width, range.from, range.to, lying))
+  if (
+    range.to < range.from ||
+    (runs !== null && !mayFaceInRuns(runs, table.x, table.width, range.from, range.to, lying))
+  )
     return new Int32Array(0);
   const strips = new Int32Array(range.to + 1 - range.from);
   for (let s = 0; s < strips.length; s++) strips[s] = range.from + s;

@@ -90,13 +90,15 @@ export function facingPairs(
 /**
  * False when no strip's far edge lies within the tolerance of any strip's start, so that no two strips
  * can face each other (the usual answer: a tiled array shares its strips). A strip with the same start
- * and thickness as the one before it adds nothing (a row of lying strips counts once); the starts and
- * edges are then sorted natively and merged. True when some edge has a start near it: the caller
- * searches strip by strip.
+ * and thickness as the one before it, or as the one a period before it, adds nothing: a row of lying
+ * strips counts once, and so do the rows after the first of standing strips (whose starts repeat with
+ * the row's length, the period). The distinct starts and edges are then sorted natively and merged. True
+ * when some edge has a start near it: the caller searches strip by strip.
  */
 function mayFace(strips: Int32Array, across: Float64Array, thickness: Float64Array): boolean {
   const starts = new Float64Array(strips.length);
   const edges = new Float64Array(strips.length);
+  const period = repeatAfter(strips, across, thickness);
   let runs = 0;
   let lastStart = NaN;
   let lastThickness = NaN;
@@ -107,11 +109,41 @@ function mayFace(strips: Int32Array, across: Float64Array, thickness: Float64Arr
     if (start === lastStart && size === lastThickness) continue;
     lastStart = start;
     lastThickness = size;
+    if (period > 0 && s >= period) {
+      const before = strips[s - period] as number;
+      if (start === across[before] && size === thickness[before]) continue;
+    }
     starts[runs] = start;
     edges[runs] = start + size;
     runs++;
   }
   return someEdgeNearAStart(starts.subarray(0, runs), edges.subarray(0, runs));
+}
+
+/** Past this many strips, {@link repeatAfter} stops looking for the first strip's start again. */
+const LONGEST_PERIOD = 4096;
+
+/**
+ * Where the strips' starts and thicknesses begin to repeat: the first strip after the first change
+ * with the first strip's start and thickness (0 when none within {@link LONGEST_PERIOD}).
+ */
+function repeatAfter(strips: Int32Array, across: Float64Array, thickness: Float64Array): number {
+  const first = strips[0] as number;
+  const start = across[first] as number;
+  const size = thickness[first] as number;
+  let s = 1;
+  while (
+    s < strips.length &&
+    across[strips[s] as number] === start &&
+    thickness[strips[s] as number] === size
+  )
+    s++;
+  const last = Math.min(strips.length, s + LONGEST_PERIOD);
+  for (; s < last; s++) {
+    const i = strips[s] as number;
+    if (across[i] === start && thickness[i] === size) return s;
+  }
+  return 0;
 }
 
 /**

@@ -124,31 +124,35 @@ function blocksInBoxesOf(
   b: SeedCheck,
   edgesB: DecoderEdges | null,
 ): number {
-  const boxA = reachOf(edgesA);
-  const boxB = reachOf(edgesB);
   // A check without decoders has no seeds: its strip code matches no block and its box is never consulted.
   return blocksInBoxes(
     table.count,
     table.type,
-    table.x,
-    table.y,
-    table.width,
-    table.height,
     matIndexAt,
     edgesA === null ? -1 : a.stripCode,
     edgesA !== null && a.decoderCode === COLUMN_DECODER,
-    boxA[0] as number,
-    boxA[1] as number,
-    boxA[2] as number,
-    boxA[3] as number,
+    ...narrowFirst(table, reachOf(edgesA)),
     edgesB === null ? -1 : b.stripCode,
     edgesB !== null && b.decoderCode === COLUMN_DECODER,
-    boxB[0] as number,
-    boxB[1] as number,
-    boxB[2] as number,
-    boxB[3] as number,
+    ...narrowFirst(table, reachOf(edgesB)),
     inBoxes,
   );
+}
+
+/**
+ * A box (left, top, right, bottom) as the table's start and size arrays across its narrow side, its span
+ * there, the arrays along its long side and its span there: a row decoder's box is narrow in x, a column
+ * decoder's in y, so most blocks leave {@link blocksInBoxes} after one or two comparisons.
+ */
+function narrowFirst(
+  table: BlockTable,
+  box: Float64Array,
+): [Float64Array, Float64Array, number, number, Float64Array, Float64Array, number, number] {
+  const [left, top, right, bottom] = box as unknown as [number, number, number, number];
+  const { x, y, width, height } = table;
+  return right - left <= bottom - top
+    ? [x, width, left, right, y, height, top, bottom]
+    : [y, height, top, bottom, x, width, left, right];
 }
 
 /**
@@ -230,47 +234,56 @@ let inBoxes = new Int32Array(1024);
  * Writes to `out`, in table order, each candidate block of check A (a strip of its type, or a mat where
  * mats count) lying at least partly inside box A as its position, and each of check B inside box B as
  * the position's complement (~i), and returns how many it wrote: the test against
- * {@link DecoderEdges.reach}, written out. The exact test runs afterwards, outside this loop: V8 compiles
- * the loop while it runs, and with that test inside it inlined a dozen geometry functions (a 20 ms
- * compile for a loop that runs once per evaluation). What the loop reads comes in as arguments: read
- * before the loop it would have no type feedback when V8 compiles the function (its feedback is
- * allocated during the loop), and the code would be thrown away. Tables cut into runs take
- * {@link blocksInBoxesByRuns} instead.
+ * {@link DecoderEdges.reach}, written out, each box tested first across its narrow side (see
+ * {@link narrowFirst}). The exact test runs afterwards, outside this loop: V8 compiles the loop while it
+ * runs, and with that test inside it inlined a dozen geometry functions (a 20 ms compile for a loop that
+ * runs once per evaluation). What the loop reads comes in as arguments: read before the loop it would
+ * have no type feedback when V8 compiles the function (its feedback is allocated during the loop), and the
+ * code would be thrown away. Tables cut into runs take {@link blocksInBoxesByRuns} instead.
  */
 function blocksInBoxes(
   count: number,
   type: Uint8Array,
-  x: Float64Array,
-  y: Float64Array,
-  width: Float64Array,
-  height: Float64Array,
   matIndexAt: Int32Array,
   stripA: number,
   matsA: boolean,
-  leftA: number,
-  topA: number,
-  rightA: number,
-  bottomA: number,
+  startA: Float64Array,
+  sizeA: Float64Array,
+  fromA: number,
+  toA: number,
+  crossA: Float64Array,
+  crossSizeA: Float64Array,
+  crossFromA: number,
+  crossToA: number,
   stripB: number,
   matsB: boolean,
-  leftB: number,
-  topB: number,
-  rightB: number,
-  bottomB: number,
+  startB: Float64Array,
+  sizeB: Float64Array,
+  fromB: number,
+  toB: number,
+  crossB: Float64Array,
+  crossSizeB: Float64Array,
+  crossFromB: number,
+  crossToB: number,
   out: Int32Array,
 ): number {
   let n = 0;
   for (let i = 0; i < count; i++) {
     const t = type[i] as number;
-    const inA = t === stripA || (matsA && (matIndexAt[i] as number) >= 0);
-    const inB = t === stripB || (matsB && (matIndexAt[i] as number) >= 0);
-    if (!inA && !inB) continue;
-    const left = x[i] as number;
-    const top = y[i] as number;
-    const right = left + (width[i] as number);
-    const bottom = top + (height[i] as number);
-    if (inA && !(left > rightA || top > bottomA || right < leftA || bottom < topA)) out[n++] = i;
-    if (inB && !(left > rightB || top > bottomB || right < leftB || bottom < topB)) out[n++] = ~i;
+    if (t === stripA || (matsA && (matIndexAt[i] as number) >= 0)) {
+      const at = startA[i] as number;
+      if (!(at > toA || at + (sizeA[i] as number) < fromA)) {
+        const cross = crossA[i] as number;
+        if (!(cross > crossToA || cross + (crossSizeA[i] as number) < crossFromA)) out[n++] = i;
+      }
+    }
+    if (t === stripB || (matsB && (matIndexAt[i] as number) >= 0)) {
+      const at = startB[i] as number;
+      if (!(at > toB || at + (sizeB[i] as number) < fromB)) {
+        const cross = crossB[i] as number;
+        if (!(cross > crossToB || cross + (crossSizeB[i] as number) < crossFromB)) out[n++] = ~i;
+      }
+    }
   }
   return n;
 }
