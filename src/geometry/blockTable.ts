@@ -1,19 +1,21 @@
-import type { BitlineAxis, Block, BlockType, Mat } from '../model/block';
-import { BLOCK_TYPES } from '../model/blockBasics';
+import type { Block, Mat } from '../model/block';
 import type { CellDefinition } from '../model/cell';
 import type { Design } from '../model/design';
-import { matGeometry, type MatGeometry } from './matGeometry';
-import { repeatedSum } from './repeatedSum';
+import { BLOCK_TYPE_CODES } from './blockCodes';
+import type { MatGeometry } from './matGeometry';
+import { matKindOf } from './matKinds';
 import type { Rect } from './rect';
+import { finishStretches, writeRows } from './tableStretches';
 
-/** Block types in the order of their codes in {@link BlockTable.type}. */
-export const BLOCK_TYPE_CODES: readonly BlockType[] = BLOCK_TYPES;
-/** Each block type's code (the index in BLOCK_TYPE_CODES). */
-export const CODE_OF = new Map(BLOCK_TYPE_CODES.map((type, code) => [type, code]));
-export const MAT_CODE = BLOCK_TYPE_CODES.indexOf('mat');
-export const SENSE_AMP_STRIP_CODE = BLOCK_TYPE_CODES.indexOf('senseAmpStrip');
-export const WORDLINE_DRIVER_STRIP_CODE = BLOCK_TYPE_CODES.indexOf('wordlineDriverStrip');
-export const ROW_DECODER_CODE = BLOCK_TYPE_CODES.indexOf('rowDecoder');
+export {
+  BLOCK_TYPE_CODES,
+  CODE_OF,
+  MAT_CODE,
+  ROW_DECODER_CODE,
+  SENSE_AMP_STRIP_CODE,
+  WORDLINE_DRIVER_STRIP_CODE,
+} from './blockCodes';
+export { matKindOf } from './matKinds';
 
 /**
  * What a mat's shape and physics follow from: its cell and cell counts (from a mat of that kind) and the
@@ -126,57 +128,6 @@ export function blockTable(design: Design): BlockTable {
   return table;
 }
 
-/**
- * Finishes a table written by {@link writeRows}, stretch by stretch (stretch k: blocks `stretches[k]` …
- * `stretches[k + 1] − 1`, of one top edge, width, height, type code and mat kind, whose first block
- * holds them): the other blocks' widths, heights, codes and kinds (TypedArray.fill), the mats of each
- * kind, the top and bottom bounds, and each block's area (width · height) into its code's sum and the
- * placed area, in design order. Stretches of one size and code that follow each other (rows of a tiled
- * array) are added at once (repeatedSum.ts: to the bit what adding block by block gives, without a new
- * number per block in the interpreter). Returns the placed area.
- */
-function finishStretches(table: BlockTable, stretches: Int32Array, sums: TableSums): number {
-  const { y, width, height, type, kindOf } = table;
-  const { areaByCode, bounds, matsOfKind } = sums;
-  let placedArea = 0;
-  let k = 0;
-  while (k + 1 < stretches.length) {
-    const from = stretches[k] as number;
-    const w = width[from] as number;
-    const h = height[from] as number;
-    const code = type[from] as number;
-    // Consecutive stretches of one size and code are one sum.
-    let next = k;
-    do {
-      const at = stretches[next] as number;
-      const to = stretches[next + 1] as number;
-      const kind = kindOf[at] as number;
-      width.fill(w, at + 1, to);
-      height.fill(h, at + 1, to);
-      type.fill(code, at + 1, to);
-      kindOf.fill(kind, at + 1, to);
-      if (kind >= 0) matsOfKind[kind] = (matsOfKind[kind] as number) + to - at;
-      // Comparisons as the rows' left and right bounds (writeRows): one top edge per stretch.
-      const top = y[at] as number;
-      const bottom = top + h;
-      if (top < (bounds[1] as number)) bounds[1] = top;
-      if (bottom > (bounds[3] as number)) bounds[3] = bottom;
-      next++;
-    } while (
-      next + 1 < stretches.length &&
-      width[stretches[next] as number] === w &&
-      height[stretches[next] as number] === h &&
-      type[stretches[next] as number] === code
-    );
-    const count = (stretches[next] as number) - from;
-    const area = w * h;
-    placedArea = repeatedSum(placedArea, area, count);
-    areaByCode[code] = repeatedSum(areaByCode[code] as number, area, count);
-    k = next;
-  }
-  return placedArea;
-}
-
 /** The rectangle of block i (m). */
 export function rectAt(table: Boxes, i: number): Rect {
   return {
@@ -242,179 +193,6 @@ export class TableRows implements TableInProgress {
 
   /** See {@link Boxes.stretches}: noted by blockTable(), null for a copy with blocks replaced. */
   stretches: Int32Array | null = null;
-}
-
-/** A mat kind (a class for the reason given at {@link TableRows}). */
-class KindOfMat implements MatKind {
-  constructor(
-    readonly block: Mat,
-    readonly cell: CellDefinition,
-    readonly geometry: MatGeometry,
-  ) {}
-}
-
-/** Starting values of the sums, read from module constants (see {@link writeRows}). */
-const FAR = Infinity;
-const NEAR = -Infinity;
-
-/**
- * Writes every block's left and top edge, its left and right bounds, and where each stretch of blocks of
- * one top edge, size, code and mat kind begins with those in its first block's row, in one pass (design
- * order; {@link finishStretches} fills in the rest per stretch); returns the number of stretches. What the loop reads comes in as arguments and the loop ends the
- * function: a function V8 compiles after its first call would otherwise find no type feedback for code
- * before the loop (the first call ran it before the function had a feedback vector) and be thrown away
- * at entry, running the whole loop in the interpreter again (DEVELOPERS.md). The last mat's cell and
- * counts are kept in locals: consecutive mats are nearly always of one kind in a tiled array, so the
- * kind is looked up only when one of them changes.
- */
-function writeRows(
-  table: TableInProgress,
-  blocks: readonly Block[],
-  /** The first mat's cell, counts, axis and whether it has a footprint ('' and 0 without mats). */
-  firstCell: string,
-  firstPerBitline: number,
-  firstPerWordline: number,
-  firstAxis: BitlineAxis,
-  firstFootprint: boolean,
-  /** The first mat's kind and that kind's size (m), found by the caller; −1 without mats. */
-  firstKind: number,
-  firstWidth: number,
-  firstHeight: number,
-  xs: Float64Array,
-  ys: Float64Array,
-  widths: Float64Array,
-  heights: Float64Array,
-  types: Uint8Array,
-  kindOf: Int32Array,
-  kinds: readonly MatKind[],
-  bounds: Float64Array,
-  matsOfKind: number[],
-  /** Where each stretch of blocks of one top edge, size, code and kind begins (see {@link Boxes.stretches}). */
-  stretches: Int32Array,
-): number {
-  let minX = FAR;
-  let maxX = NEAR;
-  // The top edge, size and code of the stretch so far: sizes are ≥ 0, so −1 matches none and the first
-  // block opens a stretch.
-  let stretchY = 0;
-  let areaWidth = -1;
-  let areaHeight = -1;
-  let sumCode = -1;
-  let stretchKind = -1;
-  let count = 0;
-  // The box whose right edge is the far one so far: its left edge and width.
-  let rightX = 0;
-  let rightWidth = -1;
-  let lastCell = firstCell;
-  let lastPerBitline = firstPerBitline;
-  let lastPerWordline = firstPerWordline;
-  let lastAxis = firstAxis;
-  let lastFootprint = firstFootprint;
-  let lastKind = firstKind;
-  let lastWidth = firstWidth;
-  let lastHeight = firstHeight;
-  // Strips come in runs of one type: the last type's code likewise.
-  let runType: BlockType | null = null;
-  let runCode = -1;
-  for (let i = 0; i < blocks.length; i++) {
-    const block = blocks[i] as Block;
-    const x = block.x;
-    const y = block.y;
-    let w: number;
-    let h: number;
-    let code: number;
-    let kind: number;
-    if (block.type === 'mat') {
-      if (
-        block.cellId !== lastCell ||
-        block.cellsPerBitline !== lastPerBitline ||
-        block.cellsPerWordline !== lastPerWordline ||
-        block.bitlineAxis !== lastAxis ||
-        block.footprint !== undefined ||
-        lastFootprint
-      ) {
-        lastKind = matKindOf(table, block);
-        if (lastKind === matsOfKind.length) matsOfKind.push(0);
-        const g = (kinds[lastKind] as MatKind).geometry;
-        lastCell = block.cellId;
-        lastPerBitline = block.cellsPerBitline;
-        lastPerWordline = block.cellsPerWordline;
-        lastAxis = block.bitlineAxis;
-        lastFootprint = block.footprint !== undefined;
-        lastWidth = g.width;
-        lastHeight = g.height;
-      }
-      w = lastWidth;
-      h = lastHeight;
-      code = MAT_CODE;
-      kind = lastKind;
-    } else {
-      w = block.width;
-      h = block.height;
-      if (block.type !== runType) {
-        runType = block.type;
-        runCode = CODE_OF.get(block.type) ?? -1;
-      }
-      code = runCode;
-      kind = -1;
-    }
-    xs[i] = x;
-    ys[i] = y;
-    // A zero size opens a stretch of its own: 0 and −0 compare equal, and the stretch's other blocks
-    // take the first one's numbers bit for bit.
-    if (
-      y !== stretchY ||
-      w !== areaWidth ||
-      h !== areaHeight ||
-      code !== sumCode ||
-      kind !== stretchKind ||
-      w === 0 ||
-      h === 0
-    ) {
-      stretchY = y;
-      areaWidth = w;
-      areaHeight = h;
-      sumCode = code;
-      stretchKind = kind;
-      widths[i] = w;
-      heights[i] = h;
-      types[i] = code;
-      kindOf[i] = kind;
-      stretches[count++] = i;
-    }
-    // Comparisons rather than Math.min/max calls: coordinates are finite (restore checks them).
-    // The bounds are stored as they grow (rarely, and the first block stores both): code after the
-    // loop would have no type feedback when V8 compiles the loop as it runs (DEVELOPERS.md).
-    if (x < minX) {
-      minX = x;
-      bounds[0] = x;
-    }
-    // x + w rounds monotonically in x: a box of the far edge's width starting no further right ends no
-    // further right.
-    if (w !== rightWidth || x > rightX) {
-      const right = x + w;
-      if (right > maxX) {
-        maxX = right;
-        rightX = x;
-        rightWidth = w;
-        bounds[2] = right;
-      }
-    }
-  }
-  return count;
-}
-
-/** The index of `block`'s mat kind in the table, the kind added when new (also replacedBlocks.ts). */
-export function matKindOf(table: TableInProgress, block: Mat): number {
-  const slot = block.footprint ? `|${block.footprint.width}|${block.footprint.height}` : '';
-  const key = `${block.cellId}|${block.cellsPerBitline}|${block.cellsPerWordline}|${block.bitlineAxis}${slot}`;
-  const known = table.kindIndex.get(key);
-  if (known !== undefined) return known;
-  const cell = table.cells.get(block.cellId);
-  if (!cell) throw new Error(`mat "${block.id}" uses unknown cell "${block.cellId}"`);
-  table.kinds.push(new KindOfMat(block, cell, matGeometry(block, cell, table.featureSize)));
-  table.kindIndex.set(key, table.kinds.length - 1);
-  return table.kinds.length - 1;
 }
 
 /** Plain rectangles as flat boxes (for callers that have rectangles rather than a design). */
