@@ -1,4 +1,5 @@
 import type { BlockRuns } from './blockRuns';
+import type { RunCopies } from './runRows';
 import { ScratchBuffer } from './scratchBuffer';
 
 /**
@@ -20,6 +21,8 @@ export interface NeighbourTable {
    * (null or absent when it did not): other whole-die passes can work per run too.
    */
   readonly runs?: BlockRuns | null;
+  /** Which run's rows each run copies (runRows.ts), when the table was made by runs; null or absent otherwise. */
+  readonly copies?: RunCopies | null;
 }
 
 /**
@@ -45,6 +48,7 @@ export class NeighbourRows implements NeighbourTable {
     readonly list: Int32Array,
     readonly shared: SharedPairs | null = null,
     readonly runs: BlockRuns | null = null,
+    readonly copies: RunCopies | null = null,
   ) {}
 }
 

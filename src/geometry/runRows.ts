@@ -55,7 +55,32 @@ export function rowsByRun(
   rowStart.set(end.subarray(0, n - 1), 1);
   const list = new Int32Array(total);
   fillRuns(runs, walks, sink, taken, by, model, rowStart, end, list);
-  return new NeighbourRows(rowStart, end, list, sink.shared(n, margin), runs);
+  const partners = new Int32Array(by.length);
+  for (let e = 0; e < by.length; e++) partners[e] = partnerOf(walks, by[e] as number);
+  return new NeighbourRows(
+    rowStart,
+    end,
+    list,
+    sink.shared(n, margin),
+    runs,
+    new RunCopies(model, taken, partners),
+  );
+}
+
+/**
+ * Which run's rows each run copies, for passes that can copy what they worked out from rows too: run r's
+ * rows are those of run `model[r]` (r itself when its rows were filled from pairs), every neighbour in
+ * partner run `partners[partnersFrom[m] + k]` moved to the same place in run
+ * `partners[partnersFrom[r] + k]` (shifted by where that run starts against where the other does), for
+ * k = 0 … partnersFrom[r + 1] − partnersFrom[r] − 1 (the walks that took the run, in key order; a run
+ * and its model have as many). Every neighbour of a run lies in one of its partner runs.
+ */
+export class RunCopies {
+  constructor(
+    readonly model: Int32Array,
+    readonly partnersFrom: Int32Array,
+    readonly partners: Int32Array,
+  ) {}
 }
 
 /**

@@ -121,6 +121,45 @@ function laidOutAlike(boxes: Boxes, start: Int32Array, r: number, s: number): bo
   );
 }
 
+/**
+ * The table's copies (runRows.ts RunCopies) say what its rows hold: run r's rows are its model's, every
+ * neighbour moved from the model's k-th partner run to the same place in r's k-th partner run. Returns
+ * how many runs copy another's rows.
+ */
+function copiesHold(table: NeighbourTable): number {
+  const runs = table.runs;
+  const copies = table.copies;
+  expect(copies === null || copies === undefined).toBe(runs === null || runs === undefined);
+  if (!runs || !copies) return 0;
+  const { model, partnersFrom, partners } = copies;
+  const at = (k: number) => runs.start[k] as number;
+  let copied = 0;
+  for (let r = 0; r < runs.count; r++) {
+    const m = model[r] as number;
+    const from = partnersFrom[r] as number;
+    const to = partnersFrom[r + 1] as number;
+    const mine = Array.from(partners.subarray(from, to));
+    // Every neighbour lies in one of the run's partner runs.
+    for (let i = at(r); i < at(r + 1); i++)
+      for (const j of neighboursOf(table, i))
+        expect(mine.some((p) => at(p) <= j && j < at(p + 1))).toBe(true);
+    if (m === r) continue;
+    copied++;
+    expect(at(m + 1) - at(m)).toBe(at(r + 1) - at(r));
+    expect((partnersFrom[m + 1] as number) - (partnersFrom[m] as number)).toBe(to - from);
+    const moved = (j: number): number => {
+      for (let k = 0; k < to - from; k++) {
+        const pm = partners[(partnersFrom[m] as number) + k] as number;
+        if (at(pm) <= j && j < at(pm + 1)) return j - at(pm) + at(partners[from + k] as number);
+      }
+      return -1;
+    };
+    for (let q = 0; q < at(r + 1) - at(r); q++)
+      expect(neighboursOf(table, at(r) + q)).toEqual(neighboursOf(table, at(m) + q).map(moved));
+  }
+  return copied;
+}
+
 describe('runs cut per band layout, walks repeated per pair of layouts', () => {
   it('cuts the runs the block-by-block cut does, and gives one layout only to runs laid out alike', () => {
     fc.assert(
@@ -154,6 +193,7 @@ describe('runs cut per band layout, walks repeated per pair of layouts', () => {
   }, 60_000);
 
   it('finds by repeated walks the rows and shared pairs of walking every pair of runs, and of the grid', () => {
+    let copiedRuns = 0;
     fc.assert(
       fc.property(
         repeatedRows,
@@ -177,10 +217,12 @@ describe('runs cut per band layout, walks repeated per pair of layouts', () => {
           );
           const group = Uint8Array.from(blocks, (b) => groupOf[b.code] as number);
           expect(rows(repeated, n)).toEqual(rows(groupedGridTable(boxes, margin, group), n));
+          copiedRuns += copiesHold(repeated);
         },
       ),
       { numRuns: 1500 },
     );
+    expect(copiedRuns).toBeGreaterThan(50);
   }, 60_000);
 
   it('takes a table’s stretches as bands: the rows of bands cut from the coordinates, and the grid’s', () => {
@@ -204,6 +246,7 @@ describe('runs cut per band layout, walks repeated per pair of layouts', () => {
         expect(rows(noted, count)).toEqual(rows(cut, count));
         const group = Uint8Array.from(table.type, (code) => isMat[code] as number);
         expect(rows(noted, count)).toEqual(rows(groupedGridTable(plain, ABUTMENT_TOLERANCE, group), count));
+        copiesHold(noted);
         const runs = noted.runs;
         if (runs)
           for (let r = 0; r < runs.count; r++)
