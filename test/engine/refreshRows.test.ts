@@ -2,6 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { refreshRows } from '../../src/engine/evaluation/totals';
 import { bandedNeighbourTable, type BandLimits } from '../../src/geometry/bandedPairs';
+import { BlockRuns } from '../../src/geometry/blockRuns';
 import { BLOCK_TYPE_CODES, blockTable, MAT_CODE, type BlockTable } from '../../src/geometry/blockTable';
 import { ABUTMENT_TOLERANCE } from '../../src/geometry/rect';
 import { matGeometry } from '../../src/geometry/matGeometry';
@@ -121,5 +122,84 @@ describe('refresh rows run by run', () => {
   it('counts the rows the block-by-block pass counts', () => {
     for (const arb of [editedGridFloorplan, irregularFloorplan, stripChainFloorplan])
       fc.assert(fc.property(arb, sameByRuns), { numRuns: 300 });
+  }, 60_000);
+});
+
+describe('refresh rows of runs of mats of one kind or several', () => {
+  // A run of one kind with vertical bit lines is counted by its first mat alone (the rest share its kind,
+  // top edge and height). Rows of mats sharing top edge and height with kinds drawn from a few (other
+  // axis, word-line count, static cells), cut into runs where the top edge or height changes.
+  const value = fc.constantFrom(0, 1e-6, 2e-6, 3.5e-6);
+  const kindArb = fc.record({
+    static: fc.boolean(),
+    vertical: fc.boolean(),
+    wordlines: fc.constantFrom(128, 256, 1024),
+  });
+  const rowsArb = fc.record({
+    kinds: fc.array(kindArb, { minLength: 1, maxLength: 4 }),
+    rows: fc.array(
+      fc.record({
+        y: value,
+        h: value,
+        mats: fc.array(fc.record({ kind: fc.nat(), mixed: fc.boolean(), x: value, w: value }), {
+          minLength: 1,
+          maxLength: 6,
+        }),
+      }),
+      { minLength: 1, maxLength: 6 },
+    ),
+  });
+
+  it('counts the rows the block-by-block pass counts', () => {
+    let mixed = 0;
+    fc.assert(
+      fc.property(rowsArb, ({ kinds, rows }) => {
+        const blocks = rows.flatMap((row) => {
+          // Most rows are of one kind; some mix in others.
+          const first = row.mats[0]?.kind ?? 0;
+          return row.mats.map((b) => ({
+            ...b,
+            y: row.y,
+            h: row.h,
+            kind: (b.mixed ? b.kind : first) % kinds.length,
+          }));
+        });
+        const table = {
+          count: blocks.length,
+          type: new Uint8Array(blocks.length).fill(MAT_CODE),
+          kindOf: Int32Array.from(blocks, (b) => b.kind),
+          x: Float64Array.from(blocks, (b) => b.x),
+          y: Float64Array.from(blocks, (b) => b.y),
+          width: Float64Array.from(blocks, (b) => b.w),
+          height: Float64Array.from(blocks, (b) => b.h),
+          kinds: kinds.map((k) => ({
+            cell: { kind: k.static ? 'sram-6t' : 'dram-1t1c' },
+            block: { bitlineAxis: k.vertical ? 'vertical' : 'horizontal' },
+            geometry: { wordlineCount: k.wordlines },
+          })),
+        } as unknown as BlockTable;
+        // One run per row, or per stretch of one top edge and height where rows repeat them.
+        const starts: number[] = [];
+        blocks.forEach((b, i) => {
+          const before = blocks[i - 1];
+          if (!before || !Object.is(before.y, b.y) || !Object.is(before.h, b.h)) starts.push(i);
+        });
+        const count = starts.length;
+        const runs = new BlockRuns(
+          count,
+          Int32Array.from([...starts, blocks.length]),
+          Float64Array.from(starts, (i) => blocks[i]?.y ?? 0),
+          Float64Array.from(starts, (i) => (blocks[i]?.y ?? 0) + (blocks[i]?.h ?? 0)),
+          new Uint8Array(count).fill(MAT_CODE),
+          new Uint8Array(count),
+          new Int32Array(count),
+          1,
+        );
+        if (new Set(blocks.map((b) => b.kind)).size > 1) mixed++;
+        expect(Object.is(refreshRows(table, runs), oracleRefreshRows(table))).toBe(true);
+      }),
+      { numRuns: 3_000 },
+    );
+    expect(mixed).toBeGreaterThan(300);
   }, 60_000);
 });

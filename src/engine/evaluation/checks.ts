@@ -2,6 +2,7 @@ import { wordsOf } from '../../geometry/doubleWords';
 import type { Design } from '../../model/design';
 import { formatQuantity } from '../../model/units';
 import { MAT_RULES, storedHighSeverity } from './checkRules';
+import { figuresEnd } from './figureRuns';
 import { groupLabel } from './findingText';
 import type { Block } from '../../model/block';
 import type { PositionedOverlap } from './overlaps';
@@ -126,37 +127,52 @@ class IssueGrouping {
 }
 
 /**
- * Where the run of mats starting at k ends: mats with every line served and the same figures fall in
- * the same groups, and a die lists them in runs. Unsensed counts are read as the two 32-bit words of
- * their doubles (`unsensedWords`, see {@link wordsOf}): a double read in the interpreter is a new heap
- * number, a 32-bit integer is not. Both words 0 is +0; a −0 or any other value ends the run, which at
- * most splits a run whose mats would be grouped alike.
+ * The first mat from k on with a line unserved, or `count`. Unsensed counts are read as the two 32-bit
+ * words of their doubles (`unsensedWords`, see {@link wordsOf}): a double read in the interpreter is a
+ * new heap number, a 32-bit integer is not. Both words 0 is +0; a −0 or any other value counts as
+ * unserved, which at most splits a run whose mats would be grouped alike.
  */
-function runEnd(
-  count: number,
-  figureIndex: Int32Array,
-  unsensedWords: Int32Array,
-  undrivenWordlines: Int32Array,
-  k: number,
-): number {
-  // Every operation is in the loop (none before it): see geometry/blockTable.ts, writeRows.
-  let end = k;
-  do end++;
+function unservedFrom(count: number, unsensedWords: Int32Array, undriven: Int32Array, k: number): number {
+  let i = k;
   while (
-    end < count &&
-    figureIndex[end] === figureIndex[k] &&
-    undrivenWordlines[k] === 0 &&
-    undrivenWordlines[end] === 0 &&
-    ((unsensedWords[2 * k] as number) | (unsensedWords[2 * k + 1] as number)) === 0 &&
-    ((unsensedWords[2 * end] as number) | (unsensedWords[2 * end + 1] as number)) === 0
-  );
-  return end;
+    i < count &&
+    ((undriven[i] as number) | (unsensedWords[2 * i] as number) | (unsensedWords[2 * i + 1] as number)) === 0
+  )
+    i++;
+  return i;
+}
+
+/**
+ * Where runs of mats that fall in the same groups end: a run of mats with every line served and one
+ * figures index, or one mat with a line unserved. Asked in mat order, never going back.
+ */
+class RunEnds {
+  /** The first unserved mat at or after the last k asked (found again once k passes it). */
+  private unserved = -1;
+
+  constructor(
+    private readonly mats: MatTable,
+    private readonly unsensedWords: Int32Array,
+  ) {}
+
+  /** Where the run from mat k ends. */
+  from(k: number): number {
+    const { count, figureIndex } = this.mats;
+    if (this.unserved < k)
+      this.unserved = unservedFrom(count, this.unsensedWords, this.mats.undrivenWordlines, k);
+    if (this.unserved === k) return k + 1;
+    return Math.min(
+      this.unserved,
+      figuresEnd(figureIndex, k, count, figureIndex[k] as number, this.mats.figures.length),
+    );
+  }
 }
 
 /** First pass: each group's mat count and its first few names, run by run in mat order. */
 function countGroups(mats: MatTable, grouping: IssueGrouping, unsensedWords: Int32Array): void {
+  const ends = new RunEnds(mats, unsensedWords);
   for (let k = 0; k < mats.count;) {
-    const end = runEnd(mats.count, mats.figureIndex, unsensedWords, mats.undrivenWordlines, k);
+    const end = ends.from(k);
     const groups = grouping.groupsOf(k);
     for (let g = 0; g < groups.length; g++) {
       const group = groups[g] as IssueGroup;
@@ -170,8 +186,9 @@ function countGroups(mats: MatTable, grouping: IssueGrouping, unsensedWords: Int
 
 /** Second pass: each group's mat ids, into lists of exactly the counted length (see collectFindings). */
 function listGroupIds(mats: MatTable, grouping: IssueGrouping, unsensedWords: Int32Array): void {
+  const ends = new RunEnds(mats, unsensedWords);
   for (let k = 0; k < mats.count;) {
-    const end = runEnd(mats.count, mats.figureIndex, unsensedWords, mats.undrivenWordlines, k);
+    const end = ends.from(k);
     const groups = grouping.groupsOf(k);
     for (let g = 0; g < groups.length; g++) {
       const group = groups[g] as IssueGroup;

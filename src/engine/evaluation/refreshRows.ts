@@ -29,7 +29,7 @@ export function refreshRows(
   }
   const bands = new Map<number, Map<number, number>>();
   const { type, kindOf, x, y, width, height } = table;
-  const ranges = runs ? matRuns(runs) : Int32Array.of(0, table.count);
+  const ranges = runs ? matRuns(runs, kindOf, facts.vertical) : Int32Array.of(0, table.count);
   collectBands(
     ranges,
     runs ? 1 : 0,
@@ -53,15 +53,32 @@ export function refreshRows(
   return rows;
 }
 
-/** Where each run of mats starts and ends (from, to pairs). */
-function matRuns(runs: BlockRuns): Int32Array {
+/** Past this many kinds of mat, runs are not tested for one kind (a native search per other kind). */
+const FEW_KINDS = 8;
+
+/**
+ * Where each run of mats starts and ends (from, to pairs). A run of one kind whose bit lines are
+ * vertical is its first mat alone: the others share its kind, top edge and height, and add nothing (see
+ * {@link collectBands}). One kind is told by the native search for each other kind.
+ */
+function matRuns(runs: BlockRuns, kindOf: Int32Array, vertical: Uint8Array): Int32Array {
   let count = 0;
   for (let r = 0; r < runs.count; r++) if (runs.code[r] === MAT_CODE) count++;
   const ranges = new Int32Array(2 * count);
+  const kinds = vertical.length;
   for (let r = 0, at = 0; r < runs.count; r++) {
     if (runs.code[r] !== MAT_CODE) continue;
-    ranges[at++] = runs.start[r] as number;
-    ranges[at++] = runs.start[r + 1] as number;
+    const from = runs.start[r] as number;
+    let to = runs.start[r + 1] as number;
+    const kind = kindOf[from] as number;
+    if (vertical[kind] === 1 && kinds <= FEW_KINDS) {
+      const ofRun = kindOf.subarray(from, to);
+      let other = 0;
+      while (other < kinds && (other === kind || ofRun.indexOf(other) < 0)) other++;
+      if (other === kinds) to = from + 1;
+    }
+    ranges[at++] = from;
+    ranges[at++] = to;
   }
   return ranges;
 }

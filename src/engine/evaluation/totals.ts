@@ -11,6 +11,7 @@ import {
   refreshPower,
   rowsPerRefreshCommand,
 } from '../physics/refresh';
+import { figuresEnd } from './figureRuns';
 import { figuresAt, matIdAt, matLabelAt, type MatTable } from './matTable';
 import { refreshRows } from './refreshRows';
 import { repeatedSum } from '../../geometry/repeatedSum';
@@ -270,26 +271,13 @@ function matSums(
 ): number {
   let runCount = 0;
   for (let k = 0; k < count;) {
-    const end = sameFiguresUntil(figureIndex, k, count);
     const i = figureIndex[k] as number;
+    const end = figuresEnd(figureIndex, k, count, i, figures.length);
     addRun(out, addends, SUM_SLOTS * i, end - k);
     if (k === 0 || figures[i] !== figures[figureIndex[k - 1] as number]) runs[runCount++] = k;
     k = end;
   }
   return runCount;
-}
-
-/**
- * Where the mats from k on stop sharing mat k's figures index (the hot loop ends the function, and
- * what is done per run happens in the caller: code after a loop V8 compiled while it ran has no type
- * feedback, see DEVELOPERS.md).
- */
-function sameFiguresUntil(figureIndex: Int32Array, k: number, count: number): number {
-  // Every operation is in the loop (none before it: see geometry/blockTable.ts, writeRows).
-  let end = k;
-  do end++;
-  while (end < count && figureIndex[end] === figureIndex[k]);
-  return end;
 }
 
 /** Runs at least this long are summed by {@link repeatedSum}; shorter ones by a loop (cheaper for a few). */
