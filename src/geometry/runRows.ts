@@ -73,7 +73,10 @@ export function rowsByRun(
  * partner run `partners[partnersFrom[m] + k]` moved to the same place in run
  * `partners[partnersFrom[r] + k]` (shifted by where that run starts against where the other does), for
  * k = 0 … partnersFrom[r + 1] − partnersFrom[r] − 1 (the walks that took the run, in key order; a run
- * and its model have as many). Every neighbour of a run lies in one of its partner runs.
+ * and its model have as many). Every neighbour of a run lies in one of its partner runs. A run and its
+ * model have the same layout, and so have the two partner runs in one place k (a walk is repeated only
+ * for runs of the same layouts); rows follow each other in block order (row i + 1 starts where row i
+ * ends). servedRuns.ts relies on each of these.
  */
 export class RunCopies {
   constructor(

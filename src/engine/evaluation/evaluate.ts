@@ -21,7 +21,8 @@ import { findPositionedOverlaps } from './overlaps';
 import { rememberReportState } from './reportState';
 import type { MatFigures, MatReport, Report } from './report';
 import { matAt, matIndexOf, MatTableBuilder } from './matTable';
-import { connectAllMats, type ServedLines } from './servedLines';
+import type { ServedLines } from './servedLines';
+import { connectAllMats } from './servedRuns';
 import { computeTotals } from './totals';
 
 export { MINIMUM_LEAKAGE } from './designContext';
@@ -91,7 +92,7 @@ export function countMats(table: BlockTable): number {
 }
 
 /**
- * Evaluates every mat into `builder`, in design order: the connection pass (servedLines.ts), then each
+ * Evaluates every mat into `builder`, in design order: the connection pass (servedRuns.ts), then each
  * mat's figures, shared by mats of one kind and connections (computed when a key is first met, in the
  * order matEvaluation.ts evaluateMatAt would meet it, so the report's figures list is the same).
  */

@@ -10,9 +10,9 @@ import {
 import { uncoveredLineCount } from '../../geometry/interval';
 import type { NeighbourTable } from '../../geometry/neighbourRows';
 import { ABUTMENT_TOLERANCE } from '../../geometry/rect';
+import { emptyConnections, matConnections } from './connectivity';
 import type { MatTableBuilder } from './matTable';
 import { pairsAcrossStrips } from './openBitline';
-import { connectMatAlone, connectRunMats } from './servedRuns';
 
 /**
  * The connection pass of a whole die: matConnections (connectivity.ts) for every mat in one loop, with the same
@@ -25,7 +25,7 @@ import { connectMatAlone, connectRunMats } from './servedRuns';
  */
 
 /** Per mat kind, what the pass reads (read from the kinds once, not from a kind or cell per mat). */
-class KindLines {
+export class KindLines {
   /** 1 when the kind's bit lines run vertically (its sense amplifiers sit on its top and bottom). */
   readonly vertical: Uint8Array;
   /** 1 when the kind's cell pairs bit lines across strips (openBitline.ts). */
@@ -112,33 +112,61 @@ const SENSE_AMPS = new Int32Array(CONTACT_LIMIT);
 const DRIVERS = new Int32Array(CONTACT_LIMIT);
 /** −tolerance as a constant: negating in the pass would be an operation needing type feedback. */
 const NEGATIVE_TOLERANCE = -ABUTMENT_TOLERANCE;
-const LINES = new ServedLines();
+/** The record matConnections fills for a mat the pass hands it. */
+const RECORD = emptyConnections();
 
 /**
- * The connections of every mat of `table` (mat k = the k-th mat in design order), with each mat's serving
- * strips recorded in `serving` as mat k. The returned columns are reused by the next call.
+ * Mat k's connections from matConnections itself, into column k of `out` (for mats the pass does not
+ * handle itself).
  */
-export function connectAllMats(
+function connectMatAlone(
+  table: BlockTable,
+  at: number,
+  neighbours: NeighbourTable,
+  serving: MatTableBuilder,
+  k: number,
+  out: ServedLines,
+  open: boolean,
+): void {
+  const c = matConnections(table, at, neighbours, serving, k, RECORD, open);
+  out.unsensedBitlines[k] = c.unsensedBitlines;
+  out.undrivenWordlines[k] = c.undrivenWordlines;
+  out.senseAmpEnds[k] = c.senseAmpEnds;
+  out.unpartneredBitlines[k] = c.unpartneredBitlines;
+  out.servedKey[k] =
+    c.unsensedBitlines === 0 && c.undrivenWordlines === 0 && c.unpartneredBitlines === 0
+      ? servedFiguresKey(table.kindOf[at] as number, c.senseAmpEnds)
+      : -1;
+}
+
+/**
+ * The connections of the mats among blocks `from` … `to` − 1, the first of them mat k (in design order
+ * of the mats), into `out` and `serving`; returns the mat index after the last. `apart[0]` is then the
+ * number of those mats whose answer read more than whether each strip meets and covers each edge
+ * whole: mats handed to matConnections and mats with an edge not covered whole (whose line counts
+ * read the spans).
+ */
+export function connectMatsIn(
   table: BlockTable,
   neighbours: NeighbourTable,
-  matCount: number,
+  kinds: KindLines,
   serving: MatTableBuilder,
-): ServedLines {
-  LINES.reset(matCount);
-  const kinds = new KindLines(table.kinds);
-  const runs = neighbours.runs;
-  if (runs) {
-    connectRunMats(table, neighbours, runs, kinds, serving, LINES);
-    return LINES;
-  }
-  const lines = LINES;
-  connectEachMat(
+  out: ServedLines,
+  from: number,
+  to: number,
+  k: number,
+  apart: Int32Array,
+): number {
+  return connectEachMat(
     table,
     neighbours,
     kinds,
     serving,
-    lines,
-    table.count,
+    out,
+    from,
+    to,
+    k,
+    apart,
     table.x,
     table.y,
     table.width,
@@ -152,18 +180,17 @@ export function connectAllMats(
     kinds.open,
     kinds.senseEdgeReach,
     kinds.driveEdgeReach,
-    lines.position,
-    lines.unsensedBitlines,
-    lines.undrivenWordlines,
-    lines.senseAmpEnds,
-    lines.unpartneredBitlines,
-    lines.servedKey,
+    out.position,
+    out.unsensedBitlines,
+    out.undrivenWordlines,
+    out.senseAmpEnds,
+    out.unpartneredBitlines,
+    out.servedKey,
     SENSE_SPANS,
     DRIVE_SPANS,
     SENSE_AMPS,
     DRIVERS,
   );
-  return LINES;
 }
 
 /**
@@ -178,11 +205,14 @@ function connectEachMat(
   kinds: KindLines,
   serving: MatTableBuilder,
   out: ServedLines,
+  from: number,
+  to: number,
+  firstMat: number,
+  apart: Int32Array,
   // What the loop reads, as arguments: code before the loop that read properties would have no type
   // feedback when V8 compiles the function after its first call (that call ran it before the function
   // had a feedback vector), and the compiled code would be thrown away at entry (see blockTable.ts,
   // writeRows).
-  blockCount: number,
   x: Float64Array,
   y: Float64Array,
   width: Float64Array,
@@ -207,15 +237,18 @@ function connectEachMat(
   driveSpans: Float64Array,
   senseAmps: Int32Array,
   drivers: Int32Array,
-): void {
+): number {
   const tol = ABUTMENT_TOLERANCE;
   const negativeTol = NEGATIVE_TOLERANCE;
-  for (let at = 0, k = 0; at < blockCount; at++) {
+  let k = firstMat;
+  let handed = 0;
+  for (let at = from; at < to; at++) {
     if (type[at] !== MAT_CODE) continue;
     const kind = kindOf[at] as number;
     position[k] = at;
     if (open[kind] === 1) {
       connectMatAlone(table, at, neighbours, serving, k, out, true);
+      handed++;
       k++;
       continue;
     }
@@ -314,6 +347,7 @@ function connectEachMat(
     }
     if (alone) {
       connectMatAlone(table, at, neighbours, serving, k, out, false);
+      handed++;
       k++;
       continue;
     }
@@ -322,28 +356,29 @@ function connectEachMat(
     // tolerance of its end is covered as one part: uncoveredLineCount would find no gap (sorted, every
     // span merges into the first part, which starts at most a tolerance in and ends at most one short).
     // Otherwise it counts.
-    const unsensed =
-      senseCount > 0 && !senseStartsLate && senseReaches
-        ? 0
-        : uncoveredLineCount(
-            senseSpans,
-            senseCount,
-            kinds.senseEdge[kind] as number,
-            tol,
-            kinds.bitlinePitch[kind] as number,
-            kinds.bitlineCount[kind] as number,
-          );
-    const undriven =
-      driveCount > 0 && !driveStartsLate && driveReaches
-        ? 0
-        : uncoveredLineCount(
-            driveSpans,
-            driveCount,
-            kinds.driveEdge[kind] as number,
-            tol,
-            kinds.wordlinePitch[kind] as number,
-            kinds.wordlineCount[kind] as number,
-          );
+    const senseWhole = senseCount > 0 && !senseStartsLate && senseReaches;
+    const driveWhole = driveCount > 0 && !driveStartsLate && driveReaches;
+    if (!senseWhole || !driveWhole) handed++;
+    const unsensed = senseWhole
+      ? 0
+      : uncoveredLineCount(
+          senseSpans,
+          senseCount,
+          kinds.senseEdge[kind] as number,
+          tol,
+          kinds.bitlinePitch[kind] as number,
+          kinds.bitlineCount[kind] as number,
+        );
+    const undriven = driveWhole
+      ? 0
+      : uncoveredLineCount(
+          driveSpans,
+          driveCount,
+          kinds.driveEdge[kind] as number,
+          tol,
+          kinds.wordlinePitch[kind] as number,
+          kinds.wordlineCount[kind] as number,
+        );
     unsensedBitlines[k] = unsensed;
     undrivenWordlines[k] = undriven;
     servedKey[k] = unsensed === 0 && undriven === 0 ? servedFiguresKey(kind, first + second) : -1;
@@ -351,4 +386,6 @@ function connectEachMat(
     unpartneredBitlines[k] = 0;
     k++;
   }
+  apart[0] = handed;
+  return k;
 }
