@@ -36,6 +36,8 @@ export function bandedNeighbourTable(
   groupOf: Uint8Array,
   /** When to leave it to the grid (tests lift them to run the banded pass on any boxes). */
   limits: BandLimits = BAND_LIMITS,
+  /** What makes the rows from the walks (tests pass an oracle). */
+  rows: typeof rowsByRun = rowsByRun,
 ): NeighbourTable | null {
   const n = boxes.count;
   if (n < 2 || !(margin >= 0)) return null;
@@ -52,7 +54,7 @@ export function bandedNeighbourTable(
   const sink = new PairSink(n);
   const walks = new RunWalks(walked.length);
   walkRunPairs(boxes, margin, runs, group, walked, sink, walks, limits.repeatWalks);
-  return rowsByRun(runs, walks, sink, n, margin);
+  return rows(runs, walks, sink, n, margin);
 }
 
 function runGroups(runs: BlockRuns, groupOf: Uint8Array): Uint8Array {

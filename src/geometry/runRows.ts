@@ -1,5 +1,6 @@
 import type { BlockRuns } from './blockRuns';
-import { NeighbourRows, runningTotals, type NeighbourTable } from './neighbourRows';
+import { copyRows, rowPattern } from './copiedRows';
+import { NeighbourRows, type NeighbourTable } from './neighbourRows';
 import type { PairSink } from './orderedPairs';
 import { ScratchBuffer } from './scratchBuffer';
 
@@ -26,7 +27,7 @@ export class RunWalks {
 }
 
 /** Reused between calls (see ScratchBuffer); none of these leave this module. */
-const SCRATCH = { cursor: new ScratchBuffer(), runOf: new ScratchBuffer() };
+const SCRATCH = { cursor: new ScratchBuffer() };
 
 /**
  * The rows of the pairs the walks found, run by run. A run's rows take their neighbours from the walks
@@ -49,12 +50,12 @@ export function rowsByRun(
   const by = walksByRun(walks, taken);
   const model = modelRuns(runs, walks, taken, by);
   const end = new Int32Array(n + 1);
-  rowLengths(runs, walks, sink, taken, by, model, end);
-  const total = runningTotals(end, n);
+  const total = rowLengths(runs, walks, sink, taken, by, model, end);
+  end[n] = total;
+  const list = new Int32Array(total);
+  fillRuns(runs, walks, sink, taken, by, model, end, list);
   const rowStart = new Int32Array(n);
   rowStart.set(end.subarray(0, n - 1), 1);
-  const list = new Int32Array(total);
-  fillRuns(runs, walks, sink, taken, by, model, rowStart, end, list);
   const partners = new Int32Array(by.length);
   for (let e = 0; e < by.length; e++) partners[e] = partnerOf(walks, by[e] as number);
   return new NeighbourRows(
@@ -127,7 +128,10 @@ function modelRuns(runs: BlockRuns, walks: RunWalks, taken: Int32Array, by: Int3
   return model;
 }
 
-/** Each box's number of neighbours into `degree`: counted for a model run, copied for the others. */
+/**
+ * Each box of a model run's number of neighbours into `degree` (the other runs' are left to their
+ * models'); returns the number of neighbours of all boxes (a run has as many as its model).
+ */
 function rowLengths(
   runs: BlockRuns,
   walks: RunWalks,
@@ -136,30 +140,32 @@ function rowLengths(
   by: Int32Array,
   model: Int32Array,
   degree: Int32Array,
-): void {
-  const start = runs.start;
+): number {
+  const size = new Int32Array(runs.count);
+  let total = 0;
   for (let r = 0; r < runs.count; r++) {
     const m = model[r] as number;
-    if (m !== r) {
-      degree.set(degree.subarray(start[m] as number, start[m + 1] as number), start[r] as number);
-      continue;
+    if (m === r) {
+      for (let e = taken[r] as number; e < (taken[r + 1] as number); e++) {
+        const w = by[e] as number;
+        const t = walks.template[w >> 1] as number;
+        const from = walks.from[t] as number;
+        const to = walks.to[t] as number;
+        const shift = shiftOf(runs, walks, w >> 1, t, (w & 1) === 1);
+        countPairs(degree, w & 1 ? sink.second : sink.first, from, to, shift);
+        size[r] = (size[r] as number) + to - from;
+      }
     }
-    for (let e = taken[r] as number; e < (taken[r + 1] as number); e++) {
-      const w = by[e] as number;
-      const t = walks.template[w >> 1] as number;
-      const shift = shiftOf(runs, walks, w >> 1, t, (w & 1) === 1);
-      countPairs(
-        degree,
-        w & 1 ? sink.second : sink.first,
-        walks.from[t] as number,
-        walks.to[t] as number,
-        shift,
-      );
-    }
+    total += size[m] as number;
   }
+  return total;
 }
 
-/** The rows of every run: a model run's from its walks' pairs, every other run's from its model's. */
+/**
+ * The rows of every run, in run order (rows follow each other in `list` in block order): a model run's
+ * ends are the running totals of its degrees (in `end`, from rowLengths) and its rows are filled from its
+ * walks' pairs; every other run's ends and rows are its model's, moved (copiedRows.ts).
+ */
 function fillRuns(
   runs: BlockRuns,
   walks: RunWalks,
@@ -167,21 +173,28 @@ function fillRuns(
   taken: Int32Array,
   by: Int32Array,
   model: Int32Array,
-  rowStart: Int32Array,
   end: Int32Array,
   list: Int32Array,
 ): void {
   const { start, count } = runs;
-  const cursor = SCRATCH.cursor.take(rowStart.length);
-  cursor.set(rowStart);
-  const runOf = SCRATCH.runOf.take(rowStart.length);
-  for (let r = 0; r < count; r++) runOf.fill(r, start[r] as number, start[r + 1] as number);
-  const partnerShift = new Int32Array(count);
+  const cursor = SCRATCH.cursor.take(end.length);
+  // Per run, at most as many partners as walks.
+  const shifts = new Int32Array(by.length);
+  const partnerFrom = new Int32Array(by.length);
+  const partnerTo = new Int32Array(by.length);
+  const patterns = new Map<number, Int32Array>();
+  let at = 0;
   for (let r = 0; r < count; r++) {
     const m = model[r] as number;
     const first = taken[r] as number;
     const last = taken[r + 1] as number;
+    const blocksFrom = start[r] as number;
+    const blocksTo = start[r + 1] as number;
     if (m === r) {
+      // Where each row begins, where the filling of each row stands.
+      cursor[blocksFrom] = at;
+      at = runningEnds(end, blocksFrom, blocksTo, at);
+      cursor.set(end.subarray(blocksFrom, blocksTo - 1), blocksFrom + 1);
       for (let e = first; e < last; e++) {
         const w = by[e] as number;
         const k = w >> 1;
@@ -200,16 +213,43 @@ function fillRuns(
       }
       continue;
     }
-    // The model's partner runs, each with how far this run's partner in the same place lies from it.
-    for (let e = first, f = taken[m] as number; e < last; e++, f++) {
-      const partner = partnerOf(walks, by[f] as number);
-      partnerShift[partner] =
-        (start[partnerOf(walks, by[e] as number)] as number) - (start[partner] as number);
+    const modelFrom = start[m] as number;
+    const from = modelFrom > 0 ? (end[modelFrom - 1] as number) : 0;
+    let pattern = patterns.get(m);
+    if (!pattern) {
+      for (let f = taken[m] as number, k = 0; f < (taken[m + 1] as number); f++, k++) {
+        const partner = partnerOf(walks, by[f] as number);
+        partnerFrom[k] = start[partner] as number;
+        partnerTo[k] = start[partner + 1] as number;
+      }
+      pattern = rowPattern(
+        list,
+        end,
+        modelFrom,
+        start[m + 1] as number,
+        partnerFrom,
+        partnerTo,
+        last - first,
+      );
+      patterns.set(m, pattern);
     }
-    const from = rowStart[start[m] as number] as number;
-    const to = end[(start[m + 1] as number) - 1] as number;
-    copyShifted(list, runOf, partnerShift, from, to, (rowStart[start[r] as number] as number) - from);
+    // How far each of this run's partner runs lies from the model's in the same place.
+    for (let e = first, f = taken[m] as number, k = 0; e < last; e++, f++, k++)
+      shifts[k] =
+        (start[partnerOf(walks, by[e] as number)] as number) -
+        (start[partnerOf(walks, by[f] as number)] as number);
+    at = copyRows(list, end, pattern, shifts, from, at, blocksFrom);
   }
+}
+
+/** Turns the degrees of boxes from … to − 1 (in `end`) into where their rows end, rows from `at` on. */
+function runningEnds(end: Int32Array, from: number, to: number, at: number): number {
+  let sum = at;
+  for (let i = from; i < to; i++) {
+    sum += end[i] as number;
+    end[i] = sum;
+  }
+  return sum;
 }
 
 /** The run on side w & 1 of walk w >> 1. */
@@ -252,20 +292,5 @@ function fillRows(
     const at = cursor[i] as number;
     list[at] = (other[p] as number) + shiftOther;
     cursor[i] = at + 1;
-  }
-}
-
-/** Neighbours from … to − 1 copied `offset` further on, each shifted by its run's partner shift. */
-function copyShifted(
-  list: Int32Array,
-  runOf: Int32Array,
-  partnerShift: Int32Array,
-  from: number,
-  to: number,
-  offset: number,
-): void {
-  for (let p = from; p < to; p++) {
-    const j = list[p] as number;
-    list[p + offset] = j + (partnerShift[runOf[j] as number] as number);
   }
 }
