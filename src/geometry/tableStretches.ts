@@ -75,13 +75,13 @@ export function writeRows(
   // Strips come in runs of one type: the last type's code likewise.
   let runType: BlockType | null = null;
   let runCode = -1;
-  // How many blocks the last continuation of mats (of strips) took: the next one looks no further. The
-  // rows of a tiled array have one length, so a continuation ends with its row and never reads the
-  // first block of another kind after it (V8 would throw away the loop it compiled for mats at the
-  // first strip it met there).
+  // The most blocks a continuation of mats (of strips) took so far, 0 before the first: later ones look
+  // no further. The rows of a tiled array have one length, so a continuation ends with its row and does
+  // not read the first block of another kind after it (V8 would throw away the loop it compiled for mats
+  // at the first strip it met there).
   const n = blocks.length;
-  let matRun = n;
-  let stripRun = n;
+  let matRun = 0;
+  let stripRun = 0;
   for (let i = 0; i < n;) {
     const block = blocks[i] as Block;
     const x = block.x;
@@ -166,18 +166,18 @@ export function writeRows(
     i++;
     // The blocks after it in its stretch, as long as none starts left of the one before: none of them
     // moves the left bound (they start at or right of this block), and the last ends furthest right
-    // (x + w rounds monotonically). A top edge of 0 stays with this loop (0 and −0 compare equal, and
-    // each block keeps its own), so does a zero size (a stretch of its own) and a footprint.
-    if (w === 0 || h === 0 || y === 0) continue;
+    // (x + w rounds monotonically). A zero size stays with this loop (a stretch of its own), so does a
+    // footprint.
+    if (w === 0 || h === 0) continue;
     let end = i;
     if (code !== MAT_CODE) {
-      end = moreStrips(blocks, i, Math.min(i + stripRun, n), xs, x, y, w, h, runType);
-      stripRun = end - i;
+      end = moreStrips(blocks, i, stripRun > 0 ? Math.min(i + stripRun, n) : n, xs, x, y, w, h, runType);
+      if (end - i > stripRun) stripRun = end - i;
     } else if (!lastFootprint) {
       end = moreMats(
         blocks,
         i,
-        Math.min(i + matRun, n),
+        matRun > 0 ? Math.min(i + matRun, n) : n,
         xs,
         x,
         y,
@@ -186,8 +186,10 @@ export function writeRows(
         lastPerWordline,
         lastAxis,
       );
-      matRun = end - i;
+      if (end - i > matRun) matRun = end - i;
     }
+    // 0 and −0 compare equal: the top edges take the first one's bits only where they have its sign.
+    if (y === 0) end = sameZero(blocks, i, end, 1 / y);
     if (end === i) continue;
     ys.fill(y, i, end);
     const lastX = xs[end - 1] as number;
@@ -203,10 +205,17 @@ export function writeRows(
   return count;
 }
 
+/** Where blocks from … to − 1 (top edges ±0) stop having the top edge whose reciprocal is `sign` (±∞). */
+function sameZero(blocks: readonly Block[], from: number, to: number, sign: number): number {
+  let i = from;
+  while (i < to && 1 / (blocks[i] as Block).y === sign) i++;
+  return i;
+}
+
 /**
- * From block `from` on (to `to` at most), the mats of the cell, counts and axis given (no footprint) at top edge `y`
- * (≠ 0), each starting at or right of the one before (the first at or right of `x`): writes their left
- * edges and returns where they end. Their top edges are `y`'s bits (equal and not zero).
+ * From block `from` on (to `to` at most), the mats of the cell, counts and axis given (no footprint) at
+ * top edge `y` (compared as numbers), each starting at or right of the one before (the first at or right
+ * of `x`): writes their left edges and returns where they end.
  */
 function moreMats(
   blocks: readonly Block[],
@@ -243,8 +252,8 @@ function moreMats(
 }
 
 /**
- * From block `from` on (to `to` at most), the strips of type `type` (not a mat) at top edge `y` (≠ 0) of width `w` and
- * height `h`, each starting at or right of the one before (the first at or right of `x`): writes their
+ * From block `from` on (to `to` at most), the strips of type `type` (not a mat) at top edge `y` (compared
+ * as numbers) of width `w` and height `h`, each starting at or right of the one before (the first at or right of `x`): writes their
  * left edges and returns where they end.
  */
 function moreStrips(

@@ -60,7 +60,7 @@ const rowsFloorplan = fc
       odd: fc.array(
         fc.record({
           at: fc.nat(),
-          what: fc.constantFrom('y', 'kind', 'type', 'width', 'height', 'axis', 'cell', 'footprint'),
+          what: fc.constantFrom('y', 'zero', 'kind', 'type', 'width', 'height', 'axis', 'cell', 'footprint'),
         }),
         { maxLength: 2 },
       ),
@@ -92,11 +92,14 @@ const rowsFloorplan = fc
         const i = at % placed.length;
         const b = placed[i] as Block;
         if (what === 'y') placed[i] = { ...b, y: b.y + MICRON };
+        // A top edge of 0 beside −0 (or the other way round) in one row.
+        else if (what === 'zero') placed[i] = { ...b, y: b.y === 0 ? (Object.is(b.y, 0) ? -0 : 0) : b.y };
         else if (b.type === 'mat') {
           if (what === 'kind') placed[i] = { ...b, cellsPerWordline: 128 };
           else if (what === 'axis') placed[i] = { ...b, bitlineAxis: 'horizontal' };
           else if (what === 'cell') placed[i] = { ...b, cellId: BUILTIN_CELLS[2]?.id ?? b.cellId };
-          else if (what === 'footprint') placed[i] = { ...b, footprint: { width: 9 * MICRON, height: 9 * MICRON } };
+          else if (what === 'footprint')
+            placed[i] = { ...b, footprint: { width: 9 * MICRON, height: 9 * MICRON } };
           else placed[i] = strip(b.id, 'spacer', b.x, b.y, MICRON, MICRON);
         } else if (what === 'type') placed[i] = { ...b, type: 'rowDecoder' };
         else if (what === 'width') placed[i] = { ...b, width: b.width + MICRON };
