@@ -47,17 +47,17 @@ export function rowsByRun(
   margin: number,
 ): NeighbourTable {
   const taken = new Int32Array(runs.count + 1);
-  const by = walksByRun(walks, taken);
+  const by = new Int32Array(2 * walks.count);
+  const partners = new Int32Array(2 * walks.count);
+  walksByRun(walks, taken, by, partners);
   const model = modelRuns(runs, walks, taken, by);
   const end = new Int32Array(n + 1);
   const total = rowLengths(runs, walks, sink, taken, by, model, end);
   end[n] = total;
   const list = new Int32Array(total);
-  fillRuns(runs, walks, sink, taken, by, model, end, list);
+  fillRuns(runs, walks, sink, taken, by, partners, model, end, list);
   const rowStart = new Int32Array(n);
   rowStart.set(end.subarray(0, n - 1), 1);
-  const partners = new Int32Array(by.length);
-  for (let e = 0; e < by.length; e++) partners[e] = partnerOf(walks, by[e] as number);
   return new NeighbourRows(
     rowStart,
     end,
@@ -88,24 +88,31 @@ export class RunCopies {
 }
 
 /**
- * Each run's walks in key order, as walk · 2 + side (0: the walk's first run, 1: its second): run r's
- * are entries `taken[r]` … `taken[r + 1] − 1` of the list returned.
+ * Each run's walks in key order, as walk · 2 + side (0: the walk's first run, 1: its second), into `by`,
+ * and the run across each into `partners`: run r's are entries `taken[r]` … `taken[r + 1] − 1`.
  */
-function walksByRun(walks: RunWalks, taken: Int32Array): Int32Array {
-  const sides = 2 * walks.count;
-  for (let w = 0; w < sides; w++) {
-    const r = runOfSide(walks, w) + 1;
-    taken[r] = (taken[r] as number) + 1;
+function walksByRun(walks: RunWalks, taken: Int32Array, by: Int32Array, partners: Int32Array): void {
+  const { first, second, count } = walks;
+  for (let k = 0; k < count; k++) {
+    const a = (first[k] as number) + 1;
+    const b = (second[k] as number) + 1;
+    taken[a] = (taken[a] as number) + 1;
+    taken[b] = (taken[b] as number) + 1;
   }
   for (let r = 1; r < taken.length; r++) taken[r] = (taken[r] as number) + (taken[r - 1] as number);
-  const by = new Int32Array(sides);
   const fill = taken.slice(0, taken.length - 1);
-  for (let w = 0; w < sides; w++) {
-    const r = runOfSide(walks, w);
-    by[fill[r] as number] = w;
-    fill[r] = (fill[r] as number) + 1;
+  for (let k = 0; k < count; k++) {
+    const a = first[k] as number;
+    const b = second[k] as number;
+    const atA = fill[a] as number;
+    by[atA] = 2 * k;
+    partners[atA] = b;
+    fill[a] = atA + 1;
+    const atB = fill[b] as number;
+    by[atB] = 2 * k + 1;
+    partners[atB] = a;
+    fill[b] = atB + 1;
   }
-  return by;
 }
 
 /**
@@ -113,19 +120,44 @@ function walksByRun(walks: RunWalks, taken: Int32Array): Int32Array {
  * the same side in the same order.
  */
 function modelRuns(runs: BlockRuns, walks: RunWalks, taken: Int32Array, by: Int32Array): Int32Array {
-  const model = new Int32Array(runs.count);
-  const kinds = new Map<string, number>();
-  for (let r = 0; r < runs.count; r++) {
-    let key = `${runs.layout[r] as number}`;
-    for (let e = taken[r] as number; e < (taken[r + 1] as number); e++) {
-      const w = by[e] as number;
-      key += `,${2 * (walks.template[w >> 1] as number) + (w & 1)}`;
+  const { count, layout } = runs;
+  const model = new Int32Array(count);
+  // Each entry's walk as the walk it repeats and the side; the models of each layout, latest first.
+  const repeats = new Int32Array(by.length);
+  for (let e = 0; e < by.length; e++) {
+    const w = by[e] as number;
+    repeats[e] = 2 * (walks.template[w >> 1] as number) + (w & 1);
+  }
+  const latest = new Int32Array(runs.layouts).fill(-1);
+  const before = new Int32Array(count);
+  for (let r = 0; r < count; r++) {
+    let m = latest[layout[r] as number] as number;
+    while (
+      m >= 0 &&
+      !sameEntries(
+        repeats,
+        taken[m] as number,
+        taken[m + 1] as number,
+        taken[r] as number,
+        taken[r + 1] as number,
+      )
+    )
+      m = before[m] as number;
+    if (m < 0) {
+      m = r;
+      before[r] = latest[layout[r] as number] as number;
+      latest[layout[r] as number] = r;
     }
-    const known = kinds.get(key);
-    if (known === undefined) kinds.set(key, r);
-    model[r] = known ?? r;
+    model[r] = m;
   }
   return model;
+}
+
+/** Whether entries a … a1 − 1 and b … b1 − 1 of `values` are equal, one by one. */
+function sameEntries(values: Int32Array, a: number, a1: number, b: number, b1: number): boolean {
+  if (a1 - a !== b1 - b) return false;
+  for (let k = 0; k < a1 - a; k++) if (values[a + k] !== values[b + k]) return false;
+  return true;
 }
 
 /**
@@ -172,6 +204,7 @@ function fillRuns(
   sink: PairSink,
   taken: Int32Array,
   by: Int32Array,
+  partners: Int32Array,
   model: Int32Array,
   end: Int32Array,
   list: Int32Array,
@@ -218,7 +251,7 @@ function fillRuns(
     let pattern = patterns.get(m);
     if (!pattern) {
       for (let f = taken[m] as number, k = 0; f < (taken[m + 1] as number); f++, k++) {
-        const partner = partnerOf(walks, by[f] as number);
+        const partner = partners[f] as number;
         partnerFrom[k] = start[partner] as number;
         partnerTo[k] = start[partner + 1] as number;
       }
@@ -235,9 +268,7 @@ function fillRuns(
     }
     // How far each of this run's partner runs lies from the model's in the same place.
     for (let e = first, f = taken[m] as number, k = 0; e < last; e++, f++, k++)
-      shifts[k] =
-        (start[partnerOf(walks, by[e] as number)] as number) -
-        (start[partnerOf(walks, by[f] as number)] as number);
+      shifts[k] = (start[partners[e] as number] as number) - (start[partners[f] as number] as number);
     at = copyRows(list, end, pattern, shifts, from, at, blocksFrom);
   }
 }
@@ -250,16 +281,6 @@ function runningEnds(end: Int32Array, from: number, to: number, at: number): num
     end[i] = sum;
   }
   return sum;
-}
-
-/** The run on side w & 1 of walk w >> 1. */
-function runOfSide(walks: RunWalks, w: number): number {
-  return (w & 1 ? walks.second[w >> 1] : walks.first[w >> 1]) as number;
-}
-
-/** The other run of walk w >> 1 than the one its side w & 1 names. */
-function partnerOf(walks: RunWalks, w: number): number {
-  return runOfSide(walks, w ^ 1);
 }
 
 /** How far walk k's run on a side starts from its template t's run on that side (second: side 1). */
