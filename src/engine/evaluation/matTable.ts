@@ -23,6 +23,24 @@ export interface MatTable {
   readonly undrivenWordlines: Int32Array;
   readonly servingPositions: Int32Array;
   readonly servingOffsets: Int32Array;
+  /** What the connection pass knows of the serving lists of whole runs of mats, when it worked by runs. */
+  readonly runLists?: RunLists | null;
+}
+
+/**
+ * Serving lists of runs of mats laid out alike (servedRuns.ts), per block run r of the table the report
+ * was evaluated from (geometry/blockRuns.ts): when `regular[r]` is 1, mat `firstMat[r]` + i is the block
+ * at runs.start[r] + i, and it has as many sense-amplifier strips and as many drivers as mat firstMat[r],
+ * each the one in the same place of mat firstMat[r]'s lists plus i. 0 promises nothing.
+ */
+export class RunLists {
+  readonly regular: Uint8Array;
+  readonly firstMat: Int32Array;
+
+  constructor(runs: number) {
+    this.regular = new Uint8Array(runs);
+    this.firstMat = new Int32Array(runs);
+  }
 }
 
 /** Id of mat k. */
@@ -118,6 +136,7 @@ class FilledMatTable implements MatTable {
     readonly undrivenWordlines: Int32Array,
     readonly servingPositions: Int32Array,
     readonly servingOffsets: Int32Array,
+    readonly runLists: RunLists | null,
   ) {}
 }
 
@@ -181,6 +200,8 @@ export class MatTableBuilder {
   private readonly undriven: Int32Array;
   /** The mats' serving strips. */
   readonly serving: ServingLists;
+  /** Set by a connection pass that works by runs (servedRuns.ts). */
+  runLists: RunLists | null = null;
   private lastFigures: MatFigures | null = null;
   private lastIndex = -1;
 
@@ -288,6 +309,7 @@ export class MatTableBuilder {
       this.undriven,
       this.serving.positions.subarray(0, this.serving.used),
       this.serving.offsets,
+      this.runLists,
     );
   }
 }

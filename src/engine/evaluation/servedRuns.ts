@@ -8,7 +8,7 @@ import {
 import type { BlockRuns } from '../../geometry/blockRuns';
 import type { NeighbourTable } from '../../geometry/neighbourRows';
 import type { RunCopies } from '../../geometry/runRows';
-import type { MatTableBuilder, ServingLists } from './matTable';
+import { RunLists, type MatTableBuilder, type ServingLists } from './matTable';
 import { runPairCode } from './runPairCode';
 import { connectMatsIn, KindLines, ServedLines } from './servedLines';
 
@@ -72,16 +72,24 @@ class WalkedRuns {
   readonly shift: Int32Array;
   /** Per partner entry of a model: its run pair's code (−1: not found yet). */
   readonly modelCodes: Int32Array;
+  /** Per model: 1 when copies of it have regular lists (see RunLists) as it has. */
+  readonly inherits: Uint8Array;
   /** Each block's run, once a copy shifts serving strips. */
   runOf: Int32Array | null = null;
 
-  constructor(runs: number, partners: number) {
+  constructor(
+    runs: number,
+    partners: number,
+    readonly lists: RunLists,
+  ) {
     this.firstMat = new Int32Array(runs);
     this.firstServing = new Int32Array(runs);
     this.lastServing = new Int32Array(runs);
-    this.copying = new Uint8Array(runs);
+    // A run not walked on its own (its model another, or not a run of mats) is no model.
+    this.copying = new Uint8Array(runs).fill(NOT_COPIED);
     this.shift = new Int32Array(runs);
     this.modelCodes = new Int32Array(partners).fill(-1);
+    this.inherits = new Uint8Array(runs);
   }
 }
 
@@ -96,7 +104,8 @@ function connectRunMats(
 ): void {
   const { start, code } = runs;
   const model = copies.model;
-  const walked = new WalkedRuns(runs.count, copies.partners.length);
+  const walked = new WalkedRuns(runs.count, copies.partners.length, new RunLists(runs.count));
+  serving.runLists = walked.lists;
   const lists = serving.serving;
   // Blocks from `pending` on wait to be walked (runs that no copy will read are walked together).
   let pending = 0;
@@ -141,7 +150,7 @@ function mayCopy(
 ): boolean {
   const { start, code } = runs;
   if (walked.copying[m] === UNKNOWN)
-    walked.copying[m] = modelCopying(table, neighbours, runs, walked, lists, m);
+    walked.copying[m] = modelCopying(table, neighbours, runs, copies, walked, lists, m);
   if (walked.copying[m] === NOT_COPIED) return false;
   const kind = table.kindOf[start[m] as number] as number;
   if (table.kinds.length > 1 && !oneKind(table.kindOf, kind, start[r] as number, start[r + 1] as number))
@@ -183,6 +192,7 @@ function modelCopying(
   table: BlockTable,
   neighbours: NeighbourTable,
   runs: BlockRuns,
+  copies: RunCopies,
   walked: WalkedRuns,
   lists: ServingLists,
   m: number,
@@ -190,6 +200,10 @@ function modelCopying(
   const from = runs.start[m] as number;
   const to = runs.start[m + 1] as number;
   if (!oneKind(table.kindOf, table.kindOf[from] as number, from, to)) return NOT_COPIED;
+  const regular = regularLists(runs, copies, walked, lists, m);
+  walked.lists.regular[m] = regular === 0 ? 0 : 1;
+  walked.lists.firstMat[m] = walked.firstMat[m] as number;
+  walked.inherits[m] = regular === 2 ? 1 : 0;
   const { start, end, list } = neighbours;
   const { positions, offsets } = lists;
   const firstMat = walked.firstMat[m] as number;
@@ -201,6 +215,44 @@ function modelCopying(
     for (let q = row; q < (end[at] as number); q++, p++) if (positions[p] !== list[q]) return SHIFTED;
   }
   return ROWS;
+}
+
+/**
+ * Whether walked run m's serving lists are regular (see RunLists): 1, or 2 when besides each strip of
+ * its first mat and the one as many places on as the run has mats (less one) lie in one partner run, so
+ * that a copy's lists, shifted per partner run, are regular too; 0 when they are not.
+ */
+function regularLists(
+  runs: BlockRuns,
+  copies: RunCopies,
+  walked: WalkedRuns,
+  lists: ServingLists,
+  m: number,
+): number {
+  const { start } = runs;
+  const { positions, offsets } = lists;
+  const length = (start[m + 1] as number) - (start[m] as number);
+  const first = walked.firstMat[m] as number;
+  const base = offsets[3 * first] as number;
+  const senseAmps = (offsets[3 * first + 1] as number) - base;
+  const count = (offsets[3 * first + 2] as number) - base;
+  for (let c = 1; c < length; c++) {
+    const at = offsets[3 * (first + c)] as number;
+    if ((offsets[3 * (first + c) + 1] as number) - at !== senseAmps) return 0;
+    if ((offsets[3 * (first + c) + 2] as number) - at !== count) return 0;
+    for (let s = 0; s < count; s++) if (positions[at + s] !== (positions[base + s] as number) + c) return 0;
+  }
+  const { partners, partnersFrom } = copies;
+  for (let s = 0; s < count; s++) {
+    const e = positions[base + s] as number;
+    let inOne = false;
+    for (let q = partnersFrom[m] as number; q < (partnersFrom[m + 1] as number); q++) {
+      const p = partners[q] as number;
+      if ((start[p] as number) <= e && e + length <= (start[p + 1] as number)) inOne = true;
+    }
+    if (!inOne) return 1;
+  }
+  return 2;
 }
 
 /** Run r's mats (the first of them mat k) as model m's, their serving strips after the used ones. */
@@ -218,6 +270,8 @@ function copyRun(
   const to = runs.start[r + 1] as number;
   const length = to - from;
   const firstMat = walked.firstMat[m] as number;
+  walked.lists.regular[r] = walked.inherits[m] as number;
+  walked.lists.firstMat[r] = k;
   for (let c = 0; c < length; c++) out.position[k + c] = from + c;
   out.unsensedBitlines.copyWithin(k, firstMat, firstMat + length);
   out.undrivenWordlines.copyWithin(k, firstMat, firstMat + length);
