@@ -170,9 +170,14 @@ function classifyBands(
   }
 }
 
-/** Whether words a … a + length − 1 equal words b … b + length − 1. */
+/**
+ * Whether words a … a + length − 1 equal words b … b + length − 1 (length even: the words of doubles, two
+ * compared per step, which saves the interpreter half of the loop's own bytecodes).
+ */
 function sameWords(words: Int32Array, a: number, b: number, length: number): boolean {
-  for (let k = 0; k < length; k++) if (words[a + k] !== words[b + k]) return false;
+  const end = a + length;
+  for (let p = a, q = b; p < end; p += 2, q += 2)
+    if (words[p] !== words[q] || words[p + 1] !== words[q + 1]) return false;
   return true;
 }
 

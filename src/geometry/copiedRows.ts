@@ -117,7 +117,11 @@ export function copyRows(
   return at + (pattern[0] as number);
 }
 
-/** `value`, `value + step`, … into `into[from]`, `into[from + stride]`, … below `to`. */
+/**
+ * `value`, `value + step`, … into `into[from]`, `into[from + stride]`, … below `to`, two per step (fewer
+ * of the loop's own bytecodes in the interpreter; the last step may have one only, tested in the loop so
+ * that no store lies outside it).
+ */
 function stepped(
   into: Int32Array,
   from: number,
@@ -127,8 +131,9 @@ function stepped(
   step: number,
 ): void {
   let v = value;
-  for (let p = from; p < to; p += stride) {
+  for (let p = from; p < to; p += 2 * stride) {
     into[p] = v;
-    v += step;
+    if (p + stride < to) into[p + stride] = v + step;
+    v += 2 * step;
   }
 }
