@@ -1,9 +1,9 @@
 import { FloorplanCanvas } from '../canvas/FloorplanCanvas';
 import { BlockOutline } from '../panels/outline/BlockOutline';
 import { SelectionAnnouncer } from './a11y/SelectionAnnouncer';
-import { lazy, Suspense } from 'react';
+import { lazy, Suspense, useEffect } from 'react';
+import { afterFirstPaint } from '../panels/afterFirstPaint';
 import { useEditorStore } from '../store/editorStore';
-import { BlockMenu } from './BlockMenu';
 import { StatusBar } from './StatusBar';
 import { ToolOptionsBar } from './ToolOptionsBar';
 import { ToolPalette } from './ToolPalette';
@@ -15,6 +15,16 @@ const ShortcutHelp = lazy(() => import('./ShortcutHelp').then((m) => ({ default:
 const StepRepeatDialog = lazy(() =>
   import('./StepRepeatDialog').then((m) => ({ default: m.StepRepeatDialog })),
 );
+
+// The block menu opens on a right-click or its keys: its code is fetched after the first paint.
+const DeferredBlockMenu = afterFirstPaint(() => import('./BlockMenu').then((m) => m.BlockMenu));
+const NO_PROPS = {};
+
+function BlockMenuWhenOpen() {
+  const open = useEditorStore((s) => s.contextMenu !== null);
+  useEffect(() => DeferredBlockMenu.preload(), []);
+  return open ? <DeferredBlockMenu.Render props={NO_PROPS} fallback={null} /> : null;
+}
 
 function Dialogs() {
   const help = useEditorStore((s) => s.helpOpen);
@@ -38,7 +48,7 @@ export function EditorColumn() {
       <FloorplanCanvas />
       <StatusBar />
       <SelectionAnnouncer />
-      <BlockMenu />
+      <BlockMenuWhenOpen />
       <Dialogs />
     </div>
   );
