@@ -10,6 +10,7 @@ import {
   senseAmpStripIdsOf,
 } from '../../src/engine/evaluation/matTable';
 import { demoDesign } from '../../src/designs/demoDesign';
+import { copyMat } from '../../src/engine/evaluation/matEvaluation';
 
 // The report's mats are columns; these checks pin the lookups the panels and exports use. Expected values
 // come from the demo design itself (16 mats in a 4 × 4 grid, ids "mat-r{row}c{column}").
@@ -40,7 +41,7 @@ describe('mat table', () => {
 
   it('copies mats of an earlier table unchanged, keeping their figures', () => {
     const builder = new MatTableBuilder(design.blocks, mats.count, mats.figures);
-    for (let k = 0; k < mats.count; k++) builder.copy(k, mats);
+    for (let k = 0; k < mats.count; k++) copyMat(builder, k, mats);
     const copy = builder.finish();
     expect(allMats(copy)).toEqual(allMats(mats));
     expect(Array.from({ length: 16 }, (_, k) => senseAmpStripIdsOf(copy, k))).toEqual(

@@ -4,7 +4,7 @@ import { emptyConnections, matConnections } from './connectivity';
 import type { DesignContext } from './designContext';
 import { figuresOfKind, recipes, servedFiguresKey, unservedFiguresKey } from './figureRecipes';
 import { matPhysics } from './matPhysics';
-import type { MatTableBuilder } from './matTable';
+import type { MatTable, MatTableBuilder } from './matTable';
 import type { MatFigures } from './report';
 
 /**
@@ -58,5 +58,50 @@ export function evaluateMatAt(
     figures = figuresOfKind(kindAt(table, at), c, ctx);
     figuresByKind?.set(key, figures);
   }
-  mats.set(k, at, figures, c.unsensedBitlines, c.undrivenWordlines);
+  setMat(mats, k, at, figures, c.unsensedBitlines, c.undrivenWordlines);
+}
+
+/** Records mat k: design position, figures, unserved lines. */
+function setMat(
+  mats: MatTableBuilder,
+  k: number,
+  position: number,
+  figures: MatFigures,
+  unsensed: number,
+  undriven: number,
+): void {
+  mats.position[k] = position;
+  mats.figureIndex[k] = mats.indexOfFigures(figures);
+  mats.unsensed[k] = unsensed;
+  mats.undriven[k] = undriven;
+}
+
+/**
+ * Records mat k as mat k of `earlier`, a table over the same blocks whose figures `mats` was built with,
+ * or with other figures (computed for other design-wide values) and the same position, lines and strips.
+ */
+export function copyMat(mats: MatTableBuilder, k: number, earlier: MatTable, figures?: MatFigures): void {
+  if (figures) {
+    setMat(
+      mats,
+      k,
+      earlier.position[k] ?? 0,
+      figures,
+      earlier.unsensedBitlines[k] ?? 0,
+      earlier.undrivenWordlines[k] ?? 0,
+    );
+  } else {
+    mats.position[k] = earlier.position[k] ?? 0;
+    mats.figureIndex[k] = earlier.figureIndex[k] ?? 0;
+    mats.unsensed[k] = earlier.unsensedBitlines[k] ?? 0;
+    mats.undriven[k] = earlier.undrivenWordlines[k] ?? 0;
+  }
+  const from = earlier.servingOffsets[3 * k] ?? 0;
+  const to = earlier.servingOffsets[3 * k + 2] ?? 0;
+  const serving = mats.serving;
+  const positions = serving.room(to - from);
+  const shift = serving.used - from;
+  for (let q = 3 * k; q < 3 * k + 3; q++) serving.offsets[q] = (earlier.servingOffsets[q] ?? 0) + shift;
+  positions.set(earlier.servingPositions.subarray(from, to), serving.used);
+  serving.used += to - from;
 }

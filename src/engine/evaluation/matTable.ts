@@ -183,21 +183,20 @@ export class ServingLists {
     this.offsets[3 * k + 2] = used;
     this.used = used;
   }
-
-  /** Appends one position (mat by mat, as {@link MatTableBuilder.copy} does). */
-  append(position: number): void {
-    this.room(1)[this.used++] = position;
-  }
 }
 
-/** Fills a mat table, mat by mat in any order, or by copying mats of an earlier table over the same blocks. */
+/**
+ * Fills a mat table: a whole die at once (evaluate.ts), or mat by mat in any order and by copying mats of
+ * an earlier table over the same blocks (the edit path, matEvaluation.ts).
+ */
 export class MatTableBuilder {
-  private readonly position: Int32Array;
-  private readonly figureIndex: Int32Array;
+  // Columns the edit path (matEvaluation.ts setMat, copyMat) fills mat by mat too.
+  readonly position: Int32Array;
+  readonly figureIndex: Int32Array;
   private readonly figures: MatFigures[];
   private readonly figureIndexOf: Map<MatFigures, number>;
-  private readonly unsensed: Float64Array;
-  private readonly undriven: Int32Array;
+  readonly unsensed: Float64Array;
+  readonly undriven: Int32Array;
   /** The mats' serving strips. */
   readonly serving: ServingLists;
   /** Set by a connection pass that works by runs (servedRuns.ts). */
@@ -220,14 +219,6 @@ export class MatTableBuilder {
     this.serving = new ServingLists(count);
   }
 
-  /** Records mat k: design position, figures, unserved lines. */
-  set(k: number, position: number, figures: MatFigures, unsensed: number, undriven: number): void {
-    this.position[k] = position;
-    this.figureIndex[k] = this.indexOfFigures(figures);
-    this.unsensed[k] = unsensed;
-    this.undriven[k] = undriven;
-  }
-
   /**
    * Records the design position and unserved lines of mats 0 … count − 1 at once (columns of at least
    * `count`); their figures follow with {@link setFigures}.
@@ -244,7 +235,7 @@ export class MatTableBuilder {
   }
 
   /** The index of `figures` in the table's list, added when new. */
-  private indexOfFigures(figures: MatFigures): number {
+  indexOfFigures(figures: MatFigures): number {
     // Mats in a row nearly always share their figures: the last answer saves a map lookup per mat.
     let index = figures === this.lastFigures ? this.lastIndex : this.figureIndexOf.get(figures);
     if (index === undefined) {
@@ -266,36 +257,6 @@ export class MatTableBuilder {
     driverCount: number,
   ): void {
     this.serving.set(k, senseAmps, senseAmpCount, drivers, driverCount);
-  }
-
-  /**
-   * Records mat k as mat k of `earlier`, a table over the same blocks built with `earlierFigures`, or with
-   * other figures (computed for other design-wide values) and the same position, lines and strips.
-   */
-  copy(k: number, earlier: MatTable, figures?: MatFigures): void {
-    if (figures) {
-      this.set(
-        k,
-        earlier.position[k] ?? 0,
-        figures,
-        earlier.unsensedBitlines[k] ?? 0,
-        earlier.undrivenWordlines[k] ?? 0,
-      );
-    } else {
-      this.position[k] = earlier.position[k] ?? 0;
-      this.figureIndex[k] = earlier.figureIndex[k] ?? 0;
-      this.unsensed[k] = earlier.unsensedBitlines[k] ?? 0;
-      this.undriven[k] = earlier.undrivenWordlines[k] ?? 0;
-    }
-    const a = earlier.servingOffsets[3 * k] ?? 0;
-    const b = earlier.servingOffsets[3 * k + 1] ?? 0;
-    const c = earlier.servingOffsets[3 * k + 2] ?? 0;
-    const serving = this.serving;
-    serving.offsets[3 * k] = serving.used;
-    for (let p = a; p < b; p++) serving.append(earlier.servingPositions[p] as number);
-    serving.offsets[3 * k + 1] = serving.used;
-    for (let p = b; p < c; p++) serving.append(earlier.servingPositions[p] as number);
-    serving.offsets[3 * k + 2] = serving.used;
   }
 
   finish(): MatTable {

@@ -12,7 +12,7 @@ import { layoutStateAfterEdit } from './layoutAfterEdit';
 import { layoutState, type LayoutState } from './layoutFindings';
 import { matIndexByPosition } from './decoderReach';
 import { designContext, evaluate, evaluationNeighbours } from './evaluate';
-import { evaluateMatAt, refigured } from './matEvaluation';
+import { copyMat, evaluateMatAt, refigured } from './matEvaluation';
 import { findPositionedOverlaps, overlapAreaAt, type PositionedOverlap } from './overlaps';
 import { rememberReportState, reportState } from './reportState';
 import type { MatFigures, Report } from './report';
@@ -208,10 +208,10 @@ export function previewReport(
         if (!after) return evaluate({ ...design, blocks: current.blocks.slice() });
         again.set(before, after);
       }
-      builder.copy(k, report.mats, after);
+      copyMat(builder, k, report.mats, after);
     }
   } else {
-    for (let k = 0; k < report.mats.count; k++) if (!redone.has(k)) builder.copy(k, report.mats);
+    for (let k = 0; k < report.mats.count; k++) if (!redone.has(k)) copyMat(builder, k, report.mats);
   }
   const mats = builder.finish();
   // Same mats under the same ids in the same order: the id lookup carries over.
