@@ -272,7 +272,6 @@ function copyRun(
   const firstMat = walked.firstMat[m] as number;
   walked.lists.regular[r] = walked.inherits[m] as number;
   walked.lists.firstMat[r] = k;
-  for (let c = 0; c < length; c++) out.position[k + c] = from + c;
   out.unsensedBitlines.copyWithin(k, firstMat, firstMat + length);
   out.undrivenWordlines.copyWithin(k, firstMat, firstMat + length);
   out.senseAmpEnds.copyWithin(k, firstMat, firstMat + length);
@@ -282,7 +281,7 @@ function copyRun(
   const count = (walked.lastServing[m] as number) - modelFrom;
   const used = lists.used;
   const positions = lists.room(count);
-  addTo(lists.offsets, 3 * firstMat, 3 * (firstMat + length), 3 * (k - firstMat), used - modelFrom);
+  placeMats(out.position, lists.offsets, k, from, length, firstMat, used - modelFrom);
   const { start, list } = neighbours;
   if (walked.copying[m] === ROWS) {
     positions.set(list.subarray(start[from] as number, (start[from] as number) + count), used);
@@ -293,9 +292,25 @@ function copyRun(
   lists.used = used + count;
 }
 
-/** values[from … to − 1] plus `add`, written `offset` further on. */
-function addTo(values: Int32Array, from: number, to: number, offset: number, add: number): void {
-  for (let q = from; q < to; q++) values[q + offset] = (values[q] as number) + add;
+/**
+ * Mats k … k + length − 1 are the blocks from `from` on, and their serving offsets those of mats
+ * `firstMat` … plus `add` (one loop: a loop of its own per column costs more in the interpreter).
+ */
+function placeMats(
+  position: Int32Array,
+  offsets: Int32Array,
+  k: number,
+  from: number,
+  length: number,
+  firstMat: number,
+  add: number,
+): void {
+  for (let c = 0, q = 3 * k, p = 3 * firstMat; c < length; c++, q += 3, p += 3) {
+    position[k + c] = from + c;
+    offsets[q] = (offsets[p] as number) + add;
+    offsets[q + 1] = (offsets[p + 1] as number) + add;
+    offsets[q + 2] = (offsets[p + 2] as number) + add;
+  }
 }
 
 /** Positions from … to − 1, each shifted by its run's shift, written `offset` further on. */
