@@ -3,7 +3,6 @@ import type { CellDefinition } from '../model/cell';
 import type { Design } from '../model/design';
 import { BLOCK_TYPE_CODES } from './blockCodes';
 import type { MatGeometry } from './matGeometry';
-import { matKindOf } from './matKinds';
 import type { Rect } from './rect';
 import { finishStretches, writeRows } from './tableStretches';
 
@@ -91,40 +90,11 @@ export interface TableInProgress extends BlockTable {
 export function blockTable(design: Design): BlockTable {
   const cells = new Map(design.cells.map((c) => [c.id, c]));
   const table = emptyTable(design.blocks, design.process.featureSize, cells);
-  const { x, y, width, height, type, kindOf, kinds, sums } = table;
-  // The first mat's kind is found here, not in the loop: a call made only on the loop's first pass has
-  // no type feedback yet, and the code V8 compiles for the loop would be thrown away at it on the next
-  // call (a new design brings a new first kind).
-  const first = design.blocks.find((b): b is Mat => b.type === 'mat') ?? null;
-  const firstKind = first ? matKindOf(table, first) : -1;
-  if (firstKind >= 0) sums.matsOfKind.push(0);
-  const firstGeometry = first ? (kinds[firstKind] as MatKind).geometry : null;
   const stretches = new Int32Array(design.blocks.length + 1);
-  const count = writeRows(
-    table,
-    design.blocks,
-    first?.cellId ?? '',
-    first?.cellsPerBitline ?? 0,
-    first?.cellsPerWordline ?? 0,
-    first?.bitlineAxis ?? 'vertical',
-    first?.footprint !== undefined,
-    firstKind,
-    firstGeometry?.width ?? 0,
-    firstGeometry?.height ?? 0,
-    x,
-    y,
-    width,
-    height,
-    type,
-    kindOf,
-    kinds,
-    sums.bounds,
-    sums.matsOfKind,
-    stretches,
-  );
+  const count = writeRows(table, stretches);
   stretches[count] = design.blocks.length;
   table.stretches = stretches.subarray(0, count + 1);
-  sums.placedArea = finishStretches(table, table.stretches, sums);
+  table.sums.placedArea = finishStretches(table, table.stretches, table.sums);
   return table;
 }
 

@@ -22,35 +22,14 @@ const NEAR = -Infinity;
  * after it that continue its stretch from left to right (the rest of a row of a tiled array) are taken by
  * {@link moreMats} or {@link moreStrips}, which read only what tells them apart: in the interpreter every
  * bytecode counts (a first evaluation runs here before V8 compiles anything), and a loop that runs fewer
- * of them is not compiled during that evaluation either. What the loop reads comes in as arguments
- * (DEVELOPERS.md, "Nothing before the hot loop either"). The last mat's cell and counts are kept in
- * locals: consecutive mats are nearly always of one kind, so the kind is looked up only when one changes.
+ * of them is not compiled during that evaluation either (this loop runs once per stretch, a few hundred
+ * times on a tiled die, so it reads the table itself; the continuations take what they read as
+ * arguments, DEVELOPERS.md "Nothing before the hot loop either"). The last mat's cell and counts are kept
+ * in locals: consecutive mats are nearly always of one kind, so the kind is looked up only when one changes.
  */
-export function writeRows(
-  table: TableInProgress,
-  blocks: readonly Block[],
-  /** The first mat's cell, counts, axis and whether it has a footprint ('' and 0 without mats). */
-  firstCell: string,
-  firstPerBitline: number,
-  firstPerWordline: number,
-  firstAxis: BitlineAxis,
-  firstFootprint: boolean,
-  /** The first mat's kind and that kind's size (m), found by the caller; −1 without mats. */
-  firstKind: number,
-  firstWidth: number,
-  firstHeight: number,
-  xs: Float64Array,
-  ys: Float64Array,
-  widths: Float64Array,
-  heights: Float64Array,
-  types: Uint8Array,
-  kindOf: Int32Array,
-  kinds: readonly MatKind[],
-  bounds: Float64Array,
-  matsOfKind: number[],
-  /** Where each stretch of blocks of one top edge, size, code and kind begins (see Boxes.stretches). */
-  stretches: Int32Array,
-): number {
+export function writeRows(table: TableInProgress, stretches: Int32Array): number {
+  const { blocks, x: xs, y: ys, width: widths, height: heights, type: types, kindOf, kinds } = table;
+  const { bounds, matsOfKind } = table.sums;
   let minX = FAR;
   let maxX = NEAR;
   // The top edge, size and code of the stretch so far: sizes are ≥ 0, so −1 matches none and the first
@@ -64,14 +43,16 @@ export function writeRows(
   // The box whose right edge is the far one so far: its left edge and width.
   let rightX = 0;
   let rightWidth = -1;
-  let lastCell = firstCell;
-  let lastPerBitline = firstPerBitline;
-  let lastPerWordline = firstPerWordline;
-  let lastAxis = firstAxis;
-  let lastFootprint = firstFootprint;
-  let lastKind = firstKind;
-  let lastWidth = firstWidth;
-  let lastHeight = firstHeight;
+  // The last mat's cell, counts, axis, kind and size; a footprint makes the next mat look its kind up,
+  // so the first one does.
+  let lastCell = '';
+  let lastPerBitline = 0;
+  let lastPerWordline = 0;
+  let lastAxis: BitlineAxis = 'vertical';
+  let lastFootprint = true;
+  let lastKind = -1;
+  let lastWidth = 0;
+  let lastHeight = 0;
   // Strips come in runs of one type: the last type's code likewise.
   let runType: BlockType | null = null;
   let runCode = -1;
