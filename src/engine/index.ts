@@ -109,16 +109,8 @@ export {
   type Severity,
   type Totals,
 } from './evaluation/report';
-export {
-  allMats,
-  figuresAt,
-  matAt,
-  matIdAt,
-  matIndexOf,
-  senseAmpStripIdsOf,
-  wordlineDriverIdsOf,
-  type MatTable,
-} from './evaluation/matTable';
+export { figuresAt, matAt, matIdAt, matIndexOf, type MatTable } from './evaluation/matTable';
+export { allMats, senseAmpStripIdsOf, wordlineDriverIdsOf } from './evaluation/matExports';
 
 // figures: the one catalogue
 export type { Explanation, ExplanationInput } from './figures/explanation';

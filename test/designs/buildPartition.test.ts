@@ -1,4 +1,4 @@
-import { allMats } from '../../src/engine/evaluation/matTable';
+import { allMats } from '../../src/engine/evaluation/matExports';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { buildPartition, partitionName } from '../../src/designs/buildPartition';
@@ -6,7 +6,7 @@ import { formatBits } from '../../src/model/units';
 import { gridExtent, losesEdgeBits, planPartition } from '../../src/designs/partitionPlan';
 import { evaluate } from '../../src/engine';
 import { findOverlaps } from '../../src/engine/evaluation/overlaps';
-import { senseAmpStripIdsOf } from '../../src/engine/evaluation/matTable';
+import { senseAmpStripIdsOf } from '../../src/engine/evaluation/matExports';
 import { blockTable } from '../../src/geometry/blockTable';
 import { neighbourTable } from '../../src/geometry/neighbourGrid';
 import { ABUTMENT_TOLERANCE } from '../../src/geometry/rect';

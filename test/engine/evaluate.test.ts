@@ -1,4 +1,5 @@
-import { matAt, allMats } from '../../src/engine/evaluation/matTable';
+import { matAt } from '../../src/engine/evaluation/matTable';
+import { allMats } from '../../src/engine/evaluation/matExports';
 import { describe, expect, it } from 'vitest';
 import {
   evaluate,
@@ -9,7 +10,7 @@ import {
   matFigureApplies,
   TOTAL_FIGURES,
 } from '../../src/engine';
-import { senseAmpStripIdsOf, wordlineDriverIdsOf } from '../../src/engine/evaluation/matTable';
+import { senseAmpStripIdsOf, wordlineDriverIdsOf } from '../../src/engine/evaluation/matExports';
 import type { Block } from '../../src/model/block';
 import { demoDesign } from '../../src/designs/demoDesign';
 import { DEMO_PROCESS, FOLDED_8F2_CELL, OPEN_6F2_CELL } from '../../src/model/builtins';

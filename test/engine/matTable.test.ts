@@ -1,14 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { evaluate, findMatReport } from '../../src/engine';
-import {
-  allMats,
-  figuresAt,
-  matAt,
-  matIdAt,
-  matIndexOf,
-  MatTableBuilder,
-  senseAmpStripIdsOf,
-} from '../../src/engine/evaluation/matTable';
+import { figuresAt, matAt, matIdAt, matIndexOf, MatTableBuilder } from '../../src/engine/evaluation/matTable';
+import { allMats, senseAmpStripIdsOf } from '../../src/engine/evaluation/matExports';
 import { demoDesign } from '../../src/designs/demoDesign';
 import { copyMat } from '../../src/engine/evaluation/matEvaluation';
 

@@ -1,4 +1,4 @@
-import { allMats } from '../../src/engine/evaluation/matTable';
+import { allMats } from '../../src/engine/evaluation/matExports';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { evaluate, findMatReport } from '../../src/engine/evaluation/evaluate';

@@ -1,6 +1,6 @@
 import { expect } from 'vitest';
 import type { Report } from '../../src/engine';
-import { allMats, senseAmpStripIdsOf, wordlineDriverIdsOf } from '../../src/engine/evaluation/matTable';
+import { allMats, senseAmpStripIdsOf, wordlineDriverIdsOf } from '../../src/engine/evaluation/matExports';
 
 /** Findings compared as a set: an incremental report may list them in another order. */
 function findingKeys(report: Report): string[] {
