@@ -107,16 +107,24 @@ function connectRunMats(
   const walked = new WalkedRuns(runs.count, copies.partners.length, new RunLists(runs.count));
   serving.runLists = walked.lists;
   const lists = serving.serving;
-  // Blocks from `pending` on wait to be walked (runs that no copy will read are walked together).
-  let pending = 0;
+  // Runs of mats that neither are a model nor copy one wait to be walked together: blocks `waiting` …
+  // `waitingEnd` − 1 (blocks of other runs between them are passed over; none after the last).
+  let waiting = -1;
+  let waitingEnd = -1;
   let k = 0;
   for (let r = 0; r < runs.count; r++) {
     if (code[r] !== MAT_CODE) continue;
     const m = model[r] as number;
     const from = start[r] as number;
     const to = start[r + 1] as number;
-    if (m !== r && !mayCopy(table, neighbours, runs, copies, kinds, walked, lists, r, m)) continue;
-    if (pending < from) k = connectMatsIn(table, neighbours, kinds, serving, out, pending, from, k, APART);
+    if (m !== r && !mayCopy(table, neighbours, runs, copies, kinds, walked, lists, r, m)) {
+      if (waiting < 0) waiting = from;
+      waitingEnd = to;
+      continue;
+    }
+    if (waiting >= 0)
+      k = connectMatsIn(table, neighbours, kinds, serving, out, waiting, waitingEnd, k, APART);
+    waiting = -1;
     if (m === r) {
       walked.firstMat[r] = k;
       walked.firstServing[r] = lists.used;
@@ -127,9 +135,8 @@ function connectRunMats(
       copyRun(neighbours, runs, walked, lists, out, r, m, k);
       k += to - from;
     }
-    pending = to;
   }
-  connectMatsIn(table, neighbours, kinds, serving, out, pending, table.count, k, APART);
+  if (waiting >= 0) connectMatsIn(table, neighbours, kinds, serving, out, waiting, waitingEnd, k, APART);
 }
 
 /**
