@@ -1,4 +1,3 @@
-import type { BlockRuns } from '../../geometry/blockRuns';
 import type { BlockTable } from '../../geometry/blockTable';
 import { ABUTMENT_TOLERANCE } from '../../geometry/rect';
 
@@ -43,20 +42,13 @@ export class DecoderEdges {
   }
 
   /**
-   * The edges of the decoders of type `decoderCode`, or null when there are none. The table's runs by
-   * block type (geometry/blockRuns.ts), when the caller has them, say where the decoders are.
+   * The edges of the decoders of type `decoderCode`, or null when there are none.
    */
-  static of(table: BlockTable, decoderCode: number, runs: BlockRuns | null = null): DecoderEdges | null {
+  static of(table: BlockTable, decoderCode: number): DecoderEdges | null {
     const found: number[] = [];
-    if (runs === null) {
-      // Decoders are few: the native search finds them without a step of the interpreter per block.
-      const { type } = table;
-      for (let i = type.indexOf(decoderCode); i >= 0; i = type.indexOf(decoderCode, i + 1)) found.push(i);
-    } else {
-      const { code, start } = runs;
-      for (let r = code.indexOf(decoderCode); r >= 0; r = code.indexOf(decoderCode, r + 1))
-        for (let i = start[r] as number; i < (start[r + 1] as number); i++) found.push(i);
-    }
+    // Decoders are few: the native search finds them without a step of the interpreter per block.
+    const { type } = table;
+    for (let i = type.indexOf(decoderCode); i >= 0; i = type.indexOf(decoderCode, i + 1)) found.push(i);
     if (found.length === 0) return null;
     const finite: number[] = [];
     const unsorted: number[] = [];

@@ -153,8 +153,8 @@ export function decoderReach(
 ): DecoderReachState {
   const rows = REACH_CHECKS[0] as ReachCheck;
   const columns = REACH_CHECKS[1] as ReachCheck;
-  const rowEdges = DecoderEdges.of(table, rows.decoderCode, runs);
-  const columnEdges = DecoderEdges.of(table, columns.decoderCode, runs);
+  const rowEdges = DecoderEdges.of(table, rows.decoderCode);
+  const columnEdges = DecoderEdges.of(table, columns.decoderCode);
   const [rowSeeds, columnSeeds] = seedsOfChecks(
     table,
     matIndexAt,

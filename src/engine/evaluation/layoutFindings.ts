@@ -37,7 +37,7 @@ export function layoutState(
 ): LayoutState {
   // The serving forest's pass over the mats writes each position's mat index when the caller has none.
   const index = matIndexAt ?? new Int32Array(table.count).fill(-1);
-  const forest = ServingForest.of(mats, table, matIndexAt ? undefined : index);
+  const forest = ServingForest.of(mats, table, matIndexAt ? undefined : index, runs);
   const reach = decoderReach(table, mats, index, forest, runs);
   const backToBack = backToBackStrips(table, mats, forest.facing, runs);
   return { matIndexAt: index, reach, backToBack, findings: findingsOf(mats, reach, backToBack) };

@@ -1,6 +1,8 @@
-import type { BlockTable, MatKind } from '../../geometry/blockTable';
+import type { BlockRuns } from '../../geometry/blockRuns';
+import { MAT_CODE, type BlockTable, type MatKind } from '../../geometry/blockTable';
 import type { MatTable } from './matTable';
 import type { ServingPart } from './reachComponents';
+import { ForestParts, joinRegularRun } from './servingForestRuns';
 
 /** A block no mat lists, so what lines it would serve is unknown (an orientation code of {@link ServingForest.facing}). */
 export const UNSERVING = 0;
@@ -46,6 +48,8 @@ export class ServingForest {
     table: BlockTable,
     /** Written on the way: each position's mat (report index), −1 elsewhere (see matIndexByPosition). */
     matIndexAt: Int32Array = new Int32Array(table.count).fill(-1),
+    /** The table's runs (geometry/blockRuns.ts), when the caller has them: runs of mats whose lists repeat are joined at once. */
+    runs: BlockRuns | null = null,
   ): ServingForest {
     const up0 = new Int32Array(table.count).fill(-1);
     const up1 = new Int32Array(table.count).fill(-1);
@@ -59,23 +63,60 @@ export class ServingForest {
       facingOfKind[2 * n] = vertical ? ALONG_HORIZONTAL_EDGE : ALONG_VERTICAL_EDGE;
       facingOfKind[2 * n + 1] = vertical ? ALONG_VERTICAL_EDGE : ALONG_HORIZONTAL_EDGE;
     }
-    const { position, servingOffsets, servingPositions } = mats;
-    joinServingLists(
-      mats.count,
-      position,
-      servingOffsets,
-      servingPositions,
-      table.kindOf,
-      facingOfKind,
-      up0,
-      up1,
-      trees,
-      facing,
-      matIndexAt,
-      table,
-    );
+    const parts = new ForestParts([up0, up1], trees, facing);
+    // Runs of mats in report order (mats are listed in table order), each at once where the connection
+    // pass found its serving lists repeating mat by mat (MatTable.runLists) and every kind of mat faces
+    // alike (bit lines along one axis).
+    const lists = runs && facingOfKind.every((f, i) => f === facingOfKind[i & 1]) ? mats.runLists : null;
+    let k = 0;
+    for (let r = 0; lists && runs && r < runs.count; r++) {
+      if (runs.code[r] !== MAT_CODE) continue;
+      const m0 = runs.start[r] as number;
+      const to = Math.min(mats.count, k + (runs.start[r + 1] as number) - m0);
+      const { servingOffsets, servingPositions } = mats;
+      const f0 = facingOfKind[0] as number;
+      const f1 = facingOfKind[1] as number;
+      if (
+        lists.regular[r] !== 1 ||
+        lists.firstMat[r] !== k ||
+        !joinRegularRun(parts, servingOffsets, servingPositions, k, m0, to - k, f0, f1, matIndexAt)
+      )
+        joinMats(mats, table, parts, facingOfKind, matIndexAt, k, to);
+      k = to;
+    }
+    if (k < mats.count) joinMats(mats, table, parts, facingOfKind, matIndexAt, k, mats.count);
     return new ServingForest([up0, up1], trees, facing);
   }
+}
+
+/** Joins mats from … to − 1 (report order) one by one. */
+function joinMats(
+  mats: MatTable,
+  table: BlockTable,
+  parts: ForestParts,
+  facingOfKind: Uint8Array,
+  matIndexAt: Int32Array,
+  from: number,
+  to: number,
+): void {
+  const { trees } = parts;
+  joinServingLists(
+    from,
+    to,
+    trees[0] as number,
+    trees[1] as number,
+    mats.position,
+    mats.servingOffsets,
+    mats.servingPositions,
+    table.kindOf,
+    facingOfKind,
+    parts.up[0],
+    parts.up[1],
+    trees,
+    parts.facing,
+    matIndexAt,
+    table,
+  );
 }
 
 /**
@@ -85,7 +126,11 @@ export class ServingForest {
  * reads comes in as an argument.
  */
 function joinServingLists(
-  matCount: number,
+  from: number,
+  to: number,
+  /** The trees so far, per part. */
+  treesBefore0: number,
+  treesBefore1: number,
   position: Int32Array,
   servingOffsets: Int32Array,
   servingPositions: Int32Array,
@@ -100,9 +145,9 @@ function joinServingLists(
   /** For the error about a listed mat that is not one. */
   table: BlockTable,
 ): void {
-  let trees0 = 0;
-  let trees1 = 0;
-  for (let k = 0; k < matCount; k++) {
+  let trees0 = treesBefore0;
+  let trees1 = treesBefore1;
+  for (let k = from; k < to; k++) {
     const m = position[k] as number;
     const kind = kindOf[m] as number;
     if (kind < 0) notAMat(table, m);

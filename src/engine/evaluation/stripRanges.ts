@@ -52,8 +52,10 @@ export function mayFaceInRuns(
   to: number,
   lying: boolean,
 ): boolean {
-  const starts = new Float64Array(to + 1 - from);
-  const edges = new Float64Array(to + 1 - from);
+  // Lying strips give one start per run.
+  const size = lying ? runs.count : to + 1 - from;
+  const starts = new Float64Array(size);
+  const edges = new Float64Array(size);
   const seen = new Uint8Array(runs.layouts);
   let n = 0;
   // The run holding position `from` (runs cover the table in order; none spans two types).
