@@ -1,9 +1,10 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { refreshRows } from '../../src/engine/evaluation/totals';
-import { bandedNeighbourTable, type BandLimits } from '../../src/geometry/bandedPairs';
+import { bandedNeighbourTable } from '../../src/geometry/bandedPairs';
+import { ANY_BOXES, MAT_GROUP } from '../support/bandLimits';
 import { BlockRuns } from '../../src/geometry/blockRuns';
-import { BLOCK_TYPE_CODES, blockTable, MAT_CODE, type BlockTable } from '../../src/geometry/blockTable';
+import { blockTable, MAT_CODE, type BlockTable } from '../../src/geometry/blockTable';
 import { ABUTMENT_TOLERANCE } from '../../src/geometry/rect';
 import { matGeometry } from '../../src/geometry/matGeometry';
 import type { Block } from '../../src/model/block';
@@ -106,16 +107,9 @@ describe('refresh rows against the pre-rewrite pass', () => {
 describe('refresh rows run by run', () => {
   // With the neighbour pass's runs, only runs of mats are visited and a mat of the last one's kind in the
   // same run is skipped; without, every block. Floorplans of every kind, runs cut on any of them.
-  const anyBoxes: BandLimits = {
-    minRunLength: 0,
-    runPairsPerRun: Infinity,
-    visitsPerBlock: Infinity,
-    repeatWalks: true,
-  };
-  const matGroup = Uint8Array.from(BLOCK_TYPE_CODES, (_, code) => (code === MAT_CODE ? 1 : 0));
   const sameByRuns = (blocks: Block[]) => {
     const table = blockTable(designWith(blocks));
-    const runs = bandedNeighbourTable(table, ABUTMENT_TOLERANCE, table.type, matGroup, anyBoxes)?.runs;
+    const runs = bandedNeighbourTable(table, ABUTMENT_TOLERANCE, table.type, MAT_GROUP, ANY_BOXES)?.runs;
     if (runs) expect(Object.is(refreshRows(table, runs), oracleRefreshRows(table))).toBe(true);
   };
 

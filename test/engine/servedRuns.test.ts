@@ -5,8 +5,9 @@ import { MatTableBuilder, type MatTable } from '../../src/engine/evaluation/matT
 import type { BlockRuns } from '../../src/geometry/blockRuns';
 import { connectAllMats } from '../../src/engine/evaluation/servedRuns';
 import { gridFloorplan } from '../../src/designs/gridFloorplan';
-import { bandedNeighbourTable, type BandLimits } from '../../src/geometry/bandedPairs';
-import { BLOCK_TYPE_CODES, blockTable, MAT_CODE, type BlockTable } from '../../src/geometry/blockTable';
+import { bandedNeighbourTable } from '../../src/geometry/bandedPairs';
+import { ANY_BOXES, MAT_GROUP } from '../support/bandLimits';
+import { blockTable, type BlockTable } from '../../src/geometry/blockTable';
 import type { NeighbourTable } from '../../src/geometry/neighbourRows';
 import { withBlocksReplaced } from '../../src/geometry/replacedBlocks';
 import { ABUTMENT_TOLERANCE } from '../../src/geometry/rect';
@@ -23,15 +24,6 @@ import { editedGridFloorplan, irregularFloorplan, stripChainFloorplan } from '..
 // With runs from the neighbour pass, the connection pass decides vertical tests once per pair of runs and
 // compares left edges and widths by their bits (servedRuns.ts); without, it tests every pair of blocks
 // (servedLines.ts, connectEachMat). Both must give the same columns and the same serving strips.
-
-/** No fallback to the grid: the banded pass cuts runs on any floorplan. */
-const ANY_BOXES: BandLimits = {
-  minRunLength: 0,
-  runPairsPerRun: Infinity,
-  visitsPerBlock: Infinity,
-  repeatWalks: true,
-};
-const MAT_GROUP = Uint8Array.from(BLOCK_TYPE_CODES, (_, code) => (code === MAT_CODE ? 1 : 0));
 
 function connections(table: BlockTable, neighbours: NeighbourTable, checkRuns = false) {
   const n = countMats(table);

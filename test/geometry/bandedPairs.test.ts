@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { bandedNeighbourTable, type BandLimits } from '../../src/geometry/bandedPairs';
+import { bandedNeighbourTable } from '../../src/geometry/bandedPairs';
+import { ANY_BOXES } from '../support/bandLimits';
 import { blockRuns } from '../../src/geometry/blockRuns';
 import { boxesOf, type Boxes } from '../../src/geometry/blockTable';
 import { sharesBeyond } from '../../src/geometry/neighbourGrid';
@@ -8,13 +9,6 @@ import { groupedGridTable } from '../../src/geometry/neighbourGrid';
 import { neighboursOf, type NeighbourTable } from '../../src/geometry/neighbourRows';
 import { ABUTMENT_TOLERANCE, type Rect } from '../../src/geometry/rect';
 
-/** No fallback to the grid: the banded pass runs on whatever boxes the test gives it. */
-const ANY_BOXES: BandLimits = {
-  minRunLength: 0,
-  runPairsPerRun: Infinity,
-  visitsPerBlock: Infinity,
-  repeatWalks: true,
-};
 const MICRON = 1e-6;
 
 /** A block of a generated floorplan: its rectangle and its code (a block type). */

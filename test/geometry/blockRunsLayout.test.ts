@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { bandedNeighbourTable, type BandLimits } from '../../src/geometry/bandedPairs';
+import { bandedNeighbourTable } from '../../src/geometry/bandedPairs';
+import { ANY_BOXES, NO_REPEATS } from '../support/bandLimits';
 import { blockRuns } from '../../src/geometry/blockRuns';
 import { groupedGridTable } from '../../src/geometry/neighbourGrid';
 import { neighboursOf, type NeighbourTable } from '../../src/geometry/neighbourRows';
@@ -18,13 +19,6 @@ import { editedGridFloorplan, irregularFloorplan, stripChainFloorplan } from '..
  */
 
 const MICRON = 1e-6;
-const ANY_BOXES: BandLimits = {
-  minRunLength: 0,
-  runPairsPerRun: Infinity,
-  visitsPerBlock: Infinity,
-  repeatWalks: true,
-};
-const NO_REPEATS: BandLimits = { ...ANY_BOXES, repeatWalks: false };
 
 interface Coded {
   readonly rect: Rect;

@@ -1,7 +1,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { bandedNeighbourTable, type BandLimits } from '../../src/geometry/bandedPairs';
-import { blockTable, boxesOf, MAT_CODE } from '../../src/geometry/blockTable';
+import { bandedNeighbourTable } from '../../src/geometry/bandedPairs';
+import { ANY_BOXES, MAT_GROUP, NO_REPEATS } from '../support/bandLimits';
+import { blockTable, boxesOf } from '../../src/geometry/blockTable';
 import type { NeighbourTable } from '../../src/geometry/neighbourRows';
 import { ABUTMENT_TOLERANCE } from '../../src/geometry/rect';
 import { gridFloorplan } from '../../src/designs/gridFloorplan';
@@ -18,14 +19,6 @@ import { rowsByRun as rowsByRunBefore } from '../support/runRowsBefore';
  */
 
 const MICRON = 1e-6;
-const ANY_BOXES: BandLimits = {
-  minRunLength: 0,
-  runPairsPerRun: Infinity,
-  visitsPerBlock: Infinity,
-  repeatWalks: true,
-};
-const NO_REPEATS: BandLimits = { ...ANY_BOXES, repeatWalks: false };
-const MAT_GROUP = Uint8Array.from({ length: 8 }, (_, code) => (code === MAT_CODE ? 1 : 0));
 
 function arrays(table: NeighbourTable | null) {
   return (
