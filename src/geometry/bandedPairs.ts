@@ -75,7 +75,7 @@ export interface BandLimits {
   readonly repeatWalks: boolean;
 }
 
-export const BAND_LIMITS: BandLimits = {
+const BAND_LIMITS: BandLimits = {
   minRunLength: 4,
   runPairsPerRun: 8,
   visitsPerBlock: 24,

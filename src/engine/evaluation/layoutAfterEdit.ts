@@ -73,7 +73,7 @@ export function layoutStateAfterEdit(
  * from the mats serving them, their pairs are dropped and searched again among the strips `near` them
  * (table positions within the abutment tolerance), and every other pair is kept.
  */
-export function backToBackAfterEdit(
+function backToBackAfterEdit(
   previous: BackToBackState,
   table: BlockTable,
   mats: MatTable,
@@ -120,7 +120,7 @@ function samePairs(a: Int32Array, b: Int32Array): boolean {
  * changed block; otherwise the previous finding is kept as it was. A moved decoder changes the seeds of
  * whatever it leaves or meets, so the check of its type is done again whole.
  */
-export function decoderReachAfterEdit(
+function decoderReachAfterEdit(
   previous: DecoderReachState,
   before: MatTable,
   table: BlockTable,
@@ -171,7 +171,7 @@ export function decoderReachAfterEdit(
  * the seed of a changed block. Returns the blocks labelled again beside the new components, or null when
  * the caller should label everything again.
  */
-export function reachComponentsAfterEdit(
+function reachComponentsAfterEdit(
   previous: ReachComponents,
   before: MatTable,
   after: MatTable,
